@@ -1,0 +1,46 @@
+import { defineConfig } from 'vitest/config';
+
+// Four projects share one run: pure modules, the HTTP API through supertest,
+// client components in jsdom, and end-to-end journeys in Debian's Chromium.
+export default defineConfig({
+  test: {
+    onConsoleLog: undefined,
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['tests/unit/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          setupFiles: ['tests/setup/fail-on-console-error.ts'],
+          testTimeout: 20_000,
+        },
+      },
+      {
+        test: {
+          name: 'component',
+          include: ['tests/component/**/*.test.{ts,tsx}'],
+          environment: 'jsdom',
+          setupFiles: ['tests/setup/fail-on-console-error.ts'],
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/e2e/global-setup.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
