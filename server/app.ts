@@ -1,0 +1,47 @@
+import express, { type Express } from 'express';
+import type { WorkerPool } from '../workers/pool';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { Db } from './db/client';
+import { loadSession } from './auth/session';
+import { apiNotFound, errorHandler } from './middleware/errors';
+import { healthRoutes } from './routes/health';
+import { projectRoutes } from './routes/projects';
+import { seriesToolRoutes } from './routes/series-tools';
+
+export interface AppDeps {
+  db: Db;
+  pool: WorkerPool;
+  /** Built client to serve; omitted in API-only tests. */
+  clientDist?: string;
+  /** Vite dev middleware, in development. */
+  devMiddleware?: express.RequestHandler;
+  logError?: (error: unknown) => void;
+}
+
+/** Builds the app without listening, so tests can hand it to supertest. */
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  const api = express.Router();
+  api.use(express.json({ limit: '20mb' }));
+  api.use(loadSession(deps.db));
+  api.use(healthRoutes(deps));
+  api.use(projectRoutes(deps));
+  api.use(seriesToolRoutes(deps));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (deps.devMiddleware) {
+    app.use(deps.devMiddleware);
+  } else if (deps.clientDist && existsSync(deps.clientDist)) {
+    const indexHtml = path.join(deps.clientDist, 'index.html');
+    app.use(express.static(deps.clientDist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(indexHtml));
+  }
+
+  app.use(errorHandler(deps.logError ?? ((error) => console.error(error))));
+  return app;
+}

@@ -1,0 +1,49 @@
+import type { Server } from 'node:http';
+import { loadEnv } from './env';
+import { openDatabase } from './db/client';
+import { seedDemo } from './demo/seed';
+import { createApp } from './app';
+import { appRoot, clientDistFolder } from './paths';
+import { createWorkerPool } from '../workers/pool';
+
+async function main(): Promise<void> {
+  const env = loadEnv();
+  const db = openDatabase(env.databaseFile);
+  const { seeded } = seedDemo(db);
+  const pool = createWorkerPool({ threads: env.TRAMONTANE_WORKERS });
+
+  let devMiddleware;
+  let closeVite = async () => {};
+  if (env.NODE_ENV === 'development') {
+    const { createServer } = await import('vite');
+    const vite = await createServer({ root: appRoot, server: { middlewareMode: true }, appType: 'spa' });
+    devMiddleware = vite.middlewares;
+    closeVite = () => vite.close();
+  }
+
+  const app = createApp({ db, pool, clientDist: clientDistFolder, devMiddleware });
+  const server: Server = app.listen(env.PORT, env.HOST, () => {
+    const address = server.address();
+    const port = typeof address === 'object' && address ? address.port : env.PORT;
+    console.log(`Tramontane (${env.NODE_ENV}) on http://localhost:${port}  data: ${env.TRAMONTANE_DATA_DIR}${seeded ? '  (demo data loaded)' : ''}`);
+  });
+
+  let stopping = false;
+  const stop = async (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    console.log(`${signal}: stopping`);
+    server.close();
+    server.closeIdleConnections();
+    await Promise.allSettled([pool.destroy(), closeVite()]);
+    db.$client.close();
+    process.exit(0);
+  };
+  process.on('SIGTERM', () => void stop('SIGTERM'));
+  process.on('SIGINT', () => void stop('SIGINT'));
+}
+
+main().catch((error: unknown) => {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,37 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { z } from 'zod';
+import { HttpError, type ApiErrorBody } from '../http-error';
+
+export const apiNotFound: RequestHandler = (req, _res, next) => {
+  next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.originalUrl}.`));
+};
+
+/**
+ * The single error middleware: known errors keep their status and message, zod errors become 400
+ * with the offending fields, anything else is logged here and answered as 500 without a stack.
+ */
+export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler {
+  return (error, _req, res, _next) => {
+    const body = (code: string, message: string, details?: unknown): ApiErrorBody => ({
+      error: details === undefined ? { code, message } : { code, message, details },
+    });
+    if (error instanceof HttpError) {
+      res.status(error.status).json(body(error.code, error.message, error.details));
+      return;
+    }
+    if (error instanceof z.ZodError) {
+      const fields = error.issues.map((issue) => ({ path: issue.path.join('.'), message: issue.message }));
+      const summary = fields.map((f) => (f.path ? `${f.path}: ${f.message}` : f.message)).join('; ');
+      res.status(400).json(body('invalid_request', summary, fields));
+      return;
+    }
+    const status = typeof error?.status === 'number' && error.status >= 400 && error.status < 500 ? error.status : 500;
+    if (status < 500) {
+      // body-parser and friends: a malformed or oversized request body.
+      res.status(status).json(body(error.type ?? 'bad_request', String(error.message ?? 'Bad request.')));
+      return;
+    }
+    log(error);
+    res.status(500).json(body('internal', 'Something went wrong on the server. It has been logged.'));
+  };
+}

@@ -1,0 +1,39 @@
+/** The one way the client talks to the server: JSON in, JSON out, errors in the server's one shape. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message);
+  }
+}
+
+export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
+  const headers = new Headers(init.headers);
+  if (init.body && !(init.body instanceof FormData) && !headers.has('content-type')) {
+    headers.set('content-type', 'application/json');
+  }
+  let response: Response;
+  try {
+    response = await fetch(`/api${path}`, { ...init, headers, credentials: 'same-origin' });
+  } catch {
+    throw new ApiError(0, 'network', 'The server cannot be reached. Check that Tramontane is running.');
+  }
+  const text = await response.text();
+  const body = text ? safeJson(text) : undefined;
+  if (!response.ok) {
+    const error = (body as { error?: { code?: string; message?: string; details?: unknown } } | undefined)?.error;
+    throw new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.details);
+  }
+  return body as T;
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}

@@ -1,0 +1,33 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { createApp, type AppDeps } from '../../server/app';
+import { openDatabase, type Db } from '../../server/db/client';
+import { createWorkerPool, type WorkerPool } from '../../workers/pool';
+
+export interface TestApp {
+  app: ReturnType<typeof createApp>;
+  db: Db;
+  pool: WorkerPool;
+  dataDir: string;
+  close: () => Promise<void>;
+}
+
+/** A fresh app on its own SQLite file in a temporary folder, one per test file. */
+export function createTestApp(overrides: Partial<AppDeps> = {}): TestApp {
+  const dataDir = mkdtempSync(path.join(tmpdir(), 'tramontane-test-'));
+  const db = openDatabase(path.join(dataDir, 'tramontane.db'));
+  const pool = createWorkerPool({ threads: 2 });
+  const app = createApp({ db, pool, ...overrides });
+  return {
+    app,
+    db,
+    pool,
+    dataDir,
+    close: async () => {
+      await pool.destroy();
+      db.$client.close();
+      rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
