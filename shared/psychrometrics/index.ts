@@ -1,0 +1,22 @@
+/**
+ * The psychrometric engine: moist-air properties by the equations of ASHRAE Handbook—Fundamentals
+ * (2017) ch. 1, SI throughout (°C, Pa, kg/kg, kJ/kg dry air). See EQUATIONS.md for the equations.
+ */
+export { saturationPressurePa, dewPointFromVapourPressure, boilingPointC } from './saturation';
+export { standardPressurePa, standardElevationM } from './atmosphere';
+export {
+  humidityRatioFromVapourPressure,
+  vapourPressureFromHumidityRatio,
+  saturationHumidityRatio,
+  humidityRatioFromRh,
+  rhPctFromHumidityRatio,
+  humidityRatioFromDewPoint,
+  dewPointFromHumidityRatio,
+  degreeOfSaturation,
+  specificHumidity,
+} from './moisture';
+export { humidityRatioFromWetBulb, wetBulbFromHumidityRatio } from './wet-bulb';
+export { enthalpyKJPerKg, dryBulbFromEnthalpy, humidityRatioFromEnthalpy } from './enthalpy';
+export { specificVolumeM3PerKg, moistAirDensityKgPerM3 } from './volume';
+export { bulkStates } from './bulk';
+export type { HumidityKind, BulkStateInput, BulkState } from './bulk';

@@ -1,0 +1,133 @@
+/**
+ * Thermodynamic wet-bulb temperature by the psychrometric equation of ASHRAE Handbook—Fundamentals
+ * (2017) ch. 1: eq. 33 over liquid water (t* ≥ 0 °C) and eq. 35 over ice (t* < 0 °C), with the
+ * saturation humidity ratio at t* from eq. 23 and Hyland–Wexler pws.
+ */
+import { FREEZING_POINT_C, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO } from './constants';
+import { dLnSaturationPressure, lnSaturationPressure, temperatureAtLnSaturation } from './saturation';
+import { vapourPressureFromHumidityRatioUnchecked } from './moisture';
+import {
+  requireHumidityRatio,
+  requirePressurePa,
+  requireTemperatureC,
+  SATURATION_SLACK,
+  supersaturatedError,
+} from './validate';
+
+// Coefficients (a − b·t*)·Ws* − 1.006·(t − t*) over (a + 1.86·t − c·t*), eq. 33 (water) and eq. 35 (ice).
+const A_WATER = 2501;
+const B_WATER = 2.326;
+const C_WATER = 4.186;
+const A_ICE = 2830;
+const B_ICE = 0.24;
+const C_ICE = 2.1;
+
+/**
+ * W from the psychrometric equation, given Ws* at the wet-bulb. No checks: kernel for loops.
+ * May be negative when the wet-bulb is too low for the dry-bulb (no such air).
+ */
+export function humidityRatioFromWetBulbUnchecked(tC: number, wetBulbC: number, pressurePa: number): number {
+  const pws = Math.exp(lnSaturationPressure(wetBulbC));
+  const wsStar = (MOLAR_MASS_RATIO * pws) / (pressurePa - pws);
+  return wetBulbC >= FREEZING_POINT_C
+    ? ((A_WATER - B_WATER * wetBulbC) * wsStar - 1.006 * (tC - wetBulbC)) / (A_WATER + 1.86 * tC - C_WATER * wetBulbC)
+    : ((A_ICE - B_ICE * wetBulbC) * wsStar - 1.006 * (tC - wetBulbC)) / (A_ICE + 1.86 * tC - C_ICE * wetBulbC);
+}
+
+/**
+ * Wet-bulb, °C, of air at dry-bulb tC with humidityRatio at pressurePa, given its dew point
+ * (NaN if unknown). The root lies between the dew point and the dry-bulb. First guess: linearise
+ * Ws* about the dew point; because Ws* is convex this guess lies above the root, from where Newton's
+ * method on the exact equation descends monotonically (2–4 steps). The bracket guards against the
+ * small jump between eq. 33 and eq. 35 at 0 °C, where the root may sit in the gap: the iterate then
+ * converges to 0 °C by halving, which is what a bisection on the same equations returns.
+ * No argument checks; returns NaN for NaN input. Expects W ≤ Ws(tC).
+ */
+export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: number, dewPointC: number): number {
+  let lo = dewPointC >= MIN_TEMPERATURE_C ? dewPointC : MIN_TEMPERATURE_C;
+  let hi = tC;
+  if (!(hi > lo)) return hi === lo ? tC : Number.NaN;
+  let t: number;
+  if (dewPointC === dewPointC) {
+    // Linearised psychrometric equation about the dew point: L·s·x = cpm·(t − td − x).
+    const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
+    const dp = pressurePa - pw;
+    const slope = (MOLAR_MASS_RATIO * pressurePa * pw * dLnSaturationPressure(dewPointC)) / (dp * dp);
+    const cpm = 1.006 + 1.86 * humidityRatio;
+    const latent = dewPointC >= FREEZING_POINT_C ? A_WATER - B_WATER * dewPointC : A_ICE - B_ICE * dewPointC;
+    t = dewPointC + (cpm * (tC - dewPointC)) / (latent * slope + cpm);
+  } else {
+    t = 0.5 * (lo + hi);
+  }
+  for (let i = 0; i < 60; i++) {
+    const lnP = lnSaturationPressure(t);
+    const pws = Math.exp(lnP);
+    const dry = pressurePa - pws;
+    if (!(dry > 0)) {
+      // Above the boiling point at this pressure: Ws* is unbounded, so the root is lower.
+      hi = t;
+      t = 0.5 * (lo + hi);
+      continue;
+    }
+    const ws = (MOLAR_MASS_RATIO * pws) / dry;
+    const dWs = (MOLAR_MASS_RATIO * pressurePa * pws * dLnSaturationPressure(t)) / (dry * dry);
+    let a: number, b: number, c: number;
+    if (t >= FREEZING_POINT_C) {
+      a = A_WATER;
+      b = B_WATER;
+      c = C_WATER;
+    } else {
+      a = A_ICE;
+      b = B_ICE;
+      c = C_ICE;
+    }
+    const num = (a - b * t) * ws - 1.006 * (tC - t);
+    const den = a + 1.86 * tC - c * t;
+    const f = num / den - humidityRatio;
+    if (f > 0) hi = t;
+    else lo = t;
+    const df = ((-b * ws + (a - b * t) * dWs + 1.006) * den + c * num) / (den * den);
+    let next = t - f / df;
+    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
+    if (Math.abs(next - t) < 1e-9 || hi - lo < 1e-9) return next;
+    t = next;
+  }
+  return t;
+}
+
+/**
+ * Humidity ratio, kg/kg, of air at dry-bulb tC whose thermodynamic wet-bulb is wetBulbC.
+ * @param tC dry-bulb, °C; @param wetBulbC thermodynamic wet-bulb, °C, ≤ tC
+ * @param pressurePa barometric pressure, Pa, 10…120 kPa
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 33 (t* ≥ 0 °C) and eq. 35 (t* < 0 °C).
+ */
+export function humidityRatioFromWetBulb(tC: number, wetBulbC: number, pressurePa: number): number {
+  requireTemperatureC('tC', tC);
+  requireTemperatureC('wetBulbC', wetBulbC);
+  requirePressurePa('pressurePa', pressurePa);
+  if (wetBulbC > tC) throw supersaturatedError('wetBulbC', wetBulbC, `a wet-bulb above the dry-bulb ${tC} °C is not moist air`);
+  if (Math.exp(lnSaturationPressure(wetBulbC)) >= pressurePa) {
+    throw new RangeError(`wetBulbC = ${wetBulbC} °C is at or above the boiling point at pressurePa = ${pressurePa} Pa`);
+  }
+  const w = humidityRatioFromWetBulbUnchecked(tC, wetBulbC, pressurePa);
+  if (w < 0) throw new RangeError(`wetBulbC = ${wetBulbC} °C is too low for dry-bulb ${tC} °C: even dry air has a higher wet-bulb`);
+  return w;
+}
+
+/**
+ * Thermodynamic wet-bulb, °C, of air at dry-bulb tC holding humidityRatio kg/kg at pressurePa.
+ * Solved by Newton's method on the psychrometric equation (see {@link wetBulbUnchecked}).
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 33 and 35.
+ */
+export function wetBulbFromHumidityRatio(tC: number, humidityRatio: number, pressurePa: number): number {
+  requireTemperatureC('tC', tC);
+  requireHumidityRatio('humidityRatio', humidityRatio);
+  requirePressurePa('pressurePa', pressurePa);
+  const pws = Math.exp(lnSaturationPressure(tC));
+  const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
+  if (pws < pressurePa && pw > pws * (1 + SATURATION_SLACK)) {
+    throw supersaturatedError('humidityRatio', humidityRatio, `its vapour pressure exceeds saturation at ${tC} °C`);
+  }
+  const dewPointC = pw > 0 ? Math.min(temperatureAtLnSaturation(Math.log(pw)), tC) : Number.NaN;
+  return wetBulbUnchecked(tC, humidityRatio, pressurePa, dewPointC);
+}
