@@ -4,6 +4,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Db } from './db/client';
 import { loadSession } from './auth/session';
+import { mountRoutes, type RouteSpec } from './auth/access';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
@@ -19,6 +20,11 @@ export interface AppDeps {
   logError?: (error: unknown) => void;
 }
 
+/** Every API route with its access rule; the role-matrix test walks this same list. */
+export function apiRoutes(deps: AppDeps): RouteSpec[] {
+  return [...healthRoutes(deps), ...projectRoutes(deps), ...seriesToolRoutes(deps)];
+}
+
 /** Builds the app without listening, so tests can hand it to supertest. */
 export function createApp(deps: AppDeps): Express {
   const app = express();
@@ -28,9 +34,7 @@ export function createApp(deps: AppDeps): Express {
   const api = express.Router();
   api.use(express.json({ limit: '20mb' }));
   api.use(loadSession(deps.db));
-  api.use(healthRoutes(deps));
-  api.use(projectRoutes(deps));
-  api.use(seriesToolRoutes(deps));
+  mountRoutes(api, deps.db, apiRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -3,7 +3,6 @@ import type { Request, RequestHandler } from 'express';
 import { and, eq, gt } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { sessions, users } from '../db/schema';
-import { HttpError } from '../http-error';
 
 export const sessionCookieName = 'tramontane_session';
 
@@ -50,8 +49,3 @@ export function loadSession(db: Db): RequestHandler {
     next();
   };
 }
-
-export const requireUser: RequestHandler = (req, _res, next) => {
-  if (!req.user) throw new HttpError(401, 'unauthenticated', 'Sign in to use this.');
-  next();
-};
