@@ -20,3 +20,26 @@ export { enthalpyKJPerKg, dryBulbFromEnthalpy, humidityRatioFromEnthalpy } from 
 export { specificVolumeM3PerKg, moistAirDensityKgPerM3 } from './volume';
 export { bulkStates } from './bulk';
 export type { HumidityKind, BulkStateInput, BulkState } from './bulk';
+export { moistAirState, StateRequestError } from './state';
+export type { MoistAirRequest, MoistAirState, StateRequestProblem } from './state';
+export {
+  mixAirStreams,
+  sensibleHeatOrCool,
+  evaporativeCooling,
+  coolAndDehumidify,
+  humidityRatioAtDewPointLimit,
+  humidityRatioAtRhLimit,
+  dryBulbAtRhLimit,
+  maxHumidityRatioForLimits,
+} from './processes';
+export type { AirPoint, AirStream, MixedAir, SensibleResult, EvaporativeResult, CoilResult, MoistureLimits } from './processes';
+export {
+  projectPoint,
+  saturationCurve,
+  constantRhLine,
+  constantWetBulbLine,
+  constantEnthalpyLine,
+  constantVolumeLine,
+  chartGeometry,
+} from './chart';
+export type { ChartProjection, ChartPoint, ChartLine, ChartLineKind, ChartWindow, ChartGeometryRequest } from './chart';
