@@ -1,0 +1,149 @@
+/**
+ * The hourly results as CSV, one row per hour in series order, written straight into byte
+ * buffers: a 30-year series is 262,800 rows, and building a string per row through a stream is
+ * several times slower than filling a Uint8Array with digits.
+ * Cells are numbers, fixed mode words and ISO timestamps only, so nothing can be read as a
+ * spreadsheet formula.
+ */
+import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from './calendar';
+import { MODE, MODE_NAMES } from './classify';
+
+export const HOURLY_CSV_COLUMNS = [
+  'timestamp',
+  'mode',
+  'dry_bulb_c',
+  'wet_bulb_c',
+  'dew_point_c',
+  'relative_humidity_pct',
+  'humidity_ratio_gkg',
+  'enthalpy_kjkg',
+  'mechanical_fraction',
+] as const;
+
+export interface HourlyCsvInput {
+  timestampsMs: Float64Array;
+  modes: Uint8Array;
+  dryBulbC: Float64Array;
+  wetBulbC: Float64Array;
+  dewPointC: Float64Array;
+  rhPct: Float64Array;
+  /** kg/kg; written as g/kg. */
+  humidityRatio: Float64Array;
+  enthalpyKJPerKg: Float64Array;
+  mechanicalFraction: Float64Array;
+}
+
+const ROWS_PER_CHUNK = 32_768;
+// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 9 separators.
+const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 9;
+const COMMA = 44;
+const NEWLINE = 10;
+const MINUS = 45;
+const DOT = 46;
+const ZERO = 48;
+const POW10 = [1, 10, 100, 1000, 10_000];
+const encoder = new TextEncoder();
+const MODE_BYTES = MODE_NAMES.map((name) => encoder.encode(name));
+
+/**
+ * Writes x with `decimals` digits after the point into buf at pos and returns the new position.
+ * NaN writes nothing (an empty cell). Half-way cases round away from zero.
+ */
+export function writeFixed(buf: Uint8Array, pos: number, x: number, decimals: number): number {
+  if (!Number.isFinite(x)) return pos;
+  const scale = POW10[decimals];
+  let scaled = Math.round(Math.abs(x) * scale);
+  if (scaled > Number.MAX_SAFE_INTEGER) {
+    // Out of the fast path's range; rare enough to go through the string formatter.
+    const bytes = encoder.encode(x.toFixed(decimals));
+    buf.set(bytes, pos);
+    return pos + bytes.length;
+  }
+  if (x < 0 && scaled !== 0) buf[pos++] = MINUS;
+  let integer = Math.floor(scaled / scale);
+  // Digits of the integer part, most significant first.
+  let digits = 1;
+  for (let probe = integer; probe >= 10; probe = Math.floor(probe / 10)) digits++;
+  for (let d = digits - 1; d >= 0; d--) {
+    buf[pos + d] = ZERO + (integer % 10);
+    integer = Math.floor(integer / 10);
+  }
+  pos += digits;
+  if (decimals > 0) {
+    buf[pos++] = DOT;
+    scaled %= scale;
+    for (let d = decimals - 1; d >= 0; d--) {
+      buf[pos + d] = ZERO + (scaled % 10);
+      scaled = Math.floor(scaled / 10);
+    }
+    pos += decimals;
+  }
+  return pos;
+}
+
+const twoDigits = (buf: Uint8Array, pos: number, value: number): void => {
+  buf[pos] = ZERO + Math.floor(value / 10);
+  buf[pos + 1] = ZERO + (value % 10);
+};
+
+/** Writes "YYYY-MM-DDTHH:MMZ" (UTC) for epoch ms; 17 bytes. Years 0–9999. */
+function writeTimestamp(buf: Uint8Array, pos: number, ms: number, civil: { year: number; month: number; day: number }): number {
+  const days = Math.floor(ms / MS_PER_DAY);
+  civilFromDays(days, civil);
+  const withinDayMs = ms - days * MS_PER_DAY;
+  const hour = Math.floor(withinDayMs / MS_PER_HOUR);
+  const minute = Math.floor((withinDayMs - hour * MS_PER_HOUR) / 60_000);
+  twoDigits(buf, pos, Math.floor(civil.year / 100));
+  twoDigits(buf, pos + 2, civil.year % 100);
+  buf[pos + 4] = MINUS;
+  twoDigits(buf, pos + 5, civil.month);
+  buf[pos + 7] = MINUS;
+  twoDigits(buf, pos + 8, civil.day);
+  buf[pos + 10] = 84; // T
+  twoDigits(buf, pos + 11, hour);
+  buf[pos + 13] = 58; // :
+  twoDigits(buf, pos + 14, minute);
+  buf[pos + 16] = 90; // Z
+  return pos + 17;
+}
+
+/**
+ * Formats the hourly CSV (header first) and hands it over in chunks of bytes; each chunk is a
+ * fresh view the receiver may keep or write at once.
+ */
+export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Array) => void): void {
+  const n = input.modes.length;
+  for (const key of Object.keys(input) as (keyof HourlyCsvInput)[]) {
+    if (input[key].length !== n) throw new RangeError(`${key} has ${input[key].length} hours, modes has ${n}`);
+  }
+  onChunk(encoder.encode(`${HOURLY_CSV_COLUMNS.join(',')}\n`));
+  const civil = { year: 0, month: 0, day: 0 };
+  for (let start = 0; start < n; start += ROWS_PER_CHUNK) {
+    const end = Math.min(n, start + ROWS_PER_CHUNK);
+    const buf = new Uint8Array((end - start) * MAX_ROW_BYTES);
+    let pos = 0;
+    for (let i = start; i < end; i++) {
+      pos = writeTimestamp(buf, pos, input.timestampsMs[i], civil);
+      buf[pos++] = COMMA;
+      const modeBytes = MODE_BYTES[input.modes[i]];
+      buf.set(modeBytes, pos);
+      pos += modeBytes.length;
+      buf[pos++] = COMMA;
+      pos = writeFixed(buf, pos, input.dryBulbC[i], 2);
+      buf[pos++] = COMMA;
+      pos = writeFixed(buf, pos, input.wetBulbC[i], 2);
+      buf[pos++] = COMMA;
+      pos = writeFixed(buf, pos, input.dewPointC[i], 2);
+      buf[pos++] = COMMA;
+      pos = writeFixed(buf, pos, input.rhPct[i], 2);
+      buf[pos++] = COMMA;
+      pos = writeFixed(buf, pos, input.humidityRatio[i] * 1000, 3);
+      buf[pos++] = COMMA;
+      pos = writeFixed(buf, pos, input.enthalpyKJPerKg[i], 2);
+      buf[pos++] = COMMA;
+      if (input.modes[i] !== MODE.noData) pos = writeFixed(buf, pos, input.mechanicalFraction[i], 3);
+      buf[pos++] = NEWLINE;
+    }
+    onChunk(buf.subarray(0, pos));
+  }
+}

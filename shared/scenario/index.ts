@@ -1,0 +1,17 @@
+/**
+ * The scenario engine: schema, envelope presets, hour classifier, energy and water model, results.
+ * Formulas and their sources: FORMULAS.md in this folder.
+ */
+export * from './schema';
+export * from './envelopes';
+export { MODE, MODE_NAMES, EXCURSION, classifyHours, moistureTargets } from './classify';
+export type { HourClassification, InletLimits, OutdoorHours, ModeCode } from './classify';
+export { hourlyEnergy, hallAirMassFlowKgPerS, copAt, CP_AIR_KJ_PER_KG_K, LATENT_HEAT_TOWER_KJ_PER_KG } from './energy';
+export type { HourlyEnergy } from './energy';
+export { aggregateResults } from './results';
+export type { AggregatedResults, ModeHours, EnergyTotals, YearResults } from './results';
+export { runScenario } from './run';
+export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun } from './run';
+export { ENGINE_VERSION } from './version';
+export { HOURLY_CSV_COLUMNS, writeHourlyCsv, writeFixed } from './hourly-csv';
+export type { HourlyCsvInput } from './hourly-csv';
