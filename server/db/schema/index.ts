@@ -1,3 +1,5 @@
 export * from './people';
 export * from './projects';
 export * from './climate';
+export * from './audit';
+export * from './invites';
