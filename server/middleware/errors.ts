@@ -26,6 +26,11 @@ export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler
       return;
     }
     const status = typeof error?.status === 'number' && error.status >= 400 && error.status < 500 ? error.status : 500;
+    if (error?.type === 'entity.too.large') {
+      const limitMb = Math.round(Number(error.limit) / (1024 * 1024));
+      res.status(413).json(body('too_large', `The upload is larger than the limit of ${limitMb} MB. Split the file by period or remove unused columns.`));
+      return;
+    }
     if (status < 500) {
       // body-parser and friends: a malformed or oversized request body.
       res.status(status).json(body(error.type ?? 'bad_request', String(error.message ?? 'Bad request.')));

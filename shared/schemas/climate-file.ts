@@ -1,0 +1,83 @@
+import { z } from 'zod';
+
+/** A column named by its 0-based index or its header text. */
+const columnRef = z.union([z.number().int().min(0), z.string().min(1).max(200)]);
+const temperatureUnit = z.enum(['C', 'F', 'K']);
+const pressureUnit = z.enum(['Pa', 'hPa', 'kPa', 'inHg', 'psi']);
+
+/** What a person may fix in the proposed mapping before importing; anything left out is detected. */
+export const mappingOverrideSchema = z
+  .object({
+    delimiter: z.enum([',', ';', '\t']),
+    decimalSeparator: z.enum(['.', ',']),
+    time: z.discriminatedUnion('layout', [
+      z.object({ layout: z.literal('iso'), column: columnRef }),
+      z.object({
+        layout: z.literal('date-time'),
+        dateColumn: columnRef,
+        timeColumn: columnRef,
+        dateOrder: z.enum(['YMD', 'DMY', 'MDY']).optional(),
+      }),
+      z.object({
+        layout: z.literal('ymdh'),
+        year: columnRef,
+        month: columnRef,
+        day: columnRef,
+        hour: columnRef,
+        minute: columnRef.nullable().optional(),
+        hourConvention: z.enum(['ending-1-24', 'beginning-0-23']).optional(),
+      }),
+    ]),
+    dryBulb: z.object({ column: columnRef, unit: temperatureUnit }),
+    humidity: z.discriminatedUnion('quantity', [
+      z.object({ column: columnRef, quantity: z.literal('relative-humidity'), unit: z.enum(['%', 'fraction']) }),
+      z.object({ column: columnRef, quantity: z.literal('dew-point'), unit: temperatureUnit }),
+      z.object({ column: columnRef, quantity: z.literal('wet-bulb'), unit: temperatureUnit }),
+      z.object({ column: columnRef, quantity: z.literal('humidity-ratio'), unit: z.enum(['g/kg', 'kg/kg', 'gr/lb']) }),
+    ]),
+    pressure: z.object({ column: columnRef, unit: pressureUnit }).nullable(),
+  })
+  .partial();
+
+export type MappingOverride = z.infer<typeof mappingOverrideSchema>;
+
+/** Query of the upload and preview routes (the file itself is the request body). */
+export const climateUploadQuerySchema = z.object({
+  name: z.string().trim().min(1, 'name must not be empty').max(120).optional(),
+  fileName: z.string().trim().min(1).max(255).default('upload.csv'),
+  maxGapHours: z.coerce.number().int().min(0, 'maxGapHours must be 0 or more').max(168, 'maxGapHours must be at most 168').default(6),
+  mapping: z
+    .string()
+    .max(10_000)
+    .optional()
+    .transform((text, ctx) => {
+      if (text === undefined || text === '') return undefined;
+      try {
+        return JSON.parse(text) as unknown;
+      } catch {
+        ctx.addIssue({ code: 'custom', message: 'mapping must be JSON' });
+        return z.NEVER;
+      }
+    })
+    .pipe(mappingOverrideSchema.optional()),
+});
+
+export const siteInputSchema = z.object({
+  name: z.string().trim().min(1, 'name must not be empty').max(120),
+  latitude: z.number().min(-90).max(90).nullable().default(null),
+  longitude: z.number().min(-180).max(180).nullable().default(null),
+  elevationM: z.number().min(-450, 'elevationM must be at least −450 m').max(6000, 'elevationM must be at most 6000 m').default(0),
+  timeZone: z
+    .string()
+    .default('UTC')
+    .refine((tz) => {
+      try {
+        new Intl.DateTimeFormat('en', { timeZone: tz });
+        return true;
+      } catch {
+        return false;
+      }
+    }, 'timeZone must be an IANA time zone such as Europe/Oslo'),
+});
+
+export type SiteInput = z.infer<typeof siteInputSchema>;
