@@ -3,3 +3,4 @@ export * from './projects';
 export * from './climate';
 export * from './audit';
 export * from './invites';
+export * from './runs';
