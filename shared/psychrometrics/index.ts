@@ -15,7 +15,7 @@ export {
   degreeOfSaturation,
   specificHumidity,
 } from './moisture';
-export { humidityRatioFromWetBulb, wetBulbFromHumidityRatio } from './wet-bulb';
+export { humidityRatioFromWetBulb, wetBulbFromHumidityRatio, wetBulbRootsNearFreezing } from './wet-bulb';
 export { enthalpyKJPerKg, dryBulbFromEnthalpy, humidityRatioFromEnthalpy } from './enthalpy';
 export { specificVolumeM3PerKg, moistAirDensityKgPerM3 } from './volume';
 export { bulkStates } from './bulk';

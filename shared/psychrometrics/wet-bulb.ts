@@ -21,6 +21,8 @@ const C_WATER = 4.186;
 const A_ICE = 2830;
 const B_ICE = 0.24;
 const C_ICE = 2.1;
+/** Saturation pressure over ice at 0 °C, Pa (eq. 5), where the two psychrometric equations meet. */
+const PWS_AT_0C = Math.exp(lnSaturationPressure(FREEZING_POINT_C));
 
 /**
  * W from the psychrometric equation, given Ws* at the wet-bulb. No checks: kernel for loops.
@@ -34,34 +36,24 @@ export function humidityRatioFromWetBulbUnchecked(tC: number, wetBulbC: number, 
     : ((A_ICE - B_ICE * wetBulbC) * wsStar - 1.006 * (tC - wetBulbC)) / (A_ICE + 1.86 * tC - C_ICE * wetBulbC);
 }
 
+/** W on eq. 35 (ice) and on eq. 33 (water) at t* = 0 °C, where the two forms meet; ice gives the higher W. */
+function humidityRatiosAtFreezing(tC: number, pressurePa: number): { ice: number; water: number } {
+  const wsStar0 = (MOLAR_MASS_RATIO * PWS_AT_0C) / (pressurePa - PWS_AT_0C);
+  return {
+    ice: (A_ICE * wsStar0 - 1.006 * tC) / (A_ICE + 1.86 * tC),
+    water: (A_WATER * wsStar0 - 1.006 * tC) / (A_WATER + 1.86 * tC),
+  };
+}
+
 /**
- * Wet-bulb, °C, of air at dry-bulb tC with humidityRatio at pressurePa, given its dew point
- * (NaN if unknown). The root lies between the dew point and the dry-bulb. First guess: linearise
- * Ws* about the dew point; because Ws* is convex this guess lies above the root, from where Newton's
- * method on the exact equation descends monotonically (2–4 steps). The bracket guards against the
- * small jump between eq. 33 and eq. 35 at 0 °C, where the root may sit in the gap: the iterate then
- * converges to 0 °C by halving, which is what a bisection on the same equations returns.
- * No argument checks; returns NaN for NaN input. Expects W ≤ Ws(tC).
+ * Root of the psychrometric equation for t* in [lo, hi], where W(lo) ≤ humidityRatio ≤ W(hi), starting
+ * from `guess`. Newton's method on the exact equation, with the bracket as a guard: a step that leaves
+ * it is replaced by halving. Stops at 1e-9 K.
  */
-export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: number, dewPointC: number): number {
-  let lo = dewPointC >= MIN_TEMPERATURE_C ? dewPointC : MIN_TEMPERATURE_C;
-  let hi = tC;
-  if (!(hi > lo)) return hi === lo ? tC : Number.NaN;
-  let t: number;
-  if (dewPointC === dewPointC) {
-    // Linearised psychrometric equation about the dew point: L·s·x = cpm·(t − td − x).
-    const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
-    const dp = pressurePa - pw;
-    const slope = (MOLAR_MASS_RATIO * pressurePa * pw * dLnSaturationPressure(dewPointC)) / (dp * dp);
-    const cpm = 1.006 + 1.86 * humidityRatio;
-    const latent = dewPointC >= FREEZING_POINT_C ? A_WATER - B_WATER * dewPointC : A_ICE - B_ICE * dewPointC;
-    t = dewPointC + (cpm * (tC - dewPointC)) / (latent * slope + cpm);
-  } else {
-    t = 0.5 * (lo + hi);
-  }
+function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo: number, hi: number, guess: number): number {
+  let t = guess > lo && guess < hi ? guess : 0.5 * (lo + hi);
   for (let i = 0; i < 60; i++) {
-    const lnP = lnSaturationPressure(t);
-    const pws = Math.exp(lnP);
+    const pws = Math.exp(lnSaturationPressure(t));
     const dry = pressurePa - pws;
     if (!(dry > 0)) {
       // Above the boiling point at this pressure: Ws* is unbounded, so the root is lower.
@@ -93,6 +85,57 @@ export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: 
     t = next;
   }
   return t;
+}
+
+/**
+ * Wet-bulb, °C, of air at dry-bulb tC with humidityRatio at pressurePa, given its dew point (NaN if
+ * unknown). The root lies between the dew point and the dry-bulb. First guess: linearise Ws* about the
+ * dew point; Ws* is convex, so the guess lies above the root and Newton's method on the exact equation
+ * descends to it in 2–4 steps.
+ * Near 0 °C eq. 33 and eq. 35 overlap: at t* = 0 the ice form gives the higher W, so some W have a root on
+ * each side of freezing. The engine takes the ice root whenever it exists (a wick below 0 °C is frozen;
+ * supercooled water is metastable). See {@link wetBulbRootsNearFreezing}.
+ * No argument checks; returns NaN for NaN input. Expects W ≤ Ws(tC).
+ */
+export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: number, dewPointC: number): number {
+  let lo = dewPointC >= MIN_TEMPERATURE_C ? dewPointC : MIN_TEMPERATURE_C;
+  let hi = tC;
+  if (!(hi > lo)) return hi === lo ? tC : Number.NaN;
+  if (lo < FREEZING_POINT_C && hi > FREEZING_POINT_C) {
+    if (humidityRatio <= humidityRatiosAtFreezing(tC, pressurePa).ice) hi = FREEZING_POINT_C;
+    else lo = FREEZING_POINT_C;
+  }
+  let guess = Number.NaN;
+  if (dewPointC === dewPointC) {
+    // Linearised psychrometric equation about the dew point: L·s·x = cpm·(t − td − x).
+    const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
+    const dp = pressurePa - pw;
+    const slope = (MOLAR_MASS_RATIO * pressurePa * pw * dLnSaturationPressure(dewPointC)) / (dp * dp);
+    const cpm = 1.006 + 1.86 * humidityRatio;
+    const latent = dewPointC >= FREEZING_POINT_C ? A_WATER - B_WATER * dewPointC : A_ICE - B_ICE * dewPointC;
+    guess = dewPointC + (cpm * (tC - dewPointC)) / (latent * slope + cpm);
+  }
+  return solveWetBulb(tC, humidityRatio, pressurePa, lo, hi, guess);
+}
+
+/**
+ * Both wet-bulbs, °C, when the psychrometric equation has one on each side of 0 °C for this air
+ * (eq. 35 over ice below, eq. 33 over water above, overlapping near freezing); null when there is one.
+ * The engine's wet-bulb is `ice`. Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 33 and 35.
+ */
+export function wetBulbRootsNearFreezing(tC: number, humidityRatio: number, pressurePa: number): { iceC: number; waterC: number } | null {
+  requireTemperatureC('tC', tC);
+  requireHumidityRatio('humidityRatio', humidityRatio);
+  requirePressurePa('pressurePa', pressurePa);
+  if (!(tC > FREEZING_POINT_C)) return null;
+  const atFreezing = humidityRatiosAtFreezing(tC, pressurePa);
+  if (!(humidityRatio > atFreezing.water && humidityRatio <= atFreezing.ice)) return null;
+  const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
+  const dewPointC = pw > 0 ? temperatureAtLnSaturation(Math.log(pw)) : MIN_TEMPERATURE_C;
+  return {
+    iceC: solveWetBulb(tC, humidityRatio, pressurePa, Math.max(dewPointC, MIN_TEMPERATURE_C), FREEZING_POINT_C, Number.NaN),
+    waterC: solveWetBulb(tC, humidityRatio, pressurePa, FREEZING_POINT_C, tC, Number.NaN),
+  };
 }
 
 /**
