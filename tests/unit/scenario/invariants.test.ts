@@ -1,0 +1,121 @@
+/**
+ * Properties the classification must keep whatever the weather (fast-check): raising the supply
+ * setpoint never lowers free-cooling hours, raising the evaporative effectiveness never lowers
+ * free + adiabatic hours, a wider envelope never raises mechanical hours, hours sum to the total.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { runScenario, type Scenario, type ScenarioSeries } from '../../../shared/scenario';
+import { makeScenario } from './fixtures';
+
+const KINDS = ['direct-air', 'indirect-air', 'water-side'] as const;
+
+/** Hours as dry-bulb and dew point (dew point ≤ dry-bulb), some of them missing. */
+const weatherArb = fc
+  .array(
+    fc.record({
+      t: fc.double({ min: -30, max: 45, noNaN: true }),
+      depression: fc.double({ min: 0, max: 40, noNaN: true }),
+      missing: fc.integer({ min: 0, max: 9 }).map((x) => x === 0),
+    }),
+    { minLength: 1, maxLength: 60 },
+  )
+  .map((hours): ScenarioSeries => ({
+    timestampsMs: Float64Array.from(hours, (_, i) => Date.UTC(2020, 0, 1) + i * 3_600_000),
+    dryBulbC: Float64Array.from(hours, (h) => (h.missing ? Number.NaN : h.t)),
+    humidity: { kind: 'dew-point-c', values: Float64Array.from(hours, (h) => Math.max(-60, h.t - h.depression)) },
+    pressurePa: null,
+    flags: null,
+  }));
+
+const systemArb = fc.record({
+  kind: fc.constantFrom(...KINDS),
+  supplyAirC: fc.double({ min: 15, max: 30, noNaN: true }),
+  evaporativeEffectiveness: fc.double({ min: 0, max: 0.95, noNaN: true }),
+  heatExchangerEffectiveness: fc.double({ min: 0.3, max: 0.9, noNaN: true }),
+  heatRejection: fc.constantFrom('dry-cooler', 'cooling-tower'),
+  chilledWaterSupplyC: fc.double({ min: 8, max: 14, noNaN: true }),
+  elevationM: fc.double({ min: 0, max: 2500, noNaN: true }),
+});
+
+type SystemDraw = { kind: (typeof KINDS)[number]; elevationM: number } & Record<string, unknown>;
+
+const scenarioOf = ({ kind, elevationM, ...system }: SystemDraw, envelope: Record<string, unknown> = {}): Scenario =>
+  makeScenario(kind, { system, envelope, elevationM });
+
+const hoursOf = (scenario: Scenario, series: ScenarioSeries) => runScenario(scenario, series).results.hours;
+
+describe('classification invariants', () => {
+  it('hours per mode always sum to the total, which is the series length', () => {
+    fc.assert(
+      fc.property(systemArb, weatherArb, (system, series) => {
+        const h = hoursOf(scenarioOf(system), series);
+        expect(h.free + h.adiabatic + h.mechanical + h.noData).toBe(h.total);
+        expect(h.total).toBe(series.dryBulbC.length);
+      }),
+    );
+  });
+
+  it('raising the supply setpoint never lowers free-cooling hours (lower moisture limit set by dew point)', () => {
+    fc.assert(
+      fc.property(systemArb, weatherArb, fc.double({ min: 0, max: 8, noNaN: true }), (system, series, rise) => {
+        const low = hoursOf(scenarioOf(system), series);
+        const high = hoursOf(scenarioOf({ ...system, supplyAirC: (system.supplyAirC as number) + rise }), series);
+        expect(high.free).toBeGreaterThanOrEqual(low.free);
+      }),
+    );
+  });
+
+  it('raising the evaporative effectiveness never lowers free + adiabatic hours', () => {
+    fc.assert(
+      fc.property(systemArb, weatherArb, fc.double({ min: 0, max: 1, noNaN: true }), (system, series, extra) => {
+        const eps = system.evaporativeEffectiveness as number;
+        const before = hoursOf(scenarioOf(system), series);
+        const after = hoursOf(scenarioOf({ ...system, evaporativeEffectiveness: eps + (1 - eps) * extra }), series);
+        expect(after.free + after.adiabatic).toBeGreaterThanOrEqual(before.free + before.adiabatic);
+      }),
+    );
+  });
+
+  it('a wider envelope never raises mechanical hours', () => {
+    const widening = fc.record({
+      dewPointMax: fc.double({ min: 0, max: 8, noNaN: true }),
+      rhMax: fc.double({ min: 0, max: 30, noNaN: true }),
+      dewPointMin: fc.double({ min: 0, max: 10, noNaN: true }),
+      rhMin: fc.double({ min: 0, max: 10, noNaN: true }),
+      dryBulbMax: fc.double({ min: 0, max: 10, noNaN: true }),
+    });
+    fc.assert(
+      fc.property(systemArb, weatherArb, widening, (system, series, wider) => {
+        const narrow = { dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9, dewPointMaxC: 15, rhMinPct: 10, rhMaxPct: 60 };
+        const wide = {
+          dryBulbMinC: 18,
+          dryBulbMaxC: 27 + wider.dryBulbMax,
+          dewPointMinC: -9 - wider.dewPointMin,
+          dewPointMaxC: 15 + wider.dewPointMax,
+          rhMinPct: 10 - wider.rhMin,
+          rhMaxPct: Math.min(100, 60 + wider.rhMax),
+        };
+        const a = hoursOf(scenarioOf(system, narrow), series);
+        const b = hoursOf(scenarioOf(system, wide), series);
+        expect(b.mechanical).toBeLessThanOrEqual(a.mechanical);
+      }),
+    );
+  });
+
+  it('known exception: with an RH lower limit, a warmer supply is drier in RH, so a direct-air hour can move from free to adiabatic', () => {
+    // A1-like lower limits: −12 °C dew point and 8 % RH. At 18 °C supply W(8 %) ≈ 1.03 g/kg < W(−12 °C dew point) ≈ 1.31 g/kg,
+    // at 27 °C W(8 %) ≈ 1.79 g/kg binds: outdoor air at 1.5 g/kg is free at 18 °C but needs humidifying at 27 °C.
+    const envelope = { dryBulbMinC: 15, dryBulbMaxC: 32, dewPointMinC: -12, dewPointMaxC: 17, rhMinPct: 8, rhMaxPct: 80 };
+    const series: ScenarioSeries = {
+      timestampsMs: Float64Array.of(0),
+      dryBulbC: Float64Array.of(5),
+      humidity: { kind: 'humidity-ratio-kgkg', values: Float64Array.of(0.0015) },
+      pressurePa: null,
+    };
+    const cool = hoursOf(makeScenario('direct-air', { system: { supplyAirC: 18 }, envelope }), series);
+    const warm = hoursOf(makeScenario('direct-air', { system: { supplyAirC: 27 }, envelope }), series);
+    expect(cool.free).toBe(1);
+    expect(warm.adiabatic).toBe(1);
+  });
+});
