@@ -1,0 +1,162 @@
+/**
+ * From raw text to rows of cells with their line numbers: BOM, binary check, leading comment
+ * lines, delimiter sniffing and the papaparse call (its fast mode when the text has no quotes).
+ */
+import Papa from 'papaparse';
+
+export type Delimiter = ',' | ';' | '\t';
+const DELIMITERS: Delimiter[] = ['\t', ';', ','];
+
+export function stripBom(text: string): string {
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
+
+/**
+ * True when the start of the text reads as binary rather than text: a NUL character, or more
+ * than 2 % control or replacement characters (what a decoder leaves of non-text bytes).
+ */
+export function looksBinary(text: string): boolean {
+  const end = Math.min(text.length, 8192);
+  let odd = 0;
+  for (let i = 0; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 0) return true;
+    if ((c < 32 && c !== 9 && c !== 10 && c !== 13) || c === 0xfffd || (c >= 0x7f && c < 0xa0)) odd++;
+  }
+  return end > 0 && odd / end > 0.02;
+}
+
+export interface Body {
+  /** Text after the leading comment and blank lines. */
+  text: string;
+  /** 1-based line number of the first line of `text`. */
+  firstLine: number;
+  commentLines: number;
+}
+
+/** Leading lines that are blank or start with '#' are notes, not data: skip them. */
+export function skipLeadingComments(text: string): Body {
+  let offset = 0;
+  let line = 1;
+  let commentLines = 0;
+  while (offset < text.length) {
+    let end = text.indexOf('\n', offset);
+    if (end === -1) end = text.length;
+    const content = text.slice(offset, end).trim();
+    if (content !== '' && !content.startsWith('#')) break;
+    if (content !== '') commentLines++;
+    offset = end + 1;
+    line++;
+  }
+  return { text: offset >= text.length ? '' : text.slice(offset), firstLine: line, commentLines };
+}
+
+/** The first `count` lines of the text (cheap: no split of the whole text). */
+export function firstLines(text: string, count: number): string[] {
+  const lines: string[] = [];
+  let offset = 0;
+  while (lines.length < count && offset < text.length) {
+    let end = text.indexOf('\n', offset);
+    if (end === -1) end = text.length;
+    const line = text.slice(offset, end).replace(/\r$/, '');
+    if (line.trim() !== '' && !line.trimStart().startsWith('#')) lines.push(line);
+    offset = end + 1;
+  }
+  return lines;
+}
+
+function fieldCount(line: string, delimiter: string): number {
+  let count = 1;
+  let quoted = false;
+  for (let i = 0; i < line.length; i++) {
+    const c = line[i];
+    if (c === '"') quoted = !quoted;
+    else if (c === delimiter && !quoted) count++;
+  }
+  return count;
+}
+
+/**
+ * The delimiter that splits the sample lines into the same number (≥ 2) of fields most
+ * consistently; ties go to tab, then semicolon, then comma, since a comma may also be a
+ * decimal separator.
+ */
+export function sniffDelimiter(lines: string[]): Delimiter {
+  let best: Delimiter = ',';
+  let bestScore = -1;
+  for (const delimiter of DELIMITERS) {
+    const counts = lines.map((line) => fieldCount(line, delimiter));
+    const tally = new Map<number, number>();
+    for (const n of counts) tally.set(n, (tally.get(n) ?? 0) + 1);
+    let modal = 1;
+    let modalCount = 0;
+    for (const [n, times] of tally) {
+      if (times > modalCount || (times === modalCount && n > modal)) {
+        modal = n;
+        modalCount = times;
+      }
+    }
+    if (modal < 2) continue;
+    const score = modalCount / Math.max(1, counts.length);
+    if (score > bestScore + 1e-9) {
+      best = delimiter;
+      bestScore = score;
+    }
+  }
+  return best;
+}
+
+export interface ParsedRows {
+  rows: string[][];
+  /** 1-based line number where each row starts. */
+  lineOf: (rowIndex: number) => number;
+  /** Malformed quoting reported by papaparse: row index and message. */
+  errors: { row: number; message: string }[];
+}
+
+/** Splits the body into rows with papaparse, keeping each row's line number. */
+export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
+  const hasQuotes = body.text.includes('"');
+  const result = Papa.parse<string[]>(body.text, {
+    delimiter,
+    header: false,
+    skipEmptyLines: false,
+    dynamicTyping: false,
+    fastMode: !hasQuotes,
+  });
+  const rows = result.data;
+  const errors = result.errors
+    .filter((e) => e.type === 'Quotes')
+    .map((e) => ({ row: e.row ?? 0, message: e.message }));
+  if (!hasQuotes) return { rows, lineOf: (i) => body.firstLine + i, errors };
+  const starts = rowStartLines(body.text, body.firstLine);
+  return { rows, lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
+}
+
+/** Line on which each row starts, counting line breaks inside quoted fields. */
+function rowStartLines(text: string, firstLine: number): number[] {
+  const starts = [firstLine];
+  let line = firstLine;
+  let quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 34) quoted = !quoted;
+    else if (c === 10 || (c === 13 && text.charCodeAt(i + 1) !== 10)) {
+      line++;
+      if (!quoted) starts.push(line);
+    }
+  }
+  return starts;
+}
+
+/** Number of lines in a text (a final line break does not start a new line). */
+export function countLines(text: string): number {
+  if (text.length === 0) return 0;
+  let lines = 1;
+  let at = text.indexOf('\n');
+  while (at !== -1) {
+    if (at < text.length - 1) lines++;
+    at = text.indexOf('\n', at + 1);
+  }
+  return lines;
+}

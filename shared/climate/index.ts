@@ -1,0 +1,38 @@
+/** The climate-file importer: pure TypeScript for the server, workers and the command line. */
+export { importClimateText, DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-climate-text';
+export { encodeColumn, decodeColumn, decodeFloat64Column, decodeUint8Column, type ColumnArray } from './column-codec';
+export { decodeClimateBytes } from './decode-bytes';
+export { conversionToSi, type AffineConversion } from './units';
+export {
+  DRY_BULB_MIN_C,
+  DRY_BULB_MAX_C,
+  PRESSURE_MIN_PA,
+  PRESSURE_MAX_PA,
+  RH_TOLERANCE_PCT,
+  SATURATION_TOLERANCE_K,
+} from './value-limits';
+export { HOUR_FLAG } from './types';
+export type {
+  HumidityKind,
+  ClimateSeries,
+  ImportOptions,
+  ImportResult,
+  ImportReport,
+  ImportIssue,
+  ImportCounts,
+  IssueKind,
+  IssueSeverity,
+  DetectedMapping,
+  ColumnMappingOverride,
+  ColumnRef,
+  QuantityAssignment,
+  QuantityColumn,
+  Quantity,
+  TimeLayout,
+  TimeMapping,
+  DateOrder,
+  TemperatureUnit,
+  RelativeHumidityUnit,
+  HumidityRatioUnit,
+  PressureUnit,
+} from './types';

@@ -1,0 +1,53 @@
+/**
+ * Numbers in cells: decimal point or decimal comma, blanks and missing-value markers.
+ * The fast path is one Number() call; why a cell failed is worked out only when it did.
+ */
+
+/** Words and symbols that stations write for "no value". */
+const MISSING_WORDS = new Set(['', 'na', 'n/a', 'nan', 'null', 'none', '-', '--', 'm', 'missing', '#n/a', 'x']);
+/** Numeric sentinels common in station exports for "no value"; none is a possible reading of our quantities. */
+const SENTINELS = new Set([-999, -9999, 9999, -99999, 99999]);
+
+/** A cell as a finite number, or NaN (blank, marker, sentinel or not a number). */
+export function parseNumberCell(cell: string, decimalComma: boolean): number {
+  let s = cell;
+  if (decimalComma && s.indexOf(',') !== -1) s = s.replace(',', '.');
+  if (s.length === 0) return NaN;
+  const c = s.charCodeAt(0);
+  // Number() also reads '', '  ', '0x1f' and 'Infinity'; a number here starts with a digit, sign, point or space
+  if (!((c >= 48 && c <= 57) || c === 45 || c === 43 || c === 46 || c === 32)) return NaN;
+  if (s.length > 1) {
+    const second = s.charCodeAt(1) | 32;
+    if (second === 120 || second === 98 || second === 111) return NaN;
+  }
+  const value = Number(s);
+  if (!Number.isFinite(value) || SENTINELS.has(value)) return NaN;
+  if (value === 0 && s.trim() === '') return NaN;
+  return value;
+}
+
+/** Why a cell gave NaN: a deliberate "no value" or something unreadable. */
+export function classifyUnreadableCell(cell: string, decimalComma: boolean): 'missing-marker' | 'unreadable' {
+  const trimmed = cell.trim().toLowerCase();
+  if (MISSING_WORDS.has(trimmed)) return 'missing-marker';
+  const s = decimalComma ? trimmed.replace(',', '.') : trimmed;
+  const value = Number(s);
+  if (s !== '' && SENTINELS.has(value)) return 'missing-marker';
+  return 'unreadable';
+}
+
+const DECIMAL_COMMA = /^\s*[+-]?\d*,\d+\s*$/;
+const DECIMAL_POINT = /^\s*[+-]?\d*\.\d+\s*$/;
+
+/** Decimal comma when sample cells written with a comma outnumber those written with a point. */
+export function sniffDecimalSeparator(rows: string[][]): '.' | ',' {
+  let commas = 0;
+  let points = 0;
+  for (const row of rows) {
+    for (const cell of row) {
+      if (DECIMAL_COMMA.test(cell)) commas++;
+      else if (DECIMAL_POINT.test(cell)) points++;
+    }
+  }
+  return commas > points ? ',' : '.';
+}

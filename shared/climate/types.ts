@@ -1,0 +1,219 @@
+/**
+ * Types of the climate-file importer: what it returns (series, report, mapping) and what a
+ * caller may override. Everything here except the typed arrays of ClimateSeries is plain JSON,
+ * so the report and the mapping can be sent as an API body unchanged.
+ */
+
+import type { HumidityKind } from '../psychrometrics';
+
+export type { HumidityKind };
+
+export type TemperatureUnit = 'C' | 'F' | 'K';
+export type RelativeHumidityUnit = '%' | 'fraction';
+export type HumidityRatioUnit = 'g/kg' | 'kg/kg' | 'gr/lb';
+export type PressureUnit = 'Pa' | 'hPa' | 'kPa' | 'inHg' | 'psi';
+
+/** A quantity column as detected or chosen, with the unit its cells are written in. */
+export type QuantityColumn =
+  | { quantity: 'dry-bulb'; unit: TemperatureUnit }
+  | { quantity: 'relative-humidity'; unit: RelativeHumidityUnit }
+  | { quantity: 'dew-point'; unit: TemperatureUnit }
+  | { quantity: 'wet-bulb'; unit: TemperatureUnit }
+  | { quantity: 'humidity-ratio'; unit: HumidityRatioUnit }
+  | { quantity: 'pressure'; unit: PressureUnit };
+
+export type Quantity = QuantityColumn['quantity'];
+export type HumidityQuantity = 'relative-humidity' | 'dew-point' | 'wet-bulb' | 'humidity-ratio';
+
+/** A column reference: 0-based index or the header text (matched without regard to case). */
+export type ColumnRef = number | string;
+
+export type QuantityAssignment = QuantityColumn & {
+  /** 0-based column index. */
+  column: number;
+  header: string;
+  /** 0..1; 1 for the canonical names, lower where the unit or quantity was guessed from values. */
+  confidence: number;
+  /** Why this column was chosen, in words. */
+  reason: string;
+};
+
+export type DateOrder = 'YMD' | 'DMY' | 'MDY';
+
+/**
+ * How time is written. Timestamps in the series are the instants the file states:
+ * for 'ymdh' with hours 1–24 (hour ending) hour h of a day is that day's midnight + h hours,
+ * so hour 24 is midnight at the end of the day.
+ */
+export type TimeLayout =
+  | { layout: 'iso'; column: number; dateOrder?: DateOrder }
+  | { layout: 'date-time'; dateColumn: number; timeColumn: number; dateOrder: DateOrder }
+  | {
+      layout: 'ymdh';
+      year: number;
+      month: number;
+      day: number;
+      hour: number;
+      minute: number | null;
+      hourConvention: 'ending-1-24' | 'beginning-0-23';
+    };
+
+export type TimeMapping = TimeLayout & { confidence: number; description: string };
+
+export interface DetectedMapping {
+  delimiter: ',' | ';' | '\t';
+  decimalSeparator: '.' | ',';
+  /** 1-based line of the header row, or null when the file has none. */
+  headerLine: number | null;
+  headers: string[];
+  time: TimeMapping | null;
+  dryBulb: QuantityAssignment | null;
+  humidity: QuantityAssignment | null;
+  pressure: QuantityAssignment | null;
+  /** Lowest confidence among time, dry-bulb and humidity (0 when one is missing). */
+  confidence: number;
+}
+
+/** What a caller may fix before importing; any part left out is detected. */
+export interface ColumnMappingOverride {
+  delimiter: ',' | ';' | '\t';
+  decimalSeparator: '.' | ',';
+  time:
+    | { layout: 'iso'; column: ColumnRef; dateOrder?: DateOrder }
+    | { layout: 'date-time'; dateColumn: ColumnRef; timeColumn: ColumnRef; dateOrder?: DateOrder }
+    | {
+        layout: 'ymdh';
+        year: ColumnRef;
+        month: ColumnRef;
+        day: ColumnRef;
+        hour: ColumnRef;
+        minute?: ColumnRef | null;
+        hourConvention?: 'ending-1-24' | 'beginning-0-23';
+      };
+  dryBulb: { column: ColumnRef; unit: TemperatureUnit };
+  humidity: { column: ColumnRef } & Exclude<QuantityColumn, { quantity: 'dry-bulb' | 'pressure' }>;
+  /** null: ignore any pressure column. */
+  pressure: { column: ColumnRef; unit: PressureUnit } | null;
+}
+
+export interface ImportOptions {
+  mapping?: Partial<ColumnMappingOverride>;
+  /** Longest run of missing hours filled by linear interpolation; longer runs stay missing. Default 6. */
+  maxGapHours?: number;
+  /** IANA zone for local timestamps without offset; default 'UTC'. */
+  timeZone?: string;
+}
+
+export type IssueKind =
+  | 'empty-input'
+  | 'binary-input'
+  | 'header-only'
+  | 'no-header'
+  | 'preamble-skipped'
+  | 'unrecognised-column'
+  | 'missing-time'
+  | 'missing-dry-bulb'
+  | 'missing-humidity'
+  | 'mapping-override-invalid'
+  | 'unit-assumed'
+  | 'unparsable-time'
+  | 'unparsable-value'
+  | 'wrong-field-count'
+  | 'missing-value-marker'
+  | 'impossible-value'
+  | 'clamped-value'
+  | 'duplicate-timestamp'
+  | 'out-of-order'
+  | 'gap-filled'
+  | 'gap-missing'
+  | 'non-hourly-step'
+  | 'timestamps-rounded'
+  | 'malformed-row'
+  | 'other-humidity-ignored'
+  | 'pressure-ignored'
+  | 'unexpected-failure'
+  | 'sub-hourly-averaged'
+  | 'daylight-saving-jump'
+  | 'span-too-long'
+  | 'too-many-rejected'
+  | 'too-little-data'
+  | 'invalid-option';
+
+export type IssueSeverity = 'error' | 'warning' | 'info';
+
+export interface ImportIssue {
+  kind: IssueKind;
+  severity: IssueSeverity;
+  /** 1-based line in the text as given (comment lines and the header count). */
+  line?: number;
+  /** Header text of the column, or its 1-based number when the file has no header. */
+  column?: string;
+  /** The cell or value concerned, as text. */
+  value?: string;
+  message: string;
+}
+
+export interface ImportCounts {
+  /** Lines in the text, all kinds. */
+  lines: number;
+  /** Data rows read (not comments, header or blank lines). */
+  rows: number;
+  /** Rows whose time could not be read and were left out. */
+  rowsRejected: number;
+  /** Cells that did not parse as numbers or held a missing-value marker. */
+  cellsUnreadable: number;
+  impossibleValues: number;
+  clampedValues: number;
+  duplicateTimestamps: number;
+  /** Rows that shared an hour with other rows of a finer step and were averaged into it. */
+  rowsAveraged: number;
+  nonHourlySteps: number;
+  daylightSavingJumps: number;
+  /** Length of the hourly series. */
+  hours: number;
+  measuredHours: number;
+  filledHours: number;
+  missingHours: number;
+  gaps: number;
+  longestGapHours: number;
+  /** Issues found beyond the per-kind cap of the issue list. */
+  issuesNotListed: number;
+}
+
+export interface ImportReport {
+  ok: boolean;
+  /** One sentence on the outcome. */
+  summary: string;
+  /** The time layout, in words. */
+  timeLayout: string | null;
+  /** Typical step between rows in minutes, before averaging to hours. */
+  stepMinutes: number | null;
+  firstTimestamp: string | null;
+  lastTimestamp: string | null;
+  years: number[];
+  maxGapHours: number;
+  timeZone: string;
+  counts: ImportCounts;
+  issues: ImportIssue[];
+}
+
+export interface ClimateSeries {
+  /** UTC epoch ms, one per hour, strictly hourly and increasing (missing hours present with NaN values). */
+  timestampsMs: Float64Array;
+  dryBulbC: Float64Array;
+  /** SI: %, °C or kg/kg according to kind. */
+  humidity: { kind: HumidityKind; values: Float64Array };
+  /** null when the file has no pressure. */
+  pressurePa: Float64Array | null;
+  /** 0 measured, 1 filled by interpolation, 2 missing. */
+  flags: Uint8Array;
+}
+
+export interface ImportResult {
+  ok: boolean;
+  series: ClimateSeries | null;
+  report: ImportReport;
+  mapping: DetectedMapping;
+}
+
+export const HOUR_FLAG = { measured: 0, filled: 1, missing: 2 } as const;
