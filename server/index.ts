@@ -5,12 +5,16 @@ import { seedDemo } from './demo/seed';
 import { createApp } from './app';
 import { appRoot, clientDistFolder } from './paths';
 import { createWorkerPool } from '../workers/pool';
+import { createRunQueue } from './runs/queue';
 
 async function main(): Promise<void> {
   const env = loadEnv();
   const db = openDatabase(env.databaseFile);
   const { seeded } = seedDemo(db);
   const pool = createWorkerPool({ threads: env.TRAMONTANE_WORKERS });
+  const runQueue = createRunQueue({ db, pool });
+  const resumed = runQueue.resume();
+  if (resumed > 0) console.log(`Resuming ${resumed} run(s) left pending by the last shutdown`);
 
   let devMiddleware;
   let closeVite = async () => {};
@@ -21,7 +25,7 @@ async function main(): Promise<void> {
     closeVite = () => vite.close();
   }
 
-  const app = createApp({ db, pool, clientDist: clientDistFolder, devMiddleware });
+  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : env.PORT;

@@ -1,5 +1,8 @@
 /**
- * The one task file the pool loads. Each named export is a task, chosen with
- * `pool.run(data, { name })`; tasks are thin wrappers over shared/.
+ * The tasks the pool runs, by name: `pool.run('<name>', input)` (workers/pool.ts).
+ * Each is a thin wrapper over shared/.
  */
 export { summarise } from './summarise';
+export { importClimate } from './import-climate';
+export { summariseClimate } from './summarise-climate';
+export { executeRun } from './execute-run';

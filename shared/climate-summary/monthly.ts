@@ -1,3 +1,5 @@
+import { civilFromDays, MS_PER_DAY } from '../scenario/calendar';
+
 export interface MonthlyStat {
   /** 1..12 */
   month: number;
@@ -16,10 +18,12 @@ export function monthlyStats(timestampsMs: Float64Array, values: Float64Array, o
   const sum = new Float64Array(12);
   const min = new Float64Array(12).fill(Infinity);
   const max = new Float64Array(12).fill(-Infinity);
+  const civil = { year: 0, month: 0, day: 0 };
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
     if (v !== v) continue;
-    const m = monthOfEpochDay(Math.floor((timestampsMs[i] + offsetMs) / 86_400_000)) - 1;
+    civilFromDays(Math.floor((timestampsMs[i] + offsetMs) / MS_PER_DAY), civil);
+    const m = civil.month - 1;
     n[m]++;
     sum[m] += v;
     if (v < min[m]) min[m] = v;
@@ -32,18 +36,4 @@ export function monthlyStats(timestampsMs: Float64Array, values: Float64Array, o
     mean: n[m] ? sum[m] / n[m] : NaN,
     max: n[m] ? max[m] : NaN,
   }));
-}
-
-/**
- * Calendar month (1..12) of a day counted from 1970-01-01, without a Date object
- * (H. Hinnant, "chrono-compatible low-level date algorithms", civil_from_days).
- */
-export function monthOfEpochDay(epochDay: number): number {
-  const z = epochDay + 719_468;
-  const era = Math.floor(z / 146_097);
-  const doe = z - era * 146_097;
-  const yoe = Math.floor((doe - Math.floor(doe / 1460) + Math.floor(doe / 36_524) - Math.floor(doe / 146_096)) / 365);
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  return mp < 10 ? mp + 3 : mp - 9;
 }

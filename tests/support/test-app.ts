@@ -3,12 +3,14 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { createApp, type AppDeps } from '../../server/app';
 import { openDatabase, type Db } from '../../server/db/client';
+import { createRunQueue, type RunQueue } from '../../server/runs/queue';
 import { createWorkerPool, type WorkerPool } from '../../workers/pool';
 
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   db: Db;
   pool: WorkerPool;
+  runQueue: RunQueue;
   dataDir: string;
   close: () => Promise<void>;
 }
@@ -18,13 +20,16 @@ export function createTestApp(overrides: Partial<AppDeps> = {}): TestApp {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'tramontane-test-'));
   const db = openDatabase(path.join(dataDir, 'tramontane.db'));
   const pool = createWorkerPool({ threads: 2 });
-  const app = createApp({ db, pool, ...overrides });
+  const runQueue = createRunQueue({ db, pool });
+  const app = createApp({ db, pool, runQueue, ...overrides });
   return {
     app,
     db,
     pool,
+    runQueue,
     dataDir,
     close: async () => {
+      await runQueue.idle();
       await pool.destroy();
       db.$client.close();
       rmSync(dataDir, { recursive: true, force: true });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { exceededValue, sortedFinite } from '../../../shared/climate-summary/quantile';
-import { monthOfEpochDay, monthlyStats } from '../../../shared/climate-summary/monthly';
+import { monthlyStats } from '../../../shared/climate-summary/monthly';
 import { designConditions } from '../../../shared/climate-summary/design-conditions';
 
 describe('the cumulative-frequency reading', () => {
@@ -19,11 +19,6 @@ describe('the cumulative-frequency reading', () => {
 });
 
 describe('monthly statistics', () => {
-  it('finds the calendar month of epoch days like Date does', () => {
-    for (let day = -800; day < 30_000; day += 7) {
-      expect(monthOfEpochDay(day)).toBe(new Date(day * 86_400_000).getUTCMonth() + 1);
-    }
-  });
   it('takes min, mean and max per month, skipping missing hours', () => {
     const jan1 = Date.UTC(2023, 0, 1);
     const feb1 = Date.UTC(2023, 1, 1);

@@ -1,0 +1,222 @@
+import express from 'express';
+import { desc, eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { decodeClimateBytes, type ClimateSeries, type ImportResult } from '../../shared/climate';
+import { csvCell } from '../../shared/csv';
+import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
+import type { AppDeps } from '../app';
+import { access, route, type RouteSpec } from '../auth/access';
+import { findClimateFile, loadClimateSeries, loadOriginal, saveClimateFile } from '../climate/store';
+import { climateFiles, sites } from '../db/schema';
+import { HttpError } from '../http-error';
+import { findSite } from './sites';
+
+/** Upload limits: 64 MB and 1.2 million lines (over 100 years of hours) unless the app is given others. */
+export const defaultUploadLimits = { bytes: 64 * 1024 * 1024, rows: 1_200_000 };
+const previewHours = 48;
+
+const siteParams = z.object({ siteId: z.coerce.number().int().positive('siteId must be a positive whole number') });
+const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
+const hoursQuery = z.object({ year: z.coerce.number().int().min(1800).max(2200).optional() });
+
+function countRows(text: string): number {
+  let n = 0;
+  for (let i = text.indexOf('\n'); i !== -1; i = text.indexOf('\n', i + 1)) n++;
+  return n + 1;
+}
+
+export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
+  const { db, pool } = deps;
+  const limits = deps.uploadLimits ?? defaultUploadLimits;
+  const rawUpload = express.raw({ type: () => true, limit: limits.bytes });
+
+  /** Reads the body as text and imports it on the pool; nothing is stored here. */
+  async function importUpload(req: express.Request, timeZone: string) {
+    const query = climateUploadQuerySchema.parse(req.query);
+    const bytes = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
+    if (bytes.byteLength === 0) {
+      throw new HttpError(422, 'empty_file', 'The file is empty. Choose an hourly weather file (CSV or other delimited text).');
+    }
+    const text = decodeClimateBytes(bytes);
+    const rows = countRows(text);
+    if (rows > limits.rows) {
+      throw new HttpError(
+        413,
+        'too_many_rows',
+        `The file has ${rows.toLocaleString('en')} lines; the limit is ${limits.rows.toLocaleString('en')}. Split it by period.`,
+      );
+    }
+    const result: ImportResult = await pool.run('importClimate', {
+      text,
+      options: { mapping: query.mapping, maxGapHours: query.maxGapHours, timeZone },
+    });
+    return { query, bytes, text, result };
+  }
+
+  function fileOr404(projectId: number, fileIdParam: unknown) {
+    const { fileId } = fileParams.parse({ fileId: fileIdParam });
+    const file = findClimateFile(db, projectId, fileId);
+    if (!file) throw new HttpError(404, 'not_found', `Climate file ${fileId} was not found in this project.`);
+    return file;
+  }
+
+  function seriesOf(fileId: number): ClimateSeries {
+    const series = loadClimateSeries(db, fileId);
+    if (!series) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
+    return series;
+  }
+
+  return [
+    route('get', '/projects/:projectId/climate-files', access.viewer, (req, res) => {
+      const rows = db
+        .select({ file: climateFiles, siteName: sites.name })
+        .from(climateFiles)
+        .innerJoin(sites, eq(sites.id, climateFiles.siteId))
+        .where(eq(climateFiles.projectId, req.projectId!))
+        .orderBy(desc(climateFiles.createdAt))
+        .all();
+      res.json({ climateFiles: rows.map(({ file, siteName }) => listing(file, siteName)) });
+    }),
+
+    route('post', '/projects/:projectId/sites/:siteId/climate-files/preview', access.engineer, rawUpload, async (req, res) => {
+      const { siteId } = siteParams.parse(req.params);
+      const site = findSite(deps, req.projectId!, siteId);
+      const { result, text } = await importUpload(req, site.timeZone);
+      const s = result.series;
+      const hours = s
+        ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
+            timestampMs: s.timestampsMs[i],
+            dryBulbC: nullIfNaN(s.dryBulbC[i]),
+            humidity: nullIfNaN(s.humidity.values[i]),
+            pressurePa: s.pressurePa ? nullIfNaN(s.pressurePa[i]) : null,
+            flag: s.flags[i],
+          }))
+        : [];
+      res.json({
+        ok: result.ok,
+        mapping: result.mapping,
+        report: result.report,
+        humidityKind: s?.humidity.kind ?? null,
+        firstLines: text.split(/\r?\n/, 12),
+        preview: hours,
+      });
+    }),
+
+    route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
+      const { siteId } = siteParams.parse(req.params);
+      const site = findSite(deps, req.projectId!, siteId);
+      const { query, bytes, result } = await importUpload(req, site.timeZone);
+      if (!result.ok || !result.series) {
+        throw new HttpError(422, 'import_rejected', result.report.summary, { report: result.report, mapping: result.mapping });
+      }
+      const row = saveClimateFile(db, {
+        projectId: req.projectId!,
+        siteId,
+        name: query.name ?? query.fileName.replace(/\.[^.]+$/, ''),
+        originalFileName: query.fileName,
+        bytes,
+        imported: { ...result, series: result.series },
+        createdBy: req.user?.id ?? null,
+      });
+      res.status(201).json({ climateFile: listing(row, site.name), report: result.report });
+    }),
+
+    route('get', '/projects/:projectId/climate-files/:fileId', access.viewer, async (req, res) => {
+      const file = fileOr404(req.projectId!, req.params.fileId);
+      const site = findSite(deps, req.projectId!, file.siteId);
+      const series = seriesOf(file.id);
+      const summary = await pool.run('summariseClimate', { series, elevationM: site.elevationM });
+      res.json({
+        climateFile: listing(file, site.name),
+        site,
+        mapping: JSON.parse(file.mappingJson),
+        report: JSON.parse(file.reportJson),
+        summary,
+      });
+    }),
+
+    route('get', '/projects/:projectId/climate-files/:fileId/hours', access.viewer, (req, res) => {
+      const file = fileOr404(req.projectId!, req.params.fileId);
+      const { year } = hoursQuery.parse(req.query);
+      const s = seriesOf(file.id);
+      let from = 0;
+      let to = s.timestampsMs.length;
+      if (year !== undefined) {
+        const start = Date.UTC(year, 0, 1);
+        const end = Date.UTC(year + 1, 0, 1);
+        from = s.timestampsMs.findIndex((t) => t >= start);
+        if (from < 0) from = to;
+        const after = s.timestampsMs.findIndex((t) => t >= end);
+        to = after < 0 ? to : after;
+      }
+      const pick = (a: Float64Array | null) => (a ? Array.from(a.subarray(from, to), round3) : null);
+      res.json({
+        humidityKind: s.humidity.kind,
+        timestampsMs: Array.from(s.timestampsMs.subarray(from, to)),
+        dryBulbC: pick(s.dryBulbC),
+        humidity: pick(s.humidity.values),
+        pressurePa: pick(s.pressurePa),
+        flags: Array.from(s.flags.subarray(from, to)),
+      });
+    }),
+
+    route('get', '/projects/:projectId/climate-files/:fileId/original', access.viewer, (req, res) => {
+      const file = fileOr404(req.projectId!, req.params.fileId);
+      const bytes = loadOriginal(db, file.id);
+      if (!bytes) throw new HttpError(404, 'not_found', 'The original file is not stored.');
+      res.attachment(file.originalFileName).type('application/octet-stream').send(bytes);
+    }),
+
+    route('get', '/projects/:projectId/climate-files/:fileId/hourly.csv', access.viewer, (req, res) => {
+      const file = fileOr404(req.projectId!, req.params.fileId);
+      const s = seriesOf(file.id);
+      res.attachment(`${file.name}-hourly.csv`).type('text/csv').send(hourlyCsv(s));
+    }),
+
+    route('delete', '/projects/:projectId/climate-files/:fileId', access.engineer, (req, res) => {
+      const file = fileOr404(req.projectId!, req.params.fileId);
+      db.delete(climateFiles).where(eq(climateFiles.id, file.id)).run();
+      res.status(204).end();
+    }),
+  ];
+}
+
+const canonicalHumidityColumn = {
+  'relative-humidity-pct': 'relative_humidity_pct',
+  'dew-point-c': 'dew_point_c',
+  'wet-bulb-c': 'wet_bulb_c',
+  'humidity-ratio-kgkg': 'humidity_ratio_gkg',
+} as const;
+
+const flagWords = ['measured', 'filled', 'missing'];
+
+/** The cleaned series in the command line's canonical columns, so it can be fed straight back in. */
+function hourlyCsv(s: ClimateSeries): string {
+  const humidityScale = s.humidity.kind === 'humidity-ratio-kgkg' ? 1000 : 1;
+  const header = ['timestamp', 'dry_bulb_c', canonicalHumidityColumn[s.humidity.kind], ...(s.pressurePa ? ['pressure_kpa'] : []), 'flag'];
+  const lines = [header.join(',')];
+  for (let i = 0; i < s.timestampsMs.length; i++) {
+    const cells = [
+      new Date(s.timestampsMs[i]).toISOString().replace('.000Z', 'Z'),
+      csvCell(round3(s.dryBulbC[i])),
+      csvCell(round3(s.humidity.values[i] * humidityScale)),
+      ...(s.pressurePa ? [csvCell(round3(s.pressurePa[i] / 1000))] : []),
+      flagWords[s.flags[i]] ?? 'missing',
+    ];
+    lines.push(cells.join(','));
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+function round3(v: number): number {
+  return Math.round(v * 1000) / 1000;
+}
+
+function nullIfNaN(v: number): number | null {
+  return v === v ? v : null;
+}
+
+function listing(file: typeof climateFiles.$inferSelect, siteName: string) {
+  const { mappingJson: _m, reportJson: _r, ...rest } = file;
+  return { ...rest, siteName };
+}

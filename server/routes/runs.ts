@@ -1,0 +1,145 @@
+import { and, desc, eq, inArray } from 'drizzle-orm';
+import { z } from 'zod';
+import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
+import { ENGINE_VERSION, MODE_NAMES } from '../../shared/scenario';
+import { standardOffsetMinutes } from '../../shared/time-zone';
+import type { AppDeps } from '../app';
+import { access, route, type RouteSpec } from '../auth/access';
+import { findClimateFile } from '../climate/store';
+import { runHours, runs, scenarios, sites } from '../db/schema';
+import { HttpError } from '../http-error';
+import { validScenario } from './scenarios';
+
+const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
+const maxRunsPerRequest = 200;
+
+/** One scenario on several climate files, several scenarios on one file, or any grid of both (a sweep). */
+const createRunsInput = z
+  .object({
+    scenarioIds: z.array(z.number().int().positive()).min(1, 'scenarioIds must name at least one scenario'),
+    climateFileIds: z.array(z.number().int().positive()).min(1, 'climateFileIds must name at least one climate file'),
+  })
+  .refine((r) => r.scenarioIds.length * r.climateFileIds.length <= maxRunsPerRequest, {
+    message: `at most ${maxRunsPerRequest} runs per request`,
+  });
+
+function present(row: typeof runs.$inferSelect) {
+  const { scenarioJson, climateJson, resultsJson, ...rest } = row;
+  return {
+    ...rest,
+    scenario: JSON.parse(scenarioJson),
+    climate: JSON.parse(climateJson),
+    results: resultsJson ? JSON.parse(resultsJson) : null,
+  };
+}
+
+export function runRoutes(deps: AppDeps): RouteSpec[] {
+  const { db, runQueue } = deps;
+
+  function runOr404(projectId: number, params: unknown) {
+    const { runId } = runParams.parse(params);
+    const row = db
+      .select()
+      .from(runs)
+      .where(and(eq(runs.id, runId), eq(runs.projectId, projectId)))
+      .get();
+    if (!row) throw new HttpError(404, 'not_found', `Run ${runId} was not found in this project.`);
+    return row;
+  }
+
+  return [
+    route('get', '/projects/:projectId/runs', access.viewer, (req, res) => {
+      // The listing leaves out the per-month tables; the run page fetches the whole run.
+      const rows = db.select().from(runs).where(eq(runs.projectId, req.projectId!)).orderBy(desc(runs.id)).all();
+      res.json({
+        runs: rows.map((row) => {
+          const run = present(row);
+          const r = run.results;
+          return { ...run, results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw } : null };
+        }),
+      });
+    }),
+
+    route('post', '/projects/:projectId/runs', access.engineer, (req, res) => {
+      const input = createRunsInput.parse(req.body);
+      const projectId = req.projectId!;
+      const scenarioRows = db
+        .select()
+        .from(scenarios)
+        .where(and(eq(scenarios.projectId, projectId), inArray(scenarios.id, input.scenarioIds)))
+        .all();
+      const chosen = input.scenarioIds.map((id) => {
+        const row = scenarioRows.find((s) => s.id === id);
+        if (!row) throw new HttpError(404, 'not_found', `Scenario ${id} was not found in this project.`);
+        return row;
+      });
+      const files = input.climateFileIds.map((id) => {
+        const file = findClimateFile(db, projectId, id);
+        if (!file) throw new HttpError(404, 'not_found', `Climate file ${id} was not found in this project.`);
+        const site = db.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
+        return { file, site };
+      });
+      const created = db.transaction((tx) =>
+        chosen.flatMap((scenarioRow) => {
+          const scenario = validScenario(JSON.parse(scenarioRow.scenarioJson));
+          return files.map(({ file, site }) =>
+            tx
+              .insert(runs)
+              .values({
+                projectId,
+                scenarioId: scenarioRow.id,
+                climateFileId: file.id,
+                scenarioJson: JSON.stringify(scenario),
+                climateJson: JSON.stringify({
+                  id: file.id,
+                  name: file.name,
+                  sha256: file.sha256,
+                  hours: file.hours,
+                  firstHourMs: file.firstHourMs,
+                  lastHourMs: file.lastHourMs,
+                  site: { id: site.id, name: site.name, elevationM: site.elevationM, timeZone: site.timeZone },
+                  elevationM: site.elevationM,
+                  utcOffsetMinutes: standardOffsetMinutes(site.timeZone),
+                }),
+                engineVersion: ENGINE_VERSION,
+                createdBy: req.user!.id,
+              })
+              .returning()
+              .get(),
+          );
+        }),
+      );
+      for (const run of created) runQueue.enqueue(run.id);
+      res.status(202).json({ runs: created.map(present) });
+    }),
+
+    route('get', '/projects/:projectId/runs/:runId', access.viewer, (req, res) => {
+      res.json({ run: present(runOr404(req.projectId!, req.params)) });
+    }),
+
+    route('get', '/projects/:projectId/runs/:runId/hours', access.viewer, (req, res) => {
+      const run = runOr404(req.projectId!, req.params);
+      const hours = db.select().from(runHours).where(eq(runHours.runId, run.id)).get();
+      if (!hours) throw new HttpError(409, 'not_ready', `Run ${run.id} is ${run.status}; its hours exist once it is done.`);
+      const fraction = decodeFloat64Column(hours.mechanicalFraction);
+      res.json({
+        modeNames: MODE_NAMES,
+        modes: Array.from(decodeUint8Column(hours.modes)),
+        mechanicalFraction: Array.from(fraction, (v) => Math.round(v * 1000) / 1000),
+      });
+    }),
+
+    route('post', '/projects/:projectId/runs/:runId/cancel', access.engineer, (req, res) => {
+      const run = runOr404(req.projectId!, req.params);
+      if (!runQueue.cancel(run.id)) throw new HttpError(409, 'not_cancellable', `Run ${run.id} is ${run.status} and cannot be cancelled.`);
+      res.json({ run: present(runOr404(req.projectId!, req.params)) });
+    }),
+
+    route('delete', '/projects/:projectId/runs/:runId', access.engineer, (req, res) => {
+      const run = runOr404(req.projectId!, req.params);
+      runQueue.cancel(run.id);
+      db.delete(runs).where(eq(runs.id, run.id)).run();
+      res.status(204).end();
+    }),
+  ];
+}

@@ -1,0 +1,100 @@
+import { and, desc, eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { parseScenario, type Scenario } from '../../shared/scenario';
+import { MODE_NAMES } from '../../shared/scenario';
+import { standardOffsetMinutes } from '../../shared/time-zone';
+import type { AppDeps } from '../app';
+import { access, route, type RouteSpec } from '../auth/access';
+import { findClimateFile, loadClimateSeries } from '../climate/store';
+import { scenarios, sites } from '../db/schema';
+import { HttpError } from '../http-error';
+
+const scenarioParams = z.object({ scenarioId: z.coerce.number().int().positive('scenarioId must be a positive whole number') });
+const previewInput = z.object({ scenario: z.unknown(), climateFileId: z.number().int().positive() });
+
+/** The scenario JSON checked by the shared schema; its problems come back as a 400 naming each field. */
+export function validScenario(input: unknown): Scenario {
+  const parsed = parseScenario(input);
+  if (!parsed.ok) throw new HttpError(400, 'invalid_scenario', parsed.errors.join('; '), { errors: parsed.errors });
+  return parsed.scenario;
+}
+
+function present(row: typeof scenarios.$inferSelect) {
+  const { scenarioJson, ...rest } = row;
+  return { ...rest, scenario: JSON.parse(scenarioJson) as Scenario };
+}
+
+export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
+  const { db, pool } = deps;
+
+  function scenarioOr404(projectId: number, params: unknown) {
+    const { scenarioId } = scenarioParams.parse(params);
+    const row = db
+      .select()
+      .from(scenarios)
+      .where(and(eq(scenarios.id, scenarioId), eq(scenarios.projectId, projectId)))
+      .get();
+    if (!row) throw new HttpError(404, 'not_found', `Scenario ${scenarioId} was not found in this project.`);
+    return row;
+  }
+
+  return [
+    route('get', '/projects/:projectId/scenarios', access.viewer, (req, res) => {
+      const rows = db.select().from(scenarios).where(eq(scenarios.projectId, req.projectId!)).orderBy(desc(scenarios.updatedAt)).all();
+      res.json({ scenarios: rows.map(present) });
+    }),
+    route('post', '/projects/:projectId/scenarios', access.engineer, (req, res) => {
+      const scenario = validScenario(req.body?.scenario);
+      const row = db
+        .insert(scenarios)
+        .values({ projectId: req.projectId!, name: scenario.name, scenarioJson: JSON.stringify(scenario), createdBy: req.user!.id })
+        .returning()
+        .get();
+      res.status(201).json({ scenario: present(row) });
+    }),
+    route('get', '/projects/:projectId/scenarios/:scenarioId', access.viewer, (req, res) => {
+      res.json({ scenario: present(scenarioOr404(req.projectId!, req.params)) });
+    }),
+    route('put', '/projects/:projectId/scenarios/:scenarioId', access.engineer, (req, res) => {
+      const existing = scenarioOr404(req.projectId!, req.params);
+      const scenario = validScenario(req.body?.scenario);
+      const row = db
+        .update(scenarios)
+        .set({ name: scenario.name, scenarioJson: JSON.stringify(scenario), updatedAt: new Date() })
+        .where(eq(scenarios.id, existing.id))
+        .returning()
+        .get();
+      res.json({ scenario: present(row) });
+    }),
+    route('post', '/projects/:projectId/scenarios/:scenarioId/duplicate', access.engineer, (req, res) => {
+      const existing = present(scenarioOr404(req.projectId!, req.params));
+      const copy = { ...existing.scenario, name: `${existing.scenario.name} (copy)`.slice(0, 120) };
+      const row = db
+        .insert(scenarios)
+        .values({ projectId: req.projectId!, name: copy.name, scenarioJson: JSON.stringify(copy), createdBy: req.user!.id })
+        .returning()
+        .get();
+      res.status(201).json({ scenario: present(row) });
+    }),
+    route('delete', '/projects/:projectId/scenarios/:scenarioId', access.engineer, (req, res) => {
+      const existing = scenarioOr404(req.projectId!, req.params);
+      db.delete(scenarios).where(eq(scenarios.id, existing.id)).run();
+      res.status(204).end();
+    }),
+    // Hours per mode while the scenario is being edited: computed on the pool, never stored.
+    route('post', '/projects/:projectId/scenarios/preview', access.engineer, async (req, res) => {
+      const input = previewInput.parse(req.body);
+      const scenario = validScenario(input.scenario);
+      const file = findClimateFile(db, req.projectId!, input.climateFileId);
+      if (!file) throw new HttpError(404, 'not_found', `Climate file ${input.climateFileId} was not found in this project.`);
+      const site = db.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
+      const series = loadClimateSeries(db, file.id)!;
+      const out = await pool.run('executeRun', {
+        scenario,
+        series,
+        options: { elevationM: site.elevationM, utcOffsetMinutes: standardOffsetMinutes(site.timeZone) },
+      });
+      res.json({ hours: out.results.hours, modes: MODE_NAMES, energy: out.results.energy, water: out.results.water });
+    }),
+  ];
+}

@@ -1,0 +1,149 @@
+import { and, eq, inArray } from 'drizzle-orm';
+import type { ClimateSeries } from '../../shared/climate';
+import type { Db } from '../db/client';
+import { runHours, runs } from '../db/schema';
+import { blob, loadClimateSeries } from '../climate/store';
+import type { WorkerPool } from '../../workers/pool';
+
+export interface RunQueueOptions {
+  db: Db;
+  pool: WorkerPool;
+  /** A run still going after this long is stopped and marked failed. */
+  timeoutMs?: number;
+  /** Told when a run ends in any state (notices, audit). */
+  onSettled?: (runId: number, status: 'done' | 'failed' | 'cancelled') => void;
+}
+
+export interface RunQueue {
+  enqueue(runId: number): void;
+  cancel(runId: number): boolean;
+  /** Puts back runs left queued or running by a previous process. */
+  resume(): number;
+  /** Resolves when nothing is waiting or running (tests, shutdown). */
+  idle(): Promise<void>;
+}
+
+interface RunSnapshotClimate {
+  elevationM: number;
+  utcOffsetMinutes: number;
+}
+
+/**
+ * Runs execute on the worker pool, at most one per pool thread at a time so a run's status says
+ * truthfully whether it is waiting or computing. State lives in the runs table, so a restart loses
+ * nothing: `resume()` re-queues what was pending.
+ */
+export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, onSettled }: RunQueueOptions): RunQueue {
+  const waiting: number[] = [];
+  const running = new Map<number, AbortController>();
+  let idleWaiters: Array<() => void> = [];
+
+  const settle = (runId: number, status: 'done' | 'failed' | 'cancelled') => onSettled?.(runId, status);
+
+  function pump(): void {
+    while (running.size < pool.threads && waiting.length > 0) {
+      const runId = waiting.shift()!;
+      void execute(runId);
+    }
+    if (running.size === 0 && waiting.length === 0) {
+      const waiters = idleWaiters;
+      idleWaiters = [];
+      for (const w of waiters) w();
+    }
+  }
+
+  async function execute(runId: number): Promise<void> {
+    const run = db.select().from(runs).where(eq(runs.id, runId)).get();
+    if (!run || run.status !== 'queued') return pump();
+    const controller = new AbortController();
+    running.set(runId, controller);
+    db.update(runs).set({ status: 'running', startedAt: new Date(), progress: 0.1 }).where(eq(runs.id, runId)).run();
+    const timer = setTimeout(() => controller.abort(new Error(`The run took longer than ${Math.round(timeoutMs / 1000)} s and was stopped.`)), timeoutMs);
+    try {
+      const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : loadClimateSeries(db, run.climateFileId);
+      if (!series) throw new Error('The climate file of this run was deleted before the run started.');
+      const climate = JSON.parse(run.climateJson) as RunSnapshotClimate;
+      const out = await pool.run(
+        'executeRun',
+        {
+          scenario: JSON.parse(run.scenarioJson),
+          series,
+          options: { elevationM: climate.elevationM, utcOffsetMinutes: climate.utcOffsetMinutes },
+        },
+        { signal: controller.signal },
+      );
+      const stored = db.transaction((tx) => {
+        const current = tx.select({ status: runs.status }).from(runs).where(eq(runs.id, runId)).get();
+        if (current?.status !== 'running') return false;
+        tx.insert(runHours)
+          .values({
+            runId,
+            modes: blob(out.modes),
+            mechanicalFraction: blob(out.mechanicalFraction),
+          })
+          .run();
+        tx.update(runs)
+          .set({ status: 'done', progress: 1, resultsJson: JSON.stringify(out.results), finishedAt: new Date() })
+          .where(eq(runs.id, runId))
+          .run();
+        return true;
+      });
+      if (stored) settle(runId, 'done');
+    } catch (error) {
+      const cancelled = controller.signal.aborted && controller.signal.reason === 'cancelled';
+      if (!cancelled) {
+        const message = controller.signal.aborted
+          ? String((controller.signal.reason as Error)?.message ?? controller.signal.reason)
+          : error instanceof Error
+            ? error.message
+            : String(error);
+        db.update(runs)
+          .set({ status: 'failed', error: message, finishedAt: new Date() })
+          .where(and(eq(runs.id, runId), eq(runs.status, 'running')))
+          .run();
+        settle(runId, 'failed');
+      }
+    } finally {
+      clearTimeout(timer);
+      running.delete(runId);
+      pump();
+    }
+  }
+
+  return {
+    enqueue(runId) {
+      waiting.push(runId);
+      pump();
+    },
+    cancel(runId) {
+      const changed = db
+        .update(runs)
+        .set({ status: 'cancelled', finishedAt: new Date() })
+        .where(and(eq(runs.id, runId), inArray(runs.status, ['queued', 'running'])))
+        .run().changes;
+      if (changed === 0) return false;
+      const index = waiting.indexOf(runId);
+      if (index >= 0) waiting.splice(index, 1);
+      running.get(runId)?.abort('cancelled');
+      settle(runId, 'cancelled');
+      pump();
+      return true;
+    },
+    resume() {
+      const pending = db
+        .select({ id: runs.id })
+        .from(runs)
+        .where(inArray(runs.status, ['queued', 'running']))
+        .orderBy(runs.id)
+        .all();
+      db.update(runs).set({ status: 'queued', progress: 0 }).where(eq(runs.status, 'running')).run();
+      for (const { id } of pending) waiting.push(id);
+      pump();
+      return pending.length;
+    },
+    idle() {
+      if (running.size === 0 && waiting.length === 0) return Promise.resolve();
+      return new Promise((resolve) => idleWaiters.push(resolve));
+    },
+  };
+}

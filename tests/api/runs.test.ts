@@ -1,0 +1,140 @@
+import { readFileSync } from 'node:fs';
+import request from 'supertest';
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { runs } from '../../server/db/schema';
+import { createRunQueue } from '../../server/runs/queue';
+import { createTestApp, type TestApp } from '../support/test-app';
+import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+
+const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
+const directAir = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+
+let t: TestApp;
+let engineer: TestPerson;
+let viewer: TestPerson;
+let projectId: number;
+let climateFileId: number;
+let scenarioId: number;
+
+beforeAll(async () => {
+  t = createTestApp();
+  engineer = personWithSession(t.db, 'maren.holt@example.test');
+  viewer = personWithSession(t.db, 'reviewer@example.test');
+  projectId = projectWithMembers(t.db, 'Run study', [
+    [engineer, 'engineer'],
+    [viewer, 'viewer'],
+  ]);
+  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Brackenfold', elevationM: 120 }).expect(201);
+  const file = await request(t.app)
+    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
+    .set(asPerson(engineer))
+    .set('content-type', 'text/csv')
+    .send(threeDays)
+    .expect(201);
+  climateFileId = file.body.climateFile.id;
+  const scenario = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: directAir }).expect(201);
+  scenarioId = scenario.body.scenario.id;
+});
+afterAll(() => t.close());
+
+describe('an engineer running a scenario', () => {
+  it('refuses a scenario with a bad field, naming it', async () => {
+    const bad = { ...directAir, system: { ...directAir.system, supplyAirC: 90 } };
+    const res = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: bad }).expect(400);
+    expect(res.body.error.message).toContain('supplyAirC');
+  });
+
+  it('previews hours per mode while editing, without storing a run', async () => {
+    const res = await request(t.app)
+      .post(`/api/projects/${projectId}/scenarios/preview`)
+      .set(asPerson(engineer))
+      .send({ scenario: directAir, climateFileId })
+      .expect(200);
+    const h = res.body.hours;
+    expect(h.free + h.adiabatic + h.mechanical + h.noData).toBe(72);
+    expect(t.db.select().from(runs).all()).toHaveLength(0);
+  });
+
+  it('queues a run that finishes on the pool with hours summing to the file', async () => {
+    const created = await request(t.app)
+      .post(`/api/projects/${projectId}/runs`)
+      .set(asPerson(engineer))
+      .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+      .expect(202);
+    const runId = created.body.runs[0].id;
+    expect(created.body.runs[0].status).toBe('queued');
+    await t.runQueue.idle();
+    const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}`).set(asPerson(viewer)).expect(200);
+    expect(res.body.run.status).toBe('done');
+    expect(res.body.run.engineVersion).toBeTypeOf('string');
+    expect(res.body.run.scenario.name).toBe(directAir.name);
+    expect(res.body.run.climate.sha256).toMatch(/^[0-9a-f]{64}$/);
+    const h = res.body.run.results.hours;
+    expect(h.total).toBe(72);
+    expect(h.free + h.adiabatic + h.mechanical + h.noData).toBe(72);
+    // The fixture never exceeds 22 °C dry-bulb, so with a 25 °C supply and 1 K fan heat no hour needs compressors
+    // for temperature; its moisture stays under the 17 °C dew-point limit, so none needs them for humidity either.
+    expect(h.mechanical).toBe(0);
+
+    const hours = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hours`).set(asPerson(viewer)).expect(200);
+    expect(hours.body.modes).toHaveLength(72);
+    expect(hours.body.modeNames).toEqual(['free', 'adiabatic', 'mechanical', 'no_data']);
+  });
+
+  it('keeps the run as it was when the scenario changes later', async () => {
+    const list = await request(t.app).get(`/api/projects/${projectId}/runs`).set(asPerson(viewer)).expect(200);
+    const before = list.body.runs[0];
+    await request(t.app)
+      .put(`/api/projects/${projectId}/scenarios/${scenarioId}`)
+      .set(asPerson(engineer))
+      .send({ scenario: { ...directAir, name: 'Renamed later', system: { ...directAir.system, supplyAirC: 20 } } })
+      .expect(200);
+    const after = await request(t.app).get(`/api/projects/${projectId}/runs/${before.id}`).set(asPerson(viewer)).expect(200);
+    expect(after.body.run.scenario.name).toBe(directAir.name);
+    expect(after.body.run.scenario.system.supplyAirC).toBe(25);
+  });
+
+  it('runs a sweep of scenarios and lets a queued run be cancelled', async () => {
+    const copy = await request(t.app).post(`/api/projects/${projectId}/scenarios/${scenarioId}/duplicate`).set(asPerson(engineer)).expect(201);
+    expect(copy.body.scenario.name).toBe('Renamed later (copy)');
+    const created = await request(t.app)
+      .post(`/api/projects/${projectId}/runs`)
+      .set(asPerson(engineer))
+      .send({ scenarioIds: [scenarioId, copy.body.scenario.id, scenarioId, scenarioId], climateFileIds: [climateFileId] })
+      .expect(202);
+    expect(created.body.runs).toHaveLength(4);
+    const last = created.body.runs[3].id;
+    const cancel = await request(t.app).post(`/api/projects/${projectId}/runs/${last}/cancel`).set(asPerson(engineer));
+    await t.runQueue.idle();
+    const statuses = t.db.select({ id: runs.id, status: runs.status }).from(runs).all();
+    if (cancel.status === 200) expect(statuses.find((r) => r.id === last)!.status).toBe('cancelled');
+    else expect(cancel.body.error.code).toBe('not_cancellable');
+    expect(statuses.filter((r) => r.id !== last).every((r) => r.status === 'done')).toBe(true);
+  });
+
+  it('picks up runs left pending when the server stopped', async () => {
+    const created = await request(t.app)
+      .post(`/api/projects/${projectId}/runs`)
+      .set(asPerson(engineer))
+      .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+      .expect(202);
+    await t.runQueue.idle();
+    const runId = created.body.runs[0].id;
+    // As if the process died mid-run: the row says running and nothing is computing it.
+    t.db.update(runs).set({ status: 'running', resultsJson: null }).where(eq(runs.id, runId)).run();
+    t.db.$client.prepare('delete from run_hours where run_id = ?').run(runId);
+    const restarted = createRunQueue({ db: t.db, pool: t.pool });
+    expect(restarted.resume()).toBe(1);
+    await restarted.idle();
+    expect(t.db.select({ status: runs.status }).from(runs).where(eq(runs.id, runId)).get()!.status).toBe('done');
+  });
+
+  it('refuses runs to a viewer', async () => {
+    await request(t.app)
+      .post(`/api/projects/${projectId}/runs`)
+      .set(asPerson(viewer))
+      .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+      .expect(403);
+  });
+});

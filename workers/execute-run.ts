@@ -1,0 +1,22 @@
+import { parseScenario, runScenario, type RunOptions, type ScenarioResults, type ScenarioSeries } from '../shared/scenario';
+
+export interface ExecuteRunInput {
+  /** Scenario JSON as stored; validated again here because a worker must not trust its caller. */
+  scenario: unknown;
+  series: ScenarioSeries;
+  options?: RunOptions;
+}
+
+export interface ExecuteRunOutput {
+  results: ScenarioResults;
+  modes: Uint8Array;
+  mechanicalFraction: Float64Array;
+}
+
+/** Piscina task: one run, returning the summary and the per-hour modes the run page draws. */
+export function executeRun({ scenario, series, options }: ExecuteRunInput): ExecuteRunOutput {
+  const parsed = parseScenario(scenario);
+  if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
+  const run = runScenario(parsed.scenario, series, options);
+  return { results: run.results, modes: run.classification.modes, mechanicalFraction: run.classification.mechanicalFraction };
+}
