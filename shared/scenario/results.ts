@@ -88,7 +88,8 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
   const total = new Float64Array(4);
   const byMonth = new Float64Array(12 * 4);
   const byHour = new Float64Array(24 * 4);
-  const yearIndex = new Map<number, { counts: Float64Array; coolingKwh: number; waterL: number }>();
+  type YearTotals = { counts: Float64Array; coolingKwh: number; waterL: number };
+  const yearIndex = new Map<number, YearTotals>();
   let fanKwh = 0;
   let compressorKwh = 0;
   let pumpKwh = 0;
@@ -106,7 +107,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
 
   const civil = { year: 0, month: 0, day: 0 };
   let currentDay = Number.NaN;
-  let year = { counts: new Float64Array(4), coolingKwh: 0, waterL: 0 };
+  let year: YearTotals = { counts: new Float64Array(4), coolingKwh: 0, waterL: 0 };
   let previousMs = Number.NaN;
 
   for (let i = 0; i < n; i++) {
