@@ -1,0 +1,85 @@
+import {
+  celsiusToFahrenheit,
+  enthalpySiToIpBtuPerLb,
+  fahrenheitToCelsius,
+  enthalpyIpToSiKJPerKg,
+  kelvinDifferenceToFahrenheit,
+  fahrenheitDifferenceToKelvin,
+  kgPerKgToGrainsPerLb,
+  grainsPerLbToKgPerKg,
+  pascalToInHg,
+  inHgToPascal,
+  metreToFoot,
+  footToMetre,
+} from '../../shared/units';
+import type { UnitSystem } from './unit-system';
+
+/**
+ * How each kind of quantity is shown in SI and in IP, and converted both ways. Values travel in SI
+ * (°C, K, kg/kg, kJ/kg, Pa, m, L); only what is shown changes with the unit system.
+ */
+export type QuantityKind = 'temperature' | 'temperatureDifference' | 'humidityRatio' | 'enthalpy' | 'pressure' | 'elevation' | 'water';
+
+interface Presentation {
+  unit: string;
+  digits: number;
+  fromSi: (v: number) => number;
+  toSi: (v: number) => number;
+}
+
+const US_GALLON_L = 3.785411784; // NIST SP 811 (2008), App. B: 1 US gallon = 3.785 411 784 L, exact.
+
+const identity = (v: number) => v;
+
+export const presentations: Record<QuantityKind, Record<UnitSystem, Presentation>> = {
+  temperature: {
+    SI: { unit: '°C', digits: 1, fromSi: identity, toSi: identity },
+    IP: { unit: '°F', digits: 1, fromSi: celsiusToFahrenheit, toSi: fahrenheitToCelsius },
+  },
+  temperatureDifference: {
+    SI: { unit: 'K', digits: 1, fromSi: identity, toSi: identity },
+    IP: { unit: '°F', digits: 1, fromSi: kelvinDifferenceToFahrenheit, toSi: fahrenheitDifferenceToKelvin },
+  },
+  humidityRatio: {
+    SI: { unit: 'g/kg', digits: 2, fromSi: (w) => w * 1000, toSi: (g) => g / 1000 },
+    IP: { unit: 'gr/lb', digits: 1, fromSi: kgPerKgToGrainsPerLb, toSi: grainsPerLbToKgPerKg },
+  },
+  enthalpy: {
+    SI: { unit: 'kJ/kg', digits: 1, fromSi: identity, toSi: identity },
+    IP: { unit: 'Btu/lb', digits: 2, fromSi: enthalpySiToIpBtuPerLb, toSi: enthalpyIpToSiKJPerKg },
+  },
+  pressure: {
+    SI: { unit: 'kPa', digits: 2, fromSi: (p) => p / 1000, toSi: (k) => k * 1000 },
+    IP: { unit: 'inHg', digits: 2, fromSi: pascalToInHg, toSi: inHgToPascal },
+  },
+  elevation: {
+    SI: { unit: 'm', digits: 0, fromSi: identity, toSi: identity },
+    IP: { unit: 'ft', digits: 0, fromSi: metreToFoot, toSi: footToMetre },
+  },
+  water: {
+    SI: { unit: 'm³', digits: 1, fromSi: (l) => l / 1000, toSi: (m3) => m3 * 1000 },
+    IP: { unit: 'US gal', digits: 0, fromSi: (l) => l / US_GALLON_L, toSi: (g) => g * US_GALLON_L },
+  },
+};
+
+export function unitOf(kind: QuantityKind, system: UnitSystem): string {
+  return presentations[kind][system].unit;
+}
+
+/** An SI value in the chosen system's unit, as a number. */
+export function toDisplay(kind: QuantityKind, system: UnitSystem, siValue: number): number {
+  return presentations[kind][system].fromSi(siValue);
+}
+
+/** A value typed in the chosen system's unit, back to SI. */
+export function fromDisplay(kind: QuantityKind, system: UnitSystem, shown: number): number {
+  return presentations[kind][system].toSi(shown);
+}
+
+/** "21.4 °C" or "70.5 °F"; an en dash for a missing value. */
+export function formatQuantity(kind: QuantityKind, system: UnitSystem, siValue: number | null | undefined, withUnit = true): string {
+  if (siValue === null || siValue === undefined || !Number.isFinite(siValue)) return '–';
+  const p = presentations[kind][system];
+  const text = p.fromSi(siValue).toLocaleString('en', { minimumFractionDigits: p.digits, maximumFractionDigits: p.digits });
+  return withUnit ? `${text} ${p.unit}` : text;
+}
