@@ -1,0 +1,125 @@
+/**
+ * The command line as other tools call it: spawned as a process on small files, checking exit
+ * codes, stdout JSON, stderr on bad input and the hourly CSV's columns and order.
+ */
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { afterAll, describe, expect, it } from 'vitest';
+import { tightPsychrolib as psy } from '../psychrometrics/reference-psychrolib';
+
+const root = path.resolve(import.meta.dirname, '../../..');
+const dir = mkdtempSync(path.join(tmpdir(), 'estimate-cli-'));
+afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+const file = (name: string, text: string): string => {
+  const full = path.join(dir, name);
+  writeFileSync(full, text);
+  return full;
+};
+
+/** The same command `npm run estimate` runs, without npm's start-up time. */
+function estimate(args: string[]) {
+  const result = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/estimate.ts', ...args], { cwd: root, encoding: 'utf8' });
+  return { code: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+const SCENARIO = path.join(root, 'sample-weather/scenarios/direct-air-a1.json');
+// Synthetic weather: a cool hour, a missing dry-bulb, a hot dry hour, a hot humid hour.
+const WEATHER = file(
+  'weather.csv',
+  'timestamp,dry_bulb_c,dew_point_c\n2021-07-01T00:00Z,20,10\n2021-07-01T01:00Z,,10\n2021-07-01T02:00Z,31,12\n2021-07-01T03:00Z,35,22\n',
+);
+const COLUMNS = 'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction';
+
+describe('estimate command line', { timeout: 30_000 }, () => {
+  it('prints one JSON summary and writes one CSV row per hour in file order', () => {
+    const hourly = path.join(dir, 'hourly.csv');
+    const r = estimate(['--weather', WEATHER, '--scenario', SCENARIO, '--hourly', hourly, '--max-gap-hours', '0']);
+    expect(r.stderr).toBe('');
+    expect(r.code).toBe(0);
+    const summary = JSON.parse(r.stdout);
+    expect(summary.hours).toEqual({ free: 1, adiabatic: 1, mechanical: 1, noData: 1, total: 4 });
+    expect(summary.energy.partialPue).toBeGreaterThan(1);
+    expect(summary.water.totalL).toBeGreaterThan(0);
+    const lines = readFileSync(hourly, 'utf8').trimEnd().split('\n');
+    expect(lines[0]).toBe(COLUMNS);
+    expect(lines).toHaveLength(5);
+    expect(lines.slice(1).map((line) => line.split(',').slice(0, 2))).toEqual([
+      ['2021-07-01T00:00Z', 'free'],
+      ['2021-07-01T01:00Z', 'no_data'],
+      ['2021-07-01T02:00Z', 'adiabatic'],
+      ['2021-07-01T03:00Z', 'mechanical'],
+    ]);
+    for (const line of lines.slice(1)) expect(line.split(',')).toHaveLength(9);
+    // 20 °C with a 10 °C dew point at the scenario's 120 m: humidity ratio from psychrolib (reference library).
+    const first = lines[1].split(',');
+    expect(first[4]).toBe('10.00');
+    expect(Number(first[6])).toBeCloseTo(psy.GetHumRatioFromTDewPoint(10, psy.GetStandardAtmPressure(120)) * 1000, 3);
+  });
+
+  it('runs through npm as documented', () => {
+    const r = spawnSync('npm', ['run', '--silent', 'estimate', '--', '--weather', WEATHER, '--scenario', SCENARIO], { cwd: root, encoding: 'utf8' });
+    expect(r.status).toBe(0);
+    expect(JSON.parse(r.stdout).hours.total).toBe(4);
+  });
+
+  it('takes a column mapping from flags for a layout it would not guess', () => {
+    const odd = file('odd.csv', 'when;temp;moist\n2021-07-01 00:00;20,5;10\n2021-07-01 01:00;21;10\n');
+    const r = estimate(['--weather', odd, '--scenario', SCENARIO, '--time', 'when', '--dry-bulb', 'temp:C', '--humidity', 'dew-point:moist:C', '--delimiter', 'semicolon', '--decimal', 'comma']);
+    expect(r.stderr).toBe('');
+    expect(JSON.parse(r.stdout).hours).toMatchObject({ free: 2, total: 2 });
+  });
+
+  it('exits 2 naming the missing flag', () => {
+    const r = estimate(['--scenario', SCENARIO]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/--weather FILE is required/);
+  });
+
+  it('exits 2 naming the scenario field and its allowed range', () => {
+    const bad = JSON.parse(readFileSync(SCENARIO, 'utf8'));
+    bad.system.supplyAirC = 99;
+    const r = estimate(['--weather', WEATHER, '--scenario', file('bad-scenario.json', JSON.stringify(bad))]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/system\.supplyAirC: must be a number from 5 to 45 °C \(got 99\)/);
+  });
+
+  it('exits 2 on a scenario that is not JSON', () => {
+    const r = estimate(['--weather', WEATHER, '--scenario', file('broken.json', '{ "name": ')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/not valid JSON/);
+  });
+
+  it('exits 2 when the weather file cannot be read', () => {
+    const r = estimate(['--weather', path.join(dir, 'nowhere.csv'), '--scenario', SCENARIO]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/cannot read \(ENOENT\)/);
+  });
+
+  it('exits non-zero with the importer report on weather it cannot use', () => {
+    const r = estimate(['--weather', file('header-only.csv', 'timestamp,dry_bulb_c,relative_humidity_pct\n'), '--scenario', SCENARIO]);
+    expect(r.code).not.toBe(0);
+    expect(r.stdout).toBe('');
+    expect(r.stderr.length).toBeGreaterThan(10);
+  });
+
+  it('exits 2 on an elevation out of range or an unknown flag', () => {
+    expect(estimate(['--weather', WEATHER, '--scenario', SCENARIO, '--elevation', 'high']).stderr).toMatch(/--elevation must be a number from -500 to 6000/);
+    const unknown = estimate(['--weather', WEATHER, '--scenario', SCENARIO, '--colour', 'blue']);
+    expect(unknown.code).toBe(2);
+    expect(unknown.stderr).toMatch(/colour/);
+  });
+
+  it('uses --elevation for the pressure when the weather has none', () => {
+    const low = JSON.parse(estimate(['--weather', WEATHER, '--scenario', SCENARIO]).stdout);
+    const high = JSON.parse(estimate(['--weather', WEATHER, '--scenario', SCENARIO, '--elevation', '2000']).stdout);
+    expect(high.site).toMatchObject({ elevationM: 2000, pressureSource: 'elevation' });
+    // Same dew point at lower pressure holds more water per kg of dry air (ASHRAE 2017 ch. 1 eq. 20).
+    expect(high.envelope.highHumidityRatioGPerKg).toBeGreaterThan(low.envelope.highHumidityRatioGPerKg);
+    // A1 derating: 1 K per 300 m above 900 m (recalled from memory) → 32 − 1100/300.
+    expect(high.envelope.dryBulbMaxC).toBeCloseTo(32 - 1100 / 300, 9);
+  });
+});
