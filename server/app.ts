@@ -4,12 +4,22 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import type { Db } from './db/client';
 import type { RunQueue } from './runs/queue';
-import { loadSession } from './auth/session';
+import { loadSession, type Clock, type SessionPolicy } from './auth/session';
+import { refuseCrossSite } from './auth/csrf';
+import type { OidcClient } from './auth/oidc';
+import type { Mailer } from './mail/mailer';
+import type { Mailbox } from './mail/fake-smtp';
 import { mountRoutes, type RouteSpec } from './auth/access';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
 import { seriesToolRoutes } from './routes/series-tools';
+import { authRoutes } from './routes/auth';
+import { meRoutes } from './routes/me';
+import { memberRoutes } from './routes/members';
+import { inviteRoutes } from './routes/invites';
+import { auditRoutes } from './routes/audit';
+import { mailboxRoutes } from './routes/mailbox';
 import { siteRoutes } from './routes/sites';
 import { climateFileRoutes } from './routes/climate-files';
 import { envelopeRoutes } from './routes/envelopes';
@@ -27,6 +37,21 @@ export interface AppDeps {
   /** Vite dev middleware, in development. */
   devMiddleware?: express.RequestHandler;
   logError?: (error: unknown) => void;
+  /** The sign-in provider; without it sign-in answers 503 (API tests that make sessions directly need none). */
+  oidc?: OidcClient;
+  /** Outgoing mail (invitations, run notices); without it inviting answers 503. */
+  mailer?: Mailer;
+  /** The local fake SMTP server's catch, shown to admins; only in the default set-up. */
+  mailbox?: Mailbox;
+  /** Signs invitation links; keep it across restarts or outstanding links stop working. Random per app when absent. */
+  secret?: Uint8Array;
+  /** The address people open the app at, for links in e-mails (`https://tramontane.firm.example`). */
+  publicUrl?: string;
+  clock?: Clock;
+  sessionPolicy?: SessionPolicy;
+  inviteLifetimeMs?: number;
+  /** Sign-in and callback requests allowed per address per window. */
+  signInRateLimit?: { limit: number; windowMs: number };
 }
 
 /** Every API route with its access rule; the role-matrix test walks this same list. */
@@ -40,6 +65,12 @@ export function apiRoutes(deps: AppDeps): RouteSpec[] {
     ...envelopeRoutes(deps),
     ...scenarioRoutes(deps),
     ...runRoutes(deps),
+    ...authRoutes(deps),
+    ...meRoutes(deps),
+    ...memberRoutes(deps),
+    ...inviteRoutes(deps),
+    ...auditRoutes(deps),
+    ...mailboxRoutes(deps),
   ];
 }
 
@@ -51,7 +82,8 @@ export function createApp(deps: AppDeps): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '20mb' }));
-  api.use(loadSession(deps.db));
+  api.use(loadSession(deps.db, { clock: deps.clock, policy: deps.sessionPolicy }));
+  api.use(refuseCrossSite);
   mountRoutes(api, deps.db, apiRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);

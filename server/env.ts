@@ -9,6 +9,40 @@ const envSchema = z.object({
   TRAMONTANE_DATA_DIR: z.string().min(1).default('./data'),
   /** Worker threads for the hour classifier; 0 means one per core. */
   TRAMONTANE_WORKERS: z.coerce.number().int().min(0).max(256).default(0),
+  /** The address people open the app at; links in e-mails and the sign-in callback are built from it. */
+  TRAMONTANE_PUBLIC_URL: z.string().url().optional(),
+  /** Signs invitation links; when unset a random one is made once and kept in the data folder. */
+  TRAMONTANE_SECRET: z.string().min(32, 'TRAMONTANE_SECRET must be at least 32 characters').optional(),
+
+  /** A real OpenID Connect provider. Unset: the local fake provider starts with the app. */
+  OIDC_ISSUER: z.string().url().optional(),
+  OIDC_CLIENT_ID: z.string().min(1).optional(),
+  OIDC_CLIENT_SECRET: z.string().min(1).optional(),
+  /** Defaults to <public URL>/api/auth/callback; register exactly this URL with the provider. */
+  OIDC_REDIRECT_URL: z.string().url().optional(),
+  /** Port of the local fake provider when no OIDC_ISSUER is set. Kept fixed because people are linked to its issuer URL. */
+  FAKE_OIDC_PORT: z.coerce.number().int().min(0).max(65_535).default(3001),
+
+  /** A real SMTP server. Unset: the local fake SMTP server starts with the app and admins read its mailbox. */
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65_535).default(587),
+  /** true: TLS from the first byte (usually port 465); false: STARTTLS, which is then required. */
+  SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  SMTP_USER: z.string().min(1).optional(),
+  SMTP_PASSWORD: z.string().min(1).optional(),
+  MAIL_FROM: z.string().min(3).default('Tramontane <tramontane@localhost>'),
+  /** Port of the local fake SMTP server when no SMTP_HOST is set. */
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65_535).default(2525),
+}).superRefine((env, ctx) => {
+  if (env.OIDC_ISSUER && !env.OIDC_CLIENT_ID) {
+    ctx.addIssue({ code: 'custom', path: ['OIDC_CLIENT_ID'], message: 'OIDC_CLIENT_ID is required when OIDC_ISSUER is set' });
+  }
+  if (!env.OIDC_ISSUER && (env.OIDC_CLIENT_ID || env.OIDC_CLIENT_SECRET)) {
+    ctx.addIssue({ code: 'custom', path: ['OIDC_ISSUER'], message: 'OIDC_ISSUER is required when OIDC_CLIENT_ID or OIDC_CLIENT_SECRET is set' });
+  }
+  if (!env.SMTP_HOST && (env.SMTP_USER || env.SMTP_PASSWORD)) {
+    ctx.addIssue({ code: 'custom', path: ['SMTP_HOST'], message: 'SMTP_HOST is required when SMTP_USER or SMTP_PASSWORD is set' });
+  }
 });
 
 export type Env = z.infer<typeof envSchema> & { databaseFile: string };

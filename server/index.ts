@@ -6,6 +6,7 @@ import { createApp } from './app';
 import { appRoot, clientDistFolder } from './paths';
 import { createWorkerPool } from '../workers/pool';
 import { createRunQueue } from './runs/queue';
+import { startAuthRuntime } from './auth/runtime';
 
 async function main(): Promise<void> {
   const env = loadEnv();
@@ -25,7 +26,9 @@ async function main(): Promise<void> {
     closeVite = () => vite.close();
   }
 
-  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware });
+  const auth = await startAuthRuntime(env, (line) => console.log(line));
+
+  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, ...auth.deps });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : env.PORT;
@@ -39,7 +42,7 @@ async function main(): Promise<void> {
     console.log(`${signal}: stopping`);
     server.close();
     server.closeIdleConnections();
-    await Promise.allSettled([pool.destroy(), closeVite()]);
+    await Promise.allSettled([pool.destroy(), closeVite(), auth.close()]);
     db.$client.close();
     process.exit(0);
   };
