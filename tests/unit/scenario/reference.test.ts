@@ -1,0 +1,162 @@
+/**
+ * The engine against an independent calculation: the classification rules of the scenario issue
+ * written again here, hour by hour, on psychrolib's moist-air states (the reference library
+ * implementing ASHRAE Handbook—Fundamentals 2017 ch. 1), for three synthetic climates and all
+ * three system kinds. Agreement is expected to the last hour except where an hour sits within
+ * the libraries' tolerance (wet-bulb 0.005 K) of a threshold.
+ */
+import { describe, expect, it } from 'vitest';
+import { MODE, runScenario, type Scenario, type ScenarioSeries } from '../../../shared/scenario';
+import { makeScenario, psy } from './fixtures';
+
+/** mulberry32: a small deterministic generator, so the synthetic climates are the same every run. */
+function random(seed: number): () => number {
+  let a = seed;
+  return () => {
+    a = (a + 0x6d2b79f5) | 0;
+    let t = Math.imul(a ^ (a >>> 15), 1 | a);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
+  };
+}
+
+interface Climate {
+  name: string;
+  elevationM: number;
+  meanC: number;
+  seasonalK: number;
+  dailyK: number;
+  rhMean: number;
+  rhSpread: number;
+}
+
+// Synthetic climates (invented, for tests only): mild maritime, hot humid, hot dry at altitude.
+const CLIMATES: Climate[] = [
+  { name: 'mild maritime (synthetic)', elevationM: 20, meanC: 11, seasonalK: 7, dailyK: 4, rhMean: 78, rhSpread: 15 },
+  { name: 'hot humid (synthetic)', elevationM: 10, meanC: 22, seasonalK: 7, dailyK: 5, rhMean: 65, rhSpread: 30 },
+  { name: 'hot dry at altitude (synthetic)', elevationM: 1600, meanC: 20, seasonalK: 10, dailyK: 8, rhMean: 25, rhSpread: 15 },
+];
+
+const HOURS = 24 * 365;
+const STEP = 4; // every 4th hour of a year: 2190 hours, all seasons and times of day
+
+function makeSeries(climate: Climate, seed: number): ScenarioSeries {
+  const next = random(seed);
+  const n = HOURS / STEP;
+  const series: ScenarioSeries = {
+    timestampsMs: new Float64Array(n),
+    dryBulbC: new Float64Array(n),
+    humidity: { kind: 'relative-humidity-pct', values: new Float64Array(n) },
+    pressurePa: null,
+  };
+  for (let k = 0; k < n; k++) {
+    const i = k * STEP + (k % STEP);
+    const day = i / 24;
+    const hour = i % 24;
+    const daily = Math.sin((2 * Math.PI * (hour - 9)) / 24);
+    series.timestampsMs[k] = Date.UTC(2021, 0, 1) + i * 3_600_000;
+    series.dryBulbC[k] = climate.meanC - climate.seasonalK * Math.cos((2 * Math.PI * (day - 20)) / 365) + climate.dailyK * daily + 3 * (next() - 0.5);
+    series.humidity.values[k] = Math.min(100, Math.max(3, climate.rhMean - 0.6 * climate.rhSpread * daily + climate.rhSpread * (next() - 0.5)));
+  }
+  return series;
+}
+
+interface ReferenceHour {
+  mode: number;
+  fraction: number;
+}
+
+const h = (t: number, w: number) => psy.GetMoistAirEnthalpy(t, w) / 1000;
+const wbLine = (t: number, twb: number, p: number) => psy.GetHumRatioFromTWetBulb(t, twb, p);
+const clamp01 = (x: number) => Math.min(1, Math.max(0, x));
+
+/** The issue's rules for one hour, on psychrolib states. */
+function referenceHour(scenario: Scenario, t: number, w: number, twb: number, p: number): ReferenceHour {
+  const s = scenario.system;
+  const e = scenario.envelope;
+  const Ts = s.supplyAirC;
+  const f = s.fanHeatK;
+  const eps = s.evaporativeEffectiveness;
+  const Tr = Ts + s.itDeltaTK;
+  if (s.kind === 'direct-air') {
+    const wHi = Math.min(psy.GetHumRatioFromTDewPoint(e.dewPointMaxC, p), psy.GetHumRatioFromRelHum(Ts, e.rhMaxPct / 100, p));
+    const wLo = Math.max(psy.GetHumRatioFromTDewPoint(e.dewPointMinC, p), psy.GetHumRatioFromRelHum(Ts, e.rhMinPct / 100, p));
+    const offCoil = Ts - f;
+    let mode: number;
+    if (w > wHi) mode = MODE.mechanical;
+    else if (t + f <= Ts) mode = w >= wLo || eps === 0 ? MODE.free : MODE.adiabatic;
+    else if (eps > 0 && t - eps * (t - twb) <= offCoil && wbLine(offCoil, twb, p) <= wHi) mode = MODE.adiabatic;
+    else mode = MODE.mechanical;
+    if (mode !== MODE.mechanical) return { mode, fraction: 0 };
+    const hallW = Math.min(w, wHi);
+    const recirculation = h(Tr, hallW) - h(offCoil, hallW);
+    let outdoor: number;
+    if (w <= wHi) {
+      let tIn = t;
+      let wIn = w;
+      if (eps > 0 && wbLine(t - eps * (t - twb), twb, p) <= wHi) {
+        tIn = t - eps * (t - twb);
+        wIn = wbLine(tIn, twb, p);
+      }
+      outdoor = h(tIn, wIn) - h(offCoil, wIn);
+    } else {
+      const tDew = psy.GetTDewPointFromHumRatio(Ts, wHi, p);
+      outdoor = ((Tr - offCoil) / (Tr - tDew)) * (h(t, w) - h(tDew, wHi));
+    }
+    return { mode, fraction: clamp01(Math.min(outdoor, recirculation) / recirculation) };
+  }
+  if (s.kind === 'indirect-air') {
+    const supply = (scavenger: number) => Tr - s.heatExchangerEffectiveness * (Tr - scavenger) + f;
+    if (supply(t) <= Ts) return { mode: MODE.free, fraction: 0 };
+    const wet = supply(t - eps * (t - twb));
+    if (eps > 0 && wet <= Ts) return { mode: MODE.adiabatic, fraction: 0 };
+    const best = eps > 0 ? wet : supply(t);
+    return { mode: MODE.mechanical, fraction: best >= Tr + f ? 1 : (best - Ts) / (Tr + f - Ts) };
+  }
+  const tower = s.heatRejection === 'cooling-tower';
+  const water = (tower ? twb : t) + s.approachK;
+  if (water <= s.chilledWaterSupplyC) return { mode: MODE.free, fraction: 0 };
+  if (tower || eps === 0) return { mode: MODE.mechanical, fraction: clamp01((water - s.chilledWaterSupplyC) / s.chilledWaterDeltaTK) };
+  const wetWater = t - eps * (t - twb) + s.approachK;
+  if (wetWater <= s.chilledWaterSupplyC) return { mode: MODE.adiabatic, fraction: 0 };
+  return { mode: MODE.mechanical, fraction: clamp01((wetWater - s.chilledWaterSupplyC) / s.chilledWaterDeltaTK) };
+}
+
+const SCENARIOS: Record<string, (elevationM: number) => Scenario> = {
+  'direct-air': (elevationM) => makeScenario('direct-air', { elevationM, system: { supplyAirC: 24, evaporativeEffectiveness: 0.8 } }),
+  'direct-air, no evaporative stage': (elevationM) => makeScenario('direct-air', { elevationM, system: { evaporativeEffectiveness: 0 } }),
+  'indirect-air': (elevationM) => makeScenario('indirect-air', { elevationM, system: { evaporativeEffectiveness: 0.75, heatExchangerEffectiveness: 0.65 } }),
+  'water-side dry cooler': (elevationM) => makeScenario('water-side', { elevationM, system: { heatRejection: 'dry-cooler', evaporativeEffectiveness: 0.7 } }),
+  'water-side cooling tower': (elevationM) => makeScenario('water-side', { elevationM, system: { heatRejection: 'cooling-tower', evaporativeEffectiveness: 0 } }),
+};
+
+describe.each(CLIMATES.map((c, i) => [c.name, c, i] as const))('%s', (_name, climate, index) => {
+  const series = makeSeries(climate, 17 + index);
+  const p = psy.GetStandardAtmPressure(climate.elevationM);
+  const reference = Array.from(series.dryBulbC, (t, k) => {
+    const w = psy.GetHumRatioFromRelHum(t, series.humidity.values[k] / 100, p);
+    return { t, w, twb: psy.GetTWetBulbFromHumRatio(t, w, p) };
+  });
+
+  it.each(Object.keys(SCENARIOS))('%s agrees with the independent calculation', (key) => {
+    const scenario = SCENARIOS[key](climate.elevationM);
+    const run = runScenario(scenario, series);
+    let modeMismatches = 0;
+    let maxFractionError = 0;
+    const counts = [0, 0, 0, 0];
+    reference.forEach(({ t, w, twb }, k) => {
+      const expected = referenceHour(scenario, t, w, twb, p);
+      counts[expected.mode]++;
+      if (run.classification.modes[k] !== expected.mode) modeMismatches++;
+      else maxFractionError = Math.max(maxFractionError, Math.abs(run.classification.mechanicalFraction[k] - expected.fraction));
+    });
+    if (process.env.SHOW_COUNTS) console.log(climate.name, key, counts, modeMismatches, maxFractionError);
+    // At most 1 hour in 1000 may fall on the other side of a threshold through library tolerances.
+    expect(modeMismatches).toBeLessThanOrEqual(Math.ceil(reference.length / 1000));
+    expect(maxFractionError).toBeLessThan(1e-3);
+    expect(run.results.hours.noData).toBe(0);
+    // Each climate and design exercises at least two modes, so agreement is not trivial.
+    expect(counts.filter((c) => c > 0).length).toBeGreaterThanOrEqual(2);
+    expect(Math.abs(run.results.hours.mechanical - counts[MODE.mechanical])).toBeLessThanOrEqual(Math.ceil(reference.length / 1000));
+  });
+});
