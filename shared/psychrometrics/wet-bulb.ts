@@ -3,7 +3,7 @@
  * (2017) ch. 1: eq. 33 over liquid water (t* ≥ 0 °C) and eq. 35 over ice (t* < 0 °C), with the
  * saturation humidity ratio at t* from eq. 23 and Hyland–Wexler pws.
  */
-import { FREEZING_POINT_C, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO } from './constants';
+import { FREEZING_POINT_C, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO, TRIPLE_POINT_C } from './constants';
 import { dLnSaturationPressure, lnSaturationPressure, temperatureAtLnSaturation } from './saturation';
 import { vapourPressureFromHumidityRatioUnchecked } from './moisture';
 import {
@@ -36,19 +36,16 @@ export function humidityRatioFromWetBulbUnchecked(tC: number, wetBulbC: number, 
     : ((A_ICE - B_ICE * wetBulbC) * wsStar - 1.006 * (tC - wetBulbC)) / (A_ICE + 1.86 * tC - C_ICE * wetBulbC);
 }
 
-/** W on eq. 35 (ice) and on eq. 33 (water) at t* = 0 °C, where the two forms meet; ice gives the higher W. */
-function humidityRatiosAtFreezing(tC: number, pressurePa: number): { ice: number; water: number } {
+/** W by eq. 35 (ice, a = 2830) or eq. 33 (water, a = 2501) at t* = 0 °C, where the two forms meet; ice gives the higher W. */
+function humidityRatioAtFreezing(tC: number, pressurePa: number, a: number): number {
   const wsStar0 = (MOLAR_MASS_RATIO * PWS_AT_0C) / (pressurePa - PWS_AT_0C);
-  return {
-    ice: (A_ICE * wsStar0 - 1.006 * tC) / (A_ICE + 1.86 * tC),
-    water: (A_WATER * wsStar0 - 1.006 * tC) / (A_WATER + 1.86 * tC),
-  };
+  return (a * wsStar0 - 1.006 * tC) / (a + 1.86 * tC);
 }
 
 /**
  * Root of the psychrometric equation for t* in [lo, hi], where W(lo) ≤ humidityRatio ≤ W(hi), starting
  * from `guess`. Newton's method on the exact equation, with the bracket as a guard: a step that leaves
- * it is replaced by halving. Stops at 1e-9 K.
+ * it is replaced by halving. Stops within about 1e-5 K of the root.
  */
 function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo: number, hi: number, guess: number): number {
   let t = guess > lo && guess < hi ? guess : 0.5 * (lo + hi);
@@ -79,9 +76,17 @@ function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo:
     if (f > 0) hi = t;
     else lo = t;
     const df = ((-b * ws + (a - b * t) * dWs + 1.006) * den + c * num) / (den * den);
-    let next = t - f / df;
-    if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (Math.abs(next - t) < 1e-9 || hi - lo < 1e-9) return next;
+    const step = f / df;
+    let next = t - step;
+    if (next > lo && next < hi) {
+      // Quadratic convergence: after a Newton step of size s the error is about c·s² with
+      // c = f''/(2f') < 0.06 /K here, so a step below 0.01 K leaves less than 1e-5 K — provided the
+      // step stays on one branch: f has kinks at 0 °C (eq. 33/35) and 0.01 °C (pws over ice/water).
+      if (Math.abs(step) < 0.01 && (t - TRIPLE_POINT_C) * (next - TRIPLE_POINT_C) > 0 && t * next > 0) return next;
+    } else {
+      next = 0.5 * (lo + hi);
+      if (hi - lo < 1e-9) return next;
+    }
     t = next;
   }
   return t;
@@ -102,18 +107,20 @@ export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: 
   let hi = tC;
   if (!(hi > lo)) return hi === lo ? tC : Number.NaN;
   if (lo < FREEZING_POINT_C && hi > FREEZING_POINT_C) {
-    if (humidityRatio <= humidityRatiosAtFreezing(tC, pressurePa).ice) hi = FREEZING_POINT_C;
+    if (humidityRatio <= humidityRatioAtFreezing(tC, pressurePa, A_ICE)) hi = FREEZING_POINT_C;
     else lo = FREEZING_POINT_C;
   }
   let guess = Number.NaN;
   if (dewPointC === dewPointC) {
-    // Linearised psychrometric equation about the dew point: L·s·x = cpm·(t − td − x).
+    // Psychrometric equation simplified to L·(Ws* − W) = cpm·(t − t*), with Ws* about the dew point
+    // as W·exp(k·x) ≈ W·(1 + k·x + k²x²/2), x = t* − td, k = d ln Ws/dT at td: a quadratic in x.
     const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
-    const dp = pressurePa - pw;
-    const slope = (MOLAR_MASS_RATIO * pressurePa * pw * dLnSaturationPressure(dewPointC)) / (dp * dp);
+    const k = (dLnSaturationPressure(dewPointC) * pressurePa) / (pressurePa - pw);
     const cpm = 1.006 + 1.86 * humidityRatio;
-    const latent = dewPointC >= FREEZING_POINT_C ? A_WATER - B_WATER * dewPointC : A_ICE - B_ICE * dewPointC;
-    guess = dewPointC + (cpm * (tC - dewPointC)) / (latent * slope + cpm);
+    const latentW = (dewPointC >= FREEZING_POINT_C ? A_WATER - B_WATER * dewPointC : A_ICE - B_ICE * dewPointC) * humidityRatio;
+    const a1 = latentW * k + cpm;
+    const depression = tC - dewPointC;
+    guess = dewPointC + (2 * cpm * depression) / (a1 + Math.sqrt(a1 * a1 + 2 * latentW * k * k * cpm * depression));
   }
   return solveWetBulb(tC, humidityRatio, pressurePa, lo, hi, guess);
 }
@@ -128,8 +135,9 @@ export function wetBulbRootsNearFreezing(tC: number, humidityRatio: number, pres
   requireHumidityRatio('humidityRatio', humidityRatio);
   requirePressurePa('pressurePa', pressurePa);
   if (!(tC > FREEZING_POINT_C)) return null;
-  const atFreezing = humidityRatiosAtFreezing(tC, pressurePa);
-  if (!(humidityRatio > atFreezing.water && humidityRatio <= atFreezing.ice)) return null;
+  const ice0 = humidityRatioAtFreezing(tC, pressurePa, A_ICE);
+  const water0 = humidityRatioAtFreezing(tC, pressurePa, A_WATER);
+  if (!(humidityRatio > water0 && humidityRatio <= ice0)) return null;
   const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
   const dewPointC = pw > 0 ? temperatureAtLnSaturation(Math.log(pw)) : MIN_TEMPERATURE_C;
   return {
