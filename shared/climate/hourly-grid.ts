@@ -146,19 +146,24 @@ export interface GapSummary {
   longestGapHours: number;
 }
 
+/** Fills NaN cells strictly between `before` and `after` linearly between their nearest finite neighbours. */
 function interpolate(values: Float64Array, before: number, after: number): void {
-  const a = values[before];
-  const b = values[after];
-  const span = after - before;
-  for (let h = before + 1; h < after; h++) {
-    if (values[h] !== values[h]) values[h] = a + ((b - a) * (h - before)) / span;
+  let known = before;
+  for (let h = before + 1; h <= after; h++) {
+    if (values[h] !== values[h]) continue;
+    if (h - known > 1) {
+      const a = values[known];
+      const slope = (values[h] - a) / (h - known);
+      for (let k = known + 1; k < h; k++) values[k] = a + slope * (k - known);
+    }
+    known = h;
   }
 }
 
 /**
  * Flags each hour and repairs runs of incomplete hours: a run of at most maxGapHours between
- * two complete hours is filled by linear interpolation in time (measured cells inside it are
- * kept), a longer run is set missing with every value NaN. The grid must start and end on a
+ * two complete hours is filled by linear interpolation in time, each quantity between its nearest
+ * measured values (measured cells inside the run are kept), a longer run is set missing with every value NaN. The grid must start and end on a
  * complete hour (trimToCompleteHours). Runs are returned for the report (at most `listRuns`).
  */
 export function fillGaps(grid: HourGrid, maxGapHours: number, listRuns = 200): GapSummary {

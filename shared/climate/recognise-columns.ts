@@ -81,7 +81,8 @@ function detectTime(sample: Sample, parts: (TimePart | null)[]): TimeMapping | n
   }
   if (iso !== -1) {
     const canonical = sample.headers[iso].trim().toLowerCase() === 'timestamp' && isDateTime[iso] === 1;
-    const withOffset = share(cells[iso], (cell) => !Number.isNaN(parseDateTimeCell(cell, orders[iso])) && !Number.isNaN(lastParse.offsetMinutes));
+    const readable = cells[iso].filter((cell) => !Number.isNaN(parseDateTimeCell(cell, orders[iso])));
+    const withOffset = share(readable, (cell) => !Number.isNaN(parseDateTimeCell(cell, orders[iso])) && !Number.isNaN(lastParse.offsetMinutes));
     const offsetWords = withOffset === 1 ? 'with a UTC offset or Z' : withOffset > 0 ? 'with an offset on some rows' : 'without offset (local time)';
     return {
       layout: 'iso',
