@@ -47,11 +47,8 @@ export function timeOrder(rows: RowColumns): Uint32Array | null {
   return order.sort((a, b) => t[a] - t[b] || a - b);
 }
 
-/**
- * Averages the rows into hours [floor((t + shiftMs) / 1 h)], between the first and last hour
- * holding a row. NaN cells do not count in an hour's mean; an hour with none stays NaN.
- */
-export function averageToHours(rows: RowColumns, shiftMs: number): HourGrid {
+/** First and last hour (UTC ms / 1 h, after shiftMs) holding a row; NaN when there is none. */
+export function hourRange(rows: RowColumns, shiftMs: number): { first: number; last: number } {
   let first = Infinity;
   let last = -Infinity;
   for (let i = 0; i < rows.count; i++) {
@@ -60,7 +57,17 @@ export function averageToHours(rows: RowColumns, shiftMs: number): HourGrid {
     if (hour < first) first = hour;
     if (hour > last) last = hour;
   }
-  const hours = Number.isFinite(first) ? last - first + 1 : 0;
+  return Number.isFinite(first) ? { first, last } : { first: NaN, last: NaN };
+}
+
+/**
+ * Averages the rows into hours [floor((t + shiftMs) / 1 h)] over the range from hourRange (the
+ * caller checks its length first: the grid is allocated whole). NaN cells do not count in an
+ * hour's mean; an hour with none stays NaN.
+ */
+export function averageToHours(rows: RowColumns, shiftMs: number, range: { first: number; last: number }): HourGrid {
+  const first = range.first;
+  const hours = Number.isFinite(first) ? range.last - first + 1 : 0;
   const sumDry = new Float64Array(hours);
   const sumHum = new Float64Array(hours);
   const sumPres = rows.pressurePa ? new Float64Array(hours) : null;

@@ -22,7 +22,7 @@ import {
   stripBom,
   type ParsedRows,
 } from './delimited-text';
-import { averageToHours, fillGaps, timeOrder, trimToCompleteHours, type RowColumns } from './hourly-grid';
+import { averageToHours, fillGaps, hourRange, timeOrder, trimToCompleteHours, type RowColumns } from './hourly-grid';
 import { IssueLog } from './issue-log';
 import { createLocalToUtc, isKnownTimeZone, type LocalToUtc } from './local-time';
 import { classifyUnreadableCell, parseNumberCell, sniffDecimalSeparator } from './number-cells';
@@ -719,11 +719,12 @@ function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx: Conte
     }
   }
 
-  const averaged = averageToHours(rows, shiftMs);
-  if (averaged.hours > MAX_SERIES_HOURS) {
-    log.error('span-too-long', `The times span ${Math.round(averaged.hours / 8766)} years (${formatUtc(averaged.startHour * MS_PER_HOUR)} to ${formatUtc((averaged.startHour + averaged.hours - 1) * MS_PER_HOUR)}); a garbled date is likely.`);
+  const range = hourRange(rows, shiftMs);
+  if (range.last - range.first + 1 > MAX_SERIES_HOURS) {
+    log.error('span-too-long', `The times span ${Math.round((range.last - range.first + 1) / 8766)} years (${formatUtc(range.first * MS_PER_HOUR)} to ${formatUtc(range.last * MS_PER_HOUR)}); a garbled date is likely.`);
     return null;
   }
+  const averaged = averageToHours(rows, shiftMs, range);
   for (let h = 0; h < averaged.hours; h++) if (averaged.rowsInHour[h] > 1) counts.rowsAveraged += averaged.rowsInHour[h] - 1;
   if (counts.rowsAveraged > 0) {
     log.info('sub-hourly-averaged', `${counts.rowsAveraged + countHoursWithSeveralRows(averaged.rowsInHour)} rows sharing an hour were averaged into ${countHoursWithSeveralRows(averaged.rowsInHour)} hourly values.`);
