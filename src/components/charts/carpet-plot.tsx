@@ -1,0 +1,110 @@
+import { useCallback, useMemo } from 'react';
+import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
+import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
+import { useUnitSystem } from '@/lib/unit-system';
+import { carpetBins, carpetSummary, HOURS_PER_DAY } from './carpet-data';
+import { carpetDayLabel, carpetMonthStartDays, monthNames, utcOffsetLabel } from './chart-format';
+import { temperatureRamp } from './colour-ramps';
+import { ModeLegend } from './mode-legend';
+import { PlotFigure, type PlotModule } from './plot-figure';
+
+export interface CarpetPlotProps {
+  timestampsMs: ArrayLike<number>;
+  /** °C for kind 'temperature'; mode codes 0 free, 1 adiabatic, 2 mechanical, 3 no data for kind 'mode'. */
+  values: ArrayLike<number>;
+  kind: 'temperature' | 'mode';
+  /** The site's standard-time offset, so rows are local hours; UTC when omitted. */
+  utcOffsetMinutes?: number;
+}
+
+/** Day of year × hour of day, each cell coloured by the hour's temperature (mean over years) or its most frequent mode. */
+export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }: CarpetPlotProps) {
+  const { unitSystem } = useUnitSystem();
+  const grid = useMemo(() => carpetBins(timestampsMs, values, kind, utcOffsetMinutes), [timestampsMs, values, kind, utcOffsetMinutes]);
+  const summary = useMemo(() => carpetSummary(timestampsMs, values, kind, utcOffsetMinutes), [timestampsMs, values, kind, utcOffsetMinutes]);
+  const zone = utcOffsetLabel(utcOffsetMinutes);
+  const label =
+    kind === 'temperature'
+      ? `Dry-bulb temperature by day of year and hour of day (${zone})`
+      : `Cooling mode by day of year and hour of day (${zone})`;
+
+  const render = useCallback(
+    (Plot: PlotModule, widthPx: number) => {
+      const index: number[] = [];
+      for (let c = 0; c < grid.cells.length; c++) if (grid.cells[c] === grid.cells[c]) index.push(c);
+      const day = (c: number) => Math.floor(c / HOURS_PER_DAY) + 1;
+      const hour = (c: number) => c % HOURS_PER_DAY;
+      const shown = (c: number) => toDisplay('temperature', unitSystem, grid.cells[c]);
+      const many = grid.years > 1;
+      const title = (c: number) => {
+        const when = `${carpetDayLabel(day(c))}, ${String(hour(c)).padStart(2, '0')}:00–${String(hour(c) + 1).padStart(2, '0')}:00`;
+        if (kind === 'mode') {
+          const key = modeKeys[grid.cells[c]];
+          return `${when}\n${modeLabels[key]}${many ? ` (most frequent of ${grid.counts[c]} years)` : ''}`;
+        }
+        return `${when}\n${formatQuantity('temperature', unitSystem, grid.cells[c])}${many ? ` (mean of ${grid.counts[c]} years)` : ''}`;
+      };
+      const cellChannels = { x1: day, x2: (c: number) => day(c) + 1, y1: hour, y2: (c: number) => hour(c) + 1 };
+      return Plot.plot({
+        width: widthPx,
+        height: Math.max(220, Math.min(360, Math.round(widthPx * 0.28))),
+        marginLeft: 48,
+        marginBottom: 36,
+        style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
+        x: { domain: [1, 367], ticks: carpetMonthStartDays, tickFormat: (d: number) => monthNames[carpetMonthStartDays.indexOf(d)] ?? '', label: 'Day of year →', labelAnchor: 'right' },
+        y: { domain: [24, 0], ticks: [0, 6, 12, 18, 24], tickFormat: (h: number) => `${String(h).padStart(2, '0')}:00`, label: `↓ Hour of day (${zone})`, labelAnchor: 'top' },
+        color:
+          kind === 'temperature'
+            ? { type: 'linear', interpolate: temperatureRamp, legend: true, label: `Dry-bulb (${unitOf('temperature', unitSystem)})` }
+            : undefined,
+        marks: [
+          kind === 'temperature'
+            ? Plot.rect(index, { ...cellChannels, fill: shown, inset: 0 })
+            : Plot.rect(index, { ...cellChannels, fill: (c: number) => modeColours[modeKeys[grid.cells[c]]], inset: 0 }),
+          Plot.tip(index, Plot.pointer({ x: (c: number) => day(c) + 0.5, y: (c: number) => hour(c) + 0.5, title })),
+        ],
+      });
+    },
+    [grid, kind, unitSystem, zone],
+  );
+
+  const bandLabels = ['00–04', '04–08', '08–12', '12–16', '16–20', '20–24'];
+  return (
+    <div className="space-y-2">
+      {kind === 'mode' && <ModeLegend />}
+      <PlotFigure render={render} label={label} placeholderHeightPx={280} />
+      <details className="text-sm">
+        <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
+        <div className="mt-2 overflow-x-auto">
+          <table className="num w-full text-right text-xs">
+            <caption className="pb-1 text-left font-sans text-ink-soft">
+              {kind === 'temperature'
+                ? `Mean dry-bulb (${unitOf('temperature', unitSystem)}) per month and 4-hour band, ${zone}`
+                : `Hours per mode and month, ${zone}`}
+            </caption>
+            <thead>
+              <tr className="border-b border-rule text-ink-soft">
+                <th scope="col" className="py-1 text-left font-sans font-medium">Month</th>
+                {(kind === 'mode' ? modeKeys.map((k) => modeLabels[k]) : bandLabels).map((h) => (
+                  <th key={h} scope="col" className="px-2 py-1 font-sans font-medium">{h}</th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {summary.map((row) => (
+                <tr key={row.month} className="border-b border-rule/60">
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthNames[row.month - 1]}</th>
+                  {row.values.map((v, i) => (
+                    <td key={i} className="px-2 py-0.5">
+                      {kind === 'mode' ? v.toLocaleString('en') : formatQuantity('temperature', unitSystem, v, false)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </details>
+    </div>
+  );
+}

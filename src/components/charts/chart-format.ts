@@ -1,0 +1,20 @@
+/** Small helpers shared by the chart components: month names, calendar labels of the carpet grid. */
+export const monthNames = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** First day (1-based) of each month on the carpet's leap-year calendar. */
+export const carpetMonthStartDays = [1, 32, 61, 92, 122, 153, 183, 214, 245, 275, 306, 336];
+
+/** "14 Mar" for a 1-based day of the leap-year calendar. */
+export function carpetDayLabel(day: number): string {
+  let m = 11;
+  while (m > 0 && carpetMonthStartDays[m] > day) m--;
+  return `${day - carpetMonthStartDays[m] + 1} ${monthNames[m]}`;
+}
+
+/** "UTC" or "UTC+01:00" for an offset in minutes. */
+export function utcOffsetLabel(minutes: number): string {
+  if (!minutes) return 'UTC';
+  const sign = minutes < 0 ? '−' : '+';
+  const abs = Math.abs(minutes);
+  return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+}

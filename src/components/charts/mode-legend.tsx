@@ -1,0 +1,15 @@
+import { modeColours, modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
+
+/** The one legend for the cooling modes: the palette of shared/modes.ts, in its order. */
+export function ModeLegend({ include = modeKeys }: { include?: readonly ModeKey[] }) {
+  return (
+    <ul aria-label="Modes" className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-soft">
+      {include.map((key) => (
+        <li key={key} className="flex items-center gap-1.5">
+          <span aria-hidden className="inline-block size-3 rounded-sm" style={{ background: modeColours[key] }} />
+          {modeLabels[key]}
+        </li>
+      ))}
+    </ul>
+  );
+}

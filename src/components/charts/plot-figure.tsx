@@ -1,0 +1,75 @@
+import { useEffect, useRef, useState } from 'react';
+
+/** The Observable Plot module, loaded on first use so it stays out of the main bundle. */
+export type PlotModule = typeof import('@observablehq/plot');
+
+let plotModule: Promise<PlotModule> | null = null;
+
+export function loadPlot(): Promise<PlotModule> {
+  plotModule ??= import('@observablehq/plot');
+  return plotModule;
+}
+
+export interface PlotFigureProps {
+  /**
+   * Builds the figure for the measured width. Keep it stable (useCallback/useMemo) so the figure is
+   * rebuilt only when its data or options change.
+   */
+  render: (Plot: PlotModule, widthPx: number) => Element | null;
+  /** Accessible name of the figure; the text alternative sits next to it. */
+  label: string;
+  /** Height held while Plot loads, so the page does not jump. */
+  placeholderHeightPx?: number;
+  className?: string;
+}
+
+/** Renders a Plot figure into a div, follows the div's width, and removes the figure on change or unmount. */
+export function PlotFigure({ render, label, placeholderHeightPx = 320, className }: PlotFigureProps) {
+  const host = useRef<HTMLDivElement>(null);
+  const [widthPx, setWidthPx] = useState(0);
+  const [state, setState] = useState<'loading' | 'ready' | 'error'>('loading');
+
+  useEffect(() => {
+    const element = host.current;
+    if (!element) return;
+    const measure = () => setWidthPx(Math.max(280, Math.floor(element.clientWidth || 640)));
+    measure();
+    if (typeof ResizeObserver === 'undefined') return;
+    // Round to 16 px so a scroll bar appearing does not rebuild the figure twice.
+    const observer = new ResizeObserver(([entry]) => setWidthPx(Math.max(280, Math.floor(entry.contentRect.width / 16) * 16)));
+    observer.observe(element);
+    return () => observer.disconnect();
+  }, []);
+
+  useEffect(() => {
+    if (!widthPx) return;
+    let cancelled = false;
+    let figure: Element | null = null;
+    loadPlot()
+      .then((Plot) => {
+        if (cancelled || !host.current) return;
+        figure = render(Plot, widthPx);
+        host.current.replaceChildren(...(figure ? [figure] : []));
+        setState('ready');
+      })
+      .catch(() => !cancelled && setState('error'));
+    return () => {
+      cancelled = true;
+      figure?.remove();
+    };
+  }, [render, widthPx]);
+
+  return (
+    <figure aria-label={label} className={className}>
+      {state === 'loading' && (
+        <div aria-label={`Loading chart: ${label}`} className="animate-pulse rounded bg-mist" style={{ height: placeholderHeightPx }} />
+      )}
+      {state === 'error' && (
+        <p role="alert" className="rounded border border-signal-bad/40 bg-[#fbeceb] p-3 text-sm">
+          The chart could not be drawn. Reload the page; the table below holds the same figures.
+        </p>
+      )}
+      <div ref={host} className="w-full overflow-hidden [&_svg]:max-w-full" />
+    </figure>
+  );
+}
