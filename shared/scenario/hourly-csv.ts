@@ -33,7 +33,7 @@ export interface HourlyCsvInput {
   mechanicalFraction: Float64Array;
 }
 
-const ROWS_PER_CHUNK = 32_768;
+const ROWS_PER_CHUNK = 8192;
 // Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 9 separators.
 const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 9;
 const COMMA = 44;
@@ -46,35 +46,41 @@ const encoder = new TextEncoder();
 const MODE_BYTES = MODE_NAMES.map((name) => encoder.encode(name));
 
 /**
- * Writes x with `decimals` digits after the point into buf at pos and returns the new position.
+ * Writes x with `decimals` (0–4) digits after the point into buf at pos and returns the new position.
  * NaN writes nothing (an empty cell). Half-way cases round away from zero.
  */
 export function writeFixed(buf: Uint8Array, pos: number, x: number, decimals: number): number {
-  if (!Number.isFinite(x)) return pos;
+  if (x - x !== 0) return pos; // NaN or ±Infinity: empty cell
   const scale = POW10[decimals];
-  let scaled = Math.round(Math.abs(x) * scale);
-  if (scaled > Number.MAX_SAFE_INTEGER) {
-    // Out of the fast path's range; rare enough to go through the string formatter.
+  const negative = x < 0;
+  const scaled = Math.round(negative ? -x * scale : x * scale);
+  if (scaled > 2_147_483_647) {
+    // Beyond 32-bit integer digits; rare enough to go through the string formatter.
     const bytes = encoder.encode(x.toFixed(decimals));
     buf.set(bytes, pos);
     return pos + bytes.length;
   }
-  if (x < 0 && scaled !== 0) buf[pos++] = MINUS;
-  let integer = Math.floor(scaled / scale);
-  // Digits of the integer part, most significant first.
-  let digits = 1;
-  for (let probe = integer; probe >= 10; probe = Math.floor(probe / 10)) digits++;
-  for (let d = digits - 1; d >= 0; d--) {
-    buf[pos + d] = ZERO + (integer % 10);
-    integer = Math.floor(integer / 10);
+  if (negative && scaled !== 0) buf[pos++] = MINUS;
+  let integer = (scaled / scale) | 0;
+  let fraction = scaled - integer * scale;
+  if (integer < 10) {
+    buf[pos++] = ZERO + integer;
+  } else {
+    let digits = 2;
+    for (let probe = (integer / 100) | 0; probe > 0; probe = (probe / 10) | 0) digits++;
+    for (let d = digits - 1; d >= 0; d--) {
+      const tenth = (integer / 10) | 0;
+      buf[pos + d] = ZERO + integer - tenth * 10;
+      integer = tenth;
+    }
+    pos += digits;
   }
-  pos += digits;
   if (decimals > 0) {
     buf[pos++] = DOT;
-    scaled %= scale;
     for (let d = decimals - 1; d >= 0; d--) {
-      buf[pos + d] = ZERO + (scaled % 10);
-      scaled = Math.floor(scaled / 10);
+      const tenth = (fraction / 10) | 0;
+      buf[pos + d] = ZERO + fraction - tenth * 10;
+      fraction = tenth;
     }
     pos += decimals;
   }
@@ -82,24 +88,38 @@ export function writeFixed(buf: Uint8Array, pos: number, x: number, decimals: nu
 }
 
 const twoDigits = (buf: Uint8Array, pos: number, value: number): void => {
-  buf[pos] = ZERO + Math.floor(value / 10);
-  buf[pos + 1] = ZERO + (value % 10);
+  const tens = (value / 10) | 0;
+  buf[pos] = ZERO + tens;
+  buf[pos + 1] = ZERO + value - tens * 10;
 };
 
+/** "YYYY-MM-DDT" of the last day written, reused while the day does not change. */
+interface DayPrefix {
+  days: number;
+  bytes: Uint8Array;
+  civil: { year: number; month: number; day: number };
+}
+
 /** Writes "YYYY-MM-DDTHH:MMZ" (UTC) for epoch ms; 17 bytes. Years 0–9999. */
-function writeTimestamp(buf: Uint8Array, pos: number, ms: number, civil: { year: number; month: number; day: number }): number {
+function writeTimestamp(buf: Uint8Array, pos: number, ms: number, prefix: DayPrefix): number {
   const days = Math.floor(ms / MS_PER_DAY);
-  civilFromDays(days, civil);
+  const p = prefix.bytes;
+  if (days !== prefix.days) {
+    prefix.days = days;
+    const civil = prefix.civil;
+    civilFromDays(days, civil);
+    twoDigits(p, 0, (civil.year / 100) | 0);
+    twoDigits(p, 2, civil.year % 100);
+    p[4] = MINUS;
+    twoDigits(p, 5, civil.month);
+    p[7] = MINUS;
+    twoDigits(p, 8, civil.day);
+    p[10] = 84; // T
+  }
+  for (let k = 0; k < 11; k++) buf[pos + k] = p[k];
   const withinDayMs = ms - days * MS_PER_DAY;
-  const hour = Math.floor(withinDayMs / MS_PER_HOUR);
-  const minute = Math.floor((withinDayMs - hour * MS_PER_HOUR) / 60_000);
-  twoDigits(buf, pos, Math.floor(civil.year / 100));
-  twoDigits(buf, pos + 2, civil.year % 100);
-  buf[pos + 4] = MINUS;
-  twoDigits(buf, pos + 5, civil.month);
-  buf[pos + 7] = MINUS;
-  twoDigits(buf, pos + 8, civil.day);
-  buf[pos + 10] = 84; // T
+  const hour = (withinDayMs / MS_PER_HOUR) | 0;
+  const minute = ((withinDayMs - hour * MS_PER_HOUR) / 60_000) | 0;
   twoDigits(buf, pos + 11, hour);
   buf[pos + 13] = 58; // :
   twoDigits(buf, pos + 14, minute);
@@ -108,8 +128,8 @@ function writeTimestamp(buf: Uint8Array, pos: number, ms: number, civil: { year:
 }
 
 /**
- * Formats the hourly CSV (header first) and hands it over in chunks of bytes; each chunk is a
- * fresh view the receiver may keep or write at once.
+ * Formats the hourly CSV (header first) and hands it over in chunks of bytes. One buffer is reused
+ * for every chunk, so the receiver must write or copy the bytes before it returns.
  */
 export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Array) => void): void {
   const n = input.modes.length;
@@ -117,13 +137,13 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
     if (input[key].length !== n) throw new RangeError(`${key} has ${input[key].length} hours, modes has ${n}`);
   }
   onChunk(encoder.encode(`${HOURLY_CSV_COLUMNS.join(',')}\n`));
-  const civil = { year: 0, month: 0, day: 0 };
+  const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
+  const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * MAX_ROW_BYTES);
   for (let start = 0; start < n; start += ROWS_PER_CHUNK) {
     const end = Math.min(n, start + ROWS_PER_CHUNK);
-    const buf = new Uint8Array((end - start) * MAX_ROW_BYTES);
     let pos = 0;
     for (let i = start; i < end; i++) {
-      pos = writeTimestamp(buf, pos, input.timestampsMs[i], civil);
+      pos = writeTimestamp(buf, pos, input.timestampsMs[i], prefix);
       buf[pos++] = COMMA;
       const modeBytes = MODE_BYTES[input.modes[i]];
       buf.set(modeBytes, pos);
