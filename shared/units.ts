@@ -102,7 +102,7 @@ export const kJPerKgToBtuPerLb = (e: number): BtuPerLb => (e / KJ_PER_KG_PER_BTU
 export const btuPerLbToKJPerKg = (e: number): KJPerKg => (e * KJ_PER_KG_PER_BTU_PER_LB) as KJPerKg;
 /**
  * Moist-air enthalpy from the SI datum (dry air at 0 °C) to the IP datum (dry air at 0 °F), so the
- * number matches ASHRAE's IP charts and tables. Agrees with the IP equation to within 0.03 Btu/lb over
+ * number matches ASHRAE's IP charts and tables. Agrees with the IP equation to within 0.04 Btu/lb over
  * −40…60 °C (the SI and IP dry-air specific heats, 1.006 kJ/(kg·K) and 0.240 Btu/(lb·°F), differ by 0.1 %).
  */
 export const enthalpySiToIpBtuPerLb = (hKJPerKg: number): BtuPerLb => (hKJPerKg / KJ_PER_KG_PER_BTU_PER_LB + IP_ENTHALPY_DATUM_BTU_PER_LB) as BtuPerLb;

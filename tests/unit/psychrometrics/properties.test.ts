@@ -1,0 +1,111 @@
+/**
+ * Property tests (fast-check) of the engine's own consistency: round trips between humidity measures,
+ * the ordering dew point ≤ wet-bulb ≤ dry-bulb, and monotonic saturation pressure. The equations are
+ * those of ASHRAE Handbook—Fundamentals (2017) ch. 1; these checks need no outside values.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+  dewPointFromHumidityRatio,
+  humidityRatioFromDewPoint,
+  humidityRatioFromRh,
+  humidityRatioFromWetBulb,
+  rhPctFromHumidityRatio,
+  saturationPressurePa,
+  wetBulbFromHumidityRatio,
+  wetBulbRootsNearFreezing,
+  enthalpyKJPerKg,
+  dryBulbFromEnthalpy,
+  humidityRatioFromEnthalpy,
+} from '../../../shared/psychrometrics';
+
+const dryBulb = fc.double({ min: -40, max: 55, noNaN: true });
+const rh = fc.double({ min: 0.5, max: 100, noNaN: true });
+const pressure = fc.double({ min: 60_000, max: 105_000, noNaN: true });
+const runs = { numRuns: 2000 };
+
+describe('round trips', () => {
+  it('RH → W → RH', () => {
+    fc.assert(
+      fc.property(dryBulb, rh, pressure, (t, r, p) => {
+        expect(rhPctFromHumidityRatio(t, humidityRatioFromRh(t, r, p), p)).toBeCloseTo(r, 9);
+      }),
+      runs,
+    );
+  });
+
+  it('dew point → W → dew point', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -80, max: 55, noNaN: true }), pressure, (td, p) => {
+        expect(Math.abs(dewPointFromHumidityRatio(humidityRatioFromDewPoint(td, p), p) - td)).toBeLessThan(1e-4);
+      }),
+      runs,
+    );
+  });
+
+  it('wet-bulb → W → wet-bulb (outside the band near 0 °C where two wet-bulbs solve the equations)', () => {
+    fc.assert(
+      fc.property(dryBulb, fc.double({ min: 0, max: 1, noNaN: true }), pressure, (t, fraction, p) => {
+        // A wet-bulb between the dry-air wet-bulb and the dry-bulb, so that W ≥ 0.
+        const wbDry = wetBulbFromHumidityRatio(t, 0, p);
+        const wb = Math.min(t, wbDry + fraction * (t - wbDry));
+        const w = humidityRatioFromWetBulb(t, wb, p);
+        const back = wetBulbFromHumidityRatio(t, w, p);
+        const roots = wetBulbRootsNearFreezing(t, w, p);
+        if (roots === null) expect(Math.abs(back - wb)).toBeLessThan(1e-4);
+        else expect(Math.min(Math.abs(roots.iceC - wb), Math.abs(roots.waterC - wb))).toBeLessThan(1e-4);
+      }),
+      runs,
+    );
+  });
+
+  it('W → wet-bulb → W everywhere, including the two-root band', () => {
+    fc.assert(
+      fc.property(dryBulb, rh, pressure, (t, r, p) => {
+        const w = humidityRatioFromRh(t, r, p);
+        const wb = wetBulbFromHumidityRatio(t, w, p);
+        // dW/dt* ≤ 0.003 /K at these states, so a 1e-5 K wet-bulb gives W within 3e-8 kg/kg.
+        expect(Math.abs(humidityRatioFromWetBulb(t, wb, p) - w)).toBeLessThan(1e-7);
+      }),
+      runs,
+    );
+  });
+
+  it('enthalpy ↔ dry-bulb and humidity ratio', () => {
+    fc.assert(
+      fc.property(dryBulb, rh, pressure, (t, r, p) => {
+        const w = humidityRatioFromRh(t, r, p);
+        const h = enthalpyKJPerKg(t, w);
+        expect(dryBulbFromEnthalpy(h, w)).toBeCloseTo(t, 9);
+        expect(humidityRatioFromEnthalpy(t, h)).toBeCloseTo(w, 12);
+      }),
+      runs,
+    );
+  });
+});
+
+describe('orderings', () => {
+  it('dew point ≤ wet-bulb ≤ dry-bulb', () => {
+    fc.assert(
+      fc.property(dryBulb, rh, pressure, (t, r, p) => {
+        const w = humidityRatioFromRh(t, r, p);
+        const td = dewPointFromHumidityRatio(w, p);
+        const wb = wetBulbFromHumidityRatio(t, w, p);
+        expect(td).toBeLessThanOrEqual(wb + 1e-6);
+        expect(wb).toBeLessThanOrEqual(t + 1e-9);
+      }),
+      runs,
+    );
+  });
+
+  it('saturation pressure rises with temperature, across the ice/water switch too', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -100, max: 200, noNaN: true }), fc.double({ min: 1e-6, max: 50, noNaN: true }), (t, dt) => {
+        const t2 = Math.min(200, t + dt);
+        if (t2 - t > 1e-6) expect(saturationPressurePa(t2)).toBeGreaterThan(saturationPressurePa(t));
+      }),
+      runs,
+    );
+    expect(saturationPressurePa(0.010001)).toBeGreaterThan(saturationPressurePa(0.01));
+  });
+});
