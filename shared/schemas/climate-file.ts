@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isKnownTimeZone } from '../climate/local-time';
 
 /** A column named by its 0-based index or its header text. */
 const columnRef = z.union([z.number().int().min(0), z.string().min(1).max(200)]);
@@ -70,14 +71,7 @@ export const siteInputSchema = z.object({
   timeZone: z
     .string()
     .default('UTC')
-    .refine((tz) => {
-      try {
-        new Intl.DateTimeFormat('en', { timeZone: tz });
-        return true;
-      } catch {
-        return false;
-      }
-    }, 'timeZone must be an IANA time zone such as Europe/Oslo'),
+    .refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo'),
 });
 
 export type SiteInput = z.infer<typeof siteInputSchema>;
