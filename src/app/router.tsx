@@ -10,6 +10,10 @@ const router = createBrowserRouter([
     errorElement: <RouteError />,
     children: [
       { index: true, element: <HomeRoute /> },
+      // Scenarios, runs, comparison, envelopes and the state calculator: each page loaded on first visit.
+      { path: 'projects/:projectId/scenarios/new', lazy: () => import('@/features/scenarios/components/scenario-editor-page').then((m) => ({ Component: m.ScenarioEditorPage })) },
+      { path: 'projects/:projectId/scenarios/:scenarioId', lazy: () => import('@/features/scenarios/components/scenario-editor-page').then((m) => ({ Component: m.ScenarioEditorPage })) },
+      { path: 'projects/:projectId/runs/:runId', lazy: () => import('@/features/runs/components/run-page').then((m) => ({ Component: m.RunPage })) },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

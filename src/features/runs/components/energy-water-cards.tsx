@@ -1,0 +1,86 @@
+import { Panel } from '@/components/ui/panel';
+import { formatQuantity } from '@/lib/quantity';
+import { useUnitSystem } from '@/lib/unit-system';
+import type { ScenarioResults } from '../../../../shared/scenario/run';
+
+const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
+const kw = (v: number) => `${v.toLocaleString('en', { maximumFractionDigits: 0 })} kW`;
+
+function Figure({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
+  return (
+    <div className="rounded border border-rule bg-paper px-3 py-2">
+      <p className="text-xs text-ink-soft">{label}</p>
+      <p className="num text-xl font-semibold" data-testid={testId}>
+        {value}
+      </p>
+      {note && <p className="text-xs text-ink-faint">{note}</p>}
+    </div>
+  );
+}
+
+/** Partial PUE, WUE, peak mechanical load and the energy and water behind them. */
+export function EnergyWaterCards({ results }: { results: ScenarioResults }) {
+  const { unitSystem } = useUnitSystem();
+  const e = results.energy;
+  const w = results.water;
+  const rows = [
+    { label: 'Hall fans', kwh: e.fanKwh },
+    { label: 'Compressors', kwh: e.compressorKwh },
+    { label: 'Pumps', kwh: e.pumpKwh },
+  ];
+  return (
+    <div className="grid gap-4 lg:grid-cols-2">
+      <Panel title="Energy">
+        <div className="grid grid-cols-2 gap-2 2xl:grid-cols-3">
+          <Figure label="Partial PUE (cooling)" value={e.partialPue?.toFixed(3) ?? '–'} note="(IT + cooling) / IT energy" testId="ppue" />
+          <Figure label="Peak mechanical load" value={kw(results.peakMechanicalLoadKw)} note={`compressors peak ${kw(results.peakCompressorKw)} electric`} />
+          <Figure label="Cooling energy" value={mwh(e.coolingKwh)} note={e.annual ? `${mwh(e.annual.coolingKwh)} per 8,760 h` : undefined} />
+        </div>
+        <table className="mt-3 w-full text-sm">
+          <caption className="pb-1 text-left text-xs text-ink-soft">Energy by component over the hours with data</caption>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r.label} className="border-b border-rule/60">
+                <th scope="row" className="py-1 text-left font-normal">{r.label}</th>
+                <td className="num py-1 text-right">{mwh(r.kwh)}</td>
+                <td className="num w-20 py-1 text-right text-ink-soft">{e.coolingKwh > 0 ? ((100 * r.kwh) / e.coolingKwh).toFixed(1) : '0.0'} %</td>
+              </tr>
+            ))}
+            <tr className="border-b border-rule/60">
+              <th scope="row" className="py-1 text-left font-medium">Cooling total</th>
+              <td className="num py-1 text-right font-medium">{mwh(e.coolingKwh)}</td>
+              <td />
+            </tr>
+            <tr>
+              <th scope="row" className="py-1 text-left font-normal text-ink-soft">IT equipment</th>
+              <td className="num py-1 text-right text-ink-soft">{mwh(e.itKwh)}</td>
+              <td />
+            </tr>
+          </tbody>
+        </table>
+      </Panel>
+      <Panel title="Water">
+        <div className="grid grid-cols-2 gap-2">
+          <Figure label="WUE" value={w.wueLPerKwh === null ? '–' : `${w.wueLPerKwh.toFixed(3)} L/kWh`} note="site water per IT energy (ISO/IEC 30134-9)" testId="wue" />
+          <Figure label="Water use" value={formatQuantity('water', unitSystem, w.totalL)} note={w.annualL !== null ? `${formatQuantity('water', unitSystem, w.annualL)} per 8,760 h` : undefined} />
+        </div>
+        <table className="mt-3 w-full text-sm">
+          <tbody>
+            <tr className="border-b border-rule/60">
+              <th scope="row" className="py-1 text-left font-normal">Evaporated</th>
+              <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.evaporatedL)}</td>
+            </tr>
+            <tr className="border-b border-rule/60">
+              <th scope="row" className="py-1 text-left font-normal">Blowdown</th>
+              <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.blowdownL)}</td>
+            </tr>
+            <tr>
+              <th scope="row" className="py-1 text-left font-medium">Total</th>
+              <td className="num py-1 text-right font-medium">{formatQuantity('water', unitSystem, w.totalL)}</td>
+            </tr>
+          </tbody>
+        </table>
+      </Panel>
+    </div>
+  );
+}

@@ -1,0 +1,58 @@
+import { formatQuantity } from '@/lib/quantity';
+import { useUnitSystem } from '@/lib/unit-system';
+import type { RunRecord } from '../api/get-run';
+import { flattenInputs, type InputRow } from '../utils/inputs-as-run';
+
+function shown(row: InputRow, system: 'SI' | 'IP'): string {
+  if (typeof row.value !== 'number') return String(row.value);
+  switch (row.kind) {
+    case 'plain':
+      return String(row.value);
+    case 'percent':
+      return `${row.value} %`;
+    case 'power':
+      return `${row.value.toLocaleString('en')} kW`;
+    default:
+      return formatQuantity(row.kind, system, row.value);
+  }
+}
+
+/** Everything the run was computed from, exactly as stored with it: scenario, climate file, engine. */
+export function RunInputs({ run }: { run: RunRecord }) {
+  const { unitSystem } = useUnitSystem();
+  const rows = flattenInputs(run.scenario);
+  const c = run.climate;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+      <table className="w-full text-xs" data-testid="run-inputs">
+        <caption className="pb-1 text-left text-ink-soft">Scenario as run (field names as in the scenario JSON)</caption>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.path} className="border-b border-rule/60">
+              <th scope="row" className="num py-0.5 pr-4 text-left font-normal text-ink-soft">{r.path}</th>
+              <td className="num py-0.5 text-right">{shown(r, unitSystem)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <dl className="grid h-min grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-xs">
+        <dt className="text-ink-soft">Climate file</dt>
+        <dd>{c.name}</dd>
+        <dt className="text-ink-soft">Site</dt>
+        <dd>
+          {c.site.name}, {formatQuantity('elevation', unitSystem, c.elevationM)}, {c.site.timeZone}
+        </dd>
+        <dt className="text-ink-soft">Hours</dt>
+        <dd className="num">
+          {c.hours.toLocaleString('en')} ({new Date(c.firstHourMs).toISOString().slice(0, 10)} to {new Date(c.lastHourMs).toISOString().slice(0, 10)})
+        </dd>
+        <dt className="text-ink-soft">File checksum</dt>
+        <dd className="num break-all">sha256 {c.sha256}</dd>
+        <dt className="text-ink-soft">Engine version</dt>
+        <dd className="num">{run.engineVersion}</dd>
+        <dt className="text-ink-soft">Pressure</dt>
+        <dd>{run.results?.site.pressureSource === 'weather' ? 'station pressure from the file' : 'standard atmosphere at the site elevation'}</dd>
+      </dl>
+    </div>
+  );
+}

@@ -1,0 +1,103 @@
+import { Link, useParams } from 'react-router-dom';
+import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { Notice } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
+import { useRun, type RunRecord } from '../api/get-run';
+import { useCanEditProject } from '../api/get-project-role';
+import { ResultCautions } from './cautions';
+import { EnergyWaterCards } from './energy-water-cards';
+import { ModeHoursPanel } from './mode-hours-panel';
+import { MonthlyHoursChart } from './monthly-hours-chart';
+import { RunHourViews } from './run-hour-views';
+import { RunInputs } from './run-inputs';
+import { RunStatus } from './run-status';
+
+const statusStyle: Record<RunRecord['status'], string> = {
+  queued: 'bg-mist text-ink',
+  running: 'bg-harbour text-paper',
+  done: 'bg-signal-ok text-paper',
+  failed: 'bg-signal-bad text-paper',
+  cancelled: 'bg-rule text-ink',
+};
+
+/** /projects/:projectId/runs/:runId */
+export function RunPage() {
+  const params = useParams();
+  const projectId = Number(params.projectId);
+  const runId = Number(params.runId);
+  const query = useRun(projectId, runId);
+  const canEdit = useCanEditProject(projectId);
+
+  if (query.isPending) return <div className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading run" />;
+  if (query.isError) {
+    return (
+      <Notice tone="bad" title="This run could not be opened">
+        {query.error.message} It may have been deleted; open the project to see its runs.
+      </Notice>
+    );
+  }
+  const run = query.data.run;
+  const results = run.status === 'done' ? run.results : null;
+  const evaporative = run.scenario.system.evaporativeEffectiveness > 0 || (run.scenario.system.kind === 'water-side' && run.scenario.system.heatRejection === 'cooling-tower');
+  return (
+    <div className="space-y-4">
+      <header className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <p className="text-xs uppercase tracking-wider text-ink-faint">
+            <Link to={`/projects/${projectId}`} className="hover:underline">
+              Project
+            </Link>{' '}
+            · Run {run.id}
+          </p>
+          <h1 className="text-xl font-semibold">{run.scenario.name}</h1>
+          <p className="text-sm text-ink-soft">
+            {run.climate.site.name} · {run.climate.name} · {run.climate.hours.toLocaleString('en')} hours
+          </p>
+        </div>
+        <div className="flex items-center gap-2 text-sm">
+          <span className={`rounded px-2 py-0.5 text-xs font-medium ${statusStyle[run.status]}`} data-testid="run-status">
+            {run.status}
+          </span>
+          {run.scenarioId !== null && (
+            <Link to={`/projects/${projectId}/scenarios/${run.scenarioId}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+              Open scenario
+            </Link>
+          )}
+          {results && (
+            <Link to={`/projects/${projectId}/compare?runs=${run.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+              Compare with other runs
+            </Link>
+          )}
+        </div>
+      </header>
+
+      {!results && <RunStatus run={run} canEdit={canEdit} />}
+
+      {results && (
+        <>
+          {results.warnings.length > 0 && (
+            <Notice tone="warn" title="Notes from the engine">
+              <ul className="list-disc pl-5">
+                {results.warnings.map((w) => (
+                  <li key={w}>{w}</li>
+                ))}
+              </ul>
+            </Notice>
+          )}
+          <div className="grid gap-4 xl:grid-cols-[24rem_minmax(0,1fr)]">
+            <ModeHoursPanel results={results} />
+            <Panel title="Hours per mode by month">
+              <MonthlyHoursChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} />
+            </Panel>
+          </div>
+          <EnergyWaterCards results={results} />
+          <RunHourViews run={run} />
+          <Panel title="Inputs as run">
+            <RunInputs run={run} />
+          </Panel>
+          <ResultCautions systemKind={run.scenario.system.kind} evaporative={evaporative} />
+        </>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,49 @@
+import { Notice } from '@/components/ui/notice';
+import { useCancelRun } from '../api/cancel-run';
+import type { RunRecord } from '../api/get-run';
+
+/** Progress while the run waits or computes, with a way to cancel; what happened when it did not finish. */
+export function RunStatus({ run, canEdit }: { run: RunRecord; canEdit: boolean }) {
+  const cancel = useCancelRun(run.projectId, run.id);
+  if (run.status === 'failed') {
+    return (
+      <Notice tone="bad" title="The run failed">
+        {run.error ?? 'No message was recorded.'} Check the scenario and the climate file, then run it again.
+      </Notice>
+    );
+  }
+  if (run.status === 'cancelled') {
+    return <Notice title="The run was cancelled">Nothing was computed. Run the scenario again from its editor when needed.</Notice>;
+  }
+  const pct = Math.round(100 * (run.status === 'queued' ? 0 : run.progress));
+  return (
+    <div className="rounded-md border border-rule bg-panel p-4" data-testid="run-progress">
+      <div className="flex items-center justify-between gap-4">
+        <p className="text-sm font-medium" role="status" aria-live="polite">
+          {run.status === 'queued' ? 'Waiting for a free worker…' : `Classifying ${run.climate.hours.toLocaleString('en')} hours…`}
+        </p>
+        {canEdit && (
+          <button
+            type="button"
+            onClick={() => cancel.mutate()}
+            disabled={cancel.isPending}
+            className="rounded border border-rule px-3 py-1 text-sm hover:bg-mist disabled:opacity-50"
+          >
+            Cancel run
+          </button>
+        )}
+      </div>
+      <div
+        className="mt-3 h-2 overflow-hidden rounded-full bg-mist"
+        role="progressbar"
+        aria-label="Run progress"
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={pct}
+      >
+        <div className="h-full bg-harbour transition-[width] duration-500" style={{ width: `${Math.max(pct, run.status === 'queued' ? 0 : 5)}%` }} />
+      </div>
+      {cancel.isError && <p className="mt-2 text-xs text-signal-bad">{cancel.error.message}</p>}
+    </div>
+  );
+}

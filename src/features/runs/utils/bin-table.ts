@@ -1,0 +1,65 @@
+/** One dry-bulb bin: hours per mode and the mean coincident wet-bulb of the hours in it. */
+export interface DryBulbBin {
+  /** Lower edge, °C (inclusive). */
+  fromC: number;
+  /** Upper edge, °C (exclusive). */
+  toC: number;
+  /** Hours per mode code: [free, adiabatic, mechanical, no data]. */
+  hours: [number, number, number, number];
+  total: number;
+  /** Mean wet-bulb of the bin's hours, °C; NaN when none has a wet-bulb. */
+  meanWetBulbC: number;
+}
+
+export interface BinTable {
+  bins: DryBulbBin[];
+  /** Hours left out because their dry-bulb is missing. */
+  hoursWithoutDryBulb: number;
+}
+
+/**
+ * Hours grouped into dry-bulb bins of `widthK` (2 K by default), highest bin first, each with hours
+ * per mode and the mean coincident wet-bulb. Bins run on a grid anchored at 0 °C ([20, 22), [22, 24)…),
+ * and empty bins between the coldest and the warmest hour are kept so the table reads as a scale.
+ */
+export function dryBulbBins(modes: ArrayLike<number>, dryBulbC: ArrayLike<number>, wetBulbC: ArrayLike<number>, widthK = 2): BinTable {
+  if (!(widthK > 0)) throw new RangeError(`widthK must be above 0, got ${widthK}`);
+  if (modes.length !== dryBulbC.length || wetBulbC.length !== dryBulbC.length) {
+    throw new RangeError(`modes (${modes.length}), dryBulbC (${dryBulbC.length}) and wetBulbC (${wetBulbC.length}) must have one value per hour`);
+  }
+  const counts = new Map<number, { hours: [number, number, number, number]; wbSum: number; wbCount: number }>();
+  let hoursWithoutDryBulb = 0;
+  let lo = Number.POSITIVE_INFINITY;
+  let hi = Number.NEGATIVE_INFINITY;
+  for (let i = 0; i < dryBulbC.length; i++) {
+    const t = dryBulbC[i];
+    const mode = modes[i];
+    if (!Number.isFinite(t) || mode < 0 || mode > 3) {
+      hoursWithoutDryBulb++;
+      continue;
+    }
+    const k = Math.floor(t / widthK);
+    let bin = counts.get(k);
+    if (!bin) counts.set(k, (bin = { hours: [0, 0, 0, 0], wbSum: 0, wbCount: 0 }));
+    bin.hours[mode]++;
+    const wb = wetBulbC[i];
+    if (Number.isFinite(wb)) {
+      bin.wbSum += wb;
+      bin.wbCount++;
+    }
+    if (k < lo) lo = k;
+    if (k > hi) hi = k;
+  }
+  const bins: DryBulbBin[] = [];
+  for (let k = hi; k >= lo; k--) {
+    const bin = counts.get(k) ?? { hours: [0, 0, 0, 0] as [number, number, number, number], wbSum: 0, wbCount: 0 };
+    bins.push({
+      fromC: k * widthK,
+      toC: (k + 1) * widthK,
+      hours: bin.hours,
+      total: bin.hours[0] + bin.hours[1] + bin.hours[2] + bin.hours[3],
+      meanWetBulbC: bin.wbCount ? bin.wbSum / bin.wbCount : Number.NaN,
+    });
+  }
+  return { bins, hoursWithoutDryBulb };
+}

@@ -1,0 +1,86 @@
+import { useId } from 'react';
+import { modeColours, modeLabels, type ModeKey } from '../../../../shared/modes';
+import type { Scenario } from '../../../../shared/scenario/schema';
+import { useScenarioPreview } from '../api/preview-scenario';
+import type { ClimateFileListing } from '../api/get-climate-files';
+
+const shown: { key: ModeKey; field: 'free' | 'adiabatic' | 'mechanical' | 'noData' }[] = [
+  { key: 'free', field: 'free' },
+  { key: 'adiabatic', field: 'adiabatic' },
+  { key: 'mechanical', field: 'mechanical' },
+  { key: 'no_data', field: 'noData' },
+];
+
+/** Hours per mode for the scenario as it stands in the editor, on one climate file, refreshed as it changes. */
+export function ModePreview({
+  projectId,
+  scenario,
+  invalid,
+  climateFiles,
+  climateFileId,
+  onClimateFileChange,
+}: {
+  projectId: number;
+  scenario: Scenario | null;
+  invalid: boolean;
+  climateFiles: ClimateFileListing[];
+  climateFileId: number | null;
+  onClimateFileChange: (id: number) => void;
+}) {
+  const id = useId();
+  const preview = useScenarioPreview(projectId, climateFileId, scenario);
+  const hours = preview.data?.hours;
+  const total = hours ? hours.total : 0;
+  return (
+    <div className="space-y-3" aria-busy={preview.isFetching}>
+      <div className="flex items-center gap-2">
+        <label htmlFor={id} className="text-sm">
+          Climate file
+        </label>
+        <select
+          id={id}
+          value={climateFileId ?? ''}
+          onChange={(e) => onClimateFileChange(Number(e.target.value))}
+          className="min-w-0 flex-1 rounded border border-rule bg-panel px-2 py-1 text-sm"
+        >
+          {climateFiles.map((f) => (
+            <option key={f.id} value={f.id}>
+              {f.siteName} · {f.name}
+            </option>
+          ))}
+        </select>
+      </div>
+      {invalid && <p className="text-xs text-signal-warn">The preview waits until every field is valid.</p>}
+      {preview.isError && <p className="text-xs text-signal-bad">Preview failed: {preview.error.message}</p>}
+      {!hours && preview.isFetching && <div className="h-20 animate-pulse rounded bg-mist" aria-label="Computing preview" />}
+      {hours && (
+        <div className={preview.isFetching ? 'opacity-60 transition-opacity' : ''} data-testid="mode-preview">
+          <div className="flex h-4 overflow-hidden rounded-sm" aria-hidden>
+            {shown.map(({ key, field }) =>
+              hours[field] > 0 ? <div key={key} style={{ width: `${(100 * hours[field]) / total}%`, background: modeColours[key] }} /> : null,
+            )}
+          </div>
+          <table className="mt-2 w-full text-sm">
+            <caption className="sr-only">Preview of hours per mode</caption>
+            <tbody>
+              {shown.map(({ key, field }) => (
+                <tr key={key} className="border-b border-rule/60 last:border-0">
+                  <th scope="row" className="py-1 text-left font-normal">
+                    <span className="mr-2 inline-block size-2.5 rounded-sm align-middle" style={{ background: modeColours[key] }} aria-hidden />
+                    {modeLabels[key]}
+                  </th>
+                  <td className="num py-1 text-right">{hours[field].toLocaleString('en')} h</td>
+                  <td className="num w-16 py-1 text-right text-ink-soft">{total ? ((100 * hours[field]) / total).toFixed(1) : '0.0'} %</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          <p className="num mt-1 text-xs text-ink-soft">
+            {total.toLocaleString('en')} h · pPUE {preview.data?.energy.partialPue?.toFixed(3) ?? '–'}
+            {preview.isFetching && ' · updating…'}
+          </p>
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,144 @@
+import type { z } from 'zod';
+import {
+  directAirSchema,
+  energySchema,
+  envelopeSchema,
+  indirectAirSchema,
+  scenarioSchema,
+  waterSideSchema,
+  type Scenario,
+} from '../../../../shared/scenario/schema';
+import type { FieldUnit } from './field-units';
+
+export type SystemKind = Scenario['system']['kind'];
+
+/** One numeric input of the scenario: where it lives, how it is shown, its allowed range (from the shared schema) and why it matters. */
+export interface NumericField {
+  path: string;
+  label: string;
+  unit: FieldUnit;
+  min: number;
+  max: number;
+  help: string;
+  /** Only shown for these system kinds; all kinds when absent. */
+  kinds?: SystemKind[];
+}
+
+type AnyNumber = z.ZodType & { minValue?: number | null; maxValue?: number | null; unwrap?: () => AnyNumber };
+
+/** The range the shared schema allows for a field, reading through `.default()`. */
+function rangeOf(schema: AnyNumber): { min: number; max: number } {
+  const inner = schema.unwrap ? schema.unwrap() : schema;
+  return { min: inner.minValue ?? Number.NEGATIVE_INFINITY, max: inner.maxValue ?? Number.POSITIVE_INFINITY };
+}
+
+function field(schema: AnyNumber, path: string, label: string, unit: FieldUnit, help: string, kinds?: SystemKind[]): NumericField {
+  return { path, label, unit, help, kinds, ...rangeOf(schema) };
+}
+
+const sys = directAirSchema.shape;
+const ind = indirectAirSchema.shape;
+const ws = waterSideSchema.shape;
+const en = energySchema.shape as unknown as Record<string, AnyNumber>;
+const envelopeShape = envelopeSchema.shape;
+
+export const siteFields: NumericField[] = [
+  field(
+    scenarioSchema.shape.elevationM,
+    'elevationM',
+    'Site elevation',
+    'elevation',
+    'Sets the air pressure when the weather has none, and lowers the envelope maximum on high sites.',
+  ),
+];
+
+export const systemFields: NumericField[] = [
+  field(sys.supplyAirC, 'system.supplyAirC', 'Supply air setpoint', 'temperature', 'Air temperature held at the IT inlet.'),
+  field(sys.itDeltaTK, 'system.itDeltaTK', 'Rise across the IT', 'temperatureDifference', 'Return air is the supply plus this rise; sets the air flow.'),
+  field(sys.fanHeatK, 'system.fanHeatK', 'Fan heat', 'temperatureDifference', 'Warming of the air by the hall fans, added before the IT inlet.'),
+  field(
+    sys.evaporativeEffectiveness,
+    'system.evaporativeEffectiveness',
+    'Evaporative effectiveness',
+    'ratio',
+    'Share of the wet-bulb depression the evaporative stage removes; 0 means the design has none.',
+  ),
+  field(
+    ind.heatExchangerEffectiveness,
+    'system.heatExchangerEffectiveness',
+    'Exchanger effectiveness',
+    'ratio',
+    'How close the air-to-air exchanger brings hall air to the outdoor (scavenger) air temperature.',
+    ['indirect-air'],
+  ),
+  field(
+    ind.scavengerAirRatio as AnyNumber,
+    'system.scavengerAirRatio',
+    'Scavenger air ratio',
+    'ratio',
+    'Outdoor air mass flow through the exchanger per unit of hall air flow; 1 is common practice.',
+    ['indirect-air'],
+  ),
+  field(ws.chilledWaterSupplyC, 'system.chilledWaterSupplyC', 'Chilled-water supply', 'temperature', 'Water temperature leaving the plant to the hall coils; must be below the supply air.', ['water-side']),
+  field(ws.chilledWaterDeltaTK, 'system.chilledWaterDeltaTK', 'Chilled-water rise', 'temperatureDifference', 'Water temperature rise across the hall coils.', ['water-side']),
+  field(
+    ws.approachK,
+    'system.approachK',
+    'Approach',
+    'temperatureDifference',
+    'Heat-rejection plus exchanger approach between outdoor (dry- or wet-bulb) and chilled-water temperature.',
+    ['water-side'],
+  ),
+  field(
+    ws.dryCoolerAirRiseK as AnyNumber,
+    'system.dryCoolerAirRiseK',
+    'Dry-cooler air rise',
+    'temperatureDifference',
+    'Air temperature rise through the dry cooler, which sets its air flow; 10 K is common practice.',
+    ['water-side'],
+  ),
+];
+
+export const envelopeFields: NumericField[] = [
+  field(envelopeShape.dryBulbMinC, 'envelope.dryBulbMinC', 'Dry-bulb, lowest', 'temperature', 'Coldest inlet air the IT accepts.'),
+  field(envelopeShape.dryBulbMaxC, 'envelope.dryBulbMaxC', 'Dry-bulb, highest', 'temperature', 'Warmest inlet air, before any altitude derating.'),
+  field(envelopeShape.dewPointMinC, 'envelope.dewPointMinC', 'Dew point, lowest', 'temperature', 'Driest air allowed, as a dew point.'),
+  field(envelopeShape.dewPointMaxC, 'envelope.dewPointMaxC', 'Dew point, highest', 'temperature', 'Moistest air allowed, as a dew point.'),
+  field(envelopeShape.rhMinPct, 'envelope.rhMinPct', 'Relative humidity, lowest', 'percent', 'Lower RH limit at the inlet.'),
+  field(envelopeShape.rhMaxPct, 'envelope.rhMaxPct', 'Relative humidity, highest', 'percent', 'Upper RH limit at the inlet.'),
+];
+
+export const energyFields: NumericField[] = [
+  field(en.itLoadKw, 'energy.itLoadKw', 'IT load', 'power', 'Constant IT power of the hall; every energy figure scales with it.'),
+  field(en.mechanicalCop, 'energy.mechanicalCop', 'Compressor COP', 'ratio', 'Cooling kW per electric kW at the reference outdoor temperature.'),
+  field(en.copSlopePerK, 'energy.copSlopePerK', 'COP change with outdoor temperature', 'perKelvin', 'Negative when compressors work harder in hot weather.'),
+  field(en.copReferenceC, 'energy.copReferenceC', 'COP reference temperature', 'temperature', 'Outdoor dry-bulb at which the COP above holds.'),
+  field(en.copMin, 'energy.copMin', 'Lowest COP', 'ratio', 'Floor on the adjusted COP, so a steep slope cannot reach zero.'),
+  field(en.fanPowerFraction, 'energy.fanPowerFraction', 'Hall fan power', 'shareAsPercent', 'Fan power as a share of IT load, every hour with data.'),
+  field(en.pumpPowerFraction, 'energy.pumpPowerFraction', 'Pump power', 'shareAsPercent', 'Share of IT load; water-side every hour, air-side only while the evaporative stage runs.'),
+  field(
+    en.heatRejectionFanFraction,
+    'energy.heatRejectionFanFraction',
+    'Heat-rejection fan power',
+    'shareAsPercent',
+    'Share of IT load for dry-cooler, tower or scavenger fans (water-side and indirect air).',
+  ),
+  field(en.blowdownRatio, 'energy.blowdownRatio', 'Blowdown ratio', 'ratio', 'Water drained per volume evaporated; 0.33 is about four cycles of concentration.'),
+  field(
+    en.towerEvaporationShare,
+    'energy.towerEvaporationShare',
+    'Tower heat by evaporation',
+    'shareAsPercent',
+    'Share of a cooling tower’s heat rejected by evaporation; 85 % is a common rule of thumb.',
+  ),
+];
+
+export const systemKinds: { kind: SystemKind; label: string; help: string }[] = [
+  { kind: 'direct-air', label: 'Direct outdoor air', help: 'Outdoor air enters the hall; humidity follows the weather.' },
+  { kind: 'indirect-air', label: 'Indirect air-to-air', help: 'Hall air recirculates through an exchanger; outdoor air never enters.' },
+  { kind: 'water-side', label: 'Water-side economiser', help: 'Chilled water cooled by a dry cooler or tower when the weather allows.' },
+];
+
+export function fieldsFor(fields: NumericField[], kind: SystemKind): NumericField[] {
+  return fields.filter((f) => !f.kinds || f.kinds.includes(kind));
+}

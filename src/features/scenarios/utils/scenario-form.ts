@@ -1,0 +1,85 @@
+import type { Scenario } from '../../../../shared/scenario/schema';
+import type { SystemKind } from './scenario-fields';
+
+/**
+ * The editor holds every system field at once, so switching the system kind keeps what was typed for
+ * the other kinds; the shared schema keeps only the chosen kind's fields when the form is submitted.
+ */
+export interface ScenarioFormValues {
+  name: string;
+  elevationM: number;
+  envelope: Scenario['envelope'];
+  system: {
+    kind: SystemKind;
+    supplyAirC: number;
+    itDeltaTK: number;
+    fanHeatK: number;
+    evaporativeEffectiveness: number;
+    heatExchangerEffectiveness: number;
+    scavengerAirRatio: number;
+    chilledWaterSupplyC: number;
+    chilledWaterDeltaTK: number;
+    approachK: number;
+    heatRejection: 'dry-cooler' | 'cooling-tower';
+    dryCoolerAirRiseK: number;
+  };
+  energy: Scenario['energy'];
+}
+
+/** A new scenario's starting point: direct outdoor air on the 2021 A1 allowable class (figures as in the envelope presets). */
+export const newScenarioValues: ScenarioFormValues = {
+  name: 'New scenario',
+  elevationM: 0,
+  envelope: {
+    presetId: 'ashrae-2021-a1',
+    dryBulbMinC: 15,
+    dryBulbMaxC: 32,
+    dewPointMinC: -12,
+    dewPointMaxC: 17,
+    rhMinPct: 8,
+    rhMaxPct: 80,
+    altitudeDerating: { aboveElevationM: 900, metresPerKelvin: 300 },
+  },
+  system: {
+    kind: 'direct-air',
+    supplyAirC: 24,
+    itDeltaTK: 12,
+    fanHeatK: 1,
+    evaporativeEffectiveness: 0.85,
+    heatExchangerEffectiveness: 0.7,
+    scavengerAirRatio: 1,
+    chilledWaterSupplyC: 18,
+    chilledWaterDeltaTK: 6,
+    approachK: 5,
+    heatRejection: 'cooling-tower',
+    dryCoolerAirRiseK: 10,
+  },
+  energy: {
+    itLoadKw: 1000,
+    mechanicalCop: 4.5,
+    copSlopePerK: 0,
+    copReferenceC: 35,
+    copMin: 1,
+    fanPowerFraction: 0.05,
+    pumpPowerFraction: 0.01,
+    heatRejectionFanFraction: 0.02,
+    blowdownRatio: 0.33,
+    towerEvaporationShare: 0.85,
+  },
+};
+
+/** A stored scenario as editor values: its own fields over the defaults of the kinds it does not use. */
+export function toFormValues(scenario: Scenario): ScenarioFormValues {
+  return {
+    name: scenario.name,
+    elevationM: scenario.elevationM,
+    envelope: { ...scenario.envelope },
+    system: { ...newScenarioValues.system, ...scenario.system },
+    energy: { ...newScenarioValues.energy, ...scenario.energy },
+  };
+}
+
+/** Value at a dotted path such as "system.supplyAirC". */
+export function valueAtPath(values: unknown, path: string): unknown {
+  return path.split('.').reduce<unknown>((at, key) => (at && typeof at === 'object' ? (at as Record<string, unknown>)[key] : undefined), values);
+}
