@@ -9,7 +9,7 @@ import { closeSync, openSync, readFileSync, writeSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { importClimateText } from '../../shared/climate';
 import type { ColumnMappingOverride, ImportOptions, PressureUnit, QuantityColumn, TemperatureUnit } from '../../shared/climate/types';
-import { parseScenario, runScenario, writeHourlyCsv } from '../../shared/scenario';
+import { hourlyCsvInput, parseScenario, runScenario, writeHourlyCsv } from '../../shared/scenario';
 
 const USAGE = `Usage: npm run --silent estimate -- --weather FILE.csv --scenario SCENARIO.json [options]
 
@@ -95,20 +95,7 @@ function main(argv: string[]): number {
   if (values.hourly) {
     const fd = openOutput(values.hourly);
     try {
-      writeHourlyCsv(
-        {
-          timestampsMs: series.timestampsMs,
-          modes: run.classification.modes,
-          dryBulbC: series.dryBulbC,
-          wetBulbC: run.states.wetBulbC,
-          dewPointC: run.states.dewPointC,
-          rhPct: run.states.rhPct,
-          humidityRatio: run.states.humidityRatio,
-          enthalpyKJPerKg: run.states.enthalpyKJPerKg,
-          mechanicalFraction: run.classification.mechanicalFraction,
-        },
-        (bytes) => writeAll(fd, bytes),
-      );
+      writeHourlyCsv(hourlyCsvInput(series, run), (bytes) => writeAll(fd, bytes));
     } finally {
       closeSync(fd);
     }

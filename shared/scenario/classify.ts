@@ -5,6 +5,7 @@
  * no object per hour; the rules per system kind are written out in FORMULAS.md.
  */
 import { dewPointFromHumidityRatio, humidityRatioFromDewPoint, humidityRatioFromRh, saturationPressurePa } from '../psychrometrics';
+import type { EnvelopeLimits } from './envelopes';
 import type { ScenarioSystem } from './schema';
 import { humidityRatioOnWetBulbLine, saturatedHumidityRatio } from './wet-bulb-line';
 
@@ -26,14 +27,7 @@ export const EXCURSION = {
 const MISSING_FLAG = 2;
 
 /** Dry-bulb and moisture limits of the inlet envelope, dry-bulb maximum already derated for altitude. */
-export interface InletLimits {
-  dryBulbMinC: number;
-  dryBulbMaxC: number;
-  dewPointMinC: number;
-  dewPointMaxC: number;
-  rhMinPct: number;
-  rhMaxPct: number;
-}
+export type InletLimits = Omit<EnvelopeLimits, 'altitudeDerating'>;
 
 export interface OutdoorHours {
   dryBulbC: Float64Array;
@@ -101,26 +95,29 @@ export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours
   const supplyFlag =
     (system.supplyAirC > limits.dryBulbMaxC ? EXCURSION.supplyAboveMax : 0) | (system.supplyAirC < limits.dryBulbMinC ? EXCURSION.supplyBelowMin : 0);
 
-  if (system.kind === 'direct-air') classifyDirectAir(system, limits, hours, out);
-  else if (system.kind === 'indirect-air') classifyIndirectAir(system, hours, out);
-  else classifyWaterSide(system, hours, out);
+  const rule =
+    system.kind === 'direct-air' ? directAirHour(system, limits, out) : system.kind === 'indirect-air' ? indirectAirHour(system, out) : waterSideHour(system, out);
+  const { dryBulbC, humidityRatio, wetBulbC, pressurePa, flags } = hours;
+  const fixedPressure = typeof pressurePa === 'number' ? pressurePa : Number.NaN;
+  const pressureSeries = typeof pressurePa === 'number' ? null : pressurePa;
 
-  if (supplyFlag !== 0) {
-    for (let i = 0; i < n; i++) if (out.modes[i] !== MODE.noData) out.excursions[i] |= supplyFlag;
+  for (let i = 0; i < n; i++) {
+    const t = dryBulbC[i];
+    const w = humidityRatio[i];
+    const twb = wetBulbC[i];
+    const p = pressureSeries === null ? fixedPressure : pressureSeries[i];
+    if (t !== t || w !== w || twb !== twb || p !== p || (flags != null && flags[i] === MISSING_FLAG)) {
+      out.modes[i] = MODE.noData;
+      continue;
+    }
+    rule(i, t, w, twb, p);
+    out.excursions[i] |= supplyFlag;
   }
   return out;
 }
 
-/** True when the hour has no usable data; sets the outputs for it. */
-function markNoData(i: number, t: number, w: number, twb: number, p: number, hours: OutdoorHours, out: HourClassification): boolean {
-  if (Number.isNaN(t) || Number.isNaN(w) || Number.isNaN(twb) || Number.isNaN(p) || (hours.flags != null && hours.flags[i] === MISSING_FLAG)) {
-    out.modes[i] = MODE.noData;
-    return true;
-  }
-  return false;
-}
-
-const pressureAt = (pressurePa: Float64Array | number, i: number): number => (typeof pressurePa === 'number' ? pressurePa : pressurePa[i]);
+/** Classifies hour i of a known-good outdoor state (°C, kg/kg, °C, Pa), writing into the outputs. */
+type HourRule = (i: number, t: number, w: number, twb: number, p: number) => void;
 
 /** Humidity ratio where the hour's wet-bulb line reaches tC. */
 function wetBulbLineW(tC: number, wetBulbC: number, pressurePa: number): number {
@@ -130,19 +127,14 @@ function wetBulbLineW(tC: number, wetBulbC: number, pressurePa: number): number 
 /** Moist-air enthalpy, kJ/kg dry air: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 32. Inlined for the loop. */
 const enthalpy = (tC: number, w: number): number => 1.006 * tC + w * (2501 + 1.86 * tC);
 
-function classifyDirectAir(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, limits: InletLimits, hours: OutdoorHours, out: HourClassification): void {
+function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, limits: InletLimits, out: HourClassification): HourRule {
   const { supplyAirC, fanHeatK, itDeltaTK, evaporativeEffectiveness: eps } = system;
   const offCoilC = supplyAirC - fanHeatK;
   const returnC = supplyAirC + itDeltaTK;
   let targetsPressure = Number.NaN;
   let targets: MoistureTargets = { highW: 0, lowW: 0, highDewPointC: 0 };
 
-  for (let i = 0; i < hours.dryBulbC.length; i++) {
-    const t = hours.dryBulbC[i];
-    const w = hours.humidityRatio[i];
-    const twb = hours.wetBulbC[i];
-    const p = pressureAt(hours.pressurePa, i);
-    if (markNoData(i, t, w, twb, p, hours, out)) continue;
+  return (i, t, w, twb, p) => {
     if (p !== targetsPressure) {
       targets = moistureTargets(limits, supplyAirC, p);
       targetsPressure = p;
@@ -180,7 +172,7 @@ function classifyDirectAir(system: Extract<ScenarioSystem, { kind: 'direct-air' 
     if (out.modes[i] === MODE.mechanical) {
       const fraction = directAirMechanicalFraction(t, w, twb, p, eps, offCoilC, returnC, targets);
       out.mechanicalFraction[i] = fraction;
-      if (fraction >= 1) continue; // full recirculation: the hall keeps its own moisture
+      if (fraction >= 1) return; // full recirculation: the hall keeps its own moisture
       if (w <= highW && eps > 0) {
         // The outdoor-air path was the cheaper one; its evaporative pre-cooling runs at full effectiveness.
         const preCooledW = wetBulbLineW(t - eps * (t - twb), twb, p);
@@ -191,7 +183,7 @@ function classifyDirectAir(system: Extract<ScenarioSystem, { kind: 'direct-air' 
       }
     }
     if (suppliedW < lowW) out.excursions[i] |= EXCURSION.lowHumidity;
-  }
+  };
 }
 
 /**
@@ -234,7 +226,7 @@ function directAirMechanicalFraction(
   return Math.min(1, Math.max(0, Math.min(outdoorLoad, recirculationLoad) / recirculationLoad));
 }
 
-function classifyIndirectAir(system: Extract<ScenarioSystem, { kind: 'indirect-air' }>, hours: OutdoorHours, out: HourClassification): void {
+function indirectAirHour(system: Extract<ScenarioSystem, { kind: 'indirect-air' }>, out: HourClassification): HourRule {
   const { supplyAirC, fanHeatK, itDeltaTK, evaporativeEffectiveness: eps, heatExchangerEffectiveness: hx, scavengerAirRatio } = system;
   const returnC = supplyAirC + itDeltaTK;
   // Without the exchanger the coil would cool from return plus fan heat down to the supply setpoint.
@@ -242,16 +234,11 @@ function classifyIndirectAir(system: Extract<ScenarioSystem, { kind: 'indirect-a
   // Scavenger temperature at which the exchanger just delivers the setpoint.
   const neededScavengerC = returnC - fullLoadK / hx;
 
-  for (let i = 0; i < hours.dryBulbC.length; i++) {
-    const t = hours.dryBulbC[i];
-    const w = hours.humidityRatio[i];
-    const twb = hours.wetBulbC[i];
-    const p = pressureAt(hours.pressurePa, i);
-    if (markNoData(i, t, w, twb, p, hours, out)) continue;
+  return (i, t, w, twb, p) => {
     const drySupplyC = returnC - hx * (returnC - t) + fanHeatK;
     if (drySupplyC <= supplyAirC) {
       out.modes[i] = MODE.free;
-      continue;
+      return;
     }
     const wettedScavengerC = t - eps * (t - twb);
     const wetSupplyC = returnC - hx * (returnC - wettedScavengerC) + fanHeatK;
@@ -260,55 +247,50 @@ function classifyIndirectAir(system: Extract<ScenarioSystem, { kind: 'indirect-a
       // The wetted stage is modulated: it only cools the scavenger air as far as needed.
       const scavengerC = Math.max(neededScavengerC, wettedScavengerC);
       out.evaporationKgPerKgAir[i] = scavengerAirRatio * (wetBulbLineW(scavengerC, twb, p) - w);
-      continue;
+      return;
     }
     out.modes[i] = MODE.mechanical;
     const bestSupplyC = eps > 0 ? wetSupplyC : drySupplyC;
     // Above the return temperature the exchanger would heat the hall air, so it is bypassed.
     if (bestSupplyC >= returnC + fanHeatK) {
       out.mechanicalFraction[i] = 1;
-      continue;
+      return;
     }
     out.mechanicalFraction[i] = (bestSupplyC - supplyAirC) / fullLoadK;
     if (eps > 0) out.evaporationKgPerKgAir[i] = scavengerAirRatio * (wetBulbLineW(wettedScavengerC, twb, p) - w);
-  }
+  };
 }
 
-function classifyWaterSide(system: Extract<ScenarioSystem, { kind: 'water-side' }>, hours: OutdoorHours, out: HourClassification): void {
+function waterSideHour(system: Extract<ScenarioSystem, { kind: 'water-side' }>, out: HourClassification): HourRule {
   const { chilledWaterSupplyC, chilledWaterDeltaTK, approachK, heatRejection, evaporativeEffectiveness: eps } = system;
   const tower = heatRejection === 'cooling-tower';
   // Water leaving the heat rejection at this temperature exactly meets the chilled-water setpoint.
   const neededAirC = chilledWaterSupplyC - approachK;
 
-  for (let i = 0; i < hours.dryBulbC.length; i++) {
-    const t = hours.dryBulbC[i];
-    const w = hours.humidityRatio[i];
-    const twb = hours.wetBulbC[i];
-    const p = pressureAt(hours.pressurePa, i);
-    if (markNoData(i, t, w, twb, p, hours, out)) continue;
+  return (i, t, w, twb, p) => {
     // A tower's water approaches the wet-bulb; a dry cooler's the dry-bulb, or the pre-cooled air when wetted.
     const dryWaterC = (tower ? twb : t) + approachK;
     if (dryWaterC <= chilledWaterSupplyC) {
       out.modes[i] = MODE.free;
-      continue;
+      return;
     }
     if (tower || eps === 0) {
       out.modes[i] = MODE.mechanical;
       out.mechanicalFraction[i] = precoolFraction(dryWaterC, chilledWaterSupplyC, chilledWaterDeltaTK);
-      continue;
+      return;
     }
     const preCooledC = t - eps * (t - twb);
     const wetWaterC = preCooledC + approachK;
     if (wetWaterC <= chilledWaterSupplyC) {
       out.modes[i] = MODE.adiabatic;
       out.evaporationKgPerKgAir[i] = wetBulbLineW(Math.max(neededAirC, preCooledC), twb, p) - w;
-      continue;
+      return;
     }
     out.modes[i] = MODE.mechanical;
     const fraction = precoolFraction(wetWaterC, chilledWaterSupplyC, chilledWaterDeltaTK);
     out.mechanicalFraction[i] = fraction;
     if (fraction < 1) out.evaporationKgPerKgAir[i] = wetBulbLineW(preCooledC, twb, p) - w;
-  }
+  };
 }
 
 /**

@@ -7,6 +7,7 @@
  */
 import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from './calendar';
 import { MODE, MODE_NAMES } from './classify';
+import type { ScenarioRun, ScenarioSeries } from './run';
 
 export const HOURLY_CSV_COLUMNS = [
   'timestamp',
@@ -31,6 +32,21 @@ export interface HourlyCsvInput {
   humidityRatio: Float64Array;
   enthalpyKJPerKg: Float64Array;
   mechanicalFraction: Float64Array;
+}
+
+/** The hourly CSV's columns from the series a run was given and the run itself. */
+export function hourlyCsvInput(series: ScenarioSeries, run: ScenarioRun): HourlyCsvInput {
+  return {
+    timestampsMs: series.timestampsMs,
+    modes: run.classification.modes,
+    dryBulbC: series.dryBulbC,
+    wetBulbC: run.states.wetBulbC,
+    dewPointC: run.states.dewPointC,
+    rhPct: run.states.rhPct,
+    humidityRatio: run.states.humidityRatio,
+    enthalpyKJPerKg: run.states.enthalpyKJPerKg,
+    mechanicalFraction: run.classification.mechanicalFraction,
+  };
 }
 
 const ROWS_PER_CHUNK = 8192;

@@ -13,5 +13,5 @@ export type { AggregatedResults, ModeHours, EnergyTotals, YearResults } from './
 export { runScenario } from './run';
 export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun } from './run';
 export { ENGINE_VERSION } from './version';
-export { HOURLY_CSV_COLUMNS, writeHourlyCsv, writeFixed } from './hourly-csv';
+export { HOURLY_CSV_COLUMNS, writeHourlyCsv, writeFixed, hourlyCsvInput } from './hourly-csv';
 export type { HourlyCsvInput } from './hourly-csv';

@@ -11,50 +11,17 @@ import { availableParallelism, tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { importClimateText } from '../../shared/climate';
-import { parseScenario, runScenario, writeHourlyCsv, type Scenario, type ScenarioInput, type ScenarioSeries } from '../../shared/scenario';
+import { hourlyCsvInput, parseScenario, runScenario, writeHourlyCsv, type Scenario, type ScenarioInput, type ScenarioSeries } from '../../shared/scenario';
 import { createWorkerPool } from '../../workers/pool';
+import { syntheticSeries, type SyntheticClimate } from '../unit/scenario/synthetic-climate';
 import type { BenchContext, BenchSuite } from './suite';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const HOURS_PER_YEAR = 8760;
 
-/** Small deterministic PRNG (mulberry32) so every run times the same hours. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-/**
- * Synthetic (invented) temperate climate, hourly from 1991-01-01 UTC: annual and daily swings,
- * RH falling as the day warms, no station pressure. Arrays on a SharedArrayBuffer so pool threads
- * read them without a copy.
- */
-function syntheticSeries(years: number): ScenarioSeries {
-  const n = years * HOURS_PER_YEAR;
-  const next = random(5_052_026);
-  const shared = (length: number) => new Float64Array(new SharedArrayBuffer(length * 8));
-  const series: ScenarioSeries = {
-    timestampsMs: shared(n),
-    dryBulbC: shared(n),
-    humidity: { kind: 'relative-humidity-pct', values: shared(n) },
-    pressurePa: null,
-  };
-  const t0 = Date.UTC(1991, 0, 1);
-  for (let i = 0; i < n; i++) {
-    const day = (i % HOURS_PER_YEAR) / 24;
-    const daily = Math.sin((2 * Math.PI * ((i % 24) - 9)) / 24);
-    series.timestampsMs[i] = t0 + i * 3_600_000;
-    series.dryBulbC[i] = 12 - 11 * Math.cos((2 * Math.PI * (day - 20)) / 365) + 5 * daily + 6 * (next() - 0.5);
-    series.humidity.values[i] = Math.min(100, Math.max(5, 68 - 18 * daily + 30 * (next() - 0.5)));
-  }
-  return series;
-}
+// Temperate synthetic climate (invented); arrays shared with the pool threads.
+const TEMPERATE: SyntheticClimate = { name: 'temperate (synthetic)', elevationM: 100, meanC: 12, seasonalK: 11, dailyK: 5, rhMean: 68, rhSpread: 30 };
+const syntheticYears = (years: number) => syntheticSeries(TEMPERATE, { hours: years * HOURS_PER_YEAR, seed: 5, shared: true });
 
 function canonicalCsv(series: ScenarioSeries): string {
   const lines = ['timestamp,dry_bulb_c,relative_humidity_pct'];
@@ -81,7 +48,7 @@ function scenarioWithSupply(supplyAirC: number): Scenario {
 const best = (times: number[]) => Math.min(...times);
 
 function timeOneScenario(log: BenchContext['log']) {
-  const series = syntheticSeries(30);
+  const series = syntheticYears(30);
   const n = series.dryBulbC.length;
   const scenario = scenarioWithSupply(24);
   const runTimes: number[] = [];
@@ -93,22 +60,9 @@ function timeOneScenario(log: BenchContext['log']) {
     runTimes.push(performance.now() - start);
     const csvStart = performance.now();
     csvBytes = 0;
-    writeHourlyCsv(
-      {
-        timestampsMs: series.timestampsMs,
-        modes: run.classification.modes,
-        dryBulbC: series.dryBulbC,
-        wetBulbC: run.states.wetBulbC,
-        dewPointC: run.states.dewPointC,
-        rhPct: run.states.rhPct,
-        humidityRatio: run.states.humidityRatio,
-        enthalpyKJPerKg: run.states.enthalpyKJPerKg,
-        mechanicalFraction: run.classification.mechanicalFraction,
-      },
-      (bytes) => {
-        csvBytes += bytes.length;
-      },
-    );
+    writeHourlyCsv(hourlyCsvInput(series, run), (bytes) => {
+      csvBytes += bytes.length;
+    });
     csvTimes.push(performance.now() - csvStart);
   }
   log(`scenario: 30 years (${n} h) in ${best(runTimes).toFixed(0)} ms; hourly CSV ${(csvBytes / 1e6).toFixed(1)} MB in ${best(csvTimes).toFixed(0)} ms`);
@@ -154,7 +108,7 @@ function timeCommandLine(csvText: string, log: BenchContext['log']) {
 }
 
 async function timeSweep(log: BenchContext['log']) {
-  const series = syntheticSeries(10);
+  const series = syntheticYears(10);
   const n = series.dryBulbC.length;
   const setpoints = Array.from({ length: 50 }, (_, k) => 18 + (k * 14) / 49);
   const scenarios = setpoints.map(scenarioWithSupply);

@@ -6,60 +6,11 @@
  * the libraries' tolerance (wet-bulb 0.005 K) of a threshold.
  */
 import { describe, expect, it } from 'vitest';
-import { MODE, runScenario, type Scenario, type ScenarioSeries } from '../../../shared/scenario';
+import { MODE, runScenario, type Scenario } from '../../../shared/scenario';
 import { makeScenario, psy } from './fixtures';
+import { HOT_DRY_HIGH, HOT_HUMID, MILD_MARITIME, syntheticSeries } from './synthetic-climate';
 
-/** mulberry32: a small deterministic generator, so the synthetic climates are the same every run. */
-function random(seed: number): () => number {
-  let a = seed;
-  return () => {
-    a = (a + 0x6d2b79f5) | 0;
-    let t = Math.imul(a ^ (a >>> 15), 1 | a);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4_294_967_296;
-  };
-}
-
-interface Climate {
-  name: string;
-  elevationM: number;
-  meanC: number;
-  seasonalK: number;
-  dailyK: number;
-  rhMean: number;
-  rhSpread: number;
-}
-
-// Synthetic climates (invented, for tests only): mild maritime, hot humid, hot dry at altitude.
-const CLIMATES: Climate[] = [
-  { name: 'mild maritime (synthetic)', elevationM: 20, meanC: 11, seasonalK: 7, dailyK: 4, rhMean: 78, rhSpread: 15 },
-  { name: 'hot humid (synthetic)', elevationM: 10, meanC: 22, seasonalK: 7, dailyK: 5, rhMean: 65, rhSpread: 30 },
-  { name: 'hot dry at altitude (synthetic)', elevationM: 1600, meanC: 20, seasonalK: 10, dailyK: 8, rhMean: 25, rhSpread: 15 },
-];
-
-const HOURS = 24 * 365;
-const STEP = 4; // every 4th hour of a year: 2190 hours, all seasons and times of day
-
-function makeSeries(climate: Climate, seed: number): ScenarioSeries {
-  const next = random(seed);
-  const n = HOURS / STEP;
-  const series: ScenarioSeries = {
-    timestampsMs: new Float64Array(n),
-    dryBulbC: new Float64Array(n),
-    humidity: { kind: 'relative-humidity-pct', values: new Float64Array(n) },
-    pressurePa: null,
-  };
-  for (let k = 0; k < n; k++) {
-    const i = k * STEP + (k % STEP);
-    const day = i / 24;
-    const hour = i % 24;
-    const daily = Math.sin((2 * Math.PI * (hour - 9)) / 24);
-    series.timestampsMs[k] = Date.UTC(2021, 0, 1) + i * 3_600_000;
-    series.dryBulbC[k] = climate.meanC - climate.seasonalK * Math.cos((2 * Math.PI * (day - 20)) / 365) + climate.dailyK * daily + 3 * (next() - 0.5);
-    series.humidity.values[k] = Math.min(100, Math.max(3, climate.rhMean - 0.6 * climate.rhSpread * daily + climate.rhSpread * (next() - 0.5)));
-  }
-  return series;
-}
+const CLIMATES = [MILD_MARITIME, HOT_HUMID, HOT_DRY_HIGH];
 
 interface ReferenceHour {
   mode: number;
@@ -131,7 +82,8 @@ const SCENARIOS: Record<string, (elevationM: number) => Scenario> = {
 };
 
 describe.each(CLIMATES.map((c, i) => [c.name, c, i] as const))('%s', (_name, climate, index) => {
-  const series = makeSeries(climate, 17 + index);
+  // Every 4th hour of a year: 2190 hours over all seasons and times of day.
+  const series = syntheticSeries(climate, { hours: 8760, step: 4, seed: 17 + index });
   const p = psy.GetStandardAtmPressure(climate.elevationM);
   const reference = Array.from(series.dryBulbC, (t, k) => {
     const w = psy.GetHumRatioFromRelHum(t, series.humidity.values[k] / 100, p);
