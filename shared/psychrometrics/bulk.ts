@@ -5,7 +5,7 @@
  */
 import { CP_DRY_AIR, CP_VAPOUR, LATENT_HEAT_0C, MOLAR_MASS_RATIO } from './constants';
 import { lnSaturationPressure, temperatureAtLnSaturation } from './saturation';
-import { humidityRatioFromWetBulbUnchecked, wetBulbUnchecked } from './wet-bulb';
+import { DRY_AIR_SLACK, humidityRatioFromWetBulbUnchecked, wetBulbUnchecked } from './wet-bulb';
 import { isPressureOk, isTemperatureOk, requirePressurePa, SATURATION_SLACK } from './validate';
 
 const SATURATION_OK = 1 + SATURATION_SLACK;
@@ -86,9 +86,9 @@ export function bulkStates(input: BulkStateInput): BulkState {
       } else if (kindCode === 2) {
         if (v <= t && isTemperatureOk(v)) {
           const wFromWb = humidityRatioFromWetBulbUnchecked(t, v, p);
-          if (wFromWb >= 0) {
+          if (wFromWb > -DRY_AIR_SLACK) {
             wb = v;
-            w = wFromWb;
+            w = wFromWb > 0 ? wFromWb : 0;
             pw = (p * w) / (MOLAR_MASS_RATIO + w);
             if (pw > 0) dew = temperatureAtLnSaturation(Math.log(pw));
           }

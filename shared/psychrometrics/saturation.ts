@@ -55,6 +55,36 @@ export function dLnSaturationPressure(tC: number): number {
   return tC <= TRIPLE_POINT_C ? dLnSaturationOverIce(tK) : dLnSaturationOverWater(tK);
 }
 
+// The Newton loops need ln pws and its slope at the same point: one division and one logarithm serve
+// both. The slope goes into this one-slot register rather than an object, so the loops allocate nothing
+// (each worker has its own module instance, and JavaScript runs one call at a time within it).
+const slopeRegister = new Float64Array(1);
+
+/** ln pws over ice (eq. 5), T in kelvin; its slope d ln pws/dT is left for {@link lastSaturationSlope}. */
+export function lnSaturationOverIceWithSlope(tK: number): number {
+  const invT = 1 / tK;
+  slopeRegister[0] = -I1 * invT * invT + I3 + tK * (2 * I4 + tK * (3 * I5 + tK * 4 * I6)) + I7 * invT;
+  return I1 * invT + I2 + tK * (I3 + tK * (I4 + tK * (I5 + tK * I6))) + I7 * Math.log(tK);
+}
+
+/** ln pws over liquid water (eq. 6), T in kelvin; its slope is left for {@link lastSaturationSlope}. */
+export function lnSaturationOverWaterWithSlope(tK: number): number {
+  const invT = 1 / tK;
+  slopeRegister[0] = -W8 * invT * invT + W10 + tK * (2 * W11 + tK * 3 * W12) + W13 * invT;
+  return W8 * invT + W9 + tK * (W10 + tK * (W11 + tK * W12)) + W13 * Math.log(tK);
+}
+
+/** ln pws(tC), ice at and below the triple point; its slope is left for {@link lastSaturationSlope}. */
+export function lnSaturationWithSlope(tC: number): number {
+  const tK = tC + KELVIN_OFFSET;
+  return tC <= TRIPLE_POINT_C ? lnSaturationOverIceWithSlope(tK) : lnSaturationOverWaterWithSlope(tK);
+}
+
+/** d ln pws/dT, 1/K, at the point of the last *WithSlope call. */
+export function lastSaturationSlope(): number {
+  return slopeRegister[0];
+}
+
 /**
  * Saturation vapour pressure of water, Pa, over ice at and below 0.01 °C and over liquid water above.
  * @param tC temperature, °C, −100…200
@@ -90,7 +120,7 @@ export function temperatureAtLnSaturation(lnPw: number): number {
   if (lnPw > LN_TRIPLE_POINT_WATER) {
     let tK = (243.12 * a) / (17.62 - a) + KELVIN_OFFSET;
     for (let i = 0; i < 12; i++) {
-      const step = (lnSaturationOverWater(tK) - lnPw) / dLnSaturationOverWater(tK);
+      const step = (lnSaturationOverWaterWithSlope(tK) - lnPw) / slopeRegister[0];
       tK -= step;
       if (Math.abs(step) < STOP_STEP_K) break;
     }
@@ -98,7 +128,7 @@ export function temperatureAtLnSaturation(lnPw: number): number {
   }
   let tK = (272.62 * a) / (22.46 - a) + KELVIN_OFFSET;
   for (let i = 0; i < 12; i++) {
-    const step = (lnSaturationOverIce(tK) - lnPw) / dLnSaturationOverIce(tK);
+    const step = (lnSaturationOverIceWithSlope(tK) - lnPw) / slopeRegister[0];
     tK -= step;
     if (Math.abs(step) < STOP_STEP_K) break;
   }

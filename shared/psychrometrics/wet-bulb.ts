@@ -4,7 +4,7 @@
  * saturation humidity ratio at t* from eq. 23 and Hyland–Wexler pws.
  */
 import { FREEZING_POINT_C, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO, TRIPLE_POINT_C } from './constants';
-import { dLnSaturationPressure, lnSaturationPressure, temperatureAtLnSaturation } from './saturation';
+import { dLnSaturationPressure, lastSaturationSlope, lnSaturationPressure, lnSaturationWithSlope, temperatureAtLnSaturation } from './saturation';
 import { vapourPressureFromHumidityRatioUnchecked } from './moisture';
 import {
   requireHumidityRatio,
@@ -21,6 +21,8 @@ const C_WATER = 4.186;
 const A_ICE = 2830;
 const B_ICE = 0.24;
 const C_ICE = 2.1;
+/** Round-off allowed below W = 0 when a wet-bulb is that of (nearly) dry air, kg/kg. */
+export const DRY_AIR_SLACK = 1e-8;
 /** Saturation pressure over ice at 0 °C, Pa (eq. 5), where the two psychrometric equations meet. */
 const PWS_AT_0C = Math.exp(lnSaturationPressure(FREEZING_POINT_C));
 
@@ -44,13 +46,17 @@ function humidityRatioAtFreezing(tC: number, pressurePa: number, a: number): num
 
 /**
  * Root of the psychrometric equation for t* in [lo, hi], where W(lo) ≤ humidityRatio ≤ W(hi), starting
- * from `guess`. Newton's method on the exact equation, with the bracket as a guard: a step that leaves
- * it is replaced by halving. Stops within about 1e-5 K of the root.
+ * from `guess`. Eq. 33 and 35 multiplied out by their (positive) denominators both read
+ *   F(t*) = (a − b·t*)·(Ws* − W) − (1.006 + 1.86·W)·(t − t*) = 0,
+ * since c − b = 1.86 in both; Newton's method runs on this exact form (no quotient to differentiate),
+ * with the bracket as a guard: a step that leaves it is replaced by halving.
+ * Stops within about 1e-5 K of the root.
  */
 function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo: number, hi: number, guess: number): number {
+  const cpm = 1.006 + 1.86 * humidityRatio;
   let t = guess > lo && guess < hi ? guess : 0.5 * (lo + hi);
   for (let i = 0; i < 60; i++) {
-    const pws = Math.exp(lnSaturationPressure(t));
+    const pws = Math.exp(lnSaturationWithSlope(t));
     const dry = pressurePa - pws;
     if (!(dry > 0)) {
       // Above the boiling point at this pressure: Ws* is unbounded, so the root is lower.
@@ -58,30 +64,21 @@ function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo:
       t = 0.5 * (lo + hi);
       continue;
     }
-    const ws = (MOLAR_MASS_RATIO * pws) / dry;
-    const dWs = (MOLAR_MASS_RATIO * pressurePa * pws * dLnSaturationPressure(t)) / (dry * dry);
-    let a: number, b: number, c: number;
-    if (t >= FREEZING_POINT_C) {
-      a = A_WATER;
-      b = B_WATER;
-      c = C_WATER;
-    } else {
-      a = A_ICE;
-      b = B_ICE;
-      c = C_ICE;
-    }
-    const num = (a - b * t) * ws - 1.006 * (tC - t);
-    const den = a + 1.86 * tC - c * t;
-    const f = num / den - humidityRatio;
+    const invDry = 1 / dry;
+    const ws = MOLAR_MASS_RATIO * pws * invDry;
+    const dWs = ws * lastSaturationSlope() * pressurePa * invDry;
+    const water = t >= FREEZING_POINT_C;
+    const b = water ? B_WATER : B_ICE;
+    const latent = (water ? A_WATER : A_ICE) - b * t;
+    const f = latent * (ws - humidityRatio) - cpm * (tC - t);
     if (f > 0) hi = t;
     else lo = t;
-    const df = ((-b * ws + (a - b * t) * dWs + 1.006) * den + c * num) / (den * den);
-    const step = f / df;
+    const step = f / (latent * dWs - b * (ws - humidityRatio) + cpm);
     let next = t - step;
     if (next > lo && next < hi) {
       // Quadratic convergence: after a Newton step of size s the error is about c·s² with
-      // c = f''/(2f') < 0.06 /K here, so a step below 0.01 K leaves less than 1e-5 K — provided the
-      // step stays on one branch: f has kinks at 0 °C (eq. 33/35) and 0.01 °C (pws over ice/water).
+      // c = F''/(2F') < 0.06 /K here, so a step below 0.01 K leaves less than 1e-5 K — provided the
+      // step stays on one branch: F has kinks at 0 °C (eq. 33/35) and 0.01 °C (pws over ice/water).
       if (Math.abs(step) < 0.01 && (t - TRIPLE_POINT_C) * (next - TRIPLE_POINT_C) > 0 && t * next > 0) return next;
     } else {
       next = 0.5 * (lo + hi);
@@ -161,6 +158,8 @@ export function humidityRatioFromWetBulb(tC: number, wetBulbC: number, pressureP
     throw new RangeError(`wetBulbC = ${wetBulbC} °C is at or above the boiling point at pressurePa = ${pressurePa} Pa`);
   }
   const w = humidityRatioFromWetBulbUnchecked(tC, wetBulbC, pressurePa);
+  // A wet-bulb solved for dry air lies within 1e-5 K of the root, where W is within ±1e-8 of zero.
+  if (w < 0 && w > -DRY_AIR_SLACK) return 0;
   if (w < 0) throw new RangeError(`wetBulbC = ${wetBulbC} °C is too low for dry-bulb ${tC} °C: even dry air has a higher wet-bulb`);
   return w;
 }
