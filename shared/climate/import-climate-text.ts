@@ -190,7 +190,12 @@ function isBlankRow(row: string[]): boolean {
 }
 
 function isCommentRow(row: string[]): boolean {
-  return row.length > 0 && row[0].trimStart().startsWith('#');
+  if (row.length === 0) return false;
+  const first = row[0];
+  const c = first.charCodeAt(0);
+  if (c === 35 /* # */) return true;
+  // only cells starting with white space need the slower look
+  return (c === 32 || c === 9) && first.trimStart().startsWith('#');
 }
 
 function isTextCell(cell: string): boolean {
@@ -638,12 +643,19 @@ function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx: Conte
   const at = (k: number): number => (order ? order[k] : k);
 
   // duplicates and steps, in time order
+  // one-hour steps are counted apart: a Map update per row would cost more than the rest of the loop
   const steps = new Map<number, number>();
+  let hourSteps = 0;
   let previous = -1;
   for (let k = 0; k < rows.count; k++) {
     const i = at(k);
     if (previous !== -1) {
       const step = t[i] - t[previous];
+      if (step === MS_PER_HOUR) {
+        hourSteps++;
+        previous = i;
+        continue;
+      }
       if (step === 0) {
         rows.dropped[i] = 1;
         counts.duplicateTimestamps++;
@@ -657,7 +669,7 @@ function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx: Conte
     previous = i;
   }
   let modalStep = MS_PER_HOUR;
-  let modalCount = 0;
+  let modalCount = hourSteps;
   for (const [step, times] of steps) {
     if (times > modalCount) {
       modalStep = step;
@@ -671,13 +683,15 @@ function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx: Conte
   let shiftMs = 0;
   if (hourly) {
     const minuteTally = new Map<number, number>();
+    let onTheHour = 0;
     for (let i = 0; i < rows.count; i++) {
       if (rows.dropped[i]) continue;
       const m = ((t[i] % MS_PER_HOUR) + MS_PER_HOUR) % MS_PER_HOUR;
-      minuteTally.set(m, (minuteTally.get(m) ?? 0) + 1);
+      if (m === 0) onTheHour++;
+      else minuteTally.set(m, (minuteTally.get(m) ?? 0) + 1);
     }
     let commonMinute = 0;
-    let commonCount = 0;
+    let commonCount = onTheHour;
     for (const [m, times] of minuteTally) if (times > commonCount) [commonMinute, commonCount] = [m, times];
     if (commonMinute !== 0) {
       shiftMs = commonMinute >= MS_PER_HOUR / 2 ? MS_PER_HOUR - commonMinute : -commonMinute;

@@ -1,7 +1,6 @@
 /**
  * Local wall-clock time in an IANA zone to UTC, through Intl (no time-zone data of our own).
- * Offsets are cached per local day; only the days holding a daylight-saving change are
- * resolved hour by hour, so a 30-year file costs some 22,000 Intl calls, not 262,800.
+ * Intl is slow (some 10 µs a call), so offsets come from a per-year table of the zone's changes.
  */
 import { MS_PER_DAY } from './time-cells';
 
@@ -65,34 +64,81 @@ function offsetReader(timeZone: string): (utcMs: number) => number {
   };
 }
 
+const WEEK_MS = 7 * MS_PER_DAY;
+const MINUTE_MS = 60_000;
+
+interface YearOffsets {
+  startOffset: number;
+  /** Instants (UTC ms, to the minute) where the offset changes, and the offset from then on. */
+  changes: { atMs: number; offset: number }[];
+}
+
+/**
+ * Offsets of a zone through a table of its changes, built per UTC year from weekly samples and a
+ * bisection to the minute where two samples differ: some 70 Intl calls a year instead of one per
+ * hour. Changes less than a week apart (none in current rules) would be missed.
+ */
+function offsetTable(timeZone: string): (utcMs: number) => number {
+  const exact = offsetReader(timeZone);
+  const years = new Map<number, YearOffsets>();
+  const build = (year: number): YearOffsets => {
+    const start = Date.UTC(year, 0, 1);
+    const end = Date.UTC(year + 1, 0, 1);
+    const startOffset = exact(start);
+    const changes: { atMs: number; offset: number }[] = [];
+    let previousMs = start;
+    let previousOffset = startOffset;
+    for (let t = start + WEEK_MS; previousMs < end; t += WEEK_MS) {
+      const at = Math.min(t, end);
+      const offset = exact(at);
+      if (offset !== previousOffset) {
+        let low = previousMs;
+        let high = at;
+        while (high - low > MINUTE_MS) {
+          const mid = low + Math.floor((high - low) / 2 / MINUTE_MS) * MINUTE_MS;
+          if (exact(mid) === previousOffset) low = mid;
+          else high = mid;
+        }
+        changes.push({ atMs: high, offset });
+      }
+      previousMs = at;
+      previousOffset = offset;
+    }
+    return { startOffset, changes };
+  };
+  return (utcMs: number) => {
+    const year = new Date(utcMs).getUTCFullYear();
+    let table = years.get(year);
+    if (!table) {
+      table = build(year);
+      years.set(year, table);
+    }
+    let offset = table.startOffset;
+    for (const change of table.changes) {
+      if (utcMs >= change.atMs) offset = change.offset;
+      else break;
+    }
+    return offset;
+  };
+}
+
 /** A converter for one zone (must be known: check with isKnownTimeZone first). */
 export function createLocalToUtc(timeZone: string): LocalToUtc {
-  const offsetAt = offsetReader(timeZone);
-  // local day number → offset ms for the whole day, or NaN when the offset changes within it
-  const dayOffsets = new Map<number, number>();
+  const offsetAt = offsetTable(timeZone);
   const ambiguousSeen = new Set<number>();
 
   const converter: LocalToUtc = {
     lastEvent: null,
     toUtc(localMs: number): number {
       converter.lastEvent = null;
-      const day = Math.floor(localMs / MS_PER_DAY);
-      let dayOffset = dayOffsets.get(day);
-      if (dayOffset === undefined) {
-        const startOffset = offsetAt(day * MS_PER_DAY - offsetAt(day * MS_PER_DAY));
-        const endLocal = (day + 1) * MS_PER_DAY;
-        const endOffset = offsetAt(endLocal - offsetAt(endLocal));
-        dayOffset = startOffset === endOffset ? startOffset : NaN;
-        dayOffsets.set(day, dayOffset);
-      }
-      if (!Number.isNaN(dayOffset)) return localMs - dayOffset;
-      return resolveOnChangeDay(localMs);
+      const before = offsetAt(localMs - MS_PER_DAY);
+      const after = offsetAt(localMs + MS_PER_DAY);
+      if (before === after) return localMs - before;
+      return resolveNearChange(localMs, before, after);
     },
   };
 
-  function resolveOnChangeDay(localMs: number): number {
-    const before = offsetAt(localMs - MS_PER_DAY);
-    const after = offsetAt(localMs + MS_PER_DAY);
+  function resolveNearChange(localMs: number, before: number, after: number): number {
     const early = localMs - before;
     const late = localMs - after;
     const earlyValid = offsetAt(early) === before;

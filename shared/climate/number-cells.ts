@@ -21,7 +21,8 @@ export function parseNumberCell(cell: string, decimalComma: boolean): number {
     if (second === 120 || second === 98 || second === 111) return NaN;
   }
   const value = Number(s);
-  if (!Number.isFinite(value) || SENTINELS.has(value)) return NaN;
+  if (value !== value || value === Infinity || value === -Infinity) return NaN;
+  if ((value >= 999 || value <= -999) && SENTINELS.has(value)) return NaN;
   if (value === 0 && s.trim() === '') return NaN;
   return value;
 }
