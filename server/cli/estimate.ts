@@ -106,6 +106,8 @@ function main(argv: string[]): number {
     ...run.results,
     weather: {
       file: values.weather,
+      importSummary: report.summary,
+      importWarnings: report.issues.filter((issue) => issue.severity === 'warning').length,
       firstTimestamp: report.firstTimestamp,
       lastTimestamp: report.lastTimestamp,
       years: report.years,

@@ -102,7 +102,6 @@ describe.each(CLIMATES.map((c, i) => [c.name, c, i] as const))('%s', (_name, cli
       if (run.classification.modes[k] !== expected.mode) modeMismatches++;
       else maxFractionError = Math.max(maxFractionError, Math.abs(run.classification.mechanicalFraction[k] - expected.fraction));
     });
-    if (process.env.SHOW_COUNTS) console.log(climate.name, key, counts, modeMismatches, maxFractionError);
     // At most 1 hour in 1000 may fall on the other side of a threshold through library tolerances.
     expect(modeMismatches).toBeLessThanOrEqual(Math.ceil(reference.length / 1000));
     expect(maxFractionError).toBeLessThan(1e-3);
