@@ -11,7 +11,7 @@
  */
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 
 const folder = path.dirname(fileURLToPath(import.meta.url));
 const YEARS = [2021, 2022, 2023];
@@ -325,13 +325,22 @@ const sites: SiteFile[] = [
   },
 ];
 
-const descriptions = sites.map(({ build, ...site }) => {
-  const text = build();
-  writeFileSync(path.join(folder, site.file), text);
-  console.log(`${site.file}: ${(text.length / 1e6).toFixed(2)} MB`);
-  return { ...site, years: YEARS, synthetic: true };
-});
-writeFileSync(
-  path.join(folder, 'sites.json'),
-  `${JSON.stringify({ note: 'Invented sites with synthetic weather, for demonstration only.', sites: descriptions }, null, 2)}\n`,
-);
+/** Each sample file's name and text, and the sites.json that describes them (nothing written). */
+export function buildSampleWeather(): { files: { file: string; text: string }[]; sitesJson: string } {
+  const files: { file: string; text: string }[] = [];
+  const descriptions = sites.map(({ build, ...site }) => {
+    files.push({ file: site.file, text: build() });
+    return { ...site, years: YEARS, synthetic: true };
+  });
+  const sitesJson = `${JSON.stringify({ note: 'Invented sites with synthetic weather, for demonstration only.', sites: descriptions }, null, 2)}\n`;
+  return { files, sitesJson };
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(path.resolve(process.argv[1])).href) {
+  const { files, sitesJson } = buildSampleWeather();
+  for (const { file, text } of files) {
+    writeFileSync(path.join(folder, file), text);
+    console.log(`${file}: ${(text.length / 1e6).toFixed(2)} MB`);
+  }
+  writeFileSync(path.join(folder, 'sites.json'), sitesJson);
+}
