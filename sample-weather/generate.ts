@@ -12,6 +12,7 @@
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
+import { wallClockReader } from '../shared/climate/local-time';
 
 const folder = path.dirname(fileURLToPath(import.meta.url));
 const YEARS = [2021, 2022, 2023];
@@ -111,23 +112,6 @@ function simulate(climate: Climate): Hour[] {
   return hours;
 }
 
-/** Wall-clock parts of a UTC instant in a zone (Intl; the zone's daylight-saving rules included). */
-function wallClock(timeZone: string): (utcMs: number) => { y: number; mo: number; d: number; h: number; mi: number } {
-  const format = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-  });
-  return (utcMs) => {
-    const parts = Object.fromEntries(format.formatToParts(utcMs).map((p) => [p.type, Number(p.value)]));
-    return { y: parts.year, mo: parts.month, d: parts.day, h: parts.hour, mi: parts.minute };
-  };
-}
-
 const pad = (n: number, width = 2) => String(n).padStart(width, '0');
 const fixed = (v: number, digits: number) => {
   const text = v.toFixed(digits);
@@ -158,8 +142,8 @@ function note(site: Omit<SiteFile, 'build'>, extra: string): string {
   ].join('\n');
 }
 
-const inYears = (h: Hour, zoneClock?: (ms: number) => { y: number }) => {
-  const year = zoneClock ? zoneClock(h.utcMs).y : new Date(h.utcMs).getUTCFullYear();
+const inYears = (h: Hour) => {
+  const year = new Date(h.utcMs).getUTCFullYear();
   return year >= YEARS[0] && year <= YEARS[YEARS.length - 1];
 };
 
@@ -295,7 +279,7 @@ const sites: SiteFile[] = [
   {
     ...zimnaDolina,
     build() {
-      const clock = wallClock(zimnaDolina.timeZone);
+      const clock = wallClockReader(zimnaDolina.timeZone);
       const hours = simulate({
         seed: 41,
         longitude: zimnaDolina.longitude,
@@ -315,10 +299,10 @@ const sites: SiteFile[] = [
       const outage = Date.UTC(2022, 6, 12, 9);
       for (const h of hours) {
         const w = clock(h.utcMs);
-        if (w.y < YEARS[0] || w.y > YEARS[YEARS.length - 1]) continue;
+        if (w.year < YEARS[0] || w.year > YEARS[YEARS.length - 1]) continue;
         if (h.utcMs >= outage && h.utcMs < outage + 4 * HOUR_MS) continue;
         const comma = (v: number, digits: number) => fixed(v, digits).replace('.', ',');
-        lines.push(`${pad(w.d)}.${pad(w.mo)}.${w.y};${pad(w.h)}:${pad(w.mi)};${comma(h.dryBulbC, 1)};${comma(h.relativeHumidityPct, 1)};${comma(h.pressurePa / 100, 1)}`);
+        lines.push(`${pad(w.day)}.${pad(w.month)}.${w.year};${pad(w.hour)}:${pad(w.minute)};${comma(h.dryBulbC, 1)};${comma(h.relativeHumidityPct, 1)};${comma(h.pressurePa / 100, 1)}`);
       }
       return `${lines.join('\r\n')}\r\n`;
     },

@@ -32,7 +32,17 @@ export function isKnownTimeZone(timeZone: string): boolean {
   }
 }
 
-function offsetReader(timeZone: string): (utcMs: number) => number {
+export interface WallClock {
+  year: number;
+  month: number;
+  day: number;
+  hour: number;
+  minute: number;
+  second: number;
+}
+
+/** Wall-clock reading of UTC instants in a zone (Intl, hours 0–23). */
+export function wallClockReader(timeZone: string): (utcMs: number) => WallClock {
   const format = new Intl.DateTimeFormat('en-US', {
     timeZone,
     hourCycle: 'h23',
@@ -44,23 +54,19 @@ function offsetReader(timeZone: string): (utcMs: number) => number {
     second: 'numeric',
   });
   return (utcMs: number) => {
-    let year = 0;
-    let month = 0;
-    let day = 0;
-    let hour = 0;
-    let minute = 0;
-    let second = 0;
+    const clock: WallClock = { year: 0, month: 0, day: 0, hour: 0, minute: 0, second: 0 };
     for (const part of format.formatToParts(utcMs)) {
-      const value = Number(part.value);
-      if (part.type === 'year') year = value;
-      else if (part.type === 'month') month = value;
-      else if (part.type === 'day') day = value;
-      else if (part.type === 'hour') hour = value;
-      else if (part.type === 'minute') minute = value;
-      else if (part.type === 'second') second = value;
+      if (part.type in clock) clock[part.type as keyof WallClock] = Number(part.value);
     }
-    const wall = Date.UTC(year, month - 1, day, hour, minute, second);
-    return wall - Math.floor(utcMs / 1000) * 1000;
+    return clock;
+  };
+}
+
+function offsetReader(timeZone: string): (utcMs: number) => number {
+  const read = wallClockReader(timeZone);
+  return (utcMs: number) => {
+    const c = read(utcMs);
+    return Date.UTC(c.year, c.month - 1, c.day, c.hour, c.minute, c.second) - Math.floor(utcMs / 1000) * 1000;
   };
 }
 
