@@ -3,6 +3,7 @@ import { HealthIndicator } from '@/features/health/components/health-indicator';
 
 const nav = [
   { to: '/', label: 'Projects', end: true },
+  { to: '/calculator', label: 'Air-state calculator' },
 ];
 
 export function AppShell() {

@@ -1,0 +1,34 @@
+import { formatQuantity } from '@/lib/quantity';
+import type { UnitSystem } from '@/lib/unit-system';
+import { KG_PER_POUND, METRES_PER_FOOT } from '../../../../shared/units';
+import type { MoistAirState } from '../../../../shared/psychrometrics';
+
+/** m³/kg per ft³/lb: 0.3048³ m³ / 0.45359237 kg, both exact (international yard and pound agreement, 1959). */
+const M3_PER_KG_PER_FT3_PER_LB = METRES_PER_FOOT ** 3 / KG_PER_POUND;
+
+const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+/** Every property of a state as label and text, in the person's unit system. */
+export function stateRows(s: MoistAirState, system: UnitSystem): { label: string; value: string }[] {
+  const ip = system === 'IP';
+  return [
+    { label: 'Pressure', value: formatQuantity('pressure', system, s.pressurePa) },
+    { label: 'Dry-bulb', value: formatQuantity('temperature', system, s.dryBulbC) },
+    { label: 'Wet-bulb (thermodynamic)', value: formatQuantity('temperature', system, s.wetBulbC) },
+    { label: 'Dew point', value: formatQuantity('temperature', system, s.dewPointC) },
+    { label: 'Relative humidity', value: `${fixed(s.rhPct, 1)} %` },
+    { label: 'Humidity ratio', value: formatQuantity('humidityRatio', system, s.humidityRatio) },
+    { label: 'Enthalpy', value: formatQuantity('enthalpy', system, s.enthalpyKJPerKg) },
+    { label: 'Vapour pressure', value: formatQuantity('pressure', system, s.vapourPressurePa) },
+    {
+      label: 'Specific volume',
+      value: ip ? `${fixed(s.specificVolumeM3PerKg / M3_PER_KG_PER_FT3_PER_LB, 3)} ft³/lb` : `${fixed(s.specificVolumeM3PerKg, 4)} m³/kg`,
+    },
+    {
+      label: 'Density of the moist air',
+      value: ip ? `${fixed(s.densityKgPerM3 * M3_PER_KG_PER_FT3_PER_LB, 4)} lb/ft³` : `${fixed(s.densityKgPerM3, 4)} kg/m³`,
+    },
+    { label: 'Degree of saturation', value: fixed(s.degreeOfSaturation, 4) },
+    { label: 'Specific humidity', value: `${fixed(s.specificHumidity * 1000, 3)} g/kg moist air` },
+  ];
+}

@@ -1,0 +1,119 @@
+import { useMemo } from 'react';
+import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { Notice } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
+import { useRuns } from '../api/get-runs';
+import { useRunsByMonth } from '../api/get-runs-by-month';
+import { compareRuns } from '../utils/compare-runs';
+import { ComparisonTable } from './comparison-table';
+import { MonthlyComparisonChart } from './monthly-comparison-chart';
+
+const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
+
+/** /projects/:projectId/compare?runs=1,2,3&baseline=1 — the choice lives in the address, so a comparison can be shared. */
+export function ComparePage() {
+  const projectId = Number(useParams().projectId);
+  const [search, setSearch] = useSearchParams();
+  const runsQuery = useRuns(projectId);
+  const runsParam = search.get('runs');
+  const chosen = useMemo(() => idList(runsParam), [runsParam]);
+  const done = useMemo(() => (runsQuery.data?.runs ?? []).filter((r) => r.status === 'done' && r.results), [runsQuery.data]);
+  // In the order they were ticked, so the first ticked is the default baseline.
+  const selected = useMemo(() => chosen.flatMap((id) => done.filter((r) => r.id === id)), [chosen, done]);
+  const baselineParam = Number(search.get('baseline'));
+  const baselineId = selected.some((r) => r.id === baselineParam) ? baselineParam : (selected[0]?.id ?? 0);
+  const rows = useMemo(() => compareRuns(selected, baselineId), [selected, baselineId]);
+  const monthly = useRunsByMonth(projectId, selected.map((r) => r.id));
+  const monthlyKey = monthly.map((q) => q.dataUpdatedAt).join(',');
+  const monthlyReady = monthly.every((q) => q.data);
+  // Rebuilt only when a run's monthly figures arrive, so the chart is not redrawn on every render.
+  const monthlySeries = useMemo(() => (monthlyReady ? monthly.map((q) => q.data!) : null), [monthlyKey, monthlyReady]);
+
+  function update(runs: number[], baseline: number | null) {
+    const next = new URLSearchParams();
+    if (runs.length) next.set('runs', runs.join(','));
+    if (baseline && runs.includes(baseline)) next.set('baseline', String(baseline));
+    setSearch(next, { replace: true });
+  }
+  const toggle = (id: number) => update(chosen.includes(id) ? chosen.filter((x) => x !== id) : [...chosen, id], baselineId);
+
+  return (
+    <div className="space-y-4">
+      <header>
+        <p className="text-xs uppercase tracking-wider text-ink-faint">
+          <Link to={`/projects/${projectId}`} className="hover:underline">
+            Project
+          </Link>{' '}
+          · Compare
+        </p>
+        <h1 className="text-xl font-semibold">Compare runs</h1>
+      </header>
+      <div className="grid gap-4 xl:grid-cols-[22rem_minmax(0,1fr)]">
+        <Panel title="Runs">
+          {runsQuery.isPending && <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+          {runsQuery.isError && <Notice tone="bad" title="Runs could not be loaded">{runsQuery.error.message}</Notice>}
+          {runsQuery.data && done.length === 0 && (
+            <p className="text-sm text-ink-soft">No finished runs yet. Open a scenario, run it on a climate file, then come back to compare.</p>
+          )}
+          {done.length > 0 && (
+            <table className="w-full text-sm">
+              <thead>
+                <tr className="border-b border-rule text-xs text-ink-soft">
+                  <th scope="col" className="py-1 text-left font-medium">Compare</th>
+                  <th scope="col" className="py-1 text-left font-medium">Run</th>
+                  <th scope="col" className="py-1 text-center font-medium">Baseline</th>
+                </tr>
+              </thead>
+              <tbody>
+                {done.map((r) => (
+                  <tr key={r.id} className="border-b border-rule/60 align-top">
+                    <td className="py-1">
+                      <input type="checkbox" className="accent-harbour" aria-label={`Compare run ${r.id}`} checked={chosen.includes(r.id)} onChange={() => toggle(r.id)} />
+                    </td>
+                    <td className="py-1">
+                      <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline">
+                        <span className="num text-xs text-ink-faint">#{r.id}</span> {r.scenario.name}
+                      </Link>
+                      <span className="block text-xs text-ink-soft">
+                        {r.climate.site.name} · {r.climate.name}
+                      </span>
+                    </td>
+                    <td className="py-1 text-center">
+                      <input
+                        type="radio"
+                        name="baseline"
+                        className="accent-harbour"
+                        aria-label={`Run ${r.id} as baseline`}
+                        disabled={!chosen.includes(r.id)}
+                        checked={r.id === baselineId}
+                        onChange={() => update(chosen, r.id)}
+                      />
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          )}
+        </Panel>
+        <div className="min-w-0 space-y-4">
+          {selected.length < 2 ? (
+            <Notice title="Pick two or more runs">Tick the runs to compare on the left; the first one ticked is the baseline until you choose another.</Notice>
+          ) : (
+            <>
+              <Panel title="Side by side">
+                <ComparisonTable rows={rows} runs={selected} baselineId={baselineId} />
+              </Panel>
+              <Panel title="Hours per mode by month">
+                {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}
+              </Panel>
+              <Notice tone="warn" title="Read these results as estimates">
+                They compare designs; they are not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering review. Direct
+                outside air brings contamination, smoke and condensation risk; evaporative systems need water treatment and Legionella control under local rules.
+              </Notice>
+            </>
+          )}
+        </div>
+      </div>
+    </div>
+  );
+}
