@@ -43,6 +43,15 @@ export function dLnSaturationOverWater(tK: number): number {
   return -W8 / (tK * tK) + W10 + tK * (2 * W11 + tK * 3 * W12) + W13 / tK;
 }
 
+/** d²(ln pws)/dT² at tC, 1/K², on the same branch as {@link lnSaturationPressure} (second derivative of eq. 5/6). No checks. */
+export function d2LnSaturationPressure(tC: number): number {
+  const tK = tC + KELVIN_OFFSET;
+  const invT = 1 / tK;
+  return tC <= TRIPLE_POINT_C
+    ? 2 * I1 * invT * invT * invT + 2 * I4 + tK * (6 * I5 + tK * 12 * I6) - I7 * invT * invT
+    : 2 * W8 * invT * invT * invT + 2 * W11 + 6 * W12 * tK - W13 * invT * invT;
+}
+
 /** ln pws(tC) in Pa, ice at and below the triple point. No checks. */
 export function lnSaturationPressure(tC: number): number {
   const tK = tC + KELVIN_OFFSET;

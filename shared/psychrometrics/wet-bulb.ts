@@ -4,7 +4,7 @@
  * saturation humidity ratio at t* from eq. 23 and Hyland–Wexler pws.
  */
 import { FREEZING_POINT_C, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO, TRIPLE_POINT_C } from './constants';
-import { dLnSaturationPressure, lastSaturationSlope, lnSaturationPressure, lnSaturationWithSlope, temperatureAtLnSaturation } from './saturation';
+import { d2LnSaturationPressure, dLnSaturationPressure, lastSaturationSlope, lnSaturationPressure, lnSaturationWithSlope, temperatureAtLnSaturation } from './saturation';
 import { vapourPressureFromHumidityRatioUnchecked } from './moisture';
 import {
   requireHumidityRatio,
@@ -91,9 +91,8 @@ function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo:
 
 /**
  * Wet-bulb, °C, of air at dry-bulb tC with humidityRatio at pressurePa, given its dew point (NaN if
- * unknown). The root lies between the dew point and the dry-bulb. First guess: linearise Ws* about the
- * dew point; Ws* is convex, so the guess lies above the root and Newton's method on the exact equation
- * descends to it in 2–4 steps.
+ * unknown). The root lies between the dew point and the dry-bulb. First guess: expand Ws* about the dew
+ * point (see below); then Newton's method on the exact equation, usually one or two steps.
  * Near 0 °C eq. 33 and eq. 35 overlap: at t* = 0 the ice form gives the higher W, so some W have a root on
  * each side of freezing. The engine takes the ice root whenever it exists (a wick below 0 °C is frozen;
  * supercooled water is metastable). See {@link wetBulbRootsNearFreezing}.
@@ -109,15 +108,32 @@ export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: 
   }
   let guess = Number.NaN;
   if (dewPointC === dewPointC) {
-    // Psychrometric equation simplified to L·(Ws* − W) = cpm·(t − t*), with Ws* about the dew point
-    // as W·exp(k·x) ≈ W·(1 + k·x + k²x²/2), x = t* − td, k = d ln Ws/dT at td: a quadratic in x.
+    // The psychrometric equation as L(t*)·(Ws* − W) = cpm·(t − t*) (see solveWetBulb), with Ws* about
+    // the dew point as W·exp(u), u = k·x + k2·x²/2, x = t* − td, k and k2 the first two derivatives of
+    // ln Ws at td. Keeping u ≈ k·x and e^u ≈ 1 + u + u²/2 gives a quadratic in x; one Newton step on the
+    // full model (L varying with t*, e^u to fifth order) then lands within 0.01 K of the root for most
+    // air, so a single exact Newton step usually finishes the job.
     const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
-    const k = (dLnSaturationPressure(dewPointC) * pressurePa) / (pressurePa - pw);
+    const invDry = 1 / (pressurePa - pw);
+    const d1 = dLnSaturationPressure(dewPointC);
+    const k = d1 * pressurePa * invDry;
+    const k2 = d2LnSaturationPressure(dewPointC) * pressurePa * invDry + d1 * d1 * pressurePa * pw * invDry * invDry;
     const cpm = 1.006 + 1.86 * humidityRatio;
-    const latentW = (dewPointC >= FREEZING_POINT_C ? A_WATER - B_WATER * dewPointC : A_ICE - B_ICE * dewPointC) * humidityRatio;
+    const water = dewPointC >= FREEZING_POINT_C;
+    const b = water ? B_WATER : B_ICE;
+    const latent0 = (water ? A_WATER : A_ICE) - b * dewPointC;
+    const latentW = latent0 * humidityRatio;
     const a1 = latentW * k + cpm;
     const depression = tC - dewPointC;
-    guess = dewPointC + (2 * cpm * depression) / (a1 + Math.sqrt(a1 * a1 + 2 * latentW * k * k * cpm * depression));
+    const x0 = (2 * cpm * depression) / (a1 + Math.sqrt(a1 * a1 + 2 * latentW * k * k * cpm * depression));
+    const u = x0 * (k + 0.5 * k2 * x0);
+    const du = k + k2 * x0;
+    const expU1 = u * (1 + u * (0.5 + u * (1 / 6 + u * (1 / 24 + u / 120))));
+    const dExpU1 = du * (1 + u * (1 + u * (0.5 + u * (1 / 6 + u / 24))));
+    const latent = latent0 - b * x0;
+    const model = latent * humidityRatio * expU1 - cpm * (depression - x0);
+    const dModel = -b * humidityRatio * expU1 + latent * humidityRatio * dExpU1 + cpm;
+    guess = dewPointC + x0 - model / dModel;
   }
   return solveWetBulb(tC, humidityRatio, pressurePa, lo, hi, guess);
 }
