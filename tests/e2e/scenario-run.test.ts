@@ -1,0 +1,180 @@
+import { readFileSync } from 'node:fs';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+
+// Synthetic test weather: 72 hours of July, never above 22 °C (tests/fixtures/api/three-days.csv).
+const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
+
+let h: BrowserHarness;
+let engineer: TestPerson;
+let viewer: TestPerson;
+let projectId: number;
+let firstRunId: number;
+let secondRunId: number;
+let scenarioId: number;
+
+async function api<T>(person: TestPerson, method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
+  const res = await fetch(`${h.baseUrl}/api${path}`, {
+    method,
+    headers: { cookie: person.cookie, 'x-tramontane-request': '1', 'content-type': type },
+    body,
+  });
+  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+
+async function signInAs(person: TestPerson) {
+  await h.context.clearCookies();
+  const [name, value] = person.cookie.split('=');
+  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+}
+
+async function useUnits(page: Page, system: 'SI' | 'IP') {
+  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
+  await page.reload();
+}
+
+/** Waits until every Plot figure on the page has drawn (its loading placeholder gone, an svg in place). */
+async function chartsDrawn(page: Page) {
+  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 15_000 }).toBe(0);
+  await expect.poll(() => page.locator('figure svg').count(), { timeout: 15_000 }).toBeGreaterThan(0);
+}
+
+beforeAll(async () => {
+  h = await startBrowserHarness();
+  engineer = personWithSession(h.testApp.db, 'idris.calloway@example.test');
+  viewer = personWithSession(h.testApp.db, 'client.reviewer@example.test');
+  projectId = projectWithMembers(h.testApp.db, 'Harbour hall retrofit', [
+    [engineer, 'engineer'],
+    [viewer, 'viewer'],
+  ]);
+  const { site } = await api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Saltmarsh Point', elevationM: 120 }));
+  await api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
+  await signInAs(engineer);
+  await h.page.goto(h.baseUrl);
+  await useUnits(h.page, 'SI');
+});
+afterAll(() => h?.close());
+
+describe('an engineer designing, running and comparing scenarios', () => {
+  it('creates a scenario, sees the quick preview, saves and runs it, and reads the run page', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/new`);
+    await page.getByLabel('Name').fill('Direct air, 24 °C supply');
+    await page.getByLabel('Supply air setpoint').fill('24');
+    // The preview covers all 72 hours of the file once typing pauses.
+    await expect.poll(() => page.getByTestId('mode-preview').innerText(), { timeout: 15_000 }).toContain('72 h');
+    // An out-of-range value is refused next to its field, in the person's units.
+    await page.getByLabel('Rise across the IT').fill('90');
+    await expect.poll(() => page.getByText('Enter a number from 1 to 40 K.').isVisible()).toBe(true);
+    await h.screenshot('scenario-editor-invalid-si');
+    await page.getByLabel('Rise across the IT').fill('12');
+    await h.screenshot('scenario-editor-si');
+
+    await page.getByRole('button', { name: 'Save and run' }).click();
+    await page.waitForURL(/\/runs\/\d+$/, { timeout: 15_000 });
+    firstRunId = Number(page.url().split('/').pop());
+    await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 20_000 }).toBe('done');
+    const hoursTable = await page.getByTestId('mode-hours').innerText();
+    // 72 hours in the file; none above 22 °C, so with a 24 °C supply and 1 K fan heat no hour needs compressors.
+    expect(hoursTable).toMatch(/All hours\s+72/);
+    expect(hoursTable).toMatch(/Mechanical\s+0\s+0\.0 %/);
+    expect(await page.getByTestId('ppue').innerText()).toMatch(/^1\.\d{3}$/);
+    await chartsDrawn(page);
+    await expect.poll(() => page.getByTestId('bin-table').locator('tbody tr').count(), { timeout: 15_000 }).toBeGreaterThan(2);
+    expect(await page.getByTestId('run-inputs').innerText()).toContain('system.supplyAirC');
+    expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
+    await h.screenshot('run-page-si');
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    expect(await page.getByTestId('run-inputs').innerText()).toContain('75.2 °F');
+    await h.screenshot('run-page-ip');
+  });
+
+  it('edits the scenario in IP units, runs it again and compares the two runs', async () => {
+    const page = h.page;
+    await page.getByRole('link', { name: 'Open scenario' }).click();
+    await page.waitForURL(/\/scenarios\/\d+$/);
+    scenarioId = Number(page.url().split('/').pop());
+    // 59 °F is 15 °C exactly: the form keeps SI whatever the person types in.
+    await page.getByLabel('Supply air setpoint').fill('59');
+    await page.getByLabel('Name').fill('Direct air, 15 °C supply');
+    await h.screenshot('scenario-editor-ip');
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    await expect.poll(() => page.getByText('Unsaved changes').isVisible()).toBe(false);
+    const stored = await api<{ scenario: { scenario: { system: { supplyAirC: number } } } }>(engineer, 'GET', `/projects/${projectId}/scenarios/${scenarioId}`);
+    expect(stored.scenario.scenario.system.supplyAirC).toBeCloseTo(15, 9);
+
+    await page.getByRole('button', { name: 'Run', exact: true }).click();
+    await page.waitForURL(/\/runs\/\d+$/);
+    secondRunId = Number(page.url().split('/').pop());
+    await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 20_000 }).toBe('done');
+
+    await page.goto(`${h.baseUrl}/projects/${projectId}/compare?runs=${firstRunId},${secondRunId}`);
+    const table = page.getByTestId('comparison-table');
+    await table.waitFor();
+    const text = await table.innerText();
+    expect(text).toContain('baseline');
+    expect(text).toContain('Direct air, 15 °C supply');
+    await chartsDrawn(page);
+    await h.screenshot('compare-ip');
+    await useUnits(page, 'SI');
+    await chartsDrawn(page);
+    await h.screenshot('compare-si');
+  });
+
+  it('shows the envelope library and the air-state calculator', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/envelopes`);
+    await expect.poll(() => page.getByTestId('envelope-entry').count()).toBeGreaterThan(5);
+    await page.getByLabel('Name', { exact: true }).fill('Client hall limits');
+    await page.getByRole('textbox', { name: /Dry-bulb, lowest/ }).fill('18');
+    await page.getByRole('textbox', { name: /Dry-bulb, highest/ }).fill('29');
+    await page.getByRole('textbox', { name: /Dew point, lowest/ }).fill('-9');
+    await page.getByRole('textbox', { name: /Dew point, highest/ }).fill('15');
+    await page.getByRole('textbox', { name: /RH, lowest/ }).fill('8');
+    await page.getByRole('textbox', { name: /RH, highest/ }).fill('70');
+    await page.getByRole('button', { name: 'Add envelope' }).click();
+    await expect.poll(() => page.getByTestId('envelope-entry').filter({ hasText: 'Client hall limits' }).count()).toBe(1);
+    await chartsDrawn(page);
+    await h.screenshot('envelopes-si');
+
+    await page.getByRole('link', { name: 'Air-state calculator' }).click();
+    await page.waitForURL('**/calculator');
+    // ASHRAE Handbook—Fundamentals 2017 ch. 1 / psychrolib: 30 °C, 50 % RH at 101.325 kPa has a wet-bulb near 22.0 °C
+    // (psychrolib GetTWetBulbFromRelHum(30, 0.5, 101325) = 22.02, recalled from memory).
+    const state = page.getByTestId('calculated-state');
+    await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+22\.0 °C/);
+    await chartsDrawn(page);
+    await h.screenshot('calculator-si');
+    // A third property over-determines the state; the engine's own words are shown.
+    await page.getByLabel(/^Dew point/).fill('10');
+    await expect.poll(() => page.getByTestId('calculator-refusal').innerText()).toContain('moist air has three independent properties');
+    await h.screenshot('calculator-refused');
+  });
+});
+
+describe('a viewer of the project', () => {
+  it('sees the results and cannot edit or run', async () => {
+    await signInAs(viewer);
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${firstRunId}`);
+    await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 15_000 }).toBe('done');
+    expect(await page.getByTestId('mode-hours').innerText()).toMatch(/All hours\s+72/);
+    await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/${scenarioId}`);
+    await expect.poll(() => page.getByText('Read-only').isVisible()).toBe(true);
+    expect(await page.getByLabel('Supply air setpoint').isDisabled()).toBe(true);
+    expect(await page.getByRole('button', { name: /Save/ }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: /Run/ }).count()).toBe(0);
+    await h.screenshot('scenario-viewer-si');
+    // The server refuses the change too, whatever the screen shows.
+    const res = await fetch(`${h.baseUrl}/api/projects/${projectId}/runs`, {
+      method: 'POST',
+      headers: { cookie: viewer.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
+      body: JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [1] }),
+    });
+    expect(res.status).toBe(403);
+  });
+});
