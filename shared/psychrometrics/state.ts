@@ -45,18 +45,26 @@ export interface MoistAirRequest {
   saturated?: boolean;
 }
 
+/** Every property of a one-phase moist-air state, SI. */
 export interface MoistAirState {
   pressurePa: number;
   dryBulbC: number;
+  /** kg water per kg dry air. */
   humidityRatio: number;
   rhPct: number;
+  /** Dew point above 0.01 °C, frost point below; NaN for perfectly dry air. */
   dewPointC: number;
+  /** Thermodynamic wet-bulb (ASHRAE 2017 ch. 1 eq. 33/35). */
   wetBulbC: number;
+  /** kJ per kg dry air, dry air and liquid water at 0 °C as zero. */
   enthalpyKJPerKg: number;
   vapourPressurePa: number;
+  /** m³ per kg dry air. */
   specificVolumeM3PerKg: number;
+  /** kg moist air per m³. */
   densityKgPerM3: number;
   degreeOfSaturation: number;
+  /** kg water per kg moist air. */
   specificHumidity: number;
 }
 
