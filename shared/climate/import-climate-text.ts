@@ -175,7 +175,7 @@ function checkOptions(options: ImportOptions, ctx: Context): boolean {
   }
   if (options.timeZone !== undefined) {
     if (typeof options.timeZone !== 'string' || !isKnownTimeZone(options.timeZone)) {
-      log.error('invalid-option', `Unknown time zone "${String(options.timeZone)}"; give an IANA name such as Europe/Paris.`, {
+      log.error('invalid-option', `Unknown time zone "${String(options.timeZone)}"; give an IANA name such as Europe/Paris, or a fixed offset such as UTC-07:00 for local standard time.`, {
         value: String(options.timeZone),
       });
       return false;

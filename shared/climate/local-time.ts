@@ -22,8 +22,24 @@ export interface LocalToUtc {
   lastEvent: LocalTimeEvent | null;
 }
 
-/** Whether Intl knows the zone; false for anything else. */
+const FIXED_OFFSET = /^(?:UTC|GMT)?\s*([+\-\u2212])(\d{1,2})(?::?(\d{2}))?$/;
+
+/**
+ * A fixed offset written `UTC+05:00`, `UTC-7`, `+0530` or `GMT−03:00`, in ms east of UTC; NaN otherwise.
+ * Files in local standard time (no daylight saving) need this rather than their region's IANA zone.
+ */
+export function fixedOffsetMs(timeZone: string): number {
+  const match = FIXED_OFFSET.exec(timeZone.trim());
+  if (!match) return NaN;
+  const hours = Number(match[2]);
+  const minutes = match[3] ? Number(match[3]) : 0;
+  if (hours > 14 || minutes > 59) return NaN;
+  return (match[1] === '+' ? 1 : -1) * (hours * 60 + minutes) * 60_000;
+}
+
+/** Whether the zone is a fixed offset or an IANA name Intl knows; false for anything else. */
 export function isKnownTimeZone(timeZone: string): boolean {
+  if (!Number.isNaN(fixedOffsetMs(timeZone))) return true;
   try {
     new Intl.DateTimeFormat('en-US', { timeZone });
     return true;
@@ -128,8 +144,10 @@ function offsetTable(timeZone: string): (utcMs: number) => number {
   };
 }
 
-/** A converter for one zone (must be known: check with isKnownTimeZone first). */
+/** A converter for one zone or fixed offset (must be known: check with isKnownTimeZone first). */
 export function createLocalToUtc(timeZone: string): LocalToUtc {
+  const fixed = fixedOffsetMs(timeZone);
+  if (!Number.isNaN(fixed)) return { lastEvent: null, toUtc: (localMs) => localMs - fixed };
   const offsetAt = offsetTable(timeZone);
   const ambiguousSeen = new Set<number>();
 

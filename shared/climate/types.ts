@@ -100,7 +100,10 @@ export interface ImportOptions {
   mapping?: Partial<ColumnMappingOverride>;
   /** Longest run of missing hours filled by linear interpolation; longer runs stay missing. Default 6. */
   maxGapHours?: number;
-  /** IANA zone for local timestamps without offset; default 'UTC'. */
+  /**
+   * Zone of local timestamps without offset: an IANA name (daylight saving applied, e.g. Europe/Paris)
+   * or a fixed offset such as 'UTC-07:00' for files in local standard time. Default 'UTC'.
+   */
   timeZone?: string;
 }
 

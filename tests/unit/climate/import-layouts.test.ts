@@ -273,3 +273,25 @@ describe('mapping overrides', () => {
     expect(values(mapped.series?.dryBulbC)).toEqual([10, 11]);
   });
 });
+
+describe('details of recognition', () => {
+  it('moves hourly stamps at a fixed minute (:50) to the nearest whole hour and says so', () => {
+    const text = 'timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:50Z,1,80\n2021-01-01T01:50Z,2,80\n2021-01-01T02:50Z,3,80\n';
+    const { series, report } = importClimateText(text);
+    expect(iso(series!.timestampsMs[0])).toBe('2021-01-01T01:00:00.000Z');
+    expect(series?.timestampsMs.length).toBe(3);
+    expect(report.issues).toContainEqual(expect.objectContaining({ kind: 'timestamps-rounded' }));
+  });
+
+  it('keeps one humidity measure, preferring dew point to RH at equal confidence, and says which was left', () => {
+    const text = 'timestamp,dry_bulb_c,relative_humidity_pct,dew_point_c\n2021-01-01T00:00Z,10,80,6.7\n2021-01-01T01:00Z,10,80,6.7\n';
+    const { mapping, report } = importClimateText(text);
+    expect(mapping.humidity).toMatchObject({ quantity: 'dew-point', header: 'dew_point_c' });
+    expect(report.issues).toContainEqual(expect.objectContaining({ kind: 'other-humidity-ignored', column: 'relative_humidity_pct' }));
+  });
+
+  it('reads a file in local standard time through a fixed offset', () => {
+    const { series } = load('fahrenheit-inhg-ymdh.csv', { timeZone: 'UTC-07:00' });
+    expect(iso(series!.timestampsMs[0])).toBe('2021-03-02T05:00:00.000Z'); // 22:00 local = 05:00 UTC next day
+  });
+});

@@ -9,7 +9,7 @@ import {
   parseIntegerCell,
   parseTimeCell,
 } from '../../../shared/climate/time-cells';
-import { createLocalToUtc } from '../../../shared/climate/local-time';
+import { createLocalToUtc, fixedOffsetMs } from '../../../shared/climate/local-time';
 
 describe('daysFromCivil', () => {
   it('agrees with Date.UTC on every day from 1600 to 2400', () => {
@@ -96,5 +96,22 @@ describe('createLocalToUtc', () => {
   it('handles zones without daylight saving and with half-hour offsets', () => {
     expect(createLocalToUtc('America/Phoenix').toUtc(Date.UTC(2021, 6, 1, 12))).toBe(Date.UTC(2021, 6, 1, 19));
     expect(createLocalToUtc('Asia/Kolkata').toUtc(Date.UTC(2021, 6, 1, 12))).toBe(Date.UTC(2021, 6, 1, 6, 30));
+  });
+});
+
+describe('fixed offsets for files in local standard time', () => {
+  it.each([
+    ['UTC-07:00', Date.UTC(2021, 6, 1, 19)],
+    ['UTC+5', Date.UTC(2021, 6, 1, 7)],
+    ['+0530', Date.UTC(2021, 6, 1, 6, 30)],
+    ['GMT−03:00', Date.UTC(2021, 6, 1, 15)],
+  ])('%s', (zone, utc) => {
+    expect(createLocalToUtc(zone).toUtc(Date.UTC(2021, 6, 1, 12))).toBe(utc);
+  });
+});
+
+describe('fixedOffsetMs', () => {
+  it('refuses what is not an offset', () => {
+    for (const text of ['UTC05', 'A5', 'UTC+15', 'Europe/Paris', '']) expect(fixedOffsetMs(text)).toBeNaN();
   });
 });
