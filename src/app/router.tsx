@@ -3,6 +3,14 @@ import { AppShell } from '@/components/layout/app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import { RouteError } from './routes/route-error';
+import { SignInPage } from '@/features/auth/components/sign-in-page';
+import { RequireSignIn } from '@/features/auth/components/require-sign-in';
+import { SettingsPage } from '@/features/auth/components/settings-page';
+import { MailboxPage } from '@/features/auth/components/mailbox-page';
+import { AcceptInvitePage } from '@/features/members/components/accept-invite-page';
+import { MembersPage } from '@/features/members/components/members-page';
+import { PeoplePage } from '@/features/members/components/people-page';
+import { AuditPage } from '@/features/audit/components/audit-page';
 
 const router = createBrowserRouter([
   {
@@ -17,6 +25,24 @@ const router = createBrowserRouter([
       { path: 'projects/:projectId/compare', lazy: () => import('@/features/compare/components/compare-page').then((m) => ({ Component: m.ComparePage })) },
       { path: 'projects/:projectId/envelopes', lazy: () => import('@/features/envelopes/components/envelopes-page').then((m) => ({ Component: m.EnvelopesPage })) },
       { path: 'calculator', lazy: () => import('@/features/calculator/components/calculator-page').then((m) => ({ Component: m.CalculatorPage })) },
+      // Project overview, sites and climate files.
+      { path: 'projects/:projectId', lazy: () => import('./routes/project-overview').then((m) => ({ Component: m.ProjectOverviewRoute })) },
+      { path: 'projects/:projectId/climate-files/new', lazy: () => import('./routes/climate-file-upload').then((m) => ({ Component: m.ClimateFileUploadRoute })) },
+      { path: 'projects/:projectId/climate-files/:fileId', lazy: () => import('./routes/climate-file').then((m) => ({ Component: m.ClimateFileRoute })) },
+      // Sign-in, settings, members, invitations, audit trail and the local mailbox.
+      { path: 'sign-in', element: <SignInPage /> },
+      {
+        element: <RequireSignIn />,
+        children: [
+          { path: 'settings', element: <SettingsPage /> },
+          { path: 'invites/accept', element: <AcceptInvitePage /> },
+          { path: 'projects/:projectId/members', element: <MembersPage /> },
+          { path: 'projects/:projectId/audit', element: <AuditPage /> },
+          { path: 'audit', element: <AuditPage /> },
+          { path: 'admin/people', element: <PeoplePage /> },
+          { path: 'mailbox', element: <MailboxPage /> },
+        ],
+      },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

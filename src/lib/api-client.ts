@@ -12,6 +12,8 @@ export class ApiError extends Error {
 
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
   const headers = new Headers(init.headers);
+  // The server refuses signed-in changes without this header: a cross-site form or image cannot add it.
+  headers.set('x-tramontane-request', '1');
   if (init.body && !(init.body instanceof FormData) && !headers.has('content-type')) {
     headers.set('content-type', 'application/json');
   }

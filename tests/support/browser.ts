@@ -1,11 +1,11 @@
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
-import type { Server } from 'node:http';
+import { createServer, type Server } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { appRoot, clientDistFolder } from '../../server/paths';
-import { createTestApp, type TestApp } from './test-app';
+import { startSignInStack, type SignInStack } from './sign-in';
 
 export const screenshotFolder = path.join(appRoot, 'test-results', 'screenshots');
 
@@ -13,18 +13,21 @@ export interface BrowserHarness {
   baseUrl: string;
   page: Page;
   context: BrowserContext;
-  testApp: TestApp;
+  /** The app with the fake sign-in provider and fake SMTP server beside it. */
+  testApp: SignInStack;
   screenshot: (name: string) => Promise<string>;
   close: () => Promise<void>;
 }
 
 /** The built app on a free loopback port, and Debian's Chromium with a fresh profile pointed at it. */
 export async function startBrowserHarness(): Promise<BrowserHarness> {
-  const testApp = createTestApp({ clientDist: clientDistFolder });
+  // The port comes first: the fake sign-in provider must know the app's callback address.
   const server: Server = await new Promise((resolve) => {
-    const s = testApp.app.listen(0, '127.0.0.1', () => resolve(s));
+    const s = createServer().listen(0, '127.0.0.1', () => resolve(s));
   });
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const testApp: SignInStack = await startSignInStack({ publicUrl: baseUrl, overrides: { clientDist: clientDistFolder } });
+  server.on('request', testApp.app);
   const profile = mkdtempSync(path.join(tmpdir(), 'tramontane-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -54,6 +57,7 @@ export async function startBrowserHarness(): Promise<BrowserHarness> {
     },
     close: async () => {
       await context.close();
+      server.closeAllConnections();
       await new Promise((resolve) => server.close(resolve));
       await testApp.close();
       rmSync(profile, { recursive: true, force: true });

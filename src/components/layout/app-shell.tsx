@@ -1,5 +1,6 @@
 import { NavLink, Outlet } from 'react-router-dom';
 import { HealthIndicator } from '@/features/health/components/health-indicator';
+import { AccountMenu, useAdminNavItems } from '@/features/auth/components/account-menu';
 
 const nav = [
   { to: '/', label: 'Projects', end: true },
@@ -7,6 +8,7 @@ const nav = [
 ];
 
 export function AppShell() {
+  const items = [...nav, ...useAdminNavItems()];
   return (
     <div className="min-h-screen flex flex-col">
       <header className="bg-harbour text-paper">
@@ -16,7 +18,7 @@ export function AppShell() {
             <span className="text-xs text-mist/80">cooling hours, hour by hour</span>
           </a>
           <nav aria-label="Main" className="flex gap-1 text-sm">
-            {nav.map((item) => (
+            {items.map((item) => (
               <NavLink
                 key={item.to}
                 to={item.to}
@@ -29,8 +31,9 @@ export function AppShell() {
               </NavLink>
             ))}
           </nav>
-          <div className="ml-auto">
+          <div className="ml-auto flex items-center gap-5">
             <HealthIndicator />
+            <AccountMenu />
           </div>
         </div>
       </header>
