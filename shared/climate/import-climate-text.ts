@@ -206,6 +206,13 @@ function isTextCell(cell: string): boolean {
   return true;
 }
 
+/** Fields up to the last non-empty one: a trailing delimiter on some lines does not change the shape. */
+function width(row: string[]): number {
+  let n = row.length;
+  while (n > 0 && row[n - 1].trim() === '') n--;
+  return n;
+}
+
 interface Layout {
   headerIndex: number;
   dataStart: number;
@@ -222,10 +229,10 @@ function findLayout(parsed: ParsedRows, ctx: Context): Layout | null {
   }
   if (candidates.length === 0) return null;
   const tally = new Map<number, number>();
-  for (const i of candidates) tally.set(parsed.rows[i].length, (tally.get(parsed.rows[i].length) ?? 0) + 1);
-  let modal = parsed.rows[candidates[0]].length;
+  for (const i of candidates) tally.set(width(parsed.rows[i]), (tally.get(width(parsed.rows[i])) ?? 0) + 1);
+  let modal = width(parsed.rows[candidates[0]]);
   for (const [n, times] of tally) if (times > (tally.get(modal) ?? 0)) modal = n;
-  const headerIndex = candidates.find((i) => parsed.rows[i].length === modal) ?? candidates[0];
+  const headerIndex = candidates.find((i) => width(parsed.rows[i]) === modal) ?? candidates[0];
   for (const i of candidates) {
     if (i >= headerIndex) break;
     ctx.log.info('preamble-skipped', 'A line before the header was skipped as a note.', {
@@ -252,9 +259,9 @@ function findLayout(parsed: ParsedRows, ctx: Context): Layout | null {
   let dataStart = headerIndex + 1;
   while (dataStart < parsed.rows.length && (isBlankRow(parsed.rows[dataStart]) || isCommentRow(parsed.rows[dataStart]))) dataStart++;
   const next = parsed.rows[dataStart];
-  if (next && next.length === headers.length && next.some((c) => c.trim() !== '') && next.every((c) => c.trim() === '' || isTextCell(c))) {
+  if (next && width(next) === width(headerRow) && next.some((c) => c.trim() !== '') && next.every((c) => c.trim() === '' || isTextCell(c))) {
     // a second header row holding the units, as spreadsheets often have
-    for (let i = 0; i < headers.length; i++) if (next[i].trim() !== '') headers[i] = `${headers[i]} (${next[i].trim()})`;
+    for (let i = 0; i < headers.length; i++) if ((next[i] ?? '').trim() !== '') headers[i] = `${headers[i]} (${next[i].trim()})`;
     dataStart++;
   }
   return { headerIndex, dataStart, headers, hasHeader: true };

@@ -175,3 +175,12 @@ describe('line numbers', () => {
     expect(result.report.counts.issuesNotListed).toBeGreaterThanOrEqual(15);
   });
 });
+
+describe('shape of the rows', () => {
+  it('finds the header when data rows end with a delimiter and the header does not', () => {
+    const result = importClimateText('timestamp;dry_bulb_c;relative_humidity_pct\n2021-01-01T00:00Z;10;80;\n2021-01-01T01:00Z;11;81;\n');
+    expect(result.ok).toBe(true);
+    expect(result.mapping.headerLine).toBe(1);
+    expect(result.report.issues.filter((i) => i.kind === 'preamble-skipped')).toEqual([]);
+  });
+});
