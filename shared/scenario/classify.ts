@@ -4,10 +4,15 @@
  * envelope excursions, and the water the evaporative stage takes up. Typed arrays in and out,
  * no object per hour; the rules per system kind are written out in FORMULAS.md.
  */
-import { dewPointFromHumidityRatio, humidityRatioFromDewPoint, humidityRatioFromRh, saturationPressurePa } from '../psychrometrics';
+import {
+  dewPointFromHumidityRatio,
+  humidityRatioAtDewPointLimit,
+  humidityRatioAtRhLimit,
+  humidityRatioFromWetBulb,
+  maxHumidityRatioForLimits,
+} from '../psychrometrics';
 import type { EnvelopeLimits } from './envelopes';
 import type { ScenarioSystem } from './schema';
-import { humidityRatioOnWetBulbLine, saturatedHumidityRatio } from './wet-bulb-line';
 
 export const MODE = { free: 0, adiabatic: 1, mechanical: 2, noData: 3 } as const;
 export type ModeCode = (typeof MODE)[keyof typeof MODE];
@@ -67,8 +72,8 @@ interface MoistureTargets {
  * eq. 20, 22, 36 through shared/psychrometrics.
  */
 export function moistureTargets(limits: InletLimits, supplyAirC: number, pressurePa: number): MoistureTargets {
-  const highW = Math.min(humidityRatioFromDewPoint(limits.dewPointMaxC, pressurePa), humidityRatioFromRh(supplyAirC, limits.rhMaxPct, pressurePa));
-  const lowW = Math.max(humidityRatioFromDewPoint(limits.dewPointMinC, pressurePa), humidityRatioFromRh(supplyAirC, limits.rhMinPct, pressurePa));
+  const highW = maxHumidityRatioForLimits(supplyAirC, { dewPointMaxC: limits.dewPointMaxC, rhMaxPct: limits.rhMaxPct }, pressurePa);
+  const lowW = Math.max(humidityRatioAtDewPointLimit(limits.dewPointMinC, pressurePa), humidityRatioAtRhLimit(supplyAirC, limits.rhMinPct, pressurePa));
   return { highW, lowW, highDewPointC: dewPointFromHumidityRatio(highW, pressurePa) };
 }
 
@@ -119,9 +124,12 @@ export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours
 /** Classifies hour i of a known-good outdoor state (°C, kg/kg, °C, Pa), writing into the outputs. */
 type HourRule = (i: number, t: number, w: number, twb: number, p: number) => void;
 
-/** Humidity ratio where the hour's wet-bulb line reaches tC. */
+/**
+ * Humidity ratio where the hour's wet-bulb line reaches tC (ASHRAE 2017 ch. 1 eq. 33/35). Callers pass
+ * tC ≥ wetBulbC by construction; the clamp only absorbs rounding of t − ε(t − t*) at ε = 1.
+ */
 function wetBulbLineW(tC: number, wetBulbC: number, pressurePa: number): number {
-  return humidityRatioOnWetBulbLine(tC, wetBulbC, saturatedHumidityRatio(saturationPressurePa(wetBulbC), pressurePa));
+  return humidityRatioFromWetBulb(tC > wetBulbC ? tC : wetBulbC, wetBulbC, pressurePa);
 }
 
 /** Moist-air enthalpy, kJ/kg dry air: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 32. Inlined for the loop. */
