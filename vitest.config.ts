@@ -1,3 +1,4 @@
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
 // Four projects share one run: pure modules, the HTTP API through supertest,
@@ -23,6 +24,8 @@ export default defineConfig({
         },
       },
       {
+        // The client's '@/…' imports, as in vite.config.ts, so component tests load src/ as the app does.
+        resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
         test: {
           name: 'component',
           include: ['tests/component/**/*.test.{ts,tsx}'],

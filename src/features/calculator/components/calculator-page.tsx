@@ -67,26 +67,26 @@ export function CalculatorPage() {
                 </label>
               ))}
             </fieldset>
-            <label className="mt-2 grid grid-cols-[10rem_1fr_4rem] items-center gap-2 text-sm">
+            <label className="mt-2 grid grid-cols-[9rem_minmax(0,1fr)_3.5rem] items-center gap-2 text-sm">
               <span>{input.basis === 'elevation' ? 'Elevation' : 'Pressure'}</span>
               <input
                 value={input.basisText}
                 inputMode="decimal"
                 onChange={(e) => setInput((i) => ({ ...i, basisText: e.target.value }))}
-                className="num rounded border border-rule bg-panel px-2 py-1 text-right"
+                className="num w-full min-w-0 rounded border border-rule bg-panel px-2 py-1 text-right"
               />
               <span className="text-xs text-ink-soft">{unitOf(input.basis === 'elevation' ? 'elevation' : 'pressure', unitSystem)}</span>
             </label>
             <div className="mt-3 border-t border-rule pt-3">
               {propertyInputs.map((p) => (
-                <label key={p.key} className="grid grid-cols-[10rem_1fr_4rem] items-center gap-2 py-1 text-sm">
+                <label key={p.key} className="grid grid-cols-[9rem_minmax(0,1fr)_3.5rem] items-center gap-2 py-1 text-sm">
                   <span>{p.label}</span>
                   <input
                     value={input.properties[p.key] ?? ''}
                     inputMode="decimal"
                     onChange={(e) => setProperty(p.key, e.target.value)}
                     aria-label={`${p.label} (${unitFor(p.kind)})`}
-                    className="num rounded border border-rule bg-panel px-2 py-1 text-right"
+                    className="num w-full min-w-0 rounded border border-rule bg-panel px-2 py-1 text-right"
                   />
                   <span className="text-xs text-ink-soft">{unitFor(p.kind)}</span>
                 </label>

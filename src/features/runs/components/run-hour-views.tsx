@@ -3,6 +3,8 @@ import { CarpetPlot } from '@/components/charts/carpet-plot';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
+import { formatQuantity } from '@/lib/quantity';
+import { useUnitSystem } from '@/lib/unit-system';
 import { useClimateHours } from '../api/get-climate-hours';
 import type { RunRecord } from '../api/get-run';
 import { useRunHours } from '../api/get-run-hours';
@@ -25,9 +27,15 @@ export function RunHourViews({ run }: { run: RunRecord }) {
     () => (matched ? { dryBulbC: states.dryBulbC, humidityRatio: states.humidityRatio, modes } : null),
     [matched, states, modes],
   );
+  const { unitSystem } = useUnitSystem();
   const envelopes = useMemo(
-    () => [{ label: `Envelope as run (max dry-bulb ${results.envelope.dryBulbMaxC.toFixed(1)} °C after altitude derating)`, limits: { ...run.scenario.envelope, dryBulbMaxC: results.envelope.dryBulbMaxC } }],
-    [run.scenario.envelope, results.envelope.dryBulbMaxC],
+    () => [
+      {
+        label: `Envelope as run (max dry-bulb ${formatQuantity('temperature', unitSystem, results.envelope.dryBulbMaxC)} after altitude derating)`,
+        limits: { ...run.scenario.envelope, dryBulbMaxC: results.envelope.dryBulbMaxC },
+      },
+    ],
+    [run.scenario.envelope, results.envelope.dryBulbMaxC, unitSystem],
   );
   const markers = useMemo(
     () => [

@@ -9,7 +9,7 @@ export interface ClimateColumns {
 
 export interface HourStates extends BulkState {
   dryBulbC: Float64Array;
-  /** Pressure of the chart and of hours without station pressure, Pa (standard atmosphere at the site's elevation). */
+  /** Pressure for the chart, Pa: the mean station pressure when the file has one, else the standard atmosphere at the site's elevation. */
   sitePressurePa: number;
 }
 
@@ -28,13 +28,20 @@ function column(values: ArrayLike<number | null>): Float64Array {
  * (ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 3). Missing hours give NaN.
  */
 export function climateStates(columns: ClimateColumns, elevationM: number): HourStates {
-  const sitePressurePa = standardPressurePa(elevationM);
+  const standardPa = standardPressurePa(elevationM);
   const dryBulbC = column(columns.dryBulbC);
-  let pressure: Float64Array | number = sitePressurePa;
+  let pressure: Float64Array | number = standardPa;
+  let sitePressurePa = standardPa;
   if (columns.pressurePa) {
     const p = column(columns.pressurePa);
-    for (let i = 0; i < p.length; i++) if (p[i] !== p[i]) p[i] = sitePressurePa;
+    let sum = 0;
+    let count = 0;
+    for (let i = 0; i < p.length; i++) {
+      if (p[i] !== p[i]) p[i] = standardPa;
+      else (sum += p[i]), count++;
+    }
     pressure = p;
+    if (count > 0) sitePressurePa = sum / count;
   }
   const states = bulkStates({ dryBulbC, humidity: { kind: columns.humidityKind, values: column(columns.humidity) }, pressurePa: pressure });
   return { ...states, dryBulbC, sitePressurePa };

@@ -66,6 +66,6 @@ export function parseInputText(unit: FieldUnit, system: UnitSystem, text: string
 export function rangeText(unit: FieldUnit, system: UnitSystem, minSi: number, maxSi: number): string {
   const ends = [minSi, maxSi].map((v) => fieldToDisplay(unit, system, v)).sort((a, b) => a - b);
   const label = fieldUnitLabel(unit, system);
-  const show = (v: number) => (Math.abs(v) >= 1e5 ? v.toExponential(0) : String(Number(v.toFixed(3))));
+  const show = (v: number) => Number(v.toFixed(3)).toLocaleString('en', { maximumFractionDigits: 3 });
   return `${show(ends[0])} to ${show(ends[1])}${label ? ` ${label}` : ''}`;
 }

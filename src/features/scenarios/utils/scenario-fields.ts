@@ -121,7 +121,8 @@ export const energyFields: NumericField[] = [
     'energy.heatRejectionFanFraction',
     'Heat-rejection fan power',
     'shareAsPercent',
-    'Share of IT load for dry-cooler, tower or scavenger fans (water-side and indirect air).',
+    'Share of IT load for dry-cooler, tower or scavenger fans, every hour.',
+    ['water-side', 'indirect-air'],
   ),
   field(en.blowdownRatio, 'energy.blowdownRatio', 'Blowdown ratio', 'ratio', 'Water drained per volume evaporated; 0.33 is about four cycles of concentration.'),
   field(
@@ -130,6 +131,7 @@ export const energyFields: NumericField[] = [
     'Tower heat by evaporation',
     'shareAsPercent',
     'Share of a cooling tower’s heat rejected by evaporation; 85 % is a common rule of thumb.',
+    ['water-side'],
   ),
 ];
 

@@ -1,0 +1,101 @@
+import { createRequire } from 'node:module';
+import { describe, expect, it } from 'vitest';
+import type { RunListing } from '@/features/compare/api/get-runs';
+import { compareRuns } from '@/features/compare/utils/compare-runs';
+import { solveState } from '@/features/calculator/utils/state-request';
+
+const psychrolib = createRequire(import.meta.url)('psychrolib');
+psychrolib.SetUnitSystem(psychrolib.SI);
+
+function run(id: number, free: number, mechanical: number, partialPue: number, annualCoolingKwh: number): RunListing {
+  return {
+    id,
+    scenarioId: 1,
+    climateFileId: 1,
+    status: 'done',
+    createdAt: '2026-12-01T00:00:00Z',
+    scenario: { name: `Scenario ${id}`, system: { kind: 'direct-air' } },
+    climate: { name: 'synthetic', hours: 100, site: { name: 'Site' } },
+    results: {
+      hours: { free, adiabatic: 100 - free - mechanical, mechanical, noData: 0, total: 100 },
+      energy: {
+        itKwh: 1000,
+        fanKwh: 0,
+        compressorKwh: 0,
+        pumpKwh: 0,
+        coolingKwh: 0,
+        partialPue,
+        annual: { itKwh: 0, fanKwh: 0, compressorKwh: 0, pumpKwh: 0, coolingKwh: annualCoolingKwh },
+      },
+      water: { totalL: 0, annualL: 0, wueLPerKwh: 0 },
+      peakMechanicalLoadKw: mechanical * 10,
+    },
+  };
+}
+
+describe('comparing runs against a baseline', () => {
+  const runs = [run(1, 80, 10, 1.1, 400_000), run(2, 60, 30, 1.25, 500_000), { ...run(3, 0, 0, 1, 0), status: 'running' as const, results: null }];
+
+  it('gives each figure and its difference from the baseline, absolute and in per cent', () => {
+    const rows = compareRuns(runs, 1);
+    const free = rows.find((r) => r.metric.key === 'free')!;
+    // Runs without results are left out.
+    expect(free.cells.map((c) => c.runId)).toEqual([1, 2]);
+    expect(free.cells[0]).toMatchObject({ value: 80, difference: null, differencePct: null, verdict: 'none' });
+    expect(free.cells[1]).toMatchObject({ value: 60, difference: -20, verdict: 'worse' });
+    expect(free.cells[1].differencePct).toBeCloseTo(-25, 12);
+    const ppue = rows.find((r) => r.metric.key === 'ppue')!;
+    expect(ppue.cells[1].difference).toBeCloseTo(0.15, 12);
+    expect(ppue.cells[1].verdict).toBe('worse');
+    const cooling = rows.find((r) => r.metric.key === 'cooling')!;
+    expect(cooling.cells[1].differencePct).toBeCloseTo(25, 12);
+  });
+
+  it('turns the verdicts round when the baseline changes', () => {
+    const rows = compareRuns(runs, 2);
+    const mechanical = rows.find((r) => r.metric.key === 'mechanical')!;
+    expect(mechanical.cells.find((c) => c.runId === 1)).toMatchObject({ difference: -20, verdict: 'better' });
+  });
+
+  it('falls back to the first finished run when the baseline is not among them', () => {
+    expect(compareRuns(runs, 99)[0].cells[0].difference).toBeNull();
+    expect(compareRuns([], 1)).toEqual([]);
+  });
+});
+
+describe('the air-state calculator', () => {
+  it('gives the full state from dry-bulb and RH at an elevation, as psychrolib does', () => {
+    const out = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '30', rhPct: '50' }, saturated: false }, 'SI');
+    expect(out.ok).toBe(true);
+    if (!out.ok) return;
+    // psychrolib GetTWetBulbFromRelHum(30, 0.5, 101 325) = 22.005 °C.
+    expect(out.state.wetBulbC).toBeCloseTo(psychrolib.GetTWetBulbFromRelHum(30, 0.5, 101_325), 2);
+    expect(out.state.pressurePa).toBeCloseTo(101_325, 6);
+  });
+
+  it('reads IP inputs: 86 °F and 29.921 inHg are 30 °C and 101.32 kPa', () => {
+    const out = solveState({ basis: 'pressure', basisText: '29.921', properties: { dryBulbC: '86', rhPct: '50' }, saturated: false }, 'IP');
+    expect(out.ok).toBe(true);
+    if (!out.ok) return;
+    expect(out.state.dryBulbC).toBeCloseTo(30, 12);
+    // 1 inHg = 3386.389 Pa (NIST SP 811, 2008, App. B).
+    expect(out.state.pressurePa).toBeCloseTo(29.921 * 3386.38864, 3);
+  });
+
+  it('passes on the engine’s refusal of too few or too many properties', () => {
+    const few = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '30' }, saturated: false }, 'SI');
+    expect(few).toMatchObject({ ok: false, problem: 'under-determined' });
+    const many = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '30', rhPct: '50', dewPointC: '10' }, saturated: false }, 'SI');
+    expect(many).toMatchObject({ ok: false, problem: 'over-determined' });
+    if (!many.ok) expect(many.message).toContain('moist air has three independent properties');
+    const saturated = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '20' }, saturated: true }, 'SI');
+    expect(saturated.ok && saturated.state.rhPct).toBeCloseTo(100, 6);
+  });
+
+  it('names a box that is not a number', () => {
+    expect(solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: 'warm', rhPct: '50' }, saturated: false }, 'SI')).toMatchObject({
+      ok: false,
+      message: 'Dry-bulb is not a number.',
+    });
+  });
+});

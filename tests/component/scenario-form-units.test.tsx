@@ -1,0 +1,101 @@
+import { act } from 'react';
+import { createRoot, type Root } from 'react-dom/client';
+import { useForm } from 'react-hook-form';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { UnitSystemProvider } from '@/lib/unit-system';
+import { QuantityField } from '@/features/scenarios/components/quantity-field';
+import { fieldFromDisplay, fieldToDisplay, inputText, parseInputText, rangeText } from '@/features/scenarios/utils/field-units';
+import { energyFields, fieldsFor, systemFields } from '@/features/scenarios/utils/scenario-fields';
+
+(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
+
+const supply = systemFields.find((f) => f.path === 'system.supplyAirC')!;
+
+describe('scenario inputs in SI and IP', () => {
+  it('converts temperatures, differences and per-kelvin slopes exactly', () => {
+    // °F = 1.8·°C + 32 and ΔF = 1.8·ΔK exactly (NIST SP 811, 2008, §B.9).
+    expect(fieldToDisplay('temperature', 'IP', 25)).toBeCloseTo(77, 12);
+    expect(fieldFromDisplay('temperature', 'IP', 59)).toBeCloseTo(15, 12);
+    expect(fieldToDisplay('temperatureDifference', 'IP', 12)).toBeCloseTo(21.6, 12);
+    // A COP change of −0.09 per K is −0.05 per °F (a kelvin is 1.8 °F).
+    expect(fieldToDisplay('perKelvin', 'IP', -0.09)).toBeCloseTo(-0.05, 12);
+    expect(fieldFromDisplay('perKelvin', 'IP', -0.05)).toBeCloseTo(-0.09, 12);
+    // Shares of IT load are shown in per cent and kept as fractions.
+    expect(fieldToDisplay('shareAsPercent', 'SI', 0.04)).toBeCloseTo(4, 12);
+    expect(parseInputText('shareAsPercent', 'IP', '4')).toBeCloseTo(0.04, 12);
+    // International foot = 0.3048 m exactly (1959 agreement): 120 m = 393.7 ft.
+    expect(inputText('elevation', 'IP', 120, 1)).toBe('393.7');
+  });
+
+  it('shows the allowed range in the chosen units, from the shared schema', () => {
+    expect(rangeText(supply.unit, 'SI', supply.min, supply.max)).toBe('5 to 45 °C');
+    expect(rangeText(supply.unit, 'IP', supply.min, supply.max)).toBe('41 to 113 °F');
+    const rise = systemFields.find((f) => f.path === 'system.itDeltaTK')!;
+    expect(rangeText(rise.unit, 'IP', rise.min, rise.max)).toBe('1.8 to 72 °F');
+  });
+
+  it('reads unreadable or empty text as NaN, so the schema names the field', () => {
+    expect(parseInputText('temperature', 'SI', '')).toBeNaN();
+    expect(parseInputText('temperature', 'SI', '2x')).toBeNaN();
+    expect(parseInputText('temperature', 'SI', '21,5')).toBe(21.5);
+  });
+
+  it('offers only the fields of the chosen system kind', () => {
+    expect(fieldsFor(systemFields, 'direct-air').map((f) => f.path)).not.toContain('system.approachK');
+    expect(fieldsFor(systemFields, 'water-side').map((f) => f.path)).toContain('system.approachK');
+    expect(fieldsFor(energyFields, 'direct-air').map((f) => f.path)).not.toContain('energy.towerEvaporationShare');
+  });
+});
+
+describe('a quantity field in a form', () => {
+  let host: HTMLDivElement;
+  let root: Root;
+  let values: () => { system: { supplyAirC: number } };
+
+  function Harness() {
+    const form = useForm<{ system: { supplyAirC: number } }>({ defaultValues: { system: { supplyAirC: 24 } } });
+    values = form.getValues;
+    return <QuantityField control={form.control} field={supply} />;
+  }
+
+  function type(input: HTMLInputElement, text: string) {
+    // React listens for the native input event; set the value through the prototype's setter as a browser would.
+    Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value')!.set!.call(input, text);
+    input.dispatchEvent(new Event('input', { bubbles: true }));
+  }
+
+  beforeEach(() => {
+    host = document.createElement('div');
+    document.body.append(host);
+    root = createRoot(host);
+  });
+  afterEach(() => {
+    act(() => root.unmount());
+    host.remove();
+    localStorage.clear();
+  });
+
+  it('shows the SI value in °F and stores what is typed in °F as °C', () => {
+    localStorage.setItem('tramontane.unitSystem', 'IP');
+    act(() =>
+      root.render(
+        <UnitSystemProvider>
+          <Harness />
+        </UnitSystemProvider>,
+      ),
+    );
+    const input = host.querySelector('input')!;
+    // 24 °C = 75.2 °F.
+    expect(input.value).toBe('75.2');
+    expect(host.textContent).toContain('41 to 113 °F');
+    act(() => {
+      input.focus();
+      type(input, '64.4');
+    });
+    // 64.4 °F = 18 °C.
+    expect(values().system.supplyAirC).toBeCloseTo(18, 12);
+    // While typing, the box keeps the text as typed, even a trailing point.
+    act(() => type(input, '64.'));
+    expect(input.value).toBe('64.');
+  });
+});
