@@ -135,8 +135,33 @@ function readClock(s: string, allowCompact: boolean): number {
     }
   }
   if (minute > 59 || second > 59) return NaN;
+  const meridiem = readMeridiem(s);
+  if (meridiem !== 0) {
+    // 12-hour clock as US spreadsheets write it: 12:xx AM is just after midnight, 12:xx PM just after noon
+    if (hour < 1 || hour > 12) return NaN;
+    hour = (hour % 12) + (meridiem === 2 ? 12 : 0);
+  }
   if (hour > 24 || (hour === 24 && (minute !== 0 || second !== 0 || ms !== 0))) return NaN;
   return hour * 3_600_000 + minute * 60_000 + second * 1000 + ms;
+}
+
+/** Reads an optional AM or PM (any case, dots allowed) at `pos`: 0 none, 1 AM, 2 PM. */
+function readMeridiem(s: string): number {
+  const start = pos;
+  skipSpaces(s);
+  const c = s.charCodeAt(pos) | 32;
+  if (c === 97 /* a */ || c === 112 /* p */) {
+    let next = pos + 1;
+    if (s.charCodeAt(next) === 46) next++;
+    if ((s.charCodeAt(next) | 32) === 109 /* m */) {
+      next++;
+      if (s.charCodeAt(next) === 46) next++;
+      pos = next;
+      return c === 97 ? 1 : 2;
+    }
+  }
+  pos = start;
+  return 0;
 }
 
 /** Reads an optional Z, UTC or ±hh[:mm] at `pos` into lastParse.offsetMinutes; false when malformed. */

@@ -115,3 +115,18 @@ describe('fixedOffsetMs', () => {
     for (const text of ['UTC05', 'A5', 'UTC+15', 'Europe/Paris', '']) expect(fixedOffsetMs(text)).toBeNaN();
   });
 });
+
+describe('12-hour clock', () => {
+  it.each([
+    ['1/2/2021 12:00 AM', Date.UTC(2021, 0, 2, 0)],
+    ['1/2/2021 12:30:00 PM', Date.UTC(2021, 0, 2, 12, 30)],
+    ['1/2/2021 1:00 p.m.', Date.UTC(2021, 0, 2, 13)],
+    ['1/2/2021 11:00am', Date.UTC(2021, 0, 2, 11)],
+    ['1/2/2021 13:00 PM', NaN],
+  ])('%s', (cell, expected) => {
+    expect(parseDateTimeCell(cell, 'MDY')).toBe(expected);
+  });
+  it('in a time-only cell', () => {
+    expect(parseTimeCell('7:00 PM')).toBe(19 * 3_600_000);
+  });
+});
