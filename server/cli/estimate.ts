@@ -15,7 +15,7 @@ const USAGE = `Usage: npm run --silent estimate -- --weather FILE.csv --scenario
 
   --weather FILE        hourly weather (canonical CSV or any layout the importer recognises)
   --scenario FILE       scenario JSON (see sample-weather/scenarios/)
-  --hourly FILE         also write one CSV row per hour
+  --hourly FILE         also write one CSV row per hour (timestamps in UTC, file order)
   --elevation M         site elevation in metres (overrides the scenario's elevationM)
   --utc-offset-minutes N  local standard time offset for months and hours of day (default 0)
 
