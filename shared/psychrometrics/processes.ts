@@ -18,6 +18,7 @@ import { humidityRatioFromWetBulb, wetBulbFromHumidityRatio } from './wet-bulb';
 import {
   requireHumidityRatio,
   requireInRange,
+  requireNonNegative,
   requirePressurePa,
   requireRhPct,
   requireTemperatureC,
@@ -48,8 +49,8 @@ export interface MixedAir extends AirPoint {
  */
 export function mixAirStreams(a: AirStream, b: AirStream, pressurePa: number): MixedAir {
   requirePressurePa('pressurePa', pressurePa);
-  const massA = requireInRange('a.dryAirMass', a.dryAirMass, 0, Number.MAX_VALUE, 'kg');
-  const massB = requireInRange('b.dryAirMass', b.dryAirMass, 0, Number.MAX_VALUE, 'kg');
+  const massA = requireNonNegative('a.dryAirMass', a.dryAirMass);
+  const massB = requireNonNegative('b.dryAirMass', b.dryAirMass);
   if (massA + massB === 0) throw new RangeError('a.dryAirMass + b.dryAirMass must be > 0 kg');
   const hA = enthalpyKJPerKg(requireTemperatureC('a.dryBulbC', a.dryBulbC), requireHumidityRatio('a.humidityRatio', a.humidityRatio));
   const hB = enthalpyKJPerKg(requireTemperatureC('b.dryBulbC', b.dryBulbC), requireHumidityRatio('b.humidityRatio', b.humidityRatio));

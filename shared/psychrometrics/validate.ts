@@ -4,6 +4,7 @@
  */
 import { MAX_PRESSURE_PA, MAX_TEMPERATURE_C, MIN_PRESSURE_PA, MIN_TEMPERATURE_C } from './constants';
 
+/** Returns value if it is a finite number; otherwise throws a RangeError naming it. */
 export function requireFinite(name: string, value: number): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
     throw new RangeError(`${name} must be a finite number (got ${String(value)})`);
@@ -11,6 +12,7 @@ export function requireFinite(name: string, value: number): number {
   return value;
 }
 
+/** Returns value if it lies in [min, max] (unit for the message); otherwise throws a RangeError naming it. */
 export function requireInRange(name: string, value: number, min: number, max: number, unit: string): number {
   requireFinite(name, value);
   if (value < min || value > max) {
@@ -19,22 +21,31 @@ export function requireInRange(name: string, value: number, min: number, max: nu
   return value;
 }
 
+/** A temperature, °C, within the −100…200 °C range of the Hyland–Wexler equations. */
 export function requireTemperatureC(name: string, value: number): number {
   return requireInRange(name, value, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C, '°C');
 }
 
+/** A barometric pressure, Pa, within 10…120 kPa. */
 export function requirePressurePa(name: string, value: number): number {
   return requireInRange(name, value, MIN_PRESSURE_PA, MAX_PRESSURE_PA, 'Pa');
 }
 
+/** A relative humidity, %, within 0…100. */
 export function requireRhPct(name: string, value: number): number {
   return requireInRange(name, value, 0, 100, '%');
 }
 
-export function requireHumidityRatio(name: string, value: number): number {
+/** A finite number ≥ 0 (unit for the message). */
+export function requireNonNegative(name: string, value: number, unit = ''): number {
   requireFinite(name, value);
-  if (value < 0) throw new RangeError(`${name} must be ≥ 0 kg/kg (got ${value})`);
+  if (value < 0) throw new RangeError(`${name} must be ≥ 0${unit ? ` ${unit}` : ''} (got ${value})`);
   return value;
+}
+
+/** A humidity ratio, kg/kg, finite and ≥ 0. */
+export function requireHumidityRatio(name: string, value: number): number {
+  return requireNonNegative(name, value, 'kg/kg');
 }
 
 /** True when a bulk element lies in the engine's pressure range (NaN fails). */
