@@ -15,7 +15,7 @@ async function pickPerson(name: string) {
 }
 
 async function signOut() {
-  await h.page.getByRole('button', { name: 'Sign out' }).click();
+  await h.page.getByRole('button', { name: 'Sign out', exact: true }).click();
   await h.page.getByTestId('sign-in').waitFor();
 }
 
@@ -55,6 +55,15 @@ describe('signing in through the local provider', () => {
     await h.page.getByTestId('audit-table').waitFor();
     expect(await h.page.getByTestId('audit-table').innerText()).toContain('invite.sent');
     await h.screenshot('audit-trail');
+
+    await h.page.goto(`${h.baseUrl}/projects/1/audit`);
+    await h.page.getByText('Audit trail · Larchfield campus study (demo)').waitFor();
+    await h.screenshot('audit-trail-project');
+
+    await h.page.getByRole('link', { name: 'People' }).click();
+    await h.page.getByRole('cell', { name: 'Priya Castellane' }).waitFor();
+    expect(await h.page.getByRole('checkbox').first().isDisabled()).toBe(true); // the only admin cannot drop her own rights
+    await h.screenshot('admin-people');
   });
 
   it('the colleague opens the link signed out, signs in as someone new, and joins', async () => {
@@ -83,7 +92,7 @@ describe('signing in through the local provider', () => {
     await pickPerson('Priya Castellane');
     await h.page.getByTestId('account').waitFor();
     await h.page.goto(`${h.baseUrl}/projects/1/members`);
-    await h.page.getByText('You are viewer here').waitFor();
+    await h.page.getByText('You are a viewer here').waitFor();
     expect(await h.page.getByRole('button', { name: 'Send invitation' }).isDisabled()).toBe(true);
     expect(await h.page.getByRole('link', { name: 'Audit trail' }).count()).toBe(0);
     await h.screenshot('members-viewer');
@@ -94,6 +103,7 @@ describe('signing in through the local provider', () => {
   });
 
   it('explains a failed sign-in', async () => {
+    await signOut();
     await h.page.goto(`${h.baseUrl}/sign-in?problem=state_mismatch`);
     await h.page.getByText('This sign-in was started in another tab or browser').waitFor();
     await h.screenshot('sign-in-problem');

@@ -23,7 +23,7 @@ export function SignInPage() {
   return (
     <div className="mx-auto max-w-md space-y-4 py-8">
       {problem && (
-        <Notice tone="bad" title="You are not signed in">
+        <Notice tone="bad" title="Sign-in did not complete">
           {problems[problem] ?? 'Sign-in did not complete. Start again.'}
         </Notice>
       )}

@@ -87,8 +87,8 @@ export function InvitesPanel({ projectId, canManage }: { projectId: number; canM
           <tbody className="divide-y divide-rule">
             {invites.data.invites.map((invite) => (
               <tr key={invite.id}>
-                <td className="py-1.5">{invite.email}</td>
-                <td className="py-1.5">{invite.role}</td>
+                <td className="py-1.5 pr-3">{invite.email}</td>
+                <td className="py-1.5 pr-3">{invite.role}</td>
                 <td className={`py-1.5 ${statusTone[invite.status]}`}>
                   {invite.status}
                   {invite.status === 'pending' && <span className="num ml-1 text-xs text-ink-faint">until {invite.expiresAt.slice(0, 10)}</span>}

@@ -25,7 +25,7 @@ export function MembersPage() {
         <h1 className="text-xl font-semibold">{answer.project.name}</h1>
       </div>
       {!answer.canManage && (
-        <Notice title={`You are ${answer.yourRole} here`}>
+        <Notice title={`You are ${answer.yourRole === 'viewer' ? 'a' : 'an'} ${answer.yourRole} here`}>
           Only the project's owners can invite people or change roles. Ask an owner if someone needs access.
         </Notice>
       )}
