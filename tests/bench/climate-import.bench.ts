@@ -61,16 +61,16 @@ async function run(context: { log: (line: string) => void }): Promise<Record<str
   context.log(`climate-import: ${rows} rows (${(text.length / 1e6).toFixed(1)} MB canonical, ${(local.length / 1e6).toFixed(1)} MB local layout)`);
   let ok = true;
   importClimateText(text); // warm-up
-  const canonicalMs = bestOf(3, () => {
+  const canonicalMs = bestOf(5, () => {
     ok &&= importClimateText(text).ok;
   });
-  const localMs = bestOf(3, () => {
+  const localMs = bestOf(5, () => {
     ok &&= importClimateText(local, { timeZone: 'Etc/GMT-1' }).ok;
   });
   naiveImport(text);
-  const naiveMs = bestOf(3, () => naiveImport(text));
+  const naiveMs = bestOf(5, () => naiveImport(text));
   // the floor under our figure: papaparse alone splitting the same text in its fast mode
-  const splitOnlyMs = bestOf(3, () => Papa.parse<string[]>(text, { delimiter: ',', fastMode: true }));
+  const splitOnlyMs = bestOf(5, () => Papa.parse<string[]>(text, { delimiter: ',', fastMode: true }));
   const peakRssMb = process.resourceUsage().maxRSS / 1024;
   return {
     'climate-import.rows': rows,
