@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import { decodeFloat64Column, decodeUint8Column, encodeColumn, type ClimateSeries, type ImportResult } from '../../shared/climate';
 import type { HumidityKind } from '../../shared/psychrometrics';
-import type { Db } from '../db/client';
+import type { Db, DbOrTx } from '../db/client';
 import { climateFiles, climateOriginals, climateSeries } from '../db/schema';
 
 /** An encoded column as a Buffer over the same bytes, as Drizzle's blob columns take it. */
@@ -22,7 +22,7 @@ export interface NewClimateFile {
 }
 
 /** Stores a whole import — listing row, original bytes, series — in one transaction, or nothing. */
-export function saveClimateFile(db: Db, file: NewClimateFile): typeof climateFiles.$inferSelect {
+export function saveClimateFile(db: DbOrTx, file: NewClimateFile): typeof climateFiles.$inferSelect {
   const { series, report, mapping } = file.imported;
   return db.transaction((tx) => {
     const row = tx

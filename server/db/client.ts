@@ -19,3 +19,7 @@ export function openDatabase(file: string): Db {
   migrate(db, { migrationsFolder });
   return db;
 }
+
+/** A transaction handle; code that must work inside or outside one takes `DbOrTx`. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+export type DbOrTx = Db | Tx;

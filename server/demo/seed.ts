@@ -1,7 +1,8 @@
-import { count } from 'drizzle-orm';
+import { count, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { projects } from '../db/schema';
-import { seedDemoPeople } from './people';
+import { projects, users } from '../db/schema';
+import { demoPeople, seedDemoPeople } from './people';
+import { seedDemoClimate } from './climate';
 
 /**
  * Fills an empty database with the synthetic demo workspace. Every project, person and site in it
@@ -20,6 +21,9 @@ export function seedDemo(db: Db): { seeded: boolean } {
       .returning({ id: projects.id })
       .get();
     seedDemoPeople(tx, project.id);
+    const engineerEmail = demoPeople.find((p) => p.role === 'engineer')?.email ?? '';
+    const engineer = tx.select({ id: users.id }).from(users).where(eq(users.email, engineerEmail)).get();
+    seedDemoClimate(tx, project.id, engineer?.id ?? null);
   });
   return { seeded: true };
 }

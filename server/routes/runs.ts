@@ -1,14 +1,14 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { z } from 'zod';
 import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
-import { ENGINE_VERSION, MODE_NAMES } from '../../shared/scenario';
-import { standardOffsetMinutes } from '../../shared/time-zone';
+import { MODE_NAMES } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { findClimateFile } from '../climate/store';
 import { runHours, runs, scenarios, sites } from '../db/schema';
 import { HttpError } from '../http-error';
 import { validScenario } from './scenarios';
+import { newRunValues } from '../runs/new-run';
 
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
 const maxRunsPerRequest = 200;
@@ -85,25 +85,16 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
           return files.map(({ file, site }) =>
             tx
               .insert(runs)
-              .values({
-                projectId,
-                scenarioId: scenarioRow.id,
-                climateFileId: file.id,
-                scenarioJson: JSON.stringify(scenario),
-                climateJson: JSON.stringify({
-                  id: file.id,
-                  name: file.name,
-                  sha256: file.sha256,
-                  hours: file.hours,
-                  firstHourMs: file.firstHourMs,
-                  lastHourMs: file.lastHourMs,
-                  site: { id: site.id, name: site.name, elevationM: site.elevationM, timeZone: site.timeZone },
-                  elevationM: site.elevationM,
-                  utcOffsetMinutes: standardOffsetMinutes(site.timeZone),
+              .values(
+                newRunValues({
+                  projectId,
+                  scenarioId: scenarioRow.id,
+                  scenarioJson: JSON.stringify(scenario),
+                  file,
+                  site,
+                  createdBy: req.user!.id,
                 }),
-                engineVersion: ENGINE_VERSION,
-                createdBy: req.user!.id,
-              })
+              )
               .returning()
               .get(),
           );

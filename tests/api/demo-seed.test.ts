@@ -1,0 +1,39 @@
+import { count } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { climateFiles, projects, runs, scenarios, sites } from '../../server/db/schema';
+import { seedDemo } from '../../server/demo/seed';
+import { createTestApp, type TestApp } from '../support/test-app';
+
+let t: TestApp;
+beforeAll(() => {
+  t = createTestApp();
+});
+afterAll(() => t.close());
+
+const n = (table: typeof projects | typeof sites | typeof climateFiles | typeof scenarios | typeof runs) => t.db.select({ n: count() }).from(table).get()!.n;
+
+describe('the demo workspace on a fresh installation', () => {
+  it('loads four synthetic sites with three years each, three scenarios and a queued run of each on each site', async () => {
+    expect(seedDemo(t.db)).toEqual({ seeded: true });
+    expect(n(projects)).toBe(1);
+    expect(n(sites)).toBe(4);
+    const files = t.db.select().from(climateFiles).all();
+    expect(files).toHaveLength(4);
+    for (const f of files) {
+      // Three calendar years of hours (2021–2023: 26,280 hours), give or take the time-zone shift at the ends.
+      expect(f.hours).toBeGreaterThan(26_200);
+      expect(f.hours).toBeLessThan(26_400);
+    }
+    expect(n(scenarios)).toBe(3);
+    expect(n(runs)).toBe(12);
+    expect(t.runQueue.resume()).toBe(12);
+    await t.runQueue.idle();
+    const statuses = t.db.select({ status: runs.status, error: runs.error }).from(runs).all();
+    expect(statuses.filter((r) => r.status !== 'done')).toEqual([]);
+  });
+
+  it('leaves a database that already has a project alone', () => {
+    expect(seedDemo(t.db)).toEqual({ seeded: false });
+    expect(n(projects)).toBe(1);
+  });
+});
