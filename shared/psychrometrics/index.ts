@@ -1,6 +1,6 @@
 /**
  * The psychrometric engine: moist-air properties by the equations of ASHRAE Handbook—Fundamentals
- * (2017) ch. 1, SI throughout (°C, Pa, kg/kg, kJ/kg dry air). See EQUATIONS.md for the equations.
+ * (2017) ch. 1, SI throughout (°C, Pa, kg/kg, kJ/kg dry air). The equations and their sources: README.md, "How it works".
  */
 export { saturationPressurePa, dewPointFromVapourPressure, boilingPointC } from './saturation';
 export { standardPressurePa, standardElevationM } from './atmosphere';
