@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
@@ -22,7 +23,9 @@ export function HomeRoute() {
           <ul className="divide-y divide-rule">
             {projects.data.projects.map((p) => (
               <li key={p.id} className="py-2">
-                <p className="font-medium">{p.name}</p>
+                <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                  {p.name}
+                </Link>
                 <p className="text-sm text-ink-soft">{p.description}</p>
               </li>
             ))}

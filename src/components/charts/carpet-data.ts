@@ -10,6 +10,8 @@ export const HOURS_PER_DAY = 24;
 /** Mode codes as stored per hour: 0 free cooling, 1 adiabatic assist, 2 mechanical, 3 no data. */
 export const MODE_CODES = 4;
 export const NO_DATA_MODE = 3;
+/** 0-based index of 29 February on the leap-year calendar. */
+export const LEAP_DAY_INDEX = 59;
 
 // Day of a leap year on which each month starts (0-based): Jan 0, Feb 31, Mar 60 …
 const leapMonthStart = [0, 31, 60, 91, 121, 152, 182, 213, 244, 274, 305, 335];
@@ -22,6 +24,8 @@ export interface CarpetGrid {
   counts: Uint32Array;
   /** Distinct calendar years in the series. */
   years: number;
+  /** Whether any hour fell on 29 February; without one, the chart leaves that day's column out. */
+  leapDay: boolean;
 }
 
 /**
@@ -88,7 +92,9 @@ export function carpetBins(
     }
     cells[c] = best;
   }
-  return { kind, cells, counts, years: seenYears.size };
+  let leapDay = false;
+  for (let h = 0; h < HOURS_PER_DAY; h++) leapDay ||= counts[LEAP_DAY_INDEX * HOURS_PER_DAY + h] > 0;
+  return { kind, cells, counts, years: seenYears.size, leapDay };
 }
 
 export interface CarpetSummaryRow {

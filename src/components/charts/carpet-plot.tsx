@@ -2,7 +2,7 @@ import { useCallback, useMemo } from 'react';
 import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
 import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { carpetBins, carpetSummary, HOURS_PER_DAY } from './carpet-data';
+import { carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from './carpet-data';
 import { carpetDayLabel, carpetMonthStartDays, monthNames, utcOffsetLabel } from './chart-format';
 import { temperatureRamp } from './colour-ramps';
 import { ModeLegend } from './mode-legend';
@@ -33,6 +33,10 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
       const index: number[] = [];
       for (let c = 0; c < grid.cells.length; c++) if (grid.cells[c] === grid.cells[c]) index.push(c);
       const day = (c: number) => Math.floor(c / HOURS_PER_DAY) + 1;
+      // Without a 29 February in the data, close its column so March follows February directly.
+      const shift = grid.leapDay ? 0 : 1;
+      const column = (c: number) => day(c) - (day(c) > LEAP_DAY_INDEX + 1 ? shift : 0);
+      const monthTicks = carpetMonthStartDays.map((d, m) => (m >= 2 ? d - shift : d));
       const hour = (c: number) => c % HOURS_PER_DAY;
       const shown = (c: number) => toDisplay('temperature', unitSystem, grid.cells[c]);
       const many = grid.years > 1;
@@ -44,14 +48,14 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
         }
         return `${when}\n${formatQuantity('temperature', unitSystem, grid.cells[c])}${many ? ` (mean of ${grid.counts[c]} years)` : ''}`;
       };
-      const cellChannels = { x1: day, x2: (c: number) => day(c) + 1, y1: hour, y2: (c: number) => hour(c) + 1 };
+      const cellChannels = { x1: column, x2: (c: number) => column(c) + 1, y1: hour, y2: (c: number) => hour(c) + 1 };
       return Plot.plot({
         width: widthPx,
         height: Math.max(220, Math.min(360, Math.round(widthPx * 0.28))),
         marginLeft: 48,
         marginBottom: 36,
         style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
-        x: { domain: [1, 367], ticks: carpetMonthStartDays, tickFormat: (d: number) => monthNames[carpetMonthStartDays.indexOf(d)] ?? '', label: 'Day of year →', labelAnchor: 'right' },
+        x: { domain: [1, 367 - shift], ticks: monthTicks, tickFormat: (d: number) => monthNames[monthTicks.indexOf(d)] ?? '', label: 'Day of year →', labelAnchor: 'right' },
         y: { domain: [24, 0], ticks: [0, 6, 12, 18, 24], tickFormat: (h: number) => `${String(h).padStart(2, '0')}:00`, label: `↓ Hour of day (${zone})`, labelAnchor: 'top' },
         color:
           kind === 'temperature'
@@ -61,7 +65,7 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
           kind === 'temperature'
             ? Plot.rect(index, { ...cellChannels, fill: shown, inset: 0 })
             : Plot.rect(index, { ...cellChannels, fill: (c: number) => modeColours[modeKeys[grid.cells[c]]], inset: 0 }),
-          Plot.tip(index, Plot.pointer({ x: (c: number) => day(c) + 0.5, y: (c: number) => hour(c) + 0.5, title })),
+          Plot.tip(index, Plot.pointer({ x: (c: number) => column(c) + 0.5, y: (c: number) => hour(c) + 0.5, title })),
         ],
       });
     },

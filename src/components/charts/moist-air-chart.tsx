@@ -117,7 +117,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
               { x: 'x', y: 'y', z: 'z', stroke: lineStyle[kind].stroke, strokeWidth: lineStyle[kind].width, strokeDasharray: lineStyle[kind].dash, clip: true },
             ),
           ),
-          Plot.text(labels, { x: 'x', y: 'y', text: 'text', fill: 'fill', fontSize: 10, textAnchor: 'start', dx: 3, clip: true }),
+          Plot.text(labels.filter((l) => l.anchor !== 'end'), { x: 'x', y: 'y', text: 'text', fill: 'fill', fontSize: 10, textAnchor: 'start', dx: 3, clip: true }),
+          Plot.text(labels.filter((l) => l.anchor === 'end'), { x: 'x', y: 'y', text: 'text', fill: 'fill', fontSize: 10, textAnchor: 'end', dx: -4, dy: -4, clip: true }),
           display === 'density'
             ? Plot.rect(density, { x1: 'x1', x2: 'x2', y1: 'y1', y2: 'y2', fill: 'hours', clip: true })
             : Plot.dot(drawn, {
@@ -198,16 +199,19 @@ function chartDomains(window: ReturnType<typeof chartWindowFor>, projection: Cha
 
 /** Where each background line carries its value: RH at its far end, wet-bulb and enthalpy where they leave saturation. */
 function lineLabels(lines: DisplayLine[], system: UnitSystem) {
-  const out: Array<{ x: number; y: number; text: string; fill: string }> = [];
+  const out: Array<{ x: number; y: number; text: string; fill: string; anchor?: 'start' | 'end' }> = [];
   for (const line of lines) {
     if (!line.points.length) continue;
     if (line.kind === 'relative-humidity') {
       const p = line.points[line.points.length - 1];
       out.push({ ...p, text: `${line.value} %`, fill: '#4f6a77' });
     } else if (line.kind === 'wet-bulb') {
-      out.push({ ...line.points[0], text: `wb ${formatQuantity('temperature', system, line.value, false)}`, fill: '#6d5f3a' });
+      // On the saturation curve, outside it, where nothing else is drawn.
+      out.push({ ...line.points[0], text: formatQuantity('temperature', system, line.value, false).replace(/\.0$/, ''), fill: '#6d5f3a', anchor: 'end' });
     } else if (line.kind === 'enthalpy') {
-      out.push({ ...line.points[0], text: `h ${formatQuantity('enthalpy', system, line.value, false).replace(/\.0+$/, '')}`, fill: '#5d5068' });
+      // At the line's dry end (the foot of the chart or its far edge).
+      const p = line.points[line.points.length - 1];
+      out.push({ ...p, text: `h ${formatQuantity('enthalpy', system, line.value, false).replace(/\.0+$/, '')}`, fill: '#5d5068', anchor: 'end' });
     } else if (line.kind === 'isotherm') {
       const p = line.points[line.points.length - 1];
       out.push({ ...p, text: formatQuantity('temperature', system, line.value).replace('.0 ', ' '), fill: '#6b747a' });

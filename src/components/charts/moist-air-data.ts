@@ -70,9 +70,8 @@ export function chartWindowFor(
   }
   tMin = Math.max(-50, Math.floor(tMin / 5) * 5);
   tMax = Math.min(60, Math.ceil(tMax / 5) * 5);
-  // Room above the highest hour, but the saturation curve at the hottest edge is the natural ceiling.
-  const wCeiling = safeW(() => saturationHumidityRatio(tMax, pressurePa));
-  wMax = Math.min(0.06, Math.max(0.02, wMax * 1.1, Math.min(wCeiling, 0.03)));
+  // A little room above the moistest hour, envelope or marker.
+  wMax = Math.min(0.06, Math.max(0.02, wMax * 1.12));
   return { pressurePa, dryBulbMinC: tMin, dryBulbMaxC: tMax, humidityRatioMax: Math.ceil(wMax * 500) / 500 };
 }
 

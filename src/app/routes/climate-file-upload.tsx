@@ -1,0 +1,33 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { Notice } from '@/components/ui/notice';
+import { UploadWizard } from '@/features/climate-files/components/upload-wizard';
+import { useSites } from '@/features/sites/api/get-sites';
+import { SiteForm } from '@/features/sites/components/site-form';
+import { ProjectCrumb } from '@/features/projects/components/project-crumb';
+import { NotFoundRoute } from './not-found';
+
+/** /projects/:projectId/climate-files/new — the upload wizard, with the site list and site form from the sites feature. */
+export function ClimateFileUploadRoute() {
+  const projectId = Number(useParams().projectId);
+  const navigate = useNavigate();
+  const sites = useSites(projectId);
+  if (!Number.isInteger(projectId) || projectId <= 0) return <NotFoundRoute />;
+  return (
+    <div className="space-y-4">
+      <div>
+        <ProjectCrumb projectId={projectId} />
+        <h1 className="text-xl font-semibold">Upload a climate file</h1>
+      </div>
+      {sites.isPending && <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
+      {sites.isError && <Notice tone="bad" title="The project's sites could not be loaded">{sites.error.message}</Notice>}
+      {sites.data && (
+        <UploadWizard
+          projectId={projectId}
+          sites={sites.data.sites}
+          renderNewSite={(onCreated) => <SiteForm projectId={projectId} onCreated={(site) => onCreated(site.id)} />}
+          onStored={(fileId) => navigate(`/projects/${projectId}/climate-files/${fileId}`)}
+        />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,65 @@
+import { Link } from 'react-router-dom';
+import { Notice } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
+import { useClimateFiles } from '../api/get-climate-files';
+
+const yearOf = (ms: number) => new Date(ms).getUTCFullYear();
+
+/** The project's climate files: site, period, hours and how complete they are; a link to upload another. */
+export function ClimateFilesPanel({ projectId, canEdit }: { projectId: number; canEdit: boolean }) {
+  const files = useClimateFiles(projectId);
+  return (
+    <Panel
+      title="Climate files"
+      actions={
+        canEdit ? (
+          <Link to={`/projects/${projectId}/climate-files/new`} className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft">
+            Upload climate file
+          </Link>
+        ) : undefined
+      }
+    >
+      {files.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
+      {files.isError && <Notice tone="bad" title="Climate files could not be loaded">{files.error.message}</Notice>}
+      {files.data && files.data.climateFiles.length === 0 && (
+        <p className="text-sm text-ink-soft">
+          No climate files yet.{' '}
+          {canEdit ? 'Upload hourly weather for a site (CSV or other delimited text) to start.' : 'An engineer of the project uploads them.'}
+        </p>
+      )}
+      {files.data && files.data.climateFiles.length > 0 && (
+        <table className="w-full text-left text-sm">
+          <thead>
+            <tr className="border-b border-rule text-xs text-ink-soft">
+              <th scope="col" className="py-1 font-medium">File</th>
+              <th scope="col" className="px-2 font-medium">Site</th>
+              <th scope="col" className="px-2 text-right font-medium">Years</th>
+              <th scope="col" className="px-2 text-right font-medium">Hours</th>
+              <th scope="col" className="px-2 text-right font-medium">Missing</th>
+            </tr>
+          </thead>
+          <tbody>
+            {files.data.climateFiles.map((f) => {
+              const [a, b] = [yearOf(f.firstHourMs), yearOf(f.lastHourMs)];
+              return (
+                <tr key={f.id} className="border-b border-rule/60">
+                  <td className="py-1">
+                    <Link to={`/projects/${projectId}/climate-files/${f.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                      {f.name}
+                    </Link>
+                  </td>
+                  <td className="px-2 text-ink-soft">{f.siteName}</td>
+                  <td className="num px-2 text-right">{a === b ? a : `${a}–${b}`}</td>
+                  <td className="num px-2 text-right">{f.hours.toLocaleString('en')}</td>
+                  <td className={`num px-2 text-right ${f.missingHours ? 'text-signal-warn' : 'text-ink-soft'}`}>
+                    {f.missingHours ? `${((100 * f.missingHours) / f.hours).toFixed(1)} %` : 'none'}
+                  </td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      )}
+    </Panel>
+  );
+}

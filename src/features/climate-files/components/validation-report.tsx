@@ -1,0 +1,88 @@
+import type { ImportIssue, ImportReport } from '../../../../shared/climate/types';
+import { csvRow } from '../../../../shared/csv';
+import { Notice } from '@/components/ui/notice';
+
+const severityStyle: Record<ImportIssue['severity'], string> = {
+  error: 'text-signal-bad',
+  warning: 'text-signal-warn',
+  info: 'text-ink-soft',
+};
+
+/** The importer's validation report: outcome, counts, and every listed issue with line, column and value. */
+export function ValidationReport({ report }: { report: ImportReport }) {
+  const c = report.counts;
+  const figures: Array<[string, number]> = [
+    ['Hours in series', c.hours],
+    ['Measured hours', c.measuredHours],
+    ['Filled by interpolation', c.filledHours],
+    ['Missing hours', c.missingHours],
+    ['Gaps', c.gaps],
+    ['Longest gap (h)', c.longestGapHours],
+    ['Data rows read', c.rows],
+    ['Rows rejected', c.rowsRejected],
+    ['Unreadable cells', c.cellsUnreadable],
+    ['Impossible values', c.impossibleValues],
+    ['Duplicate timestamps', c.duplicateTimestamps],
+    ['Rows averaged to hours', c.rowsAveraged],
+    ['Non-hourly steps', c.nonHourlySteps],
+    ['Daylight-saving jumps', c.daylightSavingJumps],
+  ];
+  const csvHref = `data:text/csv;charset=utf-8,${encodeURIComponent(
+    [csvRow(['severity', 'kind', 'line', 'column', 'value', 'message']), ...report.issues.map((i) => csvRow([i.severity, i.kind, i.line ?? '', i.column ?? '', i.value ?? '', i.message]))].join('\n'),
+  )}`;
+  return (
+    <div className="space-y-3" data-testid="validation-report">
+      <Notice tone={report.ok ? (report.counts.missingHours || report.issues.some((i) => i.severity === 'warning') ? 'warn' : 'info') : 'bad'} title={report.ok ? 'The file can be stored' : 'The file cannot be stored as it is'}>
+        {report.summary}
+        {report.timeLayout && <span className="block">Time: {report.timeLayout}.</span>}
+        <span className="block">
+          Gaps up to {report.maxGapHours} h are filled by linear interpolation and marked as filled; longer gaps stay missing and count as hours with no data.
+        </span>
+      </Notice>
+      <dl className="grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-3 xl:grid-cols-5">
+        {figures.map(([label, value]) => (
+          <div key={label} className="flex justify-between gap-2 border-b border-rule/60 py-0.5">
+            <dt className="text-ink-soft">{label}</dt>
+            <dd className="num">{value.toLocaleString('en')}</dd>
+          </div>
+        ))}
+      </dl>
+      {report.issues.length > 0 ? (
+        <div className="overflow-x-auto">
+          <table className="w-full text-left text-xs">
+            <caption className="pb-1 text-left text-sm text-ink-soft">
+              {report.issues.length.toLocaleString('en')} issues listed
+              {c.issuesNotListed > 0 && `, ${c.issuesNotListed.toLocaleString('en')} more of the same kinds not listed`}.{' '}
+              <a className="text-harbour underline" href={csvHref} download="climate-file-issues.csv">
+                Download as CSV
+              </a>
+            </caption>
+            <thead>
+              <tr className="border-b border-rule text-ink-soft">
+                <th scope="col" className="py-1 pr-2 font-medium">Severity</th>
+                <th scope="col" className="pr-2 font-medium">Line</th>
+                <th scope="col" className="pr-2 font-medium">Column</th>
+                <th scope="col" className="pr-2 font-medium">Value</th>
+                <th scope="col" className="font-medium">What was found</th>
+              </tr>
+            </thead>
+            <tbody>
+              {report.issues.slice(0, 400).map((issue, k) => (
+                <tr key={k} className="border-b border-rule/60 align-top">
+                  <td className={`py-0.5 pr-2 font-medium ${severityStyle[issue.severity]}`}>{issue.severity}</td>
+                  <td className="num pr-2">{issue.line ?? ''}</td>
+                  <td className="pr-2">{issue.column ?? ''}</td>
+                  <td className="num max-w-40 truncate pr-2" title={issue.value}>{issue.value ?? ''}</td>
+                  <td>{issue.message}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+          {report.issues.length > 400 && <p className="mt-1 text-xs text-ink-soft">The first 400 are shown; the CSV holds all listed issues.</p>}
+        </div>
+      ) : (
+        <p className="text-sm text-ink-soft">No issues found.</p>
+      )}
+    </div>
+  );
+}

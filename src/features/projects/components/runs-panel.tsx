@@ -1,0 +1,88 @@
+import { Link } from 'react-router-dom';
+import { modeColours, modeLabels } from '../../../../shared/modes';
+import { Notice } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
+import { useProjectRuns, type RunListing, type RunStatus } from '../api/get-project-runs';
+
+const statusStyle: Record<RunStatus, { text: string; className: string }> = {
+  queued: { text: 'queued', className: 'bg-mist text-ink-soft' },
+  running: { text: 'running', className: 'bg-mist text-harbour' },
+  done: { text: 'done', className: 'bg-[#e4efe8] text-signal-ok' },
+  failed: { text: 'failed', className: 'bg-[#fbeceb] text-signal-bad' },
+  cancelled: { text: 'cancelled', className: 'bg-paper text-ink-soft' },
+};
+
+/** The share of hours in each mode as one thin bar, in the one mode palette. */
+function ModeShareBar({ hours }: { hours: NonNullable<RunListing['results']>['hours'] }) {
+  const parts = [
+    ['free', hours.free],
+    ['adiabatic', hours.adiabatic],
+    ['mechanical', hours.mechanical],
+    ['no_data', hours.noData],
+  ] as const;
+  const total = hours.total || 1;
+  const words = parts.filter(([, n]) => n > 0).map(([k, n]) => `${modeLabels[k]} ${((100 * n) / total).toFixed(0)} %`).join(', ');
+  return (
+    <div className="flex h-2 w-32 overflow-hidden rounded-sm" role="img" aria-label={words} title={words}>
+      {parts.map(([k, n]) => (n > 0 ? <span key={k} style={{ width: `${(100 * n) / total}%`, background: modeColours[k] }} /> : null))}
+    </div>
+  );
+}
+
+export function RunsPanel({ projectId }: { projectId: number }) {
+  const runs = useProjectRuns(projectId);
+  const recent = runs.data?.runs.slice(0, 10) ?? [];
+  return (
+    <Panel
+      title="Recent runs"
+      actions={
+        runs.data && runs.data.runs.filter((r) => r.status === 'done').length > 1 ? (
+          <Link to={`/projects/${projectId}/compare`} className="rounded border border-rule px-2.5 py-1 text-xs hover:bg-mist">
+            Compare runs
+          </Link>
+        ) : undefined
+      }
+    >
+      {runs.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+      {runs.isError && <Notice tone="bad" title="Runs could not be loaded">{runs.error.message}</Notice>}
+      {runs.data && recent.length === 0 && (
+        <p className="text-sm text-ink-soft">No runs yet. Open a scenario and run it on one or more climate files.</p>
+      )}
+      {recent.length > 0 && (
+        <table className="w-full text-left text-sm" data-testid="runs-table">
+          <thead>
+            <tr className="border-b border-rule text-xs text-ink-soft">
+              <th scope="col" className="py-1 font-medium">Run</th>
+              <th scope="col" className="px-2 font-medium">Scenario</th>
+              <th scope="col" className="px-2 font-medium">Climate file</th>
+              <th scope="col" className="px-2 font-medium">Status</th>
+              <th scope="col" className="px-2 font-medium">Hours by mode</th>
+            </tr>
+          </thead>
+          <tbody>
+            {recent.map((r) => (
+              <tr key={r.id} className="border-b border-rule/60">
+                <td className="num py-1">
+                  <Link to={`/projects/${projectId}/runs/${r.id}`} className="text-harbour underline-offset-2 hover:underline">
+                    #{r.id}
+                  </Link>
+                </td>
+                <td className="px-2">{r.scenario.name}</td>
+                <td className="px-2 text-ink-soft">
+                  {r.climate.name} · {r.climate.site.name}
+                </td>
+                <td className="px-2">
+                  <span className={`num rounded px-1.5 py-0.5 text-xs ${statusStyle[r.status].className}`} title={r.error ?? undefined}>
+                    {statusStyle[r.status].text}
+                    {r.status === 'running' && ` ${Math.round(r.progress * 100)} %`}
+                  </span>
+                </td>
+                <td className="px-2">{r.results ? <ModeShareBar hours={r.results.hours} /> : <span className="text-xs text-ink-faint">–</span>}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </Panel>
+  );
+}

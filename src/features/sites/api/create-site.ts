@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { SiteInput } from '../../../../shared/schemas/climate-file';
+import { apiFetch } from '@/lib/api-client';
+import { sitesQueryKey, type Site } from './get-sites';
+
+export const createSite = (projectId: number, input: SiteInput) =>
+  apiFetch<{ site: Site }>(`/projects/${projectId}/sites`, {
+    method: 'POST',
+    body: JSON.stringify(input),
+    headers: { 'x-tramontane-request': '1' },
+  });
+
+export function useCreateSite(projectId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: SiteInput) => createSite(projectId, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: sitesQueryKey(projectId) }),
+  });
+}

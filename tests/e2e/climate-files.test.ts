@@ -1,0 +1,105 @@
+import { fileURLToPath } from 'node:url';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { personWithSession, projectWithMembers } from '../support/people';
+
+const sampleFile = fileURLToPath(new URL('../../sample-weather/zimna-dolina.csv', import.meta.url));
+
+let h: BrowserHarness;
+let projectId: number;
+
+beforeAll(async () => {
+  h = await startBrowserHarness();
+  const engineer = personWithSession(h.testApp.db, 'marta.oyelaran@example.test');
+  projectId = projectWithMembers(h.testApp.db, 'Valley campus study', [[engineer, 'engineer']]);
+  const [name, value] = engineer.cookie.split('=');
+  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+  // Start every journey in SI; the IP screenshots switch on the page.
+  await h.page.addInitScript(() => {
+    if (!sessionStorage.getItem('unit-reset')) {
+      localStorage.setItem('tramontane.unitSystem', 'SI');
+      sessionStorage.setItem('unit-reset', '1');
+    }
+  });
+});
+afterAll(() => h?.close());
+
+describe('an engineer adding hourly weather to a project', () => {
+  it('opens the project, creates a site, uploads a file through the mapping and the report, and sees the climate file page', async () => {
+    const page = h.page;
+    await page.goto(h.baseUrl);
+    await page.getByRole('link', { name: 'Valley campus study' }).click();
+    await page.waitForURL(`**/projects/${projectId}`);
+    await expect.poll(() => page.getByRole('heading', { name: 'Valley campus study' }).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('No climate files yet.').isVisible()).toBe(true);
+    await h.screenshot('project-overview-empty');
+
+    await page.getByRole('link', { name: 'Upload climate file' }).click();
+    await page.waitForURL(`**/projects/${projectId}/climate-files/new`);
+    // No site yet: the wizard opens the site form.
+    await page.getByLabel('Site name').fill('Zimna Dolina');
+    await page.getByLabel('Elevation (m)').fill('412');
+    await page.getByLabel('Time zone').fill('Europe/Warsaw');
+    await page.getByRole('button', { name: 'Save site' }).click();
+    await page.getByRole('button', { name: 'Continue with Zimna Dolina' }).click();
+
+    await page.getByLabel('File', { exact: true }).setInputFiles(sampleFile);
+    expect(await page.getByLabel('Name in the project').inputValue()).toBe('zimna-dolina');
+    await page.getByRole('button', { name: 'Read the file' }).click();
+
+    // The mapping step: the detected layout of this semicolon file with decimal commas and hPa.
+    await page.getByTestId('mapping-editor').waitFor();
+    expect(await page.locator('#map-delimiter').inputValue()).toBe(';');
+    expect(await page.getByLabel('Decimal separator').inputValue()).toBe(',');
+    expect(await page.getByLabel('Pressure unit').inputValue()).toBe('hPa');
+    expect(await page.getByLabel('Humidity measure').inputValue()).toBe('relative-humidity');
+    // First row of the file: 01.01.2021 00:00 local (UTC+1 in winter), −9.6 °C, 983.2 hPa = 98.32 kPa.
+    const firstRow = page.getByTestId('preview-table').locator('tbody tr').first();
+    expect(await firstRow.innerText()).toMatch(/2020-12-31 23:00\s+-9\.6\s+82\.1\s+98\.32/);
+    await h.screenshot('climate-upload-mapping-si');
+
+    await page.getByRole('button', { name: 'Continue to the report' }).click();
+    await page.getByTestId('validation-report').waitFor();
+    expect(await page.getByText('The file can be stored').isVisible()).toBe(true);
+    await h.screenshot('climate-upload-report');
+
+    await page.getByRole('button', { name: 'Store climate file' }).click();
+    await page.waitForURL(/\/climate-files\/\d+$/);
+    await page.getByRole('heading', { name: 'zimna-dolina' }).waitFor();
+    expect(await page.getByTestId('climate-file-facts').innerText()).toContain('2021–2023');
+    expect(await page.getByTestId('design-label').innerText()).toContain('Computed from this file, not published station values');
+    // Both charts drawn: the carpet and the moist-air chart each render an SVG.
+    await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(2);
+    await page.waitForTimeout(300);
+    await h.screenshot('climate-file-page-si');
+
+    await page.getByRole('group', { name: 'Units' }).getByRole('button', { name: 'IP' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'Monthly dry-bulb and dew point (°F)' }).isVisible()).toBe(true);
+    // Hovering the chart shows the nearest hour's full state.
+    await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent()).toContain('gr/lb');
+    const cell = page.getByTestId('moist-air-chart').locator('g[aria-label="rect"] rect').nth(40);
+    const box = (await cell.boundingBox())!;
+    await page.mouse.move(box.x + 1, box.y + 1);
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await expect.poll(() => page.getByTestId('moist-air-chart').innerText()).toContain('Wet-bulb');
+    await h.screenshot('climate-file-page-ip-hover');
+    await page.getByRole('group', { name: 'Chart projection' }).getByRole('button', { name: 'h–x diagram' }).click();
+    await page.waitForTimeout(500);
+    await h.screenshot('climate-file-page-ip-hx');
+  });
+
+  it('shows the IP preview in the wizard with both unit systems side by side', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/climate-files/new`);
+    await page.getByRole('button', { name: /Continue with/ }).click();
+    await page.getByLabel('File', { exact: true }).setInputFiles(fileURLToPath(new URL('../fixtures/api/three-days.csv', import.meta.url)));
+    await page.getByRole('button', { name: 'Read the file' }).click();
+    await page.getByTestId('mapping-editor').waitFor();
+    // 8.3 °C = 46.9 °F; 101.3 kPa = 29.91 inHg (NIST SP 811: 1 inHg = 3386.389 Pa).
+    expect(await page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(/8\.3\s+46\.9\s+88\.0\s+88\.0\s+101\.30\s+29\.91/);
+    await h.screenshot('climate-upload-mapping-ip');
+    await page.goto(`${h.baseUrl}/projects/${projectId}`);
+    await expect.poll(() => page.getByRole('link', { name: 'zimna-dolina' }).isVisible()).toBe(true);
+    await h.screenshot('project-overview-ip');
+  });
+});
