@@ -99,6 +99,8 @@ describe('signing in through the local provider', () => {
     await h.page.goto(`${h.baseUrl}/settings`);
     await h.page.getByRole('radio', { name: 'IP' }).click();
     await expect.poll(() => h.page.getByRole('radio', { name: 'IP' }).getAttribute('aria-checked')).toBe('true');
+    // Remembered for the person, not only in this browser.
+    await expect.poll(() => h.page.evaluate(() => fetch('/api/me').then((r) => r.json()).then((b) => b.settings.unitSystem))).toBe('ip');
     await h.screenshot('settings');
   });
 

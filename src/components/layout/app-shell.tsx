@@ -1,6 +1,7 @@
 import { NavLink, Outlet } from 'react-router-dom';
 import { HealthIndicator } from '@/features/health/components/health-indicator';
 import { AccountMenu, useAdminNavItems } from '@/features/auth/components/account-menu';
+import { UnitSystemSync } from '@/features/auth/components/unit-system-sync';
 
 const nav = [
   { to: '/', label: 'Projects', end: true },
@@ -11,6 +12,7 @@ export function AppShell() {
   const items = [...nav, ...useAdminNavItems()];
   return (
     <div className="min-h-screen flex flex-col">
+      <UnitSystemSync />
       <header className="bg-harbour text-paper">
         <div className="mx-auto flex max-w-screen-2xl items-center gap-8 px-6 py-3">
           <a href="/" className="flex items-baseline gap-2">

@@ -1,18 +1,21 @@
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
-import { useMe, useUpdateSettings, type Settings } from '../api/me';
+import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
+import { useMe, useUpdateSettings } from '../api/me';
 import { useSignOut } from '../api/sign-out';
 
-const unitChoices: { value: Settings['unitSystem']; label: string; hint: string }[] = [
-  { value: 'si', label: 'SI', hint: '°C, g/kg, kJ/kg, kPa' },
-  { value: 'ip', label: 'IP', hint: '°F, grains/lb, Btu/lb, inHg' },
+const unitChoices: { value: UnitSystem; hint: string }[] = [
+  { value: 'SI', hint: '°C, g/kg, kJ/kg, kPa' },
+  { value: 'IP', hint: '°F, grains/lb, Btu/lb, inHg' },
 ];
 
 export function SettingsPage() {
   const me = useMe();
   const update = useUpdateSettings();
   const signOutEverywhere = useSignOut(true);
+  // The whole app follows the unit system at once; UnitSystemSync saves it to these settings.
+  const { unitSystem, setUnitSystem } = useUnitSystem();
   if (me.isPending) return <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading settings" />;
   if (me.isError) return <Notice tone="bad" title="Settings could not be loaded">{me.error.message}</Notice>;
   const { user, settings, projects } = me.data;
@@ -35,15 +38,15 @@ export function SettingsPage() {
                 key={choice.value}
                 type="button"
                 role="radio"
-                aria-checked={settings.unitSystem === choice.value}
-                onClick={() => update.mutate({ unitSystem: choice.value })}
-                className={`px-4 py-1.5 text-sm ${settings.unitSystem === choice.value ? 'bg-harbour text-paper' : 'bg-panel text-ink hover:bg-mist'}`}
+                aria-checked={unitSystem === choice.value}
+                onClick={() => setUnitSystem(choice.value)}
+                className={`px-4 py-1.5 text-sm ${unitSystem === choice.value ? 'bg-harbour text-paper' : 'bg-panel text-ink hover:bg-mist'}`}
               >
-                {choice.label}
+                {choice.value}
               </button>
             ))}
           </div>
-          <p className="mt-1 text-xs text-ink-faint">{unitChoices.find((c) => c.value === settings.unitSystem)?.hint}</p>
+          <p className="mt-1 text-xs text-ink-faint">{unitChoices.find((c) => c.value === unitSystem)?.hint}</p>
         </fieldset>
         <label className="flex items-start gap-2 text-sm">
           <input
