@@ -345,7 +345,9 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('binary-input', 'The input is not text.');
     return null;
   }
-  const text = stripBom(rawText);
+  let text = stripBom(rawText);
+  // old Mac line ends (CR only): the line scanning below looks for LF
+  if (text.indexOf('\n') === -1 && text.indexOf('\r') !== -1) text = text.replace(/\r/g, '\n');
   counts.lines = countLines(text);
   if (text.trim() === '') {
     log.error('empty-input', 'The file is empty.');

@@ -184,3 +184,17 @@ describe('shape of the rows', () => {
     expect(result.report.issues.filter((i) => i.kind === 'preamble-skipped')).toEqual([]);
   });
 });
+
+describe('line ends', () => {
+  it.each([
+    ['LF', '\n'],
+    ['CRLF', '\r\n'],
+    ['CR', '\r'],
+  ])('%s with a leading comment', (_, newline) => {
+    const text = ['# synthetic', 'timestamp,dry_bulb_c,relative_humidity_pct', '2021-01-01T00:00Z,10,80', '2021-01-01T01:00Z,11,101', '2021-01-01T02:00Z,12,80'].join(newline);
+    const result = importClimateText(text);
+    expect(result.ok).toBe(true);
+    expect(result.mapping.headerLine).toBe(2);
+    expect(result.report.issues).toContainEqual(expect.objectContaining({ kind: 'clamped-value', line: 4 }));
+  });
+});
