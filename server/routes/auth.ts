@@ -112,6 +112,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
     }),
 
     route('post', '/auth/sign-out', access.public, (req, res) => {
+      if (req.user) recordAudit(db, { actorId: req.user.id, action: 'auth.sign-out', target: req.user.email }, clock());
       endSession(db, req, res);
       res.status(204).end();
     }),
