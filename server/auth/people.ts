@@ -43,8 +43,11 @@ export function personForIdentity(db: Db, identity: VerifiedIdentity, now: Date)
     }
     const admins = tx.select({ n: count() }).from(users).where(eq(users.isAdmin, true)).get()!.n;
     const madeAdmin = admins === 0;
+    // Follow a changed address at the provider, unless someone else here already holds it.
+    const holder = tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, identity.email)).get();
+    const email = !holder || holder.id === person.id ? { email: identity.email } : {};
     tx.update(users)
-      .set({ name: identity.name, email: identity.email, lastSignInAt: now, ...(madeAdmin ? { isAdmin: true } : {}) })
+      .set({ name: identity.name, ...email, lastSignInAt: now, ...(madeAdmin ? { isAdmin: true } : {}) })
       .where(eq(users.id, person.id))
       .run();
     const isAdmin = tx.select({ isAdmin: users.isAdmin }).from(users).where(eq(users.id, person.id)).get()!.isAdmin;
