@@ -5,7 +5,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { UnitSystemProvider } from '@/lib/unit-system';
 import { QuantityField } from '@/features/scenarios/components/quantity-field';
 import { fieldFromDisplay, fieldToDisplay, inputText, parseInputText, rangeText } from '@/features/scenarios/utils/field-units';
-import { energyFields, fieldsFor, systemFields } from '@/features/scenarios/utils/scenario-fields';
+import { energyFields, fieldsFor, inWords, systemFields } from '@/features/scenarios/utils/scenario-fields';
 
 (globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
@@ -38,6 +38,11 @@ describe('scenario inputs in SI and IP', () => {
     expect(parseInputText('temperature', 'SI', '')).toBeNaN();
     expect(parseInputText('temperature', 'SI', '2x')).toBeNaN();
     expect(parseInputText('temperature', 'SI', '21,5')).toBe(21.5);
+  });
+
+  it('puts the schema’s cross-field messages in the editor’s words', () => {
+    expect(inWords('dryBulbMinC must be below dryBulbMaxC')).toBe('“Dry-bulb, lowest” must be below “dry-bulb, highest”.');
+    expect(inWords('chilledWaterSupplyC must be below supplyAirC')).toBe('“Chilled-water supply” must be below “supply air setpoint”.');
   });
 
   it('offers only the fields of the chosen system kind', () => {

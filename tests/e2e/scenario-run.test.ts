@@ -25,15 +25,30 @@ async function api<T>(person: TestPerson, method: string, path: string, body?: B
   return (await res.json()) as T;
 }
 
+let current: TestPerson;
+
 async function signInAs(person: TestPerson) {
+  current = person;
   await h.context.clearCookies();
   const [name, value] = person.cookie.split('=');
   await h.context.addCookies([{ name, value, url: h.baseUrl }]);
 }
 
+/** The unit system is remembered per person on the server and in the browser; set both, as the settings toggle does. */
 async function useUnits(page: Page, system: 'SI' | 'IP') {
+  await fetch(`${h.baseUrl}/api/me`, {
+    method: 'PATCH',
+    headers: { cookie: current.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
+    body: JSON.stringify({ unitSystem: system.toLowerCase() }),
+  });
   await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
   await page.reload();
+}
+
+/** A full-page screenshot from the top, so sticky side columns sit where a reader sees them. */
+async function shot(name: string) {
+  await h.page.evaluate(() => window.scrollTo(0, 0));
+  return h.screenshot(name);
 }
 
 /** Waits until every Plot figure on the page has drawn (its loading placeholder gone, an svg in place). */
@@ -69,9 +84,9 @@ describe('an engineer designing, running and comparing scenarios', () => {
     // An out-of-range value is refused next to its field, in the person's units.
     await page.getByLabel('Rise across the IT').fill('90');
     await expect.poll(() => page.getByText('Enter a number from 1 to 40 K.').isVisible()).toBe(true);
-    await h.screenshot('scenario-editor-invalid-si');
+    await shot('scenario-editor-invalid-si');
     await page.getByLabel('Rise across the IT').fill('12');
-    await h.screenshot('scenario-editor-si');
+    await shot('scenario-editor-si');
 
     await page.getByRole('button', { name: 'Save and run' }).click();
     await page.waitForURL(/\/runs\/\d+$/, { timeout: 15_000 });
@@ -86,11 +101,11 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await expect.poll(() => page.getByTestId('bin-table').locator('tbody tr').count(), { timeout: 15_000 }).toBeGreaterThan(2);
     expect(await page.getByTestId('run-inputs').innerText()).toContain('system.supplyAirC');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
-    await h.screenshot('run-page-si');
+    await shot('run-page-si');
     await useUnits(page, 'IP');
     await chartsDrawn(page);
     expect(await page.getByTestId('run-inputs').innerText()).toContain('75.2 °F');
-    await h.screenshot('run-page-ip');
+    await shot('run-page-ip');
   });
 
   it('edits the scenario in IP units, runs it again and compares the two runs', async () => {
@@ -101,9 +116,10 @@ describe('an engineer designing, running and comparing scenarios', () => {
     // 59 °F is 15 °C exactly: the form keeps SI whatever the person types in.
     await page.getByLabel('Supply air setpoint').fill('59');
     await page.getByLabel('Name').fill('Direct air, 15 °C supply');
-    await h.screenshot('scenario-editor-ip');
+    await shot('scenario-editor-ip');
     await page.getByRole('button', { name: 'Save changes' }).click();
     await expect.poll(() => page.getByText('Unsaved changes').isVisible()).toBe(false);
+    await expect.poll(() => page.getByTestId('scenario-runs').innerText()).toContain('Saltmarsh Point');
     const stored = await api<{ scenario: { scenario: { system: { supplyAirC: number } } } }>(engineer, 'GET', `/projects/${projectId}/scenarios/${scenarioId}`);
     expect(stored.scenario.scenario.system.supplyAirC).toBeCloseTo(15, 9);
 
@@ -119,10 +135,10 @@ describe('an engineer designing, running and comparing scenarios', () => {
     expect(text).toContain('baseline');
     expect(text).toContain('Direct air, 15 °C supply');
     await chartsDrawn(page);
-    await h.screenshot('compare-ip');
+    await shot('compare-ip');
     await useUnits(page, 'SI');
     await chartsDrawn(page);
-    await h.screenshot('compare-si');
+    await shot('compare-si');
   });
 
   it('shows the envelope library and the air-state calculator', async () => {
@@ -139,7 +155,12 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await page.getByRole('button', { name: 'Add envelope' }).click();
     await expect.poll(() => page.getByTestId('envelope-entry').filter({ hasText: 'Client hall limits' }).count()).toBe(1);
     await chartsDrawn(page);
-    await h.screenshot('envelopes-si');
+    await shot('envelopes-si');
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    expect(await page.getByTestId('envelope-entry').first().innerText()).toContain('64.4–80.6 °F dry-bulb');
+    await shot('envelopes-ip');
+    await useUnits(page, 'SI');
 
     await page.getByRole('link', { name: 'Air-state calculator' }).click();
     await page.waitForURL('**/calculator');
@@ -148,11 +169,19 @@ describe('an engineer designing, running and comparing scenarios', () => {
     const state = page.getByTestId('calculated-state');
     await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+22\.0 °C/);
     await chartsDrawn(page);
-    await h.screenshot('calculator-si');
+    await shot('calculator-si');
     // A third property over-determines the state; the engine's own words are shown.
     await page.getByLabel(/^Dew point/).fill('10');
     await expect.poll(() => page.getByTestId('calculator-refusal').innerText()).toContain('moist air has three independent properties');
-    await h.screenshot('calculator-refused');
+    await shot('calculator-refused');
+    await useUnits(page, 'IP');
+    await page.getByLabel(/^Dry-bulb/).fill('86');
+    await page.getByLabel(/^Relative humidity/).fill('50');
+    // 22.005 °C = 71.6 °F.
+    await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+71\.6 °F/);
+    await chartsDrawn(page);
+    await shot('calculator-ip');
+    await useUnits(page, 'SI');
   });
 });
 
@@ -168,7 +197,7 @@ describe('a viewer of the project', () => {
     expect(await page.getByLabel('Supply air setpoint').isDisabled()).toBe(true);
     expect(await page.getByRole('button', { name: /Save/ }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /Run/ }).count()).toBe(0);
-    await h.screenshot('scenario-viewer-si');
+    await shot('scenario-viewer-si');
     // The server refuses the change too, whatever the screen shows.
     const res = await fetch(`${h.baseUrl}/api/projects/${projectId}/runs`, {
       method: 'POST',

@@ -2,7 +2,7 @@ import { useId, useState } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 import { useUnitSystem } from '@/lib/unit-system';
 import { fieldUnitLabel, inputText, parseInputText, rangeText } from '../utils/field-units';
-import type { NumericField } from '../utils/scenario-fields';
+import { inWords, type NumericField } from '../utils/scenario-fields';
 
 /**
  * One numeric scenario input. The form keeps SI; the box shows and takes the chosen unit system.
@@ -25,7 +25,7 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
   const range = rangeText(field.unit, unitSystem, field.min, field.max);
   const error = fieldState.error?.message;
   // The schema words its range in SI; show the person's own units instead.
-  const message = error && /^must be a number from/.test(error) ? `Enter a number from ${range}.` : error;
+  const message = error && (/^must be a number from/.test(error) ? `Enter a number from ${range}.` : inWords(error));
   return (
     <div className="grid grid-cols-[minmax(11rem,15rem)_7.5rem_4.5rem_1fr] items-baseline gap-x-3 py-1.5">
       <label htmlFor={id} className="text-sm text-ink">
@@ -33,6 +33,7 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
       </label>
       <input
         id={id}
+        ref={input.ref}
         name={field.path}
         inputMode="decimal"
         disabled={disabled}

@@ -16,6 +16,7 @@ import { EnvelopePicker } from './envelope-picker';
 import { ModePreview } from './mode-preview';
 import { QuantityField } from './quantity-field';
 import { RunPanel } from './run-panel';
+import { ScenarioRuns } from './scenario-runs';
 
 const resolver = zodResolver(scenarioSchema) as unknown as Resolver<ScenarioFormValues, unknown, Scenario>;
 
@@ -237,6 +238,7 @@ export function ScenarioForm({
               }
             />
           )}
+          {scenarioId !== null && <ScenarioRuns projectId={projectId} scenarioId={scenarioId} />}
         </aside>
       </div>
     </form>

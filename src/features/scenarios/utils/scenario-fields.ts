@@ -144,3 +144,12 @@ export const systemKinds: { kind: SystemKind; label: string; help: string }[] = 
 export function fieldsFor(fields: NumericField[], kind: SystemKind): NumericField[] {
   return fields.filter((f) => !f.kinds || f.kinds.includes(kind));
 }
+
+const labelByKey = new Map([...siteFields, ...systemFields, ...envelopeFields, ...energyFields].map((f) => [f.path.split('.').pop()!, f.label.toLowerCase()]));
+
+/** A schema message in words: "dryBulbMinC must be below dryBulbMaxC" → "“Dry-bulb, lowest” must be below “dry-bulb, highest”." */
+export function inWords(message: string): string {
+  const text = message.replace(/\b[a-z]+(?:[A-Z][a-z]*)+\b/g, (key) => (labelByKey.has(key) ? `“${labelByKey.get(key)}”` : key));
+  const capital = text.replace(/^(“?)(\p{Ll})/u, (_m, quote: string, letter: string) => quote + letter.toUpperCase());
+  return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}

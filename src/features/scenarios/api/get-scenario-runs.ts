@@ -1,0 +1,22 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiFetch } from '@/lib/api-client';
+
+export interface ScenarioRunListing {
+  id: number;
+  scenarioId: number | null;
+  status: 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+  createdAt: string;
+  climate: { name: string; site: { name: string } };
+  results: { hours: { free: number; adiabatic: number; mechanical: number; total: number }; energy: { partialPue: number | null } } | null;
+}
+
+export const getProjectRuns = (projectId: number) => apiFetch<{ runs: ScenarioRunListing[] }>(`/projects/${projectId}/runs`);
+
+/** The project's runs (the same cache entry the compare page reads); the editor keeps those of its scenario. */
+export const projectRunsQueryOptions = (projectId: number) =>
+  queryOptions({ queryKey: ['projects', projectId, 'runs'], queryFn: () => getProjectRuns(projectId) });
+
+export function useScenarioRuns(projectId: number, scenarioId: number | null) {
+  const query = useQuery({ ...projectRunsQueryOptions(projectId), enabled: scenarioId !== null });
+  return { ...query, runs: (query.data?.runs ?? []).filter((r) => r.scenarioId === scenarioId) };
+}
