@@ -93,6 +93,17 @@ describe('the role matrix over every API route', () => {
     }
   });
 
+  it('is exactly what the real app mounts under /api: no route slips in beside the list', () => {
+    type Layer = { route?: { path: string; methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };
+    const appLayers = (t.app as unknown as { router: { stack: Layer[] } }).router.stack;
+    const mounted = appLayers
+      .flatMap((layer) => layer.handle?.stack ?? [])
+      .filter((layer) => layer.route)
+      .flatMap((layer) => Object.keys(layer.route!.methods).map((method) => `${method.toUpperCase()} ${layer.route!.path}`));
+    const declared = routes.map((spec) => `${spec.method.toUpperCase()} ${spec.path}`);
+    expect(mounted.sort()).toEqual(declared.sort());
+  });
+
   it('answers every caller as the rule says, on the probe and on the real app', async () => {
     const mismatches: string[] = [];
     for (const [index, spec] of routes.entries()) {
