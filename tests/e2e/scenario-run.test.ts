@@ -161,6 +161,11 @@ describe('an engineer designing, running and comparing scenarios', () => {
     expect(await page.getByTestId('envelope-entry').first().innerText()).toContain('64.4–80.6 °F dry-bulb');
     await shot('envelopes-ip');
     await useUnits(page, 'SI');
+    // Deleting asks first; the published presets stay.
+    page.once('dialog', (dialog) => void dialog.accept());
+    await page.getByTestId('envelope-entry').filter({ hasText: 'Client hall limits' }).getByRole('button', { name: 'Delete' }).click();
+    await expect.poll(() => page.getByTestId('envelope-entry').filter({ hasText: 'Client hall limits' }).count()).toBe(0);
+    expect(await page.getByTestId('envelope-entry').count()).toBeGreaterThan(5);
 
     await page.getByRole('link', { name: 'Air-state calculator' }).click();
     await page.waitForURL('**/calculator');

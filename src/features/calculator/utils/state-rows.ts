@@ -29,6 +29,10 @@ export function stateRows(s: MoistAirState, system: UnitSystem): { label: string
       value: ip ? `${fixed(s.densityKgPerM3 * M3_PER_KG_PER_FT3_PER_LB, 4)} lb/ft³` : `${fixed(s.densityKgPerM3, 4)} kg/m³`,
     },
     { label: 'Degree of saturation', value: fixed(s.degreeOfSaturation, 4) },
-    { label: 'Specific humidity', value: `${fixed(s.specificHumidity * 1000, 3)} g/kg moist air` },
+    {
+      label: 'Specific humidity',
+      // Grains per pound: 7000 gr = 1 lb exactly.
+      value: ip ? `${fixed(s.specificHumidity * 7000, 1)} gr/lb moist air` : `${fixed(s.specificHumidity * 1000, 3)} g/kg moist air`,
+    },
   ];
 }

@@ -66,6 +66,7 @@ export function parseInputText(unit: FieldUnit, system: UnitSystem, text: string
 export function rangeText(unit: FieldUnit, system: UnitSystem, minSi: number, maxSi: number): string {
   const ends = [minSi, maxSi].map((v) => fieldToDisplay(unit, system, v)).sort((a, b) => a - b);
   const label = fieldUnitLabel(unit, system);
-  const show = (v: number) => Number(v.toFixed(3)).toLocaleString('en', { maximumFractionDigits: 3 });
+  // Converted ends keep the precision a person would type: whole numbers from 100 up, then 0.1, then 0.001.
+  const show = (v: number) => v.toLocaleString('en', { maximumFractionDigits: Math.abs(v) >= 100 ? 0 : Math.abs(v) >= 10 ? 1 : 3 });
   return `${show(ends[0])} to ${show(ends[1])}${label ? ` ${label}` : ''}`;
 }
