@@ -48,6 +48,10 @@ export class OidcClient {
       const response = await fetch(url, { signal: AbortSignal.timeout(10_000) });
       if (!response.ok) throw new Error(`The sign-in provider's discovery document at ${url} answered ${response.status}.`);
       const doc = discoverySchema.parse(await response.json());
+      // OpenID Connect Discovery 1.0 §4.3: the document must name the issuer it was fetched for.
+      if (doc.issuer.replace(/\/$/, '') !== this.config.issuer.replace(/\/$/, '')) {
+        throw new Error(`The discovery document at ${url} names the issuer ${doc.issuer}, not ${this.config.issuer}.`);
+      }
       this.jwks = createRemoteJWKSet(new URL(doc.jwks_uri));
       return doc;
     })().catch((error: unknown) => {

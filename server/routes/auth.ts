@@ -17,7 +17,7 @@ import {
   startSession,
   systemClock,
 } from '../auth/session';
-import { signInAttempts } from '../db/schema';
+import { sessions, signInAttempts } from '../db/schema';
 import { HttpError } from '../http-error';
 
 const stateCookieName = 'tramontane_sign_in';
@@ -54,7 +54,14 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
       const returnTo = safeReturnTo(req.query.returnTo);
       if (!returnTo) throw new HttpError(400, 'invalid_request', 'returnTo must be a path on this site, such as /projects/1.');
       const now = clock();
-      const start = await oidc().startSignIn();
+      const client = oidc();
+      let start;
+      try {
+        start = await client.startSignIn();
+      } catch (problem) {
+        (deps.logError ?? console.error)(problem);
+        throw new HttpError(503, 'provider_unavailable', 'The sign-in provider cannot be reached or is misconfigured; the server log says which.');
+      }
       db.delete(signInAttempts).where(lt(signInAttempts.expiresAt, now)).run();
       db.insert(signInAttempts)
         .values({
@@ -98,6 +105,8 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
         throw problem;
       }
       purgeExpiredSessions(db, policy, now);
+      // A sign-in always gets a fresh token; a session the browser already had ends here.
+      if (req.sessionTokenHash) db.delete(sessions).where(eq(sessions.tokenHash, req.sessionTokenHash)).run();
       startSession(db, req, res, person.id, policy, now);
       res.clearCookie(stateCookieName, { ...cookieOptions(req), path: '/api/auth' });
       res.redirect(303, attempt.returnTo);

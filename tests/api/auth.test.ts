@@ -7,6 +7,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sessions, signInAttempts, users } from '../../server/db/schema';
 import { sessionCookieName } from '../../server/auth/session';
 import { startFakeProvider } from '../../server/fake-provider';
+import { OidcClient } from '../../server/auth/oidc';
+import { createTestApp } from '../support/test-app';
 import { seedDemo } from '../../server/demo/seed';
 import { signInThroughProvider, startSignInStack, type SignInStack } from '../support/sign-in';
 
@@ -71,6 +73,36 @@ describe('the first person to sign in on a new installation', () => {
       .set('cookie', stateCookie.split(';')[0])
       .expect(303);
     expect(sessionCookie(callback)).toMatch(/Secure/);
+  });
+});
+
+describe('signing in again in the same browser', () => {
+  it('replaces the old session instead of keeping both', async () => {
+    const a = agent();
+    await signInThroughProvider(t, a, { name: 'Gil Marsh', email: 'gil@firm.example' });
+    await signInThroughProvider(t, a, { name: 'Gil Marsh', email: 'gil@firm.example' });
+    const gil = t.db.select().from(users).where(eq(users.email, 'gil@firm.example')).get()!;
+    expect(t.db.select().from(sessions).where(eq(sessions.userId, gil.id)).all()).toHaveLength(1);
+  });
+});
+
+describe('a provider whose discovery document names another issuer', () => {
+  it('is refused before anyone is sent to it', async () => {
+    const logged: unknown[] = [];
+    const s = await startSignInStack({ overrides: { logError: (e) => logged.push(e) } });
+    try {
+      const wrong = new OidcClient({ issuer: s.provider.issuer.replace('127.0.0.1', 'localhost'), clientId: 'tramontane-test', clientSecret: null, redirectUri: s.redirectUri });
+      const app = createTestApp({ oidc: wrong, logError: (e) => logged.push(e) });
+      try {
+        const res = await request(app.app).get('/api/auth/sign-in').expect(503);
+        expect(res.body.error.code).toBe('provider_unavailable');
+        expect(String(logged[0])).toContain('names the issuer');
+      } finally {
+        await app.close();
+      }
+    } finally {
+      await s.close();
+    }
   });
 });
 
