@@ -6,6 +6,9 @@ import { personWithSession, projectWithMembers, type TestPerson } from '../suppo
 
 // Synthetic test weather: 72 hours of July, never above 22 °C (tests/fixtures/api/three-days.csv).
 const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
+// Three synthetic years for an invented mild maritime site (sample-weather/generate.ts), for the run page at full size.
+const threeYears = readFileSync(new URL('../../sample-weather/kelderwick-point.csv', import.meta.url));
+const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
 
 let h: BrowserHarness;
 let engineer: TestPerson;
@@ -186,6 +189,44 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+71\.6 °F/);
     await chartsDrawn(page);
     await shot('calculator-ip');
+    await useUnits(page, 'SI');
+  });
+});
+
+describe('a run over several years of weather', () => {
+  it('draws the monthly hours, carpet, moist-air chart and bins of 26,280 hours', async () => {
+    const { site } = await api<{ site: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sites`,
+      JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
+    );
+    const { climateFile } = await api<{ climateFile: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
+      threeYears,
+      'text/csv',
+    );
+    const scenario = { ...directAirSample, name: 'Direct air, 20 °C supply, evaporative assist', system: { ...directAirSample.system, supplyAirC: 20 } };
+    const { scenario: stored } = await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
+    const { runs } = await api<{ runs: { id: number }[] }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/runs`,
+      JSON.stringify({ scenarioIds: [stored.id], climateFileIds: [climateFile.id] }),
+    );
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runs[0].id}`);
+    await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 30_000 }).toBe('done');
+    // 2021–2023 hourly, none missing: 3 × 8760 hours.
+    expect(await page.getByTestId('mode-hours').innerText()).toMatch(/All hours\s+26,280/);
+    await chartsDrawn(page);
+    await expect.poll(() => page.getByTestId('bin-table').locator('tbody tr').count(), { timeout: 15_000 }).toBeGreaterThan(8);
+    await shot('run-page-years-si');
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    await shot('run-page-years-ip');
     await useUnits(page, 'SI');
   });
 });
