@@ -65,7 +65,10 @@ describe('an engineer adding hourly weather to a project', () => {
 
     await page.getByRole('button', { name: 'Store climate file' }).click();
     await page.waitForURL(/\/climate-files\/\d+$/);
-    await page.getByRole('heading', { name: 'zimna-dolina' }).waitFor();
+    await page.getByRole('heading', { name: 'zimna-dolina' }).waitFor().catch(async (e) => {
+      await h.screenshot('climate-file-page-failed');
+      throw e;
+    });
     expect(await page.getByTestId('climate-file-facts').innerText()).toContain('2021–2023');
     expect(await page.getByTestId('design-label').innerText()).toContain('Computed from this file, not published station values');
     // Both charts drawn: the carpet and the moist-air chart each render an SVG.
@@ -78,6 +81,7 @@ describe('an engineer adding hourly weather to a project', () => {
     // Hovering the chart shows the nearest hour's full state.
     await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent()).toContain('gr/lb');
     const cell = page.getByTestId('moist-air-chart').locator('g[aria-label="rect"] rect').nth(40);
+    await cell.scrollIntoViewIfNeeded();
     const box = (await cell.boundingBox())!;
     await page.mouse.move(box.x + 1, box.y + 1);
     await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);

@@ -82,7 +82,7 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
       const drawn = Array.from(sample.index).filter((i) => xy.x[i] === xy.x[i]);
 
       const lineRows = lines.flatMap((line, z) => line.points.map((p) => ({ ...p, z, kind: line.kind })));
-      const labels = lineLabels(lines, system);
+      const labels = lineLabels(lines, system, projection);
       const envelopeRows = envelopes.flatMap((envelope, k) => {
         const polygon = envelopePolygon(envelope.limits, window).map((s) => stateToChartXY(s.dryBulbC, s.humidityRatio, projection, system));
         return polygon.length ? [...polygon, polygon[0]].map((p) => ({ ...p, k, label: envelope.label })) : [];
@@ -198,7 +198,7 @@ function chartDomains(window: ReturnType<typeof chartWindowFor>, projection: Cha
 }
 
 /** Where each background line carries its value: RH at its far end, wet-bulb and enthalpy where they leave saturation. */
-function lineLabels(lines: DisplayLine[], system: UnitSystem) {
+function lineLabels(lines: DisplayLine[], system: UnitSystem, projection: ChartProjection) {
   const out: Array<{ x: number; y: number; text: string; fill: string; anchor?: 'start' | 'end' }> = [];
   for (const line of lines) {
     if (!line.points.length) continue;
@@ -206,15 +206,12 @@ function lineLabels(lines: DisplayLine[], system: UnitSystem) {
       const p = line.points[line.points.length - 1];
       out.push({ ...p, text: `${line.value} %`, fill: '#4f6a77' });
     } else if (line.kind === 'wet-bulb') {
-      // On the saturation curve, outside it, where nothing else is drawn.
-      out.push({ ...line.points[0], text: formatQuantity('temperature', system, line.value, false).replace(/\.0$/, ''), fill: '#6d5f3a', anchor: 'end' });
+      // On the saturation curve, on its supersaturated side, where no hour is drawn.
+      out.push({ ...line.points[0], text: formatQuantity('temperature', system, line.value, false).replace(/\.0$/, ''), fill: '#6d5f3a', anchor: projection === 'h-x' ? 'start' : 'end' });
     } else if (line.kind === 'enthalpy') {
       // At the line's dry end (the foot of the chart or its far edge).
       const p = line.points[line.points.length - 1];
       out.push({ ...p, text: `h ${formatQuantity('enthalpy', system, line.value, false).replace(/\.0+$/, '')}`, fill: '#5d5068', anchor: 'end' });
-    } else if (line.kind === 'isotherm') {
-      const p = line.points[line.points.length - 1];
-      out.push({ ...p, text: formatQuantity('temperature', system, line.value).replace('.0 ', ' '), fill: '#6b747a' });
     }
   }
   return out;

@@ -56,7 +56,7 @@ export function chartWindowFor(
 ): ChartWindow {
   let tMin = -10;
   let tMax = 40;
-  let wMax = 0.02;
+  let wMax = 0;
   const take = (t: number, w: number) => {
     if (t === t) (tMin = Math.min(tMin, t)), (tMax = Math.max(tMax, t));
     if (w === w) wMax = Math.max(wMax, w);
