@@ -24,6 +24,7 @@ import {
 } from './delimited-text';
 import { averageToHours, fillGaps, hourRange, timeOrder, trimToCompleteHours, type RowColumns } from './hourly-grid';
 import { IssueLog } from './issue-log';
+import { detectTypicalYear, intoYear } from './typical-year';
 import { createLocalToUtc, isKnownTimeZone, type LocalToUtc } from './local-time';
 import { classifyUnreadableCell, parseNumberCell, sniffDecimalSeparator } from './number-cells';
 import { describeYmdh, recogniseColumns, unitOf, type Recognition } from './recognise-columns';
@@ -424,6 +425,7 @@ function readRows(
     line: new Int32Array(dataRows),
     dropped: new Uint8Array(dataRows),
   };
+  const localTimes = new Float64Array(dataRows);
   const zone: LocalToUtc | null = ctx.timeZone === 'UTC' ? null : createLocalToUtc(ctx.timeZone);
   const timeColumns =
     time.layout === 'iso' ? [time.column] : time.layout === 'date-time' ? [time.dateColumn, time.timeColumn] : [time.year, time.month, time.day, time.hour];
@@ -559,6 +561,7 @@ function readRows(
     }
     const i = rows.count++;
     rows.timeMs[i] = utcMs;
+    localTimes[i] = localMs;
     rows.dryBulbC[i] = d;
     rows.humidity[i] = w;
     if (rows.pressurePa && pres && pressure) rows.pressurePa[i] = readValue(pres, row[pressure.column], line, PRESSURE_MIN_PA, PRESSURE_MAX_PA);
@@ -578,6 +581,17 @@ function readRows(
 
   checkRejectShares(dry, hum, pres, rows, ctx);
   if (pres && ctx.mapping.pressure === null) rows.pressurePa = null;
+  const typical = detectTypicalYear(localTimes, rows.count);
+  if (typical) {
+    // same offset as read, so a zone's daylight saving is not re-applied in the new year
+    for (let i = 0; i < rows.count; i++) rows.timeMs[i] = intoYear(localTimes[i], typical.year) - (localTimes[i] - rows.timeMs[i]);
+    const from = typical.sourceYears[0];
+    const to = typical.sourceYears[typical.sourceYears.length - 1];
+    log.warning(
+      'typical-year-restamped',
+      `The file looks like a typical year: ${rows.count} hours taken from ${typical.sourceYears.length} different years (${from}–${to}), each calendar hour once. Every row is placed in ${typical.year} at its month, day and hour, so the series is one continuous year.`,
+    );
+  }
   if (log.hasErrors()) return null;
   return toHourlySeries(rows, humidityQuantity, ctx, !anyOffset && !zone);
 }

@@ -131,6 +131,7 @@ export type IssueKind =
   | 'gap-missing'
   | 'non-hourly-step'
   | 'timestamps-rounded'
+  | 'typical-year-restamped'
   | 'malformed-row'
   | 'other-humidity-ignored'
   | 'pressure-ignored'

@@ -295,3 +295,39 @@ describe('details of recognition', () => {
     expect(iso(series!.timestampsMs[0])).toBe('2021-03-02T05:00:00.000Z'); // 22:00 local = 05:00 UTC next day
   });
 });
+
+describe('typical-year files', () => {
+  // months taken from different years, hour ending 1–24 as such files are usually written
+  const sourceYear = [1998, 2004, 2011, 1995, 2007, 2001, 1999, 2013, 2002, 2009, 1997, 2005];
+  function typicalYearText(): string {
+    const lines = ['Year,Month,Day,Hour,Dry Bulb (C),Dew Point (C)'];
+    for (let month = 1; month <= 12; month++) {
+      const days = new Date(Date.UTC(2001, month, 0)).getUTCDate();
+      for (let day = 1; day <= days; day++) {
+        for (let hour = 1; hour <= 24; hour++) lines.push(`${sourceYear[month - 1]},${month},${day},${hour},${month + hour / 100},${month - 5}`);
+      }
+    }
+    return `${lines.join('\n')}\n`;
+  }
+
+  it('re-dates the rows into one continuous year and says so', () => {
+    const { ok, series, report } = importClimateText(typicalYearText());
+    expect(ok).toBe(true);
+    expect(report.counts.hours).toBe(8760);
+    expect(report.counts.missingHours).toBe(0);
+    expect(report.issues).toContainEqual(expect.objectContaining({ kind: 'typical-year-restamped', severity: 'warning' }));
+    // the first row's year (1998, not leap) is kept; hour 24 of 31 December wraps to 1 January 00:00
+    expect(iso(series!.timestampsMs[0])).toBe('1998-01-01T00:00:00.000Z');
+    expect(series!.dryBulbC[0]).toBeCloseTo(12.24, 10);
+    expect(series!.dryBulbC[1]).toBeCloseTo(1.01, 10);
+    expect(iso(series!.timestampsMs[8759])).toBe('1998-12-31T23:00:00.000Z');
+  });
+
+  it('leaves an ordinary year that crosses a new year alone', () => {
+    const lines = ['timestamp,dry_bulb_c,relative_humidity_pct'];
+    for (let h = 0; h < 8760; h++) lines.push(`${new Date(Date.UTC(2020, 6, 1) + h * 3_600_000).toISOString().slice(0, 16)}Z,10,80`);
+    const { report } = importClimateText(lines.join('\n'));
+    expect(report.issues.filter((i) => i.kind === 'typical-year-restamped')).toEqual([]);
+    expect(report.firstTimestamp).toBe('2020-07-01T00:00:00.000Z');
+  });
+});

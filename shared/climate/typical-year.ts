@@ -1,0 +1,74 @@
+/**
+ * Typical-year files: one year of hours whose months come from different calendar years
+ * (each month picked as the most typical of a long record). Read at their real dates they
+ * scatter over decades; re-dated into one year they are the continuous year they stand for.
+ */
+import { daysFromCivil, MS_PER_DAY } from './time-cells';
+
+/** Calendar parts of a local-ms day number (H. Hinnant, civil_from_days). */
+function civilFromDays(days: number): { year: number; month: number; day: number } {
+  const z = days + 719468;
+  const era = Math.floor(z / 146097);
+  const doe = z - era * 146097;
+  const yoe = Math.floor((doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365);
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+function isLeap(year: number): boolean {
+  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
+}
+
+export interface TypicalYear {
+  /** The calendar years the rows come from, ascending. */
+  sourceYears: number[];
+  /** The year every row is placed in. */
+  year: number;
+}
+
+/**
+ * Whether local wall times (ms, as if UTC) look like a typical year: about one year of rows
+ * (8,000–8,800), from two or more calendar years, spread over more than 400 days or going back
+ * in time, and with each (month, day, hour) at most once (≤ 1 % repeats). Returns the years and
+ * the year to place the rows in (the first row's year, or 2000/2001 when 29 February says otherwise).
+ */
+export function detectTypicalYear(localMs: Float64Array, count: number): TypicalYear | null {
+  if (count < 8000 || count > 8800) return null;
+  const years = new Map<number, number>();
+  const seen = new Uint8Array(13 * 32 * 25);
+  let repeats = 0;
+  let backwards = false;
+  let hasLeapDay = false;
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < count; i++) {
+    const t = localMs[i];
+    if (i > 0 && t < localMs[i - 1]) backwards = true;
+    if (t < min) min = t;
+    if (t > max) max = t;
+    const days = Math.floor(t / MS_PER_DAY);
+    const { year, month, day } = civilFromDays(days);
+    const hour = Math.floor((t - days * MS_PER_DAY) / 3_600_000);
+    years.set(year, (years.get(year) ?? 0) + 1);
+    // 29 February 00:00 alone is hour 24 of the 28th in an hour-ending file, not a leap day
+    if (month === 2 && day === 29 && hour > 0) hasLeapDay = true;
+    const key = (month * 32 + day) * 25 + hour;
+    if (seen[key]) repeats++;
+    else seen[key] = 1;
+  }
+  if (years.size < 2 || repeats > count * 0.01) return null;
+  if (!backwards && max - min <= 400 * MS_PER_DAY) return null;
+  const first = civilFromDays(Math.floor(localMs[0] / MS_PER_DAY)).year;
+  const year = isLeap(first) === hasLeapDay ? first : hasLeapDay ? 2000 : 2001;
+  return { sourceYears: [...years.keys()].sort((a, b) => a - b), year };
+}
+
+/** Local ms of the same wall time in another year (29 February only into a leap year). */
+export function intoYear(localMs: number, year: number): number {
+  const days = Math.floor(localMs / MS_PER_DAY);
+  const { month, day } = civilFromDays(days);
+  return daysFromCivil(year, month, day) * MS_PER_DAY + (localMs - days * MS_PER_DAY);
+}
