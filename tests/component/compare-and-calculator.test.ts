@@ -2,6 +2,7 @@ import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { RunListing } from '@/features/compare/api/get-runs';
 import { compareRuns } from '@/features/compare/utils/compare-runs';
+import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
 import { solveState } from '@/features/calculator/utils/state-request';
 
 const psychrolib = createRequire(import.meta.url)('psychrolib');
@@ -55,6 +56,14 @@ describe('comparing runs against a baseline', () => {
     const rows = compareRuns(runs, 2);
     const mechanical = rows.find((r) => r.metric.key === 'mechanical')!;
     expect(mechanical.cells.find((c) => c.runId === 1)).toMatchObject({ difference: -20, verdict: 'better' });
+  });
+
+  it('writes the comparison as CSV with units, values and differences', () => {
+    const csv = comparisonCsv(compareRuns(runs, 1), new Map([[1, '=run one'], [2, 'run two']]), 'SI').split('\n');
+    // A label that a spreadsheet would read as a formula is defused (shared/csv.ts).
+    expect(csv[0]).toBe("figure,unit,'=run one,'=run one difference,run two,run two difference");
+    expect(csv[1]).toBe('Free cooling,h,80,,60,-20');
+    expect(csv).toContain('"Cooling energy per 8,760 h",MWh,400,,500,100');
   });
 
   it('falls back to the first finished run when the baseline is not among them', () => {

@@ -1,6 +1,7 @@
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
 import type { ComparedRow } from '../utils/compare-runs';
+import { comparisonCsv } from '../utils/comparison-csv';
 import { formatMetric } from './metric-format';
 
 const verdictInk = { better: 'text-signal-ok', worse: 'text-signal-bad', same: 'text-ink-soft', none: 'text-ink-soft' };
@@ -9,8 +10,19 @@ const verdictInk = { better: 'text-signal-ok', worse: 'text-signal-bad', same: '
 export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[]; runs: RunListing[]; baselineId: number }) {
   const { unitSystem } = useUnitSystem();
   const byId = new Map(runs.map((r) => [r.id, r]));
+  function download() {
+    const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${r.scenario.name} / ${r.climate.name}`]));
+    const url = URL.createObjectURL(new Blob([comparisonCsv(rows, labels, unitSystem)], { type: 'text/csv' }));
+    Object.assign(document.createElement('a'), { href: url, download: `comparison-${runs.map((r) => r.id).join('-')}.csv` }).click();
+    URL.revokeObjectURL(url);
+  }
   return (
     <div className="overflow-x-auto">
+      <div className="mb-2 flex justify-end">
+        <button type="button" onClick={download} className="rounded border border-rule px-3 py-1 text-xs hover:bg-mist">
+          Download CSV
+        </button>
+      </div>
       <table className="w-full text-sm" data-testid="comparison-table">
         <thead>
           <tr className="border-b border-rule align-bottom text-xs text-ink-soft">

@@ -50,6 +50,11 @@ export function RunInputs({ run }: { run: RunRecord }) {
         <dd className="num break-all">sha256 {c.sha256}</dd>
         <dt className="text-ink-soft">Engine version</dt>
         <dd className="num">{run.engineVersion}</dd>
+        <dt className="text-ink-soft">Elevation used</dt>
+        <dd>
+          {run.results ? formatQuantity('elevation', unitSystem, run.results.site.elevationM) : '–'}
+          <span className="block text-ink-faint">the site's; it takes the place of the scenario's elevationM</span>
+        </dd>
         <dt className="text-ink-soft">Pressure</dt>
         <dd>{run.results?.site.pressureSource === 'weather' ? 'station pressure from the file' : 'standard atmosphere at the site elevation'}</dd>
       </dl>

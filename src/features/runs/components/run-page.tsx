@@ -11,6 +11,7 @@ import { MonthlyHoursChart } from './monthly-hours-chart';
 import { RunHourViews } from './run-hour-views';
 import { RunInputs } from './run-inputs';
 import { RunStatus } from './run-status';
+import { YearTable } from './year-table';
 
 const statusStyle: Record<RunRecord['status'], string> = {
   queued: 'bg-mist text-ink',
@@ -91,6 +92,11 @@ export function RunPage() {
             </Panel>
           </div>
           <EnergyWaterCards results={results} />
+          {results.hoursByYear.length > 1 && (
+            <Panel title="By calendar year">
+              <YearTable years={results.hoursByYear} />
+            </Panel>
+          )}
           <RunHourViews run={run} />
           <Panel title="Inputs as run">
             <RunInputs run={run} />
