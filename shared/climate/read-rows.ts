@@ -1,0 +1,281 @@
+/** Data rows → UTC times and SI values, with the checks each row gets. */
+import type { ParsedRows } from './delimited-text';
+import type { RowColumns } from './hourly-grid';
+import { toHourlySeries } from './hourly-series';
+import { percent, REJECT_SHARE, round, type Context } from './import-context';
+import { createLocalToUtc, type LocalToUtc } from './local-time';
+import { classifyUnreadableCell, parseNumberCell } from './number-cells';
+import { describeYmdh, unitOf } from './recognise-columns';
+import { isBlankRow, isCommentRow, type Layout } from './table-layout';
+import {
+  civilDays,
+  formatUtc,
+  lastParse,
+  MS_PER_DAY,
+  MS_PER_HOUR,
+  MS_PER_MINUTE,
+  parseDateCell,
+  parseDateTimeCell,
+  parseIntegerCell,
+  parseTimeCell,
+} from './time-cells';
+import type { ClimateSeries, HumidityQuantity, QuantityAssignment, TimeMapping } from './types';
+import { detectTypicalYear, intoYear } from './typical-year';
+import { conversionToSi, type AffineConversion } from './units';
+import { checkHumidity, DRY_BULB_MAX_C, DRY_BULB_MIN_C, humidityCheck, PRESSURE_MAX_PA, PRESSURE_MIN_PA } from './value-limits';
+
+interface ValueReader {
+  assignment: QuantityAssignment;
+  conversion: AffineConversion;
+  bad: number;
+}
+
+function reader(a: QuantityAssignment): ValueReader {
+  return { assignment: a, conversion: conversionToSi(unitOf(a)), bad: 0 };
+}
+
+/** The heart of the import: rows → time and SI values, with per-row checks. */
+export function readRows(
+  parsed: ParsedRows,
+  layout: Layout,
+  time: TimeMapping,
+  dryBulb: QuantityAssignment,
+  humidity: QuantityAssignment,
+  pressure: QuantityAssignment | null,
+  ctx: Context,
+  dataRows: number,
+): ClimateSeries | null {
+  const { log, counts } = ctx;
+  const decimalComma = ctx.mapping.decimalSeparator === ',';
+  const headers = layout.headers;
+  const dry = reader(dryBulb);
+  const hum = reader(humidity);
+  const pres = pressure ? reader(pressure) : null;
+  const humidityQuantity = humidity.quantity as HumidityQuantity;
+  const rows: RowColumns = {
+    count: 0,
+    timeMs: new Float64Array(dataRows),
+    dryBulbC: new Float64Array(dataRows),
+    humidity: new Float64Array(dataRows),
+    pressurePa: pres ? new Float64Array(dataRows) : null,
+    line: new Int32Array(dataRows),
+    dropped: new Uint8Array(dataRows),
+  };
+  const localTimes = new Float64Array(dataRows);
+  const zone: LocalToUtc | null = ctx.timeZone === 'UTC' ? null : createLocalToUtc(ctx.timeZone);
+  const timeColumns =
+    time.layout === 'iso' ? [time.column] : time.layout === 'date-time' ? [time.dateColumn, time.timeColumn] : [time.year, time.month, time.day, time.hour];
+  const needed = Math.max(...timeColumns, dryBulb.column, humidity.column, pressure?.column ?? 0) + 1;
+  const timeHeader = timeColumns.map((c) => headers[c]).join(' + ');
+  let hourZero = false;
+  let hour24 = false;
+  let anyOffset = false;
+  let previousOffset = NaN;
+  let previousLine = 0;
+
+  const readValue = (r: ValueReader, cell: string | undefined, line: number, min: number, max: number): number => {
+    const raw = cell === undefined ? NaN : parseNumberCell(cell, decimalComma);
+    const header = r.assignment.header;
+    if (raw !== raw) {
+      counts.cellsUnreadable++;
+      if (cell === undefined || classifyUnreadableCell(cell, decimalComma) === 'unreadable') {
+        r.bad++;
+        log.warning('unparsable-value', `"${cell ?? ''}" in column "${header}" is not a number; the value is treated as missing.`, {
+          line,
+          column: header,
+          value: cell ?? '',
+        });
+      } else {
+        log.info('missing-value-marker', `Column "${header}" marks a missing value with "${cell.trim()}".`, { line, column: header, value: cell });
+      }
+      return NaN;
+    }
+    const si = raw * r.conversion.scale + r.conversion.offset;
+    if (si < min || si > max) {
+      r.bad++;
+      counts.impossibleValues++;
+      log.warning('impossible-value', `${r.assignment.quantity} ${cell?.trim()} ${r.assignment.unit} in column "${header}" is outside the possible range; treated as missing.`, {
+        line,
+        column: header,
+        value: cell,
+      });
+      return NaN;
+    }
+    return si;
+  };
+
+  for (let r = layout.dataStart; r < parsed.rows.length; r++) {
+    const row = parsed.rows[r];
+    if (isBlankRow(row) || isCommentRow(row)) continue;
+    counts.rows++;
+    const line = parsed.lineOf(r);
+    if (row.length < needed) {
+      log.warning('wrong-field-count', `The row has ${row.length} fields where ${headers.length} were expected.`, {
+        line,
+        value: row.join(ctx.mapping.delimiter).slice(0, 120),
+      });
+    }
+
+    // time of the row, in local ms, with the offset when the cell gives one
+    let localMs = NaN;
+    let offsetMinutes = NaN;
+    if (time.layout === 'iso') {
+      localMs = parseDateTimeCell(row[time.column] ?? '', time.dateOrder ?? 'YMD');
+      offsetMinutes = lastParse.offsetMinutes;
+    } else if (time.layout === 'date-time') {
+      const day = parseDateCell(row[time.dateColumn] ?? '', time.dateOrder);
+      const clock = parseTimeCell(row[time.timeColumn] ?? '');
+      localMs = day + clock;
+      if (clock === 0) hourZero = true;
+      else if (clock === MS_PER_DAY) hour24 = true;
+    } else {
+      const days = civilDays(parseIntegerCell(row[time.year] ?? ''), parseIntegerCell(row[time.month] ?? ''), parseIntegerCell(row[time.day] ?? ''));
+      const hour = parseIntegerCell(row[time.hour] ?? '');
+      let minute = time.minute === null ? 0 : parseIntegerCell(row[time.minute] ?? '');
+      if (minute === 60) minute = 0; // some exports write minute 60 beside an hour-ending hour
+      if (hour >= 0 && hour <= 24 && minute >= 0 && minute < 60) {
+        localMs = days * MS_PER_DAY + hour * MS_PER_HOUR + minute * MS_PER_MINUTE;
+        if (hour === 0) hourZero = true;
+        else if (hour === 24) hour24 = true;
+      }
+    }
+    if (localMs !== localMs) {
+      counts.rowsRejected++;
+      const cells = timeColumns.map((c) => row[c] ?? '').join(' ');
+      log.warning('unparsable-time', `The time "${cells}" could not be read; the row is left out.`, { line, column: timeHeader, value: cells });
+      continue;
+    }
+    let utcMs: number;
+    if (offsetMinutes === offsetMinutes) {
+      anyOffset = true;
+      utcMs = localMs - offsetMinutes * MS_PER_MINUTE;
+    } else if (zone) {
+      utcMs = zone.toUtc(localMs);
+      if (zone.lastEvent?.kind === 'nonexistent') {
+        log.warning('daylight-saving-jump', `Local time ${formatUtc(localMs).slice(0, 16).replace('T', ' ')} does not exist in ${ctx.timeZone} (clocks go forward); read with the offset before the change.`, {
+          line,
+          column: timeHeader,
+        });
+      }
+    } else {
+      utcMs = localMs;
+    }
+    const offsetNow = localMs - utcMs;
+    if (previousOffset === previousOffset && offsetNow !== previousOffset) {
+      counts.daylightSavingJumps++;
+      log.info('daylight-saving-jump', `The UTC offset changes from ${offsetText(previousOffset)} to ${offsetText(offsetNow)} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
+        line,
+        column: timeHeader,
+      });
+    }
+    previousOffset = offsetNow;
+    previousLine = line;
+
+    // values
+    const d = readValue(dry, row[dryBulb.column], line, DRY_BULB_MIN_C, DRY_BULB_MAX_C);
+    let w = readValue(hum, row[humidity.column], line, -Infinity, Infinity);
+    if (w === w) {
+      checkHumidity(humidityQuantity, w, d);
+      if (humidityCheck.verdict === 'impossible') {
+        hum.bad++;
+        counts.impossibleValues++;
+        log.warning('impossible-value', impossibleHumidityMessage(humidity, row[humidity.column], d), {
+          line,
+          column: humidity.header,
+          value: row[humidity.column],
+        });
+        w = NaN;
+      } else if (humidityCheck.verdict === 'clamped') {
+        counts.clampedValues++;
+        log.info('clamped-value', `${humidity.quantity} ${row[humidity.column].trim()} in column "${humidity.header}" is just past saturation; set to ${round(humidityCheck.value)} ${humidityQuantity === 'relative-humidity' ? '%' : '°C'}.`, {
+          line,
+          column: humidity.header,
+          value: row[humidity.column],
+        });
+        w = humidityCheck.value;
+      }
+    }
+    const i = rows.count++;
+    rows.timeMs[i] = utcMs;
+    localTimes[i] = localMs;
+    rows.dryBulbC[i] = d;
+    rows.humidity[i] = w;
+    if (rows.pressurePa && pres && pressure) rows.pressurePa[i] = readValue(pres, row[pressure.column], line, PRESSURE_MIN_PA, PRESSURE_MAX_PA);
+    rows.line[i] = line;
+  }
+
+  if (time.layout === 'ymdh') {
+    const convention = hour24 || !hourZero ? 'ending-1-24' : 'beginning-0-23';
+    if (time.confidence < 1 || convention === time.hourConvention) {
+      time.hourConvention = convention;
+      time.description = describeYmdh(headers[time.hour], convention);
+    }
+    if (hourZero && hour24) log.warning('non-hourly-step', 'Hours run both 0 and 24: check whether the hour column is hour ending (1–24) or hour beginning (0–23).', { column: headers[time.hour] });
+  } else if (time.layout === 'date-time' && hour24) {
+    time.description += hourZero ? ' (times 00:00 and 24:00 both occur)' : ', 24:00 read as midnight at the end of the day';
+  }
+
+  checkRejectShares(dry, hum, pres, rows, ctx);
+  if (pres && ctx.mapping.pressure === null) rows.pressurePa = null;
+  const typical = detectTypicalYear(localTimes, rows.count);
+  if (typical) {
+    // same offset as read, so a zone's daylight saving is not re-applied in the new year
+    for (let i = 0; i < rows.count; i++) rows.timeMs[i] = intoYear(localTimes[i], typical.year) - (localTimes[i] - rows.timeMs[i]);
+    const from = typical.sourceYears[0];
+    const to = typical.sourceYears[typical.sourceYears.length - 1];
+    log.warning(
+      'typical-year-restamped',
+      `The file looks like a typical year: ${rows.count} hours taken from ${typical.sourceYears.length} different years (${from}–${to}), each calendar hour once. Every row is placed in ${typical.year} at its month, day and hour, so the series is one continuous year.`,
+    );
+  }
+  if (log.hasErrors()) return null;
+  return toHourlySeries(rows, humidityQuantity, ctx, !anyOffset && !zone);
+}
+
+function offsetText(offsetMs: number): string {
+  const minutes = Math.round(offsetMs / MS_PER_MINUTE);
+  const sign = minutes < 0 ? '−' : '+';
+  const abs = Math.abs(minutes);
+  return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+}
+
+function impossibleHumidityMessage(humidity: QuantityAssignment, cell: string, dryBulbC: number): string {
+  const where = `${humidity.quantity} ${cell.trim()} ${humidity.unit} in column "${humidity.header}"`;
+  if ((humidity.quantity === 'dew-point' || humidity.quantity === 'wet-bulb') && dryBulbC === dryBulbC) {
+    return `${where} is above the dry-bulb of ${round(dryBulbC)} °C (or outside the possible range); treated as missing.`;
+  }
+  return `${where} is outside the possible range; treated as missing.`;
+}
+
+function checkRejectShares(dry: ValueReader, hum: ValueReader, pres: ValueReader | null, rows: RowColumns, ctx: Context): void {
+  const { log, counts } = ctx;
+  if (counts.rows > 0 && counts.rowsRejected / counts.rows > REJECT_SHARE) {
+    log.error(
+      'too-many-rejected',
+      `${counts.rowsRejected} of ${counts.rows} rows (${percent(counts.rowsRejected / counts.rows)}) have a time that cannot be read: check the time columns and date order.`,
+    );
+  }
+  if (rows.count === 0) {
+    if (counts.rowsRejected === 0) log.error('too-little-data', 'No data row could be read.');
+    return;
+  }
+  for (const r of [dry, hum]) {
+    if (r.bad / rows.count > REJECT_SHARE) {
+      log.error(
+        'too-many-rejected',
+        `${r.bad} of ${rows.count} cells (${percent(r.bad / rows.count)}) in column "${r.assignment.header}" are unreadable or impossible as ${r.assignment.quantity} in ${r.assignment.unit}: check the column and its unit.`,
+        { column: r.assignment.header },
+      );
+    }
+  }
+  if (pres && pres.bad / rows.count > REJECT_SHARE) {
+    log.warning(
+      'pressure-ignored',
+      `${percent(pres.bad / rows.count)} of the pressure cells in column "${pres.assignment.header}" are unreadable or impossible in ${pres.assignment.unit}; the column is ignored and pressure will come from the site elevation.`,
+      { column: pres.assignment.header },
+    );
+    ctx.mapping.pressure = null;
+  }
+}
+
+/** Sequence checks (order, duplicates, steps), hourly averaging and gap repair. */
