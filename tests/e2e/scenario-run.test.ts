@@ -193,6 +193,28 @@ describe('an engineer designing, running and comparing scenarios', () => {
   });
 });
 
+describe('a run still computing', () => {
+  it('shows its progress while it runs and can be cancelled', async () => {
+    // The pool finishes a 72-hour run in milliseconds, so the server's answers for one run are held at "running" here.
+    const { run } = await api<{ run: Record<string, unknown> }>(engineer, 'GET', `/projects/${projectId}/runs/${firstRunId}`);
+    let state: Record<string, unknown> = { ...run, id: 9001, status: 'running', progress: 0.4, results: null, finishedAt: null };
+    const page = h.page;
+    await page.route(`**/api/projects/${projectId}/runs/9001`, (route) => route.fulfill({ json: { run: state } }));
+    await page.route(`**/api/projects/${projectId}/runs/9001/cancel`, (route) => {
+      state = { ...state, status: 'cancelled' };
+      return route.fulfill({ json: { run: state } });
+    });
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/9001`);
+    await page.getByTestId('run-progress').waitFor();
+    expect(await page.getByRole('progressbar').getAttribute('aria-valuenow')).toBe('40');
+    await shot('run-page-running-si');
+    await page.getByRole('button', { name: 'Cancel run' }).click();
+    await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('cancelled');
+    expect(await page.getByText('The run was cancelled').isVisible()).toBe(true);
+    await page.unrouteAll();
+  });
+});
+
 describe('a run over several years of weather', () => {
   it('draws the monthly hours, carpet, moist-air chart and bins of 26,280 hours', async () => {
     const { site } = await api<{ site: { id: number } }>(

@@ -43,6 +43,7 @@ export function RunStatus({ run, canEdit }: { run: RunRecord; canEdit: boolean }
       >
         <div className="h-full bg-harbour transition-[width] duration-500" style={{ width: `${Math.max(pct, run.status === 'queued' ? 0 : 5)}%` }} />
       </div>
+      <p className="mt-2 text-xs text-ink-soft">The results fill this page by themselves when the run finishes; you can leave and come back.</p>
       {cancel.isError && <p className="mt-2 text-xs text-signal-bad">{cancel.error.message}</p>}
     </div>
   );
