@@ -17,6 +17,8 @@ describe('the first hours of an upload in SI and in the person’s units', () =>
     // 101 300 Pa / 3386.389 Pa per inHg = 29.914 inHg (NIST SP 811 App. B: 1 inHg (32 °F) = 3.386 389 kPa).
     expect(row.values.pressure).toEqual({ si: '101.30', shown: '29.91' });
     expect(row.flag).toBe('measured');
+    // The site's clock: Warsaw keeps UTC+02:00 in July (EU summer time).
+    expect(previewRows([hour], 'relative-humidity-pct', 'SI', 'Europe/Warsaw')[0].timeLocal).toBe('2023-07-01 02:00');
   });
 
   it('shows each humidity measure in its own unit', () => {

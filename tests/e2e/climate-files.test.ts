@@ -55,7 +55,7 @@ describe('an engineer adding hourly weather to a project', () => {
     expect(await page.getByLabel('Humidity measure').inputValue()).toBe('relative-humidity');
     // First row of the file: 01.01.2021 00:00 local (UTC+1 in winter), −9.6 °C, 983.2 hPa = 98.32 kPa.
     const firstRow = page.getByTestId('preview-table').locator('tbody tr').first();
-    expect(await firstRow.innerText()).toMatch(/2020-12-31 23:00\s+-9\.6\s+82\.1\s+98\.32/);
+    expect(await firstRow.innerText()).toMatch(/2020-12-31 23:00\s+2021-01-01 00:00\s+-9\.6\s+82\.1\s+98\.32/);
     await h.screenshot('climate-upload-mapping-si');
 
     await page.getByRole('button', { name: 'Continue to the report' }).click();
@@ -100,10 +100,44 @@ describe('an engineer adding hourly weather to a project', () => {
     await page.getByRole('button', { name: 'Read the file' }).click();
     await page.getByTestId('mapping-editor').waitFor();
     // 8.3 °C = 46.9 °F; 101.3 kPa = 29.91 inHg (NIST SP 811: 1 inHg = 3386.389 Pa).
-    expect(await page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(/8\.3\s+46\.9\s+88\.0\s+88\.0\s+101\.30\s+29\.91/);
+    expect(await page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(/2023-07-01 00:00\s+2023-07-01 02:00\s+8\.3\s+46\.9\s+88\.0\s+88\.0\s+101\.30\s+29\.91/);
     await h.screenshot('climate-upload-mapping-ip');
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     await expect.poll(() => page.getByRole('link', { name: 'zimna-dolina' }).isVisible()).toBe(true);
     await h.screenshot('project-overview-ip');
+  });
+
+  it('reports a damaged file by line, column and value, and refuses one without humidity before anything is stored', async () => {
+    const page = h.page;
+    const rows = Array.from({ length: 72 }, (_, i) => {
+      const t = new Date(Date.UTC(2023, 0, 1, i)).toISOString().slice(0, 16) + 'Z';
+      const dryBulb = i === 1 ? 'abc' : i === 4 ? '95' : (3 + (i % 5)).toFixed(1);
+      return `${t},${dryBulb},80`;
+    });
+    const damaged = Buffer.from(`timestamp,dry_bulb_c,relative_humidity_pct\n${rows.join('\n')}\n`);
+    await page.goto(`${h.baseUrl}/projects/${projectId}/climate-files/new`);
+    await page.getByRole('button', { name: /Continue with/ }).click();
+    await page.getByLabel('File', { exact: true }).setInputFiles({ name: 'damaged.csv', mimeType: 'text/csv', buffer: damaged });
+    await page.getByRole('button', { name: 'Read the file' }).click();
+    await page.getByTestId('mapping-editor').waitFor();
+    await page.getByRole('button', { name: 'Continue to the report' }).click();
+    const report = page.getByTestId('validation-report');
+    await report.waitFor();
+    // Line 1 is the header, so the second hour is line 3 and the fifth is line 6.
+    const text = await report.innerText();
+    expect(text).toMatch(/3\s+dry_bulb_c\s+abc/);
+    expect(text).toMatch(/6\s+dry_bulb_c\s+95/);
+    await h.screenshot('climate-upload-report-damaged');
+
+    const noHumidity = Buffer.from(`timestamp,dry_bulb_c\n${rows.slice(0, 24).map((r) => r.split(',').slice(0, 2).join(',')).join('\n')}\n`);
+    await page.getByRole('button', { name: 'Back to the mapping' }).click();
+    await page.getByRole('button', { name: 'Back' }).click();
+    await page.getByLabel('File', { exact: true }).setInputFiles({ name: 'no-humidity.csv', mimeType: 'text/csv', buffer: noHumidity });
+    await page.getByRole('button', { name: 'Read the file' }).click();
+    await page.getByTestId('mapping-editor').waitFor();
+    await page.getByRole('button', { name: 'Continue to the report' }).click();
+    await expect.poll(() => page.getByText('The file cannot be stored as it is').isVisible()).toBe(true);
+    expect(await page.getByRole('button', { name: 'Store climate file' }).isDisabled()).toBe(true);
+    await h.screenshot('climate-upload-report-refused');
   });
 });

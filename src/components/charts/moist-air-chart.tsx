@@ -124,7 +124,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
             : Plot.dot(drawn, {
                 x: (i: number) => xy.x[i],
                 y: (i: number) => xy.y[i],
-                r: 1.7,
+                // Few hours (a short run) read better as larger dots.
+                r: drawn.length < 3000 ? 3 : 1.7,
                 fill: (i: number) => modeColours[modeKeys[modeCode(hours.modes, i)]],
                 fillOpacity: 0.75,
                 clip: true,

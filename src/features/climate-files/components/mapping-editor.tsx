@@ -26,14 +26,15 @@ function ColumnSelect({ id, headers, value, onChange, allowNone }: { id: string;
   );
 }
 
-function Row({ label, htmlFor, confidence, reason, children }: { label: string; htmlFor: string; confidence?: number; reason?: string; children: ReactNode }) {
-  const words = confidenceWords(confidence);
+/** confidence: the detector's 0…1; undefined once the person changed the part; null where no figure applies. */
+function Row({ label, htmlFor, confidence, reason, children }: { label: string; htmlFor: string; confidence?: number | null; reason?: string; children: ReactNode }) {
+  const words = confidence === null ? null : confidenceWords(confidence);
   return (
     <div className="grid gap-2 border-b border-rule/60 py-2.5 md:grid-cols-[10rem_1fr_14rem] md:items-center">
       <label htmlFor={htmlFor} className="text-sm font-medium">{label}</label>
       <div className="flex flex-wrap items-center gap-2">{children}</div>
       <p className="text-xs">
-        <span className={`num font-semibold ${words.tone}`}>{words.text}</span>
+        {words && <span className={`num font-semibold ${words.tone}`}>{words.text}</span>}
         {reason && <span className="block text-ink-soft">{reason}</span>}
       </p>
     </div>
@@ -182,7 +183,7 @@ export function MappingEditor({ detected, draft, onChange }: { detected: Detecte
         </select>
       </Row>
 
-      <Row label="Text format" htmlFor="map-delimiter" confidence={detected.confidence ? 1 : undefined} reason={detected.headerLine ? `Header on line ${detected.headerLine}.` : 'No header row found.'}>
+      <Row label="Text format" htmlFor="map-delimiter" confidence={null} reason={detected.headerLine ? `Header on line ${detected.headerLine}.` : 'No header row found.'}>
         <select id="map-delimiter" className={selectClass} value={draft.delimiter} onChange={(e) => set({ delimiter: e.target.value as ',' })}>
           <option value=",">comma separated</option>
           <option value=";">semicolon separated</option>

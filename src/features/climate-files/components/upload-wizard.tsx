@@ -264,7 +264,13 @@ export function UploadWizard({
           </Panel>
           <Panel title="The first hours as interpreted">
             {preview.humidityKind ? (
-              <PreviewTable hours={preview.preview} humidityKind={preview.humidityKind} hasPressure={draft.pressure !== null} firstLines={preview.firstLines} />
+              <PreviewTable
+                hours={preview.preview}
+                humidityKind={preview.humidityKind}
+                hasPressure={preview.preview.some((h) => h.pressurePa !== null)}
+                firstLines={preview.firstLines}
+                timeZone={site?.timeZone ?? 'UTC'}
+              />
             ) : (
               <Notice tone="warn" title="No hours could be read yet">
                 Choose the time, dry-bulb and humidity columns above, then read the file again.

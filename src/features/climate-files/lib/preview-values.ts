@@ -25,6 +25,8 @@ export interface PreviewColumn {
 export interface PreviewRow {
   /** ISO 8601 UTC, minutes precision. */
   timeUtc: string;
+  /** The same instant on the site's clock (civil time, daylight saving included), as a file in local time writes it. */
+  timeLocal: string;
   flag: 'measured' | 'filled' | 'missing';
   /** Per column: SI text and the person's text, without units ('–' when missing). */
   values: Record<PreviewColumn['key'], { si: string; shown: string }>;
@@ -66,10 +68,13 @@ export function previewColumns(kind: HumidityKind, hasPressure: boolean, system:
 const flags = ['measured', 'filled', 'missing'] as const;
 
 /** Each previewed hour in SI and in the person's unit system. */
-export function previewRows(hours: PreviewHourInput[], kind: HumidityKind, system: UnitSystem): PreviewRow[] {
+export function previewRows(hours: PreviewHourInput[], kind: HumidityKind, system: UnitSystem, timeZone = 'UTC'): PreviewRow[] {
   const h = humidityQuantity(kind);
+  // Swedish order is year-month-day hour:minute, the ISO layout without the T.
+  const local = new Intl.DateTimeFormat('sv-SE', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
   return hours.map((hour) => ({
     timeUtc: new Date(hour.timestampMs).toISOString().slice(0, 16).replace('T', ' '),
+    timeLocal: local.format(hour.timestampMs),
     flag: flags[hour.flag] ?? 'missing',
     values: {
       dryBulb: { si: show('temperature', 'SI', hour.dryBulbC), shown: show('temperature', system, hour.dryBulbC) },
