@@ -104,6 +104,8 @@ describe('an engineer adding hourly weather to a project', () => {
     await h.screenshot('climate-upload-mapping-ip');
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     await expect.poll(() => page.getByRole('link', { name: 'zimna-dolina' }).isVisible()).toBe(true);
+    // Years on the site's clock: the file starts 1 January 2021 local time (31 December 2020 23:00 UTC).
+    await expect.poll(() => page.getByRole('row', { name: /zimna-dolina/ }).innerText()).toContain('2021–2023');
     await h.screenshot('project-overview-ip');
   });
 

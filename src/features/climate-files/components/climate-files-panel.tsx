@@ -1,12 +1,23 @@
 import { Link } from 'react-router-dom';
+import { standardOffsetMinutes } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useClimateFiles } from '../api/get-climate-files';
 
-const yearOf = (ms: number) => new Date(ms).getUTCFullYear();
+/** Calendar year of an instant on the site's standard-time clock (a local-time file starting 1 January stays in that year). */
+const yearOf = (ms: number, offsetMinutes: number) => new Date(ms + offsetMinutes * 60_000).getUTCFullYear();
 
 /** The project's climate files: site, period, hours and how complete they are; a link to upload another. */
-export function ClimateFilesPanel({ projectId, canEdit }: { projectId: number; canEdit: boolean }) {
+export function ClimateFilesPanel({
+  projectId,
+  canEdit,
+  siteTimeZone = () => undefined,
+}: {
+  projectId: number;
+  canEdit: boolean;
+  /** The IANA zone of a site, when known, so years are counted on the site's clock. */
+  siteTimeZone?: (siteId: number) => string | undefined;
+}) {
   const files = useClimateFiles(projectId);
   return (
     <Panel
@@ -40,7 +51,9 @@ export function ClimateFilesPanel({ projectId, canEdit }: { projectId: number; c
           </thead>
           <tbody>
             {files.data.climateFiles.map((f) => {
-              const [a, b] = [yearOf(f.firstHourMs), yearOf(f.lastHourMs)];
+              const zone = siteTimeZone(f.siteId);
+              const offset = zone ? standardOffsetMinutes(zone) : 0;
+              const [a, b] = [yearOf(f.firstHourMs, offset), yearOf(f.lastHourMs, offset)];
               return (
                 <tr key={f.id} className="border-b border-rule/60">
                   <td className="py-1">

@@ -51,7 +51,7 @@ export function ValidationReport({ report }: { report: ImportReport }) {
         <div className="overflow-x-auto">
           <table className="w-full text-left text-xs">
             <caption className="pb-1 text-left text-sm text-ink-soft">
-              {report.issues.length.toLocaleString('en')} issues listed
+              {report.issues.length.toLocaleString('en')} {report.issues.length === 1 ? 'issue' : 'issues'} listed
               {c.issuesNotListed > 0 && `, ${c.issuesNotListed.toLocaleString('en')} more of the same kinds not listed`}.{' '}
               <a className="text-harbour underline" href={csvHref} download="climate-file-issues.csv">
                 Download as CSV
