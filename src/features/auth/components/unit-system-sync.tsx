@@ -14,14 +14,18 @@ export function UnitSystemSync() {
   const { unitSystem, setUnitSystem } = useUnitSystem();
   const update = useUpdateSettings();
   const adoptedFor = useRef<number | null>(null);
+  const atPageLoad = useRef(unitSystem);
 
   useEffect(() => {
     if (!me.data) return;
     const saved = me.data.settings.unitSystem === 'ip' ? 'IP' : 'SI';
     if (adoptedFor.current !== me.data.user.id) {
       adoptedFor.current = me.data.user.id;
-      if (saved !== unitSystem) setUnitSystem(saved);
-      return;
+      // A toggle made on this page before the settings arrived wins (and is saved below); otherwise the saved choice does.
+      if (unitSystem === atPageLoad.current) {
+        if (saved !== unitSystem) setUnitSystem(saved);
+        return;
+      }
     }
     if (saved !== unitSystem && !update.isPending) update.mutate({ unitSystem: unitSystem === 'IP' ? 'ip' : 'si' });
     // `update` is a new object every render and is left out on purpose: only its pending flag is read.
