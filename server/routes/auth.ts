@@ -21,6 +21,8 @@ import { sessions, signInAttempts } from '../db/schema';
 import { HttpError } from '../http-error';
 
 const stateCookieName = 'tramontane_sign_in';
+/** The state cookie only travels to the sign-in routes. */
+const stateCookiePath = '/api/auth';
 const attemptLifetimeMs = 10 * 60_000;
 
 export function authRoutes(deps: AppDeps): RouteSpec[] {
@@ -45,7 +47,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
 
   /** A failed sign-in goes back to the sign-in page with a reason the page can explain. */
   const fail = (req: Request, res: Response, problem: string) => {
-    res.clearCookie(stateCookieName, cookieOptions(req));
+    res.clearCookie(stateCookieName, { ...cookieOptions(req), path: stateCookiePath });
     res.redirect(303, `/sign-in?problem=${encodeURIComponent(problem)}`);
   };
 
@@ -74,7 +76,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
         })
         .run();
       // The state rides in a cookie too, so a callback only completes in the browser that started it.
-      res.cookie(stateCookieName, start.state, { ...cookieOptions(req, attemptLifetimeMs), path: '/api/auth' });
+      res.cookie(stateCookieName, start.state, { ...cookieOptions(req, attemptLifetimeMs), path: stateCookiePath });
       res.redirect(302, start.url.toString());
     }),
 
@@ -108,7 +110,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
       // A sign-in always gets a fresh token; a session the browser already had ends here.
       if (req.sessionTokenHash) db.delete(sessions).where(eq(sessions.tokenHash, req.sessionTokenHash)).run();
       startSession(db, req, res, person.id, policy, now);
-      res.clearCookie(stateCookieName, { ...cookieOptions(req), path: '/api/auth' });
+      res.clearCookie(stateCookieName, { ...cookieOptions(req), path: stateCookiePath });
       res.redirect(303, attempt.returnTo);
     }),
 

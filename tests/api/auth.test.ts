@@ -113,6 +113,10 @@ describe('the callback refuses what does not belong to a sign-in it started', ()
     const res = await a.get('/api/auth/callback?code=abc&state=someone-elses-state').expect(303);
     expect(problemOf(res)).toBe('state_mismatch');
     expect(sessionCookie(res)).toBeUndefined();
+    // The failed attempt's state cookie is cleared on its own path.
+    const cleared = ([] as string[]).concat(res.headers['set-cookie']).find((c) => c.startsWith('tramontane_sign_in='));
+    expect(cleared).toMatch(/Path=\/api\/auth/);
+    expect(cleared).toMatch(/Expires=Thu, 01 Jan 1970/);
   });
 
   it('a callback in a browser that never started a sign-in', async () => {
