@@ -123,6 +123,8 @@ export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
     skipEmptyLines: false,
     dynamicTyping: false,
     fastMode: !hasQuotes,
+    // without quotes, split at every LF so mixed CRLF/LF files keep one row per line; cell readers ignore a trailing CR
+    ...(hasQuotes ? {} : { newline: '\n' as const }),
   });
   const rows = result.data;
   const errors = result.errors

@@ -80,13 +80,14 @@ export function readRows(
       counts.cellsUnreadable++;
       if (cell === undefined || classifyUnreadableCell(cell, decimalComma) === 'unreadable') {
         r.bad++;
-        log.warning('unparsable-value', `"${cell ?? ''}" in column "${header}" is not a number; the value is treated as missing.`, {
+        const text = (cell ?? '').trim();
+        log.warning('unparsable-value', `"${text}" in column "${header}" is not a number; the value is treated as missing.`, {
           line,
           column: header,
-          value: cell ?? '',
+          value: text,
         });
       } else {
-        log.info('missing-value-marker', `Column "${header}" marks a missing value with "${cell.trim()}".`, { line, column: header, value: cell });
+        log.info('missing-value-marker', `Column "${header}" marks a missing value with "${cell.trim()}".`, { line, column: header, value: cell.trim() });
       }
       return NaN;
     }
@@ -97,7 +98,7 @@ export function readRows(
       log.warning('impossible-value', `${r.assignment.quantity} ${cell?.trim()} ${r.assignment.unit} in column "${header}" is outside the possible range; treated as missing.`, {
         line,
         column: header,
-        value: cell,
+        value: cell?.trim(),
       });
       return NaN;
     }
@@ -141,7 +142,7 @@ export function readRows(
     }
     if (localMs !== localMs) {
       counts.rowsRejected++;
-      const cells = timeColumns.map((c) => row[c] ?? '').join(' ');
+      const cells = timeColumns.map((c) => (row[c] ?? '').trim()).join(' ');
       log.warning('unparsable-time', `The time "${cells}" could not be read; the row is left out.`, { line, column: timeHeader, value: cells });
       continue;
     }
@@ -182,7 +183,7 @@ export function readRows(
         log.warning('impossible-value', impossibleHumidityMessage(humidity, row[humidity.column], d), {
           line,
           column: humidity.header,
-          value: row[humidity.column],
+          value: row[humidity.column].trim(),
         });
         w = NaN;
       } else if (humidityCheck.verdict === 'clamped') {
@@ -190,7 +191,7 @@ export function readRows(
         log.info('clamped-value', `${humidity.quantity} ${row[humidity.column].trim()} in column "${humidity.header}" is just past saturation; set to ${round(humidityCheck.value)} ${humidityQuantity === 'relative-humidity' ? '%' : '°C'}.`, {
           line,
           column: humidity.header,
-          value: row[humidity.column],
+          value: row[humidity.column].trim(),
         });
         w = humidityCheck.value;
       }

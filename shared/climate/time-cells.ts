@@ -70,7 +70,8 @@ function digitsRead(): number {
 }
 
 function skipSpaces(s: string): void {
-  while (pos < s.length && (s.charCodeAt(pos) === 32 || s.charCodeAt(pos) === 9)) pos++;
+  // space, tab, and a CR left by a file whose line ends are mixed
+  while (pos < s.length && (s.charCodeAt(pos) === 32 || s.charCodeAt(pos) === 9 || s.charCodeAt(pos) === 13)) pos++;
 }
 
 function isDateSeparator(c: number): boolean {

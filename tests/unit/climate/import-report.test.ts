@@ -198,3 +198,12 @@ describe('line ends', () => {
     expect(result.report.issues).toContainEqual(expect.objectContaining({ kind: 'clamped-value', line: 4 }));
   });
 });
+
+describe('mixed line ends', () => {
+  it('reads a file whose lines end in CRLF and LF alike, time in the last column', () => {
+    const text = 'dry_bulb_c,relative_humidity_pct,timestamp\r\n10,80,2021-01-01T00:00Z\n11,81,2021-01-01T01:00Z\r\n12,82,2021-01-01T02:00Z\n';
+    const result = importClimateText(text);
+    expect(result.ok).toBe(true);
+    expect(Array.from(result.series!.dryBulbC)).toEqual([10, 11, 12]);
+  });
+});
