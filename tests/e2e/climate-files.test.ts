@@ -102,6 +102,12 @@ describe('an engineer adding hourly weather to a project', () => {
     // 8.3 °C = 46.9 °F; 101.3 kPa = 29.91 inHg (NIST SP 811: 1 inHg = 3386.389 Pa).
     expect(await page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(/2023-07-01 00:00\s+2023-07-01 02:00\s+8\.3\s+46\.9\s+88\.0\s+88\.0\s+101\.30\s+29\.91/);
     await h.screenshot('climate-upload-mapping-ip');
+    // Override the detected unit: read as °F, 8.3 °F is (8.3 − 32)/1.8 = −13.2 °C.
+    await page.getByLabel('Dry-bulb unit').selectOption('F');
+    expect(await page.getByText('Changed: the hours below still show the previous reading.').isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Read again with these choices' }).click();
+    await expect.poll(() => page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(/02:00\s+-13\.2\s+8\.3\s/);
+    expect(await page.getByTestId('mapping-editor').innerText()).toContain('set by you');
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     await expect.poll(() => page.getByRole('link', { name: 'zimna-dolina' }).isVisible()).toBe(true);
     // Years on the site's clock: the file starts 1 January 2021 local time (31 December 2020 23:00 UTC).

@@ -45,11 +45,23 @@ function Row({ label, htmlFor, confidence, reason, children }: { label: string; 
  * The mapping step: the detected column for time, dry-bulb, humidity and pressure with its unit and
  * confidence; every choice can be changed. Changes stay in the draft until the file is read again.
  */
-export function MappingEditor({ detected, draft, onChange }: { detected: DetectedMapping; draft: MappingDraft; onChange: (next: MappingDraft) => void }) {
+export function MappingEditor({
+  detected,
+  firstDetected = detected,
+  draft,
+  onChange,
+}: {
+  /** The mapping of the latest reading (after any override). */
+  detected: DetectedMapping;
+  /** The mapping recognised without any override: a part that differs from it was set by the person. */
+  firstDetected?: DetectedMapping;
+  draft: MappingDraft;
+  onChange: (next: MappingDraft) => void;
+}) {
   const headers = detected.headers;
   const set = (patch: Partial<MappingDraft>) => onChange({ ...draft, ...patch });
   const edited = (part: keyof MappingDraft, detectedConfidence: number | undefined) =>
-    JSON.stringify(draft[part]) === JSON.stringify(initialPart(detected, part)) ? detectedConfidence : undefined;
+    JSON.stringify(draft[part]) === JSON.stringify(initialPart(firstDetected, part)) ? detectedConfidence : undefined;
   const time = draft.time;
   const setTime = (patch: Partial<TimeDraft>) => time && set({ time: { ...time, ...patch } as TimeDraft });
 

@@ -62,6 +62,7 @@ export function UploadWizard({
   const [maxGapHours, setMaxGapHours] = useState(6);
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [preview, setPreview] = useState<ClimatePreview | null>(null);
+  const [firstDetected, setFirstDetected] = useState<ClimatePreview['mapping'] | null>(null);
   const [draft, setDraft] = useState<MappingDraft | null>(null);
   const [readDraft, setReadDraft] = useState<string>('');
   const [error, setError] = useState<string | null>(null);
@@ -91,6 +92,7 @@ export function UploadWizard({
     try {
       const result = await previewClimateFile(projectId, siteId, file, params(mappingDraft), setProgress);
       setPreview(result);
+      if (!mappingDraft) setFirstDetected(result.mapping);
       const next = mappingDraft ?? draftFromDetected(result.mapping);
       setDraft(next);
       setReadDraft(JSON.stringify(next));
@@ -253,7 +255,7 @@ export function UploadWizard({
             <p className="mb-2 text-sm text-ink-soft">
               Check each column and unit; change any that is wrong, then read the file again to see the effect below.
             </p>
-            <MappingEditor detected={preview.mapping} draft={draft} onChange={setDraft} />
+            <MappingEditor detected={preview.mapping} firstDetected={firstDetected ?? preview.mapping} draft={draft} onChange={setDraft} />
             <div className="mt-3 flex flex-wrap items-center gap-2">
               <button type="button" className={stale ? button : quietButton} disabled={busy} onClick={() => void read(draft)}>
                 Read again with these choices
