@@ -27,6 +27,8 @@ export interface FakeProviderOptions {
   dataDir?: string;
   /** Token requests allowed per minute per address. */
   tokenRequestsPerMinute?: number;
+  /** Tests only: change each token's claims before signing (an expired or foreign token, say). */
+  alterClaims?: (claims: Record<string, unknown>) => void;
 }
 
 export interface FakeProvider {
@@ -82,6 +84,7 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     const person = req.body.code ? codes.get(req.body.code) : undefined;
     if (!person) return;
     Object.assign(token.payload, { sub: person.subject, email: person.email, email_verified: true, name: person.name });
+    options.alterClaims?.(token.payload);
   });
   service.on('beforeResponse', (response: MutableResponse, req: express.Request & { body: { code?: string; grant_type?: string } }) => {
     if (req.body.grant_type !== 'authorization_code') {

@@ -350,3 +350,39 @@ describe('the fake provider', () => {
     expect(back.searchParams.get('error')).toBe('access_denied');
   });
 });
+
+describe('ID tokens that fail a check are refused', () => {
+  const cases: [string, (claims: Record<string, unknown>) => void][] = [
+    ['expired', (c) => Object.assign(c, { iat: Math.floor(Date.now() / 1000) - 7200, exp: Math.floor(Date.now() / 1000) - 3600 })],
+    ['for another client', (c) => Object.assign(c, { aud: 'someone-else' })],
+    ['from another issuer', (c) => Object.assign(c, { iss: 'https://issuer.elsewhere.example' })],
+  ];
+  it.each(cases)('%s', async (_label, alterClaims) => {
+    const stack = await startSignInStack({ provider: { alterClaims } });
+    try {
+      const a = request.agent(stack.app);
+      const { callback } = await signInThroughProvider(stack, a, { subject: 'demo-engineer' });
+      expect(problemOf(callback)).toBe('code_rejected');
+      expect(sessionCookie(callback)).toBeUndefined();
+    } finally {
+      await stack.close();
+    }
+  });
+});
+
+describe('userinfo at the fake provider', () => {
+  it('answers with the picked person for their access token', async () => {
+    const { OAuth2Client, CodeChallengeMethod, generateCodeVerifier, generateState } = await import('arctic');
+    const client = new OAuth2Client('tramontane-test', null, t.redirectUri);
+    const verifier = generateCodeVerifier();
+    const url = client.createAuthorizationURLWithPKCE(`${t.provider.issuer}/authorize`, generateState(), CodeChallengeMethod.S256, verifier, ['openid']);
+    const form = new URLSearchParams(url.searchParams);
+    form.set('subject', 'demo-viewer');
+    const picked = await fetch(`${t.provider.issuer}/authorize`, { method: 'POST', body: form, redirect: 'manual' });
+    const minted = await fetch(new URL(picked.headers.get('location')!, t.provider.issuer), { redirect: 'manual' });
+    const code = new URL(minted.headers.get('location')!).searchParams.get('code')!;
+    const tokens = await client.validateAuthorizationCode(`${t.provider.issuer}/token`, code, verifier);
+    const info = await (await fetch(`${t.provider.issuer}/userinfo`, { headers: { authorization: `Bearer ${tokens.accessToken()}` } })).json();
+    expect(info).toEqual({ sub: 'demo-viewer', name: 'Priya Castellane', email: 'priya.castellane@calloway-halls.example', email_verified: true });
+  });
+});

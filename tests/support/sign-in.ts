@@ -5,7 +5,7 @@ import type { Agent } from 'supertest';
 import type { AppDeps } from '../../server/app';
 import { OidcClient } from '../../server/auth/oidc';
 import { demoPickerPeople } from '../../server/demo/people';
-import { startFakeProvider, type FakeProvider } from '../../server/fake-provider';
+import { startFakeProvider, type FakeProvider, type FakeProviderOptions } from '../../server/fake-provider';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
 import { createSmtpMailer } from '../../server/mail/mailer';
 import { createTestApp, type TestApp } from './test-app';
@@ -24,10 +24,12 @@ export interface SignInStack extends TestApp {
  * ports, nodemailer sending to it. `publicUrl` is where the app is (or will be) reachable; API tests never
  * listen, they take the callback URL from the provider's redirect and hand it to supertest.
  */
-export async function startSignInStack(options: { publicUrl?: string; overrides?: Partial<AppDeps> } = {}): Promise<SignInStack> {
+export async function startSignInStack(
+  options: { publicUrl?: string; overrides?: Partial<AppDeps>; provider?: Partial<FakeProviderOptions> } = {},
+): Promise<SignInStack> {
   const publicUrl = options.publicUrl ?? 'http://127.0.0.1:1';
   const redirectUri = `${publicUrl}/api/auth/callback`;
-  const provider = await startFakeProvider({ people: demoPickerPeople, clientId: testClientId, redirectUris: [redirectUri] });
+  const provider = await startFakeProvider({ people: demoPickerPeople, clientId: testClientId, redirectUris: [redirectUri], ...options.provider });
   const smtpFolder = mkdtempSync(path.join(tmpdir(), 'tramontane-mailbox-'));
   const smtp = await startFakeSmtp({ folder: smtpFolder });
   const mailer = createSmtpMailer({ host: smtp.host, port: smtp.port, secure: false, from: 'Tramontane test <tramontane@test.invalid>' });
