@@ -137,6 +137,28 @@ describe('an engineer adding hourly weather to a project', () => {
     expect(text).toMatch(/6\s+dry_bulb_c\s+95/);
     await h.screenshot('climate-upload-report-damaged');
 
+    // Should the server refuse the file at the last step (422), the wizard shows the server's report and stores nothing.
+    const refusedReport = {
+      ok: false,
+      summary: 'Not imported: every data row was rejected.',
+      timeLayout: null,
+      stepMinutes: null,
+      firstTimestamp: null,
+      lastTimestamp: null,
+      years: [],
+      maxGapHours: 6,
+      timeZone: 'Europe/Warsaw',
+      counts: { lines: 3, rows: 1, rowsRejected: 1, cellsUnreadable: 0, impossibleValues: 0, clampedValues: 0, duplicateTimestamps: 0, rowsAveraged: 0, nonHourlySteps: 0, daylightSavingJumps: 0, hours: 0, measuredHours: 0, filledHours: 0, missingHours: 0, gaps: 0, longestGapHours: 0, issuesNotListed: 0 },
+      issues: [{ kind: 'unparsable-time', severity: 'error', line: 2, column: 'timestamp', value: '2023-13-45', message: 'The time "2023-13-45" cannot be read.' }],
+    };
+    await page.route(/\/climate-files\?/, (route) =>
+      route.fulfill({ status: 422, contentType: 'application/json', body: JSON.stringify({ error: { code: 'import_rejected', message: refusedReport.summary, details: { report: refusedReport } } }) }),
+    );
+    await page.getByRole('button', { name: 'Store climate file' }).click();
+    await expect.poll(() => page.getByText('The server refused the file; nothing was stored.').isVisible()).toBe(true);
+    expect(await report.innerText()).toMatch(/2\s+timestamp\s+2023-13-45/);
+    await page.unroute(/\/climate-files\?/);
+
     const noHumidity = Buffer.from(`timestamp,dry_bulb_c\n${rows.slice(0, 24).map((r) => r.split(',').slice(0, 2).join(',')).join('\n')}\n`);
     await page.getByRole('button', { name: 'Back to the mapping' }).click();
     await page.getByRole('button', { name: 'Back' }).click();

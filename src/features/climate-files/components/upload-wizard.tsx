@@ -88,6 +88,7 @@ export function UploadWizard({
   async function read(mappingDraft: MappingDraft | null) {
     if (!file || !siteId) return;
     setError(null);
+    setRejected(null);
     setProgress({ sentBytes: 0, totalBytes: file.size, phase: 'sending' });
     try {
       const result = await previewClimateFile(projectId, siteId, file, params(mappingDraft), setProgress);
