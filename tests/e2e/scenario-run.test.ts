@@ -120,6 +120,11 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await page.getByLabel('Supply air setpoint').fill('59');
     await page.getByLabel('Name').fill('Direct air, 15 °C supply');
     await shot('scenario-editor-ip');
+    // Leaving with unsaved edits asks first; staying keeps them.
+    page.once('dialog', (dialog) => void dialog.dismiss());
+    await page.getByRole('link', { name: 'Air-state calculator' }).click();
+    expect(page.url()).toMatch(/\/scenarios\/\d+$/);
+    expect(await page.getByLabel('Supply air setpoint').inputValue()).toBe('59');
     await page.getByRole('button', { name: 'Save changes' }).click();
     await expect.poll(() => page.getByText('Unsaved changes').isVisible()).toBe(false);
     await expect.poll(() => page.getByTestId('scenario-runs').innerText()).toContain('Saltmarsh Point');

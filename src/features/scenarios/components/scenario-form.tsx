@@ -12,6 +12,7 @@ import { useSaveScenario } from '../api/save-scenario';
 import { energyFields, envelopeFields, fieldsFor, siteFields, systemFields, systemKinds } from '../utils/scenario-fields';
 import type { ScenarioFormValues } from '../utils/scenario-form';
 import { useDebouncedValue } from '../utils/use-debounced-value';
+import { useLeaveGuard } from '../utils/use-leave-guard';
 import { EnvelopePicker } from './envelope-picker';
 import { ModePreview } from './mode-preview';
 import { QuantityField } from './quantity-field';
@@ -43,6 +44,7 @@ export function ScenarioForm({
   const save = useSaveScenario(projectId, scenarioId);
   const duplicate = useDuplicateScenario(projectId);
   const [previewFileId, setPreviewFileId] = useState<number | null>(null);
+  const { allowNextLeave } = useLeaveGuard(formState.isDirty && canEdit);
   const chosenPreviewFile = previewFileId ?? climateFiles[0]?.id ?? null;
 
   // The preview follows the form once typing pauses; an invalid form is not sent.
@@ -53,6 +55,7 @@ export function ScenarioForm({
     try {
       const { scenario: saved } = await save.mutateAsync(scenario);
       reset(values);
+      allowNextLeave();
       if (scenarioId === null) navigate(`/projects/${projectId}/scenarios/${saved.id}`, { replace: true });
       return saved.id;
     } catch (error) {
