@@ -33,7 +33,8 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
   const last = series && series.timestampsMs.length > 0 ? series.timestampsMs[series.timestampsMs.length - 1] : NaN;
   const years: number[] = [];
   if (ok && Number.isFinite(first)) {
-    for (let y = new Date(first).getUTCFullYear(); y <= new Date(last).getUTCFullYear(); y++) years.push(y);
+    const shift = ctx.fileOffsetMs - (ctx.hourEnding ? 1 : 0);
+    for (let y = new Date(first + shift).getUTCFullYear(); y <= new Date(last + shift).getUTCFullYear(); y++) years.push(y);
   }
   const c = ctx.counts;
   const summary = ok
@@ -68,6 +69,8 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
     maxGapHours: DEFAULT_MAX_GAP_HOURS,
     timeZone: 'UTC',
     stepMinutes: null,
+    fileOffsetMs: 0,
+    hourEnding: false,
   };
   try {
     return finish(ctx, runImport(text, options ?? {}, ctx));

@@ -55,6 +55,10 @@ export interface Context {
   maxGapHours: number;
   timeZone: string;
   stepMinutes: number | null;
+  /** Local minus UTC of the first row read, ms: the file's own clock for the years covered. */
+  fileOffsetMs: number;
+  /** True when stamps mark the end of their hour (hour 1–24 or a 24:00 time). */
+  hourEnding: boolean;
 }
 
 export function round(value: number): string {

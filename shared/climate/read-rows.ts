@@ -162,6 +162,7 @@ export function readRows(
       utcMs = localMs;
     }
     const offsetNow = localMs - utcMs;
+    if (rows.count === 0) ctx.fileOffsetMs = offsetNow;
     if (previousOffset === previousOffset && offsetNow !== previousOffset) {
       counts.daylightSavingJumps++;
       log.info('daylight-saving-jump', `The UTC offset changes from ${offsetText(previousOffset)} to ${offsetText(offsetNow)} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
@@ -216,6 +217,7 @@ export function readRows(
     time.description += hourZero ? ' (times 00:00 and 24:00 both occur)' : ', 24:00 read as midnight at the end of the day';
   }
 
+  ctx.hourEnding = (time.layout === 'ymdh' && time.hourConvention === 'ending-1-24') || (time.layout === 'date-time' && hour24 && !hourZero);
   checkRejectShares(dry, hum, pres, rows, ctx);
   if (pres && ctx.mapping.pressure === null) rows.pressurePa = null;
   const typical = detectTypicalYear(localTimes, rows.count);

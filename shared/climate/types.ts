@@ -194,6 +194,10 @@ export interface ImportReport {
   stepMinutes: number | null;
   firstTimestamp: string | null;
   lastTimestamp: string | null;
+  /**
+   * Calendar years the series covers in the file's own clock (the UTC offset of its first row),
+   * an hour-ending stamp counting in the hour it ends (24:00 on 31 December belongs to that year).
+   */
   years: number[];
   maxGapHours: number;
   timeZone: string;
