@@ -96,7 +96,8 @@ describe('an engineer designing, running and comparing scenarios', () => {
     firstRunId = Number(page.url().split('/').pop());
     await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 20_000 }).toBe('done');
     const hoursTable = await page.getByTestId('mode-hours').innerText();
-    // 72 hours in the file; none above 22 °C, so with a 24 °C supply and 1 K fan heat no hour needs compressors.
+    // 72 hours in the file; none above 22 °C, so with a 24 °C supply and 1 K fan heat no hour needs compressors for
+    // temperature, and its moisture stays under the A1 17 °C dew-point limit (as tests/api/runs.test.ts finds).
     expect(hoursTable).toMatch(/All hours\s+72/);
     expect(hoursTable).toMatch(/Mechanical\s+0\s+0\.0 %/);
     expect(await page.getByTestId('ppue').innerText()).toMatch(/^1\.\d{3}$/);
@@ -177,8 +178,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
 
     await page.getByRole('link', { name: 'Air-state calculator' }).click();
     await page.waitForURL('**/calculator');
-    // ASHRAE Handbook—Fundamentals 2017 ch. 1 / psychrolib: 30 °C, 50 % RH at 101.325 kPa has a wet-bulb near 22.0 °C
-    // (psychrolib GetTWetBulbFromRelHum(30, 0.5, 101325) = 22.02, recalled from memory).
+    // 30 °C, 50 % RH at 101.325 kPa: psychrolib 1.1.1 GetTWetBulbFromRelHum(30, 0.5, 101325) = 22.005 °C (reference library).
     const state = page.getByTestId('calculated-state');
     await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+22\.0 °C/);
     await chartsDrawn(page);
