@@ -1,17 +1,22 @@
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
-import { personWithSession, projectWithMembers } from '../support/people';
+import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 const sampleFile = fileURLToPath(new URL('../../sample-weather/zimna-dolina.csv', import.meta.url));
 
 let h: BrowserHarness;
 let projectId: number;
+let viewer: TestPerson;
 
 beforeAll(async () => {
   h = await startBrowserHarness();
   const engineer = personWithSession(h.testApp.db, 'marta.oyelaran@example.test');
-  projectId = projectWithMembers(h.testApp.db, 'Valley campus study', [[engineer, 'engineer']]);
+  viewer = personWithSession(h.testApp.db, 'kofi.lindqvist@example.test');
+  projectId = projectWithMembers(h.testApp.db, 'Valley campus study', [
+    [engineer, 'engineer'],
+    [viewer, 'viewer'],
+  ]);
   const [name, value] = engineer.cookie.split('=');
   await h.context.addCookies([{ name, value, url: h.baseUrl }]);
   // Start every journey in SI; the IP screenshots switch on the page.
@@ -87,6 +92,15 @@ describe('an engineer adding hourly weather to a project', () => {
     await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
     await expect.poll(() => page.getByTestId('moist-air-chart').innerText()).toContain('Wet-bulb');
     await h.screenshot('climate-file-page-ip-hover');
+    // The text alternatives, and the page on a laptop and on a wide monitor.
+    for (const summary of await page.getByText('Table of the same figures').all()) await summary.click();
+    expect(await page.getByTestId('moist-air-chart').innerText()).toMatch(/26,280 of 26,280 hours with data/);
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await h.screenshot('climate-file-page-ip-tables-1280');
+    await page.setViewportSize({ width: 1920, height: 1080 });
+    await page.waitForTimeout(400);
+    await h.screenshot('climate-file-page-ip-1920');
+    await page.setViewportSize({ width: 1440, height: 900 });
     await page.getByRole('group', { name: 'Chart projection' }).getByRole('button', { name: 'h–x diagram' }).click();
     await page.waitForTimeout(500);
     await h.screenshot('climate-file-page-ip-hx');
@@ -169,5 +183,19 @@ describe('an engineer adding hourly weather to a project', () => {
     await expect.poll(() => page.getByText('The file cannot be stored as it is').isVisible()).toBe(true);
     expect(await page.getByRole('button', { name: 'Store climate file' }).isDisabled()).toBe(true);
     await h.screenshot('climate-upload-report-refused');
+  });
+
+  it('lets a viewer read the project and the climate file but offers no upload', async () => {
+    const page = h.page;
+    const [name, value] = viewer.cookie.split('=');
+    await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+    await page.goto(`${h.baseUrl}/projects/${projectId}`);
+    await expect.poll(() => page.getByText('Your role: viewer').isVisible()).toBe(true);
+    expect(await page.getByRole('link', { name: 'Upload climate file' }).count()).toBe(0);
+    expect(await page.getByRole('button', { name: 'Add site' }).count()).toBe(0);
+    await h.screenshot('project-overview-viewer');
+    await page.getByRole('link', { name: 'zimna-dolina' }).click();
+    await page.getByTestId('design-label').waitFor();
+    await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(2);
   });
 });
