@@ -311,33 +311,37 @@ function MoistAirTable({
             ))}
           </tbody>
         </table>
-        <table className="num w-full text-xs">
-          <caption className="pb-1 text-left font-sans text-ink-soft">Hours by envelope{hours.modes ? ' and mode' : ''}; markers</caption>
-          <tbody>
-            {envelopes.map((e, k) => (
-              <tr key={`e${k}`} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 text-left font-sans font-normal">Inside {e.label}</th>
-                <td className={cell}>{stats.inside[k].inside.toLocaleString('en')} h</td>
-                <td className={cell}>{stats.inside[k].withData ? ((100 * stats.inside[k].inside) / stats.inside[k].withData).toFixed(1) : '–'} %</td>
-              </tr>
-            ))}
-            {hours.modes &&
-              modeKeys.map((key, code) => (
-                <tr key={key} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{modeLabels[key]}</th>
-                  <td className={cell}>{stats.modeHours[code].toLocaleString('en')} h</td>
-                  <td className={cell}>{total ? ((100 * stats.modeHours[code]) / total).toFixed(1) : '–'} %</td>
+        {(envelopes.length > 0 || hours.modes || markers.length > 0) && (
+          <table className="num w-full text-xs">
+            <caption className="pb-1 text-left font-sans text-ink-soft">
+              {[envelopes.length ? 'Hours inside each envelope' : '', hours.modes ? 'Hours per mode' : '', markers.length ? 'Marked states' : ''].filter(Boolean).join(' · ')}
+            </caption>
+            <tbody>
+              {envelopes.map((e, k) => (
+                <tr key={`e${k}`} className="border-b border-rule/60">
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">Inside {e.label}</th>
+                  <td className={cell}>{stats.inside[k].inside.toLocaleString('en')} h</td>
+                  <td className={cell}>{stats.inside[k].withData ? ((100 * stats.inside[k].inside) / stats.inside[k].withData).toFixed(1) : '–'} %</td>
                 </tr>
               ))}
-            {markers.map((m) => (
-              <tr key={m.label} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 text-left font-sans font-normal">{m.label}</th>
-                <td className={cell}>{formatQuantity('temperature', system, m.dryBulbC)}</td>
-                <td className={cell}>{formatQuantity('humidityRatio', system, m.humidityRatio)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+              {hours.modes &&
+                modeKeys.map((key, code) => (
+                  <tr key={key} className="border-b border-rule/60">
+                    <th scope="row" className="py-0.5 text-left font-sans font-normal">{modeLabels[key]}</th>
+                    <td className={cell}>{stats.modeHours[code].toLocaleString('en')} h</td>
+                    <td className={cell}>{total ? ((100 * stats.modeHours[code]) / total).toFixed(1) : '–'} %</td>
+                  </tr>
+                ))}
+              {markers.map((m) => (
+                <tr key={m.label} className="border-b border-rule/60">
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{m.label}</th>
+                  <td className={cell}>{formatQuantity('temperature', system, m.dryBulbC)}</td>
+                  <td className={cell}>{formatQuantity('humidityRatio', system, m.humidityRatio)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
       </div>
     </details>
   );
