@@ -12,7 +12,6 @@ import {
   formatUtc,
   lastParse,
   MS_PER_DAY,
-  MS_PER_HOUR,
   MS_PER_MINUTE,
   parseDateCell,
   parseDateTimeCell,
@@ -131,13 +130,14 @@ export function readRows(
       else if (clock === MS_PER_DAY) hour24 = true;
     } else {
       const days = civilDays(parseIntegerCell(row[time.year] ?? ''), parseIntegerCell(row[time.month] ?? ''), parseIntegerCell(row[time.day] ?? ''));
-      const hour = parseIntegerCell(row[time.hour] ?? '');
+      // the hour cell may be a whole hour (13), hhmm (1300) or a clock time (13:00)
+      const hourMs = parseTimeCell(row[time.hour] ?? '');
       let minute = time.minute === null ? 0 : parseIntegerCell(row[time.minute] ?? '');
       if (minute === 60) minute = 0; // some exports write minute 60 beside an hour-ending hour
-      if (hour >= 0 && hour <= 24 && minute >= 0 && minute < 60) {
-        localMs = days * MS_PER_DAY + hour * MS_PER_HOUR + minute * MS_PER_MINUTE;
-        if (hour === 0) hourZero = true;
-        else if (hour === 24) hour24 = true;
+      if (hourMs >= 0 && minute >= 0 && minute < 60) {
+        localMs = days * MS_PER_DAY + hourMs + minute * MS_PER_MINUTE;
+        if (hourMs === 0) hourZero = true;
+        else if (hourMs === MS_PER_DAY) hour24 = true;
       }
     }
     if (localMs !== localMs) {

@@ -120,22 +120,24 @@ function detectTime(sample: Sample, parts: (TimePart | null)[]): TimeMapping | n
   }
 
   // year, month, day, hour columns
-  const find = (part: TimePart, min: number, max: number): number =>
+  const find = (part: TimePart, min: number, max: number, read: (cell: string) => number = parseIntegerCell): number =>
     parts.findIndex(
       (p, c) =>
         p === part &&
         share(cells[c], (cell) => {
-          const v = parseIntegerCell(cell);
+          const v = read(cell);
           return v >= min && v <= max;
         }) >= 0.9,
     );
+  // an hour cell may be a whole hour (13), hhmm (1300) or a clock time (13:00)
+  const hourOf = (cell: string) => parseTimeCell(cell) / 3_600_000;
   const year = find('year', 1000, 9999);
   const month = find('month', 1, 12);
   const day = find('day', 1, 31);
-  const hour = find('hour', 0, 24);
+  const hour = find('hour', 0, 24, hourOf);
   if (year !== -1 && month !== -1 && day !== -1 && hour !== -1) {
     const minuteIndex = find('minute', 0, 60);
-    const hours = cells[hour].map(parseIntegerCell);
+    const hours = cells[hour].map(hourOf);
     const ending = hours.includes(24) || !hours.includes(0);
     return {
       layout: 'ymdh',

@@ -331,3 +331,22 @@ describe('typical-year files', () => {
     expect(report.firstTimestamp).toBe('2020-07-01T00:00:00.000Z');
   });
 });
+
+describe('hour cells written as clock times', () => {
+  it.each([
+    ['hhmm', ['2200', '2300', '2400', '100']],
+    ['hh:mm', ['22:00', '23:00', '24:00', '01:00']],
+  ])('%s in the hour column', (_, hours) => {
+    const days = ['1', '1', '1', '2'];
+    const text = `Year,Month,Day,Hour,Temp (C),RH (%)\n${hours.map((h, i) => `2021,3,${days[i]},${h},10,80`).join('\n')}\n`;
+    const { ok, series, mapping } = importClimateText(text);
+    expect(ok).toBe(true);
+    expect(mapping.time).toMatchObject({ layout: 'ymdh', hourConvention: 'ending-1-24' });
+    expect(values(series?.timestampsMs).map(iso)).toEqual([
+      '2021-03-01T22:00:00.000Z',
+      '2021-03-01T23:00:00.000Z',
+      '2021-03-02T00:00:00.000Z',
+      '2021-03-02T01:00:00.000Z',
+    ]);
+  });
+});
