@@ -7,6 +7,7 @@ import { useRunsByMonth } from '../api/get-runs-by-month';
 import { compareRuns } from '../utils/compare-runs';
 import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from './monthly-comparison-chart';
+import { RunPicker } from './run-picker';
 
 const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
 
@@ -48,7 +49,7 @@ export function ComparePage() {
         </p>
         <h1 className="text-xl font-semibold">Compare runs</h1>
       </header>
-      <div className="grid gap-4 xl:grid-cols-[22rem_minmax(0,1fr)]">
+      <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">
           {runsQuery.isPending && <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
           {runsQuery.isError && <Notice tone="bad" title="Runs could not be loaded">{runsQuery.error.message}</Notice>}
@@ -56,43 +57,14 @@ export function ComparePage() {
             <p className="text-sm text-ink-soft">No finished runs yet. Open a scenario, run it on a climate file, then come back to compare.</p>
           )}
           {done.length > 0 && (
-            <table className="w-full text-sm">
-              <thead>
-                <tr className="border-b border-rule text-xs text-ink-soft">
-                  <th scope="col" className="py-1 text-left font-medium">Compare</th>
-                  <th scope="col" className="py-1 text-left font-medium">Run</th>
-                  <th scope="col" className="py-1 text-center font-medium">Baseline</th>
-                </tr>
-              </thead>
-              <tbody>
-                {done.map((r) => (
-                  <tr key={r.id} className="border-b border-rule/60 align-top">
-                    <td className="py-1">
-                      <input type="checkbox" className="accent-harbour" aria-label={`Compare run ${r.id}`} checked={chosen.includes(r.id)} onChange={() => toggle(r.id)} />
-                    </td>
-                    <td className="py-1">
-                      <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline">
-                        <span className="num text-xs text-ink-faint">#{r.id}</span> {r.scenario.name}
-                      </Link>
-                      <span className="block text-xs text-ink-soft">
-                        {r.climate.site.name} · {r.climate.name}
-                      </span>
-                    </td>
-                    <td className="py-1 text-center">
-                      <input
-                        type="radio"
-                        name="baseline"
-                        className="accent-harbour"
-                        aria-label={`Run ${r.id} as baseline`}
-                        disabled={!chosen.includes(r.id)}
-                        checked={r.id === baselineId}
-                        onChange={() => update(chosen, r.id)}
-                      />
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
+            <RunPicker
+              projectId={projectId}
+              runs={done}
+              chosen={chosen}
+              baselineId={baselineId}
+              onToggle={toggle}
+              onBaseline={(id) => update(chosen, id)}
+            />
           )}
         </Panel>
         <div className="min-w-0 space-y-4">

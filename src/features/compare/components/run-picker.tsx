@@ -1,0 +1,125 @@
+import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
+import { Link } from 'react-router-dom';
+import type { RunListing } from '../api/get-runs';
+
+const column = createColumnHelper<RunListing>();
+const share = (r: RunListing, key: 'free' | 'mechanical') => (r.results ? r.results.hours[key] / Math.max(1, r.results.hours.total) : 0);
+
+/** Finished runs, sortable by their headline figures, each with a tick to compare and a choice of baseline. */
+export function RunPicker({
+  projectId,
+  runs,
+  chosen,
+  baselineId,
+  onToggle,
+  onBaseline,
+}: {
+  projectId: number;
+  runs: RunListing[];
+  chosen: number[];
+  baselineId: number;
+  onToggle: (id: number) => void;
+  onBaseline: (id: number) => void;
+}) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'id', desc: true }]);
+  const columns = useMemo(
+    () => [
+      column.display({
+        id: 'pick',
+        header: 'Compare',
+        cell: ({ row }) => (
+          <input
+            type="checkbox"
+            className="accent-harbour"
+            aria-label={`Compare run ${row.original.id}`}
+            checked={chosen.includes(row.original.id)}
+            onChange={() => onToggle(row.original.id)}
+          />
+        ),
+      }),
+      column.accessor('id', {
+        header: 'Run',
+        cell: ({ row }) => (
+          <Link to={`/projects/${projectId}/runs/${row.original.id}`} className="hover:underline">
+            <span className="num text-xs text-ink-faint">#{row.original.id}</span> {row.original.scenario.name}
+            <span className="block text-xs text-ink-soft">
+              {row.original.climate.site.name} · {row.original.climate.name}
+            </span>
+          </Link>
+        ),
+      }),
+      column.accessor((r) => share(r, 'free'), {
+        id: 'free',
+        header: 'Free',
+        cell: (c) => <span className="num">{(100 * c.getValue()).toFixed(0)} %</span>,
+      }),
+      column.accessor((r) => r.results?.energy.partialPue ?? Number.POSITIVE_INFINITY, {
+        id: 'ppue',
+        header: 'pPUE',
+        cell: (c) => <span className="num">{Number.isFinite(c.getValue()) ? c.getValue().toFixed(3) : '–'}</span>,
+      }),
+      column.display({
+        id: 'baseline',
+        header: 'Baseline',
+        cell: ({ row }) => (
+          <input
+            type="radio"
+            name="baseline"
+            className="accent-harbour"
+            aria-label={`Run ${row.original.id} as baseline`}
+            disabled={!chosen.includes(row.original.id)}
+            checked={row.original.id === baselineId}
+            onChange={() => onBaseline(row.original.id)}
+          />
+        ),
+      }),
+    ],
+    [projectId, chosen, baselineId, onToggle, onBaseline],
+  );
+  const table = useReactTable({ data: runs, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+
+  return (
+    <table className="w-full text-sm" data-testid="run-picker">
+      <thead>
+        {table.getHeaderGroups().map((group) => (
+          <tr key={group.id} className="border-b border-rule text-xs text-ink-soft">
+            {group.headers.map((header) => {
+              const sorted = header.column.getIsSorted();
+              return (
+                <th
+                  key={header.id}
+                  scope="col"
+                  aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
+                  className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`}
+                >
+                  {header.column.getCanSort() ? (
+                    <button type="button" onClick={header.column.getToggleSortingHandler()} className="hover:text-ink">
+                      {flexRender(header.column.columnDef.header, header.getContext())}
+                      <span aria-hidden className="ml-0.5">
+                        {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
+                      </span>
+                    </button>
+                  ) : (
+                    flexRender(header.column.columnDef.header, header.getContext())
+                  )}
+                </th>
+              );
+            })}
+          </tr>
+        ))}
+      </thead>
+      <tbody>
+        {table.getRowModel().rows.map((row) => (
+          <tr key={row.id} className="border-b border-rule/60 align-top">
+            {row.getVisibleCells().map((cell) => (
+              <td key={cell.id} className={`px-1 py-1 ${cell.column.id === 'id' ? 'text-left' : 'text-center'}`}>
+                {flexRender(cell.column.columnDef.cell, cell.getContext())}
+              </td>
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
