@@ -13,9 +13,6 @@ async function main(): Promise<void> {
   const db = openDatabase(env.databaseFile);
   const { seeded } = seedDemo(db);
   const pool = createWorkerPool({ threads: env.TRAMONTANE_WORKERS });
-  const runQueue = createRunQueue({ db, pool });
-  const resumed = runQueue.resume();
-  if (resumed > 0) console.log(`Resuming ${resumed} run(s) left pending by the last shutdown`);
 
   let devMiddleware;
   let closeVite = async () => {};
@@ -27,6 +24,9 @@ async function main(): Promise<void> {
   }
 
   const auth = await startAuthRuntime(env, (line) => console.log(line));
+  const runQueue = createRunQueue({ db, pool, mailer: auth.deps.mailer, publicUrl: auth.deps.publicUrl, logError: (e) => console.error(e) });
+  const resumed = runQueue.resume();
+  if (resumed > 0) console.log(`Resuming ${resumed} run(s) left pending`);
 
   const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, ...auth.deps });
   const server: Server = app.listen(env.PORT, env.HOST, () => {

@@ -39,6 +39,17 @@ export function recordAudit(db: DbOrTx, entry: AuditEntry, now: Date = new Date(
     .run();
 }
 
+/** The audit line for a change made by the caller of a project route: who, and in which project, come from the request. */
+export function recordRequestAudit(
+  db: DbOrTx,
+  req: { user?: { id: number }; projectId?: number },
+  action: string,
+  target: string,
+  detail?: Record<string, unknown>,
+): void {
+  recordAudit(db, { actorId: req.user?.id ?? null, projectId: req.projectId ?? null, action, target, detail });
+}
+
 export interface AuditFilter {
   /** Limit to these projects (an owner's projects); undefined means every event (an admin). */
   projectIds?: number[];

@@ -6,6 +6,7 @@ import { csvCell } from '../../shared/csv';
 import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries, loadOriginal, saveClimateFile } from '../climate/store';
 import { climateFiles, sites } from '../db/schema';
 import { HttpError } from '../http-error';
@@ -107,16 +108,29 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       const site = findSite(deps, req.projectId!, siteId);
       const { query, bytes, result } = await importUpload(req, site.timeZone);
       if (!result.ok || !result.series) {
+        recordRequestAudit(db, req, 'climate.rejected', query.fileName, { siteId, summary: result.report.summary });
         throw new HttpError(422, 'import_rejected', result.report.summary, { report: result.report, mapping: result.mapping });
       }
-      const row = saveClimateFile(db, {
-        projectId: req.projectId!,
-        siteId,
-        name: query.name ?? query.fileName.replace(/\.[^.]+$/, ''),
-        originalFileName: query.fileName,
-        bytes,
-        imported: { ...result, series: result.series },
-        createdBy: req.user?.id ?? null,
+      const series = result.series;
+      const row = db.transaction((tx) => {
+        const saved = saveClimateFile(tx, {
+          projectId: req.projectId!,
+          siteId,
+          name: query.name ?? query.fileName.replace(/\.[^.]+$/, ''),
+          originalFileName: query.fileName,
+          bytes,
+          imported: { ...result, series },
+          createdBy: req.user?.id ?? null,
+        });
+        recordRequestAudit(tx, req, 'climate.import', saved.name, {
+          climateFileId: saved.id,
+          fileName: query.fileName,
+          bytes: bytes.byteLength,
+          hours: saved.hours,
+          filledHours: saved.filledHours,
+          missingHours: saved.missingHours,
+        });
+        return saved;
       });
       res.status(201).json({ climateFile: listing(row, site.name), report: result.report });
     }),
@@ -175,7 +189,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
 
     route('delete', '/projects/:projectId/climate-files/:fileId', access.engineer, (req, res) => {
       const file = fileOr404(req.projectId!, req.params.fileId);
-      db.delete(climateFiles).where(eq(climateFiles.id, file.id)).run();
+      db.transaction((tx) => {
+        tx.delete(climateFiles).where(eq(climateFiles.id, file.id)).run();
+        recordRequestAudit(tx, req, 'climate.delete', file.name, { climateFileId: file.id });
+      });
       res.status(204).end();
     }),
   ];

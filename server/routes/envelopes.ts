@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { ENVELOPE_PRESETS, envelopeSchema } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
 import { envelopes } from '../db/schema';
 import { HttpError } from '../http-error';
 
@@ -28,20 +29,28 @@ export function envelopeRoutes({ db }: AppDeps): RouteSpec[] {
     }),
     route('post', '/projects/:projectId/envelopes', access.engineer, (req, res) => {
       const input = envelopeInput.parse(req.body);
-      const row = db
-        .insert(envelopes)
-        .values({ projectId: req.projectId!, name: input.name, note: input.note, limitsJson: JSON.stringify(input.limits) })
-        .returning()
-        .get();
+      const row = db.transaction((tx) => {
+        const created = tx
+          .insert(envelopes)
+          .values({ projectId: req.projectId!, name: input.name, note: input.note, limitsJson: JSON.stringify(input.limits) })
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'envelope.create', created.name, { envelopeId: created.id, limits: input.limits });
+        return created;
+      });
       res.status(201).json({ envelope: present(row) });
     }),
     route('delete', '/projects/:projectId/envelopes/:envelopeId', access.engineer, (req, res) => {
       const { envelopeId } = envelopeParams.parse(req.params);
-      const deleted = db
-        .delete(envelopes)
-        .where(and(eq(envelopes.id, envelopeId), eq(envelopes.projectId, req.projectId!)))
-        .run().changes;
-      if (!deleted) throw new HttpError(404, 'not_found', `Envelope ${envelopeId} was not found in this project.`);
+      db.transaction((tx) => {
+        const deleted = tx
+          .delete(envelopes)
+          .where(and(eq(envelopes.id, envelopeId), eq(envelopes.projectId, req.projectId!)))
+          .returning({ name: envelopes.name })
+          .get();
+        if (!deleted) throw new HttpError(404, 'not_found', `Envelope ${envelopeId} was not found in this project.`);
+        recordRequestAudit(tx, req, 'envelope.delete', deleted.name, { envelopeId });
+      });
       res.status(204).end();
     }),
   ];

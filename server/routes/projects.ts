@@ -1,18 +1,56 @@
-import { eq } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
+import { z } from 'zod';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
 import { memberships, projects } from '../db/schema';
+
+const projectInput = z.object({
+  name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters'),
+  description: z.string().trim().max(2000, 'description must be at most 2000 characters').default(''),
+});
 
 export function projectRoutes({ db }: AppDeps): RouteSpec[] {
   return [
+    // Members see their projects with their role; an organisation admin sees every project, as owner where not a member.
     route('get', '/projects', access.signedIn, (req, res) => {
+      const user = req.user!;
       const rows = db
         .select({ id: projects.id, name: projects.name, description: projects.description, role: memberships.role })
-        .from(memberships)
-        .innerJoin(projects, eq(projects.id, memberships.projectId))
-        .where(eq(memberships.userId, req.user!.id))
-        .all();
+        .from(projects)
+        .leftJoin(memberships, and(eq(memberships.projectId, projects.id), eq(memberships.userId, user.id)))
+        .orderBy(asc(projects.name))
+        .all()
+        .filter((row) => row.role !== null || user.isAdmin)
+        .map((row) => ({ ...row, role: row.role ?? ('owner' as const) }));
       res.json({ projects: rows });
+    }),
+    route('post', '/projects', access.signedIn, (req, res) => {
+      const input = projectInput.parse(req.body);
+      const project = db.transaction((tx) => {
+        const row = tx.insert(projects).values(input).returning().get();
+        tx.insert(memberships).values({ projectId: row.id, userId: req.user!.id, role: 'owner' }).run();
+        recordRequestAudit(tx, { user: req.user, projectId: row.id }, 'project.create', row.name, { projectId: row.id });
+        return row;
+      });
+      res.status(201).json({ project: { ...project, role: 'owner' } });
+    }),
+    route('patch', '/projects/:projectId', access.owner, (req, res) => {
+      const input = projectInput.partial().parse(req.body);
+      const project = db.transaction((tx) => {
+        const row = tx.update(projects).set(input).where(eq(projects.id, req.projectId!)).returning().get();
+        recordRequestAudit(tx, req, 'project.update', row.name, { changed: Object.keys(input) });
+        return row;
+      });
+      res.json({ project });
+    }),
+    route('delete', '/projects/:projectId', access.owner, (req, res) => {
+      db.transaction((tx) => {
+        const row = tx.delete(projects).where(eq(projects.id, req.projectId!)).returning({ name: projects.name }).get();
+        // The line outlives the project: it names it, and carries no project id that would dangle.
+        recordRequestAudit(tx, { user: req.user }, 'project.delete', row?.name ?? `project ${req.projectId}`, { projectId: req.projectId });
+      });
+      res.status(204).end();
     }),
   ];
 }

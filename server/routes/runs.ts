@@ -4,6 +4,7 @@ import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
 import { MODE_NAMES } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile } from '../climate/store';
 import { runHours, runs, scenarios, sites } from '../db/schema';
 import { HttpError } from '../http-error';
@@ -79,8 +80,8 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         const site = db.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
         return { file, site };
       });
-      const created = db.transaction((tx) =>
-        chosen.flatMap((scenarioRow) => {
+      const created = db.transaction((tx) => {
+        const rows = chosen.flatMap((scenarioRow) => {
           const scenario = validScenario(JSON.parse(scenarioRow.scenarioJson));
           return files.map(({ file, site }) =>
             tx
@@ -98,8 +99,14 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
               .returning()
               .get(),
           );
-        }),
-      );
+        });
+        recordRequestAudit(tx, req, 'run.start', rows.length === 1 ? `run ${rows[0].id}` : `${rows.length} runs`, {
+          runIds: rows.map((r) => r.id),
+          scenarioIds: input.scenarioIds,
+          climateFileIds: input.climateFileIds,
+        });
+        return rows;
+      });
       for (const run of created) runQueue.enqueue(run.id);
       res.status(202).json({ runs: created.map(present) });
     }),
@@ -123,13 +130,17 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/runs/:runId/cancel', access.engineer, (req, res) => {
       const run = runOr404(req.projectId!, req.params);
       if (!runQueue.cancel(run.id)) throw new HttpError(409, 'not_cancellable', `Run ${run.id} is ${run.status} and cannot be cancelled.`);
+      recordRequestAudit(db, req, 'run.cancel', `run ${run.id}`, { runId: run.id });
       res.json({ run: present(runOr404(req.projectId!, req.params)) });
     }),
 
     route('delete', '/projects/:projectId/runs/:runId', access.engineer, (req, res) => {
       const run = runOr404(req.projectId!, req.params);
       runQueue.cancel(run.id);
-      db.delete(runs).where(eq(runs.id, run.id)).run();
+      db.transaction((tx) => {
+        tx.delete(runs).where(eq(runs.id, run.id)).run();
+        recordRequestAudit(tx, req, 'run.delete', `run ${run.id}`, { runId: run.id, status: run.status });
+      });
       res.status(204).end();
     }),
   ];

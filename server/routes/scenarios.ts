@@ -5,6 +5,7 @@ import { MODE_NAMES } from '../../shared/scenario';
 import { standardOffsetMinutes } from '../../shared/time-zone';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries } from '../climate/store';
 import { scenarios, sites } from '../db/schema';
 import { HttpError } from '../http-error';
@@ -45,11 +46,15 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
     }),
     route('post', '/projects/:projectId/scenarios', access.engineer, (req, res) => {
       const scenario = validScenario(req.body?.scenario);
-      const row = db
-        .insert(scenarios)
-        .values({ projectId: req.projectId!, name: scenario.name, scenarioJson: JSON.stringify(scenario), createdBy: req.user!.id })
-        .returning()
-        .get();
+      const row = db.transaction((tx) => {
+        const created = tx
+          .insert(scenarios)
+          .values({ projectId: req.projectId!, name: scenario.name, scenarioJson: JSON.stringify(scenario), createdBy: req.user!.id })
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'scenario.create', created.name, { scenarioId: created.id });
+        return created;
+      });
       res.status(201).json({ scenario: present(row) });
     }),
     route('get', '/projects/:projectId/scenarios/:scenarioId', access.viewer, (req, res) => {
@@ -58,27 +63,38 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
     route('put', '/projects/:projectId/scenarios/:scenarioId', access.engineer, (req, res) => {
       const existing = scenarioOr404(req.projectId!, req.params);
       const scenario = validScenario(req.body?.scenario);
-      const row = db
-        .update(scenarios)
-        .set({ name: scenario.name, scenarioJson: JSON.stringify(scenario), updatedAt: new Date() })
-        .where(eq(scenarios.id, existing.id))
-        .returning()
-        .get();
+      const row = db.transaction((tx) => {
+        const updated = tx
+          .update(scenarios)
+          .set({ name: scenario.name, scenarioJson: JSON.stringify(scenario), updatedAt: new Date() })
+          .where(eq(scenarios.id, existing.id))
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'scenario.update', updated.name, { scenarioId: existing.id, previousName: existing.name });
+        return updated;
+      });
       res.json({ scenario: present(row) });
     }),
     route('post', '/projects/:projectId/scenarios/:scenarioId/duplicate', access.engineer, (req, res) => {
       const existing = present(scenarioOr404(req.projectId!, req.params));
       const copy = { ...existing.scenario, name: `${existing.scenario.name} (copy)`.slice(0, 120) };
-      const row = db
-        .insert(scenarios)
-        .values({ projectId: req.projectId!, name: copy.name, scenarioJson: JSON.stringify(copy), createdBy: req.user!.id })
-        .returning()
-        .get();
+      const row = db.transaction((tx) => {
+        const created = tx
+          .insert(scenarios)
+          .values({ projectId: req.projectId!, name: copy.name, scenarioJson: JSON.stringify(copy), createdBy: req.user!.id })
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'scenario.create', created.name, { scenarioId: created.id, duplicateOf: existing.id });
+        return created;
+      });
       res.status(201).json({ scenario: present(row) });
     }),
     route('delete', '/projects/:projectId/scenarios/:scenarioId', access.engineer, (req, res) => {
       const existing = scenarioOr404(req.projectId!, req.params);
-      db.delete(scenarios).where(eq(scenarios.id, existing.id)).run();
+      db.transaction((tx) => {
+        tx.delete(scenarios).where(eq(scenarios.id, existing.id)).run();
+        recordRequestAudit(tx, req, 'scenario.delete', existing.name, { scenarioId: existing.id });
+      });
       res.status(204).end();
     }),
     // Hours per mode while the scenario is being edited: computed on the pool, never stored.

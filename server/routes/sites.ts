@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { siteInputSchema } from '../../shared/schemas/climate-file';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
 import { sites } from '../db/schema';
 import { HttpError } from '../http-error';
 
@@ -26,24 +27,35 @@ export function siteRoutes(deps: AppDeps): RouteSpec[] {
     }),
     route('post', '/projects/:projectId/sites', access.engineer, (req, res) => {
       const input = siteInputSchema.parse(req.body);
-      const site = db
-        .insert(sites)
-        .values({ ...input, projectId: req.projectId! })
-        .returning()
-        .get();
+      const site = db.transaction((tx) => {
+        const row = tx
+          .insert(sites)
+          .values({ ...input, projectId: req.projectId! })
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'site.create', row.name, { siteId: row.id });
+        return row;
+      });
       res.status(201).json({ site });
     }),
     route('patch', '/projects/:projectId/sites/:siteId', access.engineer, (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       findSite(deps, req.projectId!, siteId);
       const input = siteInputSchema.partial().parse(req.body);
-      const site = db.update(sites).set(input).where(eq(sites.id, siteId)).returning().get();
+      const site = db.transaction((tx) => {
+        const row = tx.update(sites).set(input).where(eq(sites.id, siteId)).returning().get();
+        recordRequestAudit(tx, req, 'site.update', row.name, { siteId, changed: Object.keys(input) });
+        return row;
+      });
       res.json({ site });
     }),
     route('delete', '/projects/:projectId/sites/:siteId', access.engineer, (req, res) => {
       const { siteId } = siteParams.parse(req.params);
-      findSite(deps, req.projectId!, siteId);
-      db.delete(sites).where(eq(sites.id, siteId)).run();
+      const site = findSite(deps, req.projectId!, siteId);
+      db.transaction((tx) => {
+        tx.delete(sites).where(eq(sites.id, siteId)).run();
+        recordRequestAudit(tx, req, 'site.delete', site.name, { siteId });
+      });
       res.status(204).end();
     }),
   ];

@@ -4,14 +4,19 @@ import type { Db } from '../db/client';
 import { runHours, runs } from '../db/schema';
 import { blob, loadClimateSeries } from '../climate/store';
 import type { WorkerPool } from '../../workers/pool';
+import { recordAudit } from '../auth/audit';
+import type { Mailer } from '../mail/mailer';
+import { sendRunFinishedNotices } from '../mail/notices';
 
 export interface RunQueueOptions {
   db: Db;
   pool: WorkerPool;
   /** A run still going after this long is stopped and marked failed. */
   timeoutMs?: number;
-  /** Told when a run ends in any state (notices, audit). */
-  onSettled?: (runId: number, status: 'done' | 'failed' | 'cancelled') => void;
+  /** Where run-finished notices go for the members who opted in; none are sent without it. */
+  mailer?: Mailer;
+  publicUrl?: string;
+  logError?: (error: unknown) => void;
 }
 
 export interface RunQueue {
@@ -33,12 +38,23 @@ interface RunSnapshotClimate {
  * truthfully whether it is waiting or computing. State lives in the runs table, so a restart loses
  * nothing: `resume()` re-queues what was pending.
  */
-export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, onSettled }: RunQueueOptions): RunQueue {
+export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publicUrl, logError }: RunQueueOptions): RunQueue {
   const waiting: number[] = [];
   const running = new Map<number, AbortController>();
   let idleWaiters: Array<() => void> = [];
 
-  const settle = (runId: number, status: 'done' | 'failed' | 'cancelled') => onSettled?.(runId, status);
+  /** A run that finished or failed on its own goes into the audit trail and, when done, out as notices. */
+  function settle(runId: number, status: 'done' | 'failed'): void {
+    const run = db.select().from(runs).where(eq(runs.id, runId)).get();
+    if (!run) return;
+    const name = `${(JSON.parse(run.scenarioJson) as { name: string }).name} on ${(JSON.parse(run.climateJson) as { name: string }).name}`;
+    recordAudit(db, { actorId: null, projectId: run.projectId, action: `run.${status}`, target: `run ${runId}: ${name}`, detail: { runId, error: run.error } });
+    if (status === 'done') {
+      sendRunFinishedNotices({ db, mailer, publicUrl, logError }, { projectId: run.projectId, runName: name, path: `/projects/${run.projectId}/runs/${runId}` }).catch(
+        (error: unknown) => logError?.(error),
+      );
+    }
+  }
 
   function pump(): void {
     while (running.size < pool.threads && waiting.length > 0) {
@@ -125,7 +141,6 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, onSettled }:
       const index = waiting.indexOf(runId);
       if (index >= 0) waiting.splice(index, 1);
       running.get(runId)?.abort('cancelled');
-      settle(runId, 'cancelled');
       pump();
       return true;
     },

@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { count } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
+import { auditEvents, climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
@@ -63,6 +63,9 @@ describe('an engineer uploading hourly weather', () => {
     const res = await upload(threeDays, '?fileName=three-days.csv&name=July%20check').expect(201);
     expect(res.body.climateFile).toMatchObject({ name: 'July check', hours: 72, measuredHours: 72, missingHours: 0, siteName: 'Quarry Hill' });
     expect(storedCounts()).toEqual({ files: 1, originals: 1, series: 1 });
+    const imported = t.db.select().from(auditEvents).all().filter((e) => e.action === 'climate.import');
+    expect(imported).toHaveLength(1);
+    expect(imported[0]).toMatchObject({ actorId: engineer.id, projectId, target: 'July check' });
 
     const id = res.body.climateFile.id;
     const original = await request(t.app).get(`/api/projects/${projectId}/climate-files/${id}/original`).set(asPerson(viewer)).buffer(true).parse((r, cb) => {

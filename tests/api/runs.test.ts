@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runs } from '../../server/db/schema';
+import { auditEvents, runs } from '../../server/db/schema';
 import { createRunQueue } from '../../server/runs/queue';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
@@ -80,6 +80,10 @@ describe('an engineer running a scenario', () => {
     const hours = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hours`).set(asPerson(viewer)).expect(200);
     expect(hours.body.modes).toHaveLength(72);
     expect(hours.body.modeNames).toEqual(['free', 'adiabatic', 'mechanical', 'no_data']);
+
+    const trail = t.db.select().from(auditEvents).all();
+    expect(trail.find((e) => e.action === 'run.start')).toMatchObject({ actorId: engineer.id, target: `run ${runId}` });
+    expect(trail.find((e) => e.action === 'run.done')).toMatchObject({ actorId: null, projectId });
   });
 
   it('keeps the run as it was when the scenario changes later', async () => {

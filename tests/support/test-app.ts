@@ -20,7 +20,7 @@ export function createTestApp(overrides: Partial<AppDeps> = {}): TestApp {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'tramontane-test-'));
   const db = openDatabase(path.join(dataDir, 'tramontane.db'));
   const pool = createWorkerPool({ threads: 2 });
-  const runQueue = createRunQueue({ db, pool });
+  const runQueue = createRunQueue({ db, pool, mailer: overrides.mailer, publicUrl: overrides.publicUrl });
   const app = createApp({ db, pool, runQueue, ...overrides });
   return {
     app,
