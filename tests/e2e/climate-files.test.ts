@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
@@ -197,5 +198,12 @@ describe('an engineer adding hourly weather to a project', () => {
     await page.getByRole('link', { name: 'zimna-dolina' }).click();
     await page.getByTestId('design-label').waitFor();
     await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(2);
+    // Both downloads: the cleaned series in the canonical columns, and the original bytes.
+    const [cleaned] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Cleaned hourly CSV' }).click()]);
+    const csv = readFileSync((await cleaned.path())!, 'utf8').split('\n');
+    expect(csv[0]).toBe('timestamp,dry_bulb_c,relative_humidity_pct,pressure_kpa,flag');
+    expect(csv[1]).toBe('2020-12-31T23:00:00Z,-9.6,82.1,98.32,measured');
+    const [original] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: /Original file/ }).click()]);
+    expect(readFileSync((await original.path())!).equals(readFileSync(sampleFile))).toBe(true);
   });
 });
