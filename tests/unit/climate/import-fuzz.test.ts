@@ -90,7 +90,7 @@ describe('importClimateText never throws', () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it('on random CSV-like text', () => {
     fc.assert(
@@ -99,7 +99,7 @@ describe('importClimateText never throws', () => {
       }),
       { numRuns: 500 },
     );
-  });
+  }, 30_000);
 
   it('on damaged hourly files, keeping the series invariants', () => {
     fc.assert(
@@ -108,7 +108,7 @@ describe('importClimateText never throws', () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 30_000);
 
   it('on arguments that are not what the types say', () => {
     const odd = [undefined, null, 42, {}, [], new Uint8Array(3)] as unknown[];
