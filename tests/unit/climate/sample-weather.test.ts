@@ -32,7 +32,7 @@ function mean(values: Float64Array): number {
   return sum / n;
 }
 
-describe('sample weather', () => {
+describe('sample weather', { timeout: 30_000 }, () => {
   it('has four invented sites with the four climates asked for', () => {
     expect(sites.map((s) => s.climate).sort()).toEqual(['cold continental', 'hot dry at altitude', 'hot humid', 'mild maritime']);
     expect(sites.every((s) => s.synthetic)).toBe(true);
