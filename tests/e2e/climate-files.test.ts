@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
@@ -9,6 +9,8 @@ const sampleFile = fileURLToPath(new URL('../../sample-weather/zimna-dolina.csv'
 let h: BrowserHarness;
 let projectId: number;
 let viewer: TestPerson;
+/** Errors the page logs (React warnings, uncaught exceptions); a refused request's own log line is expected. */
+const pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
@@ -20,6 +22,8 @@ beforeAll(async () => {
   ]);
   const [name, value] = engineer.cookie.split('=');
   await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+  h.page.on('console', (m) => m.type() === 'error' && !m.text().startsWith('Failed to load resource') && pageErrors.push(m.text()));
+  h.page.on('pageerror', (e) => pageErrors.push(e.message));
   // Start every journey in SI; the IP screenshots switch on the page.
   await h.page.addInitScript(() => {
     if (!sessionStorage.getItem('unit-reset')) {
@@ -28,10 +32,13 @@ beforeAll(async () => {
     }
   });
 });
+afterEach(() => {
+  expect(pageErrors.splice(0)).toEqual([]);
+});
 afterAll(() => h?.close());
 
 describe('an engineer adding hourly weather to a project', () => {
-  it('opens the project, creates a site, uploads a file through the mapping and the report, and sees the climate file page', async () => {
+  it('opens the project, creates a site, uploads a file through the mapping and the report, and sees the climate file page', { timeout: 120_000 }, async () => {
     const page = h.page;
     await page.goto(h.baseUrl);
     await page.getByRole('link', { name: 'Valley campus study' }).click();
