@@ -150,6 +150,22 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await shot('compare-si');
   });
 
+  it('offers the water-side fields and words a cross-field refusal in the editor’s terms', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/new`);
+    await page.getByLabel('Water-side economiser').check();
+    await page.getByLabel('Heat rejection').selectOption('dry-cooler');
+    await page.getByLabel('Chilled-water supply').fill('30');
+    await expect
+      .poll(() => page.getByText('“Chilled-water supply” must be below “supply air setpoint”.').isVisible())
+      .toBe(true);
+    expect(await page.getByLabel('Approach').isVisible()).toBe(true);
+    await shot('scenario-editor-water-side-si');
+    page.once('dialog', (dialog) => void dialog.accept());
+    await page.getByRole('link', { name: 'Projects' }).click();
+    await page.waitForURL(`${h.baseUrl}/`);
+  });
+
   it('shows the envelope library and the air-state calculator', async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/envelopes`);

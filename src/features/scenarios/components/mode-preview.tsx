@@ -54,7 +54,7 @@ export function ModePreview({
       {preview.isError && <p className="text-xs text-signal-bad">Preview failed: {preview.error.message}</p>}
       {!hours && preview.isFetching && <div className="h-20 animate-pulse rounded bg-mist" aria-label="Computing preview" />}
       {hours && (
-        <div className={preview.isFetching ? 'opacity-60 transition-opacity' : ''} data-testid="mode-preview">
+        <div className={preview.isFetching || invalid ? 'opacity-40 transition-opacity' : ''} data-testid="mode-preview" aria-disabled={invalid || undefined}>
           <div className="flex h-4 overflow-hidden rounded-sm" aria-hidden>
             {shown.map(({ key, field }) =>
               hours[field] > 0 ? <div key={key} style={{ width: `${(100 * hours[field]) / total}%`, background: modeColours[key] }} /> : null,

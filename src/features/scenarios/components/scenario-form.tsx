@@ -50,6 +50,8 @@ export function ScenarioForm({
   // The preview follows the form once typing pauses; an invalid form is not sent.
   const settledJson = useDebouncedValue(JSON.stringify(values), 600);
   const settled = useMemo(() => scenarioSchema.safeParse(JSON.parse(settledJson)), [settledJson]);
+  // Checked at once (not debounced), so a preview of the last valid scenario is never shown as if it were current.
+  const validNow = useMemo(() => scenarioSchema.safeParse(values).success, [values]);
 
   async function persist(scenario: Scenario): Promise<number | null> {
     try {
@@ -219,8 +221,8 @@ export function ScenarioForm({
               ) : (
                 <ModePreview
                   projectId={projectId}
-                  scenario={settled.success ? settled.data : null}
-                  invalid={!settled.success}
+                  scenario={settled.success && validNow ? settled.data : null}
+                  invalid={!validNow}
                   climateFiles={climateFiles}
                   climateFileId={chosenPreviewFile}
                   onClimateFileChange={setPreviewFileId}
