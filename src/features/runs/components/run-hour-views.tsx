@@ -45,6 +45,13 @@ export function RunHourViews({ run }: { run: RunRecord }) {
     [run.scenario.system.supplyAirC, results.envelope.highHumidityRatioGPerKg, results.envelope.lowHumidityRatioGPerKg],
   );
 
+  if (run.climateFileId === null) {
+    return (
+      <Notice title="The climate file of this run was deleted">
+        The carpet, the moist-air chart and the bin table need its hours. The totals above are as computed and stay.
+      </Notice>
+    );
+  }
   if (hours.isError || climate.isError) {
     return (
       <Notice tone="bad" title="The hourly views could not be loaded">
