@@ -2,7 +2,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { parseScenario, type Scenario } from '../../shared/scenario';
 import { MODE_NAMES } from '../../shared/scenario';
-import { standardOffsetMinutes } from '../../shared/time-zone';
+import { standardOffsetMinutes } from '../../shared/climate';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';

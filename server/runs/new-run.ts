@@ -1,5 +1,5 @@
 import { ENGINE_VERSION } from '../../shared/scenario';
-import { standardOffsetMinutes } from '../../shared/time-zone';
+import { standardOffsetMinutes } from '../../shared/climate';
 import type { climateFiles, runs, sites } from '../db/schema';
 
 /**

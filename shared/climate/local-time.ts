@@ -22,6 +22,7 @@ export interface LocalToUtc {
   lastEvent: LocalTimeEvent | null;
 }
 
+const MINUTE_MS = 60_000;
 const FIXED_OFFSET = /^(?:UTC|GMT)?\s*([+\-\u2212])(\d{1,2})(?::?(\d{2}))?$/;
 
 /**
@@ -78,6 +79,17 @@ export function wallClockReader(timeZone: string): (utcMs: number) => WallClock 
   };
 }
 
+/**
+ * Offset of a zone's standard time from UTC in minutes: the smaller of its offsets on 1 January and
+ * 1 July of `year`, since daylight saving only ever adds. A fixed offset is its own standard time.
+ */
+export function standardOffsetMinutes(timeZone: string, year = 2023): number {
+  const fixed = fixedOffsetMs(timeZone);
+  if (!Number.isNaN(fixed)) return fixed / MINUTE_MS;
+  const offsetAt = offsetReader(timeZone);
+  return Math.min(offsetAt(Date.UTC(year, 0, 1)), offsetAt(Date.UTC(year, 6, 1))) / MINUTE_MS;
+}
+
 function offsetReader(timeZone: string): (utcMs: number) => number {
   const read = wallClockReader(timeZone);
   return (utcMs: number) => {
@@ -87,7 +99,6 @@ function offsetReader(timeZone: string): (utcMs: number) => number {
 }
 
 const WEEK_MS = 7 * MS_PER_DAY;
-const MINUTE_MS = 60_000;
 
 interface YearOffsets {
   startOffset: number;

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { standardOffsetMinutes } from '../../../../shared/time-zone';
+import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
 import { CarpetPlot } from '@/components/charts/carpet-plot';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { standardOffsetMinutes } from '../../../../shared/time-zone';
+import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useClimateFiles } from '../api/get-climate-files';
