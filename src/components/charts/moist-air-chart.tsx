@@ -11,8 +11,8 @@ import {
   densityBins,
   envelopePolygon,
   hourStates,
-  hoursInside,
   hoursToChartXY,
+  modeCodeAt,
   sampleIndex,
   stateToChartXY,
   type ChartHours,
@@ -20,6 +20,7 @@ import {
   type DisplayLine,
   type EnvelopeLimitsInput,
 } from './moist-air-data';
+import { MoistAirTable } from './moist-air-table';
 import { PlotFigure, type PlotModule } from './plot-figure';
 import { SegmentedSwitch } from './segmented-switch';
 
@@ -126,7 +127,7 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
                 y: (i: number) => xy.y[i],
                 // Few hours (a short run) read better as larger dots.
                 r: drawn.length < 3000 ? 3 : 1.7,
-                fill: (i: number) => modeColours[modeKeys[modeCode(hours.modes, i)]],
+                fill: (i: number) => modeColours[modeKeys[modeCodeAt(hours.modes, i)]],
                 fillOpacity: 0.75,
                 clip: true,
               }),
@@ -181,10 +182,6 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
   );
 }
 
-function modeCode(modes: ArrayLike<number> | undefined, i: number): number {
-  const m = modes ? modes[i] : 0;
-  return m >= 0 && m <= 3 ? Math.floor(m) : 3;
-}
 
 /** Axis domains in display units: the window, with the h–x ordinate covering the hottest isotherm's rise. */
 function chartDomains(window: ReturnType<typeof chartWindowFor>, projection: ChartProjection, system: UnitSystem) {
@@ -228,121 +225,6 @@ function hourText(i: number, hours: ChartHours, states: ReturnType<typeof hourSt
     `Wet-bulb ${formatQuantity('temperature', system, states.wetBulbC[i])}`,
     `Enthalpy ${formatQuantity('enthalpy', system, states.enthalpyKJPerKg[i])}`,
   ];
-  if (hours.modes) rows.push(`Mode ${modeLabels[modeKeys[modeCode(hours.modes, i)]]}`);
+  if (hours.modes) rows.push(`Mode ${modeLabels[modeKeys[modeCodeAt(hours.modes, i)]]}`);
   return rows.join('\n');
-}
-
-function MoistAirTable({
-  hours,
-  states,
-  envelopes,
-  markers,
-  pressurePa,
-  system,
-}: {
-  hours: ChartHours;
-  states: ReturnType<typeof hourStates>;
-  envelopes: Array<{ label: string; limits: EnvelopeLimitsInput }>;
-  markers: ChartMarker[];
-  pressurePa: number;
-  system: UnitSystem;
-}) {
-  const stats = useMemo(() => {
-    const range = (a: ArrayLike<number>) => {
-      let min = Infinity;
-      let max = -Infinity;
-      let sum = 0;
-      let n = 0;
-      for (let i = 0; i < a.length; i++) {
-        const v = a[i];
-        if (v !== v) continue;
-        if (v < min) min = v;
-        if (v > max) max = v;
-        sum += v;
-        n++;
-      }
-      return n ? { min, max, mean: sum / n, n } : { min: NaN, max: NaN, mean: NaN, n };
-    };
-    const modeHours = [0, 0, 0, 0];
-    if (hours.modes) for (let i = 0; i < hours.modes.length; i++) modeHours[modeCode(hours.modes, i)]++;
-    return {
-      dryBulb: range(hours.dryBulbC),
-      humidityRatio: range(states.humidityRatio),
-      dewPoint: range(states.dewPointC),
-      wetBulb: range(states.wetBulbC),
-      enthalpy: range(states.enthalpyKJPerKg),
-      inside: envelopes.map((e) => hoursInside(hours, states, e.limits)),
-      modeHours,
-    };
-  }, [hours, states, envelopes]);
-  const rows: Array<[string, 'temperature' | 'humidityRatio' | 'enthalpy', { min: number; mean: number; max: number }]> = [
-    ['Dry-bulb', 'temperature', stats.dryBulb],
-    ['Humidity ratio', 'humidityRatio', stats.humidityRatio],
-    ['Dew point', 'temperature', stats.dewPoint],
-    ['Wet-bulb', 'temperature', stats.wetBulb],
-    ['Enthalpy', 'enthalpy', stats.enthalpy],
-  ];
-  const total = hours.dryBulbC.length;
-  const cell = 'px-2 py-0.5 text-right';
-  return (
-    <details className="text-sm">
-      <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
-      <div className="mt-2 grid gap-4 lg:grid-cols-2">
-        <table className="num w-full text-xs">
-          <caption className="pb-1 text-left font-sans text-ink-soft">
-            {stats.dryBulb.n.toLocaleString('en')} of {total.toLocaleString('en')} hours with data, at {formatQuantity('pressure', system, pressurePa)}
-          </caption>
-          <thead>
-            <tr className="border-b border-rule font-sans text-ink-soft">
-              <th scope="col" className="py-1 text-left font-medium">Quantity</th>
-              <th scope="col" className={cell}>Min</th>
-              <th scope="col" className={cell}>Mean</th>
-              <th scope="col" className={cell}>Max</th>
-            </tr>
-          </thead>
-          <tbody>
-            {rows.map(([name, kind, s]) => (
-              <tr key={name} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 text-left font-sans font-normal">{name} ({unitOf(kind, system)})</th>
-                <td className={cell}>{formatQuantity(kind, system, s.min, false)}</td>
-                <td className={cell}>{formatQuantity(kind, system, s.mean, false)}</td>
-                <td className={cell}>{formatQuantity(kind, system, s.max, false)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {(envelopes.length > 0 || hours.modes || markers.length > 0) && (
-          <table className="num w-full text-xs">
-            <caption className="pb-1 text-left font-sans text-ink-soft">
-              {[envelopes.length ? 'Hours inside each envelope' : '', hours.modes ? 'Hours per mode' : '', markers.length ? 'Marked states' : ''].filter(Boolean).join(' · ')}
-            </caption>
-            <tbody>
-              {envelopes.map((e, k) => (
-                <tr key={`e${k}`} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">Inside {e.label}</th>
-                  <td className={cell}>{stats.inside[k].inside.toLocaleString('en')} h</td>
-                  <td className={cell}>{stats.inside[k].withData ? ((100 * stats.inside[k].inside) / stats.inside[k].withData).toFixed(1) : '–'} %</td>
-                </tr>
-              ))}
-              {hours.modes &&
-                modeKeys.map((key, code) => (
-                  <tr key={key} className="border-b border-rule/60">
-                    <th scope="row" className="py-0.5 text-left font-sans font-normal">{modeLabels[key]}</th>
-                    <td className={cell}>{stats.modeHours[code].toLocaleString('en')} h</td>
-                    <td className={cell}>{total ? ((100 * stats.modeHours[code]) / total).toFixed(1) : '–'} %</td>
-                  </tr>
-                ))}
-              {markers.map((m) => (
-                <tr key={m.label} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{m.label}</th>
-                  <td className={cell}>{formatQuantity('temperature', system, m.dryBulbC)}</td>
-                  <td className={cell}>{formatQuantity('humidityRatio', system, m.humidityRatio)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        )}
-      </div>
-    </details>
-  );
 }

@@ -16,7 +16,7 @@ import {
   type ChartProjection,
   type ChartWindow,
 } from '../../../shared/psychrometrics';
-import { CP_DRY_AIR } from '../../../shared/psychrometrics/constants';
+import { CP_DRY_AIR, CP_VAPOUR } from '../../../shared/psychrometrics/constants';
 import { enthalpyIpToSiKJPerKg, fahrenheitToCelsius } from '../../../shared/units';
 import { toDisplay } from '../../lib/quantity';
 import type { UnitSystem } from '../../lib/unit-system';
@@ -119,7 +119,7 @@ export function hoursToChartXY(hours: ChartHours, projection: ChartProjection, s
     // Same as stateToChartXY, unrolled so a year of hours makes no object per hour.
     if (projection === 'h-x') {
       x[i] = w * gramScale;
-      y[i] = tempZero + tempScale * ((CP_DRY_AIR * t + 1.86 * t * w) / CP_DRY_AIR);
+      y[i] = tempZero + tempScale * ((CP_DRY_AIR * t + CP_VAPOUR * t * w) / CP_DRY_AIR);
     } else {
       x[i] = tempZero + tempScale * t;
       y[i] = w * gramScale;
@@ -285,6 +285,12 @@ export function hoursInside(hours: ChartHours, state: BulkState, limits: Envelop
     }
   }
   return { inside, withData };
+}
+
+/** The mode code of hour i (0 free, 1 adiabatic, 2 mechanical, 3 no data); 0 when there are no modes, 3 for anything unknown. */
+export function modeCodeAt(modes: ArrayLike<number> | undefined, i: number): number {
+  const m = modes ? modes[i] : 0;
+  return m >= 0 && m <= 3 ? Math.floor(m) : 3;
 }
 
 /** A systematic sample of at most `limit` hour indices (every k-th hour), so large series stay drawable. */
