@@ -1,7 +1,7 @@
 import express from 'express';
 import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { decodeClimateBytes, type ClimateSeries, type ImportResult } from '../../shared/climate';
+import { decodeClimateBytes, standardOffsetMinutes, type ClimateSeries, type ImportResult } from '../../shared/climate';
 import { csvCell } from '../../shared/csv';
 import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
 import type { AppDeps } from '../app';
@@ -49,7 +49,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     }
     const result: ImportResult = await pool.run('importClimate', {
       text,
-      options: { mapping: query.mapping, maxGapHours: query.maxGapHours, timeZone },
+      options: { mapping: query.mapping, maxGapHours: query.maxGapHours, timeZone: importTimeZone(query.timeBasis, timeZone) },
     });
     return { query, bytes, text, result };
   }
@@ -223,6 +223,15 @@ function hourlyCsv(s: ClimateSeries): string {
     lines.push(cells.join(','));
   }
   return `${lines.join('\n')}\n`;
+}
+
+/** The zone the importer reads local timestamps in, for the chosen time basis. */
+function importTimeZone(basis: 'site-civil' | 'site-standard' | 'utc', siteTimeZone: string): string {
+  if (basis === 'utc') return 'UTC';
+  if (basis === 'site-civil') return siteTimeZone;
+  const minutes = standardOffsetMinutes(siteTimeZone);
+  const abs = Math.abs(minutes);
+  return `UTC${minutes < 0 ? '-' : '+'}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
 }
 
 function round3(v: number): number {

@@ -46,6 +46,11 @@ export type MappingOverride = z.infer<typeof mappingOverrideSchema>;
 export const climateUploadQuerySchema = z.object({
   name: z.string().trim().min(1, 'name must not be empty').max(120).optional(),
   fileName: z.string().trim().min(1).max(255).default('upload.csv'),
+  /**
+   * How local timestamps without an offset are read: the site's civil time (with daylight saving),
+   * its standard time all year (as many weather files are written), or UTC.
+   */
+  timeBasis: z.enum(['site-civil', 'site-standard', 'utc']).default('site-civil'),
   maxGapHours: z.coerce.number().int().min(0, 'maxGapHours must be 0 or more').max(168, 'maxGapHours must be at most 168').default(6),
   mapping: z
     .string()

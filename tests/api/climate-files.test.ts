@@ -96,6 +96,23 @@ describe('an engineer uploading hourly weather', () => {
     expect(res.body.summary.design.dryBulb[0].valueC).toBeGreaterThan(21);
   });
 
+  it('reads local timestamps in the site civil time, its standard time or UTC, as the person chooses', async () => {
+    // Europe/Dublin: UTC+1 in summer, UTC in winter, so its standard (least) offset is UTC (IANA time-zone database).
+    const text = 'date,time,dry_bulb_c,relative_humidity_pct\n2023-07-01,12:00,20,50\n2023-07-01,13:00,21,50\n';
+    const preview = async (basis: string) =>
+      (
+        await request(t.app)
+          .post(`/api/projects/${projectId}/sites/${siteId}/climate-files/preview?timeBasis=${basis}`)
+          .set(asPerson(engineer))
+          .set('content-type', 'text/csv')
+          .send(text)
+          .expect(200)
+      ).body.preview[0].timestampMs;
+    expect(await preview('site-civil')).toBe(Date.UTC(2023, 6, 1, 11));
+    expect(await preview('site-standard')).toBe(Date.UTC(2023, 6, 1, 12));
+    expect(await preview('utc')).toBe(Date.UTC(2023, 6, 1, 12));
+  });
+
   it('refuses a file without humidity with a 422 report and stores nothing', async () => {
     const before = storedCounts();
     const res = await upload('timestamp,dry_bulb_c\n2023-01-01T00:00Z,3\n2023-01-01T01:00Z,4\n').expect(422);
