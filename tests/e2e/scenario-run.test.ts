@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
@@ -29,6 +29,8 @@ async function api<T>(person: TestPerson, method: string, path: string, body?: B
 }
 
 let current: TestPerson;
+/** Errors the page logs or throws; each test must end with none. */
+const pageErrors: string[] = [];
 
 async function signInAs(person: TestPerson) {
   current = person;
@@ -70,11 +72,16 @@ beforeAll(async () => {
   ]);
   const { site } = await api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Saltmarsh Point', elevationM: 120 }));
   await api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
+  h.page.on('pageerror', (error) => pageErrors.push(error.message));
+  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
   await signInAs(engineer);
   await h.page.goto(h.baseUrl);
   await useUnits(h.page, 'SI');
 });
 afterAll(() => h?.close());
+afterEach(() => {
+  expect(pageErrors.splice(0)).toEqual([]);
+});
 
 describe('an engineer designing, running and comparing scenarios', () => {
   it('creates a scenario, sees the quick preview, saves and runs it, and reads the run page', async () => {
