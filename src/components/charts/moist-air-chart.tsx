@@ -139,15 +139,18 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
             strokeWidth: 1.8,
             clip: true,
           }),
-          Plot.text(envelopeTags, {
+          // A lone envelope is named at its upper-left corner; several are named in the legend above, as their corners often meet.
+          Plot.text(envelopeTags.length === 1 ? envelopeTags : [], {
             x: 'x',
             y: 'y',
             text: 'label',
-            fill: (r: { k: number }) => envelopeInks[r.k % envelopeInks.length],
+            fill: envelopeInks[0],
             fontWeight: 600,
             textAnchor: 'start',
             dy: -8,
-            clip: true,
+            stroke: '#ffffff',
+            strokeWidth: 3,
+            paintOrder: 'stroke',
           }),
           Plot.dot(markerRows, { x: 'x', y: 'y', r: 5, stroke: '#1d2327', strokeWidth: 2, fill: '#ffffff' }),
           Plot.text(markerRows, { x: 'x', y: 'y', text: 'label', dx: 9, textAnchor: 'start', fontWeight: 600, fill: '#1d2327', stroke: '#ffffff', strokeWidth: 3, paintOrder: 'stroke' }),
@@ -170,6 +173,16 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
         <SegmentedSwitch<UnitSystem> label="Units" options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
         <p className="num text-xs text-ink-soft">at {formatQuantity('pressure', unitSystem, pressurePa)}</p>
         {display === 'points' && hours.modes && <ModeLegend />}
+        {envelopes.length > 0 && (
+          <ul aria-label="Envelopes" className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-soft">
+            {envelopes.map((e, k) => (
+              <li key={k} className="flex items-center gap-1.5">
+                <span aria-hidden className="inline-block h-0.5 w-4" style={{ background: envelopeInks[k % envelopeInks.length] }} />
+                {e.label}
+              </li>
+            ))}
+          </ul>
+        )}
       </div>
       <PlotFigure render={render} label={label} placeholderHeightPx={420} />
       <p className="text-xs text-ink-soft">
