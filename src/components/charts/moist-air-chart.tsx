@@ -37,6 +37,8 @@ export interface MoistAirChartProps {
 
 /** Most points drawn (and hovered) at once; larger series are thinned to every k-th hour, and the caption says so. */
 const maxDrawnHours = 30_000;
+/** Painting order per mode code (0 free, 1 adiabatic, 2 mechanical, 3 no data): no data lowest, mechanical on top. */
+const drawOrder = [1, 2, 3, 0];
 const envelopeInks = ['#1f3a4a', '#2f6f4e', '#8a5a12', '#5b4a8a'];
 const lineStyle: Record<DisplayLine['kind'], { stroke: string; width: number; dash?: string }> = {
   saturation: { stroke: '#1f3a4a', width: 1.8 },
@@ -81,6 +83,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
       const tUnit = unitOf('temperature', system);
       const wUnit = `${unitOf('humidityRatio', system)} dry air`;
       const drawn = Array.from(sample.index).filter((i) => xy.x[i] === xy.x[i]);
+      // Draw the common free-cooling hours first and the rarer adiabatic and mechanical hours over them.
+      if (display === 'points' && hours.modes) drawn.sort((a, b) => drawOrder[modeCodeAt(hours.modes, a)] - drawOrder[modeCodeAt(hours.modes, b)]);
 
       const lineRows = lines.flatMap((line, z) => line.points.map((p) => ({ ...p, z, kind: line.kind })));
       const labels = lineLabels(lines, system, projection);
