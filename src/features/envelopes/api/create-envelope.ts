@@ -12,7 +12,6 @@ export interface NewEnvelope {
 export const createEnvelope = (projectId: number, envelope: NewEnvelope) =>
   apiFetch<{ envelope: ProjectEnvelope }>(`/projects/${projectId}/envelopes`, {
     method: 'POST',
-    headers: { 'x-tramontane-request': '1' },
     body: JSON.stringify(envelope),
   });
 

@@ -3,7 +3,7 @@ import { apiFetch } from '@/lib/api-client';
 import type { RunRecord } from './get-run';
 
 export const cancelRun = (projectId: number, runId: number) =>
-  apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST', headers: { 'x-tramontane-request': '1' } });
+  apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST' });
 
 export function useCancelRun(projectId: number, runId: number) {
   const queryClient = useQueryClient();

@@ -14,7 +14,6 @@ export interface QueuedRun {
 export const createRuns = (projectId: number, scenarioIds: number[], climateFileIds: number[]) =>
   apiFetch<{ runs: QueuedRun[] }>(`/projects/${projectId}/runs`, {
     method: 'POST',
-    headers: { 'x-tramontane-request': '1' },
     body: JSON.stringify({ scenarioIds, climateFileIds }),
   });
 

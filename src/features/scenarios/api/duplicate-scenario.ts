@@ -5,7 +5,6 @@ import type { StoredScenario } from './get-scenario';
 export const duplicateScenario = (projectId: number, scenarioId: number) =>
   apiFetch<{ scenario: StoredScenario }>(`/projects/${projectId}/scenarios/${scenarioId}/duplicate`, {
     method: 'POST',
-    headers: { 'x-tramontane-request': '1' },
   });
 
 export function useDuplicateScenario(projectId: number) {

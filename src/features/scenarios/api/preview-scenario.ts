@@ -12,7 +12,6 @@ export interface ScenarioPreview {
 export const previewScenario = (projectId: number, climateFileId: number, scenario: Scenario, signal?: AbortSignal) =>
   apiFetch<ScenarioPreview>(`/projects/${projectId}/scenarios/preview`, {
     method: 'POST',
-    headers: { 'x-tramontane-request': '1' },
     body: JSON.stringify({ scenario, climateFileId }),
     signal,
   });

@@ -7,7 +7,6 @@ import type { StoredScenario } from './get-scenario';
 export const saveScenario = (projectId: number, scenarioId: number | null, scenario: Scenario) =>
   apiFetch<{ scenario: StoredScenario }>(`/projects/${projectId}/scenarios${scenarioId === null ? '' : `/${scenarioId}`}`, {
     method: scenarioId === null ? 'POST' : 'PUT',
-    headers: { 'x-tramontane-request': '1' },
     body: JSON.stringify({ scenario }),
   });
 
