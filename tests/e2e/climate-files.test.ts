@@ -58,7 +58,15 @@ describe('an engineer adding hourly weather to a project', () => {
 
     await page.getByLabel('File', { exact: true }).setInputFiles(sampleFile);
     expect(await page.getByLabel('Name in the project').inputValue()).toBe('zimna-dolina');
+    // Slow the upload to about 300 kB/s so the progress bar can be seen moving through the 870 kB file.
+    const cdp = await h.context.newCDPSession(page);
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: 300 * 1024 });
     await page.getByRole('button', { name: 'Read the file' }).click();
+    const bar = page.getByRole('progressbar', { name: 'Reading the file' });
+    await expect.poll(async () => Number((await bar.getAttribute('aria-valuenow')) ?? 0), { timeout: 10_000, interval: 50 }).toBeGreaterThan(0);
+    expect(Number(await bar.getAttribute('aria-valuenow'))).toBeLessThan(100);
+    await h.screenshot('climate-upload-progress');
+    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
 
     // The mapping step: the detected layout of this semicolon file with decimal commas and hPa.
     await page.getByTestId('mapping-editor').waitFor();
