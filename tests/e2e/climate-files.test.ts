@@ -1,6 +1,8 @@
 import { readFileSync } from 'node:fs';
+import { eq } from 'drizzle-orm';
 import { fileURLToPath } from 'node:url';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { sites } from '../../server/db/schema';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
@@ -143,6 +145,20 @@ describe('an engineer adding hourly weather to a project', () => {
     // Years on the site's clock: the file starts 1 January 2021 local time (31 December 2020 23:00 UTC).
     await expect.poll(() => page.getByRole('row', { name: /zimna-dolina/ }).innerText()).toContain('2021–2023');
     await h.screenshot('project-overview-ip');
+
+    // A site entered in feet is stored in metres: 1000 ft × 0.3048 m/ft = 304.8 m (exact, NIST SP 811 App. B).
+    await page.getByRole('button', { name: 'Add site' }).click();
+    await page.getByLabel('Site name').fill('Ridge annex');
+    await page.getByLabel('Elevation (ft)').fill('1000');
+    await page.getByLabel('Latitude (°, optional)').fill('95');
+    await page.getByRole('button', { name: 'Save site' }).click();
+    expect(await page.getByText('Latitude must be between −90 and 90').isVisible()).toBe(true);
+    await page.getByLabel('Latitude (°, optional)').fill('49.8');
+    await page.getByRole('button', { name: 'Save site' }).click();
+    await expect.poll(() => page.getByRole('row', { name: /Ridge annex/ }).innerText()).toMatch(/1,000 ft/);
+    const stored = h.testApp.db.select().from(sites).where(eq(sites.name, 'Ridge annex')).get()!;
+    expect(stored.elevationM).toBeCloseTo(304.8, 9);
+    expect(stored.latitude).toBe(49.8);
   });
 
   it('reports a damaged file by line, column and value, and refuses one without humidity before anything is stored', async () => {
@@ -154,7 +170,8 @@ describe('an engineer adding hourly weather to a project', () => {
     });
     const damaged = Buffer.from(`timestamp,dry_bulb_c,relative_humidity_pct\n${rows.join('\n')}\n`);
     await page.goto(`${h.baseUrl}/projects/${projectId}/climate-files/new`);
-    await page.getByRole('button', { name: /Continue with/ }).click();
+    await page.getByRole('radio', { name: /Zimna Dolina/ }).check();
+    await page.getByRole('button', { name: 'Continue with Zimna Dolina' }).click();
     await page.getByLabel('File', { exact: true }).setInputFiles({ name: 'damaged.csv', mimeType: 'text/csv', buffer: damaged });
     await page.getByRole('button', { name: 'Read the file' }).click();
     await page.getByTestId('mapping-editor').waitFor();
