@@ -1,7 +1,7 @@
 import type { ClimateSeries } from '../climate';
 import { bulkStates, humidityRatioFromDewPoint, standardPressurePa } from '../psychrometrics';
 import { designConditions, type DesignConditions } from './design-conditions';
-import { civilFromDays, MS_PER_DAY } from '../scenario/calendar';
+import { civilFromDays, MS_PER_DAY } from '../calendar';
 import { monthlyStats, type MonthlyStat } from './monthly';
 
 export type { DesignConditions, MonthlyStat };

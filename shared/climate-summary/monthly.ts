@@ -1,4 +1,4 @@
-import { civilFromDays, MS_PER_DAY } from '../scenario/calendar';
+import { civilFromDays, MS_PER_DAY } from '../calendar';
 
 export interface MonthlyStat {
   /** 1..12 */

@@ -3,19 +3,14 @@
  * (each month picked as the most typical of a long record). Read at their real dates they
  * scatter over decades; re-dated into one year they are the continuous year they stand for.
  */
+import { civilFromDays as civilInto } from '../calendar';
 import { daysFromCivil, MS_PER_DAY } from './time-cells';
 
-/** Calendar parts of a local-ms day number (H. Hinnant, civil_from_days). */
+/** Calendar parts of a day number (one object per call: this runs once per row of a one-year file). */
 function civilFromDays(days: number): { year: number; month: number; day: number } {
-  const z = days + 719468;
-  const era = Math.floor(z / 146097);
-  const doe = z - era * 146097;
-  const yoe = Math.floor((doe - Math.floor(doe / 1460) + Math.floor(doe / 36524) - Math.floor(doe / 146096)) / 365);
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
-  const month = mp < 10 ? mp + 3 : mp - 9;
-  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+  const civil = { year: 0, month: 0, day: 0 };
+  civilInto(days, civil);
+  return civil;
 }
 
 function isLeap(year: number): boolean {

@@ -5,7 +5,7 @@
  * Cells are numbers, fixed mode words and ISO timestamps only, so nothing can be read as a
  * spreadsheet formula.
  */
-import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from './calendar';
+import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from '../calendar';
 import { MODE, MODE_NAMES } from './classify';
 import type { ScenarioRun, ScenarioSeries } from './run';
 

@@ -3,7 +3,7 @@
  * (total, per month, per hour of day, per calendar year), excursions, runs, peaks, energy,
  * partial PUE and WUE. One pass over the hours; calendar fields recomputed only when the day changes.
  */
-import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from './calendar';
+import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from '../calendar';
 import { EXCURSION, MODE, type HourClassification } from './classify';
 import type { HourlyEnergy } from './energy';
 

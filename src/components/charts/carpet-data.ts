@@ -3,7 +3,7 @@
  * calendar (so 1 March is always day 61 and dates line up across years), averaged over the years
  * for temperatures or reduced to the most frequent mode for mode codes.
  */
-import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from '../../../shared/scenario/calendar';
+import { civilFromDays, MS_PER_DAY, MS_PER_HOUR } from '../../../shared/calendar';
 
 export const CARPET_DAYS = 366;
 export const HOURS_PER_DAY = 24;

@@ -2,7 +2,7 @@
  * Aggregation on a constructed series whose counts, runs and totals are known by construction.
  */
 import { describe, expect, it } from 'vitest';
-import { civilFromDays } from '../../../shared/scenario/calendar';
+import { civilFromDays } from '../../../shared/calendar';
 import { EXCURSION, MODE } from '../../../shared/scenario/classify';
 import { aggregateResults } from '../../../shared/scenario/results';
 

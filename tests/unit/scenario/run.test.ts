@@ -2,10 +2,10 @@
  * runScenario end to end on small series: pressure from the weather or the elevation, altitude
  * derating, warnings, and the worker task wrapping it (called directly and on a real thread).
  */
-import { Piscina } from 'piscina';
 import { describe, expect, it } from 'vitest';
 import { ENGINE_VERSION, runScenario, type ScenarioSeries } from '../../../shared/scenario';
-import runScenarioTask from '../../../workers/run-scenario';
+import { executeRun } from '../../../workers/execute-run';
+import { createWorkerPool } from '../../../workers/pool';
 import { makeScenario, psy } from './fixtures';
 
 const HOUR = 3_600_000;
@@ -61,22 +61,25 @@ describe('runScenario', () => {
   });
 });
 
-describe('worker task run-scenario', () => {
+describe('worker task executeRun', () => {
   const scenario = makeScenario('indirect-air');
   const weather = series([5, 15, 25, 35], [0, 8, 12, 18]);
 
   it('returns the same results as runScenario when called directly', () => {
-    expect(runScenarioTask({ scenario, series: weather })).toEqual(runScenario(scenario, weather).results);
+    const direct = runScenario(scenario, weather);
+    const task = executeRun({ scenario, series: weather });
+    expect(task.results).toEqual(direct.results);
+    expect(Array.from(task.modes)).toEqual(Array.from(direct.classification.modes));
   });
 
   it('rejects an invalid scenario, naming the field', () => {
-    expect(() => runScenarioTask({ scenario: { ...scenario, elevationM: 'high' }, series: weather })).toThrow(/elevationM: must be a number/);
+    expect(() => executeRun({ scenario: { ...scenario, elevationM: 'high' }, series: weather })).toThrow(/elevationM: must be a number/);
   });
 
   it('runs on a piscina thread with the hourly columns as typed arrays', { timeout: 30_000 }, async () => {
-    const pool = new Piscina({ filename: new URL('../../../workers/run-scenario.ts', import.meta.url).href, execArgv: ['--import', 'tsx'], maxThreads: 1 });
+    const pool = createWorkerPool({ threads: 1 });
     try {
-      const results = await pool.run({ scenario, series: weather });
+      const { results } = await pool.run('executeRun', { scenario, series: weather });
       expect(results.hours).toEqual(runScenario(scenario, weather).results.hours);
     } finally {
       await pool.destroy();
