@@ -1,7 +1,7 @@
 /**
  * Energy and water per hour from the hour classification: fans, compressors, pumps, and the water
  * evaporated (evaporative stages, cooling towers). Power in kW averaged over the hour, so each value
- * is also the kWh of that hour. Equations and their sources: FORMULAS.md.
+ * is also the kWh of that hour. Equations and their sources: README.md, "How it works".
  */
 import { MODE, type HourClassification } from './classify';
 import type { ScenarioEnergy, ScenarioSystem } from './schema';

@@ -1,6 +1,6 @@
 /**
  * The scenario engine: schema, envelope presets, hour classifier, energy and water model, results.
- * Formulas and their sources: FORMULAS.md in this folder.
+ * Formulas and their sources: README.md, "How it works".
  */
 export * from './schema';
 export * from './envelopes';
