@@ -11,12 +11,13 @@ const sampleFile = fileURLToPath(new URL('../../sample-weather/zimna-dolina.csv'
 let h: BrowserHarness;
 let projectId: number;
 let viewer: TestPerson;
+let engineer: TestPerson;
 /** Errors the page logs (React warnings, uncaught exceptions); a refused request's own log line is expected. */
 const pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
-  const engineer = personWithSession(h.testApp.db, 'marta.oyelaran@example.test');
+  engineer = personWithSession(h.testApp.db, 'marta.oyelaran@example.test');
   viewer = personWithSession(h.testApp.db, 'kofi.lindqvist@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Valley campus study', [
     [engineer, 'engineer'],
@@ -237,5 +238,20 @@ describe('an engineer adding hourly weather to a project', () => {
     expect(csv[1]).toBe('2020-12-31T23:00:00Z,-9.6,82.1,98.32,measured');
     const [original] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: /Original file/ }).click()]);
     expect(readFileSync((await original.path())!).equals(readFileSync(sampleFile))).toBe(true);
+    expect(await page.getByRole('button', { name: 'Delete…' }).count()).toBe(0);
+  });
+
+  it('lets an engineer delete a climate file after confirming', async () => {
+    const page = h.page;
+    const [name, value] = engineer.cookie.split('=');
+    await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+    await page.goto(`${h.baseUrl}/projects/${projectId}`);
+    await page.getByRole('link', { name: 'zimna-dolina' }).click();
+    await page.getByRole('button', { name: 'Delete…' }).click();
+    await page.getByRole('button', { name: 'Keep it' }).click();
+    await page.getByRole('button', { name: 'Delete…' }).click();
+    await page.getByRole('alertdialog', { name: 'Delete climate file' }).getByRole('button', { name: 'Delete', exact: true }).click();
+    await page.waitForURL(`**/projects/${projectId}`);
+    await expect.poll(() => page.getByText('No climate files yet.').isVisible()).toBe(true);
   });
 });

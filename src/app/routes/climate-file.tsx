@@ -1,5 +1,6 @@
-import { useParams } from 'react-router-dom';
+import { useNavigate, useParams } from 'react-router-dom';
 import { ClimateFileView } from '@/features/climate-files/components/climate-file-view';
+import { useProjects } from '@/features/projects/api/get-projects';
 import { ProjectCrumb } from '@/features/projects/components/project-crumb';
 import { NotFoundRoute } from './not-found';
 
@@ -8,11 +9,18 @@ export function ClimateFileRoute() {
   const params = useParams();
   const projectId = Number(params.projectId);
   const fileId = Number(params.fileId);
+  const navigate = useNavigate();
+  const role = useProjects().data?.projects.find((p) => p.id === projectId)?.role;
   if (!(Number.isInteger(projectId) && projectId > 0 && Number.isInteger(fileId) && fileId > 0)) return <NotFoundRoute />;
   return (
     <div className="space-y-3">
       <ProjectCrumb projectId={projectId} />
-      <ClimateFileView projectId={projectId} fileId={fileId} />
+      <ClimateFileView
+        projectId={projectId}
+        fileId={fileId}
+        canEdit={role === 'owner' || role === 'engineer'}
+        onDeleted={() => navigate(`/projects/${projectId}`)}
+      />
     </div>
   );
 }

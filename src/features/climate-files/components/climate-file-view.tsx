@@ -11,12 +11,24 @@ import { useClimateFile, type ClimateFileDetail } from '../api/get-climate-file'
 import { useClimateFileHours } from '../api/get-climate-file-hours';
 import { chartSeries } from '../lib/hours-series';
 import { formatBytes } from './progress-bar';
+import { DeleteClimateFile } from './delete-climate-file';
 import { ValidationReport } from './validation-report';
 
 const months = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /** What a stored climate file holds: coverage, monthly statistics, design values, carpet, chart and downloads. */
-export function ClimateFileView({ projectId, fileId }: { projectId: number; fileId: number }) {
+export function ClimateFileView({
+  projectId,
+  fileId,
+  canEdit = false,
+  onDeleted = () => undefined,
+}: {
+  projectId: number;
+  fileId: number;
+  /** Engineers and owners may delete the file. */
+  canEdit?: boolean;
+  onDeleted?: () => void;
+}) {
   const detail = useClimateFile(projectId, fileId);
   if (detail.isPending) return <div className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />;
   if (detail.isError) {
@@ -27,10 +39,22 @@ export function ClimateFileView({ projectId, fileId }: { projectId: number; file
       </Notice>
     );
   }
-  return <Loaded projectId={projectId} fileId={fileId} detail={detail.data} />;
+  return <Loaded projectId={projectId} fileId={fileId} detail={detail.data} canEdit={canEdit} onDeleted={onDeleted} />;
 }
 
-function Loaded({ projectId, fileId, detail }: { projectId: number; fileId: number; detail: ClimateFileDetail }) {
+function Loaded({
+  projectId,
+  fileId,
+  detail,
+  canEdit,
+  onDeleted,
+}: {
+  projectId: number;
+  fileId: number;
+  detail: ClimateFileDetail;
+  canEdit: boolean;
+  onDeleted: () => void;
+}) {
   const { unitSystem } = useUnitSystem();
   const { climateFile: file, site, summary, report } = detail;
   const hours = useClimateFileHours(projectId, fileId);
@@ -60,6 +84,7 @@ function Loaded({ projectId, fileId, detail }: { projectId: number; fileId: numb
           <a className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist" href={`${base}/hourly.csv`} download>
             Cleaned hourly CSV
           </a>
+          {canEdit && <DeleteClimateFile projectId={projectId} fileId={fileId} name={file.name} onDeleted={onDeleted} />}
         </div>
       </div>
 

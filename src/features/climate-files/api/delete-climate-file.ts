@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiFetch } from '@/lib/api-client';
+import { climateFilesQueryKey } from './get-climate-files';
+
+export const deleteClimateFile = (projectId: number, fileId: number) =>
+  apiFetch<void>(`/projects/${projectId}/climate-files/${fileId}`, { method: 'DELETE', headers: { 'x-tramontane-request': '1' } });
+
+export function useDeleteClimateFile(projectId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (fileId: number) => deleteClimateFile(projectId, fileId),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: climateFilesQueryKey(projectId), exact: true }),
+  });
+}
