@@ -12,16 +12,22 @@ export function ClimateFilesPanel({
   projectId,
   canEdit,
   siteTimeZone = () => undefined,
+  siteId,
+  title = 'Climate files',
 }: {
   projectId: number;
   canEdit: boolean;
   /** The IANA zone of a site, when known, so years are counted on the site's clock. */
   siteTimeZone?: (siteId: number) => string | undefined;
+  /** Only this site's files. */
+  siteId?: number;
+  title?: string;
 }) {
   const files = useClimateFiles(projectId);
+  const listed = files.data?.climateFiles.filter((f) => siteId === undefined || f.siteId === siteId) ?? [];
   return (
     <Panel
-      title="Climate files"
+      title={title}
       actions={
         canEdit ? (
           <Link to={`/projects/${projectId}/climate-files/new`} className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft">
@@ -32,13 +38,13 @@ export function ClimateFilesPanel({
     >
       {files.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
       {files.isError && <Notice tone="bad" title="Climate files could not be loaded">{files.error.message}</Notice>}
-      {files.data && files.data.climateFiles.length === 0 && (
+      {files.data && listed.length === 0 && (
         <p className="text-sm text-ink-soft">
-          No climate files yet.{' '}
+          No climate files {siteId === undefined ? 'yet' : 'for this site yet'}.{' '}
           {canEdit ? 'Upload hourly weather for a site (CSV or other delimited text) to start.' : 'An engineer of the project uploads them.'}
         </p>
       )}
-      {files.data && files.data.climateFiles.length > 0 && (
+      {listed.length > 0 && (
         <table className="w-full text-left text-sm">
           <thead>
             <tr className="border-b border-rule text-xs text-ink-soft">
@@ -50,7 +56,7 @@ export function ClimateFilesPanel({
             </tr>
           </thead>
           <tbody>
-            {files.data.climateFiles.map((f) => {
+            {listed.map((f) => {
               const zone = siteTimeZone(f.siteId);
               const offset = zone ? standardOffsetMinutes(zone) : 0;
               const [a, b] = [yearOf(f.firstHourMs, offset), yearOf(f.lastHourMs, offset)];

@@ -7,6 +7,7 @@ import { ApiError } from '@/lib/api-client';
 import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { useCreateSite } from '../api/create-site';
+import { useUpdateSite } from '../api/update-site';
 import type { Site } from '../api/get-sites';
 
 /** Blank for "not given"; otherwise a number within the range, named in the message. */
@@ -35,24 +36,45 @@ function siteFormSchema(system: UnitSystem) {
 
 const inputClass = 'w-full rounded border border-rule bg-panel px-2 py-1.5 text-sm aria-[invalid=true]:border-signal-bad';
 
-export function SiteForm({ projectId, onCreated, onCancel }: { projectId: number; onCreated?: (site: Site) => void; onCancel?: () => void }) {
+/** Creates a site, or edits `site` when given; values are typed in the person's units. */
+export function SiteForm({
+  projectId,
+  site,
+  onCreated,
+  onCancel,
+}: {
+  projectId: number;
+  site?: Site;
+  /** Called with the saved site, new or edited. */
+  onCreated?: (site: Site) => void;
+  onCancel?: () => void;
+}) {
   const { unitSystem } = useUnitSystem();
   const schema = useMemo(() => siteFormSchema(unitSystem), [unitSystem]);
   const zones = useMemo(() => (typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : []), []);
   const ids = useId();
   const create = useCreateSite(projectId);
+  const update = useUpdateSite(projectId, site?.id ?? 0);
   const form = useForm<z.input<typeof schema>, unknown, z.output<typeof schema>>({
     resolver: zodResolver(schema),
-    defaultValues: { name: '', latitude: '', longitude: '', elevation: 0, timeZone: 'UTC' },
+    defaultValues: site
+      ? {
+          name: site.name,
+          latitude: site.latitude === null ? '' : String(site.latitude),
+          longitude: site.longitude === null ? '' : String(site.longitude),
+          elevation: Math.round(toDisplay('elevation', unitSystem, site.elevationM) * 10) / 10,
+          timeZone: site.timeZone,
+        }
+      : { name: '', latitude: '', longitude: '', elevation: 0, timeZone: 'UTC' },
   });
   const errors = form.formState.errors;
 
   const submit = form.handleSubmit(async (values) => {
     const input = siteInputSchema.parse({ ...values, elevationM: fromDisplay('elevation', unitSystem, values.elevation), elevation: undefined });
     try {
-      const { site } = await create.mutateAsync(input);
-      form.reset();
-      onCreated?.(site);
+      const saved = site ? (await update.mutateAsync(input)).site : (await create.mutateAsync(input)).site;
+      if (!site) form.reset();
+      onCreated?.(saved);
     } catch (e) {
       form.setError('root', { message: e instanceof ApiError ? e.message : 'The site could not be saved. Try again.' });
     }
@@ -74,7 +96,7 @@ export function SiteForm({ projectId, onCreated, onCancel }: { projectId: number
   });
 
   return (
-    <form onSubmit={submit} className="space-y-3" noValidate aria-label="New site">
+    <form onSubmit={submit} className="space-y-3" noValidate aria-label={site ? `Edit ${site.name}` : 'New site'}>
       <div className="grid gap-3 sm:grid-cols-2">
         {field('name', 'Site name', 'As the project calls it.', <input {...aria('name')} className={inputClass} {...form.register('name')} />)}
         {field(
@@ -102,7 +124,7 @@ export function SiteForm({ projectId, onCreated, onCancel }: { projectId: number
       {errors.root && <p role="alert" className="text-sm text-signal-bad">{errors.root.message}</p>}
       <div className="flex gap-2">
         <button type="submit" disabled={form.formState.isSubmitting} className="rounded bg-harbour px-4 py-2 text-sm text-paper hover:bg-harbour-soft disabled:opacity-50">
-          Save site
+          {site ? 'Save changes' : 'Save site'}
         </button>
         {onCancel && (
           <button type="button" onClick={onCancel} className="rounded border border-rule bg-panel px-4 py-2 text-sm hover:bg-mist">

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
@@ -42,7 +43,11 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
           <tbody>
             {sites.data.sites.map((s) => (
               <tr key={s.id} className="border-b border-rule/60">
-                <td className="py-1 font-medium">{s.name}</td>
+                <td className="py-1">
+                  <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                    {s.name}
+                  </Link>
+                </td>
                 <td className="num px-2 text-right">{formatQuantity('elevation', unitSystem, s.elevationM)}</td>
                 <td className="num px-2 text-right text-ink-soft">
                   {s.latitude !== null && s.longitude !== null ? `${s.latitude.toFixed(2)}, ${s.longitude.toFixed(2)}` : '–'}

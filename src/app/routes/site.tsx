@@ -1,0 +1,34 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { ClimateFilesPanel } from '@/features/climate-files/components/climate-files-panel';
+import { useProjects } from '@/features/projects/api/get-projects';
+import { ProjectCrumb } from '@/features/projects/components/project-crumb';
+import { useSites } from '@/features/sites/api/get-sites';
+import { SiteView } from '@/features/sites/components/site-view';
+import { NotFoundRoute } from './not-found';
+
+/** /projects/:projectId/sites/:siteId — the site, with its climate files from the climate-files feature. */
+export function SiteRoute() {
+  const params = useParams();
+  const projectId = Number(params.projectId);
+  const siteId = Number(params.siteId);
+  const navigate = useNavigate();
+  const role = useProjects().data?.projects.find((p) => p.id === projectId)?.role;
+  const sites = useSites(projectId);
+  const canEdit = role === 'owner' || role === 'engineer';
+  if (!(Number.isInteger(projectId) && projectId > 0 && Number.isInteger(siteId) && siteId > 0)) return <NotFoundRoute />;
+  const timeZone = sites.data?.sites.find((s) => s.id === siteId)?.timeZone;
+  return (
+    <div className="space-y-3">
+      <ProjectCrumb projectId={projectId} />
+      <SiteView
+        projectId={projectId}
+        siteId={siteId}
+        canEdit={canEdit}
+        onDeleted={() => navigate(`/projects/${projectId}`)}
+        climateFiles={
+          <ClimateFilesPanel projectId={projectId} canEdit={canEdit} siteId={siteId} title="Climate files of this site" siteTimeZone={() => timeZone} />
+        }
+      />
+    </div>
+  );
+}

@@ -1,0 +1,14 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiFetch } from '@/lib/api-client';
+
+export const deleteSite = (projectId: number, siteId: number) =>
+  apiFetch<void>(`/projects/${projectId}/sites/${siteId}`, { method: 'DELETE', headers: { 'x-tramontane-request': '1' } });
+
+export function useDeleteSite(projectId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (siteId: number) => deleteSite(projectId, siteId),
+    // Its climate files go with it.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['projects', projectId] }),
+  });
+}
