@@ -29,6 +29,7 @@ const router = createBrowserRouter([
       { path: 'projects/:projectId', lazy: () => import('./routes/project-overview').then((m) => ({ Component: m.ProjectOverviewRoute })) },
       { path: 'projects/:projectId/climate-files/new', lazy: () => import('./routes/climate-file-upload').then((m) => ({ Component: m.ClimateFileUploadRoute })) },
       { path: 'projects/:projectId/climate-files/:fileId', lazy: () => import('./routes/climate-file').then((m) => ({ Component: m.ClimateFileRoute })) },
+      { path: 'projects/:projectId/sites/:siteId', lazy: () => import('./routes/site').then((m) => ({ Component: m.SiteRoute })) },
       // Sign-in, settings, members, invitations, audit trail and the local mailbox.
       { path: 'sign-in', element: <SignInPage /> },
       {
