@@ -5,6 +5,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { sites } from '../../server/db/schema';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { psychrolib } from '../unit/psychrometrics/reference-psychrolib';
 
 const sampleFile = fileURLToPath(new URL('../../sample-weather/zimna-dolina.csv', import.meta.url));
 
@@ -160,6 +161,23 @@ describe('an engineer adding hourly weather to a project', () => {
     const stored = h.testApp.db.select().from(sites).where(eq(sites.name, 'Ridge annex')).get()!;
     expect(stored.elevationM).toBeCloseTo(304.8, 9);
     expect(stored.latitude).toBe(49.8);
+
+    // The site page: the standard-atmosphere pressure at 304.8 m is 97 717 Pa = 28.86 inHg
+    // (ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 3; cross-checked with psychrolib GetStandardAtmPressure).
+    await page.getByRole('link', { name: 'Ridge annex' }).click();
+    await page.getByTestId('site-facts').waitFor();
+    expect(psychrolib.GetStandardAtmPressure(304.8) / 3386.389).toBeCloseTo(28.856, 3);
+    expect(await page.getByTestId('site-facts').innerText()).toMatch(/1,000 ft[\s\S]*28\.86 inHg/);
+    expect(await page.getByText('No climate files for this site yet.').isVisible()).toBe(true);
+    await h.screenshot('site-page-ip');
+    await page.getByRole('button', { name: 'Edit site' }).click();
+    await page.getByLabel('Elevation (ft)').fill('1100');
+    await page.getByRole('button', { name: 'Save changes' }).click();
+    await expect.poll(() => page.getByTestId('site-facts').innerText()).toMatch(/1,100 ft[\s\S]*28\.75 inHg/);
+    await page.getByRole('button', { name: 'Delete…' }).click();
+    await page.getByRole('button', { name: 'Delete site and files' }).click();
+    await page.waitForURL(`**/projects/${projectId}`);
+    await expect.poll(() => page.getByRole('row', { name: /Ridge annex/ }).count()).toBe(0);
   });
 
   it('reports a damaged file by line, column and value, and refuses one without humidity before anything is stored', async () => {

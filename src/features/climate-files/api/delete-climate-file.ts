@@ -9,6 +9,9 @@ export function useDeleteClimateFile(projectId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (fileId: number) => deleteClimateFile(projectId, fileId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: climateFilesQueryKey(projectId), exact: true }),
+    // Not awaited: the caller leaves the file's page first.
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ queryKey: climateFilesQueryKey(projectId), exact: true });
+    },
   });
 }

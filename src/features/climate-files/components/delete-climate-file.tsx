@@ -21,7 +21,7 @@ export function DeleteClimateFile({ projectId, fileId, name, onDeleted }: { proj
       <button
         type="button"
         disabled={remove.isPending}
-        onClick={() => remove.mutate(fileId, { onSuccess: onDeleted })}
+        onClick={() => remove.mutateAsync(fileId).then(onDeleted, () => undefined)}
         className="rounded bg-signal-bad px-3 py-1 text-paper disabled:opacity-50"
       >
         Delete

@@ -8,7 +8,9 @@ export function useDeleteSite(projectId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (siteId: number) => deleteSite(projectId, siteId),
-    // Its climate files go with it.
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['projects', projectId] }),
+    // Its climate files go with it. Not awaited: the caller leaves the site's page first.
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ queryKey: ['projects', projectId] });
+    },
   });
 }

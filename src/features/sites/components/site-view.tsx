@@ -81,7 +81,7 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
           <span>
             Delete <strong>{site.name}</strong> with all its climate files? Runs already made keep their results.
           </span>
-          <button type="button" disabled={remove.isPending} onClick={() => remove.mutate(site.id, { onSuccess: onDeleted })} className="rounded bg-signal-bad px-3 py-1 text-paper disabled:opacity-50">
+          <button type="button" disabled={remove.isPending} onClick={() => remove.mutateAsync(site.id).then(onDeleted, () => undefined)} className="rounded bg-signal-bad px-3 py-1 text-paper disabled:opacity-50">
             Delete site and files
           </button>
           <button type="button" onClick={() => setConfirming(false)} className="rounded border border-rule bg-panel px-3 py-1">
