@@ -169,7 +169,12 @@ describe('an engineer adding hourly weather to a project', () => {
     expect(psychrolib.GetStandardAtmPressure(304.8) / 3386.389).toBeCloseTo(28.856, 3);
     expect(await page.getByTestId('site-facts').innerText()).toMatch(/1,000 ft[\s\S]*28\.86 inHg/);
     expect(await page.getByText('No climate files for this site yet.').isVisible()).toBe(true);
+    expect(await page.getByTestId('site-facts').innerText()).toContain('49.800°, –');
     await h.screenshot('site-page-ip');
+    // Uploading from the site's page starts with that site chosen.
+    await page.getByRole('link', { name: 'Upload climate file' }).click();
+    expect(await page.getByRole('button', { name: 'Continue with Ridge annex' }).isEnabled()).toBe(true);
+    await page.goBack();
     await page.getByRole('button', { name: 'Edit site' }).click();
     await page.getByLabel('Elevation (ft)').fill('1100');
     await page.getByRole('button', { name: 'Save changes' }).click();

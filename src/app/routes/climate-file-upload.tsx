@@ -1,4 +1,4 @@
-import { useNavigate, useParams } from 'react-router-dom';
+import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { UploadWizard } from '@/features/climate-files/components/upload-wizard';
 import { useSites } from '@/features/sites/api/get-sites';
@@ -10,6 +10,7 @@ import { NotFoundRoute } from './not-found';
 export function ClimateFileUploadRoute() {
   const projectId = Number(useParams().projectId);
   const navigate = useNavigate();
+  const [search] = useSearchParams();
   const sites = useSites(projectId);
   if (!Number.isInteger(projectId) || projectId <= 0) return <NotFoundRoute />;
   return (
@@ -24,6 +25,7 @@ export function ClimateFileUploadRoute() {
         <UploadWizard
           projectId={projectId}
           sites={sites.data.sites}
+          initialSiteId={Number(search.get('siteId')) || undefined}
           renderNewSite={(onCreated) => <SiteForm projectId={projectId} onCreated={(site) => onCreated(site.id)} />}
           onStored={(fileId) => navigate(`/projects/${projectId}/climate-files/${fileId}`)}
         />

@@ -30,7 +30,7 @@ export function ClimateFilesPanel({
       title={title}
       actions={
         canEdit ? (
-          <Link to={`/projects/${projectId}/climate-files/new`} className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft">
+          <Link to={`/projects/${projectId}/climate-files/new${siteId === undefined ? '' : `?siteId=${siteId}`}`} className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft">
             Upload climate file
           </Link>
         ) : undefined

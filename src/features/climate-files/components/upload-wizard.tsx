@@ -44,9 +44,12 @@ export function UploadWizard({
   sites,
   renderNewSite,
   onStored,
+  initialSiteId,
 }: {
   projectId: number;
   sites: WizardSite[];
+  /** A site chosen before the wizard opened (from a site's page). */
+  initialSiteId?: number;
   /** The form that creates a site; it calls back with the new site's id. */
   renderNewSite: (onCreated: (siteId: number) => void) => ReactNode;
   onStored: (fileId: number) => void;
@@ -55,7 +58,9 @@ export function UploadWizard({
   const { unitSystem } = useUnitSystem();
   const ids = useId();
   const [step, setStep] = useState<Step>('site');
-  const [siteId, setSiteId] = useState<number | null>(sites.length === 1 ? sites[0].id : null);
+  const [siteId, setSiteId] = useState<number | null>(
+    sites.some((s) => s.id === initialSiteId) ? initialSiteId! : sites.length === 1 ? sites[0].id : null,
+  );
   const [creatingSite, setCreatingSite] = useState(sites.length === 0);
   const [file, setFile] = useState<File | null>(null);
   const [name, setName] = useState('');

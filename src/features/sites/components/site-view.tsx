@@ -16,6 +16,8 @@ function offsetWords(minutes: number): string {
   return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
 }
 
+const degrees = (v: number | null) => (v === null ? '–' : `${v.toFixed(3)}°`);
+
 /** One site: where it is, the pressure its elevation implies, its climate files; engineers can edit or delete it. */
 export function SiteView({
   projectId,
@@ -53,7 +55,7 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
   const facts: Array<[string, string, string?]> = [
     ['Elevation', formatQuantity('elevation', unitSystem, site.elevationM)],
     ['Standard pressure', formatQuantity('pressure', unitSystem, standardPressurePa(site.elevationM)), 'used when a file has no pressure (standard atmosphere)'],
-    ['Latitude, longitude', site.latitude !== null && site.longitude !== null ? `${site.latitude.toFixed(3)}°, ${site.longitude.toFixed(3)}°` : 'not given'],
+    ['Latitude, longitude', site.latitude === null && site.longitude === null ? 'not given' : `${degrees(site.latitude)}, ${degrees(site.longitude)}`],
     ['Time zone', site.timeZone, `standard time ${offsetWords(standardOffsetMinutes(site.timeZone))}; reads local timestamps in files`],
   ];
   return (

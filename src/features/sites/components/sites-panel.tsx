@@ -50,7 +50,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
                 </td>
                 <td className="num px-2 text-right">{formatQuantity('elevation', unitSystem, s.elevationM)}</td>
                 <td className="num px-2 text-right text-ink-soft">
-                  {s.latitude !== null && s.longitude !== null ? `${s.latitude.toFixed(2)}, ${s.longitude.toFixed(2)}` : '–'}
+                  {s.latitude === null && s.longitude === null ? '–' : `${s.latitude?.toFixed(2) ?? '–'}, ${s.longitude?.toFixed(2) ?? '–'}`}
                 </td>
                 <td className="px-2 text-ink-soft">{s.timeZone}</td>
               </tr>
