@@ -264,10 +264,36 @@ describe('an engineer adding hourly weather to a project', () => {
     expect(await page.getByRole('button', { name: 'Delete…' }).count()).toBe(0);
   });
 
-  it('lets an engineer delete a climate file after confirming', async () => {
+  it('lists scenarios and recent runs with their status and hours by mode on the overview', async () => {
     const page = h.page;
     const [name, value] = engineer.cookie.split('=');
     await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+    const headers = { 'x-tramontane-request': '1', 'content-type': 'application/json' };
+    const scenario = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+    const made = await page.request.post(`${h.baseUrl}/api/projects/${projectId}/scenarios`, { headers, data: { scenario } });
+    expect(made.status()).toBe(201);
+    const scenarioId = (await made.json()).scenario.id;
+    const files = await (await page.request.get(`${h.baseUrl}/api/projects/${projectId}/climate-files`)).json();
+    const run = await page.request.post(`${h.baseUrl}/api/projects/${projectId}/runs`, {
+      headers,
+      data: { scenarioIds: [scenarioId], climateFileIds: [files.climateFiles[0].id] },
+    });
+    expect(run.status()).toBe(202);
+    const runId = (await run.json()).runs[0].id;
+
+    await page.goto(`${h.baseUrl}/projects/${projectId}`);
+    await page.getByRole('link', { name: scenario.name }).waitFor();
+    const row = page.getByTestId('runs-table').getByRole('row', { name: new RegExp(`#${runId}`) });
+    // The overview follows the run until it is done, then shows its share of hours by mode.
+    await expect.poll(() => row.innerText(), { timeout: 30_000 }).toContain('done');
+    expect(await row.getByRole('img').getAttribute('aria-label')).toMatch(/^Free cooling \d+ %/);
+    await h.screenshot('project-overview-with-runs');
+    await row.getByRole('link', { name: `#${runId}` }).click();
+    await page.waitForURL(`**/projects/${projectId}/runs/${runId}`);
+  });
+
+  it('lets an engineer delete a climate file after confirming', async () => {
+    const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     await page.getByRole('link', { name: 'zimna-dolina' }).click();
     await page.getByRole('button', { name: 'Delete…' }).click();

@@ -23,8 +23,11 @@ function ModeShareBar({ hours }: { hours: NonNullable<RunListing['results']>['ho
   const total = hours.total || 1;
   const words = parts.filter(([, n]) => n > 0).map(([k, n]) => `${modeLabels[k]} ${((100 * n) / total).toFixed(0)} %`).join(', ');
   return (
-    <div className="flex h-2 w-32 overflow-hidden rounded-sm" role="img" aria-label={words} title={words}>
-      {parts.map(([k, n]) => (n > 0 ? <span key={k} style={{ width: `${(100 * n) / total}%`, background: modeColours[k] }} /> : null))}
+    <div className="flex items-center gap-2">
+      <div className="flex h-2 w-32 overflow-hidden rounded-sm" role="img" aria-label={words} title={words}>
+        {parts.map(([k, n]) => (n > 0 ? <span key={k} style={{ width: `${(100 * n) / total}%`, background: modeColours[k] }} /> : null))}
+      </div>
+      <span className="num text-xs text-ink-soft">{((100 * hours.free) / total).toFixed(1)} % free</span>
     </div>
   );
 }
