@@ -18,8 +18,8 @@ import {
 } from '../../../shared/psychrometrics';
 import { CP_DRY_AIR, CP_VAPOUR } from '../../../shared/psychrometrics/constants';
 import { enthalpyIpToSiKJPerKg, fahrenheitToCelsius } from '../../../shared/units';
-import { toDisplay } from '../../lib/quantity';
-import type { UnitSystem } from '../../lib/unit-system';
+import { toDisplay } from '@/lib/quantity';
+import type { UnitSystem } from '@/lib/unit-system';
 
 export interface EnvelopeLimitsInput {
   dryBulbMinC: number;

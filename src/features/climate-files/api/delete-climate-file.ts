@@ -3,7 +3,7 @@ import { apiFetch } from '@/lib/api-client';
 import { climateFilesQueryKey } from './get-climate-files';
 
 export const deleteClimateFile = (projectId: number, fileId: number) =>
-  apiFetch<void>(`/projects/${projectId}/climate-files/${fileId}`, { method: 'DELETE', headers: { 'x-tramontane-request': '1' } });
+  apiFetch<void>(`/projects/${projectId}/climate-files/${fileId}`, { method: 'DELETE' });
 
 export function useDeleteClimateFile(projectId: number) {
   const queryClient = useQueryClient();

@@ -3,8 +3,8 @@
  * mapping step. Pure: tested without a browser.
  */
 import type { HumidityKind } from '../../../../shared/climate/types';
-import { formatQuantity, unitOf, type QuantityKind } from '../../../lib/quantity';
-import type { UnitSystem } from '../../../lib/unit-system';
+import { formatQuantity, unitOf, type QuantityKind } from '@/lib/quantity';
+import type { UnitSystem } from '@/lib/unit-system';
 
 export interface PreviewHourInput {
   timestampMs: number;

@@ -7,7 +7,6 @@ export const createSite = (projectId: number, input: SiteInput) =>
   apiFetch<{ site: Site }>(`/projects/${projectId}/sites`, {
     method: 'POST',
     body: JSON.stringify(input),
-    headers: { 'x-tramontane-request': '1' },
   });
 
 export function useCreateSite(projectId: number) {

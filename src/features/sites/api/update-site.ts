@@ -7,7 +7,6 @@ export const updateSite = (projectId: number, siteId: number, input: SiteInput) 
   apiFetch<{ site: Site }>(`/projects/${projectId}/sites/${siteId}`, {
     method: 'PATCH',
     body: JSON.stringify(input),
-    headers: { 'x-tramontane-request': '1' },
   });
 
 export function useUpdateSite(projectId: number, siteId: number) {
