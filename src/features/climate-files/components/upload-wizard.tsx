@@ -1,11 +1,9 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useId, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import type { ImportReport } from '../../../../shared/climate/types';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
-import { formatQuantity } from '@/lib/quantity';
-import { useUnitSystem } from '@/lib/unit-system';
 import { climateFilesQueryKey } from '../api/get-climate-files';
 import { previewClimateFile, type ClimatePreview } from '../api/preview-climate-file';
 import type { UploadProgress } from '../api/send-file';
@@ -13,15 +11,13 @@ import { uploadClimateFile, type RejectedImportDetails } from '../api/upload-cli
 import { draftFromDetected, overrideFromDraft, type MappingDraft } from '../lib/mapping-draft';
 import { MappingEditor } from './mapping-editor';
 import { PreviewTable } from './preview-table';
-import { UploadProgressBar, formatBytes } from './progress-bar';
+import { FileStep } from './file-step';
+import { UploadProgressBar } from './progress-bar';
+import { SiteStep, type WizardSite } from './site-step';
 import { ValidationReport } from './validation-report';
+import { button, quietButton } from './wizard-buttons';
 
-export interface WizardSite {
-  id: number;
-  name: string;
-  elevationM: number;
-  timeZone: string;
-}
+export type { WizardSite };
 
 type Step = 'site' | 'file' | 'mapping' | 'report';
 const steps: Array<[Step, string]> = [
@@ -31,8 +27,6 @@ const steps: Array<[Step, string]> = [
   ['report', 'Report and confirm'],
 ];
 
-const button = 'rounded bg-harbour px-4 py-2 text-sm text-paper hover:bg-harbour-soft disabled:cursor-not-allowed disabled:opacity-50';
-const quietButton = 'rounded border border-rule bg-panel px-4 py-2 text-sm hover:bg-mist';
 
 /**
  * Upload of an hourly weather file in four steps: the site, the file (sent with a progress bar and
@@ -55,8 +49,6 @@ export function UploadWizard({
   onStored: (fileId: number) => void;
 }) {
   const queryClient = useQueryClient();
-  const { unitSystem } = useUnitSystem();
-  const ids = useId();
   const [step, setStep] = useState<Step>('site');
   const [siteId, setSiteId] = useState<number | null>(
     sites.some((s) => s.id === initialSiteId) ? initialSiteId! : sites.length === 1 ? sites[0].id : null,
@@ -74,7 +66,6 @@ export function UploadWizard({
   const [rejected, setRejected] = useState<ImportReport | null>(null);
   const site = sites.find((s) => s.id === siteId) ?? null;
   const busy = progress !== null;
-  const gapValid = Number.isInteger(maxGapHours) && maxGapHours >= 0 && maxGapHours <= 168;
 
   const params = (mappingDraft: MappingDraft | null) => ({
     fileName: file?.name ?? 'upload.csv',
@@ -154,105 +145,30 @@ export function UploadWizard({
       )}
 
       {step === 'site' && (
-        <Panel title="Which site is this weather for?">
-          <div className="space-y-4">
-            <p className="text-sm text-ink-soft">
-              The site's elevation sets the pressure when the file has none, and its time zone reads local timestamps.
-            </p>
-            {sites.length > 0 && (
-              <fieldset className="space-y-1">
-                <legend className="sr-only">Site</legend>
-                {sites.map((s) => (
-                  <label key={s.id} className="flex cursor-pointer items-center gap-3 rounded border border-rule px-3 py-2 hover:bg-mist has-[:checked]:border-harbour has-[:checked]:bg-mist">
-                    <input type="radio" name={`${ids}-site`} value={s.id} checked={siteId === s.id} onChange={() => setSiteId(s.id)} />
-                    <span className="font-medium">{s.name}</span>
-                    <span className="num text-xs text-ink-soft">
-                      {formatQuantity('elevation', unitSystem, s.elevationM)} · {s.timeZone}
-                    </span>
-                  </label>
-                ))}
-              </fieldset>
-            )}
-            {creatingSite ? (
-              <div className="rounded border border-rule p-3">
-                <h3 className="mb-2 text-sm font-semibold">New site</h3>
-                {renderNewSite((id) => {
-                  setSiteId(id);
-                  setCreatingSite(false);
-                })}
-              </div>
-            ) : (
-              <button type="button" className={quietButton} onClick={() => setCreatingSite(true)}>
-                Add a new site
-              </button>
-            )}
-            <div>
-              <button type="button" className={button} disabled={!siteId} onClick={() => setStep('file')}>
-                Continue with {site ? site.name : 'the chosen site'}
-              </button>
-            </div>
-          </div>
-        </Panel>
+        <SiteStep
+          sites={sites}
+          siteId={siteId}
+          setSiteId={setSiteId}
+          creatingSite={creatingSite}
+          setCreatingSite={setCreatingSite}
+          renderNewSite={renderNewSite}
+          onContinue={() => setStep('file')}
+        />
       )}
 
       {step === 'file' && (
-        <Panel title={`Hourly weather for ${site?.name ?? 'the site'}`}>
-          <form
-            className="space-y-4"
-            onSubmit={(e) => {
-              e.preventDefault();
-              void read(null);
-            }}
-          >
-            <div className="space-y-1">
-              <label htmlFor={`${ids}-file`} className="block text-sm font-medium">File</label>
-              <input
-                id={`${ids}-file`}
-                type="file"
-                accept=".csv,.tsv,.txt,text/csv,text/plain"
-                className="block text-sm file:mr-3 file:rounded file:border file:border-rule file:bg-panel file:px-3 file:py-1.5"
-                onChange={(e) => {
-                  const chosen = e.target.files?.[0] ?? null;
-                  setFile(chosen);
-                  if (chosen && !name) setName(chosen.name.replace(/\.[^.]+$/, ''));
-                }}
-              />
-              <p className="text-xs text-ink-soft">
-                Comma, semicolon or tab separated text; decimal point or comma; one time column, date and time columns, or year/month/day/hour columns. Up to 64 MB.
-              </p>
-            </div>
-            <div className="grid gap-4 sm:grid-cols-2">
-              <div className="space-y-1">
-                <label htmlFor={`${ids}-name`} className="block text-sm font-medium">Name in the project</label>
-                <input id={`${ids}-name`} className="w-full rounded border border-rule bg-panel px-2 py-1.5 text-sm" maxLength={120} value={name} onChange={(e) => setName(e.target.value)} />
-              </div>
-              <div className="space-y-1">
-                <label htmlFor={`${ids}-gap`} className="block text-sm font-medium">Fill gaps up to (hours)</label>
-                <input
-                  id={`${ids}-gap`}
-                  type="number"
-                  min={0}
-                  max={168}
-                  step={1}
-                  className="num w-32 rounded border border-rule bg-panel px-2 py-1.5 text-sm"
-                  value={Number.isNaN(maxGapHours) ? '' : maxGapHours}
-                  onChange={(e) => setMaxGapHours(e.target.valueAsNumber)}
-                  aria-describedby={`${ids}-gap-help`}
-                  aria-invalid={!gapValid}
-                />
-                <p id={`${ids}-gap-help`} className={`text-xs ${gapValid ? 'text-ink-soft' : 'text-signal-bad'}`}>
-                  {gapValid ? 'Shorter gaps are filled by linear interpolation and marked; longer ones stay missing.' : 'Enter a whole number of hours from 0 to 168.'}
-                </p>
-              </div>
-            </div>
-            {file && <p className="num text-xs text-ink-soft">{file.name} · {formatBytes(file.size)}</p>}
-            {progress && <UploadProgressBar progress={progress} label="Reading the file" />}
-            <div className="flex gap-2">
-              <button type="button" className={quietButton} onClick={() => setStep('site')} disabled={busy}>Back</button>
-              <button type="submit" className={button} disabled={!file || busy || !gapValid}>Read the file</button>
-            </div>
-          </form>
-        </Panel>
+        <FileStep
+          siteName={site?.name ?? 'the site'}
+          file={file}
+          setFile={setFile}
+          name={name}
+          setName={setName}
+          maxGapHours={maxGapHours}
+          setMaxGapHours={setMaxGapHours}
+          progress={progress}
+          onBack={() => setStep('site')}
+          onRead={() => void read(null)}
+        />
       )}
 
       {step === 'mapping' && preview && draft && (
