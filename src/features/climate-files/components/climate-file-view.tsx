@@ -1,20 +1,21 @@
 import { useMemo } from 'react';
 import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
 import { CarpetPlot } from '@/components/charts/carpet-plot';
+import { utcOffsetLabel } from '@/components/charts/chart-format';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
-import { formatQuantity, unitOf } from '@/lib/quantity';
+import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { useClimateFile, type ClimateFileDetail } from '../api/get-climate-file';
 import { useClimateFileHours } from '../api/get-climate-file-hours';
 import { chartSeries } from '../lib/hours-series';
 import { formatBytes } from './progress-bar';
 import { DeleteClimateFile } from './delete-climate-file';
+import { DesignValues } from './design-values';
+import { MonthlyTable } from './monthly-table';
 import { ValidationReport } from './validation-report';
-
-const months = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /** What a stored climate file holds: coverage, monthly statistics, design values, carpet, chart and downloads. */
 export function ClimateFileView({
@@ -68,7 +69,6 @@ function Loaded({
   const lastYear = localLast.getUTCFullYear();
   const day = (d: Date) => d.toISOString().slice(0, 10);
   const base = `/api/projects/${projectId}/climate-files/${fileId}`;
-  const t = (v: number) => formatQuantity('temperature', unitSystem, v, false);
 
   return (
     <div className="space-y-5">
@@ -93,48 +93,12 @@ function Loaded({
         <Fact label="Hours" value={file.hours.toLocaleString('en')} note={`${file.measuredHours.toLocaleString('en')} measured · ${file.filledHours.toLocaleString('en')} filled · ${file.missingHours.toLocaleString('en')} missing`} />
         <Fact label="Completeness" value={`${summary.completenessPct.toFixed(1)} %`} note="hours with a usable state" />
         <Fact label="Mean pressure" value={formatQuantity('pressure', unitSystem, summary.meanPressurePa)} note={file.hasPressure ? 'from the file' : `standard atmosphere at ${formatQuantity('elevation', unitSystem, site.elevationM)}`} />
-        <Fact label="Site time" value={site.timeZone} note={`charts in local standard time (UTC${offsetMinutes >= 0 ? '+' : '−'}${Math.abs(offsetMinutes / 60)})`} />
+        <Fact label="Site time" value={site.timeZone} note={`charts in the site's standard time (${utcOffsetLabel(offsetMinutes)})`} />
       </dl>
 
       <div className="grid gap-5 xl:grid-cols-2">
-        <Panel title={`Monthly dry-bulb and dew point (${unitOf('temperature', unitSystem)})`}>
-          <div className="overflow-x-auto">
-            <table className="num w-full text-right text-xs" data-testid="monthly-table">
-              <caption className="pb-1 text-left font-sans text-ink-soft">Minimum, mean and maximum over every year in the file</caption>
-              <thead>
-                <tr className="font-sans text-ink-soft">
-                  <th rowSpan={2} scope="col" className="text-left font-medium">Month</th>
-                  <th colSpan={3} scope="colgroup" className="border-b border-rule px-2 font-medium">Dry-bulb</th>
-                  <th colSpan={3} scope="colgroup" className="border-b border-rule px-2 font-medium">Dew point</th>
-                  <th rowSpan={2} scope="col" className="px-2 font-medium">Hours</th>
-                </tr>
-                <tr className="border-b border-rule font-sans text-ink-faint">
-                  {['min', 'mean', 'max', 'min', 'mean', 'max'].map((h, k) => (
-                    <th key={k} scope="col" className="px-2 font-normal">{h}</th>
-                  ))}
-                </tr>
-              </thead>
-              <tbody>
-                {summary.monthly.dryBulbC.map((db, k) => {
-                  const dp = summary.monthly.dewPointC[k];
-                  return (
-                    <tr key={db.month} className="border-b border-rule/60">
-                      <th scope="row" className="py-0.5 text-left font-sans font-normal">{months[db.month - 1]}</th>
-                      <td className="px-2">{t(db.min)}</td>
-                      <td className="px-2 font-semibold">{t(db.mean)}</td>
-                      <td className="px-2">{t(db.max)}</td>
-                      <td className="px-2">{t(dp.min)}</td>
-                      <td className="px-2 font-semibold">{t(dp.mean)}</td>
-                      <td className="px-2">{t(dp.max)}</td>
-                      <td className="px-2 text-ink-soft">{db.hours.toLocaleString('en')}</td>
-                    </tr>
-                  );
-                })}
-              </tbody>
-            </table>
-          </div>
-        </Panel>
-        <DesignValues detail={detail} />
+        <MonthlyTable summary={summary} />
+        <DesignValues design={summary.design} />
       </div>
 
       <Panel title="Dry-bulb through the year">
@@ -174,53 +138,5 @@ function Fact({ label, value, note }: { label: string; value: string; note?: str
       <dd className="num mt-0.5 text-lg font-semibold">{value}</dd>
       {note && <dd className="text-xs text-ink-soft">{note}</dd>}
     </div>
-  );
-}
-
-function DesignValues({ detail }: { detail: ClimateFileDetail }) {
-  const { unitSystem } = useUnitSystem();
-  const design = detail.summary.design;
-  const t = (v: number) => formatQuantity('temperature', unitSystem, v, false);
-  const cell = 'px-2 py-0.5';
-  return (
-    <Panel title={`Design values (${unitOf('temperature', unitSystem)})`}>
-      <p className="mb-2 rounded border border-signal-warn/40 bg-[#fbf3e4] px-3 py-1.5 text-xs" data-testid="design-label">
-        Computed from this file, not published station values. Cumulative-frequency method (ASHRAE Handbook—Fundamentals ch. 14) over the{' '}
-        <span className="num">{design.hoursUsed.toLocaleString('en')}</span> hours with data; coincident means over hours within ±{design.coincidenceBandK} K.
-      </p>
-      <table className="num w-full text-right text-xs">
-        <thead>
-          <tr className="border-b border-rule font-sans text-ink-soft">
-            <th scope="col" className="text-left font-medium">Exceeded</th>
-            <th scope="col" className={cell}>Dry-bulb</th>
-            <th scope="col" className={cell}>mean coinc. wet-bulb</th>
-            <th scope="col" className={cell}>Wet-bulb</th>
-            <th scope="col" className={cell}>mean coinc. dry-bulb</th>
-          </tr>
-        </thead>
-        <tbody>
-          {design.dryBulb.map((db, k) => {
-            const wb = design.wetBulb[k];
-            return (
-              <tr key={db.exceedPct} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 text-left font-sans font-normal">{db.exceedPct} % of hours</th>
-                <td className={`${cell} font-semibold`}>{t(db.valueC)}</td>
-                <td className={cell}>{t(db.meanCoincidentC)}</td>
-                <td className={`${cell} font-semibold`}>{wb ? t(wb.valueC) : '–'}</td>
-                <td className={cell}>{wb ? t(wb.meanCoincidentC) : '–'}</td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
-      {design.dewPoint && (
-        <p className="mt-3 text-sm">
-          Dew point exceeded {design.dewPoint.exceedPct} % of hours:{' '}
-          <span className="num font-semibold">{formatQuantity('temperature', unitSystem, design.dewPoint.valueC)}</span>, humidity ratio{' '}
-          <span className="num font-semibold">{formatQuantity('humidityRatio', unitSystem, design.dewPoint.humidityRatioKgPerKg)}</span>, mean coincident dry-bulb{' '}
-          <span className="num">{formatQuantity('temperature', unitSystem, design.dewPoint.meanCoincidentDryBulbC)}</span>.
-        </p>
-      )}
-    </Panel>
   );
 }
