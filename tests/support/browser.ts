@@ -4,7 +4,8 @@ import { createServer, type Server } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
-import { appRoot, clientDistFolder } from '../../server/paths';
+import { inject } from 'vitest';
+import { appRoot } from '../../server/paths';
 import { startSignInStack, type SignInStack } from './sign-in';
 
 export const screenshotFolder = path.join(appRoot, 'test-results', 'screenshots');
@@ -26,7 +27,7 @@ export async function startBrowserHarness(): Promise<BrowserHarness> {
     const s = createServer().listen(0, '127.0.0.1', () => resolve(s));
   });
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  const testApp: SignInStack = await startSignInStack({ publicUrl: baseUrl, overrides: { clientDist: clientDistFolder } });
+  const testApp: SignInStack = await startSignInStack({ publicUrl: baseUrl, overrides: { clientDist: inject('clientDist') } });
   server.on('request', testApp.app);
   const profile = mkdtempSync(path.join(tmpdir(), 'tramontane-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
