@@ -9,7 +9,7 @@ import { standardPressurePa } from '../../../../shared/psychrometrics';
 import type { EnvelopeLimits } from '../../../../shared/scenario/envelopes';
 import { useDeleteEnvelope } from '../api/delete-envelope';
 import { useEnvelopePresets, useProjectEnvelopes } from '../api/get-envelopes';
-import { useCanEditEnvelopes } from '../api/get-project-role';
+import { useProjectRole } from '@/lib/projects';
 import { EnvelopeForm } from './envelope-form';
 import { formatLimit } from './limit-format';
 
@@ -33,7 +33,7 @@ export function EnvelopesPage() {
   const { unitSystem } = useUnitSystem();
   const presets = useEnvelopePresets();
   const own = useProjectEnvelopes(projectId);
-  const canEdit = useCanEditEnvelopes(projectId);
+  const { canEdit } = useProjectRole(projectId);
   const remove = useDeleteEnvelope(projectId);
   const [drawn, setDrawn] = useState<string[]>(['preset:ashrae-2021-recommended', 'preset:ashrae-2021-a1']);
 

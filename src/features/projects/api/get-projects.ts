@@ -1,15 +1,6 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch } from '@/lib/api-client';
+import { useQuery } from '@tanstack/react-query';
+import { projectsQueryOptions } from '@/lib/projects';
 
-export interface ProjectSummary {
-  id: number;
-  name: string;
-  description: string;
-  role: 'owner' | 'engineer' | 'viewer';
-}
-
-export const getProjects = () => apiFetch<{ projects: ProjectSummary[] }>('/projects');
-
-export const projectsQueryOptions = () => queryOptions({ queryKey: ['projects'], queryFn: getProjects, retry: false });
+export { getProjects, projectsQueryOptions, type ProjectSummary } from '@/lib/projects';
 
 export const useProjects = () => useQuery(projectsQueryOptions());

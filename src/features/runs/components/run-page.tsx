@@ -3,7 +3,7 @@ import { utcOffsetLabel } from '@/components/charts/chart-format';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
-import { useCanEditProject } from '../api/get-project-role';
+import { useProjectRole } from '@/lib/projects';
 import { ResultCautions } from './cautions';
 import { EnergyWaterCards } from './energy-water-cards';
 import { ModeHoursPanel } from './mode-hours-panel';
@@ -27,7 +27,7 @@ export function RunPage() {
   const projectId = Number(params.projectId);
   const runId = Number(params.runId);
   const query = useRun(projectId, runId);
-  const canEdit = useCanEditProject(projectId);
+  const { canEdit } = useProjectRole(projectId);
 
   if (query.isPending) return <div className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading run" />;
   if (query.isError) {
