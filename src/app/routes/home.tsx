@@ -3,35 +3,68 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { useProjects } from '@/features/projects/api/get-projects';
+import { NewProjectForm } from '@/features/projects/components/new-project-form';
+
+const roleWords = { owner: 'Owner', engineer: 'Engineer', viewer: 'Viewer' } as const;
 
 export function HomeRoute() {
   const projects = useProjects();
+  const signedOut = projects.error instanceof ApiError && projects.error.status === 401;
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
-      <Panel title="Projects">
-        {projects.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
-        {projects.isError &&
-          (projects.error instanceof ApiError && projects.error.status === 401 ? (
-            <Notice title="You are not signed in">Your projects appear here once you sign in.</Notice>
-          ) : (
-            <Notice tone="bad" title="Projects could not be loaded">{projects.error.message}</Notice>
-          ))}
-        {projects.data && projects.data.projects.length === 0 && (
-          <p className="text-sm text-ink-soft">No projects yet. Ask a project owner to invite you.</p>
-        )}
-        {projects.data && projects.data.projects.length > 0 && (
-          <ul className="divide-y divide-rule">
-            {projects.data.projects.map((p) => (
-              <li key={p.id} className="py-2">
-                <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
-                  {p.name}
-                </Link>
-                <p className="text-sm text-ink-soft">{p.description}</p>
-              </li>
+      <div className="grid content-start gap-6">
+        <Panel title="Projects">
+          {projects.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
+          {projects.isError &&
+            (signedOut ? (
+              <Notice title="You are not signed in">
+                <Link to="/sign-in" className="font-medium text-harbour underline">
+                  Sign in
+                </Link>{' '}
+                to see your projects.
+              </Notice>
+            ) : (
+              <Notice tone="bad" title="Projects could not be loaded">
+                {projects.error.message}
+              </Notice>
             ))}
-          </ul>
+          {projects.data && projects.data.projects.length === 0 && (
+            <p className="text-sm text-ink-soft">No projects yet. Start one below, or ask a project owner to invite you.</p>
+          )}
+          {projects.data && projects.data.projects.length > 0 && (
+            <table className="w-full text-sm">
+              <thead>
+                <tr className="border-b border-rule text-left text-xs text-ink-soft">
+                  <th scope="col" className="py-1.5 font-medium">
+                    Project
+                  </th>
+                  <th scope="col" className="py-1.5 font-medium">
+                    Your role
+                  </th>
+                </tr>
+              </thead>
+              <tbody className="divide-y divide-rule">
+                {projects.data.projects.map((p) => (
+                  <tr key={p.id}>
+                    <td className="py-2 pr-4">
+                      <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                        {p.name}
+                      </Link>
+                      {p.description && <p className="text-ink-soft">{p.description}</p>}
+                    </td>
+                    <td className="py-2 align-top text-ink-soft">{roleWords[p.role]}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          )}
+        </Panel>
+        {projects.data && (
+          <Panel title="Start a project">
+            <NewProjectForm />
+          </Panel>
         )}
-      </Panel>
+      </div>
       <Panel title="What Tramontane answers">
         <p className="text-sm leading-relaxed text-ink-soft">
           For a site and a cooling design: how many hours a year the IT halls run on outside air or water alone
