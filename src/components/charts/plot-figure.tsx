@@ -32,11 +32,11 @@ export function PlotFigure({ render, label, placeholderHeightPx = 320, className
   useEffect(() => {
     const element = host.current;
     if (!element) return;
-    const measure = () => setWidthPx(Math.max(280, Math.floor(element.clientWidth || 640)));
-    measure();
+    // Rounded to 16 px so a scroll bar appearing or a pixel of rounding does not rebuild the figure.
+    const settle = (widthPx: number) => setWidthPx(Math.max(280, Math.floor(widthPx / 16) * 16));
+    settle(element.clientWidth || 640);
     if (typeof ResizeObserver === 'undefined') return;
-    // Round to 16 px so a scroll bar appearing does not rebuild the figure twice.
-    const observer = new ResizeObserver(([entry]) => setWidthPx(Math.max(280, Math.floor(entry.contentRect.width / 16) * 16)));
+    const observer = new ResizeObserver(([entry]) => settle(entry.contentRect.width));
     observer.observe(element);
     return () => observer.disconnect();
   }, []);
