@@ -16,6 +16,8 @@ const router = createBrowserRouter([
   {
     element: <AppShell />,
     errorElement: <RouteError />,
+    // Shown while the first page's code loads, when that page is one of the lazily loaded ones.
+    hydrateFallbackElement: <p className="p-6 text-sm text-ink-soft">Loading Tramontane…</p>,
     children: [
       { index: true, element: <HomeRoute /> },
       // Scenarios, runs, comparison, envelopes and the state calculator: each page loaded on first visit.

@@ -48,6 +48,22 @@ export function ProjectOverview({
           </p>
           <h1 className="text-xl font-semibold">{name ?? <span className="inline-block h-6 w-48 animate-pulse rounded bg-mist align-middle" />}</h1>
           {listed?.description && <p className="mt-1 max-w-3xl text-sm text-ink-soft">{listed.description}</p>}
+          <nav aria-label="Project" className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-sm">
+            <Link to={`/projects/${projectId}/compare`} className="text-harbour underline-offset-2 hover:underline">
+              Compare runs
+            </Link>
+            <Link to={`/projects/${projectId}/envelopes`} className="text-harbour underline-offset-2 hover:underline">
+              Inlet envelopes
+            </Link>
+            <Link to={`/projects/${projectId}/members`} className="text-harbour underline-offset-2 hover:underline">
+              Members and invitations
+            </Link>
+            {role === 'owner' && (
+              <Link to={`/projects/${projectId}/audit`} className="text-harbour underline-offset-2 hover:underline">
+                Audit trail
+              </Link>
+            )}
+          </nav>
         </div>
         {role && (
           <p className="rounded border border-rule bg-panel px-3 py-1 text-xs text-ink-soft">
