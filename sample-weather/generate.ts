@@ -13,22 +13,11 @@ import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { wallClockReader } from '../shared/climate/local-time';
+import { seededRandom } from './seeded-random';
 
 const folder = path.dirname(fileURLToPath(import.meta.url));
 const YEARS = [2021, 2022, 2023];
 const HOUR_MS = 3_600_000;
-
-/** mulberry32: a small seeded generator (public domain, T. Ettinger); enough for demo data. */
-function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function gaussian(random: () => number): () => number {
   return () => {
@@ -73,7 +62,7 @@ interface Hour {
 }
 
 function simulate(climate: Climate): Hour[] {
-  const random = seeded(climate.seed);
+  const random = seededRandom(climate.seed);
   const normal = gaussian(random);
   const start = Date.UTC(YEARS[0], 0, 1) - 24 * HOUR_MS;
   const end = Date.UTC(YEARS[YEARS.length - 1] + 1, 0, 1) + 24 * HOUR_MS;

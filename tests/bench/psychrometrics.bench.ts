@@ -8,6 +8,7 @@
 import { bulkStates, wetBulbRootsNearFreezing } from '../../shared/psychrometrics';
 import { psychrolib, tightPsychrolib } from '../unit/psychrometrics/reference-psychrolib';
 import type { BenchContext, BenchSuite } from './suite';
+import { seededRandom } from '../../sample-weather/seeded-random';
 
 const YEARS = 10;
 const HOURS = YEARS * 8760;
@@ -18,24 +19,12 @@ interface SyntheticHours {
   pressurePa: Float64Array;
 }
 
-/** Small deterministic PRNG (mulberry32) so every run times the same hours. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /**
  * Synthetic (invented) continental climate: annual swing −25…40 °C, daily swing, RH falling as the
  * day warms, station pressure near 500 m elevation with weather noise. Not a real place.
  */
 function syntheticHours(): SyntheticHours {
-  const next = random(20_261_201);
+  const next = seededRandom(20_261_201);
   const dryBulbC = new Float64Array(HOURS);
   const rhPct = new Float64Array(HOURS);
   const pressurePa = new Float64Array(HOURS);

@@ -20,15 +20,10 @@ import { CP_DRY_AIR, CP_VAPOUR } from '../../../shared/psychrometrics/constants'
 import { enthalpyIpToSiKJPerKg, fahrenheitToCelsius } from '../../../shared/units';
 import { toDisplay } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
+import type { EnvelopeLimits } from '../../../shared/scenario/envelopes';
 
-export interface EnvelopeLimitsInput {
-  dryBulbMinC: number;
-  dryBulbMaxC: number;
-  dewPointMinC: number;
-  dewPointMaxC: number;
-  rhMinPct: number;
-  rhMaxPct: number;
-}
+/** The six limits the chart draws; derating is already applied by whoever hands them in. */
+export type EnvelopeLimitsInput = Omit<EnvelopeLimits, 'altitudeDerating'>;
 
 export interface ChartHours {
   dryBulbC: ArrayLike<number>;
