@@ -13,6 +13,7 @@ import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { wallClockReader } from '../shared/climate/local-time';
+import type { SampleSite } from './sample-site';
 import { seededRandom } from './seeded-random';
 
 const folder = path.dirname(fileURLToPath(import.meta.url));
@@ -109,18 +110,7 @@ const fixed = (v: number, digits: number) => {
 const toF = (c: number) => c * 1.8 + 32;
 const toInHg = (pa: number) => pa / 3386.389;
 
-interface SiteFile {
-  id: string;
-  name: string;
-  climate: string;
-  latitude: number;
-  longitude: number;
-  elevationM: number;
-  timeZone: string;
-  file: string;
-  /** The importer's timeZone option for this file: the zone of its local times ('UTC' when stamps carry an offset). */
-  importTimeZone: string;
-  layout: string;
+interface SiteFile extends Omit<SampleSite, 'years' | 'synthetic'> {
   build: () => string;
 }
 

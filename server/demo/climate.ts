@@ -6,21 +6,11 @@ import { saveClimateFile } from '../climate/store';
 import type { Tx } from '../db/client';
 import { runs, scenarios, sites } from '../db/schema';
 import { appRoot } from '../paths';
+import type { SampleSite } from '../../sample-weather/sample-site';
 import { newRunValues } from '../runs/new-run';
 
 const sampleFolder = path.join(appRoot, 'sample-weather');
 
-interface SampleSite {
-  name: string;
-  climate: string;
-  latitude: number;
-  longitude: number;
-  elevationM: number;
-  timeZone: string;
-  file: string;
-  /** Zone the file's local timestamps are written in (its header says which). */
-  importTimeZone: string;
-}
 
 const demoScenarioFiles = ['direct-air-a1.json', 'indirect-air-recommended.json', 'water-side-tower.json'];
 

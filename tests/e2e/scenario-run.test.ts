@@ -169,7 +169,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
     expect(await page.getByLabel('Approach').isVisible()).toBe(true);
     await shot('scenario-editor-water-side-si');
     page.once('dialog', (dialog) => void dialog.accept());
-    await page.getByRole('link', { name: 'Projects' }).click();
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
     await page.waitForURL(`${h.baseUrl}/`);
   });
 

@@ -3,7 +3,7 @@ import { Notice } from '@/components/ui/notice';
 import { UploadWizard } from '@/features/climate-files/components/upload-wizard';
 import { useSites } from '@/features/sites/api/get-sites';
 import { SiteForm } from '@/features/sites/components/site-form';
-import { ProjectCrumb } from '@/features/projects/components/project-crumb';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { NotFoundRoute } from './not-found';
 
 /** /projects/:projectId/climate-files/new — the upload wizard, with the site list and site form from the sites feature. */

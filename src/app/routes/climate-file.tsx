@@ -1,7 +1,7 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { ClimateFileView } from '@/features/climate-files/components/climate-file-view';
 import { useProjects } from '@/features/projects/api/get-projects';
-import { ProjectCrumb } from '@/features/projects/components/project-crumb';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { NotFoundRoute } from './not-found';
 
 /** /projects/:projectId/climate-files/:fileId */

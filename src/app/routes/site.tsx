@@ -1,7 +1,7 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { ClimateFilesPanel } from '@/features/climate-files/components/climate-files-panel';
 import { useProjects } from '@/features/projects/api/get-projects';
-import { ProjectCrumb } from '@/features/projects/components/project-crumb';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { useSites } from '@/features/sites/api/get-sites';
 import { SiteView } from '@/features/sites/components/site-view';
 import { NotFoundRoute } from './not-found';

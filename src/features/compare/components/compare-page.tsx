@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRuns } from '../api/get-runs';
@@ -8,6 +8,7 @@ import { compareRuns } from '../utils/compare-runs';
 import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from './monthly-comparison-chart';
 import { RunPicker } from './run-picker';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 
 const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
 
@@ -41,12 +42,7 @@ export function ComparePage() {
   return (
     <div className="space-y-4">
       <header>
-        <p className="text-xs uppercase tracking-wider text-ink-faint">
-          <Link to={`/projects/${projectId}`} className="hover:underline">
-            Project
-          </Link>{' '}
-          · Compare
-        </p>
+        <ProjectCrumb projectId={projectId} />
         <h1 className="text-xl font-semibold">Compare runs</h1>
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">

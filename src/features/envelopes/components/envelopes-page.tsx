@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
@@ -12,6 +12,7 @@ import { useEnvelopePresets, useProjectEnvelopes } from '../api/get-envelopes';
 import { useProjectRole } from '@/lib/projects';
 import { EnvelopeForm } from './envelope-form';
 import { formatLimit } from './limit-format';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 
 interface Entry {
   key: string;
@@ -107,12 +108,7 @@ export function EnvelopesPage() {
   return (
     <div className="space-y-4">
       <header>
-        <p className="text-xs uppercase tracking-wider text-ink-faint">
-          <Link to={`/projects/${projectId}`} className="hover:underline">
-            Project
-          </Link>{' '}
-          · Envelopes
-        </p>
+        <ProjectCrumb projectId={projectId} />
         <h1 className="text-xl font-semibold">Inlet envelopes</h1>
       </header>
       {(presets.isError || own.isError) && (

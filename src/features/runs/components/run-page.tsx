@@ -12,6 +12,7 @@ import { RunHourViews } from './run-hour-views';
 import { RunInputs } from './run-inputs';
 import { RunStatus } from './run-status';
 import { YearTable } from './year-table';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 
 const statusStyle: Record<RunRecord['status'], string> = {
   queued: 'bg-mist text-ink',
@@ -44,12 +45,7 @@ export function RunPage() {
     <div className="space-y-4">
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div>
-          <p className="text-xs uppercase tracking-wider text-ink-faint">
-            <Link to={`/projects/${projectId}`} className="hover:underline">
-              Project
-            </Link>{' '}
-            · Run {run.id}
-          </p>
+          <ProjectCrumb projectId={projectId} />
           <h1 className="text-xl font-semibold">{run.scenario.name}</h1>
           <p className="text-sm text-ink-soft">
             {run.climate.site.name} · {run.climate.name} · {run.climate.hours.toLocaleString('en')} hours

@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo, useState } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
-import { Link, useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
@@ -18,6 +18,7 @@ import { ModePreview } from './mode-preview';
 import { QuantityField } from './quantity-field';
 import { RunPanel } from './run-panel';
 import { ScenarioRuns } from './scenario-runs';
+import { ProjectCrumb } from '@/components/ui/project-crumb';
 
 const resolver = zodResolver(scenarioSchema) as unknown as Resolver<ScenarioFormValues, unknown, Scenario>;
 
@@ -76,12 +77,7 @@ export function ScenarioForm({
     <form onSubmit={handleSubmit(persist)} noValidate className="space-y-4" aria-label="Scenario editor">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
-          <p className="text-xs uppercase tracking-wider text-ink-faint">
-            <Link to={`/projects/${projectId}`} className="hover:underline">
-              Project
-            </Link>{' '}
-            · Scenario
-          </p>
+          <ProjectCrumb projectId={projectId} />
           <h1 className="text-xl font-semibold">{scenarioId === null ? 'New scenario' : values.name || 'Untitled scenario'}</h1>
         </div>
         {canEdit && (
