@@ -134,6 +134,31 @@ describe('an engineer running a scenario', () => {
     expect(t.db.select({ status: runs.status }).from(runs).where(eq(runs.id, runId)).get()!.status).toBe('done');
   });
 
+  it('marks a run failed, with the reason, when it times out or its climate file is gone', async () => {
+    const queued = () =>
+      t.db
+        .insert(runs)
+        .values({ ...(t.db.select().from(runs).get()!), id: undefined, status: 'queued', resultsJson: null, error: null, startedAt: null, finishedAt: null })
+        .returning()
+        .get();
+    const slow = queued();
+    const impatient = createRunQueue({ db: t.db, pool: t.pool, timeoutMs: 1 });
+    impatient.enqueue(slow.id);
+    await impatient.idle();
+    const timedOut = t.db.select().from(runs).where(eq(runs.id, slow.id)).get()!;
+    expect(timedOut.status).toBe('failed');
+    expect(timedOut.error).toMatch(/took longer than/);
+
+    const orphan = queued();
+    t.db.update(runs).set({ climateFileId: null }).where(eq(runs.id, orphan.id)).run();
+    t.runQueue.enqueue(orphan.id);
+    await t.runQueue.idle();
+    const failed = t.db.select().from(runs).where(eq(runs.id, orphan.id)).get()!;
+    expect(failed.status).toBe('failed');
+    expect(failed.error).toBe('The climate file of this run was deleted before the run started.');
+    expect(t.db.select().from(auditEvents).all().filter((e) => e.action === 'run.failed')).toHaveLength(2);
+  });
+
   it('refuses runs to a viewer', async () => {
     await request(t.app)
       .post(`/api/projects/${projectId}/runs`)
