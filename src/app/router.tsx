@@ -5,12 +5,6 @@ import { NotFoundRoute } from './routes/not-found';
 import { RouteError } from './routes/route-error';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
 import { RequireSignIn } from '@/features/auth/components/require-sign-in';
-import { SettingsPage } from '@/features/auth/components/settings-page';
-import { MailboxPage } from '@/features/auth/components/mailbox-page';
-import { AcceptInvitePage } from '@/features/members/components/accept-invite-page';
-import { MembersPage } from '@/features/members/components/members-page';
-import { PeoplePage } from '@/features/members/components/people-page';
-import { AuditPage } from '@/features/audit/components/audit-page';
 
 const router = createBrowserRouter([
   {
@@ -37,13 +31,13 @@ const router = createBrowserRouter([
       {
         element: <RequireSignIn />,
         children: [
-          { path: 'settings', element: <SettingsPage /> },
-          { path: 'invites/accept', element: <AcceptInvitePage /> },
-          { path: 'projects/:projectId/members', element: <MembersPage /> },
-          { path: 'projects/:projectId/audit', element: <AuditPage /> },
-          { path: 'audit', element: <AuditPage /> },
-          { path: 'admin/people', element: <PeoplePage /> },
-          { path: 'mailbox', element: <MailboxPage /> },
+          { path: 'settings', lazy: () => import('@/features/auth/components/settings-page').then((m) => ({ Component: m.SettingsPage })) },
+          { path: 'invites/accept', lazy: () => import('@/features/members/components/accept-invite-page').then((m) => ({ Component: m.AcceptInvitePage })) },
+          { path: 'projects/:projectId/members', lazy: () => import('@/features/members/components/members-page').then((m) => ({ Component: m.MembersPage })) },
+          { path: 'projects/:projectId/audit', lazy: () => import('@/features/audit/components/audit-page').then((m) => ({ Component: m.AuditPage })) },
+          { path: 'audit', lazy: () => import('@/features/audit/components/audit-page').then((m) => ({ Component: m.AuditPage })) },
+          { path: 'admin/people', lazy: () => import('@/features/members/components/people-page').then((m) => ({ Component: m.PeoplePage })) },
+          { path: 'mailbox', lazy: () => import('@/features/auth/components/mailbox-page').then((m) => ({ Component: m.MailboxPage })) },
         ],
       },
       { path: '*', element: <NotFoundRoute /> },

@@ -1,9 +1,11 @@
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { useProjects } from '@/features/projects/api/get-projects';
-import { NewProjectForm } from '@/features/projects/components/new-project-form';
+// The form brings the form and schema libraries; they load with it, not with the first page.
+const NewProjectForm = lazy(() => import('@/features/projects/components/new-project-form').then((m) => ({ default: m.NewProjectForm })));
 
 const roleWords = { owner: 'Owner', engineer: 'Engineer', viewer: 'Viewer' } as const;
 
@@ -61,7 +63,9 @@ export function HomeRoute() {
         </Panel>
         {projects.data && (
           <Panel title="Start a project">
-            <NewProjectForm />
+            <Suspense fallback={<div className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the form" />}>
+              <NewProjectForm />
+            </Suspense>
           </Panel>
         )}
       </div>
