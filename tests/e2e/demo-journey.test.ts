@@ -12,7 +12,7 @@ import { startBrowserHarness, type BrowserHarness } from '../support/browser';
 // Three synthetic years (2021–2023) for the invented Kelderwick Point, the same bytes the demo imported.
 const kelderwickFile = fileURLToPath(new URL('../../sample-weather/kelderwick-point.csv', import.meta.url));
 const demoProject = 'Larchfield campus study (demo)';
-const ourScenario = 'Direct air, 22 °C supply (tour)';
+const ourScenario = 'Direct air, 18 °C supply (tour)';
 // The demo run to compare with: the sample direct-air scenario on the demo's own Kelderwick Point file.
 const demoScenario = 'Direct outdoor air, A1 allowable, 25 °C supply (synthetic demo)';
 
@@ -39,7 +39,8 @@ beforeAll(async () => {
     }
   });
 });
-afterEach(() => {
+afterEach(async (context) => {
+  if (context.task.result?.state === 'fail') await h.screenshot(`demo-failed-${context.task.name.slice(0, 40).replace(/\W+/g, '-')}`);
   expect(pageErrors.splice(0)).toEqual([]);
 });
 afterAll(() => h?.close());
@@ -128,7 +129,7 @@ describe('a newcomer touring the demo workspace', () => {
     await page.getByRole('link', { name: 'New scenario' }).click();
     await page.waitForURL(`**/projects/${projectId}/scenarios/new`);
     await page.getByLabel('Name').fill(ourScenario);
-    await page.getByLabel('Supply air setpoint').fill('22');
+    await page.getByLabel('Supply air setpoint').fill('18');
     // Preview and run on the file just uploaded, not on the demo's copy of the same weather.
     const uploaded = /Kelderwick Point · kelderwick-point$/;
     const previewSelect = page.getByLabel('Climate file');
@@ -161,7 +162,7 @@ describe('a newcomer touring the demo workspace', () => {
     await shot('demo-09-run-si');
 
     await page.getByTestId('moist-air-chart').getByRole('group', { name: 'Units' }).getByRole('button', { name: 'IP' }).click();
-    await expect.poll(() => page.getByTestId('run-inputs').innerText()).toContain('71.6 °F'); // 22 °C × 9/5 + 32 = 71.6 °F
+    await expect.poll(() => page.getByTestId('run-inputs').innerText()).toContain('64.4 °F'); // 18 °C × 9/5 + 32 = 64.4 °F (exact)
     await chartsDrawn(page, 3);
     await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent()).toContain('gr/lb');
     await shot('demo-10-run-ip');
@@ -172,10 +173,14 @@ describe('a newcomer touring the demo workspace', () => {
     await page.getByRole('link', { name: 'Compare with other runs' }).click();
     await expect.poll(() => new URL(page.url()).searchParams.get('runs')).toBe(String(ourRunId));
     const picker = page.getByTestId('run-picker');
+    // The page opens with the run just made ticked; its row shows once the project's run list has caught up.
+    await expect.poll(() => picker.getByRole('checkbox', { name: `Compare run ${ourRunId}` }).isChecked(), { timeout: 10_000 }).toBe(true);
     const demoRow = picker.getByRole('row').filter({ hasText: demoScenario }).filter({ hasText: 'Kelderwick Point synthetic' });
     await expect.poll(() => demoRow.count()).toBe(1);
     demoRunId = Number((await demoRow.getByRole('link').innerText()).match(/#(\d+)/)![1]);
-    await demoRow.getByRole('checkbox').check();
+    // The tick follows the address, which updates a moment after the click; wait for it rather than expect it at once.
+    await demoRow.getByRole('checkbox').click();
+    await expect.poll(() => demoRow.getByRole('checkbox').isChecked()).toBe(true);
     await expect.poll(() => new URL(page.url()).searchParams.get('runs')).toBe(`${ourRunId},${demoRunId}`);
     const table = page.getByTestId('comparison-table');
     await table.waitFor();
@@ -183,6 +188,16 @@ describe('a newcomer touring the demo workspace', () => {
     expect(text).toContain('baseline');
     expect(text).toContain(ourScenario);
     expect(text).toContain(demoScenario);
+    // The free-cooling row: the demo run's hours and its difference from the baseline (our run), as the API gives them.
+    const hoursOf = async (id: number) => {
+      const res = await page.request.get(`${h.baseUrl}/api/projects/${projectId}/runs/${id}`);
+      return ((await res.json()) as { run: { results: { hours: { free: number } } } }).run.results.hours.free;
+    };
+    const [oursFree, demoFree] = [await hoursOf(ourRunId), await hoursOf(demoRunId)];
+    const diff = demoFree - oursFree;
+    const freeRow = await table.getByRole('row', { name: /^Free cooling/ }).innerText();
+    expect(freeRow).toContain(`${oursFree.toLocaleString('en')} h`);
+    expect(freeRow).toContain(`${diff > 0 ? '+' : ''}${diff.toLocaleString('en')} h`);
     await chartsDrawn(page);
     await shot('demo-11-compare-ip');
 

@@ -52,7 +52,7 @@ export function RunPicker({
       column.accessor((r) => share(r, 'free'), {
         id: 'free',
         header: 'Free',
-        cell: (c) => <span className="num">{(100 * c.getValue()).toFixed(0)} %</span>,
+        cell: (c) => <span className="num whitespace-nowrap">{(100 * c.getValue()).toFixed(0)} %</span>,
       }),
       column.accessor((r) => r.results?.energy.partialPue ?? Number.POSITIVE_INFINITY, {
         id: 'ppue',
