@@ -129,14 +129,20 @@ describe('a newcomer touring the demo workspace', () => {
     await page.getByRole('link', { name: 'New scenario' }).click();
     await page.waitForURL(`**/projects/${projectId}/scenarios/new`);
     await page.getByLabel('Name').fill(ourScenario);
-    await page.getByLabel('Supply air setpoint').fill('18');
     // Preview and run on the file just uploaded, not on the demo's copy of the same weather.
     const uploaded = /Kelderwick Point · kelderwick-point$/;
     const previewSelect = page.getByLabel('Climate file');
     const option = previewSelect.getByRole('option', { name: uploaded });
     await previewSelect.selectOption((await option.getAttribute('value'))!);
+    const preview = page.getByTestId('mode-preview');
+    const settledPreview = async () => ((await preview.getAttribute('class'))?.includes('opacity-40') ? '' : await preview.innerText());
     // 2021–2023 hourly without gaps: 3 × 8760 hours.
-    await expect.poll(() => page.getByTestId('mode-preview').innerText(), { timeout: 20_000 }).toContain('26,280 h');
+    await expect.poll(settledPreview, { timeout: 20_000 }).toContain('26,280 h');
+    const atDefaultSupply = await preview.innerText();
+    await page.getByLabel('Supply air setpoint').fill('18');
+    // A cooler supply leaves fewer free-cooling hours; wait for the preview to follow the edit.
+    await expect.poll(async () => { const now = await settledPreview(); return now !== '' && now !== atDefaultSupply && !now.includes('updating'); }, { timeout: 20_000 }).toBe(true);
+    const previewFree = Number(/Free cooling\s+([\d,]+) h/.exec(await preview.innerText())?.[1].replaceAll(',', ''));
     for (const box of await page.getByRole('group', { name: 'On climate files' }).getByRole('checkbox').all()) {
       const label = (await box.locator('xpath=..').innerText()).trim();
       await box.setChecked(/^Kelderwick Point · kelderwick-point\b/.test(label));
@@ -152,6 +158,8 @@ describe('a newcomer touring the demo workspace', () => {
     expect(hours.total).toBe(26_280);
     expect(hours.free + hours.adiabatic + hours.mechanical).toBe(26_280);
     expect(hours.free).toBeGreaterThan(0);
+    // The quick preview and the run use the same engine on the same file: the same free-cooling hours.
+    expect(hours.free).toBe(previewFree);
     expect(await page.getByTestId('ppue').innerText()).toMatch(/^1\.\d{3}$/);
     expect(await page.getByTestId('wue').innerText()).toMatch(/L\/kWh$|^–$/);
     // Monthly hours, carpet and the moist-air chart each draw a figure; the bins follow.
