@@ -160,7 +160,15 @@ describe('a newcomer touring the demo workspace', () => {
     expect(hours.free).toBeGreaterThan(0);
     // The quick preview and the run use the same engine on the same file: the same free-cooling hours.
     expect(hours.free).toBe(previewFree);
-    expect(await page.getByTestId('ppue').innerText()).toMatch(/^1\.\d{3}$/);
+    // Energy from the editor's defaults: hall fans at 5 % of a 1,000 kW IT load every hour with data,
+    // 0.05 × 1000 kW × 26,280 h = 1,314.0 MWh; IT energy 1000 kW × 26,280 h = 26,280.0 MWh.
+    const mwhIn = async (row: RegExp) => Number(/([\d,.]+) MWh/.exec(await page.getByRole('row', { name: row }).first().innerText())?.[1].replaceAll(',', ''));
+    expect(await mwhIn(/^Hall fans/)).toBe(1314);
+    expect(await mwhIn(/^IT equipment/)).toBe(26_280);
+    // Partial PUE of the cooling, ISO/IEC 30134-2's partial PUE with cooling as the only infrastructure: (IT + cooling) / IT.
+    const coolingMwh = await mwhIn(/^Cooling total/);
+    // Shown to 3 decimals from unrounded energies, so within half a unit of the last digit (plus the 0.1 MWh rounding).
+    expect(Math.abs(Number(await page.getByTestId('ppue').innerText()) - (26_280 + coolingMwh) / 26_280)).toBeLessThanOrEqual(0.0005 + 1e-5);
     expect(await page.getByTestId('wue').innerText()).toMatch(/L\/kWh$|^–$/);
     // Monthly hours, carpet and the moist-air chart each draw a figure; the bins follow.
     await chartsDrawn(page, 3);
