@@ -40,7 +40,7 @@ export function seedDemoClimate(tx: Tx, projectId: number, createdBy: number | n
     const file = saveClimateFile(tx, {
       projectId,
       siteId: site.id,
-      name: `${sample.name} synthetic ${imported.report.years.join('–')}`,
+      name: `${sample.name} synthetic ${yearSpan(imported.report.years)}`,
       originalFileName: sample.file,
       bytes,
       imported: { ...imported, series: imported.series },
@@ -63,4 +63,11 @@ export function seedDemoClimate(tx: Tx, projectId: number, createdBy: number | n
         .run();
     }
   }
+}
+
+/** "2021–2023", or one year alone. */
+function yearSpan(years: number[]): string {
+  const first = years[0];
+  const last = years[years.length - 1];
+  return first === last ? String(first) : `${first}–${last}`;
 }

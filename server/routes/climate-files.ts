@@ -1,7 +1,7 @@
 import express from 'express';
 import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { decodeClimateBytes, standardOffsetMinutes, type ClimateSeries, type ImportResult } from '../../shared/climate';
+import { decodeClimateBytes, standardOffsetMinutes, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
 import { csvCell } from '../../shared/csv';
 import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
 import type { AppDeps } from '../app';
@@ -242,7 +242,9 @@ function nullIfNaN(v: number): number | null {
   return v === v ? v : null;
 }
 
+/** A file as lists show it: no mapping or report, but the calendar years it covers on its own clock. */
 function listing(file: typeof climateFiles.$inferSelect, siteName: string) {
-  const { mappingJson: _m, reportJson: _r, ...rest } = file;
-  return { ...rest, siteName };
+  const { mappingJson: _m, reportJson, ...rest } = file;
+  const { years } = JSON.parse(reportJson) as ImportReport;
+  return { ...rest, siteName, years };
 }

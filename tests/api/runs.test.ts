@@ -4,6 +4,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditEvents, runs } from '../../server/db/schema';
 import { createRunQueue } from '../../server/runs/queue';
+import type { WorkerPool } from '../../workers/pool';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
@@ -142,7 +143,13 @@ describe('an engineer running a scenario', () => {
         .returning()
         .get();
     const slow = queued();
-    const impatient = createRunQueue({ db: t.db, pool: t.pool, timeoutMs: 1 });
+    // A task that never answers, as a stuck worker would: only the queue's timeout can end it.
+    const stuckPool: WorkerPool = {
+      ...t.pool,
+      run: (_task, _input, options) =>
+        new Promise((_resolve, reject) => options?.signal?.addEventListener('abort', () => reject(options.signal!.reason))),
+    };
+    const impatient = createRunQueue({ db: t.db, pool: stuckPool, timeoutMs: 50 });
     impatient.enqueue(slow.id);
     await impatient.idle();
     const timedOut = t.db.select().from(runs).where(eq(runs.id, slow.id)).get()!;

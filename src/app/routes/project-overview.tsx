@@ -1,21 +1,18 @@
 import { useParams } from 'react-router-dom';
 import { ClimateFilesPanel } from '@/features/climate-files/components/climate-files-panel';
 import { ProjectOverview } from '@/features/projects/components/project-overview';
-import { useSites } from '@/features/sites/api/get-sites';
 import { SitesPanel } from '@/features/sites/components/sites-panel';
 import { NotFoundRoute } from './not-found';
 
 /** /projects/:projectId — the overview, composed from the projects, sites and climate-files features. */
 export function ProjectOverviewRoute() {
   const projectId = Number(useParams().projectId);
-  const sites = useSites(projectId);
-  const siteTimeZone = (siteId: number) => sites.data?.sites.find((s) => s.id === siteId)?.timeZone;
   if (!Number.isInteger(projectId) || projectId <= 0) return <NotFoundRoute />;
   return (
     <ProjectOverview
       projectId={projectId}
       renderSites={(canEdit) => <SitesPanel projectId={projectId} canEdit={canEdit} />}
-      renderClimateFiles={(canEdit) => <ClimateFilesPanel projectId={projectId} canEdit={canEdit} siteTimeZone={siteTimeZone} />}
+      renderClimateFiles={(canEdit) => <ClimateFilesPanel projectId={projectId} canEdit={canEdit} />}
     />
   );
 }

@@ -2,7 +2,6 @@ import { useNavigate, useParams } from 'react-router-dom';
 import { ClimateFilesPanel } from '@/features/climate-files/components/climate-files-panel';
 import { useProjects } from '@/features/projects/api/get-projects';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
-import { useSites } from '@/features/sites/api/get-sites';
 import { SiteView } from '@/features/sites/components/site-view';
 import { NotFoundRoute } from './not-found';
 
@@ -13,10 +12,8 @@ export function SiteRoute() {
   const siteId = Number(params.siteId);
   const navigate = useNavigate();
   const role = useProjects().data?.projects.find((p) => p.id === projectId)?.role;
-  const sites = useSites(projectId);
   const canEdit = role === 'owner' || role === 'engineer';
   if (!(Number.isInteger(projectId) && projectId > 0 && Number.isInteger(siteId) && siteId > 0)) return <NotFoundRoute />;
-  const timeZone = sites.data?.sites.find((s) => s.id === siteId)?.timeZone;
   return (
     <div className="space-y-3">
       <ProjectCrumb projectId={projectId} />
@@ -26,7 +23,7 @@ export function SiteRoute() {
         canEdit={canEdit}
         onDeleted={() => navigate(`/projects/${projectId}`)}
         climateFiles={
-          <ClimateFilesPanel projectId={projectId} canEdit={canEdit} siteId={siteId} title="Climate files of this site" siteTimeZone={() => timeZone} />
+          <ClimateFilesPanel projectId={projectId} canEdit={canEdit} siteId={siteId} title="Climate files of this site" />
         }
       />
     </div>

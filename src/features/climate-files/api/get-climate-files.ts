@@ -19,6 +19,8 @@ export interface ClimateFileListing {
   missingHours: number;
   firstHourMs: number;
   lastHourMs: number;
+  /** Calendar years the file covers, counted on the file's own clock (an hour ending at midnight belongs to the day before). */
+  years: number[];
   createdAt: string | number;
 }
 

@@ -1,24 +1,19 @@
 import { Link } from 'react-router-dom';
-import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useClimateFiles } from '../api/get-climate-files';
 
 /** Calendar year of an instant on the site's standard-time clock (a local-time file starting 1 January stays in that year). */
-const yearOf = (ms: number, offsetMinutes: number) => new Date(ms + offsetMinutes * 60_000).getUTCFullYear();
 
 /** The project's climate files: site, period, hours and how complete they are; a link to upload another. */
 export function ClimateFilesPanel({
   projectId,
   canEdit,
-  siteTimeZone = () => undefined,
   siteId,
   title = 'Climate files',
 }: {
   projectId: number;
   canEdit: boolean;
-  /** The IANA zone of a site, when known, so years are counted on the site's clock. */
-  siteTimeZone?: (siteId: number) => string | undefined;
   /** Only this site's files. */
   siteId?: number;
   title?: string;
@@ -57,9 +52,7 @@ export function ClimateFilesPanel({
           </thead>
           <tbody>
             {listed.map((f) => {
-              const zone = siteTimeZone(f.siteId);
-              const offset = zone ? standardOffsetMinutes(zone) : 0;
-              const [a, b] = [yearOf(f.firstHourMs, offset), yearOf(f.lastHourMs, offset)];
+              const [a, b] = [f.years[0], f.years[f.years.length - 1]];
               return (
                 <tr key={f.id} className="border-b border-rule/60">
                   <td className="py-1">

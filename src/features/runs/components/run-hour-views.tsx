@@ -31,7 +31,10 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   const envelopes = useMemo(
     () => [
       {
-        label: `Envelope as run (max dry-bulb ${formatQuantity('temperature', unitSystem, results.envelope.dryBulbMaxC)} after altitude derating)`,
+        label:
+          results.envelope.dryBulbMaxC < run.scenario.envelope.dryBulbMaxC
+            ? `Envelope as run (max dry-bulb ${formatQuantity('temperature', unitSystem, results.envelope.dryBulbMaxC)} after altitude derating)`
+            : 'Envelope as run',
         limits: { ...run.scenario.envelope, dryBulbMaxC: results.envelope.dryBulbMaxC },
       },
     ],
