@@ -42,6 +42,9 @@ export const mappingOverrideSchema = z
 
 export type MappingOverride = z.infer<typeof mappingOverrideSchema>;
 
+export const timeBases = ['site-civil', 'site-standard', 'utc'] as const;
+export type TimeBasis = (typeof timeBases)[number];
+
 /** Query of the upload and preview routes (the file itself is the request body). */
 export const climateUploadQuerySchema = z.object({
   name: z.string().trim().min(1, 'name must not be empty').max(120).optional(),
@@ -50,7 +53,7 @@ export const climateUploadQuerySchema = z.object({
    * How local timestamps without an offset are read: the site's civil time (with daylight saving),
    * its standard time all year (as many weather files are written), or UTC.
    */
-  timeBasis: z.enum(['site-civil', 'site-standard', 'utc']).default('site-civil'),
+  timeBasis: z.enum(timeBases).default('site-civil'),
   maxGapHours: z.coerce.number().int().min(0, 'maxGapHours must be 0 or more').max(168, 'maxGapHours must be at most 168').default(6),
   mapping: z
     .string()

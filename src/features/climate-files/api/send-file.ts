@@ -1,10 +1,11 @@
 import { ApiError } from '@/lib/api-client';
-import type { MappingOverride } from '../../../../shared/schemas/climate-file';
+import type { MappingOverride, TimeBasis } from '../../../../shared/schemas/climate-file';
 
 export interface UploadParams {
   fileName: string;
   name?: string;
   maxGapHours: number;
+  timeBasis: TimeBasis;
   mapping?: MappingOverride;
 }
 
@@ -16,7 +17,7 @@ export interface UploadProgress {
 }
 
 export function uploadQuery(params: UploadParams): string {
-  const query = new URLSearchParams({ fileName: params.fileName, maxGapHours: String(params.maxGapHours) });
+  const query = new URLSearchParams({ fileName: params.fileName, maxGapHours: String(params.maxGapHours), timeBasis: params.timeBasis });
   if (params.name) query.set('name', params.name);
   if (params.mapping && Object.keys(params.mapping).length) query.set('mapping', JSON.stringify(params.mapping));
   return query.toString();

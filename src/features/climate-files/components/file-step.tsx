@@ -1,10 +1,11 @@
 import { useId } from 'react';
 import { Panel } from '@/components/ui/panel';
 import type { UploadProgress } from '../api/send-file';
+import type { TimeBasis } from '../../../../shared/schemas/climate-file';
 import { UploadProgressBar, formatBytes } from './progress-bar';
 import { button, quietButton } from './wizard-buttons';
 
-/** Step 2: the file, its name in the project and the longest gap to fill; reading it sends it with a progress bar. */
+/** Step 2: the file, its name in the project, the longest gap to fill and the clock its times are on; reading it sends it with a progress bar. */
 export function FileStep({
   siteName,
   file,
@@ -13,6 +14,9 @@ export function FileStep({
   setName,
   maxGapHours,
   setMaxGapHours,
+  timeBasis,
+  setTimeBasis,
+  siteTimeZone,
   progress,
   onBack,
   onRead,
@@ -24,6 +28,9 @@ export function FileStep({
   setName: (name: string) => void;
   maxGapHours: number;
   setMaxGapHours: (hours: number) => void;
+  timeBasis: TimeBasis;
+  setTimeBasis: (basis: TimeBasis) => void;
+  siteTimeZone: string;
   progress: UploadProgress | null;
   onBack: () => void;
   onRead: () => void;
@@ -80,6 +87,20 @@ export function FileStep({
               {gapValid ? 'Shorter gaps are filled by linear interpolation and marked; longer ones stay missing.' : 'Enter a whole number of hours from 0 to 168.'}
             </p>
           </div>
+        </div>
+        <div className="space-y-1">
+          <label htmlFor={`${ids}-basis`} className="block text-sm font-medium">Times written without a UTC offset are</label>
+          <select
+            id={`${ids}-basis`}
+            className="rounded border border-rule bg-panel px-2 py-1.5 text-sm"
+            value={timeBasis}
+            onChange={(e) => setTimeBasis(e.target.value as TimeBasis)}
+          >
+            <option value="site-civil">the site's clock time, with daylight saving ({siteTimeZone})</option>
+            <option value="site-standard">the site's standard time all year, no daylight saving</option>
+            <option value="utc">UTC</option>
+          </select>
+          <p className="text-xs text-ink-soft">Many weather files are written in local standard time all year; loggers often follow the wall clock. Times that carry an offset or Z are read as written.</p>
         </div>
         {file && <p className="num text-xs text-ink-soft">{file.name} · {formatBytes(file.size)}</p>}
         {progress && <UploadProgressBar progress={progress} label="Reading the file" />}

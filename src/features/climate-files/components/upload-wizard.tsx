@@ -16,6 +16,7 @@ import { UploadProgressBar } from './progress-bar';
 import { SiteStep, type WizardSite } from './site-step';
 import { ValidationReport } from './validation-report';
 import { button, quietButton } from './wizard-buttons';
+import type { TimeBasis } from '../../../../shared/schemas/climate-file';
 
 export type { WizardSite };
 
@@ -57,6 +58,7 @@ export function UploadWizard({
   const [file, setFile] = useState<File | null>(null);
   const [name, setName] = useState('');
   const [maxGapHours, setMaxGapHours] = useState(6);
+  const [timeBasis, setTimeBasis] = useState<TimeBasis>('site-civil');
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [preview, setPreview] = useState<ClimatePreview | null>(null);
   const [firstDetected, setFirstDetected] = useState<ClimatePreview['mapping'] | null>(null);
@@ -71,6 +73,7 @@ export function UploadWizard({
     fileName: file?.name ?? 'upload.csv',
     name: name.trim() || undefined,
     maxGapHours,
+    timeBasis,
     mapping: mappingDraft ? overrideFromDraft(mappingDraft) : undefined,
   });
 
@@ -165,6 +168,9 @@ export function UploadWizard({
           setName={setName}
           maxGapHours={maxGapHours}
           setMaxGapHours={setMaxGapHours}
+          timeBasis={timeBasis}
+          setTimeBasis={setTimeBasis}
+          siteTimeZone={site?.timeZone ?? 'UTC'}
           progress={progress}
           onBack={() => setStep('site')}
           onRead={() => void read(null)}
