@@ -110,6 +110,14 @@ describe('an engineer designing, running and comparing scenarios', () => {
     expect(await page.getByTestId('ppue').innerText()).toMatch(/^1\.\d{3}$/);
     await chartsDrawn(page);
     await expect.poll(() => page.getByTestId('bin-table').locator('tbody tr').count(), { timeout: 15_000 }).toBeGreaterThan(2);
+    // Sorting the bins by their hour count puts the fullest bin first (or last), as the heading says.
+    const binTable = page.getByTestId('bin-table');
+    await binTable.getByRole('button', { name: 'All (h)' }).click();
+    const sortedBy = await binTable.getByRole('columnheader', { name: /All \(h\)/ }).getAttribute('aria-sort');
+    expect(['ascending', 'descending']).toContain(sortedBy);
+    const totals = (await binTable.locator('tbody tr td:nth-last-child(2)').allInnerTexts()).map((t) => Number(t.replace(/,/g, '')));
+    const ordered = [...totals].sort((x, y) => (sortedBy === 'ascending' ? x - y : y - x));
+    expect(totals).toEqual(ordered);
     expect(await page.getByTestId('run-inputs').innerText()).toContain('system.supplyAirC');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
     await shot('run-page-si');

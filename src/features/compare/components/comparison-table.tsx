@@ -1,3 +1,4 @@
+import { downloadCsv } from '@/lib/download';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
 import type { ComparedRow } from '../utils/compare-runs';
@@ -12,9 +13,7 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
   const byId = new Map(runs.map((r) => [r.id, r]));
   function download() {
     const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${r.scenario.name} / ${r.climate.name}`]));
-    const url = URL.createObjectURL(new Blob([comparisonCsv(rows, labels, unitSystem)], { type: 'text/csv' }));
-    Object.assign(document.createElement('a'), { href: url, download: `comparison-${runs.map((r) => r.id).join('-')}.csv` }).click();
-    URL.revokeObjectURL(url);
+    downloadCsv(`comparison-${runs.map((r) => r.id).join('-')}.csv`, comparisonCsv(rows, labels, unitSystem));
   }
   return (
     <div className="overflow-x-auto">

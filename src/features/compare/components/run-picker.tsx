@@ -1,4 +1,5 @@
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import { SortHeader } from '@/components/ui/sort-header';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { RunListing } from '../api/get-runs';
@@ -84,28 +85,9 @@ export function RunPicker({
       <thead>
         {table.getHeaderGroups().map((group) => (
           <tr key={group.id} className="border-b border-rule text-xs text-ink-soft">
-            {group.headers.map((header) => {
-              const sorted = header.column.getIsSorted();
-              return (
-                <th
-                  key={header.id}
-                  scope="col"
-                  aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
-                  className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`}
-                >
-                  {header.column.getCanSort() ? (
-                    <button type="button" onClick={header.column.getToggleSortingHandler()} className="hover:text-ink">
-                      {flexRender(header.column.columnDef.header, header.getContext())}
-                      <span aria-hidden className="ml-0.5">
-                        {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : ''}
-                      </span>
-                    </button>
-                  ) : (
-                    flexRender(header.column.columnDef.header, header.getContext())
-                  )}
-                </th>
-              );
-            })}
+            {group.headers.map((header) => (
+              <SortHeader key={header.id} header={header} className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`} />
+            ))}
           </tr>
         ))}
       </thead>

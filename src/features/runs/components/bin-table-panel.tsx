@@ -1,18 +1,16 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
+import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import { SortHeader } from '@/components/ui/sort-header';
+import { downloadCsv } from '@/lib/download';
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
 import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
-import { dryBulbBins } from '../utils/bin-table';
+import { dryBulbBins, type DryBulbBin } from '../utils/bin-table';
 
-function download(name: string, text: string) {
-  const url = URL.createObjectURL(new Blob([text], { type: 'text/csv' }));
-  const a = Object.assign(document.createElement('a'), { href: url, download: name });
-  a.click();
-  URL.revokeObjectURL(url);
-}
+const column = createColumnHelper<DryBulbBin>();
 
-/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb; downloadable as CSV. */
+/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb; sortable by any column, downloadable as CSV. */
 export function BinTablePanel({
   modes,
   dryBulbC,
@@ -27,22 +25,59 @@ export function BinTablePanel({
   const { unitSystem } = useUnitSystem();
   const table = useMemo(() => dryBulbBins(modes, dryBulbC, wetBulbC, 2), [modes, dryBulbC, wetBulbC]);
   const tUnit = unitOf('temperature', unitSystem);
-  const edge = (c: number) => formatQuantity('temperature', unitSystem, c, false);
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const columns = useMemo(() => {
+    const edge = (c: number) => formatQuantity('temperature', unitSystem, c, false);
+    return [
+      column.accessor('fromC', {
+        header: `Dry-bulb (${tUnit})`,
+        cell: ({ row }) => `${edge(row.original.fromC)} to ${edge(row.original.toC)}`,
+      }),
+      ...modeKeys.map((k, i) =>
+        column.accessor((b) => b.hours[i], {
+          id: k,
+          header: () => (
+            <>
+              <span className="mr-1 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
+              {modeLabels[k]}
+            </>
+          ),
+          cell: (c) => <span className={c.getValue() === 0 ? 'text-ink-faint' : ''}>{c.getValue().toLocaleString('en')}</span>,
+        }),
+      ),
+      column.accessor('total', { header: 'All (h)', cell: (c) => <span className="font-semibold">{c.getValue().toLocaleString('en')}</span> }),
+      column.accessor((b) => (Number.isFinite(b.meanWetBulbC) ? b.meanWetBulbC : -Infinity), {
+        id: 'meanWetBulbC',
+        header: `Mean coincident wet-bulb (${tUnit})`,
+        cell: ({ row }) => formatQuantity('temperature', unitSystem, row.original.meanWetBulbC, false),
+      }),
+    ];
+  }, [unitSystem, tUnit]);
+  const view = useReactTable({
+    data: table.bins,
+    columns,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
 
   function csv() {
-    const header = [`dry_bulb_from_${unitSystem === 'SI' ? 'c' : 'f'}`, `dry_bulb_to_${unitSystem === 'SI' ? 'c' : 'f'}`, ...modeKeys.map((k) => `${k}_h`), 'total_h', `mean_wet_bulb_${unitSystem === 'SI' ? 'c' : 'f'}`];
+    const edge = (c: number) => formatQuantity('temperature', unitSystem, c, false);
+    const suffix = unitSystem === 'SI' ? 'c' : 'f';
+    const header = [`dry_bulb_from_${suffix}`, `dry_bulb_to_${suffix}`, ...modeKeys.map((k) => `${k}_h`), 'total_h', `mean_wet_bulb_${suffix}`];
     const lines = [csvRow(header)];
-    for (const b of table.bins) {
+    for (const { original: b } of view.getRowModel().rows) {
       lines.push(csvRow([edge(b.fromC), edge(b.toC), ...b.hours, b.total, Number.isFinite(b.meanWetBulbC) ? formatQuantity('temperature', unitSystem, b.meanWetBulbC, false) : '']));
     }
-    download(`${fileStem}-bins.csv`, `${lines.join('\n')}\n`);
+    downloadCsv(`${fileStem}-bins.csv`, `${lines.join('\n')}\n`);
   }
 
   return (
     <div>
       <div className="mb-2 flex items-center justify-between">
         <p className="text-xs text-ink-soft">
-          Bins of 2 K ({unitSystem === 'IP' ? '3.6 °F' : '2 °C'}) of outdoor dry-bulb, warmest first.
+          Bins of 2 K ({unitSystem === 'IP' ? '3.6 °F' : '2 °C'}) of outdoor dry-bulb, warmest first; choose a heading to sort by it.
           {table.hoursWithoutDryBulb > 0 && ` ${table.hoursWithoutDryBulb.toLocaleString('en')} hours without a dry-bulb are left out.`}
         </p>
         <button type="button" onClick={csv} className="rounded border border-rule px-3 py-1 text-xs hover:bg-mist">
@@ -52,31 +87,28 @@ export function BinTablePanel({
       <div className="max-h-[28rem] overflow-auto">
         <table className="num w-full text-right text-xs" data-testid="bin-table">
           <thead className="sticky top-0 bg-panel">
-            <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 text-left font-sans font-medium">Dry-bulb ({tUnit})</th>
-              {modeKeys.map((k) => (
-                <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">
-                  <span className="mr-1 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
-                  {modeLabels[k]}
-                </th>
-              ))}
-              <th scope="col" className="px-2 py-1 font-sans font-medium">All (h)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Mean coincident wet-bulb ({tUnit})</th>
-            </tr>
+            {view.getHeaderGroups().map((group) => (
+              <tr key={group.id} className="border-b border-rule text-ink-soft">
+                {group.headers.map((header) => (
+                  <SortHeader key={header.id} header={header} className={`px-2 py-1 font-sans font-medium ${header.id === 'fromC' ? 'text-left' : ''}`} />
+                ))}
+              </tr>
+            ))}
           </thead>
           <tbody>
-            {table.bins.map((b) => (
-              <tr key={b.fromC} className="border-b border-rule/60 hover:bg-mist/50">
-                <th scope="row" className="py-0.5 text-left font-normal">
-                  {edge(b.fromC)} to {edge(b.toC)}
-                </th>
-                {b.hours.map((h, i) => (
-                  <td key={i} className={`px-2 py-0.5 ${h === 0 ? 'text-ink-faint' : ''}`}>
-                    {h.toLocaleString('en')}
-                  </td>
-                ))}
-                <td className="px-2 py-0.5 font-semibold">{b.total.toLocaleString('en')}</td>
-                <td className="px-2 py-0.5">{Number.isFinite(b.meanWetBulbC) ? formatQuantity('temperature', unitSystem, b.meanWetBulbC, false) : '–'}</td>
+            {view.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="border-b border-rule/60 hover:bg-mist/50">
+                {row.getVisibleCells().map((cell) =>
+                  cell.column.id === 'fromC' ? (
+                    <th key={cell.id} scope="row" className="py-0.5 text-left font-normal">
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </th>
+                  ) : (
+                    <td key={cell.id} className="px-2 py-0.5">
+                      {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                    </td>
+                  ),
+                )}
               </tr>
             ))}
           </tbody>
