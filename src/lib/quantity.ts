@@ -57,7 +57,7 @@ export const presentations: Record<QuantityKind, Record<UnitSystem, Presentation
     IP: { unit: 'ft', digits: 0, fromSi: metreToFoot, toSi: footToMetre },
   },
   water: {
-    SI: { unit: 'm³', digits: 1, fromSi: (l) => l / 1000, toSi: (m3) => m3 * 1000 },
+    SI: { unit: 'm³', digits: 2, fromSi: (l) => l / 1000, toSi: (m3) => m3 * 1000 },
     IP: { unit: 'US gal', digits: 0, fromSi: (l) => l / US_GALLON_L, toSi: (g) => g * US_GALLON_L },
   },
 };

@@ -52,7 +52,7 @@ export function EnvelopePicker({
               onPick({ ...env.limits, presetId: undefined });
             }
           }}
-          className="min-w-72 rounded border border-rule bg-panel px-2 py-1 text-sm"
+          className="min-w-72 rounded border border-rule bg-panel px-2 py-1 text-sm disabled:bg-paper disabled:text-ink-soft"
         >
           <option value="custom">Custom limits (typed below)</option>
           <optgroup label="Published (ASHRAE TC 9.9)">

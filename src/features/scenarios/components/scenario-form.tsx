@@ -133,7 +133,7 @@ export function ScenarioForm({
                   id="scenario-name"
                   {...register('name')}
                   aria-invalid={formState.errors.name ? true : undefined}
-                  className="w-full max-w-xl rounded border border-rule bg-panel px-2 py-1 text-sm"
+                  className="w-full max-w-xl rounded border border-rule bg-panel px-2 py-1 text-sm disabled:bg-paper disabled:text-ink-soft"
                 />
                 {formState.errors.name && (
                   <p role="alert" className="text-xs font-medium text-signal-bad">
@@ -175,7 +175,7 @@ export function ScenarioForm({
                   Heat rejection
                 </label>
                 <div>
-                  <select id="heat-rejection" {...register('system.heatRejection')} className="rounded border border-rule bg-panel px-2 py-1 text-sm">
+                  <select id="heat-rejection" {...register('system.heatRejection')} className="rounded border border-rule bg-panel px-2 py-1 text-sm disabled:bg-paper disabled:text-ink-soft">
                     <option value="cooling-tower">Cooling tower (wet-bulb)</option>
                     <option value="dry-cooler">Dry cooler (dry-bulb, optional spray)</option>
                   </select>
