@@ -21,6 +21,14 @@ export interface RunListing {
 
 export const getRuns = (projectId: number) => apiFetch<{ runs: RunListing[] }>(`/projects/${projectId}/runs`);
 
-export const runsQueryOptions = (projectId: number) => queryOptions({ queryKey: ['projects', projectId, 'runs'], queryFn: () => getRuns(projectId) });
+export const runsQueryOptions = (projectId: number) =>
+  queryOptions({
+    queryKey: ['projects', projectId, 'runs'],
+    queryFn: () => getRuns(projectId),
+    // The list is shared by the overview, the compare page and the editor: read it afresh on every visit,
+    // and follow runs still waiting or computing until they finish.
+    staleTime: 0,
+    refetchInterval: (query) => (query.state.data?.runs.some((r) => r.status === 'queued' || r.status === 'running') ? 2000 : false),
+  });
 
 export const useRuns = (projectId: number) => useQuery(runsQueryOptions(projectId));

@@ -25,7 +25,9 @@ export const projectRunsQueryOptions = (projectId: number) =>
     queryKey: ['projects', projectId, 'runs'],
     queryFn: () => getProjectRuns(projectId),
     retry: false,
-    // Follow runs that are still waiting or computing.
+    // Read afresh on every visit (the list is shared with the compare page and the editor), and follow
+    // runs that are still waiting or computing.
+    staleTime: 0,
     refetchInterval: (query) => (query.state.data?.runs.some((r) => r.status === 'queued' || r.status === 'running') ? 2000 : false),
   });
 

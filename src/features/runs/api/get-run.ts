@@ -1,5 +1,4 @@
-import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef } from 'react';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { Scenario } from '../../../../shared/scenario/schema';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
@@ -48,22 +47,4 @@ export const runQueryOptions = (projectId: number, runId: number) =>
     refetchInterval: (query) => (isFinished(query.state.data?.run.status) ? false : 1000),
   });
 
-/**
- * The run, followed until it finishes. When it finishes while watched, the project's run lists
- * (overview, compare, the scenario's runs) are marked stale, so they show it finished at once.
- */
-export function useRun(projectId: number, runId: number) {
-  const query = useQuery(runQueryOptions(projectId, runId));
-  const queryClient = useQueryClient();
-  const status = query.data?.run.status;
-  const wasPending = useRef(false);
-  useEffect(() => {
-    if (status === undefined) return;
-    if (!isFinished(status)) wasPending.current = true;
-    else if (wasPending.current) {
-      wasPending.current = false;
-      void queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'runs'], exact: true });
-    }
-  }, [status, projectId, queryClient]);
-  return query;
-}
+export const useRun = (projectId: number, runId: number) => useQuery(runQueryOptions(projectId, runId));
