@@ -1,0 +1,43 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { EnergyTotals, ModeHours } from '../../shared/scenario/results';
+import { apiFetch } from './api-client';
+
+export type RunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+
+/** A run as the project's run list gives it: totals only, no per-month tables. */
+export interface RunListing {
+  id: number;
+  scenarioId: number | null;
+  climateFileId: number | null;
+  status: RunStatus;
+  /** 0…1 while running */
+  progress: number;
+  error: string | null;
+  createdAt: string | number;
+  finishedAt: string | number | null;
+  scenario: { name: string; system: { kind: string } };
+  climate: { name: string; hours: number; site: { name: string } };
+  results: {
+    hours: ModeHours;
+    energy: EnergyTotals & { partialPue: number | null; annual: EnergyTotals | null };
+    water: { totalL: number; annualL: number | null; wueLPerKwh: number | null };
+    peakMechanicalLoadKw: number;
+  } | null;
+}
+
+export const getProjectRuns = (projectId: number) => apiFetch<{ runs: RunListing[] }>(`/projects/${projectId}/runs`);
+
+/**
+ * The project's runs, one cache entry for the overview, the compare page and the scenario editor:
+ * read afresh on every visit, and followed while any run is still waiting or computing.
+ */
+export const projectRunsQueryOptions = (projectId: number) =>
+  queryOptions({
+    queryKey: ['projects', projectId, 'runs'],
+    queryFn: () => getProjectRuns(projectId),
+    retry: false,
+    staleTime: 0,
+    refetchInterval: (query) => (query.state.data?.runs.some((r) => r.status === 'queued' || r.status === 'running') ? 2000 : false),
+  });
+
+export const useProjectRuns = (projectId: number) => useQuery(projectRunsQueryOptions(projectId));
