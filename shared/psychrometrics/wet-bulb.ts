@@ -154,7 +154,9 @@ export function wetBulbRootsNearFreezing(tC: number, humidityRatio: number, pres
   const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
   const dewPointC = pw > 0 ? temperatureAtLnSaturation(Math.log(pw)) : MIN_TEMPERATURE_C;
   return {
-    iceC: solveWetBulb(tC, humidityRatio, pressurePa, Math.max(dewPointC, MIN_TEMPERATURE_C), FREEZING_POINT_C, Number.NaN),
+    // The engine's own solve, first guess included: for this air it brackets the root below 0 °C. A bare
+    // solve from the dew point failed for nearly dry air, whose dew point lies far below the root.
+    iceC: wetBulbUnchecked(tC, humidityRatio, pressurePa, dewPointC),
     waterC: solveWetBulb(tC, humidityRatio, pressurePa, FREEZING_POINT_C, tC, Number.NaN),
   };
 }
