@@ -25,6 +25,10 @@ import { climateFileRoutes } from './routes/climate-files';
 import { envelopeRoutes } from './routes/envelopes';
 import { scenarioRoutes } from './routes/scenarios';
 import { runRoutes } from './routes/runs';
+import { sweepRoutes } from './routes/sweeps';
+import { projectionRoutes } from './routes/projections';
+import { excursionRoutes } from './routes/excursions';
+import { reportRoutes } from './routes/reports';
 
 export interface AppDeps {
   db: Db;
@@ -65,6 +69,10 @@ export function apiRoutes(deps: AppDeps): RouteSpec[] {
     ...envelopeRoutes(deps),
     ...scenarioRoutes(deps),
     ...runRoutes(deps),
+    ...sweepRoutes(deps),
+    ...projectionRoutes(deps),
+    ...excursionRoutes(deps),
+    ...reportRoutes(deps),
     ...authRoutes(deps),
     ...meRoutes(deps),
     ...memberRoutes(deps),

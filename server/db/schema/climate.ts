@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { blob, index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import { blob, index, integer, real, sqliteTable, text, type AnySQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { projects } from './projects';
 import { users } from './people';
 
@@ -48,6 +48,10 @@ export const climateFiles = sqliteTable(
     missingHours: integer().notNull(),
     firstHourMs: integer().notNull(),
     lastHourMs: integer().notNull(),
+    /** For a derived file (a future-climate projection): the file it was made from. */
+    parentId: integer().references((): AnySQLiteColumn => climateFiles.id, { onDelete: 'set null' }),
+    /** For a derived file: how it was made (JSON: method, change factors, note); null for uploads. */
+    derivationJson: text(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
   },

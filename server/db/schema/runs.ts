@@ -38,6 +38,28 @@ export const scenarios = sqliteTable(
   (table) => [index('scenarios_project_idx').on(table.projectId)],
 );
 
+/**
+ * A study that varies one or two scenario inputs over a range on one climate file: each point is a run
+ * (runs.sweepId), so sweep points are ordinary immutable runs.
+ */
+export const sweeps = sqliteTable(
+  'sweeps',
+  {
+    id: integer().primaryKey({ autoIncrement: true }),
+    projectId: integer()
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    name: text().notNull(),
+    baseScenarioId: integer().references(() => scenarios.id, { onDelete: 'set null' }),
+    climateFileId: integer().references(() => climateFiles.id, { onDelete: 'set null' }),
+    /** JSON: the base scenario as swept and the swept inputs with their values. */
+    specJson: text().notNull(),
+    createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+  },
+  (table) => [index('sweeps_project_idx').on(table.projectId)],
+);
+
 export const runStatuses = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
 export type RunStatus = (typeof runStatuses)[number];
 
@@ -56,6 +78,10 @@ export const runs = sqliteTable(
     /** The climate file as run: name, site, hours, checksum of the original. */
     climateJson: text().notNull(),
     engineVersion: text().notNull(),
+    /** Set when the run is one point of a sweep; deleting the sweep deletes its runs. */
+    sweepId: integer().references(() => sweeps.id, { onDelete: 'cascade' }),
+    /** JSON: the swept inputs' values at this point, e.g. {"system.supplyAirC": 24}. */
+    sweepPointJson: text(),
     status: text({ enum: runStatuses }).notNull().default('queued'),
     progress: real().notNull().default(0),
     error: text(),
@@ -76,3 +102,30 @@ export const runHours = sqliteTable('run_hours', {
   modes: blob({ mode: 'buffer' }).notNull(),
   mechanicalFraction: blob({ mode: 'buffer' }).notNull(),
 });
+
+export const shareTargets = ['run', 'comparison'] as const;
+export type ShareTarget = (typeof shareTargets)[number];
+
+/**
+ * A read-only link to a report of a run or a comparison. Only the token's hash is kept. Members of the project
+ * can open it while it is not revoked; with publicUntil set, anyone can until then.
+ */
+export const shareLinks = sqliteTable(
+  'share_links',
+  {
+    id: integer().primaryKey({ autoIncrement: true }),
+    projectId: integer()
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    tokenHash: text().notNull().unique(),
+    target: text({ enum: shareTargets }).notNull(),
+    /** The run ids shown, in order (one for a run report; the first is the baseline of a comparison). */
+    runIdsJson: text().notNull(),
+    title: text().notNull(),
+    publicUntil: integer({ mode: 'timestamp_ms' }),
+    createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    revokedAt: integer({ mode: 'timestamp_ms' }),
+  },
+  (table) => [index('share_links_project_idx').on(table.projectId)],
+);

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { useParams, useSearchParams } from 'react-router-dom';
+import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRuns } from '../api/get-runs';
@@ -41,9 +41,19 @@ export function ComparePage() {
 
   return (
     <div className="space-y-4">
-      <header>
-        <ProjectCrumb projectId={projectId} />
-        <h1 className="text-xl font-semibold">Compare runs</h1>
+      <header className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <ProjectCrumb projectId={projectId} />
+          <h1 className="text-xl font-semibold">Compare runs</h1>
+        </div>
+        {selected.length >= 2 && (
+          <Link
+            to={`/projects/${projectId}/compare/report?runs=${selected.map((r) => r.id).join(',')}&baseline=${baselineId}`}
+            className="rounded border border-rule bg-panel px-3 py-1.5 text-sm hover:bg-mist"
+          >
+            Report
+          </Link>
+        )}
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">

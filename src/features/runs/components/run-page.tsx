@@ -61,9 +61,17 @@ export function RunPage() {
             </Link>
           )}
           {results && (
-            <Link to={`/projects/${projectId}/compare?runs=${run.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
-              Compare with other runs
-            </Link>
+            <>
+              <Link to={`/projects/${projectId}/compare?runs=${run.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+                Compare with other runs
+              </Link>
+              <Link to={`/projects/${projectId}/runs/${run.id}/excursions`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+                Excursions
+              </Link>
+              <Link to={`/projects/${projectId}/runs/${run.id}/report`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+                Report
+              </Link>
+            </>
           )}
         </div>
       </header>

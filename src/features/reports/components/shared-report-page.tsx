@@ -1,0 +1,4 @@
+/** Placeholder until the page lands. */
+export function SharedReportPage() {
+  return <p className="text-sm text-ink-soft">This page is being built.</p>;
+}
