@@ -4,10 +4,12 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRuns } from '../api/get-runs';
 import { useRunsByMonth } from '../api/get-runs-by-month';
+import { useRunsByYear } from '../api/get-runs-by-year';
 import { compareRuns } from '../utils/compare-runs';
 import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from './monthly-comparison-chart';
 import { RunPicker } from './run-picker';
+import { YearSpreadTable } from './year-spread-table';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 
 const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
@@ -30,6 +32,10 @@ export function ComparePage() {
   const monthlyReady = monthly.every((q) => q.data);
   // Rebuilt only when a run's monthly figures arrive, so the chart is not redrawn on every render.
   const monthlySeries = useMemo(() => (monthlyReady ? monthly.map((q) => q.data!) : null), [monthlyKey, monthlyReady]);
+  const yearly = useRunsByYear(projectId, selected.map((r) => r.id));
+  const yearlyKey = yearly.map((q) => q.dataUpdatedAt).join(',');
+  const yearlyByRun = useMemo(() => new Map(yearly.flatMap((q) => (q.data ? [[q.data.runId, q.data.hoursByYear] as const] : []))), [yearlyKey]);
+  const anyMultiYear = [...yearlyByRun.values()].some((years) => years.length > 1);
 
   function update(runs: number[], baseline: number | null) {
     const next = new URLSearchParams();
@@ -84,6 +90,11 @@ export function ComparePage() {
               <Panel title="Hours per mode by month">
                 {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}
               </Panel>
+              {anyMultiYear && (
+                <Panel title="Year to year: mechanical hours">
+                  <YearSpreadTable runs={selected} byRun={yearlyByRun} />
+                </Panel>
+              )}
               <Notice tone="warn" title="Read these results as estimates">
                 They compare designs; they are not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering review. Direct
                 outside air brings contamination, smoke and condensation risk; evaporative systems need water treatment and Legionella control under local rules.

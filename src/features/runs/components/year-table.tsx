@@ -1,41 +1,127 @@
-import { formatQuantity } from '@/lib/quantity';
-import { useUnitSystem } from '@/lib/unit-system';
+import { formatQuantity, unitOf } from '@/lib/quantity';
+import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
 import type { YearResults } from '../../../../shared/scenario/results';
+import { WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
 import { hoursOfMode } from '../utils/monthly-hours';
 
-/** Hours, cooling energy and water for each calendar year of a multi-year file: how much the answer moves year to year. */
+const hoursText = (h: number) => Math.round(h).toLocaleString('en');
+const mwhText = (kwh: number) => (kwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+
+/** The columns the statistics cover, in the table's order, with how each value is written. */
+const statColumns: { metric: YearMetric; format: (v: number, system: UnitSystem) => string }[] = [
+  { metric: 'free', format: hoursText },
+  { metric: 'adiabatic', format: hoursText },
+  { metric: 'mechanical', format: hoursText },
+  { metric: 'coolingKwh', format: mwhText },
+  { metric: 'waterL', format: (v, system) => formatQuantity('water', system, v, false) },
+];
+
+const statRows: { label: string; title: string; cell: (s: MetricStatistics) => YearPoint | { value: number | null } }[] = [
+  { label: 'Median year', title: '50th percentile, nearest rank', cell: (s) => s.median },
+  { label: 'P10 year', title: '10th percentile, nearest rank', cell: (s) => s.p10 },
+  { label: 'P90 year', title: '90th percentile, nearest rank', cell: (s) => s.p90 },
+  { label: 'Spread, min–max', title: 'largest minus smallest full year', cell: (s) => ({ value: s.range }) },
+  { label: 'Standard deviation', title: 'sample standard deviation over the full years (divisor N − 1)', cell: (s) => ({ value: s.standardDeviation }) },
+];
+
+/**
+ * Hours, cooling energy and water for each calendar year of a multi-year file, then the median, P10 and
+ * P90 years, the worst year and the spread over the full years. Partial years are listed, flagged, left out.
+ */
 export function YearTable({ years }: { years: YearResults[] }) {
   const { unitSystem } = useUnitSystem();
+  const stats = yearStatistics(years);
+  const partial = new Set(stats.partialYears.map((p) => p.year));
   return (
-    <div className="overflow-x-auto">
-      <table className="num w-full text-right text-xs" data-testid="year-table">
-        <thead>
-          <tr className="border-b border-rule text-ink-soft">
-            <th scope="col" className="py-1 text-left font-sans font-medium">Year</th>
-            {modeKeys.map((k) => (
-              <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">
-                <span className="mr-1 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
-                {modeLabels[k]} (h)
-              </th>
-            ))}
-            <th scope="col" className="px-2 py-1 font-sans font-medium">Cooling energy (MWh)</th>
-            <th scope="col" className="px-2 py-1 font-sans font-medium">Water</th>
-          </tr>
-        </thead>
-        <tbody>
-          {years.map((y) => (
-            <tr key={y.year} className="border-b border-rule/60">
-              <th scope="row" className="py-0.5 text-left font-normal">{y.year}</th>
+    <div className="space-y-3">
+      <div className="overflow-x-auto">
+        <table className="num w-full text-right text-xs" data-testid="year-table">
+          <thead>
+            <tr className="border-b border-rule text-ink-soft">
+              <th scope="col" className="py-1 text-left font-sans font-medium">Year</th>
               {modeKeys.map((k) => (
-                <td key={k} className="px-2 py-0.5">{hoursOfMode(y, k).toLocaleString('en')}</td>
+                <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">
+                  <span className="mr-1 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
+                  {modeLabels[k]} (h)
+                </th>
               ))}
-              <td className="px-2 py-0.5">{(y.coolingKwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 })}</td>
-              <td className="px-2 py-0.5">{formatQuantity('water', unitSystem, y.waterL)}</td>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">Cooling energy (MWh)</th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">Water ({unitOf('water', unitSystem)})</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {years.map((y) => (
+              <tr key={y.year} className={`border-b border-rule/60 ${partial.has(y.year) ? 'text-ink-soft italic' : ''}`}>
+                <th scope="row" className="py-0.5 text-left font-normal">
+                  {y.year}
+                  {partial.has(y.year) && <span className="ml-1.5 rounded bg-mist px-1 font-sans text-[11px] not-italic">partial · left out</span>}
+                  {stats.worst?.year === y.year && <span className="ml-1.5 rounded bg-signal-bad px-1 font-sans text-[11px] text-paper">worst</span>}
+                </th>
+                {modeKeys.map((k) => (
+                  <td key={k} className="px-2 py-0.5">{hoursText(hoursOfMode(y, k))}</td>
+                ))}
+                <td className="px-2 py-0.5">{mwhText(y.coolingKwh)}</td>
+                <td className="px-2 py-0.5">{formatQuantity('water', unitSystem, y.waterL, false)}</td>
+              </tr>
+            ))}
+          </tbody>
+          {stats.metrics && (
+            <tbody data-testid="year-statistics">
+              {statRows.map((row) => (
+                <tr key={row.label} className="border-b border-rule/60 bg-mist/40">
+                  <th scope="row" className="py-0.5 text-left font-sans font-medium" title={row.title}>{row.label}</th>
+                  {modeKeys.map((k) => {
+                    const column = statColumns.find((c) => c.metric === k);
+                    return <StatCell key={k} point={column ? row.cell(stats.metrics![column.metric]) : null} format={column?.format} system={unitSystem} />;
+                  })}
+                  {statColumns.slice(3).map((c) => (
+                    <StatCell key={c.metric} point={row.cell(stats.metrics![c.metric])} format={c.format} system={unitSystem} />
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          )}
+        </table>
+      </div>
+      <YearNotes stats={stats} />
+    </div>
+  );
+}
+
+function StatCell({ point, format, system }: { point: YearPoint | { value: number | null } | null; format?: (v: number, s: UnitSystem) => string; system: UnitSystem }) {
+  if (!point || !format || point.value === null) return <td className="px-2 py-0.5 text-ink-soft">–</td>;
+  return (
+    <td className="px-2 py-0.5">
+      {format(point.value, system)}
+      {'year' in point && <span className="ml-1 text-[11px] text-ink-soft">({point.year})</span>}
+    </td>
+  );
+}
+
+function YearNotes({ stats }: { stats: ReturnType<typeof yearStatistics> }) {
+  const n = stats.fullYears.length;
+  return (
+    <div className="space-y-1 text-xs text-ink-soft" data-testid="year-notes">
+      {stats.worst && (
+        <p>
+          <span className="font-medium text-ink">Worst year: {stats.worst.year}</span>, {hoursText(stats.worst.mechanical)} mechanical hours
+          {stats.worst.tiedWith.length > 0 && <> (tied with {stats.worst.tiedWith.join(', ')} on mechanical hours; rule: {WORST_YEAR_TIE_RULE})</>}.
+        </p>
+      )}
+      <p>
+        Statistics over {n} full calendar year{n === 1 ? '' : 's'}. Percentiles by nearest rank: of N years ordered from the smallest value, the P-th
+        percentile is the year of rank ⌈P/100 · N⌉, so each one is a year that happened (the median of an even count is the lower middle year). Each
+        column is ordered on its own, so the median year for free cooling need not be the median year for water. Spread is the sample standard
+        deviation (divisor N − 1) and the range from the smallest to the largest year.
+      </p>
+      {stats.partialYears.length > 0 && (
+        <p>
+          Left out as partial (fewer hours in the file than the calendar year has):{' '}
+          {stats.partialYears.map((p) => `${p.year} (${hoursText(p.hours)} of ${hoursText(p.calendarHours)} h)`).join(', ')}.
+        </p>
+      )}
+      {!stats.metrics && <p>No full calendar year in this file, so no year statistics.</p>}
     </div>
   );
 }
