@@ -1,0 +1,50 @@
+/**
+ * Where mechanical hours reach zero along a one-input sweep. Not interpolated: the answer is a swept
+ * point. Points not yet finished (null) are skipped.
+ */
+import type { SweepValue } from './expand';
+
+export interface SweepMechanical {
+  value: SweepValue;
+  /** Mechanical hours of the finished point; null while it runs, or when it failed. */
+  mechanicalHours: number | null;
+}
+
+export type ZeroMechanical =
+  /** No finished point has zero mechanical hours. */
+  | { kind: 'none' }
+  /** Zero at this point and at every finished point after it: "from X". */
+  | { kind: 'from'; index: number; value: SweepValue }
+  /** Zero from the first point up to this one, above zero after it (a larger approach, say): "up to X". */
+  | { kind: 'up-to'; index: number; value: SweepValue }
+  /** Zero first at this point but not at every point after it. */
+  | { kind: 'at'; index: number; value: SweepValue };
+
+export function zeroMechanical(points: readonly SweepMechanical[]): ZeroMechanical {
+  const finished = points.map((p, index) => ({ ...p, index })).filter((p) => p.mechanicalHours !== null);
+  const first = finished.findIndex((p) => p.mechanicalHours === 0);
+  if (first < 0) return { kind: 'none' };
+  const rest = finished.slice(first);
+  const p = finished[first];
+  if (rest.every((q) => q.mechanicalHours === 0)) return { kind: 'from', index: p.index, value: p.value };
+  if (first === 0) {
+    const lastLeading = rest.findIndex((q) => q.mechanicalHours !== 0) - 1;
+    const q = rest[lastLeading];
+    return { kind: 'up-to', index: q.index, value: q.value };
+  }
+  return { kind: 'at', index: p.index, value: p.value };
+}
+
+/** The sentence the sweep page shows, with the value formatted by the caller (units, SI/IP). */
+export function zeroMechanicalText(zero: ZeroMechanical, format: (value: SweepValue) => string): string {
+  switch (zero.kind) {
+    case 'none':
+      return 'No swept point reaches zero mechanical hours.';
+    case 'from':
+      return `Mechanical hours reach zero from ${format(zero.value)}.`;
+    case 'up-to':
+      return `Mechanical hours are zero up to ${format(zero.value)}.`;
+    case 'at':
+      return `Mechanical hours first reach zero at ${format(zero.value)}, but not at every point after it.`;
+  }
+}

@@ -1,0 +1,57 @@
+import { describe, expect, it } from 'vitest';
+import { gridCells, metricRows, modeHoursRows, sweepProgress, zeroMechanical, zeroMechanicalText, type SweepPoint } from '../../shared/sweep';
+
+const line = (pairs: Array<[number, number | null]>) => pairs.map(([value, mechanicalHours]) => ({ value, mechanicalHours }));
+const celsius = (v: number | string) => `${v} °C`;
+
+describe('where mechanical hours reach zero', () => {
+  it('says "from X" at the first swept point with zero mechanical hours when it holds after it', () => {
+    const zero = zeroMechanical(line([[20, 310], [21, 122], [22, 0], [23, 0]]));
+    expect(zero).toEqual({ kind: 'from', index: 2, value: 22 });
+    expect(zeroMechanicalText(zero, celsius)).toBe('Mechanical hours reach zero from 22 °C.');
+  });
+
+  it('says so when no point reaches zero', () => {
+    const zero = zeroMechanical(line([[20, 310], [21, 122]]));
+    expect(zeroMechanicalText(zero, celsius)).toBe('No swept point reaches zero mechanical hours.');
+  });
+
+  it('says "up to X" when zero comes first and ends (a larger approach adds hours)', () => {
+    expect(zeroMechanical(line([[2, 0], [3, 0], [4, 15], [5, 80]]))).toEqual({ kind: 'up-to', index: 1, value: 3 });
+  });
+
+  it('says "at X" when zero comes and goes', () => {
+    expect(zeroMechanical(line([[1, 4], [2, 0], [3, 2]]))).toEqual({ kind: 'at', index: 1, value: 2 });
+  });
+
+  it('skips points not yet finished', () => {
+    expect(zeroMechanical(line([[20, 5], [21, null], [22, 0], [23, null]]))).toEqual({ kind: 'from', index: 2, value: 22 });
+    expect(zeroMechanical(line([[20, null]]))).toEqual({ kind: 'none' });
+  });
+});
+
+describe('figures drawn from the points', () => {
+  const hours = (free: number, adiabatic: number, mechanical: number) => ({ free, adiabatic, mechanical, noData: 0, total: free + adiabatic + mechanical });
+  const points: SweepPoint[] = [
+    { runId: 1, values: { 'system.supplyAirC': 20 }, status: 'done', progress: 1, error: null, results: { hours: hours(50, 10, 12), partialPue: 1.2, coolingKwh: 10, waterL: 5, wueLPerKwh: 0.1, peakMechanicalLoadKw: 300 } },
+    { runId: 2, values: { 'system.supplyAirC': 22 }, status: 'running', progress: 0.5, error: null, results: null },
+    { runId: 3, values: { 'system.supplyAirC': 24 }, status: 'queued', progress: 0, error: null, results: null },
+    { runId: 4, values: { 'system.supplyAirC': 26 }, status: 'failed', progress: 0.1, error: 'x', results: null },
+  ];
+
+  it('counts progress: finished points whole, running ones by their own share', () => {
+    expect(sweepProgress(points)).toEqual({ total: 4, done: 1, failed: 1, cancelled: 0, running: 1, queued: 1, fraction: 2.5 / 4, finished: false });
+    expect(sweepProgress([]).finished).toBe(true);
+  });
+
+  it('gives hours per mode and other metrics only for finished points', () => {
+    expect(modeHoursRows(points, 'system.supplyAirC').map((r) => [r.value, r.mode, r.hours])).toEqual([
+      [20, 'free', 50],
+      [20, 'adiabatic', 10],
+      [20, 'mechanical', 12],
+      [20, 'no_data', 0],
+    ]);
+    expect(metricRows(points, 'system.supplyAirC', 'peakMechanicalLoadKw')).toEqual([{ index: 0, value: 20, metric: 300 }]);
+    expect(gridCells(points, 'system.supplyAirC', 'system.evaporativeEffectiveness', 'free')).toEqual([]);
+  });
+});
