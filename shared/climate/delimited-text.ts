@@ -1,6 +1,6 @@
 /**
  * From raw text to rows of cells with their line numbers: BOM, binary check, leading comment
- * lines, delimiter sniffing and the papaparse call (its fast mode when the text has no quotes).
+ * lines, delimiter sniffing, and rows (papaparse for quoted text; a row-at-a-time split otherwise).
  */
 import Papa from 'papaparse';
 
@@ -107,32 +107,55 @@ export function sniffDelimiter(lines: string[]): Delimiter {
 }
 
 export interface ParsedRows {
-  rows: string[][];
+  /** Number of rows, blank and comment rows included. */
+  count: number;
+  /**
+   * The cells of one row. For text without quotes the row is split when asked for, so a long file is
+   * held as its text plus one offset per line rather than as millions of small strings that outlive
+   * the young-generation collector.
+   */
+  row: (rowIndex: number) => string[];
   /** 1-based line number where each row starts. */
   lineOf: (rowIndex: number) => number;
   /** Malformed quoting reported by papaparse: row index and message. */
   errors: { row: number; message: string }[];
 }
 
-/** Splits the body into rows with papaparse, keeping each row's line number. */
+/**
+ * Splits the body into rows, keeping each row's line number. Text with quotes goes through papaparse;
+ * text without quotes is split at every LF and every delimiter, as papaparse's fast mode does, but one
+ * row at a time. Mixed CRLF/LF files keep one row per line; cell readers ignore a trailing CR.
+ */
 export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
-  const hasQuotes = body.text.includes('"');
-  const result = Papa.parse<string[]>(body.text, {
-    delimiter,
-    header: false,
-    skipEmptyLines: false,
-    dynamicTyping: false,
-    fastMode: !hasQuotes,
-    // without quotes, split at every LF so mixed CRLF/LF files keep one row per line; cell readers ignore a trailing CR
-    ...(hasQuotes ? {} : { newline: '\n' as const }),
-  });
+  const text = body.text;
+  if (!text.includes('"')) {
+    const starts = lineStarts(text);
+    const count = starts.length - 1;
+    return {
+      count,
+      row: (i) => text.slice(starts[i], starts[i + 1] - 1).split(delimiter),
+      lineOf: (i) => body.firstLine + i,
+      errors: [],
+    };
+  }
+  const result = Papa.parse<string[]>(text, { delimiter, header: false, skipEmptyLines: false, dynamicTyping: false });
   const rows = result.data;
   const errors = result.errors
     .filter((e) => e.type === 'Quotes')
     .map((e) => ({ row: e.row ?? 0, message: e.message }));
-  if (!hasQuotes) return { rows, lineOf: (i) => body.firstLine + i, errors };
-  const starts = rowStartLines(body.text, body.firstLine);
-  return { rows, lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
+  const starts = rowStartLines(text, body.firstLine);
+  return { count: rows.length, row: (i) => rows[i], lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
+}
+
+/** Offset where each LF-separated line starts, then one past the text's end: line i is text[starts[i], starts[i + 1] - 1). */
+function lineStarts(text: string): Int32Array {
+  let lines = 1;
+  for (let at = text.indexOf('\n'); at !== -1; at = text.indexOf('\n', at + 1)) lines++;
+  const starts = new Int32Array(lines + 1);
+  let k = 1;
+  for (let at = text.indexOf('\n'); at !== -1; at = text.indexOf('\n', at + 1)) starts[k++] = at + 1;
+  starts[lines] = text.length + 1;
+  return starts;
 }
 
 /** Line on which each row starts, counting line breaks inside quoted fields. */

@@ -138,14 +138,17 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('empty-input', 'The file holds no rows.');
     return null;
   }
-  let dataRows = 0;
-  for (let i = layout.dataStart; i < parsed.rows.length; i++) {
-    if (!isBlankRow(parsed.rows[i]) && !isCommentRow(parsed.rows[i])) dataRows++;
+  // Columns are sized for every remaining row; readRows counts the ones that hold data.
+  const dataRows = parsed.count - layout.dataStart;
+  let anyData = false;
+  for (let i = layout.dataStart; i < parsed.count && !anyData; i++) {
+    const row = parsed.row(i);
+    anyData = !isBlankRow(row) && !isCommentRow(row);
   }
   const sampleRows = spreadSample(parsed, layout.dataStart);
   ctx.mapping.decimalSeparator = override.decimalSeparator ?? sniffDecimalSeparator(sampleRows);
   ctx.mapping.headers = layout.headers;
-  if (dataRows === 0) {
+  if (!anyData) {
     ctx.mapping.headerLine = parsed.lineOf(layout.headerIndex);
     log.error('header-only', 'The file has a header but no data rows.', { line: parsed.lineOf(layout.headerIndex) });
     return null;

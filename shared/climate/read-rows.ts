@@ -42,6 +42,7 @@ export function readRows(
   humidity: QuantityAssignment,
   pressure: QuantityAssignment | null,
   ctx: Context,
+  /** At least the number of data rows: the size of the columns. */
   dataRows: number,
 ): ClimateSeries | null {
   const { log, counts } = ctx;
@@ -104,8 +105,8 @@ export function readRows(
     return si;
   };
 
-  for (let r = layout.dataStart; r < parsed.rows.length; r++) {
-    const row = parsed.rows[r];
+  for (let r = layout.dataStart; r < parsed.count; r++) {
+    const row = parsed.row(r);
     if (isBlankRow(row) || isCommentRow(row)) continue;
     counts.rows++;
     const line = parsed.lineOf(r);

@@ -42,24 +42,24 @@ export interface Layout {
 /** Finds the header row (the first row with the modal field count) and an optional units row below it. */
 export function findLayout(parsed: ParsedRows, ctx: Context): Layout | null {
   const candidates: number[] = [];
-  for (let i = 0; i < parsed.rows.length && candidates.length < 60; i++) {
-    const row = parsed.rows[i];
+  for (let i = 0; i < parsed.count && candidates.length < 60; i++) {
+    const row = parsed.row(i);
     if (!isBlankRow(row) && !isCommentRow(row)) candidates.push(i);
   }
   if (candidates.length === 0) return null;
   const tally = new Map<number, number>();
-  for (const i of candidates) tally.set(width(parsed.rows[i]), (tally.get(width(parsed.rows[i])) ?? 0) + 1);
-  let modal = width(parsed.rows[candidates[0]]);
+  for (const i of candidates) tally.set(width(parsed.row(i)), (tally.get(width(parsed.row(i))) ?? 0) + 1);
+  let modal = width(parsed.row(candidates[0]));
   for (const [n, times] of tally) if (times > (tally.get(modal) ?? 0)) modal = n;
-  const headerIndex = candidates.find((i) => width(parsed.rows[i]) === modal) ?? candidates[0];
+  const headerIndex = candidates.find((i) => width(parsed.row(i)) === modal) ?? candidates[0];
   for (const i of candidates) {
     if (i >= headerIndex) break;
     ctx.log.info('preamble-skipped', 'A line before the header was skipped as a note.', {
       line: parsed.lineOf(i),
-      value: parsed.rows[i].join(' ').slice(0, 80),
+      value: parsed.row(i).join(' ').slice(0, 80),
     });
   }
-  const headerRow = parsed.rows[headerIndex];
+  const headerRow = parsed.row(headerIndex);
   const textCells = headerRow.filter(isTextCell).length;
   const nonEmpty = headerRow.filter((c) => c.trim() !== '').length;
   const hasHeader = textCells > 0 && textCells * 2 >= nonEmpty;
@@ -76,8 +76,8 @@ export function findLayout(parsed: ParsedRows, ctx: Context): Layout | null {
   }
   const headers = headerRow.map((h) => h.trim());
   let dataStart = headerIndex + 1;
-  while (dataStart < parsed.rows.length && (isBlankRow(parsed.rows[dataStart]) || isCommentRow(parsed.rows[dataStart]))) dataStart++;
-  const next = parsed.rows[dataStart];
+  while (dataStart < parsed.count && (isBlankRow(parsed.row(dataStart)) || isCommentRow(parsed.row(dataStart)))) dataStart++;
+  const next = dataStart < parsed.count ? parsed.row(dataStart) : undefined;
   if (next && width(next) === width(headerRow) && next.some((c) => c.trim() !== '') && next.every((c) => c.trim() === '' || isTextCell(c))) {
     // a second header row holding the units, as spreadsheets often have
     for (let i = 0; i < headers.length; i++) if ((next[i] ?? '').trim() !== '') headers[i] = `${headers[i]} (${next[i].trim()})`;
@@ -88,10 +88,10 @@ export function findLayout(parsed: ParsedRows, ctx: Context): Layout | null {
 
 export function spreadSample(parsed: ParsedRows, dataStart: number): string[][] {
   const sample: string[][] = [];
-  const total = parsed.rows.length - dataStart;
+  const total = parsed.count - dataStart;
   const stride = Math.max(1, Math.floor(total / SAMPLE_ROWS));
-  for (let i = dataStart; i < parsed.rows.length; i += i < dataStart + 48 ? 1 : stride) {
-    const row = parsed.rows[i];
+  for (let i = dataStart; i < parsed.count; i += i < dataStart + 48 ? 1 : stride) {
+    const row = parsed.row(i);
     if (!isBlankRow(row) && !isCommentRow(row)) sample.push(row);
   }
   return sample;
