@@ -1,7 +1,191 @@
+import type { Response } from 'express';
+import { and, eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { comparisonCsv, comparisonRows, hourlyJson, runSummaryRows, summaryCsv, type ReportData, type ReportRun } from '../../shared/report';
+import { writeHourlyCsv } from '../../shared/scenario';
 import type { AppDeps } from '../app';
-import type { RouteSpec } from '../auth/access';
+import { access, route, type RouteSpec } from '../auth/access';
+import { recordRequestAudit } from '../auth/audit';
+import { systemClock } from '../auth/session';
+import type { Db } from '../db/client';
+import { runs, shareLinks } from '../db/schema';
+import { HttpError } from '../http-error';
+import { hourlyResultsOf } from '../reports/hourly-results';
+import { comparisonQuery, comparisonReport, runReport } from '../reports/load-report';
+import { checkPublicUntil, createShareInput, listLinks, newShareToken, presentLink, resolveShareToken } from '../reports/share-links';
+
+const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
+const linkParams = z.object({ linkId: z.coerce.number().int().positive('linkId must be a positive whole number') });
+const runFile = z.enum(['hourly.csv', 'hourly.json', 'summary.csv', 'summary.json'], {
+  error: 'the download must be hourly.csv, hourly.json, summary.csv or summary.json',
+});
+const comparisonFile = z.enum(['summary.csv', 'summary.json'], { error: 'the download must be summary.csv or summary.json' });
+const sharedRunQuery = z.object({ run: z.coerce.number().int().positive('run must be a run number').optional() });
+
+/** Lower-case ASCII words joined by hyphens, for file names that survive every system. */
+export function fileSlug(text: string): string {
+  const slug = text
+    .normalize('NFKD')
+    .replace(/[\u0300-\u036f]/g, '')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 60)
+    .replace(/-+$/, '');
+  return slug || 'report';
+}
+
+const runFileName = (run: ReportRun, what: string, ext: string) => `run-${run.id}-${fileSlug(run.scenario.name)}-${what}.${ext}`;
+
+/** Answers one download of a report: the hourly results of one of its runs, or its summary. */
+function sendDownload(db: Db, res: Response, projectId: number, report: ReportData, file: z.infer<typeof runFile>, runId?: number): void {
+  const reportRuns = report.kind === 'run' ? [report.run] : report.runs;
+  if (file === 'hourly.csv' || file === 'hourly.json') {
+    const run = reportRuns.find((r) => r.id === (runId ?? reportRuns[0].id));
+    if (!run) throw new HttpError(404, 'not_found', `Run ${runId} is not part of this report.`);
+    const row = db
+      .select()
+      .from(runs)
+      .where(and(eq(runs.id, run.id), eq(runs.projectId, projectId)))
+      .get();
+    if (!row) throw new HttpError(404, 'not_found', `Run ${run.id} was not found in this project.`);
+    const hourly = hourlyResultsOf(db, row);
+    if (file === 'hourly.json') {
+      res.attachment(runFileName(run, 'hourly', 'json')).type('application/json');
+      res.send(JSON.stringify({ run: { id: run.id, scenario: run.scenario.name, site: run.site.name, climateFile: run.climate.name }, ...hourlyJson(hourly) }));
+      return;
+    }
+    res.attachment(runFileName(run, 'hourly', 'csv')).type('text/csv; charset=utf-8');
+    // The writer reuses one buffer per chunk, so each chunk is copied before it is queued.
+    writeHourlyCsv(hourly, (bytes) => res.write(Buffer.from(bytes)));
+    res.end();
+    return;
+  }
+  if (report.kind === 'run') {
+    const run = report.run;
+    if (file === 'summary.csv') {
+      res.attachment(runFileName(run, 'summary', 'csv')).type('text/csv; charset=utf-8').send(summaryCsv(runSummaryRows(run)));
+    } else {
+      res.attachment(runFileName(run, 'summary', 'json')).type('application/json');
+      res.send(JSON.stringify({ report, summary: runSummaryRows(run) }, null, 1));
+    }
+    return;
+  }
+  const name = `comparison-${report.runs.map((r) => r.id).join('-')}-summary`;
+  if (file === 'summary.csv') {
+    res.attachment(`${name}.csv`).type('text/csv; charset=utf-8').send(comparisonCsv(report.runs, report.baselineId));
+  } else {
+    res.attachment(`${name}.json`).type('application/json');
+    res.send(JSON.stringify({ report, table: comparisonRows(report.runs, report.baselineId) }, null, 1));
+  }
+}
 
 /** Report data, hourly and summary downloads, and read-only share links. */
-export function reportRoutes(_deps: AppDeps): RouteSpec[] {
-  return [];
+export function reportRoutes(deps: AppDeps): RouteSpec[] {
+  const { db } = deps;
+  const now = () => (deps.clock ?? systemClock)();
+
+  /** The report a share link shows, built afresh from the runs it names. */
+  function linkedReport(link: typeof shareLinks.$inferSelect): ReportData {
+    const runIds = JSON.parse(link.runIdsJson) as number[];
+    return link.target === 'run'
+      ? runReport(db, link.projectId, runIds[0], now())
+      : comparisonReport(db, link.projectId, runIds, runIds[0], now());
+  }
+
+  return [
+    route('get', '/projects/:projectId/runs/:runId/report', access.viewer, (req, res) => {
+      const { runId } = runParams.parse(req.params);
+      res.json({ report: runReport(db, req.projectId!, runId, now()) });
+    }),
+
+    route('get', '/projects/:projectId/compare/report', access.viewer, (req, res) => {
+      const { runIds, baselineId } = comparisonQuery.parse(req.query);
+      res.json({ report: comparisonReport(db, req.projectId!, runIds, baselineId, now()) });
+    }),
+
+    route('get', '/projects/:projectId/runs/:runId/downloads/:file', access.viewer, (req, res) => {
+      const { runId } = runParams.parse(req.params);
+      const file = runFile.parse(req.params.file);
+      sendDownload(db, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file);
+    }),
+
+    route('get', '/projects/:projectId/compare/downloads/:file', access.viewer, (req, res) => {
+      const file = comparisonFile.parse(req.params.file);
+      const { runIds, baselineId } = comparisonQuery.parse(req.query);
+      sendDownload(db, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file);
+    }),
+
+    route('get', '/projects/:projectId/share-links', access.owner, (req, res) => {
+      res.json({ links: listLinks(db, req.projectId!, now()) });
+    }),
+
+    route('post', '/projects/:projectId/share-links', access.owner, (req, res) => {
+      const input = createShareInput.parse(req.body);
+      const at = now();
+      const publicUntil = checkPublicUntil(input.publicUntil, at);
+      // The runs must exist here and be finished; the report is checked now rather than when a reader opens it.
+      if (input.target === 'run') runReport(db, req.projectId!, input.runIds[0], at);
+      else comparisonReport(db, req.projectId!, input.runIds, input.runIds[0], at);
+      const { token, tokenHash } = newShareToken();
+      const link = db.transaction((tx) => {
+        const row = tx
+          .insert(shareLinks)
+          .values({
+            projectId: req.projectId!,
+            tokenHash,
+            target: input.target,
+            runIdsJson: JSON.stringify(input.runIds),
+            title: input.title,
+            publicUntil,
+            createdBy: req.user!.id,
+            createdAt: at,
+          })
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'share.create', input.title, {
+          linkId: row.id,
+          target: input.target,
+          runIds: input.runIds,
+          publicUntil: publicUntil?.toISOString() ?? null,
+        });
+        return row;
+      });
+      // The token is shown this once; only its SHA-256 is kept.
+      res.status(201).json({ link: presentLink(link, req.user!.name, at), token, path: `/shared/${token}` });
+    }),
+
+    route('post', '/projects/:projectId/share-links/:linkId/revoke', access.owner, (req, res) => {
+      const { linkId } = linkParams.parse(req.params);
+      const link = db
+        .select()
+        .from(shareLinks)
+        .where(and(eq(shareLinks.id, linkId), eq(shareLinks.projectId, req.projectId!)))
+        .get();
+      if (!link) throw new HttpError(404, 'not_found', `Share link ${linkId} was not found in this project.`);
+      const at = now();
+      const revoked = db.transaction((tx) => {
+        const row = link.revokedAt ? link : tx.update(shareLinks).set({ revokedAt: at }).where(eq(shareLinks.id, linkId)).returning().get();
+        if (!link.revokedAt) recordRequestAudit(tx, req, 'share.revoke', link.title, { linkId, target: link.target, runIds: JSON.parse(link.runIdsJson) });
+        return row;
+      });
+      res.json({ link: presentLink(revoked, null, at) });
+    }),
+
+    // Anyone may ask; resolveShareToken decides: public until its date, otherwise the project's members only.
+    route('get', '/shared/:token', access.public, (req, res) => {
+      const link = resolveShareToken(db, req, String(req.params.token), now());
+      res.json({
+        link: { title: link.title, target: link.target, publicUntil: link.publicUntil?.toISOString() ?? null },
+        report: linkedReport(link),
+      });
+    }),
+
+    route('get', '/shared/:token/downloads/:file', access.public, (req, res) => {
+      const link = resolveShareToken(db, req, String(req.params.token), now());
+      const file = runFile.parse(req.params.file);
+      const { run } = sharedRunQuery.parse(req.query);
+      sendDownload(db, res, link.projectId, linkedReport(link), file, run);
+    }),
+  ];
 }

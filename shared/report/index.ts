@@ -1,0 +1,5 @@
+/** Report data, summary tables and download formats shared by the server and the client. */
+export * from './report-data';
+export * from './summary-table';
+export * from './inputs';
+export * from './hourly-json';

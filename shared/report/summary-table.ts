@@ -1,0 +1,159 @@
+/**
+ * The run summary and the comparison table as rows for the CSV and JSON downloads. Values stay in SI
+ * (the unit is a column of its own) and numbers stay numbers; text that people typed (scenario, file
+ * and site names) goes through shared/csv.ts, which neutralises cells a spreadsheet would run as formulas.
+ */
+import { csvRow } from '../csv';
+import { modeKeys, modeLabels, type ModeKey } from '../modes';
+import type { ModeHours } from '../scenario/results';
+import type { ScenarioResults } from '../scenario/run';
+import { flattenInputs, inputUnitSi } from './inputs';
+import type { ReportRun } from './report-data';
+
+export interface SummaryRow {
+  section: string;
+  figure: string;
+  unit: string;
+  value: number | string | null;
+}
+
+const monthShort = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+const fieldOf: Record<ModeKey, keyof ModeHours> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
+
+export function hoursOfMode(row: ModeHours, mode: ModeKey): number {
+  return row[fieldOf[mode]];
+}
+
+/** Fixed decimals as a number (not text), so a spreadsheet still reads it as a number. */
+export function rounded(value: number | null | undefined, decimals: number): number | null {
+  if (value === null || value === undefined || !Number.isFinite(value)) return null;
+  const scale = 10 ** decimals;
+  return Math.round(value * scale) / scale;
+}
+
+function modeRows(section: string, prefix: string, hours: ModeHours): SummaryRow[] {
+  return modeKeys.map((mode) => ({ section, figure: `${prefix}${modeLabels[mode]}`, unit: 'h', value: hoursOfMode(hours, mode) }));
+}
+
+/** Every figure of one run: what it was, hours, excursions, energy, water, by month, by year, inputs. */
+export function runSummaryRows(run: ReportRun): SummaryRow[] {
+  const r: ScenarioResults = run.results;
+  const e = r.energy;
+  const w = r.water;
+  const rows: SummaryRow[] = [
+    { section: 'run', figure: 'Run', unit: '', value: run.id },
+    { section: 'run', figure: 'Scenario', unit: '', value: run.scenario.name },
+    { section: 'run', figure: 'System', unit: '', value: run.scenario.system.kind },
+    { section: 'run', figure: 'Site', unit: '', value: run.site.name },
+    { section: 'run', figure: 'Climate file', unit: '', value: run.climate.name },
+    { section: 'run', figure: 'Climate file SHA-256', unit: '', value: run.climate.sha256 },
+    { section: 'run', figure: 'Envelope', unit: '', value: run.envelope.label },
+    { section: 'run', figure: 'Engine version', unit: '', value: run.engineVersion },
+    ...modeRows('hours', '', r.hours),
+    { section: 'hours', figure: 'All hours', unit: 'h', value: r.hours.total },
+    { section: 'hours', figure: 'Free cooling share', unit: '%', value: rounded(r.hours.total ? (100 * r.hours.free) / r.hours.total : null, 2) },
+    { section: 'hours', figure: 'Longest run of mechanical hours', unit: 'h', value: r.longestMechanicalRunHours },
+    { section: 'excursions', figure: 'Hours outside the envelope', unit: 'h', value: r.excursions.hours },
+    { section: 'excursions', figure: 'of which too dry', unit: 'h', value: r.excursions.lowHumidityHours },
+    { section: 'excursions', figure: 'Longest excursion', unit: 'h', value: r.excursions.longestRunHours },
+    { section: 'energy', figure: 'IT energy', unit: 'kWh', value: rounded(e.itKwh, 1) },
+    { section: 'energy', figure: 'Hall fans', unit: 'kWh', value: rounded(e.fanKwh, 1) },
+    { section: 'energy', figure: 'Compressors', unit: 'kWh', value: rounded(e.compressorKwh, 1) },
+    { section: 'energy', figure: 'Pumps', unit: 'kWh', value: rounded(e.pumpKwh, 1) },
+    { section: 'energy', figure: 'Cooling total', unit: 'kWh', value: rounded(e.coolingKwh, 1) },
+    { section: 'energy', figure: 'Cooling total per 8,760 h', unit: 'kWh', value: rounded(e.annual?.coolingKwh, 1) },
+    { section: 'energy', figure: 'Partial PUE (cooling)', unit: '', value: rounded(e.partialPue, 4) },
+    { section: 'energy', figure: 'Peak mechanical load', unit: 'kW', value: rounded(r.peakMechanicalLoadKw, 1) },
+    { section: 'energy', figure: 'Peak compressor power', unit: 'kW', value: rounded(r.peakCompressorKw, 1) },
+    { section: 'water', figure: 'Evaporated', unit: 'L', value: rounded(w.evaporatedL, 1) },
+    { section: 'water', figure: 'Blowdown', unit: 'L', value: rounded(w.blowdownL, 1) },
+    { section: 'water', figure: 'Water total', unit: 'L', value: rounded(w.totalL, 1) },
+    { section: 'water', figure: 'Water total per 8,760 h', unit: 'L', value: rounded(w.annualL, 1) },
+    { section: 'water', figure: 'WUE', unit: 'L/kWh', value: rounded(w.wueLPerKwh, 4) },
+  ];
+  for (const m of r.hoursByMonth) rows.push(...modeRows('by month', `${monthShort[m.month - 1]}: `, m));
+  for (const y of r.hoursByYear) {
+    rows.push(...modeRows('by year', `${y.year}: `, y));
+    rows.push({ section: 'by year', figure: `${y.year}: cooling energy`, unit: 'kWh', value: rounded(y.coolingKwh, 1) });
+    rows.push({ section: 'by year', figure: `${y.year}: water`, unit: 'L', value: rounded(y.waterL, 1) });
+  }
+  for (const input of flattenInputs(run.scenario)) {
+    rows.push({ section: 'inputs', figure: input.path, unit: inputUnitSi[input.kind], value: typeof input.value === 'boolean' ? String(input.value) : input.value });
+  }
+  return rows;
+}
+
+export function summaryCsv(rows: SummaryRow[]): string {
+  return `${[csvRow(['section', 'figure', 'unit', 'value']), ...rows.map((r) => csvRow([r.section, r.figure, r.unit, r.value]))].join('\n')}\n`;
+}
+
+export interface ComparedFigure {
+  key: string;
+  label: string;
+  unit: string;
+  /** Which way is better; none for neutral figures. */
+  better: 'higher' | 'lower' | 'none';
+  decimals: number;
+  value: (r: ScenarioResults) => number | null;
+}
+
+/** The figures runs are compared on; energy and water per 8,760 h so files of different lengths compare. */
+export const comparedFigures: ComparedFigure[] = [
+  { key: 'free', label: 'Free cooling', unit: 'h', better: 'higher', decimals: 0, value: (r) => r.hours.free },
+  { key: 'adiabatic', label: 'Adiabatic assist', unit: 'h', better: 'none', decimals: 0, value: (r) => r.hours.adiabatic },
+  { key: 'mechanical', label: 'Mechanical', unit: 'h', better: 'lower', decimals: 0, value: (r) => r.hours.mechanical },
+  { key: 'noData', label: 'No data', unit: 'h', better: 'none', decimals: 0, value: (r) => r.hours.noData },
+  { key: 'excursions', label: 'Hours outside the envelope', unit: 'h', better: 'lower', decimals: 0, value: (r) => r.excursions.hours },
+  { key: 'ppue', label: 'Partial PUE (cooling)', unit: '', better: 'lower', decimals: 4, value: (r) => r.energy.partialPue },
+  { key: 'cooling', label: 'Cooling energy per 8,760 h', unit: 'kWh', better: 'lower', decimals: 1, value: (r) => r.energy.annual?.coolingKwh ?? null },
+  { key: 'compressor', label: 'Compressor energy per 8,760 h', unit: 'kWh', better: 'lower', decimals: 1, value: (r) => r.energy.annual?.compressorKwh ?? null },
+  { key: 'peak', label: 'Peak mechanical load', unit: 'kW', better: 'lower', decimals: 1, value: (r) => r.peakMechanicalLoadKw },
+  { key: 'water', label: 'Water per 8,760 h', unit: 'L', better: 'lower', decimals: 1, value: (r) => r.water.annualL },
+  { key: 'wue', label: 'WUE', unit: 'L/kWh', better: 'lower', decimals: 4, value: (r) => r.water.wueLPerKwh },
+];
+
+export interface ComparisonCell {
+  runId: number;
+  value: number | null;
+  /** value − baseline; null for the baseline itself or when either is missing. */
+  difference: number | null;
+}
+
+export interface ComparisonRow {
+  key: string;
+  figure: string;
+  unit: string;
+  better: ComparedFigure['better'];
+  cells: ComparisonCell[];
+}
+
+/** Each figure for each run (baseline first), with its difference from the baseline, rounded as downloaded. */
+export function comparisonRows(runs: ReportRun[], baselineId: number): ComparisonRow[] {
+  const baseline = runs.find((r) => r.id === baselineId) ?? runs[0];
+  if (!baseline) return [];
+  return comparedFigures.map((f) => {
+    const base = f.value(baseline.results);
+    return {
+      key: f.key,
+      figure: f.label,
+      unit: f.unit,
+      better: f.better,
+      cells: runs.map((run) => {
+        const value = f.value(run.results);
+        const difference = run.id !== baseline.id && value !== null && base !== null ? value - base : null;
+        return { runId: run.id, value: rounded(value, f.decimals), difference: rounded(difference, f.decimals) };
+      }),
+    };
+  });
+}
+
+/** The comparison as CSV: one line per figure; each run's value, then its difference from the baseline. */
+export function comparisonCsv(runs: ReportRun[], baselineId: number): string {
+  const label = (run: ReportRun) => `run ${run.id}${run.id === baselineId ? ' (baseline)' : ''}: ${run.scenario.name} / ${run.climate.name}`;
+  const header = ['figure', 'unit', ...runs.flatMap((run) => [label(run), `run ${run.id} difference`])];
+  const lines = [csvRow(header)];
+  for (const row of comparisonRows(runs, baselineId)) {
+    lines.push(csvRow([row.figure, row.unit, ...row.cells.flatMap((c) => [c.value, c.difference])]));
+  }
+  return `${lines.join('\n')}\n`;
+}
