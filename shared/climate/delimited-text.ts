@@ -115,6 +115,8 @@ export interface ParsedRows {
    * the young-generation collector.
    */
   row: (rowIndex: number) => string[];
+  /** The same cells in an array that is reused: valid only until the next call (for one pass over the rows). */
+  rowView: (rowIndex: number) => string[];
   /** 1-based line number where each row starts. */
   lineOf: (rowIndex: number) => number;
   /** Malformed quoting reported by papaparse: row index and message. */
@@ -131,9 +133,11 @@ export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
   if (!text.includes('"')) {
     const starts = lineStarts(text);
     const count = starts.length - 1;
+    const view: string[] = [];
     return {
       count,
       row: (i) => text.slice(starts[i], starts[i + 1] - 1).split(delimiter),
+      rowView: (i) => splitInto(text, starts[i], starts[i + 1] - 1, delimiter, view),
       lineOf: (i) => body.firstLine + i,
       errors: [],
     };
@@ -144,7 +148,20 @@ export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
     .filter((e) => e.type === 'Quotes')
     .map((e) => ({ row: e.row ?? 0, message: e.message }));
   const starts = rowStartLines(text, body.firstLine);
-  return { count: rows.length, row: (i) => rows[i], lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
+  return { count: rows.length, row: (i) => rows[i], rowView: (i) => rows[i], lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
+}
+
+/** The cells of text[start, end) split at the delimiter, into `cells` (resized); no line string is made. */
+function splitInto(text: string, start: number, end: number, delimiter: string, cells: string[]): string[] {
+  let k = 0;
+  let from = start;
+  for (let at = text.indexOf(delimiter, from); at !== -1 && at < end; at = text.indexOf(delimiter, from)) {
+    cells[k++] = text.substring(from, at);
+    from = at + 1;
+  }
+  cells[k++] = text.substring(from, end);
+  cells.length = k;
+  return cells;
 }
 
 /** Offset where each LF-separated line starts, then one past the text's end: line i is text[starts[i], starts[i + 1] - 1). */

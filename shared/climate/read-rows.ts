@@ -106,7 +106,7 @@ export function readRows(
   };
 
   for (let r = layout.dataStart; r < parsed.count; r++) {
-    const row = parsed.row(r);
+    const row = parsed.rowView(r);
     if (isBlankRow(row) || isCommentRow(row)) continue;
     counts.rows++;
     const line = parsed.lineOf(r);
