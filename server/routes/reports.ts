@@ -27,6 +27,7 @@ export function fileSlug(text: string): string {
   const slug = text
     .normalize('NFKD')
     .replace(/[\u0300-\u036f]/g, '')
+    .replace(/ß/g, 'ss')
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, '-')
     .replace(/^-+|-+$/g, '')
