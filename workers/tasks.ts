@@ -6,3 +6,4 @@ export { summarise } from './summarise';
 export { importClimate } from './import-climate';
 export { summariseClimate } from './summarise-climate';
 export { executeRun } from './execute-run';
+export { morphClimate } from './morph-climate';

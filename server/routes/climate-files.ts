@@ -208,7 +208,7 @@ const canonicalHumidityColumn = {
 const flagWords = ['measured', 'filled', 'missing'];
 
 /** The cleaned series in the command line's canonical columns, so it can be fed straight back in. */
-function hourlyCsv(s: ClimateSeries): string {
+export function hourlyCsv(s: ClimateSeries): string {
   const humidityScale = s.humidity.kind === 'humidity-ratio-kgkg' ? 1000 : 1;
   const header = ['timestamp', 'dry_bulb_c', canonicalHumidityColumn[s.humidity.kind], ...(s.pressurePa ? ['pressure_kpa'] : []), 'flag'];
   const lines = [header.join(',')];
@@ -242,9 +242,18 @@ function nullIfNaN(v: number): number | null {
   return v === v ? v : null;
 }
 
-/** A file as lists show it: no mapping or report, but the calendar years it covers on its own clock. */
-function listing(file: typeof climateFiles.$inferSelect, siteName: string) {
-  const { mappingJson: _m, reportJson, ...rest } = file;
+/**
+ * A file as lists show it: no mapping or report, but the calendar years it covers on its own clock, and for a
+ * future-climate projection (parentId, derivationJson) a short note of what it was made from.
+ */
+export function listing(file: typeof climateFiles.$inferSelect, siteName: string) {
+  const { mappingJson: _m, reportJson, derivationJson, ...rest } = file;
   const { years } = JSON.parse(reportJson) as ImportReport;
-  return { ...rest, siteName, years };
+  return { ...rest, siteName, years, projection: derivationJson ? projectionNote(derivationJson) : null };
+}
+
+/** What a list says of a projection: its method and the parent's name (kept after the parent is deleted). */
+function projectionNote(derivationJson: string): { method: string; parentName: string } {
+  const d = JSON.parse(derivationJson) as { method?: string; parent?: { name?: string } };
+  return { method: d.method ?? 'projection', parentName: d.parent?.name ?? 'an earlier file' };
 }
