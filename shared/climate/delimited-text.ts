@@ -160,7 +160,7 @@ function splitInto(text: string, start: number, end: number, delimiter: string, 
     from = at + 1;
   }
   cells[k++] = text.substring(from, end);
-  cells.length = k;
+  if (cells.length !== k) cells.length = k;
   return cells;
 }
 
