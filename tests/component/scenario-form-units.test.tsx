@@ -51,6 +51,9 @@ describe('scenario inputs in SI and IP', () => {
     expect(fieldsFor(systemFields, 'direct-air').map((f) => f.path)).not.toContain('system.approachK');
     expect(fieldsFor(systemFields, 'water-side').map((f) => f.path)).toContain('system.approachK');
     expect(fieldsFor(energyFields, 'direct-air').map((f) => f.path)).not.toContain('energy.towerEvaporationShare');
+    // The tower's evaporation share only matters to a tower: a dry cooler's water comes from its spray stage.
+    expect(fieldsFor(energyFields, 'water-side', 'dry-cooler').map((f) => f.path)).not.toContain('energy.towerEvaporationShare');
+    expect(fieldsFor(energyFields, 'water-side', 'cooling-tower').map((f) => f.path)).toContain('energy.towerEvaporationShare');
   });
 });
 

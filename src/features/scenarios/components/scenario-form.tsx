@@ -203,7 +203,7 @@ export function ScenarioForm({
           </Panel>
 
           <Panel title="Energy and water inputs">
-            {energyFields.map((f) => (
+            {fieldsFor(energyFields, kind, values.system.kind === 'water-side' ? values.system.heatRejection : undefined).map((f) => (
               <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
             ))}
           </Panel>

@@ -11,6 +11,7 @@ import {
 import type { FieldUnit } from './field-units';
 
 export type SystemKind = Scenario['system']['kind'];
+export type HeatRejection = Extract<Scenario['system'], { kind: 'water-side' }>['heatRejection'];
 
 /** One numeric input of the scenario: where it lives, how it is shown, its allowed range (from the shared schema) and why it matters. */
 export interface NumericField {
@@ -22,6 +23,8 @@ export interface NumericField {
   help: string;
   /** Only shown for these system kinds; all kinds when absent. */
   kinds?: SystemKind[];
+  /** Only shown for water-side systems with this heat rejection. */
+  heatRejection?: HeatRejection;
 }
 
 type AnyNumber = z.ZodType & { minValue?: number | null; maxValue?: number | null; unwrap?: () => AnyNumber };
@@ -125,14 +128,17 @@ export const energyFields: NumericField[] = [
     ['water-side', 'indirect-air'],
   ),
   field(en.blowdownRatio, 'energy.blowdownRatio', 'Blowdown ratio', 'ratio', 'Water drained per volume evaporated; 0.33 is about four cycles of concentration.'),
-  field(
-    en.towerEvaporationShare,
-    'energy.towerEvaporationShare',
-    'Tower heat by evaporation',
-    'shareAsPercent',
-    'Share of a cooling tower’s heat rejected by evaporation; 85 % is a common rule of thumb.',
-    ['water-side'],
-  ),
+  {
+    ...field(
+      en.towerEvaporationShare,
+      'energy.towerEvaporationShare',
+      'Tower heat by evaporation',
+      'shareAsPercent',
+      'Share of a cooling tower’s heat rejected by evaporation; 85 % is a common rule of thumb.',
+      ['water-side'],
+    ),
+    heatRejection: 'cooling-tower',
+  },
 ];
 
 export const systemKinds: { kind: SystemKind; label: string; help: string }[] = [
@@ -141,8 +147,9 @@ export const systemKinds: { kind: SystemKind; label: string; help: string }[] = 
   { kind: 'water-side', label: 'Water-side economiser', help: 'Chilled water cooled by a dry cooler or tower when the weather allows.' },
 ];
 
-export function fieldsFor(fields: NumericField[], kind: SystemKind): NumericField[] {
-  return fields.filter((f) => !f.kinds || f.kinds.includes(kind));
+/** The fields that apply to a system kind (and, for water-side, to its heat rejection). */
+export function fieldsFor(fields: NumericField[], kind: SystemKind, heatRejection?: HeatRejection): NumericField[] {
+  return fields.filter((f) => (!f.kinds || f.kinds.includes(kind)) && (!f.heatRejection || (kind === 'water-side' && f.heatRejection === heatRejection)));
 }
 
 const labelByKey = new Map([...siteFields, ...systemFields, ...envelopeFields, ...energyFields].map((f) => [f.path.split('.').pop()!, f.label.toLowerCase()]));
