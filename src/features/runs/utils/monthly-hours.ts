@@ -1,21 +1,2 @@
-import { modeKeys, type ModeKey } from '../../../../shared/modes';
-import type { ModeHours } from '../../../../shared/scenario/results';
-
-export const monthShort = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
-const fieldOf: Record<ModeKey, keyof ModeHours> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
-
-export interface MonthModeHours {
-  month: number;
-  mode: ModeKey;
-  hours: number;
-}
-
-/** The per-month table as one row per month and mode, in the palette's mode order, for a stacked chart. */
-export function monthlyModeRows(byMonth: (ModeHours & { month: number })[]): MonthModeHours[] {
-  return byMonth.flatMap((m) => modeKeys.map((mode) => ({ month: m.month, mode, hours: m[fieldOf[mode]] })));
-}
-
-export function hoursOfMode(row: ModeHours, mode: ModeKey): number {
-  return row[fieldOf[mode]];
-}
+/** Moved to src/components/charts so the report can draw the same chart. */
+export { hoursOfMode, monthlyModeRows, monthShort, type MonthModeHours } from '@/components/charts/monthly-mode-rows';

@@ -1,0 +1,68 @@
+import { useCallback, useMemo } from 'react';
+import { ModeLegend } from './mode-legend';
+import { PlotFigure, type PlotModule } from './plot-figure';
+import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
+import type { ModeHours } from '../../../shared/scenario/results';
+import { hoursOfMode, monthlyModeRows, monthShort } from './monthly-mode-rows';
+
+/**
+ * Stacked hours per mode for each calendar month (site standard time), with the table beside it
+ * (`withTable={false}` where the page prints the table itself, as the report does).
+ */
+export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true }: { byMonth: (ModeHours & { month: number })[]; zoneLabel: string; withTable?: boolean }) {
+  const rows = useMemo(() => monthlyModeRows(byMonth), [byMonth]);
+  const render = useCallback(
+    (Plot: PlotModule, widthPx: number) =>
+      Plot.plot({
+        width: widthPx,
+        height: 300,
+        marginLeft: 56,
+        style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
+        x: { domain: monthShort, label: `Month (${zoneLabel})`, labelAnchor: 'center', labelArrow: 'none' },
+        y: { label: 'Hours (h)', grid: true, labelArrow: 'up' },
+        color: { domain: modeKeys.map((k) => modeLabels[k]), range: modeKeys.map((k) => modeColours[k]) },
+        marks: [
+          Plot.barY(rows, {
+            x: (d: (typeof rows)[number]) => monthShort[d.month - 1],
+            y: 'hours',
+            fill: (d: (typeof rows)[number]) => modeLabels[d.mode],
+            order: modeKeys.map((k) => modeLabels[k]),
+            tip: { format: { x: true, y: (v: number) => `${v.toLocaleString('en')} h`, fill: true } },
+          }),
+          Plot.ruleY([0]),
+        ],
+      }),
+    [rows, zoneLabel],
+  );
+  return (
+    <div className="space-y-2">
+      <ModeLegend />
+      <PlotFigure render={render} label="Hours per mode for each month" placeholderHeightPx={300} />
+      {withTable && (
+        <details className="text-sm">
+          <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
+          <table className="num mt-2 w-full text-right text-xs">
+            <thead>
+              <tr className="border-b border-rule text-ink-soft">
+                <th scope="col" className="py-1 text-left font-sans font-medium">Month</th>
+                {modeKeys.map((k) => (
+                  <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">{modeLabels[k]} (h)</th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {byMonth.map((m) => (
+                <tr key={m.month} className="border-b border-rule/60">
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthShort[m.month - 1]}</th>
+                  {modeKeys.map((k) => (
+                    <td key={k} className="px-2 py-0.5">{hoursOfMode(m, k).toLocaleString('en')}</td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </details>
+      )}
+    </div>
+  );
+}
