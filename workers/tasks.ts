@@ -7,3 +7,4 @@ export { importClimate } from './import-climate';
 export { summariseClimate } from './summarise-climate';
 export { executeRun } from './execute-run';
 export { morphClimate } from './morph-climate';
+export { analyseExcursions } from './analyse-excursions';

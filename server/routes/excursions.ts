@@ -1,7 +1,100 @@
+import { and, eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { DURATION_BINS, HOURLY_RATE_LIMIT_K, X_FACTOR_TABLE, type Proposal } from '../../shared/excursions';
+import {
+  ALLOWABLE_PRESET_IDS,
+  DEFAULT_ALLOWABLE_ID,
+  DEFAULT_RECOMMENDED_ID,
+  proposalQuerySchema,
+  RUN_ENVELOPE,
+} from '../../shared/excursions/proposal-query';
+import { findEnvelopePreset, parseScenario, type EnvelopeLimits, type Scenario } from '../../shared/scenario';
 import type { AppDeps } from '../app';
-import type { RouteSpec } from '../auth/access';
+import { access, route, type RouteSpec } from '../auth/access';
+import { loadClimateSeries } from '../climate/store';
+import { runs } from '../db/schema';
+import { HttpError } from '../http-error';
+
+const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
+
+interface ChosenEnvelope {
+  id: string;
+  label: string;
+  edition: string | null;
+  note: string | null;
+  recalledFromMemory: boolean;
+  limits: EnvelopeLimits;
+}
+
+function chooseEnvelope(id: string, scenario: Scenario): ChosenEnvelope {
+  if (id === RUN_ENVELOPE) {
+    const { presetId: _presetId, ...limits } = scenario.envelope;
+    return { id, label: "The run's envelope", edition: null, note: null, recalledFromMemory: false, limits };
+  }
+  const preset = findEnvelopePreset(id)!;
+  return { id, label: preset.label, edition: preset.edition, note: preset.note, recalledFromMemory: preset.recalledFromMemory, limits: preset.limits };
+}
 
 /** Excursion analysis of a run's hours against a proposed envelope or setpoint, for operators. */
-export function excursionRoutes(_deps: AppDeps): RouteSpec[] {
-  return [];
+export function excursionRoutes(deps: AppDeps): RouteSpec[] {
+  const { db, pool } = deps;
+  return [
+    // Read-only: the proposal travels in the address, so a page can be bookmarked and taken to a review.
+    route('get', '/projects/:projectId/runs/:runId/excursions', access.viewer, async (req, res) => {
+      const { runId } = runParams.parse(req.params);
+      const query = proposalQuerySchema.parse(req.query);
+      const run = db
+        .select()
+        .from(runs)
+        .where(and(eq(runs.id, runId), eq(runs.projectId, req.projectId!)))
+        .get();
+      if (!run) throw new HttpError(404, 'not_found', `Run ${runId} was not found in this project.`);
+      if (run.status !== 'done') throw new HttpError(409, 'not_ready', `Run ${run.id} is ${run.status}; excursions can be worked out once it is done.`);
+      const series = run.climateFileId === null ? undefined : loadClimateSeries(db, run.climateFileId);
+      if (!series) throw new HttpError(409, 'climate_file_gone', `The climate file of run ${run.id} has been deleted, so its hours cannot be re-examined.`);
+      const parsed = parseScenario(JSON.parse(run.scenarioJson));
+      if (!parsed.ok) throw new HttpError(409, 'invalid_scenario', `Run ${run.id}'s scenario no longer validates: ${parsed.errors.join('; ')}`);
+      const scenario = parsed.scenario;
+      const climate = JSON.parse(run.climateJson) as { name: string; elevationM: number; site: { name: string } };
+
+      const supplyAirC = query.supplyAirC ?? scenario.system.supplyAirC;
+      if (query.floatUpToC !== undefined && query.floatUpToC < supplyAirC) {
+        throw new HttpError(400, 'invalid_request', `floatUpToC: must be at or above supplyAirC ${supplyAirC} °C (got ${query.floatUpToC})`, [
+          { path: 'floatUpToC', message: `must be at or above supplyAirC ${supplyAirC} °C` },
+        ]);
+      }
+      const runPreset = scenario.envelope.presetId;
+      const control = chooseEnvelope(query.control ?? RUN_ENVELOPE, scenario);
+      const recommended = chooseEnvelope(query.recommended ?? DEFAULT_RECOMMENDED_ID, scenario);
+      const allowable = chooseEnvelope(query.allowable ?? (runPreset && ALLOWABLE_PRESET_IDS.includes(runPreset) ? runPreset : DEFAULT_ALLOWABLE_ID), scenario);
+      const proposal: Proposal = {
+        supplyAirC,
+        floatUpToC: query.floatUpToC ?? null,
+        control: control.limits,
+        recommended: recommended.limits,
+        allowable: allowable.limits,
+      };
+      const transferList = [series.timestampsMs.buffer, series.dryBulbC.buffer, series.humidity.values.buffer, series.flags.buffer];
+      if (series.pressurePa) transferList.push(series.pressurePa.buffer);
+      const analysis = await pool.run('analyseExcursions', { scenario, series, elevationM: climate.elevationM, proposal }, { transferList });
+
+      res.json({
+        run: {
+          id: run.id,
+          scenarioName: scenario.name,
+          systemKind: scenario.system.kind,
+          evaporativeEffectiveness: scenario.system.evaporativeEffectiveness,
+          heatRejection: scenario.system.kind === 'water-side' ? scenario.system.heatRejection : null,
+          supplyAirC: scenario.system.supplyAirC,
+          climateName: climate.name,
+          siteName: climate.site.name,
+          elevationM: climate.elevationM,
+          hours: JSON.parse(run.resultsJson ?? 'null')?.hours ?? null,
+        },
+        proposal: { supplyAirC, floatUpToC: proposal.floatUpToC, control, recommended, allowable },
+        analysis,
+        reference: { xFactorTable: X_FACTOR_TABLE, hourlyRateLimitK: HOURLY_RATE_LIMIT_K, durationBins: DURATION_BINS },
+      });
+    }),
+  ];
 }
