@@ -7,6 +7,7 @@ import { useProjects } from '../api/get-projects';
 import { MembersPanel } from './members-panel';
 import { RunsPanel } from './runs-panel';
 import { ScenariosPanel } from './scenarios-panel';
+import { SweepsPanel } from './sweeps-panel';
 
 /**
  * The project overview: its name and the person's role, then sites, climate files, scenarios, recent
@@ -77,6 +78,7 @@ export function ProjectOverview({
         {renderClimateFiles(canEdit)}
         <ScenariosPanel projectId={projectId} canEdit={canEdit} />
         <MembersPanel projectId={projectId} members={members.data} error={members.isError ? members.error : null} />
+        <SweepsPanel projectId={projectId} canEdit={canEdit} />
       </div>
       <RunsPanel projectId={projectId} />
     </div>

@@ -86,6 +86,11 @@ export function RunPanel({
           >
             {createRuns.isPending ? 'Queueing…' : count > 1 ? `Run ${count} combinations` : scenarioId === null ? 'Save and run' : 'Run'}
           </button>
+          {scenarioId !== null && (
+            <Link className="inline-block text-harbour underline underline-offset-2" to={`/projects/${projectId}/sweeps/new?scenario=${scenarioId}`}>
+              Sweep an input of this scenario
+            </Link>
+          )}
           {createRuns.isError && <p className="text-xs text-signal-bad">The run was not started: {createRuns.error.message}</p>}
           {queued && (
             <div>

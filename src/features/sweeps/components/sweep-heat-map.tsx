@@ -1,0 +1,124 @@
+import { useCallback, useMemo, useState } from 'react';
+import { densityRamp } from '@/components/charts/colour-ramps';
+import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
+import { useUnitSystem } from '@/lib/unit-system';
+import { axisOrder, gridCells, SWEEP_METRICS, sweepMetricLabels, type SweepInputPath, type SweepMetric, type SweepPoint } from '../../../../shared/sweep';
+import { formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
+import { formatMetric, metricDisplay, metricTitle } from '../utils/metric-format';
+
+/** Ink on the pale half of the ramp, paper on the dark half, so every cell's figure keeps its contrast. */
+const cellInk = (t: number) => (t < 0.45 ? '#1d2327' : '#ffffff');
+
+/**
+ * A two-input sweep as a heat map of one chosen metric (rows the first input, columns the second), cells
+ * with no mechanical hours outlined, and the same figures as a table.
+ */
+export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: SweepInputPath; columnInput: SweepInputPath; points: readonly SweepPoint[] }) {
+  const { unitSystem } = useUnitSystem();
+  const [metric, setMetric] = useState<SweepMetric>('mechanical');
+  const rowLabels = useMemo(() => axisOrder(points, rowInput).map((v) => formatSweepValue(rowInput, unitSystem, v)), [points, rowInput, unitSystem]);
+  const columnLabels = useMemo(() => axisOrder(points, columnInput).map((v) => formatSweepValue(columnInput, unitSystem, v)), [points, columnInput, unitSystem]);
+  const cells = useMemo(
+    () =>
+      gridCells(points, rowInput, columnInput, metric).map((c) => ({
+        ...c,
+        rowLabel: formatSweepValue(rowInput, unitSystem, c.row),
+        columnLabel: formatSweepValue(columnInput, unitSystem, c.column),
+        shown: c.metric === null ? null : metricDisplay(metric, unitSystem, c.metric),
+        text: formatMetric(metric, unitSystem, c.metric),
+      })),
+    [points, rowInput, columnInput, metric, unitSystem],
+  );
+  const title = metricTitle(metric, unitSystem);
+  const rowTitle = sweepAxisTitle(rowInput, unitSystem);
+  const columnTitle = sweepAxisTitle(columnInput, unitSystem);
+
+  const render = useCallback(
+    (Plot: PlotModule, widthPx: number) => {
+      const values = cells.map((c) => c.shown).filter((v): v is number => v !== null);
+      const lo = Math.min(...values);
+      const hi = Math.max(...values);
+      const t = (v: number | null) => (v === null || hi === lo ? 0 : (v - lo) / (hi - lo));
+      const bandPx = Math.max(26, Math.min(44, 360 / Math.max(1, rowLabels.length)));
+      return Plot.plot({
+        width: widthPx,
+        height: 70 + bandPx * rowLabels.length,
+        marginLeft: Math.min(200, 16 + 7 * Math.max(...rowLabels.map((l) => l.length))),
+        marginBottom: 44,
+        style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
+        x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', tickRotate: columnLabels.some((l) => l.length > 8) ? -20 : 0 },
+        y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'center', labelArrow: 'none' },
+        color: { type: 'linear', domain: values.length ? [lo, hi] : [0, 1], interpolate: densityRamp, legend: true, label: title },
+        marks: [
+          Plot.cell(
+            cells.filter((c) => c.shown === null),
+            { x: 'columnLabel', y: 'rowLabel', fill: '#f6f5f1', stroke: '#dcdad2', inset: 1 },
+          ),
+          Plot.cell(
+            cells.filter((c) => c.shown !== null),
+            { x: 'columnLabel', y: 'rowLabel', fill: 'shown', inset: 1, tip: true },
+          ),
+          Plot.cell(
+            cells.filter((c) => c.noMechanical),
+            { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#1d2327', strokeWidth: 2, strokeDasharray: '3,2', inset: 3 },
+          ),
+          Plot.text(cells, { x: 'columnLabel', y: 'rowLabel', text: 'text', fill: (c: (typeof cells)[number]) => cellInk(t(c.shown)), fontFamily: 'var(--font-mono)' }),
+        ],
+      });
+    },
+    [cells, rowLabels, columnLabels, rowTitle, columnTitle, title],
+  );
+
+  return (
+    <div className="space-y-3">
+      <label className="flex items-baseline gap-2 text-sm">
+        <span className="text-ink-soft">Colour the cells by</span>
+        <select className="rounded border border-rule bg-panel px-2 py-1" value={metric} onChange={(e) => setMetric(e.target.value as SweepMetric)} data-testid="heat-map-metric">
+          {SWEEP_METRICS.map((m) => (
+            <option key={m} value={m}>
+              {sweepMetricLabels[m]}
+            </option>
+          ))}
+        </select>
+      </label>
+      <PlotFigure render={render} label={`${title} for each ${rowTitle} and ${columnTitle}`} placeholderHeightPx={320} />
+      <p className="text-xs text-ink-soft">Cells outlined with a dashed line have no mechanical hours. Pale cells with a dash have not finished yet.</p>
+      <details className="text-sm">
+        <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
+        <div className="overflow-x-auto">
+          <table className="num mt-2 text-right text-xs" data-testid="heat-map-table">
+            <caption className="pb-1 text-left font-sans text-ink-soft">
+              {title}: rows {rowTitle}, columns {columnTitle}
+            </caption>
+            <thead>
+              <tr className="border-b border-rule text-ink-soft">
+                <th scope="col" className="py-1 pr-3 text-left font-sans font-medium">
+                  {rowTitle} \ {columnTitle}
+                </th>
+                {columnLabels.map((c) => (
+                  <th key={c} scope="col" className="px-2 py-1 font-sans font-medium">
+                    {c}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {rowLabels.map((r) => (
+                <tr key={r} className="border-b border-rule/60">
+                  <th scope="row" className="py-0.5 pr-3 text-left font-sans font-normal">
+                    {r}
+                  </th>
+                  {columnLabels.map((c) => (
+                    <td key={c} className="px-2 py-0.5">
+                      {cells.find((x) => x.rowLabel === r && x.columnLabel === c)?.text ?? '–'}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </details>
+    </div>
+  );
+}

@@ -1,0 +1,110 @@
+import { useCallback, useMemo } from 'react';
+import { ModeLegend } from '@/components/charts/mode-legend';
+import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
+import { useUnitSystem } from '@/lib/unit-system';
+import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
+import { metricRows, modeHoursRows, type SweepInputPath, type SweepMetric, type SweepPoint, type SweepValue, type ZeroMechanical } from '../../../../shared/sweep';
+import { displayNumber, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
+import { metricDisplay, metricTitle } from '../utils/metric-format';
+
+const plotStyle = { fontFamily: 'var(--font-sans)', fontSize: '12px' };
+
+/**
+ * The swept value on the x axis: a number in the person's units on a linear scale, or the preset's
+ * label on a band (bars) or point (lines) scale.
+ */
+function useAxis(input: SweepInputPath, points: readonly SweepPoint[]) {
+  const { unitSystem } = useUnitSystem();
+  return useMemo(() => {
+    const preset = input === 'envelope.presetId';
+    const x = (v: SweepValue) => (typeof v === 'number' ? displayNumber(input, unitSystem, v) : formatSweepValue(input, unitSystem, v));
+    const labels = points.map((p) => formatSweepValue(input, unitSystem, p.values[input]!));
+    return { preset, x, labels, title: sweepAxisTitle(input, unitSystem), unitSystem };
+  }, [input, points, unitSystem]);
+}
+
+/** Hours per mode against the swept value, stacked in the one mode palette, with the zero-mechanical point marked. */
+function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; zero: ZeroMechanical }) {
+  const axis = useAxis(input, points);
+  const rows = useMemo(() => modeHoursRows(points, input).map((r) => ({ ...r, x: axis.x(r.value), label: modeLabels[r.mode] })), [points, input, axis]);
+  const zeroX = zero.kind === 'none' ? null : axis.x(zero.value);
+  const render = useCallback(
+    (Plot: PlotModule, widthPx: number) => {
+      const colour = { domain: modeKeys.map((k) => modeLabels[k]), range: modeKeys.map((k) => modeColours[k]) };
+      const order = modeKeys.map((k) => modeLabels[k]);
+      const marker =
+        zeroX === null
+          ? []
+          : [
+              Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3', strokeWidth: 1.5 }),
+              Plot.text([zeroX], { x: (d: SweepValue) => d, frameAnchor: 'top', dy: -14, text: () => (zero.kind === 'up-to' ? '◀ no mechanical hours' : 'no mechanical hours ▶'), textAnchor: zero.kind === 'up-to' ? 'end' : 'start', fill: '#1d2327' }),
+            ];
+      return Plot.plot({
+        width: widthPx,
+        height: 300,
+        marginLeft: 60,
+        marginTop: 28,
+        style: plotStyle,
+        x: axis.preset
+          ? { type: 'band', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', padding: 0.2 }
+          : { label: axis.title, labelAnchor: 'center', labelArrow: 'none' },
+        y: { label: 'Hours over the file (h)', grid: true, labelArrow: 'up' },
+        color: colour,
+        marks: [
+          axis.preset
+            ? Plot.barY(rows, { x: 'x', y: 'hours', fill: 'label', order, tip: true })
+            : Plot.areaY(rows, { x: 'x', y: 'hours', fill: 'label', order, curve: 'linear', tip: true }),
+          Plot.ruleY([0]),
+          ...marker,
+        ],
+      });
+    },
+    [rows, axis, zeroX, zero.kind],
+  );
+  return (
+    <div className="space-y-2">
+      <ModeLegend />
+      <PlotFigure render={render} label={`Hours per mode against ${axis.title}`} placeholderHeightPx={300} />
+    </div>
+  );
+}
+
+/** One result against the swept value, as a line with a dot per finished point. */
+function MetricChart({ input, points, metric }: { input: SweepInputPath; points: readonly SweepPoint[]; metric: SweepMetric }) {
+  const axis = useAxis(input, points);
+  const rows = useMemo(() => metricRows(points, input, metric).map((r) => ({ x: axis.x(r.value), y: metricDisplay(metric, axis.unitSystem, r.metric) })), [points, input, metric, axis]);
+  const title = metricTitle(metric, axis.unitSystem);
+  const render = useCallback(
+    (Plot: PlotModule, widthPx: number) =>
+      Plot.plot({
+        width: widthPx,
+        height: 220,
+        marginLeft: 60,
+        style: plotStyle,
+        x: axis.preset ? { type: 'point', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', padding: 0.5 } : { label: axis.title, labelAnchor: 'center', labelArrow: 'none' },
+        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue' },
+        marks: [Plot.lineY(rows, { x: 'x', y: 'y', stroke: '#1f3a4a', strokeWidth: 1.5 }), Plot.dot(rows, { x: 'x', y: 'y', fill: '#1f3a4a', r: 3, tip: true })],
+      }),
+    [rows, axis, title, metric],
+  );
+  return (
+    <div>
+      <h3 className="text-sm font-medium">{title}</h3>
+      <PlotFigure render={render} label={`${title} against ${axis.title}`} placeholderHeightPx={220} />
+    </div>
+  );
+}
+
+/** The one-input sweep drawn: hours per mode, then partial PUE, water and peak mechanical load against the swept value. */
+export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; zero: ZeroMechanical }) {
+  return (
+    <div className="space-y-4">
+      <ModeHoursChart input={input} points={points} zero={zero} />
+      <div className="grid gap-4 lg:grid-cols-3">
+        <MetricChart input={input} points={points} metric="partialPue" />
+        <MetricChart input={input} points={points} metric="waterL" />
+        <MetricChart input={input} points={points} metric="peakMechanicalLoadKw" />
+      </div>
+    </div>
+  );
+}

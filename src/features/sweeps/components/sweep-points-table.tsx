@@ -1,0 +1,139 @@
+import { Link } from 'react-router-dom';
+import { downloadCsv } from '@/lib/download';
+import { toDisplay } from '@/lib/quantity';
+import { useUnitSystem } from '@/lib/unit-system';
+import { csvRow } from '../../../../shared/csv';
+import { modeColours } from '../../../../shared/modes';
+import type { SweepInputPath, SweepPoint, SweepRunStatus } from '../../../../shared/sweep';
+import { displayNumber, formatSweepValue, sweepAxisTitle, sweepUnit } from '../utils/sweep-format';
+import { formatMetric, metricUnit } from '../utils/metric-format';
+
+const statusClass: Record<SweepRunStatus, string> = {
+  queued: 'bg-mist text-ink-soft',
+  running: 'bg-mist text-harbour',
+  done: 'bg-[#e4efe8] text-signal-ok',
+  failed: 'bg-[#fbeceb] text-signal-bad',
+  cancelled: 'bg-paper text-ink-soft',
+};
+
+const hoursHeads = [
+  ['free', 'Free cooling (h)'],
+  ['adiabatic', 'Adiabatic (h)'],
+  ['mechanical', 'Mechanical (h)'],
+] as const;
+
+/** Every point with its run and results: the table beside the charts, and its CSV download in the person's units. */
+export function SweepPointsTable({ projectId, name, inputs, points }: { projectId: number; name: string; inputs: SweepInputPath[]; points: readonly SweepPoint[] }) {
+  const { unitSystem } = useUnitSystem();
+  const waterUnit = metricUnit('waterL', unitSystem);
+
+  function download() {
+    const head = csvRow([
+      'point',
+      ...inputs.map((p) => (sweepUnit(p, unitSystem) ? `${p} (${sweepUnit(p, unitSystem)})` : p)),
+      'status',
+      'free_h',
+      'adiabatic_h',
+      'mechanical_h',
+      'no_data_h',
+      'partial_pue',
+      `water_${waterUnit === 'm³' ? 'm3' : 'us_gal'}`,
+      'peak_mechanical_load_kw',
+      'run_id',
+    ]);
+    const rows = points.map((p, i) => {
+      const r = p.results;
+      return csvRow([
+        i + 1,
+        ...inputs.map((path) => {
+          const v = p.values[path]!;
+          return typeof v === 'number' ? Math.round(displayNumber(path, unitSystem, v) * 1e4) / 1e4 : v;
+        }),
+        p.status,
+        r?.hours.free,
+        r?.hours.adiabatic,
+        r?.hours.mechanical,
+        r?.hours.noData,
+        r?.partialPue === null || r === null ? null : Math.round(r.partialPue * 1e4) / 1e4,
+        r ? Math.round(toDisplay('water', unitSystem, r.waterL) * 1000) / 1000 : null,
+        r ? Math.round(r.peakMechanicalLoadKw * 10) / 10 : null,
+        p.runId,
+      ]);
+    });
+    downloadCsv(`${name.replace(/[^\w.-]+/g, '-').slice(0, 80)}-${unitSystem.toLowerCase()}.csv`, [head, ...rows].join('\r\n') + '\r\n');
+  }
+
+  return (
+    <div className="space-y-2">
+      <div className="flex justify-end">
+        <button type="button" onClick={download} className="rounded border border-rule px-2.5 py-1 text-xs hover:bg-mist">
+          Download CSV ({unitSystem})
+        </button>
+      </div>
+      <div className="overflow-x-auto">
+        <table className="w-full text-right text-sm" data-testid="sweep-table">
+          <thead>
+            <tr className="border-b border-rule text-xs text-ink-soft">
+              <th scope="col" className="py-1 text-left font-medium">
+                Point
+              </th>
+              {inputs.map((p) => (
+                <th key={p} scope="col" className="px-2 text-left font-medium">
+                  {sweepAxisTitle(p, unitSystem)}
+                </th>
+              ))}
+              <th scope="col" className="px-2 text-left font-medium">
+                Status
+              </th>
+              {hoursHeads.map(([k, label]) => (
+                <th key={k} scope="col" className="px-2 font-medium">
+                  <span aria-hidden className="mr-1 inline-block size-2.5 rounded-sm align-middle" style={{ background: modeColours[k] }} />
+                  {label}
+                </th>
+              ))}
+              <th scope="col" className="px-2 font-medium">
+                Partial PUE
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Water ({waterUnit})
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Peak mechanical (kW)
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {points.map((p, i) => (
+              <tr key={p.runId} className="border-b border-rule/60">
+                <td className="num py-1 text-left">
+                  <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 hover:underline">
+                    {i + 1} · run #{p.runId}
+                  </Link>
+                </td>
+                {inputs.map((path) => (
+                  <td key={path} className="num px-2 text-left">
+                    {formatSweepValue(path, unitSystem, p.values[path]!)}
+                  </td>
+                ))}
+                <td className="px-2 text-left">
+                  <span className={`num rounded px-1.5 py-0.5 text-xs ${statusClass[p.status]}`} title={p.error ?? undefined}>
+                    {p.status}
+                    {p.status === 'running' && ` ${Math.round(p.progress * 100)} %`}
+                  </span>
+                </td>
+                {hoursHeads.map(([k]) => (
+                  <td key={k} className="num px-2">
+                    {p.results ? p.results.hours[k].toLocaleString('en') : '–'}
+                  </td>
+                ))}
+                <td className="num px-2">{formatMetric('partialPue', unitSystem, p.results?.partialPue ?? null)}</td>
+                <td className="num px-2">{formatMetric('waterL', unitSystem, p.results?.waterL ?? null)}</td>
+                <td className="num px-2">{formatMetric('peakMechanicalLoadKw', unitSystem, p.results?.peakMechanicalLoadKw ?? null)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}
