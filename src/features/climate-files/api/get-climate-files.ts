@@ -21,6 +21,10 @@ export interface ClimateFileListing {
   lastHourMs: number;
   /** Calendar years the file covers, counted on the file's own clock (an hour ending at midnight belongs to the day before). */
   years: number[];
+  /** For a future-climate projection: the file it was made from (null once that file is deleted). */
+  parentId: number | null;
+  /** For a future-climate projection: its method and the parent's name; null for an upload. */
+  projection: { method: string; parentName: string } | null;
   createdAt: string | number;
 }
 

@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { Link } from 'react-router-dom';
 import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
 import { CarpetPlot } from '@/components/charts/carpet-plot';
 import { utcOffsetLabel } from '@/components/charts/chart-format';
@@ -74,8 +75,21 @@ function Loaded({
     <div className="space-y-5">
       <div className="flex flex-wrap items-end justify-between gap-4">
         <div>
-          <p className="text-sm text-ink-soft">Climate file · {site.name}</p>
+          <p className="text-sm text-ink-soft">
+            {file.projection && (
+              <span className="mr-2 rounded-sm border border-harbour/40 bg-mist px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wide text-harbour">Projection</span>
+            )}
+            Climate file · {site.name}
+          </p>
           <h1 className="text-xl font-semibold">{file.name}</h1>
+          {file.projection && (
+            <p className="text-sm text-ink-soft">
+              A future-climate projection of {file.projection.parentName}, not measured weather.{' '}
+              <Link to={`/projects/${projectId}/projections/${fileId}`} className="text-harbour underline-offset-2 hover:underline">
+                Today and the projection side by side
+              </Link>
+            </p>
+          )}
         </div>
         <div className="flex flex-wrap gap-2 text-sm">
           <a className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist" href={`${base}/original`} download>
@@ -84,6 +98,11 @@ function Loaded({
           <a className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist" href={`${base}/hourly.csv`} download>
             Cleaned hourly CSV
           </a>
+          {canEdit && !file.projection && (
+            <Link to={`/projects/${projectId}/projections/new?from=${fileId}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+              Make a future-climate projection
+            </Link>
+          )}
           {canEdit && <DeleteClimateFile projectId={projectId} fileId={fileId} name={file.name} onDeleted={onDeleted} />}
         </div>
       </div>

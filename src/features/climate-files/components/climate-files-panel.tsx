@@ -59,6 +59,14 @@ export function ClimateFilesPanel({
                     <Link to={`/projects/${projectId}/climate-files/${f.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
                       {f.name}
                     </Link>
+                    {f.projection && (
+                      <span
+                        title={`Future-climate projection of ${f.projection.parentName} (${f.projection.method}), not measured weather`}
+                        className="ml-2 rounded-sm border border-harbour/40 bg-mist px-1 py-px text-[0.68rem] font-semibold uppercase tracking-wide text-harbour"
+                      >
+                        Projection
+                      </span>
+                    )}
                   </td>
                   <td className="px-2 text-ink-soft">{f.siteName}</td>
                   <td className="num px-2 text-right">{a === b ? a : `${a}–${b}`}</td>
