@@ -13,6 +13,7 @@ import { RunInputs } from './run-inputs';
 import { RunStatus } from './run-status';
 import { YearTable } from './year-table';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
+import { DownloadMenu, runDownloadLinks } from '@/components/ui/download-menu';
 
 const statusStyle: Record<RunRecord['status'], string> = {
   queued: 'bg-mist text-ink',
@@ -71,6 +72,7 @@ export function RunPage() {
               <Link to={`/projects/${projectId}/runs/${run.id}/report`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
                 Report
               </Link>
+              <DownloadMenu links={runDownloadLinks(`/api/projects/${projectId}/runs/${run.id}/downloads`)} />
             </>
           )}
         </div>

@@ -1,0 +1,40 @@
+export interface DownloadLink {
+  label: string;
+  href: string;
+  /** A short line under the label: what is in the file. */
+  note?: string;
+}
+
+/**
+ * A small menu of file downloads: plain links the server answers with an attachment, so the browser
+ * saves the file under the name the server gives. Not printed.
+ */
+export function DownloadMenu({ links, label = 'Download' }: { links: DownloadLink[]; label?: string }) {
+  return (
+    <details className="relative print:hidden" data-testid="download-menu">
+      <summary className="cursor-pointer list-none rounded border border-rule bg-panel px-3 py-1.5 text-sm hover:bg-mist [&::-webkit-details-marker]:hidden">
+        {label} <span aria-hidden>▾</span>
+      </summary>
+      <ul className="absolute right-0 z-20 mt-1 w-72 rounded-md border border-rule bg-panel p-1 text-sm shadow-lg">
+        {links.map((link) => (
+          <li key={link.href}>
+            <a href={link.href} download className="block rounded px-3 py-1.5 hover:bg-mist focus-visible:bg-mist">
+              {link.label}
+              {link.note && <span className="block text-xs text-ink-soft">{link.note}</span>}
+            </a>
+          </li>
+        ))}
+      </ul>
+    </details>
+  );
+}
+
+/** The downloads of one run: hourly results and the summary, as CSV and JSON. */
+export function runDownloadLinks(base: string, query = ''): DownloadLink[] {
+  return [
+    { label: 'Hourly results (CSV)', href: `${base}/hourly.csv${query}`, note: 'one row per hour, the command line’s columns, SI' },
+    { label: 'Hourly results (JSON)', href: `${base}/hourly.json${query}`, note: 'the same columns, one array each' },
+    { label: 'Summary (CSV)', href: `${base}/summary.csv${query}`, note: 'every figure of the report, SI' },
+    { label: 'Summary (JSON)', href: `${base}/summary.json${query}`, note: 'the report data and its figures' },
+  ];
+}

@@ -1,0 +1,181 @@
+import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
+import { hoursOfMode, monthShort } from '@/components/charts/monthly-mode-rows';
+import { ResultCautions } from '@/components/ui/result-cautions';
+import { formatQuantity } from '@/lib/quantity';
+import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
+import { modeKeys, modeLabels } from '../../../../shared/modes';
+import type { ComparisonReportData, ReportRun } from '../../../../shared/report/report-data';
+import { comparisonRows, type ComparisonRow } from '../../../../shared/report/summary-table';
+import { ClimateFacts, SiteFacts } from './climate-facts';
+import { EnvelopeFacts } from './envelope-facts';
+import { InputsTable } from './inputs-table';
+import { MethodSection, ModelLimits } from './method-section';
+import { dateTime, day, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
+import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
+import { ModeShareBar } from './results-tables';
+
+function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
+  if (value === null) return '–';
+  const sign = signed && value > 0 ? '+' : '';
+  switch (unit) {
+    case 'h':
+      return `${sign}${hours(value)}`;
+    case 'kWh':
+      return `${sign}${mwh(value)}`;
+    case 'kW':
+      return `${sign}${kw(value)}`;
+    case 'L':
+      return `${sign}${formatQuantity('water', system, value)}`;
+    case 'L/kWh':
+      return `${sign}${ratio(value)} L/kWh`;
+    default:
+      return `${sign}${ratio(value)}`;
+  }
+}
+
+function verdict(row: ComparisonRow, difference: number | null): string {
+  if (difference === null || difference === 0 || row.better === 'none') return 'text-ink-soft';
+  return (difference > 0) === (row.better === 'higher') ? 'text-signal-ok' : 'text-signal-bad';
+}
+
+const runLabel = (run: ReportRun, baselineId: number) => `Run ${run.id}${run.id === baselineId ? ' (baseline)' : ''}`;
+
+/** The printable report of a comparison: the runs side by side against the baseline, with what each was run on. */
+export function ComparisonReportDocument({ report, linkTitle }: { report: ComparisonReportData; linkTitle?: string }) {
+  const { unitSystem } = useUnitSystem();
+  const { runs, baselineId } = report;
+  const rows = comparisonRows(runs, baselineId);
+  // Runs on the same file show its validation once.
+  const files = runs.filter((run, i) => runs.findIndex((other) => other.climate.sha256 === run.climate.sha256 && other.site.name === run.site.name) === i);
+  return (
+    <ReportSheet>
+      <header className="space-y-1 border-b-2 border-harbour pb-3">
+        <p className="text-xs uppercase tracking-wider text-ink-soft">Tramontane · comparison report{linkTitle ? ` · ${linkTitle}` : ''}</p>
+        <h1 className="text-2xl font-semibold text-ink" data-testid="report-title">
+          {runs.length} runs compared against run {baselineId}
+        </h1>
+        <p className="text-sm text-ink-soft">
+          {report.projectName} · generated {dateTime(report.generatedAt)} · units {unitSystem}
+        </p>
+      </header>
+
+      <ReportSection id="job" title="1. The job">
+        <p className="text-sm leading-relaxed">
+          How do these cooling designs compare in hours of free cooling, adiabatic assist and mechanical cooling, and in energy, water and peak
+          mechanical load, against the baseline run {baselineId}?
+        </p>
+        <ReportTable
+          testId="report-runs"
+          head={['Run', 'Scenario', 'Cooling design', 'Site · climate file', 'Envelope']}
+          rows={runs.map((run) => ({
+            key: String(run.id),
+            cells: [
+              runLabel(run, baselineId),
+              <span className="font-sans">{run.scenario.name}</span>,
+              <span className="font-sans text-xs">{systemInWords(run)}</span>,
+              <span className="font-sans text-xs">
+                {run.site.name} · {run.climate.name} ({day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)})
+              </span>,
+              <span className="font-sans text-xs">{run.envelope.label}</span>,
+            ],
+          }))}
+        />
+      </ReportSection>
+
+      <ReportSection id="compared" title="2. Side by side">
+        <table className="w-full text-sm" data-testid="report-comparison">
+          <thead>
+            <tr className="border-b border-rule align-bottom text-xs text-ink-soft">
+              <th scope="col" className="py-1 pr-2 text-left font-medium">Figure</th>
+              {runs.map((run) => (
+                <th key={run.id} scope="col" className="px-2 py-1 text-right font-medium">
+                  <span className="block text-ink">{runLabel(run, baselineId)}</span>
+                  <span className="block font-normal">{run.scenario.name}</span>
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            <tr className="border-b border-rule/60">
+              <th scope="row" className="py-1 pr-2 text-left font-normal">Share of hours</th>
+              {runs.map((run) => (
+                <td key={run.id} className="px-2 py-1">
+                  <ModeShareBar h={run.results.hours} />
+                </td>
+              ))}
+            </tr>
+            {rows.map((row) => (
+              <tr key={row.key} className="border-b border-rule/60">
+                <th scope="row" className="py-1 pr-2 text-left font-normal">{row.figure}</th>
+                {row.cells.map((cell) => (
+                  <td key={cell.runId} className="num px-2 py-1 text-right">
+                    <span className="block">{figure(row.unit, unitSystem, cell.value)}</span>
+                    {cell.difference !== null && <span className={`block text-xs ${verdict(row, cell.difference)}`}>{figure(row.unit, unitSystem, cell.difference, true)}</span>}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        <p className="text-xs text-ink-soft">
+          Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours
+          of data so files of different lengths compare.
+        </p>
+      </ReportSection>
+
+      <ReportSection id="monthly" title="3. By month" newPage>
+        <MonthlyComparisonChart series={runs.map((run) => ({ runId: run.id, hoursByMonth: run.results.hoursByMonth }))} withTable={false} />
+        <ReportTable
+          testId="report-monthly-comparison"
+          caption={`Hours per month: ${modeKeys.slice(0, 3).map((k) => modeLabels[k].toLowerCase()).join(' / ')}`}
+          head={['Month', ...runs.map((run) => `Run ${run.id}`)]}
+          rows={monthShort.map((name, i) => ({
+            key: name,
+            cells: [
+              name,
+              ...runs.map((run) => {
+                const m = run.results.hoursByMonth.find((row) => row.month === i + 1);
+                return m ? modeKeys.slice(0, 3).map((k) => hoursOfMode(m, k)).join(' / ') : '–';
+              }),
+            ],
+          }))}
+        />
+      </ReportSection>
+
+      <ReportSection id="sites" title="4. Sites and climate files" newPage>
+        {files.map((run) => (
+          <div key={run.id} className="space-y-2">
+            <SubHeading>
+              {run.site.name} · {run.climate.name} (runs {runs.filter((r) => r.climate.sha256 === run.climate.sha256 && r.site.name === run.site.name).map((r) => r.id).join(', ')})
+            </SubHeading>
+            <SiteFacts run={run} unitSystem={unitSystem} />
+            <ClimateFacts run={run} />
+          </div>
+        ))}
+      </ReportSection>
+
+      <ReportSection id="envelopes" title="5. Inlet envelopes">
+        {runs.map((run) => (
+          <div key={run.id} className="keep-together space-y-1">
+            <SubHeading>{runLabel(run, baselineId)}</SubHeading>
+            <EnvelopeFacts run={run} unitSystem={unitSystem} />
+          </div>
+        ))}
+      </ReportSection>
+
+      <ReportSection id="inputs" title="6. Scenario inputs" newPage>
+        <p className="text-xs text-ink-soft">Exactly as run; field names as in the scenario JSON; rows where the runs differ are marked.</p>
+        <InputsTable runs={runs} unitSystem={unitSystem} />
+      </ReportSection>
+
+      <ReportSection id="method" title="7. Method and sources" newPage>
+        <MethodSection runs={runs} />
+      </ReportSection>
+
+      <ReportSection id="cautions" title="8. Cautions">
+        <ResultCautions systemKind={runs.some((r) => r.scenario.system.kind === 'direct-air') ? 'direct-air' : runs[0].scenario.system.kind} evaporative={runs.some(usesWater)} />
+        <ModelLimits />
+      </ReportSection>
+    </ReportSheet>
+  );
+}

@@ -1,0 +1,67 @@
+import { formatQuantity } from '@/lib/quantity';
+import type { UnitSystem } from '@/lib/unit-system';
+import { flattenInputs, type InputRow } from '../../../../shared/report/inputs';
+import type { ReportRun } from '../../../../shared/report/report-data';
+import { ReportTable, SubHeading } from './report-layout';
+
+function shown(row: InputRow | undefined, system: UnitSystem): string {
+  if (!row) return '–';
+  if (typeof row.value !== 'number') return String(row.value);
+  switch (row.kind) {
+    case 'plain':
+      return String(row.value);
+    case 'percent':
+      return `${row.value} %`;
+    case 'power':
+      return `${row.value.toLocaleString('en')} kW`;
+    default:
+      return formatQuantity(row.kind, system, row.value);
+  }
+}
+
+const groups = [
+  { prefix: 'system.', title: 'Cooling system' },
+  { prefix: 'envelope.', title: 'Inlet envelope' },
+  { prefix: 'energy.', title: 'Energy and water' },
+  { prefix: '', title: 'Scenario' },
+];
+
+/**
+ * The scenario inputs exactly as run, by group, field names as in the scenario JSON. With several runs,
+ * one column each, and the rows where they differ marked.
+ */
+export function InputsTable({ runs, unitSystem }: { runs: ReportRun[]; unitSystem: UnitSystem }) {
+  const perRun = runs.map((run) => new Map(flattenInputs(run.scenario).map((row) => [row.path, row])));
+  const paths = [...new Set(perRun.flatMap((m) => [...m.keys()]))].filter((p) => p !== 'name');
+  const several = runs.length > 1;
+  return (
+    <div className="grid gap-x-8 gap-y-4 md:grid-cols-2 print:grid-cols-2" data-testid="report-inputs">
+      {groups.map((group) => {
+        const inGroup = paths.filter((p) => (group.prefix ? p.startsWith(group.prefix) : !p.includes('.')));
+        if (inGroup.length === 0) return null;
+        return (
+          <div key={group.title} className={`keep-together ${several ? 'md:col-span-2 print:col-span-2' : ''}`}>
+            <SubHeading>{group.title}</SubHeading>
+            <ReportTable
+              head={['Input', ...(several ? runs.map((r) => `Run ${r.id}`) : ['Value'])]}
+              rows={inGroup.map((path) => {
+                const values = perRun.map((m) => shown(m.get(path), unitSystem));
+                const differs = several && new Set(values).size > 1;
+                return {
+                  key: path,
+                  cells: [
+                    <span className="num text-xs">
+                      {path.slice(group.prefix.length)}
+                      {differs && <span className="ml-1 rounded bg-mist px-1 font-sans text-[10px] text-ink">differs</span>}
+                    </span>,
+                    ...values,
+                  ],
+                };
+              })}
+            />
+          </div>
+        );
+      })}
+    </div>
+  );
+}

@@ -1,0 +1,39 @@
+import type { ReportRun } from '../../../../shared/report/report-data';
+
+const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
+
+export const hours = (h: number) => `${h.toLocaleString('en')} h`;
+export const share = (part: number, whole: number) => `${whole > 0 ? fixed((100 * part) / whole, 1) : '0.0'} %`;
+export const mwh = (kwh: number | null | undefined) => (kwh === null || kwh === undefined ? '–' : `${fixed(kwh / 1000, 1)} MWh`);
+export const kw = (v: number) => `${fixed(v, 0)} kW`;
+export const ratio = (v: number | null | undefined, digits = 3) => (v === null || v === undefined ? '–' : fixed(v, digits));
+export const day = (ms: number | string) => new Date(ms).toISOString().slice(0, 10);
+export const dateTime = (iso: string) => `${iso.slice(0, 16).replace('T', ' ')} UTC`;
+
+const systemWords: Record<ReportRun['scenario']['system']['kind'], string> = {
+  'direct-air': 'direct outdoor air',
+  'indirect-air': 'an indirect air-to-air heat exchanger',
+  'water-side': 'a water-side economiser',
+};
+
+/** The cooling design in words: "direct outdoor air with an evaporative stage (ε 0.85)". */
+export function systemInWords(run: ReportRun): string {
+  const s = run.scenario.system;
+  let words = systemWords[s.kind];
+  if (s.kind === 'water-side') words += s.heatRejection === 'cooling-tower' ? ' on a cooling tower' : ' on a dry cooler';
+  if (s.evaporativeEffectiveness > 0) words += ` with an evaporative stage (effectiveness ${s.evaporativeEffectiveness})`;
+  return words;
+}
+
+/** Whether any water is evaporated: an evaporative stage or a cooling tower. */
+export function usesWater(run: ReportRun): boolean {
+  const s = run.scenario.system;
+  return s.evaporativeEffectiveness > 0 || (s.kind === 'water-side' && s.heatRejection === 'cooling-tower');
+}
+
+export const humidityWords: Record<string, string> = {
+  'relative-humidity-pct': 'relative humidity',
+  'dew-point-c': 'dew point',
+  'wet-bulb-c': 'wet-bulb',
+  'humidity-ratio-kgkg': 'humidity ratio',
+};

@@ -1,0 +1,121 @@
+import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
+import { Notice } from '@/components/ui/notice';
+import { ResultCautions } from '@/components/ui/result-cautions';
+import { useUnitSystem } from '@/lib/unit-system';
+import type { RunReportData } from '../../../../shared/report/report-data';
+import { ClimateFacts, SiteFacts } from './climate-facts';
+import { EnvelopeFacts } from './envelope-facts';
+import { InputsTable } from './inputs-table';
+import { MethodSection, ModelLimits } from './method-section';
+import { dateTime, day, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
+import { ReportSection, ReportSheet, SubHeading } from './report-layout';
+import { EnergyTable, ExcursionFacts, ModeHoursTable, MonthlyTable, WaterTable, YearTable } from './results-tables';
+
+function Headline({ label, value, note }: { label: string; value: string; note?: string }) {
+  return (
+    <div className="rounded border border-rule px-3 py-2">
+      <p className="text-xs text-ink-soft">{label}</p>
+      <p className="num text-lg font-semibold">{value}</p>
+      {note && <p className="text-xs text-ink-soft">{note}</p>}
+    </div>
+  );
+}
+
+/** The printable report of one run: what was asked, from what, what came out, how, and with which cautions. */
+export function RunReportDocument({ report, linkTitle }: { report: RunReportData; linkTitle?: string }) {
+  const { unitSystem } = useUnitSystem();
+  const run = report.run;
+  const r = run.results;
+  const h = r.hours;
+  return (
+    <ReportSheet>
+      <header className="space-y-1 border-b-2 border-harbour pb-3">
+        <p className="text-xs uppercase tracking-wider text-ink-soft">Tramontane · cooling-hours report{linkTitle ? ` · ${linkTitle}` : ''}</p>
+        <h1 className="text-2xl font-semibold text-ink" data-testid="report-title">{run.scenario.name}</h1>
+        <p className="text-sm text-ink-soft">
+          {report.projectName} · run {run.id} · {run.site.name} · {run.climate.name} · generated {dateTime(report.generatedAt)} · units {unitSystem}
+        </p>
+      </header>
+
+      <ReportSection id="job" title="1. The job">
+        <p className="text-sm leading-relaxed">
+          How many hours from {day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)} can the IT halls at {run.site.name} be cooled by{' '}
+          {systemInWords(run)} with outside air or water alone (free cooling), with evaporative help (adiabatic assist), or only with
+          compressors (mechanical), keeping the IT inlet within {run.envelope.label}; and what that means in energy, water and peak mechanical
+          load.
+        </p>
+        <div className="grid grid-cols-3 gap-2 print:grid-cols-3" data-testid="report-headline">
+          <Headline label="Free cooling" value={hours(h.free)} note={share(h.free, h.total)} />
+          <Headline label="Adiabatic assist" value={hours(h.adiabatic)} note={share(h.adiabatic, h.total)} />
+          <Headline label="Mechanical" value={hours(h.mechanical)} note={share(h.mechanical, h.total)} />
+          <Headline label="Partial PUE (cooling)" value={ratio(r.energy.partialPue)} note="(IT + cooling) / IT energy" />
+          <Headline label="WUE" value={r.water.wueLPerKwh === null ? '–' : `${ratio(r.water.wueLPerKwh)} L/kWh`} note="site water per IT energy" />
+          <Headline label="Peak mechanical load" value={kw(r.peakMechanicalLoadKw)} note="thermal" />
+        </div>
+        {r.warnings.length > 0 && (
+          <Notice tone="warn" title="Notes from the engine">
+            <ul className="list-disc pl-5">
+              {r.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
+          </Notice>
+        )}
+      </ReportSection>
+
+      <ReportSection id="site" title="2. Site and climate file">
+        <SiteFacts run={run} unitSystem={unitSystem} />
+        <ClimateFacts run={run} />
+      </ReportSection>
+
+      <ReportSection id="envelope" title="3. Inlet envelope">
+        <EnvelopeFacts run={run} unitSystem={unitSystem} />
+      </ReportSection>
+
+      <ReportSection id="inputs" title="4. Scenario inputs" newPage>
+        <p className="text-xs text-ink-soft">Exactly as run; field names as in the scenario JSON.</p>
+        <InputsTable runs={[run]} unitSystem={unitSystem} />
+      </ReportSection>
+
+      <ReportSection id="results" title="5. Results" newPage>
+        <div className="grid gap-6 md:grid-cols-[20rem_1fr] print:grid-cols-[18rem_1fr]">
+          <div className="space-y-3">
+            <SubHeading>Hours per mode</SubHeading>
+            <ModeHoursTable results={r} />
+          </div>
+          <div className="space-y-3">
+            <SubHeading>Runs and excursions</SubHeading>
+            <ExcursionFacts results={r} />
+          </div>
+        </div>
+        <SubHeading>By month</SubHeading>
+        <MonthlyModeChart byMonth={r.hoursByMonth} zoneLabel={utcOffsetLabel(run.site.utcOffsetMinutes)} withTable={false} />
+        <MonthlyTable byMonth={r.hoursByMonth} />
+        <div className="keep-together space-y-2">
+          <SubHeading>By year</SubHeading>
+          <YearTable years={r.hoursByYear} unitSystem={unitSystem} />
+        </div>
+        <div className="grid gap-6 md:grid-cols-2 print:grid-cols-2">
+          <div className="keep-together space-y-2">
+            <SubHeading>Energy</SubHeading>
+            <EnergyTable results={r} />
+          </div>
+          <div className="keep-together space-y-2">
+            <SubHeading>Water</SubHeading>
+            <WaterTable results={r} unitSystem={unitSystem} />
+          </div>
+        </div>
+      </ReportSection>
+
+      <ReportSection id="method" title="6. Method and sources" newPage>
+        <MethodSection runs={[run]} />
+      </ReportSection>
+
+      <ReportSection id="cautions" title="7. Cautions">
+        <ResultCautions systemKind={run.scenario.system.kind} evaporative={usesWater(run)} />
+        <ModelLimits />
+      </ReportSection>
+    </ReportSheet>
+  );
+}
