@@ -26,13 +26,13 @@ export function ExcursionFigures({ data }: { data: ExcursionsResponse }) {
   return (
     <div className="grid gap-3 sm:grid-cols-2 xl:grid-cols-4" data-testid="excursion-figures">
       <Figure
-        label={`Inside the recommended range (${data.proposal.recommended.label})`}
+        label={`Inside the recommended range: ${data.proposal.recommended.label}`}
         value={`${hoursText(a.insideRecommendedHours)} h`}
         detail={`${percentText(a.insideRecommendedHours, a.dataHours)} of ${hoursText(a.dataHours)} hours with data`}
         tone="ok"
       />
       <Figure
-        label={`Outside recommended, inside the allowable class (${data.proposal.allowable.label})`}
+        label={`Outside recommended, inside allowable: ${data.proposal.allowable.label}`}
         value={`${hoursText(a.outsideRecommendedHours)} h`}
         detail={`${percentText(a.outsideRecommendedHours, a.dataHours)} of hours with data`}
         tone={a.outsideRecommendedHours > 0 ? 'warn' : 'ok'}

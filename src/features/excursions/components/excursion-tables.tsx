@@ -29,7 +29,7 @@ export function EventHistogram({ data }: { data: ExcursionsResponse }) {
             <th scope="row" className="py-0.5 text-left font-normal">{binLabel(bin)}</th>
             <td className="num px-2 py-0.5 text-right">{hoursText(counts[i])}</td>
             <td className="px-2 py-0.5">
-              <div className="h-3 rounded-sm bg-harbour print:border print:border-ink" style={{ width: `${(100 * counts[i]) / most}%` }} aria-hidden />
+              {counts[i] > 0 && <div className="h-3 rounded-sm bg-harbour print:border print:border-ink" style={{ width: `${(100 * counts[i]) / most}%` }} aria-hidden />}
             </td>
           </tr>
         ))}

@@ -90,7 +90,7 @@ function Results({ data, proposal, busy, onSubmit }: { data: ExcursionsResponse;
         <strong>Proposal:</strong> supply setpoint {t(p.supplyAirC)}
         {p.supplyAirC !== data.run.supplyAirC && <> (the run has {t(data.run.supplyAirC)})</>}
         {p.floatUpToC !== null ? <>, floating up to {t(data.analysis.applied.ceilingC)} before evaporative cooling or compressors start</> : <>, held</>}; controls
-        work to {p.control.label}; checked against {p.recommended.label} and {p.allowable.label}.
+        work to {p.control.id === 'run' ? "the run's envelope" : p.control.label}; checked against {p.recommended.label} and {p.allowable.label}.
       </p>
       <ExcursionFigures data={data} />
       <div className="grid gap-4 xl:grid-cols-3">

@@ -57,7 +57,7 @@ export function MethodNotes({ data }: { data: ExcursionsResponse }) {
         15-minute limit, cannot be seen in hourly data, and the modelled supply moves in steps a real control loop would smooth.
       </p>
       <p>
-        <strong className="text-ink">X-factor.</strong> The hourly relative failure rate from the table below, averaged over the hours with data.
+        <strong className="text-ink">X-factor.</strong> The hourly relative failure rate from the X-factor table above, averaged over the hours with data.
       </p>
     </div>
   );

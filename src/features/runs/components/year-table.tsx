@@ -21,7 +21,7 @@ const statRows: { label: string; title: string; cell: (s: MetricStatistics) => Y
   { label: 'Median year', title: '50th percentile, nearest rank', cell: (s) => s.median },
   { label: 'P10 year', title: '10th percentile, nearest rank', cell: (s) => s.p10 },
   { label: 'P90 year', title: '90th percentile, nearest rank', cell: (s) => s.p90 },
-  { label: 'Spread, min–max', title: 'largest minus smallest full year', cell: (s) => ({ value: s.range }) },
+  { label: 'Spread (max − min)', title: 'largest minus smallest full year', cell: (s) => ({ value: s.range }) },
   { label: 'Standard deviation', title: 'sample standard deviation over the full years (divisor N − 1)', cell: (s) => ({ value: s.standardDeviation }) },
 ];
 

@@ -1,0 +1,157 @@
+import { readFileSync } from 'node:fs';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import path from 'node:path';
+import { screenshotFolder, startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+
+// Three synthetic years for an invented mild maritime site (sample-weather/generate.ts; labelled synthetic in the file).
+const threeYears = readFileSync(new URL('../../sample-weather/kelderwick-point.csv', import.meta.url));
+const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+
+let h: BrowserHarness;
+let operator: TestPerson;
+let projectId: number;
+const runIds: number[] = [];
+const pageErrors: string[] = [];
+
+async function api<T>(method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
+  const res = await fetch(`${h.baseUrl}/api${path}`, {
+    method,
+    headers: { cookie: operator.cookie, 'x-tramontane-request': '1', 'content-type': type },
+    body,
+  });
+  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+
+/** The unit system is remembered per person on the server and in the browser; set both, as the settings toggle does. */
+async function useUnits(page: Page, system: 'SI' | 'IP') {
+  await api('PATCH', '/me', JSON.stringify({ unitSystem: system.toLowerCase() }));
+  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
+  await page.reload();
+}
+
+/** A close-up of the panel holding `testId`, for reading figures the full page shrinks. */
+async function panelShot(testId: string, name: string) {
+  await h.page.locator('section', { has: h.page.getByTestId(testId) }).screenshot({ path: path.join(screenshotFolder, `${name}.png`) });
+}
+
+async function shot(name: string) {
+  await h.page.evaluate(() => window.scrollTo(0, 0));
+  return h.screenshot(name);
+}
+
+beforeAll(async () => {
+  h = await startBrowserHarness();
+  operator = personWithSession(h.testApp.db, 'wren.okafor@example.test');
+  projectId = projectWithMembers(h.testApp.db, 'North hall setpoint review', [[operator, 'engineer']]);
+  const { site } = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 20, timeZone: 'UTC' }));
+  const { climateFile } = await api<{ climateFile: { id: number } }>('POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  for (const supplyAirC of [25, 20]) {
+    const { scenario } = await api<{ scenario: { id: number } }>(
+      'POST',
+      `/projects/${projectId}/scenarios`,
+      JSON.stringify({ scenario: { ...directAirSample, name: `Direct air, ${supplyAirC} °C supply`, system: { ...directAirSample.system, supplyAirC } } }),
+    );
+    const { runs } = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }));
+    runIds.push(runs[0].id);
+  }
+  await h.testApp.runQueue.idle();
+  h.page.on('pageerror', (error) => pageErrors.push(error.message));
+  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
+  const [name, value] = operator.cookie.split('=');
+  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+  await h.page.goto(h.baseUrl);
+  await useUnits(h.page, 'SI');
+}, 120_000);
+afterAll(() => h?.close());
+afterEach(() => {
+  expect(pageErrors.splice(0).join('\n')).toBe('');
+});
+
+describe('year-to-year statistics of a three-year file', () => {
+  it('shows median, P10, P90 and worst years on the run page, in SI and IP', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runIds[1]}`);
+    await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
+    const stats = await page.getByTestId('year-statistics').innerText();
+    expect(stats).toContain('Median year');
+    expect(stats).toContain('P90 year');
+    expect(stats).toContain('Standard deviation');
+    const notes = await page.getByTestId('year-notes').innerText();
+    expect(notes).toMatch(/Worst year: \d{4}/);
+    expect(notes).toContain('nearest rank');
+    // The file covers 2021–2023 whole (synthetic, hourly), so no year is set aside as partial.
+    expect(notes).toContain('over 3 full calendar years');
+    expect(notes).not.toContain('Left out as partial');
+    await shot('run-year-statistics-si');
+    await panelShot('year-table', 'run-year-statistics-panel-si');
+    await useUnits(page, 'IP');
+    await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
+    await panelShot('year-table', 'run-year-statistics-panel-ip');
+    await useUnits(page, 'SI');
+  });
+
+  it('shows each run\'s mechanical-hour spread on the compare page', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/compare?runs=${runIds.join(',')}`);
+    const table = page.getByTestId('year-spread-table');
+    await table.waitFor({ timeout: 20_000 });
+    await expect.poll(() => table.innerText()).toMatch(/Run \d+[\s\S]*Run \d+/);
+    expect(await table.innerText()).not.toContain('loading');
+    await shot('compare-year-spread-si');
+    await panelShot('year-spread-table', 'compare-year-spread-panel-si');
+  });
+});
+
+describe('an operator checking a proposed setpoint for excursions', () => {
+  it('works out a floating supply, in SI and IP, and prints without the navigation', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runIds[1]}/excursions`);
+    await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
+    // The run's own 20 °C setpoint, held: mixing keeps every hour at 20 °C or a coil holds it, so inside 18–27 °C for dry-bulb.
+    expect(await page.getByTestId('proposal-summary').innerText()).toContain('supply setpoint 20.0 °C');
+
+    // Propose letting the supply float up to 30 °C (typed in SI).
+    await page.getByLabel('Let the supply float up before evaporative cooling or compressors start').check();
+    await page.getByLabel('Float up to').fill('30');
+    await page.getByRole('button', { name: 'Work it out' }).click();
+    await page.waitForURL(/floatUpToC=30/);
+    await expect.poll(() => page.getByTestId('proposal-summary').innerText(), { timeout: 30_000 }).toContain('floating up to 30.0 °C');
+    const figures = await page.getByTestId('excursion-figures').innerText();
+    expect(figures).toContain('Longest consecutive excursion');
+    expect(figures).toMatch(/Time-weighted X-factor[\s\S]*\d\.\d{3}/);
+    expect(await page.getByTestId('x-factor-table').innerText()).toContain('1.00');
+    expect(await page.getByText('Recalled from memory').first().isVisible()).toBe(true);
+    expect(await page.getByTestId('method-notes').innerText()).toContain('only the hourly limit can');
+    expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
+    await shot('excursions-si');
+
+    await useUnits(page, 'IP');
+    await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
+    // 30 °C is 86 °F; the limit of 20 K/h is 36 °F/h.
+    expect(await page.getByTestId('proposal-summary').innerText()).toContain('86.0 °F');
+    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 °F/h');
+    await shot('excursions-ip');
+
+    // A setpoint typed in °F travels in SI: 77 °F is 25 °C.
+    await page.getByLabel('Supply setpoint at the IT inlet').fill('77');
+    await page.getByRole('button', { name: 'Work it out' }).click();
+    await page.waitForURL(/supplyAirC=25(&|$)/);
+    await expect.poll(() => page.getByTestId('proposal-summary').innerText(), { timeout: 30_000 }).toContain('supply setpoint 77.0 °F');
+    // A ceiling below the setpoint is refused beside the field, without a request.
+    await page.getByLabel('Float up to').fill('70');
+    await page.getByRole('button', { name: 'Work it out' }).click();
+    await expect.poll(() => page.getByText('Enter a ceiling at or above the setpoint.').isVisible()).toBe(true);
+
+    await useUnits(page, 'SI');
+    await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('header.bg-harbour').isVisible()).toBe(false);
+    expect(await page.getByRole('button', { name: 'Work it out' }).isVisible()).toBe(false);
+    expect(await page.getByTestId('excursion-figures').isVisible()).toBe(true);
+    await shot('excursions-print');
+    await page.emulateMedia({ media: 'screen' });
+  });
+});
