@@ -28,7 +28,7 @@ export function FactorTableEditor({
   ];
   const rowErrors = errors.factors?.months;
   return (
-    <table className="w-full text-sm" data-testid="factor-table">
+    <table className="w-full max-w-3xl text-sm" data-testid="factor-table">
       <thead>
         <tr className="border-b border-rule text-xs text-ink-soft">
           <th scope="col" className="py-1 text-left font-medium">Month</th>

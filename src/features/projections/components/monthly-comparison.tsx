@@ -68,7 +68,10 @@ export function MonthlyComparison({ today, projection }: { today: MonthlyClimate
       </div>
       <PlotFigure render={render} label={`Monthly ${views.find((v) => v.value === view)!.label.toLowerCase()}, today and projection`} placeholderHeightPx={300} />
       <div className="overflow-x-auto">
-        <table className="w-full text-right text-sm" data-testid="projection-monthly-table">
+        <table className="w-full table-fixed text-right text-sm" data-testid="projection-monthly-table">
+          <colgroup>
+            <col className="w-16" />
+          </colgroup>
           <caption className="pb-1 text-left text-xs text-ink-soft">
             {views.find((v) => v.value === view)!.label} by month on the site's standard time, {unit}
             {view === 'specificHumidity' && ' of moist air'}
@@ -127,8 +130,9 @@ function chart(Plot: PlotModule, widthPx: number, a: Row[], b: Row[], view: View
     width: widthPx,
     height: 300,
     marginLeft: 52,
+    marginBottom: 44,
     style: { fontSize: '12px', fontFamily: 'inherit' },
-    x: { domain: [1, 12], ticks: 12, tickFormat: (m: number) => monthNames[m - 1], label: 'Month (site standard time)' },
+    x: { domain: [1, 12], inset: 14, ticks: 12, tickFormat: (m: number) => monthNames[m - 1], label: 'Month (site standard time)', labelAnchor: 'center', labelOffset: 38 },
     y: { label: `${label} (${unitOf(kind, system)})`, grid: true },
     marks: [
       Plot.areaY(today, { x: 'month', y1: 'low', y2: 'high', fill: TODAY, fillOpacity: 0.12 }),

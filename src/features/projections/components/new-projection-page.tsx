@@ -16,6 +16,7 @@ import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi, type FactorForm
 import { FactorTableEditor } from './factor-table-editor';
 import { MonthlyComparison } from './monthly-comparison';
 import { ProjectionCaution } from './projection-caution';
+import { UnitsSwitch } from './units-switch';
 
 /** /projects/:projectId/projections/new?from=FILEID — change factors in, a preview, then a stored projection. */
 export function NewProjectionPage() {
@@ -30,7 +31,10 @@ export function NewProjectionPage() {
     <div className="space-y-4">
       <header>
         <ProjectCrumb projectId={projectId} />
-        <h1 className="text-xl font-semibold">Make a future-climate projection</h1>
+        <div className="flex flex-wrap items-center justify-between gap-3">
+          <h1 className="text-xl font-semibold">Make a future-climate projection</h1>
+          <UnitsSwitch />
+        </div>
         {parent && (
           <p className="text-sm text-ink-soft">
             From <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">{parent.name}</Link> · {parent.siteName} ·{' '}

@@ -9,6 +9,7 @@ import { FactorsView } from './factors-view';
 import { MonthlyComparison } from './monthly-comparison';
 import { ProjectionCaution } from './projection-caution';
 import { RunOnBothPanel } from './run-on-both-panel';
+import { UnitsSwitch } from './units-switch';
 
 /** /projects/:projectId/projections/:fileId — today and the projection side by side, the factors, and runs on both. */
 export function ProjectionPage() {
@@ -53,7 +54,8 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
             {d.source && <> · factors: {d.source}</>}
           </p>
         </div>
-        <div className="flex flex-wrap gap-2 text-sm">
+        <div className="flex flex-wrap items-center gap-2 text-sm">
+          <UnitsSwitch />
           <Link to={`/projects/${projectId}/climate-files/${file.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">Open as a climate file</Link>
           <a className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist" href={`/api/projects/${projectId}/climate-files/${file.id}/original`} download>
             Download CSV
