@@ -1,0 +1,246 @@
+import { readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { screenshotFolder, startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+
+// Three synthetic years for an invented mild maritime site (sample-weather/generate.ts), so the report has every section at full size.
+const threeYears = readFileSync(new URL('../../sample-weather/kelderwick-point.csv', import.meta.url));
+const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+
+let h: BrowserHarness;
+let owner: TestPerson;
+let viewer: TestPerson;
+let projectId: number;
+let runA: number;
+let runB: number;
+let current: TestPerson | null = null;
+const pageErrors: string[] = [];
+/** Refusals a test expects the browser to log (a 401 or 410 answer is logged as a failed resource). */
+let expectedRefusals: RegExp | null = null;
+
+async function api<T>(person: TestPerson, method: string, url: string, body?: BodyInit, type = 'application/json'): Promise<T> {
+  const res = await fetch(`${h.baseUrl}/api${url}`, { method, headers: { cookie: person.cookie, 'x-tramontane-request': '1', 'content-type': type }, body });
+  if (!res.ok) throw new Error(`${method} ${url} answered ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+
+async function signInAs(person: TestPerson | null) {
+  current = person;
+  await h.page.goto('about:blank');
+  await h.context.clearCookies();
+  if (!person) return;
+  const [name, value] = person.cookie.split('=');
+  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+}
+
+async function useUnits(page: Page, system: 'SI' | 'IP') {
+  if (current) {
+    await fetch(`${h.baseUrl}/api/me`, {
+      method: 'PATCH',
+      headers: { cookie: current.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
+      body: JSON.stringify({ unitSystem: system.toLowerCase() }),
+    });
+  }
+  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
+  await page.reload();
+}
+
+async function chartsDrawn(page: Page) {
+  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 15_000 }).toBe(0);
+  await expect.poll(() => page.locator('figure svg').count(), { timeout: 15_000 }).toBeGreaterThan(0);
+}
+
+async function shot(name: string) {
+  await h.page.evaluate(() => window.scrollTo(0, 0));
+  return h.screenshot(name);
+}
+
+/** The page as print shows it (screenshot), and the PDF the browser makes of it; returns the PDF's page count. */
+async function printed(name: string): Promise<number> {
+  const page = h.page;
+  await page.emulateMedia({ media: 'print' });
+  await shot(`${name}-print`);
+  const pdf = await page.pdf({ format: 'A4', printBackground: true });
+  writeFileSync(path.join(screenshotFolder, `${name}.pdf`), pdf);
+  const letter = await page.pdf({ format: 'Letter', printBackground: true });
+  await page.emulateMedia({ media: 'screen' });
+  expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+  const pages = (buffer: Buffer) => buffer.toString('latin1').match(/\/Type\s*\/Page[^s]/g)?.length ?? 0;
+  expect(pages(letter)).toBeGreaterThan(1);
+  return pages(pdf);
+}
+
+beforeAll(async () => {
+  h = await startBrowserHarness();
+  owner = personWithSession(h.testApp.db, 'odile.brennan@example.test');
+  viewer = personWithSession(h.testApp.db, 'tamsin.reeve@example.test');
+  projectId = projectWithMembers(h.testApp.db, 'Kelderwick hall options', [
+    [owner, 'owner'],
+    [viewer, 'viewer'],
+  ]);
+  const { site } = await api<{ site: { id: number } }>(owner, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }));
+  const { climateFile } = await api<{ climateFile: { id: number } }>(
+    owner,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
+    threeYears,
+    'text/csv',
+  );
+  const warm = { ...directAirSample, name: 'Direct air, 25 °C supply (synthetic demo)' };
+  const cool = { ...directAirSample, name: 'Direct air, 20 °C supply (synthetic demo)', system: { ...directAirSample.system, supplyAirC: 20 } };
+  const ids: number[] = [];
+  for (const scenario of [warm, cool]) {
+    const { scenario: stored } = await api<{ scenario: { id: number } }>(owner, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
+    ids.push(stored.id);
+  }
+  const { runs } = await api<{ runs: { id: number }[] }>(owner, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: ids, climateFileIds: [climateFile.id] }));
+  [runA, runB] = runs.map((r) => r.id);
+  await h.testApp.runQueue.idle();
+  h.page.on('pageerror', (error) => pageErrors.push(error.message));
+  h.page.on('console', (message) => {
+    if (message.type() !== 'error') return;
+    if (expectedRefusals?.test(message.text())) return;
+    pageErrors.push(message.text());
+  });
+  await signInAs(owner);
+  await h.page.goto(h.baseUrl);
+  await useUnits(h.page, 'SI');
+});
+afterAll(() => h?.close());
+afterEach(() => {
+  expectedRefusals = null;
+  expect(pageErrors.splice(0).join('\n')).toBe('');
+});
+
+describe('the report of a run', () => {
+  it('renders every section, prints without the app around it, and makes a PDF of several pages', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runA}/report`);
+    await page.getByTestId('report-title').waitFor();
+    expect(await page.getByTestId('report-title').innerText()).toBe('Direct air, 25 °C supply (synthetic demo)');
+    // 2021–2023 hourly with none missing: 3 × 8,760 hours, all measured.
+    expect(await page.getByTestId('report-mode-hours').innerText()).toMatch(/All hours\s+26,280\s+100\.0 %/);
+    expect(await page.getByTestId('completeness').innerText()).toBe('100.0 % of hours have data');
+    expect(await page.getByTestId('report-envelope').innerText()).toContain('5th edition (2021)');
+    expect(await page.getByTestId('report-years').locator('tbody tr').count()).toBe(3);
+    expect(await page.getByTestId('report-method').innerText()).toContain('ISO/IEC 30134-9');
+    expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
+    // The figures are the run's own.
+    const { run } = await api<{ run: { results: { hours: { free: number }; energy: { partialPue: number } } } }>(owner, 'GET', `/projects/${projectId}/runs/${runA}`);
+    expect(await page.getByTestId('report-ppue').innerText()).toBe(run.results.energy.partialPue.toFixed(3));
+    expect(await page.getByTestId('report-headline').innerText()).toContain(`${run.results.hours.free.toLocaleString('en')} h`);
+    await chartsDrawn(page);
+    await shot('report-run-si');
+
+    const pdfPages = await printed('report-run-si');
+    expect(pdfPages).toBeGreaterThan(1);
+    // In print the app's header and the report's controls are gone.
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.getByRole('navigation', { name: 'Main' }).isVisible()).toBe(false);
+    expect(await page.getByRole('button', { name: 'Print or save as PDF' }).isVisible()).toBe(false);
+    await page.emulateMedia({ media: 'screen' });
+
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    // 25 °C supply is 77.0 °F.
+    expect(await page.getByTestId('report-inputs').innerText()).toContain('77.0 °F');
+    expect(await page.getByTestId('report-site').innerText()).toContain('46 ft'); // 14 m = 45.9 ft
+    await shot('report-run-ip');
+    await printed('report-run-ip');
+    await useUnits(page, 'SI');
+  });
+
+  it('offers the downloads on the report and the run page, with the server’s file names', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runA}`);
+    await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 15_000 }).toBe('done');
+    await page.getByTestId('download-menu').locator('summary').click();
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: /Summary \(CSV\)/ }).click()]);
+    expect(download.suggestedFilename()).toBe(`run-${runA}-direct-air-25-c-supply-synthetic-demo-summary.csv`);
+    await shot('run-page-downloads-si');
+  });
+});
+
+describe('the report of a comparison', () => {
+  it('shows the runs side by side against the baseline, and prints', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/compare/report?runs=${runA},${runB}&baseline=${runB}`);
+    await page.getByTestId('report-comparison').waitFor();
+    expect(await page.getByTestId('report-title').innerText()).toBe(`2 runs compared against run ${runB}`);
+    expect(await page.getByTestId('report-runs').innerText()).toContain(`Run ${runB} (baseline)`);
+    expect(await page.getByTestId('report-inputs').innerText()).toContain('differs');
+    await chartsDrawn(page);
+    await shot('report-comparison-si');
+    expect(await printed('report-comparison-si')).toBeGreaterThan(1);
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    await shot('report-comparison-ip');
+    await useUnits(page, 'SI');
+  });
+});
+
+describe('share links', () => {
+  it('an owner makes a public link that opens signed out, and after revoking it refuses', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runA}/report`);
+    await page.getByTestId('report-title').waitFor();
+    await page.getByRole('button', { name: 'Share' }).click();
+    await page.getByLabel('Title readers see').fill('Kelderwick, 25 °C supply, for the client');
+    await page.getByLabel('Public until').fill(new Date(Date.now() + 10 * 86_400_000).toISOString().slice(0, 10));
+    await page.getByRole('button', { name: 'Create link' }).click();
+    const linkBox = page.getByLabel('New share link');
+    await linkBox.waitFor();
+    const url = await linkBox.inputValue();
+    expect(url).toMatch(new RegExp(`^${h.baseUrl}/shared/[A-Za-z0-9_-]{43}$`));
+    await expect.poll(() => page.getByTestId('share-link').first().innerText()).toContain('public');
+    await shot('report-share-panel-si');
+
+    await signInAs(null);
+    await page.goto(url);
+    await page.getByTestId('report-title').waitFor();
+    expect(await page.getByTestId('shared-note').innerText()).toContain('open to anyone with the link until');
+    expect(await page.getByTestId('report-mode-hours').innerText()).toMatch(/All hours\s+26,280/);
+    await chartsDrawn(page);
+    await shot('report-shared-public-si');
+    expect(await printed('report-shared-public')).toBeGreaterThan(1);
+
+    await signInAs(owner);
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runA}/report`);
+    await page.getByRole('button', { name: 'Share' }).click();
+    page.once('dialog', (dialog) => void dialog.accept());
+    await page.getByTestId('share-link').first().getByRole('button', { name: 'Revoke' }).click();
+    await expect.poll(() => page.getByTestId('share-link').first().innerText()).toContain('revoked');
+
+    await signInAs(null);
+    expectedRefusals = /status of 410/;
+    await page.goto(url);
+    await page.getByTestId('shared-refused').waitFor();
+    expect(await page.getByTestId('shared-refused').innerText()).toContain('This link was revoked');
+    await shot('report-shared-revoked');
+  });
+
+  it('a members-only link asks a signed-out reader to sign in, and opens for a member', async () => {
+    const { path: linkPath } = await api<{ path: string }>(
+      owner,
+      'POST',
+      `/projects/${projectId}/share-links`,
+      JSON.stringify({ target: 'comparison', runIds: [runB, runA], title: 'Both supply setpoints' }),
+    );
+    const page = h.page;
+    expectedRefusals = /status of 401/;
+    await page.goto(`${h.baseUrl}${linkPath}`);
+    await page.getByTestId('shared-refused').waitFor();
+    expect(await page.getByTestId('shared-refused').innerText()).toContain('Sign in to see this report');
+    await shot('report-shared-members-signed-out');
+    await signInAs(viewer);
+    await page.goto(`${h.baseUrl}${linkPath}`);
+    await page.getByTestId('report-comparison').waitFor();
+    expect(await page.getByTestId('shared-note').innerText()).toContain('with the members of its project');
+    // A viewer sees no Share button: only owners make links.
+    expect(await page.getByRole('button', { name: 'Share' }).count()).toBe(0);
+    await chartsDrawn(page);
+    await shot('report-shared-members-viewer-si');
+  });
+});
