@@ -177,6 +177,7 @@ export function NewSweepPage() {
                       <li key={e}>{e}</li>
                     ))}
                   </ul>
+                  {unitSystem === 'IP' && <p className="mt-1 text-xs">These messages give values in SI, as the scenario stores them.</p>}
                 </Notice>
               )}
               <button

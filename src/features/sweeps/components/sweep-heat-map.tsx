@@ -44,10 +44,12 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
         width: widthPx,
         height: 70 + bandPx * rowLabels.length,
         marginLeft: Math.min(200, 16 + 7 * Math.max(...rowLabels.map((l) => l.length))),
+        marginTop: 28,
         marginBottom: 44,
         style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
-        x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', tickRotate: columnLabels.some((l) => l.length > 8) ? -20 : 0 },
-        y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'center', labelArrow: 'none' },
+        x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, tickRotate: columnLabels.some((l) => l.length > 8) ? -20 : 0 },
+        // The row title sits above the axis, level, so it never runs into the row labels.
+        y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'top', labelArrow: 'none' },
         color: { type: 'linear', domain: values.length ? [lo, hi] : [0, 1], interpolate: densityRamp, legend: true, label: title },
         marks: [
           Plot.cell(

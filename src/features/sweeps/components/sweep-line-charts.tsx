@@ -41,13 +41,14 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
             ];
       return Plot.plot({
         width: widthPx,
-        height: 300,
+        height: 260,
         marginLeft: 60,
         marginTop: 28,
+        marginBottom: 42,
         style: plotStyle,
         x: axis.preset
-          ? { type: 'band', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', padding: 0.2 }
-          : { label: axis.title, labelAnchor: 'center', labelArrow: 'none' },
+          ? { type: 'band', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, padding: 0.2 }
+          : { label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36 },
         y: { label: 'Hours over the file (h)', grid: true, labelArrow: 'up' },
         color: colour,
         marks: [
@@ -64,43 +65,60 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
   return (
     <div className="space-y-2">
       <ModeLegend />
-      <PlotFigure render={render} label={`Hours per mode against ${axis.title}`} placeholderHeightPx={300} />
+      <PlotFigure render={render} label={`Hours per mode against ${axis.title}`} placeholderHeightPx={260} />
     </div>
   );
 }
 
-/** One result against the swept value, as a line with a dot per finished point. */
-function MetricChart({ input, points, metric }: { input: SweepInputPath; points: readonly SweepPoint[]; metric: SweepMetric }) {
+const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical' };
+
+/**
+ * One result against the swept value, as a line with a dot per finished point, on its own scale (a few
+ * mechanical hours would vanish beside thousands of free-cooling ones). Hours per mode take the mode's colour.
+ */
+function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; metric: SweepMetric; zero?: ZeroMechanical }) {
   const axis = useAxis(input, points);
   const rows = useMemo(() => metricRows(points, input, metric).map((r) => ({ x: axis.x(r.value), y: metricDisplay(metric, axis.unitSystem, r.metric) })), [points, input, metric, axis]);
   const title = metricTitle(metric, axis.unitSystem);
+  const mode = modeOfMetric[metric];
+  const colour = mode ? modeColours[mode] : '#1f3a4a';
+  const zeroX = zero && zero.kind !== 'none' ? axis.x(zero.value) : null;
   const render = useCallback(
     (Plot: PlotModule, widthPx: number) =>
       Plot.plot({
         width: widthPx,
-        height: 220,
+        height: 210,
         marginLeft: 60,
+        marginTop: 24,
+        marginBottom: 42,
         style: plotStyle,
-        x: axis.preset ? { type: 'point', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', padding: 0.5 } : { label: axis.title, labelAnchor: 'center', labelArrow: 'none' },
-        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue' },
-        marks: [Plot.lineY(rows, { x: 'x', y: 'y', stroke: '#1f3a4a', strokeWidth: 1.5 }), Plot.dot(rows, { x: 'x', y: 'y', fill: '#1f3a4a', r: 3, tip: true })],
+        x: axis.preset
+          ? { type: 'point', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, padding: 0.5 }
+          : { label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, ticks: 6 },
+        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue', nice: true },
+        marks: [
+          zeroX === null ? null : Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3' }),
+          Plot.lineY(rows, { x: 'x', y: 'y', stroke: colour, strokeWidth: 1.75 }),
+          Plot.dot(rows, { x: 'x', y: 'y', fill: colour, r: 3, tip: true }),
+        ],
       }),
-    [rows, axis, title, metric],
+    [rows, axis, title, metric, colour, zeroX],
   );
-  return (
-    <div>
-      <h3 className="text-sm font-medium">{title}</h3>
-      <PlotFigure render={render} label={`${title} against ${axis.title}`} placeholderHeightPx={220} />
-    </div>
-  );
+  return <PlotFigure render={render} label={`${title} against ${axis.title}`} placeholderHeightPx={210} />;
 }
 
-/** The one-input sweep drawn: hours per mode, then partial PUE, water and peak mechanical load against the swept value. */
+/**
+ * The one-input sweep drawn: hours per mode stacked, then each mode's hours, partial PUE, water and peak
+ * mechanical load against the swept value, the zero-mechanical point marked where there is one.
+ */
 export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; zero: ZeroMechanical }) {
   return (
     <div className="space-y-4">
       <ModeHoursChart input={input} points={points} zero={zero} />
-      <div className="grid gap-4 lg:grid-cols-3">
+      <div className="grid gap-x-6 gap-y-2 lg:grid-cols-3">
+        <MetricChart input={input} points={points} metric="mechanical" zero={zero} />
+        <MetricChart input={input} points={points} metric="adiabatic" />
+        <MetricChart input={input} points={points} metric="free" />
         <MetricChart input={input} points={points} metric="partialPue" />
         <MetricChart input={input} points={points} metric="waterL" />
         <MetricChart input={input} points={points} metric="peakMechanicalLoadKw" />

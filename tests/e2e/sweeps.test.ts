@@ -1,0 +1,194 @@
+import { readFileSync } from 'node:fs';
+import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+
+// Three synthetic years for an invented mild maritime site (sample-weather/generate.ts), 26,280 hours.
+const threeYears = readFileSync(new URL('../../sample-weather/kelderwick-point.csv', import.meta.url));
+const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+
+let h: BrowserHarness;
+let engineer: TestPerson;
+let viewer: TestPerson;
+let current: TestPerson;
+let projectId: number;
+let scenarioId: number;
+let a2ScenarioId: number;
+let lineSweepUrl: string;
+const pageErrors: string[] = [];
+
+async function api<T>(person: TestPerson, method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
+  const res = await fetch(`${h.baseUrl}/api${path}`, { method, headers: { cookie: person.cookie, 'x-tramontane-request': '1', 'content-type': type }, body });
+  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
+  return (await res.json()) as T;
+}
+
+async function signInAs(person: TestPerson) {
+  current = person;
+  await h.page.goto('about:blank');
+  await h.context.clearCookies();
+  const [name, value] = person.cookie.split('=');
+  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+}
+
+/** The unit system is remembered per person on the server and in the browser; set both, as the settings toggle does. */
+async function useUnits(page: Page, system: 'SI' | 'IP') {
+  await fetch(`${h.baseUrl}/api/me`, {
+    method: 'PATCH',
+    headers: { cookie: current.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
+    body: JSON.stringify({ unitSystem: system.toLowerCase() }),
+  });
+  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
+  await page.reload();
+}
+
+async function chartsDrawn(page: Page) {
+  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 20_000 }).toBe(0);
+  await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThan(0);
+}
+
+async function shot(name: string) {
+  await h.page.evaluate(() => window.scrollTo(0, 0));
+  return h.screenshot(name);
+}
+
+beforeAll(async () => {
+  h = await startBrowserHarness();
+  engineer = personWithSession(h.testApp.db, 'oona.vasquez@example.test');
+  viewer = personWithSession(h.testApp.db, 'site.reviewer@example.test');
+  projectId = projectWithMembers(h.testApp.db, 'Kelderwick setpoint study', [
+    [engineer, 'engineer'],
+    [viewer, 'viewer'],
+  ]);
+  const { site } = await api<{ site: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
+  );
+  await api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const { scenario } = await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+  scenarioId = scenario.id;
+  // The same design held to the A2 allowable class (ASHRAE TC 9.9 2021 as in shared/scenario/envelopes.ts, recalled from memory):
+  // its 21 °C dew-point limit leaves this maritime file no hour that needs compressors for moisture.
+  const a2 = {
+    ...directAirSample,
+    name: 'Direct outdoor air, A2 allowable (synthetic demo)',
+    envelope: { presetId: 'ashrae-2021-a2', dryBulbMinC: 10, dryBulbMaxC: 35, dewPointMinC: -12, dewPointMaxC: 21, rhMinPct: 8, rhMaxPct: 80, altitudeDerating: { aboveElevationM: 900, metresPerKelvin: 300 } },
+  };
+  a2ScenarioId = (await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: a2 }))).scenario.id;
+  h.page.on('pageerror', (error) => pageErrors.push(error.message));
+  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
+  await signInAs(engineer);
+  await h.page.goto(h.baseUrl);
+  await useUnits(h.page, 'SI');
+});
+afterAll(() => h?.close());
+afterEach(() => {
+  expect(pageErrors.splice(0).join('\n')).toBe('');
+});
+
+describe('an engineer sweeping the supply setpoint', () => {
+  it('starts a sweep from the scenario, sees the point count and refused points, then progress and charts', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/${a2ScenarioId}`);
+    await page.getByRole('link', { name: 'Sweep an input of this scenario' }).click();
+    await page.waitForURL(/\/sweeps\/new\?scenario=\d+$/);
+    // The supply setpoint is offered first, from 18 to 30 °C by 1 K: 13 points.
+    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('13');
+    await page.getByLabel('From (°C)').fill('16');
+    await page.getByLabel('To (°C)').fill('48');
+    // 16…48 °C is 33 points; the scenario schema allows the setpoint up to 45 °C, so 46, 47 and 48 are refused by name.
+    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('33');
+    const errors = await page.getByTestId('sweep-errors').innerText();
+    expect(errors).toContain('system.supplyAirC = 46 is refused: system.supplyAirC must be a number from 5 to 45 °C (got 46)');
+    expect(await page.getByRole('button', { name: /Start sweep/ }).isDisabled()).toBe(true);
+    await shot('sweep-new-refused-si');
+    await page.getByLabel('To (°C)').fill('30');
+    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('15');
+    await shot('sweep-new-si');
+    await page.getByRole('button', { name: 'Start sweep of 15 runs' }).click();
+    await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
+    lineSweepUrl = page.url();
+    expect(await page.getByTestId('sweep-progress').isVisible()).toBe(true);
+    await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('15 of 15 points done');
+    await chartsDrawn(page);
+    await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(4);
+    expect(await page.getByTestId('sweep-table').locator('tbody tr').count()).toBe(15);
+    expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
+    await shot('sweep-line-si');
+
+    // The table agrees with the run it links to.
+    const sweepId = Number(lineSweepUrl.split('/').pop());
+    const { sweep } = await api<{ sweep: { points: { runId: number; results: { hours: { mechanical: number; total: number } } }[] } }>(
+      engineer,
+      'GET',
+      `/projects/${projectId}/sweeps/${sweepId}`,
+    );
+    // 2021–2023 hourly, none missing: 3 × 8760 hours at every point.
+    expect(sweep.points.every((p) => p.results.hours.total === 26_280)).toBe(true);
+    const mechanical = sweep.points.map((p) => p.results.hours.mechanical);
+    // Issue 5's invariant: raising the setpoint never adds mechanical hours.
+    expect(mechanical.every((m, i) => i === 0 || m <= mechanical[i - 1])).toBe(true);
+    // The page names the first swept point with zero mechanical hours, as the API's figures give it.
+    const firstZero = mechanical.findIndex((m) => m === 0);
+    expect(firstZero).toBeGreaterThan(0);
+    expect(await page.getByTestId('zero-mechanical').innerText()).toBe(`Mechanical hours reach zero from ${(16 + firstZero).toFixed(1)} °C.`);
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    expect(await page.getByTestId('sweep-axes').innerText()).toContain('60.8 … 86.0 °F');
+    // 16 °C + n K in °F: 60.8 + 1.8 n (exact conversion).
+    expect(await page.getByTestId('zero-mechanical').innerText()).toBe(`Mechanical hours reach zero from ${(60.8 + 1.8 * firstZero).toFixed(1)} °F.`);
+    await shot('sweep-line-ip');
+    await useUnits(page, 'SI');
+  });
+
+  it('sweeps a grid of supply setpoint and evaporative effectiveness and draws it as a heat map', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${a2ScenarioId}`);
+    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('13');
+    await page.getByLabel('From (°C)').fill('20');
+    await page.getByLabel('To (°C)').fill('28');
+    await page.getByLabel('Step (K)').fill('2');
+    await page.getByRole('button', { name: /Add a second input/ }).click();
+    await page.getByLabel('Input').nth(1).selectOption('system.evaporativeEffectiveness');
+    await page.getByLabel('From').nth(1).fill('0');
+    await page.getByLabel('To').nth(1).fill('0.8');
+    await page.getByLabel('Step').nth(1).fill('0.2');
+    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('25');
+    await page.getByRole('button', { name: 'Start sweep of 25 runs' }).click();
+    await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
+    await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('25 of 25 points done');
+    await chartsDrawn(page);
+    await page.getByText('Table of the same figures').click();
+    expect(await page.getByTestId('heat-map-table').locator('tbody tr').count()).toBe(5);
+    // Points at 24 °C and above have no mechanical hours on this file (the line sweep above): their cells are outlined.
+    expect(await page.locator('figure svg [stroke-dasharray="3,2"] rect').count()).toBe(15);
+    await shot('sweep-grid-si');
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    await page.getByTestId('heat-map-metric').selectOption('waterL');
+    await chartsDrawn(page);
+    expect(await page.getByTestId('heat-map-table').textContent()).toContain('Water use (US gal)');
+    await shot('sweep-grid-ip');
+    await useUnits(page, 'SI');
+  });
+});
+
+describe('a viewer', () => {
+  it('sees the sweeps and their charts but cannot start one', async () => {
+    await signInAs(viewer);
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}`);
+    await expect.poll(() => page.getByTestId('sweeps-list').locator('li').count(), { timeout: 15_000 }).toBe(2);
+    expect(await page.getByRole('link', { name: 'New sweep' }).count()).toBe(0);
+    await shot('sweeps-panel-viewer');
+    await page.goto(lineSweepUrl);
+    await chartsDrawn(page);
+    expect(await page.getByRole('button', { name: /Delete sweep/ }).count()).toBe(0);
+    await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${scenarioId}`);
+    await expect.poll(() => page.getByText('Viewers can read sweeps but not start them').isVisible()).toBe(true);
+    expect(await page.getByRole('button', { name: /Start sweep/ }).isDisabled()).toBe(true);
+  });
+});
