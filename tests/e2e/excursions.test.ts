@@ -13,6 +13,8 @@ let h: BrowserHarness;
 let operator: TestPerson;
 let projectId: number;
 const runIds: number[] = [];
+/** The same file on a site an hour east of UTC: its local calendar years are cut by an hour at each end. */
+let shiftedRunId: number;
 const pageErrors: string[] = [];
 
 async function api<T>(method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
@@ -57,6 +59,11 @@ beforeAll(async () => {
     const { runs } = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }));
     runIds.push(runs[0].id);
   }
+  const east = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick East', elevationM: 20, timeZone: 'Europe/Oslo' }));
+  const eastFile = await api<{ climateFile: { id: number } }>('POST', `/projects/${projectId}/sites/${east.site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const { scenario } = await api<{ scenario: { id: number } }>('POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+  const shifted = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [eastFile.climateFile.id] }));
+  shiftedRunId = shifted.runs[0].id;
   await h.testApp.runQueue.idle();
   h.page.on('pageerror', (error) => pageErrors.push(error.message));
   h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
@@ -91,6 +98,20 @@ describe('year-to-year statistics of a three-year file', () => {
     await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
     await panelShot('year-table', 'run-year-statistics-panel-ip');
     await useUnits(page, 'SI');
+  });
+
+  it('flags the years cut short by the site\'s clock and leaves them out', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${shiftedRunId}`);
+    await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
+    // The file runs 2021-01-01 00:00 to 2023-12-31 23:00 UTC; on UTC+01:00 standard time 2021 starts an hour late
+    // (8,759 of 8,760 h) and 2024 holds one hour: both partial, so the statistics are over 2022 and 2023.
+    const notes = await page.getByTestId('year-notes').innerText();
+    expect(notes).toContain('over 2 full calendar years');
+    expect(notes).toContain('2021 (8,759 of 8,760 h)');
+    expect(notes).toContain('2024 (1 of 8,784 h)');
+    expect(await page.getByTestId('year-table').innerText()).toContain('partial · left out');
+    await panelShot('year-table', 'run-year-statistics-partial-si');
   });
 
   it('shows each run\'s mechanical-hour spread on the compare page', async () => {
