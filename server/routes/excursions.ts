@@ -55,7 +55,7 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
       const parsed = parseScenario(JSON.parse(run.scenarioJson));
       if (!parsed.ok) throw new HttpError(409, 'invalid_scenario', `Run ${run.id}'s scenario no longer validates: ${parsed.errors.join('; ')}`);
       const scenario = parsed.scenario;
-      const climate = JSON.parse(run.climateJson) as { name: string; elevationM: number; site: { name: string } };
+      const climate = JSON.parse(run.climateJson) as { name: string; elevationM: number; utcOffsetMinutes: number; site: { name: string } };
 
       const supplyAirC = query.supplyAirC ?? scenario.system.supplyAirC;
       if (query.floatUpToC !== undefined && query.floatUpToC < supplyAirC) {
@@ -89,6 +89,7 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
           climateName: climate.name,
           siteName: climate.site.name,
           elevationM: climate.elevationM,
+          utcOffsetMinutes: climate.utcOffsetMinutes ?? 0,
           hours: JSON.parse(run.resultsJson ?? 'null')?.hours ?? null,
         },
         proposal: { supplyAirC, floatUpToC: proposal.floatUpToC, control, recommended, allowable },
