@@ -1,24 +1,17 @@
 import { and, asc, desc, eq, isNotNull } from 'drizzle-orm';
 import { z } from 'zod';
 import type { ScenarioResults } from '../../shared/scenario';
-import { axisValues, pointResults, prepareSweep, sweepProgress, sweepSpecSchema, SWEEP_INPUTS, type SweepAxis, type SweepPoint } from '../../shared/sweep';
+import { pointResults, prepareSweep, sweepProgress, sweepSpecSchema, type SweepPoint } from '../../shared/sweep';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile } from '../climate/store';
 import { runs, scenarios, sites, sweeps } from '../db/schema';
+import { insertSweep, type StoredSweepSpec } from '../runs/new-sweep';
 import { HttpError } from '../http-error';
-import { newRunValues } from '../runs/new-run';
 import { validScenario } from './scenarios';
 
 const sweepParams = z.object({ sweepId: z.coerce.number().int().positive('sweepId must be a positive whole number') });
-
-/** What specJson holds: the base scenario as swept, the axes as asked, and each axis's values. */
-interface StoredSpec {
-  baseScenario: unknown;
-  axes: (SweepAxis & { values: (number | string)[] })[];
-  climate: { name: string; siteName: string };
-}
 
 type SweepRow = typeof sweeps.$inferSelect;
 type RunRow = Pick<typeof runs.$inferSelect, 'id' | 'status' | 'progress' | 'error' | 'sweepPointJson' | 'resultsJson'>;
@@ -36,7 +29,7 @@ function presentPoint(run: RunRow): SweepPoint {
 
 function presentSweep(row: SweepRow, points: SweepPoint[]) {
   const { specJson, ...rest } = row;
-  const spec = JSON.parse(specJson) as StoredSpec;
+  const spec = JSON.parse(specJson) as StoredSweepSpec;
   return { ...rest, ...spec, progress: sweepProgress(points), points };
 }
 
@@ -96,30 +89,19 @@ export function sweepRoutes(deps: AppDeps): RouteSpec[] {
       const prepared = prepareSweep(base, spec.axes);
       if (!prepared.ok) throw new HttpError(422, 'invalid_sweep', prepared.errors.join('; '), { errors: prepared.errors });
 
-      const stored: StoredSpec = {
-        baseScenario: base,
-        axes: spec.axes.map((axis) => ({ ...axis, values: axisValues(axis) })),
-        climate: { name: file.name, siteName: site.name },
-      };
-      const name = spec.name || `${base.name} · ${spec.axes.map((a) => SWEEP_INPUTS[a.input].short).join(' × ')}`;
       // The sweep and all its runs, or nothing.
       const { sweep, created } = db.transaction((tx) => {
-        const sweep = tx
-          .insert(sweeps)
-          .values({ projectId, name: name.slice(0, 200), baseScenarioId: scenarioRow.id, climateFileId: file.id, specJson: JSON.stringify(stored), createdBy: req.user!.id })
-          .returning()
-          .get();
-        const created = prepared.points.map((point) =>
-          tx
-            .insert(runs)
-            .values({
-              ...newRunValues({ projectId, scenarioId: scenarioRow.id, scenarioJson: JSON.stringify(point.scenario), file, site, createdBy: req.user!.id }),
-              sweepId: sweep.id,
-              sweepPointJson: JSON.stringify(point.values),
-            })
-            .returning()
-            .get(),
-        );
+        const { sweep, created } = insertSweep(tx, {
+          projectId,
+          name: spec.name,
+          scenarioId: scenarioRow.id,
+          base,
+          axes: spec.axes,
+          points: prepared.points,
+          file,
+          site,
+          createdBy: req.user!.id,
+        });
         recordRequestAudit(tx, req, 'sweep.start', `sweep ${sweep.id}: ${sweep.name}`, {
           sweepId: sweep.id,
           scenarioId: scenarioRow.id,
