@@ -1,4 +1,5 @@
 import { Notice } from '@/components/ui/notice';
+import { ResultCautions } from '@/components/ui/result-cautions';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { ExcursionsResponse } from '../api/get-excursions';
@@ -63,17 +64,16 @@ export function MethodNotes({ data }: { data: ExcursionsResponse }) {
   );
 }
 
-/** The cautions every set of results carries (product brief), with the ones an excursion estimate adds. */
+/** The cautions every set of results carries (product brief), and the one an inlet estimate adds. */
 export function ExcursionCautions({ data }: { data: ExcursionsResponse }) {
   const evaporative = data.run.evaporativeEffectiveness > 0 || data.run.heatRejection === 'cooling-tower';
   return (
-    <Notice tone="warn" title="Read these results as estimates">
-      <ul className="list-disc space-y-0.5 pl-5">
-        <li>They compare designs; they are not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering review.</li>
-        <li>The inlet model is a steady hour-by-hour picture of the supply air; hot spots, recirculation, control overshoot and failures are not in it. Check a change against measured inlet temperatures as well.</li>
-        {data.run.systemKind === 'direct-air' && <li>Direct outside air brings particulate and gaseous contamination, smoke and condensation risk into the hall.</li>}
-        {evaporative && <li>Evaporative systems need water treatment and Legionella control under local rules.</li>}
-      </ul>
-    </Notice>
+    <div className="space-y-3">
+      <Notice tone="warn" title="The inlet here is modelled, not measured">
+        The model is a steady hour-by-hour picture of the supply air; hot spots, recirculation, control overshoot and failures are not in it. Check a change
+        against measured inlet temperatures as well.
+      </Notice>
+      <ResultCautions systemKind={data.run.systemKind} evaporative={evaporative} />
+    </div>
   );
 }
