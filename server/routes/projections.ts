@@ -12,6 +12,7 @@ import {
 import { standardPressurePa } from '../../shared/psychrometrics';
 import type { MorphClimateTaskResult } from '../../workers/morph-climate';
 import type { AppDeps } from '../app';
+import type { DbOrTx } from '../db/client';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries, saveClimateFile } from '../climate/store';
@@ -100,41 +101,10 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       const body = requestOf(req.body);
       const { file: parent, series, site } = parentOf(req.projectId!, req.params.fileId);
       const out = await morph(series, site.timeZone, site.elevationM, body.factors, true);
-      const projected = out.series!;
-      const name = body.name ?? `${parent.name} — projection`;
-      const derivation: Derivation = {
-        kind: 'projection',
-        method: PROJECTION_METHOD,
-        citation: MORPHING_CITATION,
-        note: PROJECTION_NOTE,
-        humidityQuantity: 'specific humidity',
-        parent: { id: parent.id, name: parent.name, sha256: parent.sha256, hours: parent.hours },
-        source: body.source ?? null,
-        factors: body.factors,
-        utcOffsetMinutes: out.utcOffsetMinutes,
-        alphaByMonth: out.alphaByMonth,
-        clampedHighHours: out.clampedHighHours,
-        clampedLowHours: out.clampedLowHours,
-        lostHours: out.lostHours,
-        comparison: { parent: out.parentMonthly, projection: out.projectionMonthly },
-      };
-      const csv = projectionCsv(projected, name, derivation);
-      const report = projectionReport(JSON.parse(parent.reportJson) as ImportReport, projected, derivation);
-      const mapping = importClimateText(csv.split('\n', 60).join('\n'), { timeZone: 'UTC' }).mapping;
-      const row = db.transaction((tx) => {
-        const saved = saveClimateFile(tx, {
-          projectId: req.projectId!,
-          siteId: parent.siteId,
-          name,
-          originalFileName: `${fileNameOf(name)}.csv`,
-          bytes: Buffer.from(csv, 'utf8'),
-          imported: { ok: true, series: projected, report, mapping },
-          createdBy: req.user?.id ?? null,
-        });
-        const link = { parentId: parent.id, derivationJson: JSON.stringify(derivation) };
-        tx.update(climateFiles).set(link).where(eq(climateFiles.id, saved.id)).run();
-        recordRequestAudit(tx, req, 'climate.project', name, {
-          climateFileId: saved.id,
+      const { row, derivation } = db.transaction((tx) => {
+        const stored = storeProjection(tx, { projectId: req.projectId!, parent, request: body, morphed: out, createdBy: req.user?.id ?? null });
+        recordRequestAudit(tx, req, 'climate.project', stored.row.name, {
+          climateFileId: stored.row.id,
           parentId: parent.id,
           parentName: parent.name,
           method: PROJECTION_METHOD,
@@ -143,7 +113,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
           clampedHighHours: out.clampedHighHours,
           clampedLowHours: out.clampedLowHours,
         });
-        return { ...saved, ...link };
+        return stored;
       });
       res.status(201).json({ climateFile: listing(row, site.name), derivation });
     }),
@@ -162,6 +132,57 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       });
     }),
   ];
+}
+
+/**
+ * Stores a morphed series as a projection: a climate file on the parent's site with its parentId and derivation,
+ * and as its downloadable original the canonical CSV headed by what it is. Call inside a transaction.
+ */
+export function storeProjection(
+  tx: DbOrTx,
+  input: {
+    projectId: number;
+    parent: typeof climateFiles.$inferSelect;
+    request: ProjectionRequest;
+    morphed: Extract<MorphClimateTaskResult, { ok: true }> & { utcOffsetMinutes: number };
+    createdBy: number | null;
+  },
+): { row: typeof climateFiles.$inferSelect; derivation: Derivation } {
+  const { parent, request, morphed: out } = input;
+  if (!out.series) throw new Error('storeProjection needs the morphed series (keepSeries: true)');
+  const name = request.name ?? `${parent.name} — projection`;
+  const derivation: Derivation = {
+    kind: 'projection',
+    method: PROJECTION_METHOD,
+    citation: MORPHING_CITATION,
+    note: PROJECTION_NOTE,
+    humidityQuantity: 'specific humidity',
+    parent: { id: parent.id, name: parent.name, sha256: parent.sha256, hours: parent.hours },
+    source: request.source ?? null,
+    factors: request.factors,
+    utcOffsetMinutes: out.utcOffsetMinutes,
+    alphaByMonth: out.alphaByMonth,
+    clampedHighHours: out.clampedHighHours,
+    clampedLowHours: out.clampedLowHours,
+    lostHours: out.lostHours,
+    comparison: { parent: out.parentMonthly, projection: out.projectionMonthly },
+  };
+  const csv = projectionCsv(out.series, name, derivation);
+  const report = projectionReport(JSON.parse(parent.reportJson) as ImportReport, out.series, derivation);
+  // The mapping the importer reads from the CSV's head: what an upload of the download would be mapped as.
+  const mapping = importClimateText(csv.split('\n', 60).join('\n'), { timeZone: 'UTC' }).mapping;
+  const saved = saveClimateFile(tx, {
+    projectId: input.projectId,
+    siteId: parent.siteId,
+    name,
+    originalFileName: `${fileNameOf(name)}.csv`,
+    bytes: Buffer.from(csv, 'utf8'),
+    imported: { ok: true, series: out.series, report, mapping },
+    createdBy: input.createdBy,
+  });
+  const link = { parentId: parent.id, derivationJson: JSON.stringify(derivation) };
+  tx.update(climateFiles).set(link).where(eq(climateFiles.id, saved.id)).run();
+  return { row: { ...saved, ...link }, derivation };
 }
 
 /** A file name from a display name: letters, digits and dashes. */

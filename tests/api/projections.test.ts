@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { zeroFactors, type ChangeFactors } from '../../shared/morphing';
+import { seedDemoProjection } from '../../server/demo/projections';
 import { auditEvents, climateFiles } from '../../server/db/schema';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
@@ -178,6 +179,27 @@ describe('a stored projection', () => {
     expect(res.body.parent).toBeNull();
     expect(res.body.derivation.parent.name).toBe('three-days');
     expect(res.body.climateFile.projection.parentName).toBe('three-days');
+  });
+});
+
+describe('the demo projection', () => {
+  it('is stored like one made in the app, from the first uploaded file', async () => {
+    // The parent of the tests above is deleted by now: upload the file again.
+    const siteId = t.db.select().from(climateFiles).all()[0].siteId;
+    await request(t.app)
+      .post(`/api/projects/${projectId}/sites/${siteId}/climate-files?fileName=three-days.csv`)
+      .set(asPerson(engineer))
+      .set('content-type', 'text/csv')
+      .send(threeDays)
+      .expect(201);
+    const fileId = seedDemoProjection(t.db, projectId, engineer.id);
+    expect(fileId).not.toBeNull();
+    const res = await request(t.app).get(`/api/projects/${projectId}/projections/${fileId}`).set(asPerson(viewer)).expect(200);
+    expect(res.body.climateFile.name).toMatch(/warmer decade \(synthetic factors\)$/);
+    expect(res.body.derivation.source).toContain('Synthetic');
+    // July's synthetic ΔTmean is 2.4 K; shift-and-stretch moves the monthly mean by exactly that.
+    const c = res.body.derivation.comparison;
+    expect(c.projection.dryBulbC[6].mean - c.parent.dryBulbC[6].mean).toBeCloseTo(2.4, 9);
   });
 });
 
