@@ -105,6 +105,14 @@ describe('an engineer sweeping the supply setpoint', () => {
     expect(mechanical.slice(5)).toEqual([0, 0]);
     expect(mechanical[4]).toBeGreaterThan(0);
     for (const p of sweep.points) expect(p.results.hours.total).toBe(72);
+    // With no compressor hour and no evaporative stage only the hall fans run, at 4 % of IT power every hour, so the
+    // partial PUE as ISO/IEC 30134-2 defines it, (IT + cooling energy) / IT energy, is 1.04; no water, no mechanical load.
+    for (const p of sweep.points.slice(5)) {
+      expect(p.results.partialPue).toBeCloseTo(1 + directAir.energy.fanPowerFraction, 12);
+      expect(p.results.waterL).toBe(0);
+      expect(p.results.peakMechanicalLoadKw).toBe(0);
+    }
+    expect(sweep.points[0].results.peakMechanicalLoadKw).toBeGreaterThan(0);
     // Each point's run is an ordinary run, named after its value.
     const run = await request(t.app).get(`/api/projects/${projectId}/runs/${sweep.points[3].runId}`).set(asPerson(viewer)).expect(200);
     expect(run.body.run.scenario.name).toBe('Direct air, dry · supply air 20 °C');
