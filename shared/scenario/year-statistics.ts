@@ -58,6 +58,9 @@ export interface YearStatistics {
   worst: WorstYear | null;
 }
 
+/** A year may lack this many of its hours and still count as a full year. */
+export const FULL_YEAR_SHORTFALL_HOURS = 24;
+
 export const PERCENTILE_METHOD = 'nearest rank: the P-th percentile of N years is the year of rank ⌈P/100 · N⌉ counted from the smallest value (ties ordered by year)';
 export const WORST_YEAR_TIE_RULE = 'most mechanical hours; a tie goes to the year with more cooling energy, then to the earlier year';
 
@@ -87,8 +90,10 @@ export function yearStatistics(hoursByYear: readonly YearResults[]): YearStatist
   for (const y of [...hoursByYear].sort((a, b) => a.year - b.year)) {
     const calendarHours = calendarYearHours(y.year);
     // `total` counts every hour of the year in the file, no-data hours included: those are shown in the
-    // run's counts, but a year cut short by the file's start or end would bias every statistic.
-    if (y.total < calendarHours) partialYears.push({ year: y.year, hours: y.total, calendarHours });
+    // run's counts, but a year cut short by the file's start or end would bias every statistic. Up to a
+    // day short still counts as whole: a file of whole UTC years read on a site's clock moves up to 14 h
+    // of its first or last year into the next or previous one.
+    if (y.total < calendarHours - FULL_YEAR_SHORTFALL_HOURS) partialYears.push({ year: y.year, hours: y.total, calendarHours });
     else fullYears.push(y);
   }
   if (fullYears.length === 0) return { fullYears, partialYears, metrics: null, worst: null };

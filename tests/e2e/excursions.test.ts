@@ -100,15 +100,16 @@ describe('year-to-year statistics of a three-year file', () => {
     await useUnits(page, 'SI');
   });
 
-  it('flags the years cut short by the site\'s clock and leaves them out', async () => {
+  it('counts a year an hour short on the site\'s clock as whole, and leaves out the hour that spills into the next', async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${shiftedRunId}`);
     await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
     // The file runs 2021-01-01 00:00 to 2023-12-31 23:00 UTC; on UTC+01:00 standard time 2021 starts an hour late
-    // (8,759 of 8,760 h) and 2024 holds one hour: both partial, so the statistics are over 2022 and 2023.
+    // (8,759 of 8,760 h, within a day of whole, so it counts) and 2024 holds one hour: partial, so the statistics
+    // are over 2021–2023.
     const notes = await page.getByTestId('year-notes').innerText();
-    expect(notes).toContain('over 2 full calendar years');
-    expect(notes).toContain('2021 (8,759 of 8,760 h)');
+    expect(notes).toContain('over 3 full calendar years');
+    expect(notes).not.toContain('2021 (');
     expect(notes).toContain('2024 (1 of 8,784 h)');
     expect(await page.getByTestId('year-table').innerText()).toContain('partial · left out');
     await panelShot('year-table', 'run-year-statistics-partial-si');

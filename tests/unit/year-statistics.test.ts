@@ -47,6 +47,13 @@ describe('year statistics of a multi-year run', () => {
     expect(stats.partialYears).toEqual([{ year: 2021, hours: 4000, calendarHours: 8760 }]);
   });
 
+  it('counts a year up to a day short as whole, and one more hour short as partial', () => {
+    // A file of whole UTC years read on a UTC+01:00 clock starts its first local year an hour late.
+    const edge = yearStatistics([year(2021, 10, { total: 8760 - 24 }), year(2022, 10, { total: 8760 - 25 }), year(2023, 10, { total: 8760 })]);
+    expect(edge.fullYears.map((y) => y.year)).toEqual([2021, 2023]);
+    expect(edge.partialYears).toEqual([{ year: 2022, hours: 8735, calendarHours: 8760 }]);
+  });
+
   it('names the median, P10 and P90 years of mechanical hours by nearest rank', () => {
     // Ordered: 80 (2017), 80 (2019), 120 (2016), 150 (2020), 200 (2018); ties ordered by year.
     // N = 5: P10 rank 1 → 2017; median rank 3 → 2016; P90 rank 5 → 2018.

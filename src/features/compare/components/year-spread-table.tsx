@@ -74,7 +74,7 @@ export function YearSpreadTable({ runs, byRun }: { runs: RunListing[]; byRun: Ma
       <p className="text-xs text-ink-soft">
         Mechanical hours per calendar year of each run's climate file. Percentiles by nearest rank (the year of rank ⌈P/100 · N⌉ among N full years
         ordered by mechanical hours), so each is a real year; the worst year has the most mechanical hours (a tie goes to more cooling energy, then
-        the earlier year). Partial years, with fewer hours than the calendar year, are left out. The run page gives the same for free cooling,
+        the earlier year). Partial years, more than a day short of the calendar year's hours, are left out. The run page gives the same for free cooling,
         adiabatic assist, energy and water.
       </p>
     </div>

@@ -117,7 +117,7 @@ function YearNotes({ stats }: { stats: ReturnType<typeof yearStatistics> }) {
       </p>
       {stats.partialYears.length > 0 && (
         <p>
-          Left out as partial (fewer hours in the file than the calendar year has):{' '}
+          Left out as partial (more than a day short of the calendar year's hours):{' '}
           {stats.partialYears.map((p) => `${p.year} (${hoursText(p.hours)} of ${hoursText(p.calendarHours)} h)`).join(', ')}.
         </p>
       )}
