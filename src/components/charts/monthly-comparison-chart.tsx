@@ -30,6 +30,8 @@ export function MonthlyComparisonChart({ series, withTable = true }: { series: {
         height: 320,
         marginLeft: 56,
         marginBottom: 48,
+        // Room above the month names for the facet title, so "Month" does not sit on them.
+        marginTop: 40,
         style: { fontFamily: 'var(--font-sans)', fontSize: '11px' },
         fx: { domain: months, label: 'Month', padding: 0.15 },
         x: { domain: series.map((s) => `Run ${s.runId}`), tickRotate: -40, label: null },

@@ -17,6 +17,8 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true }: { byM
         width: widthPx,
         height: 300,
         marginLeft: 56,
+        // Room for the axis title under the month names, so they never overlap at a page's width.
+        marginBottom: 42,
         style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
         x: { domain: monthShort, label: `Month (${zoneLabel})`, labelAnchor: 'center', labelArrow: 'none' },
         y: { label: 'Hours (h)', grid: true, labelArrow: 'up' },

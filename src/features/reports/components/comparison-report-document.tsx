@@ -16,25 +16,32 @@ import { ModeShareBar } from './results-tables';
 
 function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
   if (value === null) return '–';
-  const sign = signed && value > 0 ? '+' : '';
+  const text = unsigned(unit, system, value);
+  // A difference that rounds to nothing is shown without a sign.
+  if (!signed) return text;
+  if (!/[1-9]/.test(text)) return text.replace(/^-/, '');
+  return value > 0 ? `+${text}` : text;
+}
+
+function unsigned(unit: string, system: UnitSystem, value: number): string {
   switch (unit) {
     case 'h':
-      return `${sign}${hours(value)}`;
+      return hours(value);
     case 'kWh':
-      return `${sign}${mwh(value)}`;
+      return mwh(value);
     case 'kW':
-      return `${sign}${kw(value)}`;
+      return kw(value);
     case 'L':
-      return `${sign}${formatQuantity('water', system, value)}`;
+      return formatQuantity('water', system, value);
     case 'L/kWh':
-      return `${sign}${ratio(value)} L/kWh`;
+      return `${ratio(value)} L/kWh`;
     default:
-      return `${sign}${ratio(value)}`;
+      return ratio(value);
   }
 }
 
-function verdict(row: ComparisonRow, difference: number | null): string {
-  if (difference === null || difference === 0 || row.better === 'none') return 'text-ink-soft';
+function verdict(row: ComparisonRow, difference: number | null, shown: string): string {
+  if (difference === null || !/[1-9]/.test(shown) || row.better === 'none') return 'text-ink-soft';
   return (difference > 0) === (row.better === 'higher') ? 'text-signal-ok' : 'text-signal-bad';
 }
 
@@ -47,6 +54,11 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
   const rows = comparisonRows(runs, baselineId);
   // Runs on the same file show its validation once.
   const files = runs.filter((run, i) => runs.findIndex((other) => other.climate.sha256 === run.climate.sha256 && other.site.name === run.site.name) === i);
+  // Runs with the same envelope as applied (limits and site derating) show it once.
+  const envelopeKey = (run: ReportRun) => JSON.stringify([run.envelope.label, run.scenario.envelope, run.results.envelope, run.scenario.system.supplyAirC]);
+  const envelopes = runs
+    .filter((run, i) => runs.findIndex((other) => envelopeKey(other) === envelopeKey(run)) === i)
+    .map((run) => ({ run, runIds: runs.filter((other) => envelopeKey(other) === envelopeKey(run)).map((r) => r.id) }));
   return (
     <ReportSheet>
       <header className="space-y-1 border-b-2 border-harbour pb-3">
@@ -65,18 +77,19 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
           mechanical load, against the baseline run {baselineId}?
         </p>
         <ReportTable
+          text
           testId="report-runs"
           head={['Run', 'Scenario', 'Cooling design', 'Site · climate file', 'Envelope']}
           rows={runs.map((run) => ({
             key: String(run.id),
             cells: [
               runLabel(run, baselineId),
-              <span className="font-sans">{run.scenario.name}</span>,
-              <span className="font-sans text-xs">{systemInWords(run)}</span>,
-              <span className="font-sans text-xs">
+              run.scenario.name,
+              <span className="text-xs">{systemInWords(run)}</span>,
+              <span className="text-xs">
                 {run.site.name} · {run.climate.name} ({day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)})
               </span>,
-              <span className="font-sans text-xs">{run.envelope.label}</span>,
+              <span className="text-xs">{run.envelope.label}</span>,
             ],
           }))}
         />
@@ -106,11 +119,15 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
             </tr>
             {rows.map((row) => (
               <tr key={row.key} className="border-b border-rule/60">
-                <th scope="row" className="py-1 pr-2 text-left font-normal">{row.figure}</th>
+                <th scope="row" className="py-0.5 pr-2 text-left font-normal">{row.figure}</th>
                 {row.cells.map((cell) => (
-                  <td key={cell.runId} className="num px-2 py-1 text-right">
-                    <span className="block">{figure(row.unit, unitSystem, cell.value)}</span>
-                    {cell.difference !== null && <span className={`block text-xs ${verdict(row, cell.difference)}`}>{figure(row.unit, unitSystem, cell.difference, true)}</span>}
+                  <td key={cell.runId} className="num whitespace-nowrap px-2 py-0.5 text-right">
+                    {figure(row.unit, unitSystem, cell.value)}
+                    {cell.difference !== null && (
+                      <span className={`ml-2 inline-block min-w-24 text-xs ${verdict(row, cell.difference, figure(row.unit, unitSystem, cell.difference, true))}`}>
+                        {figure(row.unit, unitSystem, cell.difference, true)}
+                      </span>
+                    )}
                   </td>
                 ))}
               </tr>
@@ -124,7 +141,9 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
       </ReportSection>
 
       <ReportSection id="monthly" title="3. By month" newPage>
-        <MonthlyComparisonChart series={runs.map((run) => ({ runId: run.id, hoursByMonth: run.results.hoursByMonth }))} withTable={false} />
+        <div className="max-w-[45rem]">
+          <MonthlyComparisonChart series={runs.map((run) => ({ runId: run.id, hoursByMonth: run.results.hoursByMonth }))} withTable={false} />
+        </div>
         <ReportTable
           testId="report-monthly-comparison"
           caption={`Hours per month: ${modeKeys.slice(0, 3).map((k) => modeLabels[k].toLowerCase()).join(' / ')}`}
@@ -142,7 +161,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
         />
       </ReportSection>
 
-      <ReportSection id="sites" title="4. Sites and climate files" newPage>
+      <ReportSection id="sites" title="4. Sites and climate files">
         {files.map((run) => (
           <div key={run.id} className="space-y-2">
             <SubHeading>
@@ -155,9 +174,9 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
       </ReportSection>
 
       <ReportSection id="envelopes" title="5. Inlet envelopes">
-        {runs.map((run) => (
+        {envelopes.map(({ run, runIds }) => (
           <div key={run.id} className="keep-together space-y-1">
-            <SubHeading>{runLabel(run, baselineId)}</SubHeading>
+            <SubHeading>{runIds.length === 1 ? runLabel(run, baselineId) : `Runs ${runIds.join(', ')}`}</SubHeading>
             <EnvelopeFacts run={run} unitSystem={unitSystem} />
           </div>
         ))}

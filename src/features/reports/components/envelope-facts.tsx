@@ -16,7 +16,8 @@ export function EnvelopeFacts({ run, unitSystem }: { run: ReportRun; unitSystem:
         items={[
           ['Envelope', run.envelope.label],
           ['Source', run.envelope.edition ?? 'a custom envelope of this project'],
-          ...(run.envelope.recalledFromMemory ? ([['Note', run.envelope.note ?? 'Limits recalled from memory.']] as Array<[string, string]>) : []),
+          // The preset's own note repeats the limits in SI; the report states them below in the reader's units.
+          ...(run.envelope.recalledFromMemory ? ([['Note', 'Limits and derating recalled from memory, not checked against the guideline text.']] as Array<[string, string]>) : []),
           ['Dry-bulb', <span className="num">{t(e.dryBulbMinC)} to {t(e.dryBulbMaxC)}</span>],
           ...(derated
             ? ([['Highest dry-bulb at the site', <span className="num">{t(applied.dryBulbMaxC)} (derated for altitude)</span>]] as Array<[string, React.ReactNode]>)

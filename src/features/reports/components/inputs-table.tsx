@@ -50,11 +50,11 @@ export function InputsTable({ runs, unitSystem }: { runs: ReportRun[]; unitSyste
                 return {
                   key: path,
                   cells: [
-                    <span className="num text-xs">
+                    <span className="num break-all text-xs">
                       {path.slice(group.prefix.length)}
                       {differs && <span className="ml-1 rounded bg-mist px-1 font-sans text-[10px] text-ink">differs</span>}
                     </span>,
-                    ...values,
+                    ...values.map((value) => <span className="whitespace-nowrap">{value}</span>),
                   ],
                 };
               })}

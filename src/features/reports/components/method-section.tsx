@@ -85,12 +85,14 @@ export function MethodSection({ runs }: { runs: ReportRun[] }) {
         Energy and water are summed over the hours with data; "per 8,760 h" scales those sums to a year of hours with data so files of different
         lengths compare.
       </p>
-      <SubHeading>Sources</SubHeading>
-      <ul className="list-disc space-y-0.5 pl-5">
-        <li>ASHRAE Handbook—Fundamentals (2017), chapter 1, Psychrometrics.</li>
-        <li>ASHRAE TC 9.9, Thermal Guidelines for Data Processing Environments, 5th edition (2021) and 4th edition (2015).</li>
-        <li>ISO/IEC 30134-2 (power usage effectiveness) and ISO/IEC 30134-9 (water usage effectiveness).</li>
-      </ul>
+      <div className="keep-together">
+        <SubHeading>Sources</SubHeading>
+        <ul className="list-disc space-y-0.5 pl-5">
+          <li>ASHRAE Handbook—Fundamentals (2017), chapter 1, Psychrometrics.</li>
+          <li>ASHRAE TC 9.9, Thermal Guidelines for Data Processing Environments, 5th edition (2021) and 4th edition (2015).</li>
+          <li>ISO/IEC 30134-2 (power usage effectiveness) and ISO/IEC 30134-9 (water usage effectiveness).</li>
+        </ul>
+      </div>
     </div>
   );
 }

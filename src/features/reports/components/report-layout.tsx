@@ -40,21 +40,25 @@ export function Facts({ items, testId }: { items: Array<[string, ReactNode]>; te
   );
 }
 
-/** A figure-dense table that prints without splitting a row across pages. */
-export function ReportTable({ caption, head, rows, testId, firstColumnLeft = true }: {
+/**
+ * A figure-dense table that prints without splitting a row across pages: figures right-aligned and kept
+ * on one line; `text` for a table of words (left-aligned, wrapping).
+ */
+export function ReportTable({ caption, head, rows, testId, text = false }: {
   caption?: string;
   head: ReactNode[];
   rows: Array<{ key: string; cells: ReactNode[]; strong?: boolean }>;
   testId?: string;
-  firstColumnLeft?: boolean;
+  text?: boolean;
 }) {
+  const cellStyle = text ? 'px-2 py-0.5 text-left align-top' : 'num whitespace-nowrap px-2 py-0.5 text-right';
   return (
     <table className="w-full text-sm" data-testid={testId}>
       {caption && <caption className="pb-1 text-left text-xs text-ink-soft">{caption}</caption>}
       <thead>
         <tr className="border-b border-rule text-xs text-ink-soft">
           {head.map((h, i) => (
-            <th key={i} scope="col" className={`px-2 py-1 font-medium ${i === 0 && firstColumnLeft ? 'pl-0 text-left' : 'text-right'}`}>
+            <th key={i} scope="col" className={`px-2 py-1 font-medium ${i === 0 ? 'pl-0 text-left' : text ? 'text-left' : 'text-right'}`}>
               {h}
             </th>
           ))}
@@ -64,12 +68,12 @@ export function ReportTable({ caption, head, rows, testId, firstColumnLeft = tru
         {rows.map((row) => (
           <tr key={row.key} className={`border-b border-rule/60 ${row.strong ? 'font-medium' : ''}`}>
             {row.cells.map((cell, i) =>
-              i === 0 && firstColumnLeft ? (
-                <th key={i} scope="row" className={`py-0.5 pl-0 pr-2 text-left ${row.strong ? 'font-medium' : 'font-normal'}`}>
+              i === 0 ? (
+                <th key={i} scope="row" className={`py-0.5 pl-0 pr-2 text-left align-top ${row.strong ? 'font-medium' : 'font-normal'}`}>
                   {cell}
                 </th>
               ) : (
-                <td key={i} className="num px-2 py-0.5 text-right">
+                <td key={i} className={cellStyle}>
                   {cell}
                 </td>
               ),

@@ -2,6 +2,7 @@ import { utcOffsetLabel } from '@/components/charts/chart-format';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { Notice } from '@/components/ui/notice';
 import { ResultCautions } from '@/components/ui/result-cautions';
+import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunReportData } from '../../../../shared/report/report-data';
 import { ClimateFacts, SiteFacts } from './climate-facts';
@@ -40,10 +41,10 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
 
       <ReportSection id="job" title="1. The job">
         <p className="text-sm leading-relaxed">
-          How many hours from {day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)} can the IT halls at {run.site.name} be cooled by{' '}
-          {systemInWords(run)} with outside air or water alone (free cooling), with evaporative help (adiabatic assist), or only with
-          compressors (mechanical), keeping the IT inlet within {run.envelope.label}; and what that means in energy, water and peak mechanical
-          load.
+          From {day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)}, for how many hours can the IT halls at {run.site.name}, cooled by{' '}
+          {systemInWords(run)}, run on outside air or water alone (free cooling), with evaporative help (adiabatic assist), or only with
+          compressors (mechanical), keeping the IT inlet within {run.envelope.label}; and what does that mean in energy, water and peak
+          mechanical load?
         </p>
         <div className="grid grid-cols-3 gap-2 print:grid-cols-3" data-testid="report-headline">
           <Headline label="Free cooling" value={hours(h.free)} note={share(h.free, h.total)} />
@@ -73,8 +74,11 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         <EnvelopeFacts run={run} unitSystem={unitSystem} />
       </ReportSection>
 
-      <ReportSection id="inputs" title="4. Scenario inputs" newPage>
-        <p className="text-xs text-ink-soft">Exactly as run; field names as in the scenario JSON.</p>
+      <ReportSection id="inputs" title="4. Scenario inputs">
+        <p className="text-xs text-ink-soft">
+          Exactly as run; field names as in the scenario JSON. The run uses the site's elevation ({formatQuantity('elevation', unitSystem, run.site.elevationM)}) in
+          place of the scenario's elevationM.
+        </p>
         <InputsTable runs={[run]} unitSystem={unitSystem} />
       </ReportSection>
 
@@ -90,21 +94,22 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
           </div>
         </div>
         <SubHeading>By month</SubHeading>
-        <MonthlyModeChart byMonth={r.hoursByMonth} zoneLabel={utcOffsetLabel(run.site.utcOffsetMinutes)} withTable={false} />
+        {/* Drawn no wider than a printed page, so print does not shrink its lettering. */}
+        <div className="max-w-[45rem]">
+          <MonthlyModeChart byMonth={r.hoursByMonth} zoneLabel={utcOffsetLabel(run.site.utcOffsetMinutes)} withTable={false} />
+        </div>
         <MonthlyTable byMonth={r.hoursByMonth} />
         <div className="keep-together space-y-2">
           <SubHeading>By year</SubHeading>
           <YearTable years={r.hoursByYear} unitSystem={unitSystem} />
         </div>
-        <div className="grid gap-6 md:grid-cols-2 print:grid-cols-2">
-          <div className="keep-together space-y-2">
-            <SubHeading>Energy</SubHeading>
-            <EnergyTable results={r} />
-          </div>
-          <div className="keep-together space-y-2">
-            <SubHeading>Water</SubHeading>
-            <WaterTable results={r} unitSystem={unitSystem} />
-          </div>
+        <div className="keep-together space-y-2">
+          <SubHeading>Energy</SubHeading>
+          <EnergyTable results={r} />
+        </div>
+        <div className="keep-together space-y-2">
+          <SubHeading>Water</SubHeading>
+          <WaterTable results={r} unitSystem={unitSystem} />
         </div>
       </ReportSection>
 
