@@ -3,8 +3,7 @@ import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRuns } from '../api/get-runs';
-import { useRunsByMonth } from '../api/get-runs-by-month';
-import { useRunsByYear } from '../api/get-runs-by-year';
+import { useRunTables } from '../api/get-run-tables';
 import { compareRuns } from '../utils/compare-runs';
 import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from './monthly-comparison-chart';
@@ -27,14 +26,12 @@ export function ComparePage() {
   const baselineParam = Number(search.get('baseline'));
   const baselineId = selected.some((r) => r.id === baselineParam) ? baselineParam : (selected[0]?.id ?? 0);
   const rows = useMemo(() => compareRuns(selected, baselineId), [selected, baselineId]);
-  const monthly = useRunsByMonth(projectId, selected.map((r) => r.id));
-  const monthlyKey = monthly.map((q) => q.dataUpdatedAt).join(',');
-  const monthlyReady = monthly.every((q) => q.data);
-  // Rebuilt only when a run's monthly figures arrive, so the chart is not redrawn on every render.
-  const monthlySeries = useMemo(() => (monthlyReady ? monthly.map((q) => q.data!) : null), [monthlyKey, monthlyReady]);
-  const yearly = useRunsByYear(projectId, selected.map((r) => r.id));
-  const yearlyKey = yearly.map((q) => q.dataUpdatedAt).join(',');
-  const yearlyByRun = useMemo(() => new Map(yearly.flatMap((q) => (q.data ? [[q.data.runId, q.data.hoursByYear] as const] : []))), [yearlyKey]);
+  const tables = useRunTables(projectId, selected.map((r) => r.id));
+  const tablesKey = tables.map((q) => q.dataUpdatedAt).join(',');
+  const tablesReady = tables.every((q) => q.data);
+  // Rebuilt only when a run's tables arrive, so the chart is not redrawn on every render.
+  const monthlySeries = useMemo(() => (tablesReady ? tables.map((q) => q.data!) : null), [tablesKey, tablesReady]);
+  const yearlyByRun = useMemo(() => new Map(tables.flatMap((q) => (q.data ? [[q.data.runId, q.data.hoursByYear] as const] : []))), [tablesKey]);
   const anyMultiYear = [...yearlyByRun.values()].some((years) => years.length > 1);
 
   function update(runs: number[], baseline: number | null) {
