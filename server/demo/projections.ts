@@ -39,7 +39,7 @@ export function seedDemoProjection(db: Db, projectId: number, createdBy: number 
     return { ...m, deltaMeanK, deltaMaxK, deltaMinK, humidityChangePct };
   });
   const request: ProjectionRequest = {
-    name: `${parent.name} — warmer decade (synthetic factors)`,
+    name: `${parent.name} — projection, warmer decade (synthetic factors)`,
     source: 'Synthetic demo factors, not from any climate projection',
     factors: { dryBulbMethod: 'shift-and-stretch', humidityMethod: 'stretch', months },
   };

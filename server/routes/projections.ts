@@ -150,7 +150,8 @@ export function storeProjection(
 ): { row: typeof climateFiles.$inferSelect; derivation: Derivation } {
   const { parent, request, morphed: out } = input;
   if (!out.series) throw new Error('storeProjection needs the morphed series (keepSeries: true)');
-  const name = request.name ?? `${parent.name} — projection`;
+  // The name says it is a projection, so every list and picker that shows only names says so too.
+  const name = projectionName(request.name ?? `${parent.name} — projection`);
   const derivation: Derivation = {
     kind: 'projection',
     method: PROJECTION_METHOD,
@@ -183,6 +184,11 @@ export function storeProjection(
   const link = { parentId: parent.id, derivationJson: JSON.stringify(derivation) };
   tx.update(climateFiles).set(link).where(eq(climateFiles.id, saved.id)).run();
   return { row: { ...saved, ...link }, derivation };
+}
+
+/** The name as given, with " (projection)" added unless it already says so. */
+export function projectionName(name: string): string {
+  return /projection/i.test(name) ? name : `${name} (projection)`;
 }
 
 /** A file name from a display name: letters, digits and dashes. */

@@ -119,7 +119,8 @@ describe('a stored projection', () => {
   it('is a climate file on the same site that records its parent, factors, method and source', async () => {
     const list = await request(t.app).get(`/api/projects/${projectId}/climate-files`).set(asPerson(viewer)).expect(200);
     const file = list.body.climateFiles.find((f: { id: number }) => f.id === projectionId);
-    expect(file).toMatchObject({ parentId, hours: 72, projection: { parentName: 'three-days', method: 'Belcher, Hacker and Powell (2005) morphing' } });
+    // The name is made to say it is a projection, so pickers that show only names say so too.
+    expect(file).toMatchObject({ parentId, hours: 72, name: 'Veldhaven warmer July (projection)', projection: { parentName: 'three-days', method: 'Belcher, Hacker and Powell (2005) morphing' } });
     expect(list.body.climateFiles.find((f: { id: number }) => f.id === parentId).projection).toBeNull();
     const res = await request(t.app).get(`/api/projects/${projectId}/projections/${projectionId}`).set(asPerson(viewer)).expect(200);
     const d = res.body.derivation;
@@ -132,7 +133,7 @@ describe('a stored projection', () => {
     expect(res.body.parent.id).toBe(parentId);
     const audits = projectionAudits();
     expect(audits).toHaveLength(1);
-    expect(audits[0]).toMatchObject({ actorId: engineer.id, projectId, target: 'Veldhaven warmer July' });
+    expect(audits[0]).toMatchObject({ actorId: engineer.id, projectId, target: 'Veldhaven warmer July (projection)' });
   });
 
   it('can be downloaded as a CSV that says it is a projection and imports again as it stands', async () => {
@@ -195,7 +196,7 @@ describe('the demo projection', () => {
     const fileId = seedDemoProjection(t.db, projectId, engineer.id);
     expect(fileId).not.toBeNull();
     const res = await request(t.app).get(`/api/projects/${projectId}/projections/${fileId}`).set(asPerson(viewer)).expect(200);
-    expect(res.body.climateFile.name).toMatch(/warmer decade \(synthetic factors\)$/);
+    expect(res.body.climateFile.name).toMatch(/— projection, warmer decade \(synthetic factors\)$/);
     expect(res.body.derivation.source).toContain('Synthetic');
     // July's synthetic ΔTmean is 2.4 K; shift-and-stretch moves the monthly mean by exactly that.
     const c = res.body.derivation.comparison;

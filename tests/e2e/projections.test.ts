@@ -100,7 +100,8 @@ describe('an engineer making a future-climate projection', () => {
     await page.getByLabel(/Where the factors come from/).fill('synthetic factors for a demonstration');
     await page.getByRole('button', { name: 'Save projection' }).click();
     await page.waitForURL(/\/projections\/\d+$/, { timeout: 30_000 });
-    await page.getByRole('heading', { name: 'Zimna Dolina, warmer decade' }).waitFor();
+    // The stored name says it is a projection, so pickers that show only names say so too.
+    await page.getByRole('heading', { name: 'Zimna Dolina, warmer decade (projection)' }).waitFor();
     expect(await page.getByText('A projection, not a forecast').isVisible()).toBe(true);
     await chartsDrawn(page);
     // Still IP: July's mean daily max moved by 3.1 K = 5.58 °F difference; the table row ends with the mean's +4.3 °F.
@@ -118,10 +119,10 @@ describe('an engineer making a future-climate projection', () => {
 
     // Listed as a projection wherever the project's files are listed, and on its climate-file page.
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
-    const row = page.getByRole('row', { name: /^Zimna Dolina, warmer decadeProjection/ });
+    const row = page.getByRole('row', { name: /^Zimna Dolina, warmer decade \(projection\)Projection/ });
     await row.waitFor();
     expect(await row.innerText()).toContain('PROJECTION');
-    await row.getByRole('link', { name: 'Zimna Dolina, warmer decade' }).click();
+    await row.getByRole('link', { name: 'Zimna Dolina, warmer decade (projection)' }).click();
     await expect.poll(() => page.getByText('A future-climate projection of zimna-dolina, not measured weather.').isVisible(), { timeout: 15_000 }).toBe(true);
     await shot('projection-climate-file-si');
   });
