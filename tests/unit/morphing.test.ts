@@ -186,6 +186,24 @@ describe('humidity through specific humidity', () => {
     expect(dried.clampedLowHours).toBe(48);
   });
 
+  it('with the shift method moves every hour by ΔTmean and ignores ΔTmax and ΔTmin', () => {
+    const [ts, tC] = twoJanuaryDays();
+    const rh = new Float64Array(48).fill(50);
+    const out = morphClimate({
+      series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }),
+      factors: factors({ deltaMeanK: 1.5, deltaMaxK: 9, deltaMinK: -9 }, { dryBulbMethod: 'shift' }),
+      utcOffsetMinutes: 60,
+      fallbackPressurePa: P,
+    });
+    if (!out.ok) throw new Error('refused');
+    // 2 + 1.5 = 3.5; 6 + 1.5 = 7.5; 4 + 1.5 = 5.5; 10 + 1.5 = 11.5
+    expect([out.series.dryBulbC[0], out.series.dryBulbC[12], out.series.dryBulbC[24], out.series.dryBulbC[36]]).toEqual([3.5, 7.5, 5.5, 11.5]);
+    expect(out.alphaByMonth.every((a) => a === 0)).toBe(true);
+    // Same q at a warmer hour: RH falls. Reference: psychrolib GetHumRatioFromRelHum then GetRelHumFromHumRatio (SI).
+    const w = psychrolib.GetHumRatioFromRelHum(2, 0.5, P);
+    expect(out.series.humidity.values[0]).toBeCloseTo(100 * psychrolib.GetRelHumFromHumRatio(3.5, w, P), 6);
+  });
+
   it('keeps hours with no data as no data', () => {
     const [ts, tC] = twoJanuaryDays();
     tC[5] = Number.NaN;
