@@ -24,6 +24,7 @@ export const comparisonQuery = z
     baseline: z.coerce.number().int().positive('baseline must be a run number').optional(),
   })
   .transform((q) => ({ runIds: [...new Set(q.runs)], baselineId: q.baseline ?? q.runs[0] }))
+  .refine((q) => q.runIds.length >= 2, { message: 'a comparison needs at least two different runs', path: ['runs'] })
   .refine((q) => q.runIds.includes(q.baselineId), { message: 'baseline must be one of the compared runs', path: ['baseline'] });
 
 function projectName(db: Db, projectId: number): string {

@@ -19,6 +19,7 @@ export const createShareInput = z
     /** ISO 8601 date-time; absent or null keeps the link for signed-in members of the project only. */
     publicUntil: z.iso.datetime({ offset: true, error: 'publicUntil must be an ISO 8601 date-time, e.g. 2026-03-31T23:59:59Z' }).nullish(),
   })
+  .refine((s) => new Set(s.runIds).size === s.runIds.length, { message: 'runIds must not repeat a run', path: ['runIds'] })
   .refine((s) => (s.target === 'run' ? s.runIds.length === 1 : s.runIds.length >= 2), {
     message: 'a run report shares exactly one run; a comparison two or more',
     path: ['runIds'],

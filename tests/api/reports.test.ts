@@ -151,6 +151,13 @@ describe('downloads of a run', () => {
     expect(Number(free[5])).toBe(Number(free[4]) - Number(free[2]));
   });
 
+  it('refuses a comparison of one run, or with a baseline outside it', async () => {
+    const same = await request(t.app).get(`/api/projects/${projectId}/compare/report?runs=${runId},${runId}`).set(asPerson(viewer)).expect(400);
+    expect(same.body.error.message).toContain('at least two different runs');
+    const outside = await request(t.app).get(`/api/projects/${projectId}/compare/report?runs=${runId},${secondRunId}&baseline=999`).set(asPerson(viewer)).expect(400);
+    expect(outside.body.error.message).toContain('baseline must be one of the compared runs');
+  });
+
   it('refuses a download it does not have, saying which exist', async () => {
     const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/downloads/hourly.xlsx`).set(asPerson(viewer)).expect(400);
     expect(res.body.error.message).toContain('hourly.csv, hourly.json, summary.csv or summary.json');

@@ -18,7 +18,13 @@ export function DownloadMenu({ links, label = 'Download' }: { links: DownloadLin
       <ul className="absolute right-0 z-20 mt-1 w-72 rounded-md border border-rule bg-panel p-1 text-sm shadow-lg">
         {links.map((link) => (
           <li key={link.href}>
-            <a href={link.href} download className="block rounded px-3 py-1.5 hover:bg-mist focus-visible:bg-mist">
+            <a
+              href={link.href}
+              download
+              // The menu closes once a file is chosen.
+              onClick={(event) => event.currentTarget.closest('details')?.removeAttribute('open')}
+              className="block rounded px-3 py-1.5 hover:bg-mist focus-visible:bg-mist"
+            >
               {link.label}
               {link.note && <span className="block text-xs text-ink-soft">{link.note}</span>}
             </a>
