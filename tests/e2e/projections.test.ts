@@ -126,4 +126,18 @@ describe('an engineer making a future-climate projection', () => {
     await expect.poll(() => page.getByText('A future-climate projection of zimna-dolina, not measured weather.').isVisible(), { timeout: 15_000 }).toBe(true);
     await shot('projection-climate-file-si');
   });
+
+  it('says which month the server refused, at laptop width', { timeout: 60_000 }, async () => {
+    const page = h.page;
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await page.goto(`${h.baseUrl}/projects/${projectId}/projections/new?from=${parentId}`);
+    await page.getByTestId('factor-table').waitFor();
+    // Within the table's bounds, but ΔTmax − ΔTmin = −30 K is more than July's whole mean daily range: refused by name.
+    await page.getByLabel('July, ΔT daily max (K)').fill('-15');
+    await page.getByLabel('July, ΔT daily min (K)').fill('15');
+    await page.getByRole('button', { name: 'Preview monthly means' }).click();
+    await expect.poll(() => page.getByText(/^July: ΔTmax − ΔTmin = -30\.00 K would remove/).isVisible(), { timeout: 15_000 }).toBe(true);
+    await shot('projection-new-refused-si');
+    await page.setViewportSize({ width: 1440, height: 900 });
+  });
 });
