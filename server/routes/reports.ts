@@ -1,7 +1,7 @@
 import type { Response } from 'express';
 import { and, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { comparisonCsv, comparisonRows, hourlyJson, runSummaryRows, summaryCsv, type ReportData, type ReportRun } from '../../shared/report';
+import { comparisonCsv, comparisonRows, hourlyJson, runSummaryRows, summaryCsv, summaryRowsIn, type ReportData, type ReportRun, type SummaryUnits } from '../../shared/report';
 import { writeHourlyCsv } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
@@ -21,6 +21,13 @@ const runFile = z.enum(['hourly.csv', 'hourly.json', 'summary.csv', 'summary.jso
 });
 const comparisonFile = z.enum(['summary.csv', 'summary.json'], { error: 'the download must be summary.csv or summary.json' });
 const sharedRunQuery = z.object({ run: z.coerce.number().int().positive('run must be a run number').optional() });
+/** `?units=ip` gives the summaries in IP (°F, ft, US gal); the hourly files stay SI, as the command line writes them. */
+const unitsQuery = z.object({
+  units: z
+    .enum(['si', 'ip', 'SI', 'IP'], { error: "units must be 'si' or 'ip'" })
+    .optional()
+    .transform((u): SummaryUnits => (u?.toUpperCase() === 'IP' ? 'IP' : 'SI')),
+});
 
 /** Lower-case ASCII words joined by hyphens, for file names that survive every system. */
 export function fileSlug(text: string): string {
@@ -39,7 +46,9 @@ export function fileSlug(text: string): string {
 const runFileName = (run: ReportRun, what: string, ext: string) => `run-${run.id}-${fileSlug(run.scenario.name)}-${what}.${ext}`;
 
 /** Answers one download of a report: the hourly results of one of its runs, or its summary. */
-function sendDownload(db: Db, res: Response, projectId: number, report: ReportData, file: z.infer<typeof runFile>, runId?: number): void {
+function sendDownload(db: Db, res: Response, projectId: number, report: ReportData, file: z.infer<typeof runFile>, query: unknown, runId?: number): void {
+  const { units } = unitsQuery.parse(query);
+  const suffix = units === 'IP' ? '-ip' : '';
   const reportRuns = report.kind === 'run' ? [report.run] : report.runs;
   if (file === 'hourly.csv' || file === 'hourly.json') {
     const run = reportRuns.find((r) => r.id === (runId ?? reportRuns[0].id));
@@ -64,20 +73,22 @@ function sendDownload(db: Db, res: Response, projectId: number, report: ReportDa
   }
   if (report.kind === 'run') {
     const run = report.run;
+    const rows = summaryRowsIn(runSummaryRows(run), units);
     if (file === 'summary.csv') {
-      res.attachment(runFileName(run, 'summary', 'csv')).type('text/csv; charset=utf-8').send(summaryCsv(runSummaryRows(run)));
+      res.attachment(runFileName(run, `summary${suffix}`, 'csv')).type('text/csv; charset=utf-8').send(summaryCsv(rows));
     } else {
-      res.attachment(runFileName(run, 'summary', 'json')).type('application/json');
-      res.send(JSON.stringify({ report, summary: runSummaryRows(run) }, null, 1));
+      res.attachment(runFileName(run, `summary${suffix}`, 'json')).type('application/json');
+      // The report data itself stays in SI, as the engine computed it; the rows are in the units asked for.
+      res.send(JSON.stringify({ report, units, summary: rows }, null, 1));
     }
     return;
   }
-  const name = `comparison-${report.runs.map((r) => r.id).join('-')}-summary`;
+  const name = `comparison-${report.runs.map((r) => r.id).join('-')}-summary${suffix}`;
   if (file === 'summary.csv') {
-    res.attachment(`${name}.csv`).type('text/csv; charset=utf-8').send(comparisonCsv(report.runs, report.baselineId));
+    res.attachment(`${name}.csv`).type('text/csv; charset=utf-8').send(comparisonCsv(report.runs, report.baselineId, units));
   } else {
     res.attachment(`${name}.json`).type('application/json');
-    res.send(JSON.stringify({ report, table: comparisonRows(report.runs, report.baselineId) }, null, 1));
+    res.send(JSON.stringify({ report, units, table: comparisonRows(report.runs, report.baselineId, units) }, null, 1));
   }
 }
 
@@ -108,13 +119,13 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
     route('get', '/projects/:projectId/runs/:runId/downloads/:file', access.viewer, (req, res) => {
       const { runId } = runParams.parse(req.params);
       const file = runFile.parse(req.params.file);
-      sendDownload(db, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file);
+      sendDownload(db, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file, req.query);
     }),
 
     route('get', '/projects/:projectId/compare/downloads/:file', access.viewer, (req, res) => {
       const file = comparisonFile.parse(req.params.file);
       const { runIds, baselineId } = comparisonQuery.parse(req.query);
-      sendDownload(db, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file);
+      sendDownload(db, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file, req.query);
     }),
 
     route('get', '/projects/:projectId/share-links', access.owner, (req, res) => {
@@ -186,7 +197,7 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
       const link = resolveShareToken(db, req, String(req.params.token), now());
       const file = runFile.parse(req.params.file);
       const { run } = sharedRunQuery.parse(req.query);
-      sendDownload(db, res, link.projectId, linkedReport(link), file, run);
+      sendDownload(db, res, link.projectId, linkedReport(link), file, req.query, run);
     }),
   ];
 }

@@ -4,6 +4,7 @@
  * and site names) goes through shared/csv.ts, which neutralises cells a spreadsheet would run as formulas.
  */
 import { csvRow } from '../csv';
+import { celsiusToFahrenheit, kelvinDifferenceToFahrenheit, metreToFoot } from '../units';
 import { modeKeys, modeLabels, type ModeKey } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import type { ScenarioResults } from '../scenario/run';
@@ -83,6 +84,30 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
   return rows;
 }
 
+export type SummaryUnits = 'SI' | 'IP';
+
+const US_GALLON_L = 3.785411784; // NIST SP 811 (2008), App. B: 1 US gallon = 3.785 411 784 L, exact.
+
+/** How an SI unit of the summaries is written in IP; units not listed (h, %, kWh, kW, L/kWh) are the same in both. */
+const ipUnits: Record<string, { unit: string; convert: (v: number) => number; decimals: number }> = {
+  '°C': { unit: '°F', convert: celsiusToFahrenheit, decimals: 2 },
+  K: { unit: '°F difference', convert: kelvinDifferenceToFahrenheit, decimals: 2 },
+  m: { unit: 'ft', convert: metreToFoot, decimals: 1 },
+  L: { unit: 'US gal', convert: (l) => l / US_GALLON_L, decimals: 1 },
+};
+
+/** A figure in the chosen units: SI as computed, or IP (°F, ft, US gal); WUE stays in L/kWh as ISO/IEC 30134-9 defines it. */
+export function inUnits(unit: string, value: number | null, units: SummaryUnits): { unit: string; value: number | null } {
+  const ip = units === 'IP' ? ipUnits[unit] : undefined;
+  if (!ip) return { unit, value };
+  return { unit: ip.unit, value: value === null ? null : rounded(ip.convert(value), ip.decimals) };
+}
+
+export function summaryRowsIn(rows: SummaryRow[], units: SummaryUnits): SummaryRow[] {
+  if (units === 'SI') return rows;
+  return rows.map((row) => (typeof row.value === 'string' ? { ...row, unit: inUnits(row.unit, null, units).unit } : { ...row, ...inUnits(row.unit, row.value, units) }));
+}
+
 export function summaryCsv(rows: SummaryRow[]): string {
   return `${[csvRow(['section', 'figure', 'unit', 'value']), ...rows.map((r) => csvRow([r.section, r.figure, r.unit, r.value]))].join('\n')}\n`;
 }
@@ -128,31 +153,33 @@ export interface ComparisonRow {
 }
 
 /** Each figure for each run (baseline first), with its difference from the baseline, rounded as downloaded. */
-export function comparisonRows(runs: ReportRun[], baselineId: number): ComparisonRow[] {
+export function comparisonRows(runs: ReportRun[], baselineId: number, units: SummaryUnits = 'SI'): ComparisonRow[] {
   const baseline = runs.find((r) => r.id === baselineId) ?? runs[0];
   if (!baseline) return [];
   return comparedFigures.map((f) => {
     const base = f.value(baseline.results);
+    // Differences of a linear unit convert by the same factor (water in L or US gal; no temperatures here).
+    const shown = (v: number | null) => (inUnits(f.unit, v, units).unit === f.unit ? rounded(v, f.decimals) : inUnits(f.unit, v, units).value);
     return {
       key: f.key,
       figure: f.label,
-      unit: f.unit,
+      unit: inUnits(f.unit, null, units).unit,
       better: f.better,
       cells: runs.map((run) => {
         const value = f.value(run.results);
         const difference = run.id !== baseline.id && value !== null && base !== null ? value - base : null;
-        return { runId: run.id, value: rounded(value, f.decimals), difference: rounded(difference, f.decimals) };
+        return { runId: run.id, value: shown(value), difference: shown(difference) };
       }),
     };
   });
 }
 
 /** The comparison as CSV: one line per figure; each run's value, then its difference from the baseline. */
-export function comparisonCsv(runs: ReportRun[], baselineId: number): string {
+export function comparisonCsv(runs: ReportRun[], baselineId: number, units: SummaryUnits = 'SI'): string {
   const label = (run: ReportRun) => `run ${run.id}${run.id === baselineId ? ' (baseline)' : ''}: ${run.scenario.name} / ${run.climate.name}`;
   const header = ['figure', 'unit', ...runs.flatMap((run) => [label(run), `run ${run.id} difference`])];
   const lines = [csvRow(header)];
-  for (const row of comparisonRows(runs, baselineId)) {
+  for (const row of comparisonRows(runs, baselineId, units)) {
     lines.push(csvRow([row.figure, row.unit, ...row.cells.flatMap((c) => [c.value, c.difference])]));
   }
   return `${lines.join('\n')}\n`;

@@ -127,6 +127,15 @@ describe('downloads of a run', () => {
     for (const line of lines) for (const cell of cells(line)) expect(cell.replace(/^"/, '')).not.toMatch(/^[=+@\t\r]/);
   });
 
+  it('gives the summary in IP units when asked, named so', async () => {
+    const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/downloads/summary.csv?units=ip`).set(asPerson(viewer)).expect(200);
+    expect(res.headers['content-disposition']).toBe(`attachment; filename=run-${runId}-hyperlink-http-bad-example-click-summary-ip.csv`);
+    // 25 °C = 77 °F (°F = 1.8·°C + 32, NIST SP 811 App. B).
+    expect(res.text).toContain('inputs,system.supplyAirC,°F,77\n');
+    expect(res.text).toMatch(/\nwater,Water total,US gal,[\d.]+\n/);
+    await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/downloads/summary.csv?units=furlongs`).set(asPerson(viewer)).expect(400);
+  });
+
   it('gives the summary as JSON with the report it came from, and no internal ids beyond the run number', async () => {
     const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/downloads/summary.json`).set(asPerson(viewer)).expect(200);
     const body = JSON.parse(res.text);

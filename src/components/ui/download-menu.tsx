@@ -35,12 +35,13 @@ export function DownloadMenu({ links, label = 'Download' }: { links: DownloadLin
   );
 }
 
-/** The downloads of one run: hourly results and the summary, as CSV and JSON. */
-export function runDownloadLinks(base: string, query = ''): DownloadLink[] {
+/** The downloads of one run: hourly results (SI, as the command line writes them) and the summary in the reader's units. */
+export function runDownloadLinks(base: string, units: 'SI' | 'IP' = 'SI'): DownloadLink[] {
+  const summaryQuery = units === 'IP' ? '?units=ip' : '';
   return [
-    { label: 'Hourly results (CSV)', href: `${base}/hourly.csv${query}`, note: 'one row per hour, the command line’s columns, SI' },
-    { label: 'Hourly results (JSON)', href: `${base}/hourly.json${query}`, note: 'the same columns, one array each' },
-    { label: 'Summary (CSV)', href: `${base}/summary.csv${query}`, note: 'every figure of the report, SI' },
-    { label: 'Summary (JSON)', href: `${base}/summary.json${query}`, note: 'the report data and its figures' },
+    { label: 'Hourly results (CSV)', href: `${base}/hourly.csv`, note: 'one row per hour, the command line’s columns, SI' },
+    { label: 'Hourly results (JSON)', href: `${base}/hourly.json`, note: 'the same columns, one array each, SI' },
+    { label: 'Summary (CSV)', href: `${base}/summary.csv${summaryQuery}`, note: `every figure of the report, ${units}` },
+    { label: 'Summary (JSON)', href: `${base}/summary.json${summaryQuery}`, note: `the report data and its figures, ${units}` },
   ];
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ImportReport } from '../../../shared/climate';
-import { comparisonCsv, comparisonRows, hourlyJson, runSummaryRows, shapeReportRun, summaryCsv, type ReportRunSource } from '../../../shared/report';
+import { comparisonCsv, comparisonRows, hourlyJson, inUnits, runSummaryRows, shapeReportRun, summaryCsv, summaryRowsIn, type ReportRunSource } from '../../../shared/report';
 import { MODE, runScenario, type HourlyCsvInput } from '../../../shared/scenario';
 import { makeScenario } from '../scenario/fixtures';
 
@@ -115,6 +115,32 @@ describe('the report of a run', () => {
     const csv = comparisonCsv([a, b], 1).split('\n');
     expect(csv[0]).toBe('figure,unit,run 1 (baseline): Supply 24 °C / Synthetic two days,run 1 difference,run 2: Supply 10 °C / Synthetic two days,run 2 difference');
     expect(csv[1]).toBe('Free cooling,h,24,,0,-24');
+  });
+});
+
+describe('summaries in IP units', () => {
+  it('converts temperatures, differences, lengths and water by the exact factors', () => {
+    // NIST SP 811 (2008), App. B: °F = 1.8·°C + 32; 1 K = 1.8 °F as a difference; 1 ft = 0.3048 m; 1 US gal = 3.785 411 784 L (exact).
+    expect(inUnits('°C', 25, 'IP')).toEqual({ unit: '°F', value: 77 });
+    expect(inUnits('K', 12, 'IP')).toEqual({ unit: '°F difference', value: 21.6 });
+    expect(inUnits('m', 14, 'IP')).toEqual({ unit: 'ft', value: 45.9 });
+    expect(inUnits('L', 3785.411784, 'IP')).toEqual({ unit: 'US gal', value: 1000 });
+    // WUE keeps L/kWh (ISO/IEC 30134-9 defines it so); hours and energy are the same in both systems.
+    expect(inUnits('L/kWh', 0.5, 'IP')).toEqual({ unit: 'L/kWh', value: 0.5 });
+    expect(inUnits('kWh', 10, 'IP')).toEqual({ unit: 'kWh', value: 10 });
+    expect(inUnits('°C', 25, 'SI')).toEqual({ unit: '°C', value: 25 });
+  });
+
+  it('converts the run summary and the comparison, differences included', () => {
+    const a = shapeReportRun(source(1, 24));
+    const rows = summaryRowsIn(runSummaryRows(a), 'IP');
+    expect(rows.find((r) => r.figure === 'system.supplyAirC')).toEqual({ section: 'inputs', figure: 'system.supplyAirC', unit: '°F', value: 75.2 });
+    expect(rows.find((r) => r.figure === 'Scenario')!.value).toBe('Supply 24 °C');
+    const b = shapeReportRun(source(2, 10));
+    const water = comparisonRows([a, b], 1, 'IP').find((r) => r.key === 'water')!;
+    expect(water.unit).toBe('US gal');
+    const [base, other] = water.cells;
+    expect(other.difference).toBeCloseTo(other.value! - base.value!, 0);
   });
 });
 

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { useProjectRole } from '@/lib/projects';
+import { useUnitSystem } from '@/lib/unit-system';
 import { comparisonSearch, useComparisonReport } from '../api/get-comparison-report';
 import { ComparisonReportDocument } from './comparison-report-document';
 import { comparisonDownloadLinks } from './report-downloads';
@@ -23,6 +24,7 @@ export function ComparisonReportPage() {
   const query = useComparisonReport(projectId, enough ? runIds : [0, 0], baselineId);
   const { role } = useProjectRole(projectId);
   const [sharing, setSharing] = useState(false);
+  const { unitSystem } = useUnitSystem();
   if (!enough) {
     return (
       <div className="mx-auto max-w-[62rem]">
@@ -43,6 +45,7 @@ export function ComparisonReportPage() {
           `/api/projects/${projectId}/compare/downloads`,
           q,
           ordered.map((runId) => ({ runId, href: `/api/projects/${projectId}/runs/${runId}/downloads/hourly.csv` })),
+          unitSystem,
         )}
         share={role === 'owner' ? { open: sharing, toggle: () => setSharing((open) => !open) } : undefined}
       />

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { runDownloadLinks } from '@/components/ui/download-menu';
 import { useProjectRole } from '@/lib/projects';
+import { useUnitSystem } from '@/lib/unit-system';
 import { useRunReport } from '../api/get-run-report';
 import { ReportError, ReportLoading } from './report-states';
 import { ReportToolbar } from './report-toolbar';
@@ -16,6 +17,7 @@ export function RunReportPage() {
   const query = useRunReport(projectId, runId);
   const { role } = useProjectRole(projectId);
   const [sharing, setSharing] = useState(false);
+  const { unitSystem } = useUnitSystem();
   if (query.isPending) return <ReportLoading />;
   if (query.isError) return <ReportError error={query.error} what="This report" />;
   const { report } = query.data;
@@ -23,7 +25,7 @@ export function RunReportPage() {
     <div>
       <ReportToolbar
         back={{ to: `/projects/${projectId}/runs/${runId}`, label: 'Back to the run' }}
-        downloads={runDownloadLinks(`/api/projects/${projectId}/runs/${runId}/downloads`)}
+        downloads={runDownloadLinks(`/api/projects/${projectId}/runs/${runId}/downloads`, unitSystem)}
         share={role === 'owner' ? { open: sharing, toggle: () => setSharing((open) => !open) } : undefined}
       />
       {sharing && <ShareLinksPanel projectId={projectId} target="run" runIds={[runId]} defaultTitle={`${report.run.scenario.name}: run ${runId}`} />}

@@ -2,6 +2,7 @@ import { useParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { runDownloadLinks } from '@/components/ui/download-menu';
 import { ApiError } from '@/lib/api-client';
+import { useUnitSystem } from '@/lib/unit-system';
 import { useSharedReport } from '../api/get-shared-report';
 import { comparisonDownloadLinks } from './report-downloads';
 import { ComparisonReportDocument } from './comparison-report-document';
@@ -42,14 +43,15 @@ function Refused({ error, token }: { error: Error; token: string }) {
 export function SharedReportPage() {
   const token = useParams().token ?? '';
   const query = useSharedReport(token);
+  const { unitSystem } = useUnitSystem();
   if (query.isPending) return <ReportLoading />;
   if (query.isError) return <Refused error={query.error} token={token} />;
   const { link, report } = query.data;
   const base = `/api/shared/${encodeURIComponent(token)}/downloads`;
   const downloads =
     report.kind === 'run'
-      ? runDownloadLinks(base)
-      : comparisonDownloadLinks(base, '', report.runs.map((r) => ({ runId: r.id, href: `${base}/hourly.csv?run=${r.id}` })));
+      ? runDownloadLinks(base, unitSystem)
+      : comparisonDownloadLinks(base, '', report.runs.map((r) => ({ runId: r.id, href: `${base}/hourly.csv?run=${r.id}` })), unitSystem);
   return (
     <div>
       <ReportToolbar downloads={downloads} />
