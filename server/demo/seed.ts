@@ -3,6 +3,7 @@ import type { Db } from '../db/client';
 import { projects, users } from '../db/schema';
 import { demoPeople, seedDemoPeople } from './people';
 import { seedDemoClimate } from './climate';
+import { seedDemoProjection } from './projections';
 
 /**
  * Fills an empty database with the synthetic demo workspace. Every project, person and site in it
@@ -11,7 +12,7 @@ import { seedDemoClimate } from './climate';
 export function seedDemo(db: Db): { seeded: boolean } {
   const existing = db.select({ n: count() }).from(projects).get();
   if (existing && existing.n > 0) return { seeded: false };
-  db.transaction((tx) => {
+  const { projectId, engineerId } = db.transaction((tx) => {
     const project = tx
       .insert(projects)
       .values({
@@ -24,6 +25,9 @@ export function seedDemo(db: Db): { seeded: boolean } {
     const engineerEmail = demoPeople.find((p) => p.role === 'engineer')?.email ?? '';
     const engineer = tx.select({ id: users.id }).from(users).where(eq(users.email, engineerEmail)).get();
     seedDemoClimate(tx, project.id, engineer?.id ?? null);
+    return { projectId: project.id, engineerId: engineer?.id ?? null };
   });
+  // Made from the stored series, so after the workspace above is in place.
+  seedDemoProjection(db, projectId, engineerId);
   return { seeded: true };
 }

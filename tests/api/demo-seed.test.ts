@@ -13,12 +13,17 @@ afterAll(() => t.close());
 const n = (table: typeof projects | typeof sites | typeof climateFiles | typeof scenarios | typeof runs) => t.db.select({ n: count() }).from(table).get()!.n;
 
 describe('the demo workspace on a fresh installation', () => {
-  it('loads four synthetic sites with three years each, three scenarios and a queued run of each on each site', async () => {
+  it('loads four synthetic sites with three years each, a projection, three scenarios and a queued run of each on each site', async () => {
     expect(seedDemo(t.db)).toEqual({ seeded: true });
     expect(n(projects)).toBe(1);
     expect(n(sites)).toBe(4);
     const files = t.db.select().from(climateFiles).all();
-    expect(files).toHaveLength(4);
+    // Four uploads and one synthetic future-climate projection of the first.
+    expect(files).toHaveLength(5);
+    const projection = files.filter((f) => f.parentId !== null);
+    expect(projection).toHaveLength(1);
+    expect(projection[0].parentId).toBe(files[0].id);
+    expect(JSON.parse(projection[0].derivationJson!).method).toBeTruthy();
     for (const f of files) {
       // Three calendar years of hours (2021–2023: 26,280 hours), give or take the time-zone shift at the ends.
       expect(f.hours).toBeGreaterThan(26_200);
