@@ -43,10 +43,14 @@ export function ClimateFacts({ run }: { run: ReportRun }) {
       ],
       [
         'Gaps',
-        <span>
-          <span className="num">{v.gaps.toLocaleString('en')}</span> gap{v.gaps === 1 ? '' : 's'}, the longest <span className="num">{v.longestGapHours} h</span>; gaps up to{' '}
-          <span className="num">{v.maxGapFilledHours} h</span> filled by linear interpolation, longer ones left as no data
-        </span>,
+        v.gaps === 0 ? (
+          <span>none (gaps up to <span className="num">{v.maxGapFilledHours} h</span> would be filled by linear interpolation)</span>
+        ) : (
+          <span>
+            <span className="num">{v.gaps.toLocaleString('en')}</span> gap{v.gaps === 1 ? '' : 's'}, the longest <span className="num">{v.longestGapHours} h</span>; gaps up to{' '}
+            <span className="num">{v.maxGapFilledHours} h</span> filled by linear interpolation, longer ones left as no data
+          </span>
+        ),
       ],
       ['Time basis', `${v.timeLayout ?? 'time column'}; timestamps without an offset read as ${v.timeZone}; hours computed in UTC`],
       ['Step', v.stepMinutes ? `${v.stepMinutes} min in the file${v.stepMinutes < 60 ? ', averaged to hours' : ''}` : '–'],

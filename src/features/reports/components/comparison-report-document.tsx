@@ -154,7 +154,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
               name,
               ...runs.map((run) => {
                 const m = run.results.hoursByMonth.find((row) => row.month === i + 1);
-                return m ? modeKeys.slice(0, 3).map((k) => hoursOfMode(m, k)).join(' / ') : '–';
+                return m ? modeKeys.slice(0, 3).map((k) => hoursOfMode(m, k).toLocaleString('en')).join(' / ') : '–';
               }),
             ],
           }))}
