@@ -134,6 +134,15 @@ describe('the report of a run', () => {
     await chartsDrawn(page);
     await shot('report-run-si');
 
+    // The button hands the page to the browser's print dialog (stubbed here: headless Chromium has none).
+    await page.evaluate(() => {
+      const w = window as unknown as { printCalls: number };
+      w.printCalls = 0;
+      window.print = () => void w.printCalls++;
+    });
+    await page.getByRole('button', { name: 'Print or save as PDF' }).click();
+    expect(await page.evaluate(() => (window as unknown as { printCalls: number }).printCalls)).toBe(1);
+
     const pdfPages = await printed('report-run-si');
     expect(pdfPages).toBeGreaterThan(1);
     // In print the app's header and the report's controls are gone.
