@@ -15,6 +15,7 @@ let current: TestPerson;
 let projectId: number;
 let scenarioId: number;
 let a2ScenarioId: number;
+let climateFileId: number;
 let lineSweepUrl: string;
 const pageErrors: string[] = [];
 
@@ -67,7 +68,8 @@ beforeAll(async () => {
     `/projects/${projectId}/sites`,
     JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
   );
-  await api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const upload = await api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  climateFileId = upload.climateFile.id;
   const { scenario } = await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
   scenarioId = scenario.id;
   // The same design held to the A2 allowable class (ASHRAE TC 9.9 2021 as in shared/scenario/envelopes.ts, recalled from memory):
@@ -96,17 +98,17 @@ describe('an engineer sweeping the supply setpoint', () => {
     await page.getByRole('link', { name: 'Sweep an input of this scenario' }).click();
     await page.waitForURL(/\/sweeps\/new\?scenario=\d+$/);
     // The supply setpoint is offered first, from 18 to 30 °C by 1 K: 13 points.
-    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('13');
+    await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('13');
     await page.getByLabel('From (°C)').fill('16');
     await page.getByLabel('To (°C)').fill('48');
     // 16…48 °C is 33 points; the scenario schema allows the setpoint up to 45 °C, so 46, 47 and 48 are refused by name.
-    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('33');
+    await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('33');
     const errors = await page.getByTestId('sweep-errors').innerText();
     expect(errors).toContain('system.supplyAirC = 46 is refused: system.supplyAirC must be a number from 5 to 45 °C (got 46)');
     expect(await page.getByRole('button', { name: /Start sweep/ }).isDisabled()).toBe(true);
     await shot('sweep-new-refused-si');
     await page.getByLabel('To (°C)').fill('30');
-    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('15');
+    await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('15');
     await shot('sweep-new-si');
     await page.getByRole('button', { name: 'Start sweep of 15 runs' }).click();
     await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
@@ -147,7 +149,7 @@ describe('an engineer sweeping the supply setpoint', () => {
   it('sweeps a grid of supply setpoint and evaporative effectiveness and draws it as a heat map', async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${a2ScenarioId}`);
-    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('13');
+    await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('13');
     await page.getByLabel('From (°C)').fill('20');
     await page.getByLabel('To (°C)').fill('28');
     await page.getByLabel('Step (K)').fill('2');
@@ -156,7 +158,7 @@ describe('an engineer sweeping the supply setpoint', () => {
     await page.getByLabel('From').nth(1).fill('0');
     await page.getByLabel('To').nth(1).fill('0.8');
     await page.getByLabel('Step').nth(1).fill('0.2');
-    await expect.poll(() => page.getByTestId('point-count').innerText()).toBe('25');
+    await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('25');
     await page.getByRole('button', { name: 'Start sweep of 25 runs' }).click();
     await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('25 of 25 points done');
@@ -176,19 +178,57 @@ describe('an engineer sweeping the supply setpoint', () => {
   });
 });
 
+describe('sweeping envelope presets', () => {
+  it('draws hours per preset as bars, and a grid of presets × supply setpoint', async () => {
+    const page = h.page;
+    const presetIds = ['ashrae-2021-recommended', 'ashrae-2021-a1', 'ashrae-2021-a2', 'ashrae-2021-a3', 'ashrae-2021-a4'];
+    const { sweep: line } = await api<{ sweep: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sweeps`,
+      JSON.stringify({ scenarioId, climateFileId, axes: [{ input: 'envelope.presetId', presetIds }] }),
+    );
+    await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/${line.id}`);
+    await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('5 of 5 points done');
+    await chartsDrawn(page);
+    expect(await page.getByTestId('sweep-table').innerText()).toContain('Allowable A4 (2021)');
+    await shot('sweep-presets-si');
+    const { sweep: grid } = await api<{ sweep: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sweeps`,
+      JSON.stringify({
+        scenarioId,
+        climateFileId,
+        axes: [
+          { input: 'system.supplyAirC', from: 18, to: 27, step: 3 },
+          { input: 'envelope.presetId', presetIds },
+        ],
+      }),
+    );
+    await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/${grid.id}`);
+    await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('20 of 20 points done');
+    await chartsDrawn(page);
+    await useUnits(page, 'IP');
+    await chartsDrawn(page);
+    await shot('sweep-presets-grid-ip');
+    await useUnits(page, 'SI');
+  });
+});
+
 describe('a viewer', () => {
   it('sees the sweeps and their charts but cannot start one', async () => {
     await signInAs(viewer);
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
-    await expect.poll(() => page.getByTestId('sweeps-list').locator('li').count(), { timeout: 15_000 }).toBe(2);
+    await expect.poll(() => page.getByTestId('sweeps-list').locator('li').count(), { timeout: 15_000 }).toBe(4);
     expect(await page.getByRole('link', { name: 'New sweep' }).count()).toBe(0);
     await shot('sweeps-panel-viewer');
     await page.goto(lineSweepUrl);
     await chartsDrawn(page);
     expect(await page.getByRole('button', { name: /Delete sweep/ }).count()).toBe(0);
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${scenarioId}`);
-    await expect.poll(() => page.getByText('Viewers can read sweeps but not start them').isVisible()).toBe(true);
+    await expect.poll(() => page.getByText('Viewers can read sweeps but not start them').isVisible(), { timeout: 10_000 }).toBe(true);
     expect(await page.getByRole('button', { name: /Start sweep/ }).isDisabled()).toBe(true);
   });
 });

@@ -3,7 +3,7 @@ import { densityRamp } from '@/components/charts/colour-ramps';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { axisOrder, gridCells, SWEEP_METRICS, sweepMetricLabels, type SweepInputPath, type SweepMetric, type SweepPoint } from '../../../../shared/sweep';
-import { formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
+import { compactPresetLabel, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
 import { formatMetric, metricDisplay, metricTitle } from '../utils/metric-format';
 
 /** Ink on the pale half of the ramp, paper on the dark half, so every cell's figure keeps its contrast. */
@@ -18,6 +18,8 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
   const [metric, setMetric] = useState<SweepMetric>('mechanical');
   const rowLabels = useMemo(() => axisOrder(points, rowInput).map((v) => formatSweepValue(rowInput, unitSystem, v)), [points, rowInput, unitSystem]);
   const columnLabels = useMemo(() => axisOrder(points, columnInput).map((v) => formatSweepValue(columnInput, unitSystem, v)), [points, columnInput, unitSystem]);
+  // Preset names are long: the chart's ticks take the short form, the table the full one.
+  const tick = useCallback((label: string) => compactPresetLabel(label), []);
   const cells = useMemo(
     () =>
       gridCells(points, rowInput, columnInput, metric).map((c) => ({
@@ -40,17 +42,21 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
       const hi = Math.max(...values);
       const t = (v: number | null) => (v === null || hi === lo ? 0 : (v - lo) / (hi - lo));
       const bandPx = Math.max(26, Math.min(44, 360 / Math.max(1, rowLabels.length)));
-      return Plot.plot({
+      const colour = { type: 'linear' as const, domain: values.length ? [lo, hi] : [0, 1], interpolate: densityRamp, label: title };
+      const figure = document.createElement('div');
+      // The ramp is drawn apart from the plot so its first tick keeps a margin of its own.
+      figure.append(Plot.legend({ color: colour, marginLeft: 12, width: 340 }));
+      figure.append(Plot.plot({
         width: widthPx,
         height: 70 + bandPx * rowLabels.length,
-        marginLeft: Math.min(200, 16 + 7 * Math.max(...rowLabels.map((l) => l.length))),
+        marginLeft: Math.min(200, 16 + 7 * Math.max(...rowLabels.map((l) => tick(l).length))),
         marginTop: 28,
         marginBottom: 44,
         style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
-        x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, tickRotate: columnLabels.some((l) => l.length > 8) ? -20 : 0 },
+        x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, tickFormat: tick },
         // The row title sits above the axis, level, so it never runs into the row labels.
-        y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'top', labelArrow: 'none' },
-        color: { type: 'linear', domain: values.length ? [lo, hi] : [0, 1], interpolate: densityRamp, legend: true, label: title },
+        y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'top', labelArrow: 'none', tickFormat: tick },
+        color: colour,
         marks: [
           Plot.cell(
             cells.filter((c) => c.shown === null),
@@ -66,9 +72,10 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
           ),
           Plot.text(cells, { x: 'columnLabel', y: 'rowLabel', text: 'text', fill: (c: (typeof cells)[number]) => cellInk(t(c.shown)), fontFamily: 'var(--font-mono)' }),
         ],
-      });
+      }));
+      return figure;
     },
-    [cells, rowLabels, columnLabels, rowTitle, columnTitle, title],
+    [cells, rowLabels, columnLabels, rowTitle, columnTitle, title, tick],
   );
 
   return (

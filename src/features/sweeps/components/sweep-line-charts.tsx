@@ -4,7 +4,7 @@ import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
 import { metricRows, modeHoursRows, type SweepInputPath, type SweepMetric, type SweepPoint, type SweepValue, type ZeroMechanical } from '../../../../shared/sweep';
-import { displayNumber, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
+import { compactPresetLabel, displayNumber, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
 import { metricDisplay, metricTitle } from '../utils/metric-format';
 
 const plotStyle = { fontFamily: 'var(--font-sans)', fontSize: '12px' };
@@ -17,8 +17,9 @@ function useAxis(input: SweepInputPath, points: readonly SweepPoint[]) {
   const { unitSystem } = useUnitSystem();
   return useMemo(() => {
     const preset = input === 'envelope.presetId';
-    const x = (v: SweepValue) => (typeof v === 'number' ? displayNumber(input, unitSystem, v) : formatSweepValue(input, unitSystem, v));
-    const labels = points.map((p) => formatSweepValue(input, unitSystem, p.values[input]!));
+    // Presets carry long names; the ticks take a short form, the table beside the charts the full one.
+    const x = (v: SweepValue) => (typeof v === 'number' ? displayNumber(input, unitSystem, v) : compactPresetLabel(formatSweepValue(input, unitSystem, v)));
+    const labels = points.map((p) => x(p.values[input]!) as string);
     return { preset, x, labels, title: sweepAxisTitle(input, unitSystem), unitSystem };
   }, [input, points, unitSystem]);
 }
@@ -70,6 +71,16 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
   );
 }
 
+/** A line with one value throughout (no water at any point, say) gets a domain of its own, not a zero-height one. */
+function flatDomain(values: number[], fromZero: boolean): { domain?: [number, number] } {
+  if (values.length === 0) return {};
+  const lo = Math.min(...values);
+  const hi = Math.max(...values);
+  if (hi > lo) return {};
+  if (!fromZero) return { domain: [hi - 0.01, hi + 0.01] };
+  return { domain: hi === 0 ? [0, 1] : [Math.min(0, hi), Math.abs(hi) * 1.1] };
+}
+
 const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical' };
 
 /**
@@ -95,7 +106,7 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
         x: axis.preset
           ? { type: 'point', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, padding: 0.5 }
           : { label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, ticks: 6 },
-        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue', nice: true },
+        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue', nice: true, ...flatDomain(rows.map((r) => r.y), metric !== 'partialPue') },
         marks: [
           zeroX === null ? null : Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3' }),
           Plot.lineY(rows, { x: 'x', y: 'y', stroke: colour, strokeWidth: 1.75 }),

@@ -26,7 +26,7 @@ export function SweepProgressBar({ progress }: { progress: SweepProgress }) {
         aria-valuemax={100}
         aria-valuenow={pct}
       >
-        <div className="h-full bg-harbour transition-[width] duration-500" style={{ width: `${pct}%` }} />
+        <div className={`h-full bg-harbour ${progress.finished ? '' : 'transition-[width] duration-500'}`} style={{ width: `${pct}%` }} />
       </div>
       {!progress.finished && <p className="mt-2 text-xs text-ink-soft">The charts fill in as points finish; you can leave and come back.</p>}
     </div>

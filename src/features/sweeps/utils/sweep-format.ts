@@ -66,3 +66,17 @@ export function displayNumber(path: SweepInputPath, system: UnitSystem, value: n
   const kind = kindOf[SWEEP_INPUTS[path].quantity];
   return kind ? toDisplay(kind, system, value) : value;
 }
+
+/**
+ * A preset's label short enough for a chart tick: "Allowable A2 (2021)" → "A2 ’21",
+ * "Recommended, 50 % RH (2021)" → "Rec. 50 % RH ’21". Tables keep the full label.
+ */
+export function compactPresetLabel(label: string): string {
+  return label
+    .replace(/^Allowable /, '')
+    .replace(/^Recommended,? ?/, 'Rec. ')
+    .replace(/, high-density/, '')
+    .replace(/\s*\((\d{2})(\d{2})\)$/, ' ’$2')
+    .replace(/\s+/g, ' ')
+    .trim();
+}
