@@ -41,7 +41,9 @@ export function zeroMechanicalText(zero: ZeroMechanical, format: (value: SweepVa
     case 'none':
       return 'No swept point reaches zero mechanical hours.';
     case 'from':
-      return `Mechanical hours reach zero from ${format(zero.value)}.`;
+      return zero.index === 0
+        ? `Mechanical hours are zero at every swept point, from ${format(zero.value)}.`
+        : `Mechanical hours reach zero from ${format(zero.value)}.`;
     case 'up-to':
       return `Mechanical hours are zero up to ${format(zero.value)}.`;
     case 'at':

@@ -11,6 +11,11 @@ describe('where mechanical hours reach zero', () => {
     expect(zeroMechanicalText(zero, celsius)).toBe('Mechanical hours reach zero from 22 °C.');
   });
 
+  it('says when every point is already at zero (an IT-load sweep changes no hours)', () => {
+    const zero = zeroMechanical(line([[500, 0], [1000, 0]]));
+    expect(zeroMechanicalText(zero, (v) => `${v} kW`)).toBe('Mechanical hours are zero at every swept point, from 500 kW.');
+  });
+
   it('says so when no point reaches zero', () => {
     const zero = zeroMechanical(line([[20, 310], [21, 122]]));
     expect(zeroMechanicalText(zero, celsius)).toBe('No swept point reaches zero mechanical hours.');
