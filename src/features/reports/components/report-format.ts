@@ -3,7 +3,14 @@ import type { ReportRun } from '../../../../shared/report/report-data';
 const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
 export const hours = (h: number) => `${h.toLocaleString('en')} h`;
-export const share = (part: number, whole: number) => `${whole > 0 ? fixed((100 * part) / whole, 1) : '0.0'} %`;
+/** A share to 0.1 %, never rounded to 0 or 100 when some hours are (or are not) in it. */
+export function share(part: number, whole: number): string {
+  if (!(whole > 0)) return '0.0 %';
+  const pct = (100 * part) / whole;
+  if (part > 0 && pct < 0.05) return '< 0.1 %';
+  if (part < whole && pct >= 99.95) return '> 99.9 %';
+  return `${fixed(pct, 1)} %`;
+}
 export const mwh = (kwh: number | null | undefined) => (kwh === null || kwh === undefined ? '–' : `${fixed(kwh / 1000, 1)} MWh`);
 export const kw = (v: number) => `${fixed(v, 0)} kW`;
 export const ratio = (v: number | null | undefined, digits = 3) => (v === null || v === undefined ? '–' : fixed(v, digits));
