@@ -113,7 +113,8 @@ describe('an engineer sweeping the supply setpoint', () => {
     await page.getByRole('button', { name: 'Start sweep of 15 runs' }).click();
     await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
     lineSweepUrl = page.url();
-    expect(await page.getByTestId('sweep-progress').isVisible()).toBe(true);
+    // Progress shows from the first moment (the page's code may still be loading as the address changes).
+    await expect.poll(() => page.getByTestId('sweep-progress').isVisible(), { timeout: 10_000 }).toBe(true);
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('15 of 15 points done');
     await chartsDrawn(page);
     await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(4);
@@ -143,6 +144,12 @@ describe('an engineer sweeping the supply setpoint', () => {
     // 16 °C + n K in °F: 60.8 + 1.8 n (exact conversion).
     expect(await page.getByTestId('zero-mechanical').innerText()).toBe(`Mechanical hours reach zero from ${(60.8 + 1.8 * firstZero).toFixed(1)} °F.`);
     await shot('sweep-line-ip');
+    // The form takes the range in °F: the suggested 18…30 °C by 1 K reads 64.4…86 °F by 1.8 °F, still 13 points.
+    await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${a2ScenarioId}`);
+    await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('13');
+    expect(await page.getByLabel('From (°F)').inputValue()).toBe('64.4');
+    expect(await page.getByLabel('Step (°F)').inputValue()).toBe('1.8');
+    await shot('sweep-new-ip');
     await useUnits(page, 'SI');
   });
 

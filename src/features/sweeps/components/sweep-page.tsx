@@ -132,6 +132,7 @@ export function SweepPage() {
             {!sweep.progress.finished && <span className="font-normal text-ink-soft"> (so far; points are still running)</span>}
           </p>
           <SweepLineCharts input={inputs[0]} points={sweep.points} zero={zero} />
+          <p className="mt-2 text-xs text-ink-soft">The table under "Points" holds the same figures.</p>
         </Panel>
       )}
       {anyDone && inputs.length === 2 && (
