@@ -1,22 +1,11 @@
-import { formatQuantity } from '@/lib/quantity';
+import { formatInputValue } from '@/components/ui/input-value';
 import type { UnitSystem } from '@/lib/unit-system';
 import { flattenInputs, type InputRow } from '../../../../shared/report/inputs';
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { ReportTable, SubHeading } from './report-layout';
 
 function shown(row: InputRow | undefined, system: UnitSystem): string {
-  if (!row) return '–';
-  if (typeof row.value !== 'number') return String(row.value);
-  switch (row.kind) {
-    case 'plain':
-      return String(row.value);
-    case 'percent':
-      return `${row.value} %`;
-    case 'power':
-      return `${row.value.toLocaleString('en')} kW`;
-    default:
-      return formatQuantity(row.kind, system, row.value);
-  }
+  return row ? formatInputValue(row, system) : '–';
 }
 
 const groups = [

@@ -1,21 +1,8 @@
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
-import { flattenInputs, type InputRow } from '../utils/inputs-as-run';
-
-function shown(row: InputRow, system: 'SI' | 'IP'): string {
-  if (typeof row.value !== 'number') return String(row.value);
-  switch (row.kind) {
-    case 'plain':
-      return String(row.value);
-    case 'percent':
-      return `${row.value} %`;
-    case 'power':
-      return `${row.value.toLocaleString('en')} kW`;
-    default:
-      return formatQuantity(row.kind, system, row.value);
-  }
-}
+import { flattenInputs } from '../utils/inputs-as-run';
+import { formatInputValue } from '@/components/ui/input-value';
 
 /** Everything the run was computed from, exactly as stored with it: scenario, climate file, engine. */
 export function RunInputs({ run }: { run: RunRecord }) {
@@ -30,7 +17,7 @@ export function RunInputs({ run }: { run: RunRecord }) {
           {rows.map((r) => (
             <tr key={r.path} className="border-b border-rule/60">
               <th scope="row" className="num py-0.5 pr-4 text-left font-normal text-ink-soft">{r.path}</th>
-              <td className="num py-0.5 text-right">{shown(r, unitSystem)}</td>
+              <td className="num py-0.5 text-right">{formatInputValue(r, unitSystem)}</td>
             </tr>
           ))}
         </tbody>
