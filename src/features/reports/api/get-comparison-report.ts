@@ -16,5 +16,6 @@ export const comparisonReportQueryOptions = (projectId: number, runIds: number[]
     staleTime: Infinity,
   });
 
+/** Asks only once there are two runs to compare. */
 export const useComparisonReport = (projectId: number, runIds: number[], baselineId: number) =>
-  useQuery(comparisonReportQueryOptions(projectId, runIds, baselineId));
+  useQuery({ ...comparisonReportQueryOptions(projectId, runIds, baselineId), enabled: runIds.length >= 2 });

@@ -21,7 +21,7 @@ export function ComparisonReportPage() {
   const baselineParam = Number(search.get('baseline'));
   const baselineId = runIds.includes(baselineParam) ? baselineParam : (runIds[0] ?? 0);
   const enough = runIds.length >= 2;
-  const query = useComparisonReport(projectId, enough ? runIds : [0, 0], baselineId);
+  const query = useComparisonReport(projectId, runIds, baselineId);
   const { role } = useProjectRole(projectId);
   const [sharing, setSharing] = useState(false);
   const { unitSystem } = useUnitSystem();
