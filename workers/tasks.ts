@@ -8,3 +8,4 @@ export { summariseClimate } from './summarise-climate';
 export { executeRun } from './execute-run';
 export { morphClimate } from './morph-climate';
 export { analyseExcursions } from './analyse-excursions';
+export { formatHourly } from './format-hourly';

@@ -1,16 +1,14 @@
 import type { Response } from 'express';
 import { and, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { comparisonCsv, comparisonRows, hourlyJson, runSummaryRows, summaryCsv, summaryRowsIn, type ReportData, type ReportRun, type SummaryUnits } from '../../shared/report';
-import { writeHourlyCsv } from '../../shared/scenario';
+import { comparisonCsv, comparisonRows, runSummaryRows, summaryCsv, summaryRowsIn, type ReportData, type ReportRun, type SummaryUnits } from '../../shared/report';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { systemClock } from '../auth/session';
-import type { Db } from '../db/client';
 import { runs, shareLinks } from '../db/schema';
 import { HttpError } from '../http-error';
-import { hourlyResultsOf } from '../reports/hourly-results';
+import { hourlyFileOf } from '../reports/hourly-results';
 import { comparisonQuery, comparisonReport, runReport } from '../reports/load-report';
 import { checkPublicUntil, createShareInput, listLinks, newShareToken, presentLink, resolveShareToken } from '../reports/share-links';
 
@@ -45,8 +43,16 @@ export function fileSlug(text: string): string {
 
 const runFileName = (run: ReportRun, what: string, ext: string) => `run-${run.id}-${fileSlug(run.scenario.name)}-${what}.${ext}`;
 
-/** Answers one download of a report: the hourly results of one of its runs, or its summary. */
-function sendDownload(db: Db, res: Response, projectId: number, report: ReportData, file: z.infer<typeof runFile>, query: unknown, runId?: number): void {
+/** Answers one download of a report: the hourly results of one of its runs (made on the pool), or its summary. */
+async function sendDownload(
+  { db, pool }: Pick<AppDeps, 'db' | 'pool'>,
+  res: Response,
+  projectId: number,
+  report: ReportData,
+  file: z.infer<typeof runFile>,
+  query: unknown,
+  runId?: number,
+): Promise<void> {
   const { units } = unitsQuery.parse(query);
   const suffix = units === 'IP' ? '-ip' : '';
   const reportRuns = report.kind === 'run' ? [report.run] : report.runs;
@@ -59,16 +65,14 @@ function sendDownload(db: Db, res: Response, projectId: number, report: ReportDa
       .where(and(eq(runs.id, run.id), eq(runs.projectId, projectId)))
       .get();
     if (!row) throw new HttpError(404, 'not_found', `Run ${run.id} was not found in this project.`);
-    const hourly = hourlyResultsOf(db, row);
     if (file === 'hourly.json') {
-      res.attachment(runFileName(run, 'hourly', 'json')).type('application/json');
-      res.send(JSON.stringify({ run: { id: run.id, scenario: run.scenario.name, site: run.site.name, climateFile: run.climate.name }, ...hourlyJson(hourly) }));
+      const about = { id: run.id, scenario: run.scenario.name, site: run.site.name, climateFile: run.climate.name };
+      const bytes = await hourlyFileOf(db, pool, row, 'json', about);
+      res.attachment(runFileName(run, 'hourly', 'json')).type('application/json').send(bytes);
       return;
     }
-    res.attachment(runFileName(run, 'hourly', 'csv')).type('text/csv; charset=utf-8');
-    // The writer reuses one buffer per chunk, so each chunk is copied before it is queued.
-    writeHourlyCsv(hourly, (bytes) => res.write(Buffer.from(bytes)));
-    res.end();
+    const bytes = await hourlyFileOf(db, pool, row, 'csv');
+    res.attachment(runFileName(run, 'hourly', 'csv')).type('text/csv; charset=utf-8').send(bytes);
     return;
   }
   if (report.kind === 'run') {
@@ -116,16 +120,16 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
       res.json({ report: comparisonReport(db, req.projectId!, runIds, baselineId, now()) });
     }),
 
-    route('get', '/projects/:projectId/runs/:runId/downloads/:file', access.viewer, (req, res) => {
+    route('get', '/projects/:projectId/runs/:runId/downloads/:file', access.viewer, async (req, res) => {
       const { runId } = runParams.parse(req.params);
       const file = runFile.parse(req.params.file);
-      sendDownload(db, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file, req.query);
+      await sendDownload(deps, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file, req.query);
     }),
 
-    route('get', '/projects/:projectId/compare/downloads/:file', access.viewer, (req, res) => {
+    route('get', '/projects/:projectId/compare/downloads/:file', access.viewer, async (req, res) => {
       const file = comparisonFile.parse(req.params.file);
       const { runIds, baselineId } = comparisonQuery.parse(req.query);
-      sendDownload(db, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file, req.query);
+      await sendDownload(deps, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file, req.query);
     }),
 
     route('get', '/projects/:projectId/share-links', access.owner, (req, res) => {
@@ -193,11 +197,11 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
       });
     }),
 
-    route('get', '/shared/:token/downloads/:file', access.public, (req, res) => {
+    route('get', '/shared/:token/downloads/:file', access.public, async (req, res) => {
       const link = resolveShareToken(db, req, String(req.params.token), now());
       const file = runFile.parse(req.params.file);
       const { run } = sharedRunQuery.parse(req.query);
-      sendDownload(db, res, link.projectId, linkedReport(link), file, req.query, run);
+      await sendDownload(deps, res, link.projectId, linkedReport(link), file, req.query, run);
     }),
   ];
 }
