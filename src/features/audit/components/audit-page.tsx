@@ -10,9 +10,13 @@ const actionGroups: { value: string; label: string }[] = [
   { value: 'invite.', label: 'Invitations' },
   { value: 'member.', label: 'Members and roles' },
   { value: 'admin.', label: 'Admin rights' },
-  { value: 'climate.', label: 'Climate uploads and imports' },
+  { value: 'site.', label: 'Sites' },
+  { value: 'climate.', label: 'Climate files and projections' },
+  { value: 'envelope.', label: 'Envelopes' },
   { value: 'scenario.', label: 'Scenario changes' },
   { value: 'run.', label: 'Runs' },
+  { value: 'sweep.', label: 'Sweeps' },
+  { value: 'share.', label: 'Report share links' },
   { value: 'project.', label: 'Projects' },
 ];
 
