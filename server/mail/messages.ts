@@ -19,12 +19,13 @@ export function inviteMail(input: { to: string; projectName: string; role: strin
 }
 
 /** The opt-in notice that a run has finished. */
-export function runFinishedMail(input: { to: string; projectName: string; runName: string; link: string }): OutgoingMail {
+export function runFinishedMail(input: { to: string; projectName: string; runName: string; link: string; kind?: 'run' | 'sweep' }): OutgoingMail {
+  const what = input.kind === 'sweep' ? 'sweep' : 'run';
   return {
     to: input.to,
-    subject: `Run finished: ${input.runName} (${input.projectName})`,
+    subject: `${what === 'sweep' ? 'Sweep' : 'Run'} finished: ${input.runName} (${input.projectName})`,
     text: [
-      `The run "${input.runName}" in "${input.projectName}" has finished.`,
+      `The ${what} "${input.runName}" in "${input.projectName}" has finished.`,
       '',
       `See the results: ${input.link}`,
       '',

@@ -5,12 +5,12 @@ import type { Mailer } from './mailer';
 import { runFinishedMail } from './messages';
 
 /**
- * Tells the project's members who opted in that a run finished. Mail failures are reported to `logError`
+ * Tells the project's members who opted in that a run (or a whole sweep) finished. Mail failures are reported to `logError`
  * and never fail the run. Returns the addresses written to.
  */
 export async function sendRunFinishedNotices(
   deps: { db: Db; mailer?: Mailer; publicUrl?: string; logError?: (error: unknown) => void },
-  run: { projectId: number; runName: string; path: string },
+  run: { projectId: number; runName: string; path: string; kind?: 'run' | 'sweep' },
 ): Promise<string[]> {
   if (!deps.mailer) return [];
   const project = deps.db.select({ name: projects.name }).from(projects).where(eq(projects.id, run.projectId)).get();
@@ -26,7 +26,7 @@ export async function sendRunFinishedNotices(
   const sent: string[] = [];
   for (const to of recipients) {
     try {
-      await deps.mailer.send(runFinishedMail({ to, projectName: project.name, runName: run.runName, link }));
+      await deps.mailer.send(runFinishedMail({ to, projectName: project.name, runName: run.runName, link, kind: run.kind }));
       sent.push(to);
     } catch (error) {
       deps.logError?.(error);

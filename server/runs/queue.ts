@@ -1,7 +1,7 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { ClimateSeries } from '../../shared/climate';
 import type { Db } from '../db/client';
-import { runHours, runs } from '../db/schema';
+import { runHours, runs, sweeps } from '../db/schema';
 import { blob, loadClimateSeries } from '../climate/store';
 import type { WorkerPool } from '../../workers/pool';
 import { recordAudit } from '../auth/audit';
@@ -43,10 +43,14 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
   const running = new Map<number, AbortController>();
   let idleWaiters: Array<() => void> = [];
 
-  /** A run that finished or failed on its own goes into the audit trail and, when done, out as notices. */
+  /**
+   * A run that finished or failed on its own goes into the audit trail and, when done, out as notices. A sweep's
+   * points are told as one: a failed point is audited, and when its last point settles the sweep is audited and noticed.
+   */
   function settle(runId: number, status: 'done' | 'failed'): void {
     const run = db.select().from(runs).where(eq(runs.id, runId)).get();
     if (!run) return;
+    if (run.sweepId !== null) return settleSweepPoint(run, status);
     const name = `${(JSON.parse(run.scenarioJson) as { name: string }).name} on ${(JSON.parse(run.climateJson) as { name: string }).name}`;
     recordAudit(db, { actorId: null, projectId: run.projectId, action: `run.${status}`, target: `run ${runId}: ${name}`, detail: { runId, error: run.error } });
     if (status === 'done') {
@@ -54,6 +58,26 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
         (error: unknown) => logError?.(error),
       );
     }
+  }
+
+  function settleSweepPoint(run: typeof runs.$inferSelect, status: 'done' | 'failed'): void {
+    const sweepId = run.sweepId!;
+    if (status === 'failed') {
+      recordAudit(db, { actorId: null, projectId: run.projectId, action: 'run.failed', target: `run ${run.id} (sweep ${sweepId})`, detail: { runId: run.id, sweepId, error: run.error } });
+    }
+    const points = db.select({ status: runs.status }).from(runs).where(eq(runs.sweepId, sweepId)).all();
+    if (points.some((p) => p.status === 'queued' || p.status === 'running')) return;
+    const sweep = db.select({ name: sweeps.name }).from(sweeps).where(eq(sweeps.id, sweepId)).get();
+    if (!sweep) return;
+    const tally = (s: string) => points.filter((p) => p.status === s).length;
+    const counts = { done: tally('done'), failed: tally('failed'), cancelled: tally('cancelled') };
+    recordAudit(db, { actorId: null, projectId: run.projectId, action: 'sweep.done', target: `sweep ${sweepId}: ${sweep.name}`, detail: { sweepId, points: points.length, ...counts } });
+    if (counts.done === 0) return;
+    const outcome = `${counts.done} of ${points.length} points done${counts.failed ? `, ${counts.failed} failed` : ''}`;
+    sendRunFinishedNotices(
+      { db, mailer, publicUrl, logError },
+      { projectId: run.projectId, runName: `${sweep.name} (${outcome})`, path: `/projects/${run.projectId}/sweeps/${sweepId}`, kind: 'sweep' },
+    ).catch((error: unknown) => logError?.(error));
   }
 
   function pump(): void {
