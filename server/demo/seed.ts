@@ -4,6 +4,7 @@ import { projects, users } from '../db/schema';
 import { demoPeople, seedDemoPeople } from './people';
 import { seedDemoClimate } from './climate';
 import { seedDemoProjection } from './projections';
+import { seedDemoSweep } from './sweeps';
 
 /**
  * Fills an empty database with the synthetic demo workspace. Every project, person and site in it
@@ -25,6 +26,7 @@ export function seedDemo(db: Db): { seeded: boolean } {
     const engineerEmail = demoPeople.find((p) => p.role === 'engineer')?.email ?? '';
     const engineer = tx.select({ id: users.id }).from(users).where(eq(users.email, engineerEmail)).get();
     seedDemoClimate(tx, project.id, engineer?.id ?? null);
+    seedDemoSweep(tx, project.id, engineer?.id ?? null);
     return { projectId: project.id, engineerId: engineer?.id ?? null };
   });
   // Made from the stored series, so after the workspace above is in place.

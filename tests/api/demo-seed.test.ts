@@ -1,6 +1,6 @@
 import { count } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { climateFiles, projects, runs, scenarios, sites } from '../../server/db/schema';
+import { climateFiles, projects, runs, scenarios, sites, sweeps } from '../../server/db/schema';
 import { seedDemo } from '../../server/demo/seed';
 import { createTestApp, type TestApp } from '../support/test-app';
 
@@ -10,10 +10,10 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-const n = (table: typeof projects | typeof sites | typeof climateFiles | typeof scenarios | typeof runs) => t.db.select({ n: count() }).from(table).get()!.n;
+const n = (table: typeof projects | typeof sites | typeof climateFiles | typeof scenarios | typeof runs | typeof sweeps) => t.db.select({ n: count() }).from(table).get()!.n;
 
 describe('the demo workspace on a fresh installation', () => {
-  it('loads four synthetic sites with three years each, a projection, three scenarios and a queued run of each on each site', async () => {
+  it('loads four synthetic sites with three years each, a projection, three scenarios, a queued run of each on each site and a sweep', async () => {
     expect(seedDemo(t.db)).toEqual({ seeded: true });
     expect(n(projects)).toBe(1);
     expect(n(sites)).toBe(4);
@@ -30,8 +30,10 @@ describe('the demo workspace on a fresh installation', () => {
       expect(f.hours).toBeLessThan(26_400);
     }
     expect(n(scenarios)).toBe(3);
-    expect(n(runs)).toBe(12);
-    expect(t.runQueue.resume()).toBe(12);
+    // One run of each scenario on each site, and the 13 points (18–30 °C) of the demo sweep.
+    expect(n(runs)).toBe(12 + 13);
+    expect(n(sweeps)).toBe(1);
+    expect(t.runQueue.resume()).toBe(12 + 13);
     await t.runQueue.idle();
     const statuses = t.db.select({ status: runs.status, error: runs.error }).from(runs).all();
     expect(statuses.filter((r) => r.status !== 'done')).toEqual([]);
