@@ -4,6 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
+import { useUnitSystem } from '@/lib/unit-system';
 import { ResultCautions } from './cautions';
 import { EnergyWaterCards } from './energy-water-cards';
 import { ModeHoursPanel } from './mode-hours-panel';
@@ -30,6 +31,7 @@ export function RunPage() {
   const runId = Number(params.runId);
   const query = useRun(projectId, runId);
   const { canEdit } = useProjectRole(projectId);
+  const { unitSystem } = useUnitSystem();
 
   if (query.isPending) return <div className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading run" />;
   if (query.isError) {
@@ -72,7 +74,7 @@ export function RunPage() {
               <Link to={`/projects/${projectId}/runs/${run.id}/report`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
                 Report
               </Link>
-              <DownloadMenu links={runDownloadLinks(`/api/projects/${projectId}/runs/${run.id}/downloads`)} />
+              <DownloadMenu links={runDownloadLinks(`/api/projects/${projectId}/runs/${run.id}/downloads`, unitSystem)} />
             </>
           )}
         </div>
