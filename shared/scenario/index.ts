@@ -15,3 +15,4 @@ export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun } from '.
 export { ENGINE_VERSION } from './version';
 export { HOURLY_CSV_COLUMNS, writeHourlyCsv, writeFixed, hourlyCsvInput } from './hourly-csv';
 export type { HourlyCsvInput } from './hourly-csv';
+export { INPUT_LABELS, inputLabel } from './input-labels';

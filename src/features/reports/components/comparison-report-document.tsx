@@ -183,7 +183,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
       </ReportSection>
 
       <ReportSection id="inputs" title="6. Scenario inputs" newPage>
-        <p className="text-xs text-ink-soft">Exactly as run; field names as in the scenario JSON; rows where the runs differ are marked.</p>
+        <p className="text-xs text-ink-soft">Exactly as run, each with its field name in the scenario JSON beneath; rows where the runs differ are marked.</p>
         <InputsTable runs={runs} unitSystem={unitSystem} />
       </ReportSection>
 

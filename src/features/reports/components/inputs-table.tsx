@@ -1,6 +1,7 @@
 import { formatInputValue } from '@/components/ui/input-value';
 import type { UnitSystem } from '@/lib/unit-system';
 import { flattenInputs, type InputRow } from '../../../../shared/report/inputs';
+import { inputLabel } from '../../../../shared/scenario/input-labels';
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { ReportTable, SubHeading } from './report-layout';
 
@@ -16,7 +17,8 @@ const groups = [
 ];
 
 /**
- * The scenario inputs exactly as run, by group, field names as in the scenario JSON. With several runs,
+ * The scenario inputs exactly as run, by group: each by its plain name, with its field name in the scenario JSON
+ * beneath (what the command line reads). With several runs,
  * one column each, and the rows where they differ marked.
  */
 export function InputsTable({ runs, unitSystem }: { runs: ReportRun[]; unitSystem: UnitSystem }) {
@@ -39,9 +41,10 @@ export function InputsTable({ runs, unitSystem }: { runs: ReportRun[]; unitSyste
                 return {
                   key: path,
                   cells: [
-                    <span className="num break-all text-xs">
-                      {path.slice(group.prefix.length)}
-                      {differs && <span className="ml-1 rounded bg-mist px-1 font-sans text-[10px] text-ink">differs</span>}
+                    <span className="text-xs">
+                      {inputLabel(path)}
+                      {differs && <span className="ml-1 rounded bg-mist px-1 text-[10px] text-ink">differs</span>}
+                      <span className="num block break-all text-[10px] text-ink-soft">{path.slice(group.prefix.length)}</span>
                     </span>,
                     ...values.map((value) => <span className="whitespace-nowrap">{value}</span>),
                   ],

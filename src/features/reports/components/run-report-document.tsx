@@ -76,7 +76,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
 
       <ReportSection id="inputs" title="4. Scenario inputs">
         <p className="text-xs text-ink-soft">
-          Exactly as run; field names as in the scenario JSON. The run uses the site's elevation ({formatQuantity('elevation', unitSystem, run.site.elevationM)}) in
+          Exactly as run, each with its field name in the scenario JSON beneath. The run uses the site's elevation ({formatQuantity('elevation', unitSystem, run.site.elevationM)}) in
           place of the scenario's elevationM.
         </p>
         <InputsTable runs={[run]} unitSystem={unitSystem} />

@@ -3,6 +3,7 @@ import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
 import { flattenInputs } from '../utils/inputs-as-run';
 import { formatInputValue } from '@/components/ui/input-value';
+import { inputLabel } from '../../../../shared/scenario/input-labels';
 
 /** Everything the run was computed from, exactly as stored with it: scenario, climate file, engine. */
 export function RunInputs({ run }: { run: RunRecord }) {
@@ -12,11 +13,13 @@ export function RunInputs({ run }: { run: RunRecord }) {
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
       <table className="w-full text-xs" data-testid="run-inputs">
-        <caption className="pb-1 text-left text-ink-soft">Scenario as run (field names as in the scenario JSON)</caption>
+        <caption className="pb-1 text-left text-ink-soft">Scenario as run (each input with its field name in the scenario JSON)</caption>
         <tbody>
           {rows.map((r) => (
             <tr key={r.path} className="border-b border-rule/60">
-              <th scope="row" className="num py-0.5 pr-4 text-left font-normal text-ink-soft">{r.path}</th>
+              <th scope="row" className="py-0.5 pr-4 text-left font-normal">
+                {inputLabel(r.path)} <span className="num text-[10px] text-ink-soft">{r.path}</span>
+              </th>
               <td className="num py-0.5 text-right">{formatInputValue(r, unitSystem)}</td>
             </tr>
           ))}

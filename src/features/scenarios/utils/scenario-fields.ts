@@ -8,6 +8,7 @@ import {
   waterSideSchema,
   type Scenario,
 } from '../../../../shared/scenario/schema';
+import { inputLabel } from '../../../../shared/scenario/input-labels';
 import type { FieldUnit } from './field-units';
 
 export type SystemKind = Scenario['system']['kind'];
@@ -35,8 +36,8 @@ function rangeOf(schema: AnyNumber): { min: number; max: number } {
   return { min: inner.minValue ?? Number.NEGATIVE_INFINITY, max: inner.maxValue ?? Number.POSITIVE_INFINITY };
 }
 
-function field(schema: AnyNumber, path: string, label: string, unit: FieldUnit, help: string, kinds?: SystemKind[]): NumericField {
-  return { path, label, unit, help, kinds, ...rangeOf(schema) };
+function field(schema: AnyNumber, path: string, unit: FieldUnit, help: string, kinds?: SystemKind[]): NumericField {
+  return { path, label: inputLabel(path), unit, help, kinds, ...rangeOf(schema) };
 }
 
 const sys = directAirSchema.shape;
@@ -49,27 +50,24 @@ export const siteFields: NumericField[] = [
   field(
     scenarioSchema.shape.elevationM,
     'elevationM',
-    'Site elevation',
     'elevation',
     'Sets the air pressure when the weather has none, and lowers the envelope maximum on high sites.',
   ),
 ];
 
 export const systemFields: NumericField[] = [
-  field(sys.supplyAirC, 'system.supplyAirC', 'Supply air setpoint', 'temperature', 'Air temperature held at the IT inlet.'),
-  field(sys.itDeltaTK, 'system.itDeltaTK', 'Rise across the IT', 'temperatureDifference', 'Return air is the supply plus this rise; sets the air flow.'),
-  field(sys.fanHeatK, 'system.fanHeatK', 'Fan heat', 'temperatureDifference', 'Warming of the air by the hall fans, added before the IT inlet.'),
+  field(sys.supplyAirC, 'system.supplyAirC', 'temperature', 'Air temperature held at the IT inlet.'),
+  field(sys.itDeltaTK, 'system.itDeltaTK', 'temperatureDifference', 'Return air is the supply plus this rise; sets the air flow.'),
+  field(sys.fanHeatK, 'system.fanHeatK', 'temperatureDifference', 'Warming of the air by the hall fans, added before the IT inlet.'),
   field(
     sys.evaporativeEffectiveness,
     'system.evaporativeEffectiveness',
-    'Evaporative effectiveness',
     'ratio',
     'Share of the wet-bulb depression the evaporative stage removes; 0 means the design has none.',
   ),
   field(
     ind.heatExchangerEffectiveness,
     'system.heatExchangerEffectiveness',
-    'Exchanger effectiveness',
     'ratio',
     'How close the air-to-air exchanger brings hall air to the outdoor (scavenger) air temperature.',
     ['indirect-air'],
@@ -77,17 +75,15 @@ export const systemFields: NumericField[] = [
   field(
     ind.scavengerAirRatio as AnyNumber,
     'system.scavengerAirRatio',
-    'Scavenger air ratio',
     'ratio',
     'Outdoor air mass flow through the exchanger per unit of hall air flow; 1 is common practice.',
     ['indirect-air'],
   ),
-  field(ws.chilledWaterSupplyC, 'system.chilledWaterSupplyC', 'Chilled-water supply', 'temperature', 'Water temperature leaving the plant to the hall coils; must be below the supply air.', ['water-side']),
-  field(ws.chilledWaterDeltaTK, 'system.chilledWaterDeltaTK', 'Chilled-water rise', 'temperatureDifference', 'Water temperature rise across the hall coils.', ['water-side']),
+  field(ws.chilledWaterSupplyC, 'system.chilledWaterSupplyC', 'temperature', 'Water temperature leaving the plant to the hall coils; must be below the supply air.', ['water-side']),
+  field(ws.chilledWaterDeltaTK, 'system.chilledWaterDeltaTK', 'temperatureDifference', 'Water temperature rise across the hall coils.', ['water-side']),
   field(
     ws.approachK,
     'system.approachK',
-    'Approach',
     'temperatureDifference',
     'Heat-rejection plus exchanger approach between outdoor (dry- or wet-bulb) and chilled-water temperature.',
     ['water-side'],
@@ -95,7 +91,6 @@ export const systemFields: NumericField[] = [
   field(
     ws.dryCoolerAirRiseK as AnyNumber,
     'system.dryCoolerAirRiseK',
-    'Dry-cooler air rise',
     'temperatureDifference',
     'Air temperature rise through the dry cooler, which sets its air flow; 10 K is common practice.',
     ['water-side'],
@@ -103,36 +98,34 @@ export const systemFields: NumericField[] = [
 ];
 
 export const envelopeFields: NumericField[] = [
-  field(envelopeShape.dryBulbMinC, 'envelope.dryBulbMinC', 'Dry-bulb, lowest', 'temperature', 'Coldest inlet air the IT accepts.'),
-  field(envelopeShape.dryBulbMaxC, 'envelope.dryBulbMaxC', 'Dry-bulb, highest', 'temperature', 'Warmest inlet air, before any altitude derating.'),
-  field(envelopeShape.dewPointMinC, 'envelope.dewPointMinC', 'Dew point, lowest', 'temperature', 'Driest air allowed, as a dew point.'),
-  field(envelopeShape.dewPointMaxC, 'envelope.dewPointMaxC', 'Dew point, highest', 'temperature', 'Moistest air allowed, as a dew point.'),
-  field(envelopeShape.rhMinPct, 'envelope.rhMinPct', 'Relative humidity, lowest', 'percent', 'Lower RH limit at the inlet.'),
-  field(envelopeShape.rhMaxPct, 'envelope.rhMaxPct', 'Relative humidity, highest', 'percent', 'Upper RH limit at the inlet.'),
+  field(envelopeShape.dryBulbMinC, 'envelope.dryBulbMinC', 'temperature', 'Coldest inlet air the IT accepts.'),
+  field(envelopeShape.dryBulbMaxC, 'envelope.dryBulbMaxC', 'temperature', 'Warmest inlet air, before any altitude derating.'),
+  field(envelopeShape.dewPointMinC, 'envelope.dewPointMinC', 'temperature', 'Driest air allowed, as a dew point.'),
+  field(envelopeShape.dewPointMaxC, 'envelope.dewPointMaxC', 'temperature', 'Moistest air allowed, as a dew point.'),
+  field(envelopeShape.rhMinPct, 'envelope.rhMinPct', 'percent', 'Lower RH limit at the inlet.'),
+  field(envelopeShape.rhMaxPct, 'envelope.rhMaxPct', 'percent', 'Upper RH limit at the inlet.'),
 ];
 
 export const energyFields: NumericField[] = [
-  field(en.itLoadKw, 'energy.itLoadKw', 'IT load', 'power', 'Constant IT power of the hall; every energy figure scales with it.'),
-  field(en.mechanicalCop, 'energy.mechanicalCop', 'Compressor COP', 'ratio', 'Cooling kW per electric kW at the reference outdoor temperature.'),
-  field(en.copSlopePerK, 'energy.copSlopePerK', 'COP change with outdoor temperature', 'perKelvin', 'Negative when compressors work harder in hot weather.'),
-  field(en.copReferenceC, 'energy.copReferenceC', 'COP reference temperature', 'temperature', 'Outdoor dry-bulb at which the COP above holds.'),
-  field(en.copMin, 'energy.copMin', 'Lowest COP', 'ratio', 'Floor on the adjusted COP, so a steep slope cannot reach zero.'),
-  field(en.fanPowerFraction, 'energy.fanPowerFraction', 'Hall fan power', 'shareAsPercent', 'Fan power as a share of IT load, every hour with data.'),
-  field(en.pumpPowerFraction, 'energy.pumpPowerFraction', 'Pump power', 'shareAsPercent', 'Share of IT load; water-side every hour, air-side only while the evaporative stage runs.'),
+  field(en.itLoadKw, 'energy.itLoadKw', 'power', 'Constant IT power of the hall; every energy figure scales with it.'),
+  field(en.mechanicalCop, 'energy.mechanicalCop', 'ratio', 'Cooling kW per electric kW at the reference outdoor temperature.'),
+  field(en.copSlopePerK, 'energy.copSlopePerK', 'perKelvin', 'Negative when compressors work harder in hot weather.'),
+  field(en.copReferenceC, 'energy.copReferenceC', 'temperature', 'Outdoor dry-bulb at which the COP above holds.'),
+  field(en.copMin, 'energy.copMin', 'ratio', 'Floor on the adjusted COP, so a steep slope cannot reach zero.'),
+  field(en.fanPowerFraction, 'energy.fanPowerFraction', 'shareAsPercent', 'Fan power as a share of IT load, every hour with data.'),
+  field(en.pumpPowerFraction, 'energy.pumpPowerFraction', 'shareAsPercent', 'Share of IT load; water-side every hour, air-side only while the evaporative stage runs.'),
   field(
     en.heatRejectionFanFraction,
     'energy.heatRejectionFanFraction',
-    'Heat-rejection fan power',
     'shareAsPercent',
     'Share of IT load for dry-cooler, tower or scavenger fans, every hour.',
     ['water-side', 'indirect-air'],
   ),
-  field(en.blowdownRatio, 'energy.blowdownRatio', 'Blowdown ratio', 'ratio', 'Water drained per volume evaporated; 0.33 is about four cycles of concentration.'),
+  field(en.blowdownRatio, 'energy.blowdownRatio', 'ratio', 'Water drained per volume evaporated; 0.33 is about four cycles of concentration.'),
   {
     ...field(
       en.towerEvaporationShare,
       'energy.towerEvaporationShare',
-      'Tower heat by evaporation',
       'shareAsPercent',
       'Share of a cooling tower’s heat rejected by evaporation; 85 % is a common rule of thumb.',
       ['water-side'],
