@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { EnergyTotals, ModeHours } from '../../shared/scenario/results';
+import type { SweepPointValues } from '../../shared/sweep';
 import { apiFetch } from './api-client';
 
 export type RunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
@@ -13,6 +14,10 @@ export interface RunListing {
   /** 0…1 while running */
   progress: number;
   error: string | null;
+  /** Set when the run is one point of a sweep, with that sweep's name and the swept inputs' values here. */
+  sweepId: number | null;
+  sweepName: string | null;
+  sweepPoint: SweepPointValues | null;
   createdAt: string | number;
   finishedAt: string | number | null;
   scenario: { name: string; system: { kind: string } };

@@ -2,12 +2,19 @@ import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, use
 import { SortHeader } from '@/components/ui/sort-header';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
+import { sweepPointShortText } from '@/lib/sweep-value';
+import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
+import { defaultPickerView, pickerViewOptions, runsInView, type PickerView } from '../utils/run-picker-view';
 
 const column = createColumnHelper<RunListing>();
 const share = (r: RunListing, key: 'free' | 'mechanical') => (r.results ? r.results.hours[key] / Math.max(1, r.results.hours.total) : 0);
 
-/** Finished runs, sortable by their headline figures, each with a tick to compare and a choice of baseline. */
+/**
+ * Finished runs, sortable by their headline figures, each with a tick to compare and a choice of baseline. Sweep
+ * points are hidden at first (a sweep may hold 200) and can be listed, all or one sweep's, each labelled with its
+ * sweep and swept value.
+ */
 export function RunPicker({
   projectId,
   runs,
@@ -24,6 +31,12 @@ export function RunPicker({
   onBaseline: (id: number) => void;
 }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'id', desc: true }]);
+  const { unitSystem } = useUnitSystem();
+  const options = useMemo(() => pickerViewOptions(runs), [runs]);
+  const [viewChoice, setView] = useState<PickerView | null>(null);
+  // A sweep deleted meanwhile, or no choice made yet: the default view.
+  const view = viewChoice && (viewChoice === 'plain' || viewChoice === 'all' || options.some((o) => o.value === viewChoice)) ? viewChoice : defaultPickerView(runs);
+  const listed = useMemo(() => runsInView(runs, view, chosen), [runs, view, chosen]);
   const columns = useMemo(
     () => [
       column.display({
@@ -44,6 +57,12 @@ export function RunPicker({
         cell: ({ row }) => (
           <Link to={`/projects/${projectId}/runs/${row.original.id}`} className="hover:underline">
             <span className="num text-xs text-ink-faint">#{row.original.id}</span> {row.original.scenario.name}
+            {row.original.sweepId !== null && (
+              <span className="block text-xs text-harbour-soft" data-testid="sweep-point-label">
+                Sweep {row.original.sweepName ?? row.original.sweepId}
+                {row.original.sweepPoint && <span className="num"> · {sweepPointShortText(row.original.sweepPoint, unitSystem)}</span>}
+              </span>
+            )}
             <span className="block text-xs text-ink-soft">
               {row.original.climate.site.name} · {row.original.climate.name}
             </span>
@@ -76,32 +95,56 @@ export function RunPicker({
         ),
       }),
     ],
-    [projectId, chosen, baselineId, onToggle, onBaseline],
+    [projectId, chosen, baselineId, onToggle, onBaseline, unitSystem],
   );
-  const table = useReactTable({ data: runs, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const table = useReactTable({ data: listed, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
 
   return (
-    <table className="w-full text-sm" data-testid="run-picker">
-      <thead>
-        {table.getHeaderGroups().map((group) => (
-          <tr key={group.id} className="border-b border-rule text-xs text-ink-soft">
-            {group.headers.map((header) => (
-              <SortHeader key={header.id} header={header} className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`} />
+    <div className="space-y-2">
+      {options.length > 0 && (
+        <label className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
+          Runs listed
+          <select
+            className="rounded border border-rule bg-panel px-1.5 py-1 text-sm text-ink"
+            value={view}
+            onChange={(e) => {
+              const next = e.target.value as PickerView;
+              setView(next);
+              // One sweep's points read best in sweep order (its runs were made in that order).
+              if (next.startsWith('sweep-')) setSorting([{ id: 'id', desc: false }]);
+            }}
+            data-testid="run-picker-view"
+          >
+            {options.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label} ({o.count})
+              </option>
             ))}
-          </tr>
-        ))}
-      </thead>
-      <tbody>
-        {table.getRowModel().rows.map((row) => (
-          <tr key={row.id} className="border-b border-rule/60 align-top">
-            {row.getVisibleCells().map((cell) => (
-              <td key={cell.id} className={`px-1 py-1 ${cell.column.id === 'id' ? 'text-left' : 'text-center'}`}>
-                {flexRender(cell.column.columnDef.cell, cell.getContext())}
-              </td>
-            ))}
-          </tr>
-        ))}
-      </tbody>
-    </table>
+          </select>
+        </label>
+      )}
+      <table className="w-full text-sm" data-testid="run-picker">
+        <thead>
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id} className="border-b border-rule text-xs text-ink-soft">
+              {group.headers.map((header) => (
+                <SortHeader key={header.id} header={header} className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`} />
+              ))}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className={`border-b border-rule/60 align-top ${row.original.sweepId !== null ? 'bg-paper/60' : ''}`}>
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className={`px-1 py-1 ${cell.column.id === 'id' ? 'text-left' : 'text-center'}`}>
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
   );
 }

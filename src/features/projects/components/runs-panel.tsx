@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import { modeColours, modeLabels } from '../../../../shared/modes';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
+import { foldSweepPoints, freeShareText, sweepRowSummary, type SweepRow } from '@/lib/run-list-folding';
 import { useProjectRuns, type RunListing, type RunStatus } from '../api/get-project-runs';
 
 const statusStyle: Record<RunStatus, { text: string; className: string }> = {
@@ -32,9 +33,44 @@ function ModeShareBar({ hours }: { hours: NonNullable<RunListing['results']>['ho
   );
 }
 
+/** A sweep's state in the status column: how far its points have got, or that they all finished. */
+function sweepStatus(row: SweepRow<RunListing>): { text: string; className: string } {
+  if (row.active > 0) return { text: `running ${Math.round((100 * (row.points - row.active)) / row.points)} %`, className: statusStyle.running.className };
+  if (row.failed > 0) return { text: `${row.failed} failed`, className: statusStyle.failed.className };
+  return { text: 'all done', className: statusStyle.done.className };
+}
+
+/** One row standing for all the points of a sweep, linking to the sweep's page. */
+function SweepRunsRow({ projectId, row }: { projectId: number; row: SweepRow<RunListing> }) {
+  const status = sweepStatus(row);
+  return (
+    <tr className="border-b border-rule/60 bg-paper/60" data-testid="sweep-row">
+      <td className="py-1">
+        <span className="rounded border border-rule px-1 text-xs text-ink-soft">sweep</span>
+      </td>
+      <td className="px-2">
+        <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="text-harbour underline-offset-2 hover:underline">
+          Sweep {row.name}
+        </Link>
+        <span className="num text-xs text-ink-soft">: {sweepRowSummary(row)}</span>
+      </td>
+      <td className="px-2 text-ink-soft">
+        {row.lead.climate.name} · {row.lead.climate.site.name}
+      </td>
+      <td className="px-2">
+        <span className={`num rounded px-1.5 py-0.5 text-xs ${status.className}`}>{status.text}</span>
+      </td>
+      <td className="num px-2 text-xs text-ink-soft">{row.freeShare ? freeShareText(row.freeShare) : '–'}</td>
+    </tr>
+  );
+}
+
 export function RunsPanel({ projectId }: { projectId: number }) {
   const runs = useProjectRuns(projectId);
-  const recent = runs.data?.runs.slice(0, 10) ?? [];
+  // A sweep's points (up to 200) fold into one row each, so the plain runs stay in view.
+  const folded = foldSweepPoints(runs.data?.runs ?? [], { runs: 10, sweeps: 5 });
+  const recent = folded.entries;
+  const hasSweepRows = recent.some((e) => e.kind === 'sweep');
   return (
     <Panel
       title="Recent runs"
@@ -63,28 +99,38 @@ export function RunsPanel({ projectId }: { projectId: number }) {
             </tr>
           </thead>
           <tbody>
-            {recent.map((r) => (
-              <tr key={r.id} className="border-b border-rule/60">
-                <td className="num py-1">
-                  <Link to={`/projects/${projectId}/runs/${r.id}`} className="text-harbour underline-offset-2 hover:underline">
-                    #{r.id}
-                  </Link>
-                </td>
-                <td className="px-2">{r.scenario.name}</td>
-                <td className="px-2 text-ink-soft">
-                  {r.climate.name} · {r.climate.site.name}
-                </td>
-                <td className="px-2">
-                  <span className={`num rounded px-1.5 py-0.5 text-xs ${statusStyle[r.status].className}`} title={r.error ?? undefined}>
-                    {statusStyle[r.status].text}
-                    {r.status === 'running' && ` ${Math.round(r.progress * 100)} %`}
-                  </span>
-                </td>
-                <td className="px-2">{r.results ? <ModeShareBar hours={r.results.hours} /> : <span className="text-xs text-ink-faint">–</span>}</td>
-              </tr>
-            ))}
+            {recent.map((entry) => {
+              if (entry.kind === 'sweep') return <SweepRunsRow key={`sweep-${entry.sweep.sweepId}`} projectId={projectId} row={entry.sweep} />;
+              const r = entry.run;
+              return (
+                <tr key={r.id} className="border-b border-rule/60">
+                  <td className="num py-1">
+                    <Link to={`/projects/${projectId}/runs/${r.id}`} className="text-harbour underline-offset-2 hover:underline">
+                      #{r.id}
+                    </Link>
+                  </td>
+                  <td className="px-2">{r.scenario.name}</td>
+                  <td className="px-2 text-ink-soft">
+                    {r.climate.name} · {r.climate.site.name}
+                  </td>
+                  <td className="px-2">
+                    <span className={`num rounded px-1.5 py-0.5 text-xs ${statusStyle[r.status].className}`} title={r.error ?? undefined}>
+                      {statusStyle[r.status].text}
+                      {r.status === 'running' && ` ${Math.round(r.progress * 100)} %`}
+                    </span>
+                  </td>
+                  <td className="px-2">{r.results ? <ModeShareBar hours={r.results.hours} /> : <span className="text-xs text-ink-faint">–</span>}</td>
+                </tr>
+              );
+            })}
           </tbody>
         </table>
+      )}
+      {(hasSweepRows || folded.hiddenSweeps > 0) && (
+        <p className="mt-2 text-xs text-ink-soft" data-testid="runs-sweep-note">
+          Each sweep shows as one row; open it for its points, charts and table.
+          {folded.hiddenSweeps > 0 && ` ${folded.hiddenSweeps} older sweep${folded.hiddenSweeps === 1 ? ' is' : 's are'} listed in the Sweeps panel.`}
+        </p>
       )}
     </Panel>
   );

@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { Scenario } from '../../../../shared/scenario/schema';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
+import type { SweepPointValues } from '../../../../shared/sweep';
 
 export type RunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
 
@@ -27,6 +28,10 @@ export interface RunRecord {
   progress: number;
   error: string | null;
   engineVersion: string;
+  /** Set when the run is one point of a sweep, with that sweep's name and the swept inputs' values here. */
+  sweepId: number | null;
+  sweepName: string | null;
+  sweepPoint: SweepPointValues | null;
   createdAt: string;
   startedAt: string | null;
   finishedAt: string | null;

@@ -4,6 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
+import { sweepPointText } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import { ResultCautions } from './cautions';
 import { EnergyWaterCards } from './energy-water-cards';
@@ -53,6 +54,19 @@ export function RunPage() {
           <p className="text-sm text-ink-soft">
             {run.climate.site.name} · {run.climate.name} · {run.climate.hours.toLocaleString('en')} hours
           </p>
+          {run.sweepId !== null && (
+            <p className="text-sm text-ink-soft" data-testid="run-sweep-point">
+              Point of sweep{' '}
+              <Link to={`/projects/${projectId}/sweeps/${run.sweepId}`} className="text-harbour underline underline-offset-2">
+                {run.sweepName ?? `#${run.sweepId}`}
+              </Link>
+              {run.sweepPoint && (
+                <>
+                  : <span className="num">{sweepPointText(run.sweepPoint, unitSystem)}</span>
+                </>
+              )}
+            </p>
+          )}
         </div>
         <div className="flex items-center gap-2 text-sm">
           <span className={`rounded px-2 py-0.5 text-xs font-medium ${statusStyle[run.status]}`} data-testid="run-status">
