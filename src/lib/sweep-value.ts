@@ -36,10 +36,3 @@ export function sweepPointText(point: SweepPointValues, system: UnitSystem): str
     .map((p) => `${p.label} = ${p.value}`)
     .join(', ');
 }
-
-/** A point in few words, for a list: "supply air 24.0 °C · IT load 500 kW". */
-export function sweepPointShortText(point: SweepPointValues, system: UnitSystem): string {
-  return sweepPointParts(point, system)
-    .map((p) => `${p.short} ${p.value}`)
-    .join(' · ');
-}

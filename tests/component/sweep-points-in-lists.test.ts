@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { pickerViewOptions, runsInView, defaultPickerView } from '@/features/compare/utils/run-picker-view';
 import { foldSweepPoints, freeShareText, sweepRowSummary, type FoldableRun } from '@/lib/run-list-folding';
-import { sweepPointShortText, sweepPointText } from '@/lib/sweep-value';
+import { sweepPointParts, sweepPointText } from '@/lib/sweep-value';
 
 type Status = FoldableRun['status'];
 type Run = FoldableRun & { label: string };
@@ -99,7 +99,10 @@ describe('a sweep point in words', () => {
     expect(sweepPointText(point, 'SI')).toBe('Supply air setpoint = 24.0 °C, IT load = 1,500 kW');
     // 24 °C × 9/5 + 32 = 75.2 °F (exact, by the definition of the Fahrenheit scale, NIST SP 811).
     expect(sweepPointText(point, 'IP')).toBe('Supply air setpoint = 75.2 °F, IT load = 1,500 kW');
-    expect(sweepPointShortText(point, 'IP')).toBe('supply air 75.2 °F · IT load 1,500 kW');
+    expect(sweepPointParts(point, 'IP').map((p) => [p.short, p.value])).toEqual([
+      ['supply air', '75.2 °F'],
+      ['IT load', '1,500 kW'],
+    ]);
     // A temperature difference converts as one: 4 K × 9/5 = 7.2 °F (exact), no 32 °F offset.
     expect(sweepPointText({ 'system.approachK': 4 }, 'IP')).toBe('Approach = 7.2 °F');
     expect(sweepPointText({ 'system.evaporativeEffectiveness': 0.85 }, 'IP')).toBe('Evaporative effectiveness = 0.85');

@@ -2,7 +2,7 @@ import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, use
 import { SortHeader } from '@/components/ui/sort-header';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { sweepPointShortText } from '@/lib/sweep-value';
+import { sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
 import { defaultPickerView, pickerViewOptions, runsInView, type PickerView } from '../utils/run-picker-view';
@@ -54,20 +54,39 @@ export function RunPicker({
       }),
       column.accessor('id', {
         header: 'Run',
-        cell: ({ row }) => (
-          <Link to={`/projects/${projectId}/runs/${row.original.id}`} className="hover:underline">
-            <span className="num text-xs text-ink-faint">#{row.original.id}</span> {row.original.scenario.name}
-            {row.original.sweepId !== null && (
-              <span className="block text-xs text-harbour-soft" data-testid="sweep-point-label">
-                Sweep {row.original.sweepName ?? row.original.sweepId}
-                {row.original.sweepPoint && <span className="num"> · {sweepPointShortText(row.original.sweepPoint, unitSystem)}</span>}
-              </span>
-            )}
+        cell: ({ row }) => {
+          const r = row.original;
+          const place = (
             <span className="block text-xs text-ink-soft">
-              {row.original.climate.site.name} · {row.original.climate.name}
+              {r.climate.site.name} · {r.climate.name}
             </span>
-          </Link>
-        ),
+          );
+          // A sweep point is named by its swept value in the reader's units; its scenario name repeats the base and gives the value in SI.
+          if (r.sweepId !== null && r.sweepPoint) {
+            return (
+              <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline" title={r.scenario.name}>
+                <span className="num text-xs text-ink-faint">#{r.id}</span> <span data-testid="sweep-point-value">
+                  {sweepPointParts(r.sweepPoint, unitSystem).map((part, i) => (
+                    <span key={part.path} className="whitespace-nowrap">
+                      {i > 0 && ' · '}
+                      {part.short} <span className="num">{part.value}</span>
+                    </span>
+                  ))}
+                </span>
+                <span className="block text-xs text-harbour-soft" data-testid="sweep-point-sweep">
+                  Point of sweep {r.sweepName ?? r.sweepId}
+                </span>
+                {place}
+              </Link>
+            );
+          }
+          return (
+            <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline">
+              <span className="num text-xs text-ink-faint">#{r.id}</span> {r.scenario.name}
+              {place}
+            </Link>
+          );
+        },
       }),
       column.accessor((r) => share(r, 'free'), {
         id: 'free',

@@ -52,7 +52,7 @@ function SweepRunsRow({ projectId, row }: { projectId: number; row: SweepRow<Run
         <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="text-harbour underline-offset-2 hover:underline">
           Sweep {row.name}
         </Link>
-        <span className="num text-xs text-ink-soft">: {sweepRowSummary(row)}</span>
+        : <span className="num text-xs text-ink-soft">{sweepRowSummary(row)}</span>
       </td>
       <td className="px-2 text-ink-soft">
         {row.lead.climate.name} · {row.lead.climate.site.name}
