@@ -29,10 +29,3 @@ export function sweepPointParts(point: SweepPointValues, system: UnitSystem): { 
       : [],
   );
 }
-
-/** A point in words: "Supply air setpoint = 24.0 °C", two inputs joined by ", ". */
-export function sweepPointText(point: SweepPointValues, system: UnitSystem): string {
-  return sweepPointParts(point, system)
-    .map((p) => `${p.label} = ${p.value}`)
-    .join(', ');
-}

@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { pickerViewOptions, runsInView, defaultPickerView } from '@/features/compare/utils/run-picker-view';
 import { foldSweepPoints, freeShareText, sweepRowSummary, type FoldableRun } from '@/lib/run-list-folding';
-import { sweepPointParts, sweepPointText } from '@/lib/sweep-value';
+import { sweepPointParts } from '@/lib/sweep-value';
+
+const words = (point: Parameters<typeof sweepPointParts>[0], system: 'SI' | 'IP') =>
+  sweepPointParts(point, system)
+    .map((p) => `${p.label} = ${p.value}`)
+    .join(', ');
 
 type Status = FoldableRun['status'];
 type Run = FoldableRun & { label: string };
@@ -96,20 +101,20 @@ describe('the compare picker\'s choice of runs', () => {
 describe('a sweep point in words', () => {
   it('follows the SI/IP switch for temperatures and keeps kW and effectiveness as they are', () => {
     const point = { 'system.supplyAirC': 24, 'energy.itLoadKw': 1500 };
-    expect(sweepPointText(point, 'SI')).toBe('Supply air setpoint = 24.0 °C, IT load = 1,500 kW');
+    expect(words(point, 'SI')).toBe('Supply air setpoint = 24.0 °C, IT load = 1,500 kW');
     // 24 °C × 9/5 + 32 = 75.2 °F (exact, by the definition of the Fahrenheit scale, NIST SP 811).
-    expect(sweepPointText(point, 'IP')).toBe('Supply air setpoint = 75.2 °F, IT load = 1,500 kW');
+    expect(words(point, 'IP')).toBe('Supply air setpoint = 75.2 °F, IT load = 1,500 kW');
     expect(sweepPointParts(point, 'IP').map((p) => [p.short, p.value])).toEqual([
       ['supply air', '75.2 °F'],
       ['IT load', '1,500 kW'],
     ]);
     // A temperature difference converts as one: 4 K × 9/5 = 7.2 °F (exact), no 32 °F offset.
-    expect(sweepPointText({ 'system.approachK': 4 }, 'IP')).toBe('Approach = 7.2 °F');
-    expect(sweepPointText({ 'system.evaporativeEffectiveness': 0.85 }, 'IP')).toBe('Evaporative effectiveness = 0.85');
+    expect(words({ 'system.approachK': 4 }, 'IP')).toBe('Approach = 7.2 °F');
+    expect(words({ 'system.evaporativeEffectiveness': 0.85 }, 'IP')).toBe('Evaporative effectiveness = 0.85');
   });
 
   it('names an envelope preset by its label and skips an input it does not know', () => {
-    const text = sweepPointText({ 'envelope.presetId': 'ashrae-2021-a2', 'system.unknown': 3 } as never, 'SI');
+    const text = words({ 'envelope.presetId': 'ashrae-2021-a2', 'system.unknown': 3 } as never, 'SI');
     expect(text).toBe('Inlet envelope preset = Allowable A2 (2021)');
     expect(text).not.toContain('unknown');
   });

@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
-import { sweepPointText } from '@/lib/sweep-value';
+import { sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import { ResultCautions } from './cautions';
 import { EnergyWaterCards } from './energy-water-cards';
@@ -60,11 +60,14 @@ export function RunPage() {
               <Link to={`/projects/${projectId}/sweeps/${run.sweepId}`} className="text-harbour underline underline-offset-2">
                 {run.sweepName ?? `#${run.sweepId}`}
               </Link>
-              {run.sweepPoint && (
-                <>
-                  : <span className="num">{sweepPointText(run.sweepPoint, unitSystem)}</span>
-                </>
-              )}
+              {run.sweepPoint && ': '}
+              {run.sweepPoint &&
+                sweepPointParts(run.sweepPoint, unitSystem).map((part, i) => (
+                  <span key={part.path}>
+                    {i > 0 && ', '}
+                    {part.label} = <span className="num">{part.value}</span>
+                  </span>
+                ))}
             </p>
           )}
         </div>
