@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { sites } from '../../server/db/schema';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { collectPageErrors, expectNoPageErrors, failedResourceLoad, startInSi } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 import { psychrolib } from '../unit/psychrometrics/reference-psychrolib';
 
@@ -14,7 +15,7 @@ let projectId: number;
 let viewer: TestPerson;
 let engineer: TestPerson;
 /** Errors the page logs (React warnings, uncaught exceptions); a refused request's own log line is expected. */
-const pageErrors: string[] = [];
+let pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
@@ -24,21 +25,12 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const [name, value] = engineer.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
-  h.page.on('console', (m) => m.type() === 'error' && !m.text().startsWith('Failed to load resource') && pageErrors.push(m.text()));
-  h.page.on('pageerror', (e) => pageErrors.push(e.message));
+  await h.signInAs(engineer);
+  pageErrors = collectPageErrors(h.page, { ignoreConsole: failedResourceLoad });
   // Start every journey in SI; the IP screenshots switch on the page.
-  await h.page.addInitScript(() => {
-    if (!sessionStorage.getItem('unit-reset')) {
-      localStorage.setItem('tramontane.unitSystem', 'SI');
-      sessionStorage.setItem('unit-reset', '1');
-    }
-  });
+  await startInSi(h.page);
 });
-afterEach(() => {
-  expect(pageErrors.splice(0)).toEqual([]);
-});
+afterEach(() => expectNoPageErrors(pageErrors));
 afterAll(() => h?.close());
 
 describe('an engineer adding hourly weather to a project', () => {
@@ -244,8 +236,7 @@ describe('an engineer adding hourly weather to a project', () => {
 
   it('lets a viewer read the project and the climate file but offers no upload', async () => {
     const page = h.page;
-    const [name, value] = viewer.cookie.split('=');
-    await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+    await h.signInAs(viewer);
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     await expect.poll(() => page.getByText('Your role: viewer').isVisible()).toBe(true);
     expect(await page.getByRole('link', { name: 'Upload climate file' }).count()).toBe(0);
@@ -266,8 +257,7 @@ describe('an engineer adding hourly weather to a project', () => {
 
   it('lists scenarios and recent runs with their status and hours by mode on the overview', async () => {
     const page = h.page;
-    const [name, value] = engineer.cookie.split('=');
-    await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+    await h.signInAs(engineer);
     const headers = { 'x-tramontane-request': '1', 'content-type': 'application/json' };
     const scenario = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
     const made = await page.request.post(`${h.baseUrl}/api/projects/${projectId}/scenarios`, { headers, data: { scenario } });

@@ -3,6 +3,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { seedDemo } from '../../server/demo/seed';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { chartsDrawn, collectPageErrors, expectNoPageErrors, failedResourceLoad, startInSi } from '../support/e2e-helpers';
 
 /*
  * The newcomer's tour of the demo workspace, through the real sign-in: the local provider's picker
@@ -21,7 +22,7 @@ let projectId: number;
 let ourRunId: number;
 let demoRunId: number;
 /** Uncaught exceptions and console errors; the viewer's refused write logs one expected line, filtered below. */
-const pageErrors: string[] = [];
+let pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
@@ -29,33 +30,15 @@ beforeAll(async () => {
   // The demo's 12 queued runs (3 scenarios × 4 sites), finished as `npm start` would finish them.
   h.testApp.runQueue.resume();
   await h.testApp.runQueue.idle();
-  h.page.on('pageerror', (e) => pageErrors.push(`pageerror: ${e.message}`));
-  h.page.on('console', (m) => m.type() === 'error' && !m.text().startsWith('Failed to load resource') && pageErrors.push(`console: ${m.text()}`));
+  pageErrors = collectPageErrors(h.page, { ignoreConsole: failedResourceLoad });
   // Start in SI whatever an earlier run of the browser left behind; the IP screenshots switch on the page.
-  await h.page.addInitScript(() => {
-    if (!sessionStorage.getItem('unit-reset')) {
-      localStorage.setItem('tramontane.unitSystem', 'SI');
-      sessionStorage.setItem('unit-reset', '1');
-    }
-  });
+  await startInSi(h.page);
 });
 afterEach(async (context) => {
   if (context.task.result?.state === 'fail') await h.screenshot(`demo-failed-${context.task.name.slice(0, 40).replace(/\W+/g, '-')}`);
-  expect(pageErrors.splice(0)).toEqual([]);
+  expectNoPageErrors(pageErrors);
 });
 afterAll(() => h?.close());
-
-/** A full-page screenshot from the top, so sticky side columns sit where a reader sees them. */
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  return h.screenshot(name);
-}
-
-/** Waits until every Plot figure on the page has drawn (its loading placeholder gone, an svg in place). */
-async function chartsDrawn(page: Page, atLeast = 1) {
-  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 15_000 }).toBe(0);
-  await expect.poll(() => page.locator('figure svg').count(), { timeout: 15_000 }).toBeGreaterThanOrEqual(atLeast);
-}
 
 /** From the header's sign-in button through the provider's picker page, back to the app signed in. */
 async function signInAs(name: string) {
@@ -78,10 +61,10 @@ describe('a newcomer touring the demo workspace', () => {
     const page = h.page;
     await page.goto(h.baseUrl);
     await page.getByTestId('sign-in').waitFor();
-    await shot('demo-01-signed-out');
+    await h.shot('demo-01-signed-out');
     await page.getByTestId('sign-in').click();
     await page.getByRole('heading', { name: 'Local sign-in' }).waitFor();
-    await shot('demo-02-provider-picker');
+    await h.shot('demo-02-provider-picker');
     await page.goBack();
     await signInAs('Tobias Ferrand');
     await page.getByRole('link', { name: demoProject }).click();
@@ -92,7 +75,7 @@ describe('a newcomer touring the demo workspace', () => {
     // Four invented sites and three sample scenarios; the overview lists the ten latest of the 12 demo runs, all done.
     await expect.poll(() => page.getByRole('row', { name: /Kelderwick Point synthetic/ }).count()).toBeGreaterThan(0);
     await expect.poll(() => page.getByTestId('runs-table').getByText('done', { exact: true }).count(), { timeout: 10_000 }).toBe(10);
-    await shot('demo-03-project-overview');
+    await h.shot('demo-03-project-overview');
   });
 
   it('uploads the Kelderwick Point sample through the mapping step and the report', async () => {
@@ -100,7 +83,7 @@ describe('a newcomer touring the demo workspace', () => {
     await page.getByRole('link', { name: 'Upload climate file' }).click();
     await page.waitForURL(`**/projects/${projectId}/climate-files/new`);
     await page.getByRole('radio', { name: /Kelderwick Point/ }).check();
-    await shot('demo-04-upload-site');
+    await h.shot('demo-04-upload-site');
     await page.getByRole('button', { name: 'Continue with Kelderwick Point' }).click();
     await page.getByLabel('File', { exact: true }).setInputFiles(kelderwickFile);
     expect(await page.getByLabel('Name in the project').inputValue()).toBe('kelderwick-point');
@@ -109,17 +92,17 @@ describe('a newcomer touring the demo workspace', () => {
     // The canonical layout is recognised as it is: comma-separated, relative humidity, pressure in kPa.
     expect(await page.getByLabel('Humidity measure').inputValue()).toBe('relative-humidity');
     expect(await page.getByLabel('Pressure unit').inputValue()).toBe('kPa');
-    await shot('demo-05-upload-mapping');
+    await h.shot('demo-05-upload-mapping');
     await page.getByRole('button', { name: 'Continue to the report' }).click();
     await page.getByTestId('validation-report').waitFor();
     expect(await page.getByText('The file can be stored').isVisible()).toBe(true);
-    await shot('demo-06-upload-report');
+    await h.shot('demo-06-upload-report');
     await page.getByRole('button', { name: 'Store climate file' }).click();
     await page.waitForURL(/\/climate-files\/\d+$/);
     await page.getByRole('heading', { name: 'kelderwick-point' }).waitFor();
     expect(await page.getByTestId('climate-file-facts').innerText()).toContain('2021–2023');
-    await chartsDrawn(page, 2);
-    await shot('demo-07-climate-file');
+    await chartsDrawn(page, { atLeast: 2 });
+    await h.shot('demo-07-climate-file');
   });
 
   it('creates a scenario on the uploaded file, runs it and reads the numbers and charts', { timeout: 90_000 }, async () => {
@@ -147,7 +130,7 @@ describe('a newcomer touring the demo workspace', () => {
       const label = (await box.locator('xpath=..').innerText()).trim();
       await box.setChecked(/^Kelderwick Point · kelderwick-point\b/.test(label));
     }
-    await shot('demo-08-scenario-editor');
+    await h.shot('demo-08-scenario-editor');
 
     await page.getByRole('button', { name: 'Save and run' }).click();
     await page.waitForURL(/\/runs\/\d+$/, { timeout: 15_000 });
@@ -171,17 +154,17 @@ describe('a newcomer touring the demo workspace', () => {
     expect(Math.abs(Number(await page.getByTestId('ppue').innerText()) - (26_280 + coolingMwh) / 26_280)).toBeLessThanOrEqual(0.0005 + 1e-5);
     expect(await page.getByTestId('wue').innerText()).toMatch(/L\/kWh$|^–$/);
     // Monthly hours, carpet and the moist-air chart each draw a figure; the bins follow.
-    await chartsDrawn(page, 3);
+    await chartsDrawn(page, { atLeast: 3 });
     await page.getByTestId('moist-air-chart').locator('figure svg').first().waitFor();
     await expect.poll(() => page.getByTestId('bin-table').locator('tbody tr').count(), { timeout: 15_000 }).toBeGreaterThan(8);
     expect(await page.getByText('Read these results as estimates').first().isVisible()).toBe(true);
-    await shot('demo-09-run-si');
+    await h.shot('demo-09-run-si');
 
     await page.getByTestId('moist-air-chart').getByRole('group', { name: 'Units' }).getByRole('button', { name: 'IP' }).click();
     await expect.poll(() => page.getByTestId('run-inputs').innerText()).toContain('64.4 °F'); // 18 °C × 9/5 + 32 = 64.4 °F (exact)
-    await chartsDrawn(page, 3);
+    await chartsDrawn(page, { atLeast: 3 });
     await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent()).toContain('gr/lb');
-    await shot('demo-10-run-ip');
+    await h.shot('demo-10-run-ip');
   });
 
   it('compares the run with a demo run, in IP then SI', async () => {
@@ -215,7 +198,7 @@ describe('a newcomer touring the demo workspace', () => {
     expect(freeRow).toContain(`${oursFree.toLocaleString('en')} h`);
     expect(freeRow).toContain(`${diff > 0 ? '+' : ''}${diff.toLocaleString('en')} h`);
     await chartsDrawn(page);
-    await shot('demo-11-compare-ip');
+    await h.shot('demo-11-compare-ip');
 
     // Back to SI through the person's settings, as a newcomer would find it.
     await page.goto(`${h.baseUrl}/settings`);
@@ -225,7 +208,7 @@ describe('a newcomer touring the demo workspace', () => {
     await table.waitFor();
     await chartsDrawn(page);
     expect(await table.innerText()).toContain('baseline');
-    await shot('demo-12-compare-si');
+    await h.shot('demo-12-compare-si');
   });
 
   it('as the demo viewer: the results are there, editing is refused', async () => {
@@ -239,14 +222,14 @@ describe('a newcomer touring the demo workspace', () => {
     expect(await page.getByRole('link', { name: 'Upload climate file' }).count()).toBe(0);
     expect(await page.getByRole('link', { name: 'New scenario' }).count()).toBe(0);
     await page.getByTestId('runs-table').getByRole('link', { name: `#${ourRunId}` }).waitFor();
-    await shot('demo-13-viewer-overview');
+    await h.shot('demo-13-viewer-overview');
 
     await page.getByTestId('runs-table').getByRole('link', { name: `#${ourRunId}` }).click();
     await page.waitForURL(`**/projects/${projectId}/runs/${ourRunId}`);
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('done');
     expect((await modeHours(page)).total).toBe(26_280);
-    await chartsDrawn(page, 3);
-    await shot('demo-14-viewer-run');
+    await chartsDrawn(page, { atLeast: 3 });
+    await h.shot('demo-14-viewer-run');
 
     await page.getByRole('link', { name: 'Open scenario' }).click();
     await page.waitForURL(/\/scenarios\/\d+$/);
@@ -255,7 +238,7 @@ describe('a newcomer touring the demo workspace', () => {
     expect(await page.getByLabel('Supply air setpoint').isDisabled()).toBe(true);
     expect(await page.getByRole('button', { name: /Save/ }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /Run/ }).count()).toBe(0);
-    await shot('demo-15-viewer-scenario');
+    await h.shot('demo-15-viewer-scenario');
 
     // The server refuses a write from the viewer's own signed-in page, whatever the screen offers.
     const status = await page.evaluate(
@@ -274,6 +257,6 @@ describe('a newcomer touring the demo workspace', () => {
     await page.goto(`${h.baseUrl}/projects/${projectId}/compare?runs=${ourRunId},${demoRunId}`);
     await page.getByTestId('comparison-table').waitFor();
     await chartsDrawn(page);
-    await shot('demo-16-viewer-compare');
+    await h.shot('demo-16-viewer-compare');
   });
 });

@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
 import path from 'node:path';
 import { screenshotFolder, startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { collectPageErrors, expectNoPageErrors } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 // Three synthetic years for an invented mild maritime site (sample-weather/generate.ts; labelled synthetic in the file).
@@ -15,67 +15,42 @@ let projectId: number;
 const runIds: number[] = [];
 /** The same file on a site an hour east of UTC: its local calendar years are cut by an hour at each end. */
 let shiftedRunId: number;
-const pageErrors: string[] = [];
-
-async function api<T>(method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
-  const res = await fetch(`${h.baseUrl}/api${path}`, {
-    method,
-    headers: { cookie: operator.cookie, 'x-tramontane-request': '1', 'content-type': type },
-    body,
-  });
-  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-/** The unit system is remembered per person on the server and in the browser; set both, as the settings toggle does. */
-async function useUnits(page: Page, system: 'SI' | 'IP') {
-  await api('PATCH', '/me', JSON.stringify({ unitSystem: system.toLowerCase() }));
-  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
-  await page.reload();
-}
+let pageErrors: string[] = [];
 
 /** A close-up of the panel holding `testId`, for reading figures the full page shrinks. */
 async function panelShot(testId: string, name: string) {
   await h.page.locator('section', { has: h.page.getByTestId(testId) }).screenshot({ path: path.join(screenshotFolder, `${name}.png`) });
 }
 
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  return h.screenshot(name);
-}
-
 beforeAll(async () => {
   h = await startBrowserHarness();
   operator = personWithSession(h.testApp.db, 'wren.okafor@example.test');
   projectId = projectWithMembers(h.testApp.db, 'North hall setpoint review', [[operator, 'engineer']]);
-  const { site } = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 20, timeZone: 'UTC' }));
-  const { climateFile } = await api<{ climateFile: { id: number } }>('POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const { site } = await h.api<{ site: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 20, timeZone: 'UTC' }));
+  const { climateFile } = await h.api<{ climateFile: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
   for (const supplyAirC of [25, 20]) {
-    const { scenario } = await api<{ scenario: { id: number } }>(
+    const { scenario } = await h.api<{ scenario: { id: number } }>(
+      operator,
       'POST',
       `/projects/${projectId}/scenarios`,
       JSON.stringify({ scenario: { ...directAirSample, name: `Direct air, ${supplyAirC} °C supply`, system: { ...directAirSample.system, supplyAirC } } }),
     );
-    const { runs } = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }));
+    const { runs } = await h.api<{ runs: { id: number }[] }>(operator, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }));
     runIds.push(runs[0].id);
   }
-  const east = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick East', elevationM: 20, timeZone: 'Europe/Oslo' }));
-  const eastFile = await api<{ climateFile: { id: number } }>('POST', `/projects/${projectId}/sites/${east.site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
-  const { scenario } = await api<{ scenario: { id: number } }>('POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
-  const shifted = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [eastFile.climateFile.id] }));
+  const east = await h.api<{ site: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick East', elevationM: 20, timeZone: 'Europe/Oslo' }));
+  const eastFile = await h.api<{ climateFile: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites/${east.site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const { scenario } = await h.api<{ scenario: { id: number } }>(operator, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+  const shifted = await h.api<{ runs: { id: number }[] }>(operator, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [eastFile.climateFile.id] }));
   shiftedRunId = shifted.runs[0].id;
   await h.testApp.runQueue.idle();
-  h.page.on('pageerror', (error) => pageErrors.push(error.message));
-  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
-  const [name, value] = operator.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+  pageErrors = collectPageErrors(h.page);
+  await h.signInAs(operator);
   await h.page.goto(h.baseUrl);
-  await useUnits(h.page, 'SI');
+  await h.useUnits('SI');
 }, 120_000);
 afterAll(() => h?.close());
-afterEach(() => {
-  expect(pageErrors.splice(0).join('\n')).toBe('');
-});
+afterEach(() => expectNoPageErrors(pageErrors));
 
 describe('year-to-year statistics of a three-year file', () => {
   it('shows median, P10, P90 and worst years on the run page, in SI and IP', async () => {
@@ -92,12 +67,12 @@ describe('year-to-year statistics of a three-year file', () => {
     // The file covers 2021–2023 whole (synthetic, hourly), so no year is set aside as partial.
     expect(notes).toContain('over 3 full calendar years');
     expect(notes).not.toContain('Left out as partial');
-    await shot('run-year-statistics-si');
+    await h.shot('run-year-statistics-si');
     await panelShot('year-table', 'run-year-statistics-panel-si');
-    await useUnits(page, 'IP');
+    await h.useUnits('IP');
     await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
     await panelShot('year-table', 'run-year-statistics-panel-ip');
-    await useUnits(page, 'SI');
+    await h.useUnits('SI');
   });
 
   it('counts a year an hour short on the site\'s clock as whole, and leaves out the hour that spills into the next', async () => {
@@ -122,7 +97,7 @@ describe('year-to-year statistics of a three-year file', () => {
     await table.waitFor({ timeout: 20_000 });
     await expect.poll(() => table.innerText()).toMatch(/Run \d+[\s\S]*Run \d+/);
     expect(await table.innerText()).not.toContain('loading');
-    await shot('compare-year-spread-si');
+    await h.shot('compare-year-spread-si');
     await panelShot('year-spread-table', 'compare-year-spread-panel-si');
   });
 });
@@ -148,14 +123,14 @@ describe('an operator checking a proposed setpoint for excursions', () => {
     expect(await page.getByText('Recalled from memory').first().isVisible()).toBe(true);
     expect(await page.getByTestId('method-notes').innerText()).toContain('only the hourly limit can');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
-    await shot('excursions-si');
+    await h.shot('excursions-si');
 
-    await useUnits(page, 'IP');
+    await h.useUnits('IP');
     await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
     // 30 °C is 86 °F; the limit of 20 K/h is 36 °F/h.
     expect(await page.getByTestId('proposal-summary').innerText()).toContain('86.0 °F');
     expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 °F/h');
-    await shot('excursions-ip');
+    await h.shot('excursions-ip');
 
     // A setpoint typed in °F travels in SI: 77 °F is 25 °C.
     await page.getByLabel('Supply setpoint at the IT inlet').fill('77');
@@ -167,13 +142,13 @@ describe('an operator checking a proposed setpoint for excursions', () => {
     await page.getByRole('button', { name: 'Work it out' }).click();
     await expect.poll(() => page.getByText('Enter a ceiling at or above the setpoint.').isVisible()).toBe(true);
 
-    await useUnits(page, 'SI');
+    await h.useUnits('SI');
     await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
     await page.emulateMedia({ media: 'print' });
     expect(await page.locator('header.bg-harbour').isVisible()).toBe(false);
     expect(await page.getByRole('button', { name: 'Work it out' }).isVisible()).toBe(false);
     expect(await page.getByTestId('excursion-figures').isVisible()).toBe(true);
-    await shot('excursions-print');
+    await h.shot('excursions-print');
     await page.emulateMedia({ media: 'screen' });
   });
 });

@@ -1,17 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { collectPageErrors, expectNoPageErrors } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers } from '../support/people';
 
 let h: BrowserHarness;
-const pageErrors: string[] = [];
+let pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
   const analyst = personWithSession(h.testApp.db, 'lena.okafor@example.test');
   projectWithMembers(h.testApp.db, 'Existing river site review', [[analyst, 'viewer']]);
-  const [name, value] = analyst.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
-  h.page.on('pageerror', (e) => pageErrors.push(e.message));
+  await h.signInAs(analyst);
+  // This journey has only ever counted what the page throws, not what it logs.
+  pageErrors = collectPageErrors(h.page, { ignoreConsole: () => true });
 });
 afterAll(() => h?.close());
 
@@ -36,6 +37,6 @@ describe('an analyst on the projects page', () => {
     await page.getByRole('link', { name: 'Fjordside expansion' }).waitFor();
     expect(await page.getByRole('cell', { name: 'Owner' }).isVisible()).toBe(true);
     await h.screenshot('home-projects');
-    expect(pageErrors).toEqual([]);
+    expectNoPageErrors(pageErrors);
   });
 });

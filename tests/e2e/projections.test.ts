@@ -3,6 +3,7 @@ import { fileURLToPath } from 'node:url';
 import type { Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { chartsDrawn, collectPageErrors, expectNoPageErrors, failedResourceLoad, startInSi } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 // Synthetic demo weather (a generated year for an invented cold continental site) and synthetic change factors.
@@ -14,28 +15,9 @@ let h: BrowserHarness;
 let engineer: TestPerson;
 let projectId: number;
 let parentId: number;
-const pageErrors: string[] = [];
-
-async function api<T>(method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
-  const res = await fetch(`${h.baseUrl}/api${path}`, {
-    method,
-    headers: { cookie: engineer.cookie, 'x-tramontane-request': '1', 'content-type': type },
-    body,
-  });
-  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-async function chartsDrawn(page: Page) {
-  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 15_000 }).toBe(0);
-  await expect.poll(() => page.locator('figure svg').count(), { timeout: 15_000 }).toBeGreaterThan(0);
-}
-
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  await h.page.waitForTimeout(200);
-  return h.screenshot(name);
-}
+let pageErrors: string[] = [];
+/** This file's screenshots wait a moment after scrolling to the top before they are taken. */
+const settleMs = 200;
 
 const units = (page: Page, system: 'SI' | 'IP') => page.getByRole('group', { name: 'Units' }).getByRole('button', { name: system }).click();
 /** The July row of the monthly table, as text. */
@@ -45,24 +27,15 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   engineer = personWithSession(h.testApp.db, 'ines.varga@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Valley campus futures', [[engineer, 'engineer']]);
-  const { site } = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Zimna Dolina', elevationM: 412, timeZone: 'Europe/Warsaw' }));
-  const file = await api<{ climateFile: { id: number } }>('POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=zimna-dolina.csv`, weather, 'text/csv');
+  const { site } = await h.api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Zimna Dolina', elevationM: 412, timeZone: 'Europe/Warsaw' }));
+  const file = await h.api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=zimna-dolina.csv`, weather, 'text/csv');
   parentId = file.climateFile.id;
-  await api('POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }));
-  const [name, value] = engineer.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
-  h.page.on('console', (m) => m.type() === 'error' && !m.text().startsWith('Failed to load resource') && pageErrors.push(m.text()));
-  h.page.on('pageerror', (e) => pageErrors.push(e.message));
-  await h.page.addInitScript(() => {
-    if (!sessionStorage.getItem('unit-reset')) {
-      localStorage.setItem('tramontane.unitSystem', 'SI');
-      sessionStorage.setItem('unit-reset', '1');
-    }
-  });
+  await h.api(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }));
+  await h.signInAs(engineer);
+  pageErrors = collectPageErrors(h.page, { ignoreConsole: failedResourceLoad });
+  await startInSi(h.page);
 });
-afterEach(() => {
-  expect(pageErrors.splice(0)).toEqual([]);
-});
+afterEach(() => expectNoPageErrors(pageErrors));
 afterAll(() => h?.close());
 
 describe('an engineer making a future-climate projection', () => {
@@ -88,13 +61,13 @@ describe('an engineer making a future-climate projection', () => {
     await chartsDrawn(page);
     // Shift-and-stretch moves July's monthly mean by exactly ΔTmean = 2.4 K (Belcher, Hacker and Powell 2005).
     expect(await julyRow(page)).toMatch(/\+2\.4$/);
-    await shot('projection-new-si');
+    await h.shot('projection-new-si', settleMs);
 
     // IP: the same factors shown as °F differences (× 1.8, no +32), the table in °F.
     await units(page, 'IP');
     await expect.poll(() => page.getByLabel('July, ΔT mean (°F)').inputValue()).toBe('4.32');
     expect(await julyRow(page)).toMatch(/\+4\.3$/);
-    await shot('projection-new-ip');
+    await h.shot('projection-new-ip', settleMs);
 
     await page.getByLabel('Name', { exact: true }).fill('Zimna Dolina, warmer decade');
     await page.getByLabel(/Where the factors come from/).fill('synthetic factors for a demonstration');
@@ -107,7 +80,7 @@ describe('an engineer making a future-climate projection', () => {
     // Still IP: July's mean daily max moved by 3.1 K = 5.58 °F difference; the table row ends with the mean's +4.3 °F.
     expect(await julyRow(page)).toMatch(/\+4\.3$/);
     expect(await page.getByTestId('projection-factors').locator('tbody tr').nth(6).innerText()).toMatch(/\+4\.3\s+\+5\.6\s+\+3\.2\s+\+1\.0/);
-    await shot('projection-page-ip');
+    await h.shot('projection-page-ip', settleMs);
 
     await units(page, 'SI');
     await expect.poll(() => julyRow(page)).toMatch(/\+2\.4$/);
@@ -115,7 +88,7 @@ describe('an engineer making a future-climate projection', () => {
     await page.getByRole('link', { name: 'Compare today with the projection' }).waitFor({ timeout: 15_000 });
     await page.getByRole('group', { name: 'Quantity' }).getByRole('button', { name: 'Dew point' }).click();
     await chartsDrawn(page);
-    await shot('projection-page-si');
+    await h.shot('projection-page-si', settleMs);
 
     // Listed as a projection wherever the project's files are listed, and on its climate-file page.
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
@@ -124,7 +97,7 @@ describe('an engineer making a future-climate projection', () => {
     expect(await row.innerText()).toContain('PROJECTION');
     await row.getByRole('link', { name: 'Zimna Dolina, warmer decade (projection)' }).click();
     await expect.poll(() => page.getByText('A future-climate projection of zimna-dolina, not measured weather.').isVisible(), { timeout: 15_000 }).toBe(true);
-    await shot('projection-climate-file-si');
+    await h.shot('projection-climate-file-si', settleMs);
   });
 
   it('says which month the server refused, at laptop width', { timeout: 60_000 }, async () => {
@@ -137,7 +110,7 @@ describe('an engineer making a future-climate projection', () => {
     await page.getByLabel('July, ΔT daily min (K)').fill('15');
     await page.getByRole('button', { name: 'Preview monthly means' }).click();
     await expect.poll(() => page.getByText(/^July: ΔTmax − ΔTmin = -30\.00 K would remove/).isVisible(), { timeout: 15_000 }).toBe(true);
-    await shot('projection-new-refused-si');
+    await h.shot('projection-new-refused-si', settleMs);
     await page.setViewportSize({ width: 1440, height: 900 });
   });
 });

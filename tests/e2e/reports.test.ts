@@ -1,8 +1,8 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
 import { screenshotFolder, startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { chartsDrawn, collectPageErrors, expectNoPageErrors } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 // Three synthetic years for an invented mild maritime site (sample-weather/generate.ts), so the report has every section at full size.
@@ -15,53 +15,15 @@ let viewer: TestPerson;
 let projectId: number;
 let runA: number;
 let runB: number;
-let current: TestPerson | null = null;
-const pageErrors: string[] = [];
+let pageErrors: string[] = [];
 /** Refusals a test expects the browser to log (a 401 or 410 answer is logged as a failed resource). */
 let expectedRefusals: RegExp | null = null;
-
-async function api<T>(person: TestPerson, method: string, url: string, body?: BodyInit, type = 'application/json'): Promise<T> {
-  const res = await fetch(`${h.baseUrl}/api${url}`, { method, headers: { cookie: person.cookie, 'x-tramontane-request': '1', 'content-type': type }, body });
-  if (!res.ok) throw new Error(`${method} ${url} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-async function signInAs(person: TestPerson | null) {
-  current = person;
-  await h.page.goto('about:blank');
-  await h.context.clearCookies();
-  if (!person) return;
-  const [name, value] = person.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
-}
-
-async function useUnits(page: Page, system: 'SI' | 'IP') {
-  if (current) {
-    await fetch(`${h.baseUrl}/api/me`, {
-      method: 'PATCH',
-      headers: { cookie: current.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
-      body: JSON.stringify({ unitSystem: system.toLowerCase() }),
-    });
-  }
-  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
-  await page.reload();
-}
-
-async function chartsDrawn(page: Page) {
-  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 15_000 }).toBe(0);
-  await expect.poll(() => page.locator('figure svg').count(), { timeout: 15_000 }).toBeGreaterThan(0);
-}
-
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  return h.screenshot(name);
-}
 
 /** The page as print shows it (screenshot), and the PDF the browser makes of it; returns the PDF's page count. */
 async function printed(name: string): Promise<number> {
   const page = h.page;
   await page.emulateMedia({ media: 'print' });
-  await shot(`${name}-print`);
+  await h.shot(`${name}-print`);
   const pdf = await page.pdf({ format: 'A4', printBackground: true });
   writeFileSync(path.join(screenshotFolder, `${name}.pdf`), pdf);
   const letter = await page.pdf({ format: 'Letter', printBackground: true });
@@ -80,8 +42,8 @@ beforeAll(async () => {
     [owner, 'owner'],
     [viewer, 'viewer'],
   ]);
-  const { site } = await api<{ site: { id: number } }>(owner, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }));
-  const { climateFile } = await api<{ climateFile: { id: number } }>(
+  const { site } = await h.api<{ site: { id: number } }>(owner, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }));
+  const { climateFile } = await h.api<{ climateFile: { id: number } }>(
     owner,
     'POST',
     `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
@@ -92,26 +54,21 @@ beforeAll(async () => {
   const cool = { ...directAirSample, name: 'Direct air, 20 °C supply (synthetic demo)', system: { ...directAirSample.system, supplyAirC: 20 } };
   const ids: number[] = [];
   for (const scenario of [warm, cool]) {
-    const { scenario: stored } = await api<{ scenario: { id: number } }>(owner, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
+    const { scenario: stored } = await h.api<{ scenario: { id: number } }>(owner, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
     ids.push(stored.id);
   }
-  const { runs } = await api<{ runs: { id: number }[] }>(owner, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: ids, climateFileIds: [climateFile.id] }));
+  const { runs } = await h.api<{ runs: { id: number }[] }>(owner, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: ids, climateFileIds: [climateFile.id] }));
   [runA, runB] = runs.map((r) => r.id);
   await h.testApp.runQueue.idle();
-  h.page.on('pageerror', (error) => pageErrors.push(error.message));
-  h.page.on('console', (message) => {
-    if (message.type() !== 'error') return;
-    if (expectedRefusals?.test(message.text())) return;
-    pageErrors.push(message.text());
-  });
-  await signInAs(owner);
+  pageErrors = collectPageErrors(h.page, { ignoreConsole: (text) => expectedRefusals?.test(text) ?? false });
+  await h.signInAs(owner);
   await h.page.goto(h.baseUrl);
-  await useUnits(h.page, 'SI');
+  await h.useUnits('SI');
 });
 afterAll(() => h?.close());
 afterEach(() => {
   expectedRefusals = null;
-  expect(pageErrors.splice(0).join('\n')).toBe('');
+  expectNoPageErrors(pageErrors);
 });
 
 describe('the report of a run', () => {
@@ -128,7 +85,7 @@ describe('the report of a run', () => {
     expect(await page.getByTestId('report-method').innerText()).toContain('ISO/IEC 30134-9');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
     // The figures are the run's own.
-    const { run } = await api<{ run: { results: { hours: { free: number; mechanical: number }; energy: { partialPue: number } } } }>(owner, 'GET', `/projects/${projectId}/runs/${runA}`);
+    const { run } = await h.api<{ run: { results: { hours: { free: number; mechanical: number }; energy: { partialPue: number } } } }>(owner, 'GET', `/projects/${projectId}/runs/${runA}`);
     expect(await page.getByTestId('report-ppue').innerText()).toBe(run.results.energy.partialPue.toFixed(3));
     expect(await page.getByTestId('report-headline').innerText()).toContain(`${run.results.hours.free.toLocaleString('en')} h`);
     // Up to 13 mechanical hours in 26,280 (under 0.05 %) are not rounded away to 0.0 % (nor free cooling up to 100.0 %).
@@ -136,7 +93,7 @@ describe('the report of a run', () => {
       expect(await page.getByTestId('report-mode-hours').innerText()).toMatch(/Mechanical\s+\d+\s+< 0\.1 %/);
     }
     await chartsDrawn(page);
-    await shot('report-run-si');
+    await h.shot('report-run-si');
 
     // The button hands the page to the browser's print dialog (stubbed here: headless Chromium has none).
     await page.evaluate(() => {
@@ -155,14 +112,14 @@ describe('the report of a run', () => {
     expect(await page.getByRole('button', { name: 'Print or save as PDF' }).isVisible()).toBe(false);
     await page.emulateMedia({ media: 'screen' });
 
-    await useUnits(page, 'IP');
+    await h.useUnits('IP');
     await chartsDrawn(page);
     // 25 °C supply is 77.0 °F.
     expect(await page.getByTestId('report-inputs').innerText()).toContain('77.0 °F');
     expect(await page.getByTestId('report-site').innerText()).toContain('46 ft'); // 14 m = 45.9 ft
-    await shot('report-run-ip');
+    await h.shot('report-run-ip');
     await printed('report-run-ip');
-    await useUnits(page, 'SI');
+    await h.useUnits('SI');
   });
 
   it('offers the downloads on the report and the run page, with the server’s file names', async () => {
@@ -172,7 +129,7 @@ describe('the report of a run', () => {
     await page.getByTestId('download-menu').locator('summary').click();
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: /Summary \(CSV\)/ }).click()]);
     expect(download.suggestedFilename()).toBe(`run-${runA}-direct-air-25-c-supply-synthetic-demo-summary.csv`);
-    await shot('run-page-downloads-si');
+    await h.shot('run-page-downloads-si');
   });
 });
 
@@ -185,12 +142,12 @@ describe('the report of a comparison', () => {
     expect(await page.getByTestId('report-runs').innerText()).toContain(`Run ${runB} (baseline)`);
     expect(await page.getByTestId('report-inputs').innerText()).toContain('differs');
     await chartsDrawn(page);
-    await shot('report-comparison-si');
+    await h.shot('report-comparison-si');
     expect(await printed('report-comparison-si')).toBeGreaterThan(1);
-    await useUnits(page, 'IP');
+    await h.useUnits('IP');
     await chartsDrawn(page);
-    await shot('report-comparison-ip');
-    await useUnits(page, 'SI');
+    await h.shot('report-comparison-ip');
+    await h.useUnits('SI');
   });
 });
 
@@ -208,34 +165,34 @@ describe('share links', () => {
     const url = await linkBox.inputValue();
     expect(url).toMatch(new RegExp(`^${h.baseUrl}/shared/[A-Za-z0-9_-]{43}$`));
     await expect.poll(() => page.getByTestId('share-link').first().innerText()).toContain('public');
-    await shot('report-share-panel-si');
+    await h.shot('report-share-panel-si');
 
-    await signInAs(null);
+    await h.signInAs(null);
     await page.goto(url);
     await page.getByTestId('report-title').waitFor();
     expect(await page.getByTestId('shared-note').innerText()).toContain('open to anyone with the link until');
     expect(await page.getByTestId('report-mode-hours').innerText()).toMatch(/All hours\s+26,280/);
     await chartsDrawn(page);
-    await shot('report-shared-public-si');
+    await h.shot('report-shared-public-si');
     expect(await printed('report-shared-public')).toBeGreaterThan(1);
 
-    await signInAs(owner);
+    await h.signInAs(owner);
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runA}/report`);
     await page.getByRole('button', { name: 'Share' }).click();
     page.once('dialog', (dialog) => void dialog.accept());
     await page.getByTestId('share-link').first().getByRole('button', { name: 'Revoke' }).click();
     await expect.poll(() => page.getByTestId('share-link').first().innerText()).toContain('revoked');
 
-    await signInAs(null);
+    await h.signInAs(null);
     expectedRefusals = /status of 410/;
     await page.goto(url);
     await page.getByTestId('shared-refused').waitFor();
     expect(await page.getByTestId('shared-refused').innerText()).toContain('This link was revoked');
-    await shot('report-shared-revoked');
+    await h.shot('report-shared-revoked');
   });
 
   it('a members-only link asks a signed-out reader to sign in, and opens for a member', async () => {
-    const { path: linkPath } = await api<{ path: string }>(
+    const { path: linkPath } = await h.api<{ path: string }>(
       owner,
       'POST',
       `/projects/${projectId}/share-links`,
@@ -246,14 +203,14 @@ describe('share links', () => {
     await page.goto(`${h.baseUrl}${linkPath}`);
     await page.getByTestId('shared-refused').waitFor();
     expect(await page.getByTestId('shared-refused').innerText()).toContain('Sign in to see this report');
-    await shot('report-shared-members-signed-out');
-    await signInAs(viewer);
+    await h.shot('report-shared-members-signed-out');
+    await h.signInAs(viewer);
     await page.goto(`${h.baseUrl}${linkPath}`);
     await page.getByTestId('report-comparison').waitFor();
     expect(await page.getByTestId('shared-note').innerText()).toContain('with the members of its project');
     // A viewer sees no Share button: only owners make links.
     expect(await page.getByRole('button', { name: 'Share' }).count()).toBe(0);
     await chartsDrawn(page);
-    await shot('report-shared-members-viewer-si');
+    await h.shot('report-shared-members-viewer-si');
   });
 });

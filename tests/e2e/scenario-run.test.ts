@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { chartsDrawn, collectPageErrors, expectNoPageErrors } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 // Synthetic test weather: 72 hours of July, never above 22 °C (tests/fixtures/api/three-days.csv).
@@ -18,51 +18,8 @@ let firstRunId: number;
 let secondRunId: number;
 let scenarioId: number;
 
-async function api<T>(person: TestPerson, method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
-  const res = await fetch(`${h.baseUrl}/api${path}`, {
-    method,
-    headers: { cookie: person.cookie, 'x-tramontane-request': '1', 'content-type': type },
-    body,
-  });
-  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-let current: TestPerson;
 /** Errors the page logs or throws; each test must end with none. */
-const pageErrors: string[] = [];
-
-async function signInAs(person: TestPerson) {
-  current = person;
-  // Leave the page first: requests still due from it (a debounced preview, a poll) must not go out as the next person.
-  await h.page.goto('about:blank');
-  await h.context.clearCookies();
-  const [name, value] = person.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
-}
-
-/** The unit system is remembered per person on the server and in the browser; set both, as the settings toggle does. */
-async function useUnits(page: Page, system: 'SI' | 'IP') {
-  await fetch(`${h.baseUrl}/api/me`, {
-    method: 'PATCH',
-    headers: { cookie: current.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
-    body: JSON.stringify({ unitSystem: system.toLowerCase() }),
-  });
-  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
-  await page.reload();
-}
-
-/** A full-page screenshot from the top, so sticky side columns sit where a reader sees them. */
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  return h.screenshot(name);
-}
-
-/** Waits until every Plot figure on the page has drawn (its loading placeholder gone, an svg in place). */
-async function chartsDrawn(page: Page) {
-  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 15_000 }).toBe(0);
-  await expect.poll(() => page.locator('figure svg').count(), { timeout: 15_000 }).toBeGreaterThan(0);
-}
+let pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
@@ -72,18 +29,15 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const { site } = await api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Saltmarsh Point', elevationM: 120 }));
-  await api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
-  h.page.on('pageerror', (error) => pageErrors.push(error.message));
-  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
-  await signInAs(engineer);
+  const { site } = await h.api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Saltmarsh Point', elevationM: 120 }));
+  await h.api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
+  pageErrors = collectPageErrors(h.page);
+  await h.signInAs(engineer);
   await h.page.goto(h.baseUrl);
-  await useUnits(h.page, 'SI');
+  await h.useUnits('SI');
 });
 afterAll(() => h?.close());
-afterEach(() => {
-  expect(pageErrors.splice(0).join("\n")).toBe("");
-});
+afterEach(() => expectNoPageErrors(pageErrors));
 
 describe('an engineer designing, running and comparing scenarios', () => {
   it('creates a scenario, sees the quick preview, saves and runs it, and reads the run page', async () => {
@@ -96,9 +50,9 @@ describe('an engineer designing, running and comparing scenarios', () => {
     // An out-of-range value is refused next to its field, in the person's units.
     await page.getByLabel('Rise across the IT').fill('90');
     await expect.poll(() => page.getByText('Enter a number from 1 to 40 K.').isVisible()).toBe(true);
-    await shot('scenario-editor-invalid-si');
+    await h.shot('scenario-editor-invalid-si');
     await page.getByLabel('Rise across the IT').fill('12');
-    await shot('scenario-editor-si');
+    await h.shot('scenario-editor-si');
 
     await page.getByRole('button', { name: 'Save and run' }).click();
     await page.waitForURL(/\/runs\/\d+$/, { timeout: 15_000 });
@@ -122,11 +76,11 @@ describe('an engineer designing, running and comparing scenarios', () => {
     expect(totals).toEqual(ordered);
     expect(await page.getByTestId('run-inputs').innerText()).toContain('system.supplyAirC');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
-    await shot('run-page-si');
-    await useUnits(page, 'IP');
+    await h.shot('run-page-si');
+    await h.useUnits('IP');
     await chartsDrawn(page);
     expect(await page.getByTestId('run-inputs').innerText()).toContain('75.2 °F');
-    await shot('run-page-ip');
+    await h.shot('run-page-ip');
   });
 
   it('edits the scenario in IP units, runs it again and compares the two runs', async () => {
@@ -137,7 +91,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
     // 59 °F is 15 °C exactly: the form keeps SI whatever the person types in.
     await page.getByLabel('Supply air setpoint').fill('59');
     await page.getByLabel('Name').fill('Direct air, 15 °C supply');
-    await shot('scenario-editor-ip');
+    await h.shot('scenario-editor-ip');
     // Leaving with unsaved edits asks first; staying keeps them.
     page.once('dialog', (dialog) => void dialog.dismiss());
     await page.getByRole('link', { name: 'Air-state calculator' }).click();
@@ -146,7 +100,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await page.getByRole('button', { name: 'Save changes' }).click();
     await expect.poll(() => page.getByText('Unsaved changes').isVisible()).toBe(false);
     await expect.poll(() => page.getByTestId('scenario-runs').innerText()).toContain('Saltmarsh Point');
-    const stored = await api<{ scenario: { scenario: { system: { supplyAirC: number } } } }>(engineer, 'GET', `/projects/${projectId}/scenarios/${scenarioId}`);
+    const stored = await h.api<{ scenario: { scenario: { system: { supplyAirC: number } } } }>(engineer, 'GET', `/projects/${projectId}/scenarios/${scenarioId}`);
     expect(stored.scenario.scenario.system.supplyAirC).toBeCloseTo(15, 9);
 
     await page.getByRole('button', { name: 'Run', exact: true }).click();
@@ -161,10 +115,10 @@ describe('an engineer designing, running and comparing scenarios', () => {
     expect(text).toContain('baseline');
     expect(text).toContain('Direct air, 15 °C supply');
     await chartsDrawn(page);
-    await shot('compare-ip');
-    await useUnits(page, 'SI');
+    await h.shot('compare-ip');
+    await h.useUnits('SI');
     await chartsDrawn(page);
-    await shot('compare-si');
+    await h.shot('compare-si');
   });
 
   it('offers the water-side fields and words a cross-field refusal in the editor’s terms', async () => {
@@ -177,7 +131,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
       .poll(() => page.getByText('“Chilled-water supply” must be below “supply air setpoint”.').isVisible())
       .toBe(true);
     expect(await page.getByLabel('Approach').isVisible()).toBe(true);
-    await shot('scenario-editor-water-side-si');
+    await h.shot('scenario-editor-water-side-si');
     page.once('dialog', (dialog) => void dialog.accept());
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
     await page.waitForURL(`${h.baseUrl}/`);
@@ -197,12 +151,12 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await page.getByRole('button', { name: 'Add envelope' }).click();
     await expect.poll(() => page.getByTestId('envelope-entry').filter({ hasText: 'Client hall limits' }).count()).toBe(1);
     await chartsDrawn(page);
-    await shot('envelopes-si');
-    await useUnits(page, 'IP');
+    await h.shot('envelopes-si');
+    await h.useUnits('IP');
     await chartsDrawn(page);
     expect(await page.getByTestId('envelope-entry').first().innerText()).toContain('64.4–80.6 °F dry-bulb');
-    await shot('envelopes-ip');
-    await useUnits(page, 'SI');
+    await h.shot('envelopes-ip');
+    await h.useUnits('SI');
     // Deleting asks first; the published presets stay.
     page.once('dialog', (dialog) => void dialog.accept());
     await page.getByTestId('envelope-entry').filter({ hasText: 'Client hall limits' }).getByRole('button', { name: 'Delete' }).click();
@@ -215,26 +169,26 @@ describe('an engineer designing, running and comparing scenarios', () => {
     const state = page.getByTestId('calculated-state');
     await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+22\.0 °C/);
     await chartsDrawn(page);
-    await shot('calculator-si');
+    await h.shot('calculator-si');
     // A third property over-determines the state; the engine's own words are shown.
     await page.getByLabel(/^Dew point/).fill('10');
     await expect.poll(() => page.getByTestId('calculator-refusal').innerText()).toContain('moist air has three independent properties');
-    await shot('calculator-refused');
-    await useUnits(page, 'IP');
+    await h.shot('calculator-refused');
+    await h.useUnits('IP');
     await page.getByLabel(/^Dry-bulb/).fill('86');
     await page.getByLabel(/^Relative humidity/).fill('50');
     // 22.005 °C = 71.6 °F.
     await expect.poll(() => state.innerText()).toMatch(/Wet-bulb \(thermodynamic\)\s+71\.6 °F/);
     await chartsDrawn(page);
-    await shot('calculator-ip');
-    await useUnits(page, 'SI');
+    await h.shot('calculator-ip');
+    await h.useUnits('SI');
   });
 });
 
 describe('a run still computing', () => {
   it('shows its progress while it runs and can be cancelled', async () => {
     // The pool finishes a 72-hour run in milliseconds, so the server's answers for one run are held at "running" here.
-    const { run } = await api<{ run: Record<string, unknown> }>(engineer, 'GET', `/projects/${projectId}/runs/${firstRunId}`);
+    const { run } = await h.api<{ run: Record<string, unknown> }>(engineer, 'GET', `/projects/${projectId}/runs/${firstRunId}`);
     let state: Record<string, unknown> = { ...run, id: 9001, status: 'running', progress: 0.4, results: null, finishedAt: null };
     const page = h.page;
     await page.route(`**/api/projects/${projectId}/runs/9001`, (route) => route.fulfill({ json: { run: state } }));
@@ -245,7 +199,7 @@ describe('a run still computing', () => {
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/9001`);
     await page.getByTestId('run-progress').waitFor();
     expect(await page.getByRole('progressbar').getAttribute('aria-valuenow')).toBe('40');
-    await shot('run-page-running-si');
+    await h.shot('run-page-running-si');
     await page.getByRole('button', { name: 'Cancel run' }).click();
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('cancelled');
     expect(await page.getByText('The run was cancelled').isVisible()).toBe(true);
@@ -255,13 +209,13 @@ describe('a run still computing', () => {
 
 describe('a run over several years of weather', () => {
   it('draws the monthly hours, carpet, moist-air chart and bins of 26,280 hours', async () => {
-    const { site } = await api<{ site: { id: number } }>(
+    const { site } = await h.api<{ site: { id: number } }>(
       engineer,
       'POST',
       `/projects/${projectId}/sites`,
       JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
     );
-    const { climateFile } = await api<{ climateFile: { id: number } }>(
+    const { climateFile } = await h.api<{ climateFile: { id: number } }>(
       engineer,
       'POST',
       `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
@@ -269,8 +223,8 @@ describe('a run over several years of weather', () => {
       'text/csv',
     );
     const scenario = { ...directAirSample, name: 'Direct air, 20 °C supply, evaporative assist', system: { ...directAirSample.system, supplyAirC: 20 } };
-    const { scenario: stored } = await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
-    const { runs } = await api<{ runs: { id: number }[] }>(
+    const { scenario: stored } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
+    const { runs } = await h.api<{ runs: { id: number }[] }>(
       engineer,
       'POST',
       `/projects/${projectId}/runs`,
@@ -283,17 +237,17 @@ describe('a run over several years of weather', () => {
     expect(await page.getByTestId('mode-hours').innerText()).toMatch(/All hours\s+26,280/);
     await chartsDrawn(page);
     await expect.poll(() => page.getByTestId('bin-table').locator('tbody tr').count(), { timeout: 15_000 }).toBeGreaterThan(8);
-    await shot('run-page-years-si');
-    await useUnits(page, 'IP');
+    await h.shot('run-page-years-si');
+    await h.useUnits('IP');
     await chartsDrawn(page);
-    await shot('run-page-years-ip');
-    await useUnits(page, 'SI');
+    await h.shot('run-page-years-ip');
+    await h.useUnits('SI');
   });
 });
 
 describe('a viewer of the project', () => {
   it('sees the results and cannot edit or run', async () => {
-    await signInAs(viewer);
+    await h.signInAs(viewer);
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${firstRunId}`);
     await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 15_000 }).toBe('done');
@@ -303,7 +257,7 @@ describe('a viewer of the project', () => {
     expect(await page.getByLabel('Supply air setpoint').isDisabled()).toBe(true);
     expect(await page.getByRole('button', { name: /Save/ }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /Run/ }).count()).toBe(0);
-    await shot('scenario-viewer-si');
+    await h.shot('scenario-viewer-si');
     // The server refuses the change too, whatever the screen shows.
     const res = await fetch(`${h.baseUrl}/api/projects/${projectId}/runs`, {
       method: 'POST',

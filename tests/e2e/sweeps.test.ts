@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import type { Page } from 'playwright-core';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { chartsDrawn, collectPageErrors, expectNoPageErrors } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 // Three synthetic years for an invented mild maritime site (sample-weather/generate.ts), 26,280 hours.
@@ -11,48 +11,15 @@ const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/sc
 let h: BrowserHarness;
 let engineer: TestPerson;
 let viewer: TestPerson;
-let current: TestPerson;
 let projectId: number;
 let scenarioId: number;
 let a2ScenarioId: number;
 let climateFileId: number;
 let lineSweepUrl: string;
-const pageErrors: string[] = [];
+let pageErrors: string[] = [];
 
-async function api<T>(person: TestPerson, method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
-  const res = await fetch(`${h.baseUrl}/api${path}`, { method, headers: { cookie: person.cookie, 'x-tramontane-request': '1', 'content-type': type }, body });
-  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-async function signInAs(person: TestPerson) {
-  current = person;
-  await h.page.goto('about:blank');
-  await h.context.clearCookies();
-  const [name, value] = person.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
-}
-
-/** The unit system is remembered per person on the server and in the browser; set both, as the settings toggle does. */
-async function useUnits(page: Page, system: 'SI' | 'IP') {
-  await fetch(`${h.baseUrl}/api/me`, {
-    method: 'PATCH',
-    headers: { cookie: current.cookie, 'x-tramontane-request': '1', 'content-type': 'application/json' },
-    body: JSON.stringify({ unitSystem: system.toLowerCase() }),
-  });
-  await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
-  await page.reload();
-}
-
-async function chartsDrawn(page: Page) {
-  await expect.poll(() => page.locator('[aria-label^="Loading chart"]').count(), { timeout: 20_000 }).toBe(0);
-  await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThan(0);
-}
-
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  return h.screenshot(name);
-}
+// Sweep pages draw several charts as their points finish: this file waits longer for them than the default 15 s.
+const manyCharts = { timeoutMs: 20_000 };
 
 beforeAll(async () => {
   h = await startBrowserHarness();
@@ -62,15 +29,15 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const { site } = await api<{ site: { id: number } }>(
+  const { site } = await h.api<{ site: { id: number } }>(
     engineer,
     'POST',
     `/projects/${projectId}/sites`,
     JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
   );
-  const upload = await api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const upload = await h.api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
   climateFileId = upload.climateFile.id;
-  const { scenario } = await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+  const { scenario } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
   scenarioId = scenario.id;
   // The same design held to the A2 allowable class (ASHRAE TC 9.9 2021 as in shared/scenario/envelopes.ts, recalled from memory):
   // its 21 °C dew-point limit leaves this maritime file no hour that needs compressors for moisture.
@@ -79,17 +46,14 @@ beforeAll(async () => {
     name: 'Direct outdoor air, A2 allowable (synthetic demo)',
     envelope: { presetId: 'ashrae-2021-a2', dryBulbMinC: 10, dryBulbMaxC: 35, dewPointMinC: -12, dewPointMaxC: 21, rhMinPct: 8, rhMaxPct: 80, altitudeDerating: { aboveElevationM: 900, metresPerKelvin: 300 } },
   };
-  a2ScenarioId = (await api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: a2 }))).scenario.id;
-  h.page.on('pageerror', (error) => pageErrors.push(error.message));
-  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
-  await signInAs(engineer);
+  a2ScenarioId = (await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: a2 }))).scenario.id;
+  pageErrors = collectPageErrors(h.page);
+  await h.signInAs(engineer);
   await h.page.goto(h.baseUrl);
-  await useUnits(h.page, 'SI');
+  await h.useUnits('SI');
 });
 afterAll(() => h?.close());
-afterEach(() => {
-  expect(pageErrors.splice(0).join('\n')).toBe('');
-});
+afterEach(() => expectNoPageErrors(pageErrors));
 
 describe('an engineer sweeping the supply setpoint', () => {
   it('starts a sweep from the scenario, sees the point count and refused points, then progress and charts', async () => {
@@ -106,25 +70,25 @@ describe('an engineer sweeping the supply setpoint', () => {
     const errors = await page.getByTestId('sweep-errors').innerText();
     expect(errors).toContain('system.supplyAirC = 46 is refused: system.supplyAirC must be a number from 5 to 45 °C (got 46)');
     expect(await page.getByRole('button', { name: /Start sweep/ }).isDisabled()).toBe(true);
-    await shot('sweep-new-refused-si');
+    await h.shot('sweep-new-refused-si');
     await page.getByLabel('To (°C)').fill('30');
     await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('15');
-    await shot('sweep-new-si');
+    await h.shot('sweep-new-si');
     await page.getByRole('button', { name: 'Start sweep of 15 runs' }).click();
     await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
     lineSweepUrl = page.url();
     // Progress shows from the first moment (the page's code may still be loading as the address changes).
     await expect.poll(() => page.getByTestId('sweep-progress').isVisible(), { timeout: 10_000 }).toBe(true);
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('15 of 15 points done');
-    await chartsDrawn(page);
+    await chartsDrawn(page, manyCharts);
     await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(4);
     expect(await page.getByTestId('sweep-table').locator('tbody tr').count()).toBe(15);
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
-    await shot('sweep-line-si');
+    await h.shot('sweep-line-si');
 
     // The table agrees with the run it links to.
     const sweepId = Number(lineSweepUrl.split('/').pop());
-    const { sweep } = await api<{ sweep: { points: { runId: number; results: { hours: { mechanical: number; total: number } } }[] } }>(
+    const { sweep } = await h.api<{ sweep: { points: { runId: number; results: { hours: { mechanical: number; total: number } } }[] } }>(
       engineer,
       'GET',
       `/projects/${projectId}/sweeps/${sweepId}`,
@@ -138,19 +102,19 @@ describe('an engineer sweeping the supply setpoint', () => {
     const firstZero = mechanical.findIndex((m) => m === 0);
     expect(firstZero).toBeGreaterThan(0);
     expect(await page.getByTestId('zero-mechanical').innerText()).toBe(`Mechanical hours reach zero from ${(16 + firstZero).toFixed(1)} °C.`);
-    await useUnits(page, 'IP');
-    await chartsDrawn(page);
+    await h.useUnits('IP');
+    await chartsDrawn(page, manyCharts);
     expect(await page.getByTestId('sweep-axes').innerText()).toContain('60.8 … 86.0 °F');
     // 16 °C + n K in °F: 60.8 + 1.8 n (exact conversion).
     expect(await page.getByTestId('zero-mechanical').innerText()).toBe(`Mechanical hours reach zero from ${(60.8 + 1.8 * firstZero).toFixed(1)} °F.`);
-    await shot('sweep-line-ip');
+    await h.shot('sweep-line-ip');
     // The form takes the range in °F: the suggested 18…30 °C by 1 K reads 64.4…86 °F by 1.8 °F, still 13 points.
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${a2ScenarioId}`);
     await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('13');
     expect(await page.getByLabel('From (°F)').inputValue()).toBe('64.4');
     expect(await page.getByLabel('Step (°F)').inputValue()).toBe('1.8');
-    await shot('sweep-new-ip');
-    await useUnits(page, 'SI');
+    await h.shot('sweep-new-ip');
+    await h.useUnits('SI');
   });
 
   it('sweeps a grid of supply setpoint and evaporative effectiveness and draws it as a heat map', async () => {
@@ -169,19 +133,19 @@ describe('an engineer sweeping the supply setpoint', () => {
     await page.getByRole('button', { name: 'Start sweep of 25 runs' }).click();
     await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('25 of 25 points done');
-    await chartsDrawn(page);
+    await chartsDrawn(page, manyCharts);
     await page.getByText('Table of the same figures').click();
     expect(await page.getByTestId('heat-map-table').locator('tbody tr').count()).toBe(5);
     // Points at 24 °C and above have no mechanical hours on this file (the line sweep above): their cells are outlined.
     expect(await page.locator('figure svg [stroke-dasharray="3,2"] rect').count()).toBe(15);
-    await shot('sweep-grid-si');
-    await useUnits(page, 'IP');
-    await chartsDrawn(page);
+    await h.shot('sweep-grid-si');
+    await h.useUnits('IP');
+    await chartsDrawn(page, manyCharts);
     await page.getByTestId('heat-map-metric').selectOption('waterL');
-    await chartsDrawn(page);
+    await chartsDrawn(page, manyCharts);
     expect(await page.getByTestId('heat-map-table').textContent()).toContain('Water use (US gal)');
-    await shot('sweep-grid-ip');
-    await useUnits(page, 'SI');
+    await h.shot('sweep-grid-ip');
+    await h.useUnits('SI');
   });
 });
 
@@ -189,7 +153,7 @@ describe('sweeping envelope presets', () => {
   it('draws hours per preset as bars, and a grid of presets × supply setpoint', async () => {
     const page = h.page;
     const presetIds = ['ashrae-2021-recommended', 'ashrae-2021-a1', 'ashrae-2021-a2', 'ashrae-2021-a3', 'ashrae-2021-a4'];
-    const { sweep: line } = await api<{ sweep: { id: number } }>(
+    const { sweep: line } = await h.api<{ sweep: { id: number } }>(
       engineer,
       'POST',
       `/projects/${projectId}/sweeps`,
@@ -197,10 +161,10 @@ describe('sweeping envelope presets', () => {
     );
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/${line.id}`);
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('5 of 5 points done');
-    await chartsDrawn(page);
+    await chartsDrawn(page, manyCharts);
     expect(await page.getByTestId('sweep-table').innerText()).toContain('Allowable A4 (2021)');
-    await shot('sweep-presets-si');
-    const { sweep: grid } = await api<{ sweep: { id: number } }>(
+    await h.shot('sweep-presets-si');
+    const { sweep: grid } = await h.api<{ sweep: { id: number } }>(
       engineer,
       'POST',
       `/projects/${projectId}/sweeps`,
@@ -215,24 +179,24 @@ describe('sweeping envelope presets', () => {
     );
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/${grid.id}`);
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 60_000 }).toContain('20 of 20 points done');
-    await chartsDrawn(page);
-    await useUnits(page, 'IP');
-    await chartsDrawn(page);
-    await shot('sweep-presets-grid-ip');
-    await useUnits(page, 'SI');
+    await chartsDrawn(page, manyCharts);
+    await h.useUnits('IP');
+    await chartsDrawn(page, manyCharts);
+    await h.shot('sweep-presets-grid-ip');
+    await h.useUnits('SI');
   });
 });
 
 describe('a viewer', () => {
   it('sees the sweeps and their charts but cannot start one', async () => {
-    await signInAs(viewer);
+    await h.signInAs(viewer);
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     await expect.poll(() => page.getByTestId('sweeps-list').locator('li').count(), { timeout: 15_000 }).toBe(4);
     expect(await page.getByRole('link', { name: 'New sweep' }).count()).toBe(0);
-    await shot('sweeps-panel-viewer');
+    await h.shot('sweeps-panel-viewer');
     await page.goto(lineSweepUrl);
-    await chartsDrawn(page);
+    await chartsDrawn(page, manyCharts);
     expect(await page.getByRole('button', { name: /Delete sweep/ }).count()).toBe(0);
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${scenarioId}`);
     await expect.poll(() => page.getByText('Viewers can read sweeps but not start them').isVisible(), { timeout: 10_000 }).toBe(true);

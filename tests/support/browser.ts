@@ -6,6 +6,7 @@ import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
 import { appRoot } from '../../server/paths';
+import { asPerson, type TestPerson } from './people';
 import { startSignInStack, type SignInStack } from './sign-in';
 
 export const screenshotFolder = path.join(appRoot, 'test-results', 'screenshots');
@@ -16,7 +17,25 @@ export interface BrowserHarness {
   context: BrowserContext;
   /** The app with the fake sign-in provider and fake SMTP server beside it. */
   testApp: SignInStack;
+  /** A full-page screenshot of the page as it is scrolled now; returns the file. */
   screenshot: (name: string) => Promise<string>;
+  /**
+   * A full-page screenshot from the top, so sticky side columns sit where a reader sees them;
+   * `settleMs` waits after the scroll for anything drawn on scroll.
+   */
+  shot: (name: string, settleMs?: number) => Promise<string>;
+  /**
+   * Signs the browser in as `person` with their session cookie, or signs it out (`null`). Leaves the page first:
+   * requests still due from it (a debounced preview, a poll) must not go out as the next person.
+   */
+  signInAs: (person: TestPerson | null) => Promise<void>;
+  /** A request to the app's API (`path` after `/api`) as `person`; the parsed JSON answer, or an error naming the refusal. */
+  api: <T = unknown>(person: TestPerson, method: string, path: string, body?: BodyInit, contentType?: string) => Promise<T>;
+  /**
+   * Switches SI/IP as the settings toggle does: remembered for the person `signInAs` signed in (on the server) and in
+   * this browser, then the page reloads.
+   */
+  useUnits: (system: 'SI' | 'IP') => Promise<void>;
   close: () => Promise<void>;
 }
 
@@ -46,15 +65,44 @@ export async function startBrowserHarness(): Promise<BrowserHarness> {
   });
   const page = context.pages()[0] ?? (await context.newPage());
   mkdirSync(screenshotFolder, { recursive: true });
+  let signedIn: TestPerson | null = null;
+
+  const screenshot = async (name: string) => {
+    const file = path.join(screenshotFolder, `${name}.png`);
+    await page.screenshot({ path: file, fullPage: true });
+    return file;
+  };
+  const api = async <T = unknown>(person: TestPerson, method: string, apiPath: string, body?: BodyInit, contentType = 'application/json') => {
+    const res = await fetch(`${baseUrl}/api${apiPath}`, { method, headers: { ...asPerson(person), 'content-type': contentType }, body });
+    if (!res.ok) throw new Error(`${method} ${apiPath} answered ${res.status}: ${await res.text()}`);
+    return (await res.json()) as T;
+  };
+
   return {
     baseUrl,
     page,
     context,
     testApp,
-    screenshot: async (name) => {
-      const file = path.join(screenshotFolder, `${name}.png`);
-      await page.screenshot({ path: file, fullPage: true });
-      return file;
+    screenshot,
+    shot: async (name, settleMs = 0) => {
+      await page.evaluate(() => window.scrollTo(0, 0));
+      if (settleMs > 0) await page.waitForTimeout(settleMs);
+      return screenshot(name);
+    },
+    signInAs: async (person) => {
+      signedIn = person;
+      await page.goto('about:blank');
+      await context.clearCookies();
+      if (!person) return;
+      const [name, value] = person.cookie.split('=');
+      await context.addCookies([{ name, value, url: baseUrl }]);
+    },
+    api,
+    useUnits: async (system) => {
+      // Signed out, the choice lives in the browser only.
+      if (signedIn) await api(signedIn, 'PATCH', '/me', JSON.stringify({ unitSystem: system.toLowerCase() }));
+      await page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
+      await page.reload();
     },
     close: async () => {
       await context.close();
