@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
+import { collectPageErrors, expectNoPageErrors } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
 // Synthetic test weather: 72 hours of July at an invented site (tests/fixtures/api/three-days.csv), so sweeps finish fast.
@@ -15,54 +16,32 @@ let projectId: number;
 let scenarioId: number;
 let plainRunIds: number[];
 let lineSweep: { id: number; points: { runId: number; values: Record<string, number> }[] };
-const pageErrors: string[] = [];
-
-async function api<T>(method: string, path: string, body?: BodyInit, type = 'application/json'): Promise<T> {
-  const res = await fetch(`${h.baseUrl}/api${path}`, { method, headers: { cookie: analyst.cookie, 'x-tramontane-request': '1', 'content-type': type }, body });
-  if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-/** SI or IP as the settings toggle keeps it: on the server for the person and in this browser; then the page reloads. */
-async function useUnits(system: 'SI' | 'IP') {
-  await api('PATCH', '/me', JSON.stringify({ unitSystem: system.toLowerCase() }));
-  await h.page.evaluate((s) => localStorage.setItem('tramontane.unitSystem', s), system);
-  await h.page.reload();
-}
-
-async function shot(name: string) {
-  await h.page.evaluate(() => window.scrollTo(0, 0));
-  return h.screenshot(name);
-}
+let pageErrors: string[] = [];
 
 beforeAll(async () => {
   h = await startBrowserHarness();
   analyst = personWithSession(h.testApp.db, 'wren.okafor@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Fenmouth hall study', [[analyst, 'engineer']]);
-  const { site } = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Fenmouth', elevationM: 40 }));
-  const { climateFile } = await api<{ climateFile: { id: number } }>('POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
-  scenarioId = (await api<{ scenario: { id: number } }>('POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }))).scenario.id;
+  const { site } = await h.api<{ site: { id: number } }>(analyst, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Fenmouth', elevationM: 40 }));
+  const { climateFile } = await h.api<{ climateFile: { id: number } }>(analyst, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
+  scenarioId = (await h.api<{ scenario: { id: number } }>(analyst, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }))).scenario.id;
   const body = (name: string, axes: unknown[]) => JSON.stringify({ name, scenarioId, climateFileId: climateFile.id, axes });
-  const first = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }));
-  lineSweep = (await api<{ sweep: typeof lineSweep }>('POST', `/projects/${projectId}/sweeps`, body(lineName, [{ input: 'system.supplyAirC', from: 18, to: 30, step: 1 }]))).sweep;
-  const second = await api<{ runs: { id: number }[] }>('POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }));
-  await api('POST', `/projects/${projectId}/sweeps`, body(gridName, [{ input: 'system.supplyAirC', from: 20, to: 22, step: 2 }, { input: 'energy.itLoadKw', from: 500, to: 1000, step: 500 }]));
+  const first = await h.api<{ runs: { id: number }[] }>(analyst, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }));
+  lineSweep = (await h.api<{ sweep: typeof lineSweep }>(analyst, 'POST', `/projects/${projectId}/sweeps`, body(lineName, [{ input: 'system.supplyAirC', from: 18, to: 30, step: 1 }]))).sweep;
+  const second = await h.api<{ runs: { id: number }[] }>(analyst, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }));
+  await h.api(analyst, 'POST', `/projects/${projectId}/sweeps`, body(gridName, [{ input: 'system.supplyAirC', from: 20, to: 22, step: 2 }, { input: 'energy.itLoadKw', from: 500, to: 1000, step: 500 }]));
   plainRunIds = [second.runs[0].id, first.runs[0].id];
   // 2 plain runs and 13 + 4 points, all on 72 hours.
   await h.testApp.runQueue.idle();
-  const listed = (await api<{ runs: { status: string }[] }>('GET', `/projects/${projectId}/runs`)).runs;
+  const listed = (await h.api<{ runs: { status: string }[] }>(analyst, 'GET', `/projects/${projectId}/runs`)).runs;
   expect(listed.filter((r) => r.status === 'done')).toHaveLength(19);
-  h.page.on('pageerror', (error) => pageErrors.push(error.message));
-  h.page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
-  const [name, value] = analyst.cookie.split('=');
-  await h.context.addCookies([{ name, value, url: h.baseUrl }]);
+  pageErrors = collectPageErrors(h.page);
+  await h.signInAs(analyst);
   await h.page.goto(h.baseUrl);
-  await useUnits('SI');
+  await h.useUnits('SI');
 });
 afterAll(() => h?.close());
-afterEach(() => {
-  expect(pageErrors.splice(0).join('\n')).toBe('');
-});
+afterEach(() => expectNoPageErrors(pageErrors));
 
 describe('an analyst with two sweeps beside plain runs', () => {
   it('sees each sweep as one row among the recent runs, linking to the sweep', async () => {
@@ -73,13 +52,13 @@ describe('an analyst with two sweeps beside plain runs', () => {
     // Newest first: the grid sweep, the second plain run, the line sweep, the first plain run — 4 rows, not 19.
     await expect.poll(() => table.locator('tbody tr').count()).toBe(4);
     const rows = await table.locator('tbody tr').allInnerTexts();
-    expect(rows[0]).toContain(`Sweep ${gridName}: 4 points, 4 done`);
+    expect(rows[0]).toMatch(new RegExp(`^sweep\\s+${gridName}: 4 points, 4 done`));
     expect(rows[1]).toContain(`#${plainRunIds[0]}`);
-    expect(rows[2]).toContain(`Sweep ${lineName}: 13 points, 13 done`);
+    expect(rows[2]).toMatch(new RegExp(`^sweep\\s+${lineName}: 13 points, 13 done`));
     expect(rows[3]).toContain(`#${plainRunIds[1]}`);
     expect(rows[2]).toMatch(/\d+(–\d+)? % free/);
-    await shot('sweep-points-overview-si');
-    await table.getByRole('link', { name: `Sweep ${lineName}` }).click();
+    await h.shot('sweep-points-overview-si');
+    await table.getByRole('link', { name: lineName }).click();
     await page.waitForURL(`**/projects/${projectId}/sweeps/${lineSweep.id}`);
   });
 
@@ -95,7 +74,7 @@ describe('an analyst with two sweeps beside plain runs', () => {
     ]);
     // The compare link takes the plain runs only.
     expect(await page.getByRole('link', { name: 'Compare these runs' }).getAttribute('href')).toBe(`/projects/${projectId}/compare?runs=${plainRunIds.join(',')}`);
-    await shot('sweep-points-scenario-si');
+    await h.shot('sweep-points-scenario-si');
   });
 
   it('picks sweep points on the compare page once asked, labelled with sweep and value, in SI and IP', async () => {
@@ -117,12 +96,12 @@ describe('an analyst with two sweeps beside plain runs', () => {
     await picker.getByRole('checkbox', { name: `Compare run ${p24}` }).click();
     await expect.poll(() => new URL(page.url()).searchParams.get('runs')).toBe(`${p18},${p24}`);
     await page.getByTestId('comparison-table').waitFor();
-    await shot('sweep-points-compare-si');
+    await h.shot('sweep-points-compare-si');
     // Back to plain runs: the two ticked points stay listed so their ticks can be taken back.
     await page.getByLabel('Runs listed').selectOption('plain');
     await expect.poll(() => picker.locator('tbody tr').count()).toBe(4);
 
-    await useUnits('IP');
+    await h.useUnits('IP');
     await picker.waitFor();
     await page.getByLabel('Runs listed').selectOption('all');
     await expect.poll(() => picker.locator('tbody tr').count()).toBe(19);
@@ -136,8 +115,8 @@ describe('an analyst with two sweeps beside plain runs', () => {
       'supply air 68.0 °F · IT load 1,000 kW',
       'supply air 68.0 °F · IT load 500 kW',
     ]);
-    await shot('sweep-points-compare-ip');
-    await useUnits('SI');
+    await h.shot('sweep-points-compare-ip');
+    await h.useUnits('SI');
   });
 
   it('reads on a point\'s run page which sweep it belongs to and its value, with a link to the sweep', async () => {
@@ -148,13 +127,13 @@ describe('an analyst with two sweeps beside plain runs', () => {
     const line = page.getByTestId('run-sweep-point');
     await line.waitFor();
     expect(await line.innerText()).toBe(`Point of sweep ${lineName}: Supply air setpoint = 24.0 °C`);
-    await shot('sweep-points-run-si');
-    await useUnits('IP');
+    await h.shot('sweep-points-run-si');
+    await h.useUnits('IP');
     await expect.poll(() => line.innerText()).toBe(`Point of sweep ${lineName}: Supply air setpoint = 75.2 °F`);
-    await shot('sweep-points-run-ip');
+    await h.shot('sweep-points-run-ip');
     await page.getByTestId('run-sweep-point').getByRole('link', { name: lineName }).click();
     await page.waitForURL(`**/projects/${projectId}/sweeps/${lineSweep.id}`);
-    await useUnits('SI');
+    await h.useUnits('SI');
     // A plain run says nothing of sweeps.
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${plainRunIds[0]}`);
     await page.getByTestId('run-status').waitFor();
@@ -164,9 +143,9 @@ describe('an analyst with two sweeps beside plain runs', () => {
   it('shows the overview in IP too', async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
-    await useUnits('IP');
+    await h.useUnits('IP');
     await expect.poll(() => page.getByTestId('runs-table').locator('tbody tr').count()).toBe(4);
-    await shot('sweep-points-overview-ip');
-    await useUnits('SI');
+    await h.shot('sweep-points-overview-ip');
+    await h.useUnits('SI');
   });
 });
