@@ -121,10 +121,10 @@ export function RunPicker({
   return (
     <div className="space-y-2">
       {options.length > 0 && (
-        <label className="flex flex-wrap items-center gap-2 text-xs text-ink-soft">
+        <label className="block text-xs text-ink-soft">
           Runs listed
           <select
-            className="rounded border border-rule bg-panel px-1.5 py-1 text-sm text-ink"
+            className="mt-1 block w-full min-w-0 rounded border border-rule bg-panel px-1.5 py-1 text-sm text-ink"
             value={view}
             onChange={(e) => {
               const next = e.target.value as PickerView;

@@ -50,7 +50,7 @@ function SweepRunsRow({ projectId, row }: { projectId: number; row: SweepRow<Run
       </td>
       <td className="px-2">
         <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="text-harbour underline-offset-2 hover:underline">
-          Sweep {row.name}
+          {row.name}
         </Link>
         : <span className="num text-xs text-ink-soft">{sweepRowSummary(row)}</span>
       </td>
