@@ -1,45 +1,9 @@
-import { formatQuantity, fromDisplay, toDisplay, unitOf, type QuantityKind } from '@/lib/quantity';
+// The value formatting (sweepUnit, sweepAxisTitle, formatSweepValue…) lives in src/lib/sweep-value.ts, shared with the run lists.
+export { formatSweepValue, formatSweepValueWithUnit, sweepAxisTitle, sweepUnit } from '@/lib/sweep-value';
+import { fromDisplay, toDisplay } from '@/lib/quantity';
+import { sweepQuantityKind as kindOf } from '@/lib/sweep-value';
 import type { UnitSystem } from '@/lib/unit-system';
-import { presetLabel, SWEEP_INPUTS, type SweepInputPath, type SweepQuantity, type SweepValue } from '../../../../shared/sweep';
-
-/** The quantity kind a swept value's number follows on the SI/IP switch; null for plain numbers and presets. */
-const kindOf: Record<SweepQuantity, QuantityKind | null> = {
-  temperature: 'temperature',
-  temperatureDifference: 'temperatureDifference',
-  fraction: null,
-  powerKw: null,
-  preset: null,
-};
-
-/** The unit a swept input is typed and shown in ('' for effectiveness and presets). kW stays kW in IP. */
-export function sweepUnit(path: SweepInputPath, system: UnitSystem): string {
-  const q = SWEEP_INPUTS[path].quantity;
-  const kind = kindOf[q];
-  return kind ? unitOf(kind, system) : q === 'powerKw' ? 'kW' : '';
-}
-
-/** "Supply air setpoint (°F)": an axis or column title. */
-export function sweepAxisTitle(path: SweepInputPath, system: UnitSystem): string {
-  const unit = sweepUnit(path, system);
-  return unit ? `${SWEEP_INPUTS[path].label} (${unit})` : SWEEP_INPUTS[path].label;
-}
-
-/** A swept value as shown, without its unit: "75.2", "0.85", "1,500", "Allowable A2 (2021)". */
-export function formatSweepValue(path: SweepInputPath, system: UnitSystem, value: SweepValue): string {
-  if (typeof value === 'string') return presetLabel(value);
-  const q = SWEEP_INPUTS[path].quantity;
-  const kind = kindOf[q];
-  if (kind) return formatQuantity(kind, system, value, false);
-  if (q === 'fraction') return value.toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 3 });
-  return value.toLocaleString('en', { maximumFractionDigits: 1 });
-}
-
-/** The same with its unit: "24.0 °C". */
-export function formatSweepValueWithUnit(path: SweepInputPath, system: UnitSystem, value: SweepValue): string {
-  const unit = sweepUnit(path, system);
-  const text = formatSweepValue(path, system, value);
-  return unit && typeof value === 'number' ? `${text} ${unit}` : text;
-}
+import { SWEEP_INPUTS, type SweepInputPath } from '../../../../shared/sweep';
 
 /**
  * A typed range (from, to, step in the person's units) back to SI. A temperature's step is a
