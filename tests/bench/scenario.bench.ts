@@ -119,8 +119,9 @@ async function timeSweep(log: BenchContext['log']) {
 
   const pool = createWorkerPool({ threads: availableParallelism() });
   try {
-    // Warm every thread (loader and modules) before timing.
-    await Promise.all(Array.from({ length: pool.threads }, () => pool.run('executeRun', { scenario: scenarios[0], series })));
+    // Warm every thread before timing: its loader and modules, and enough runs for the JIT to settle, as the
+    // one-thread reference above is warm from the 30-year runs (one run per thread left the pool ~30 % slow).
+    await Promise.all(scenarios.slice(0, pool.threads * 6).map((scenario) => pool.run('executeRun', { scenario, series })));
     const poolStart = performance.now();
     const pooled = await Promise.all(scenarios.map((scenario) => pool.run('executeRun', { scenario, series })));
     const poolMs = performance.now() - poolStart;
