@@ -67,9 +67,9 @@ export function RunPicker({
               <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline" title={r.scenario.name}>
                 <span className="num text-xs text-ink-faint">#{r.id}</span> <span data-testid="sweep-point-value">
                   {sweepPointParts(r.sweepPoint, unitSystem).map((part, i) => (
-                    <span key={part.path} className="whitespace-nowrap">
+                    <span key={part.path}>
                       {i > 0 && ' · '}
-                      {part.short} <span className="num">{part.value}</span>
+                      {part.short} <span className="num whitespace-nowrap">{part.value}</span>
                     </span>
                   ))}
                 </span>
@@ -142,28 +142,31 @@ export function RunPicker({
           </select>
         </label>
       )}
-      <table className="w-full text-sm" data-testid="run-picker">
-        <thead>
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id} className="border-b border-rule text-xs text-ink-soft">
-              {group.headers.map((header) => (
-                <SortHeader key={header.id} header={header} className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`} />
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={`border-b border-rule/60 align-top ${row.original.sweepId !== null ? 'bg-paper/60' : ''}`}>
-              {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className={`px-1 py-1 ${cell.column.id === 'id' ? 'text-left' : 'text-center'}`}>
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      {/* Long run names wrap; the scroll is a last resort on a narrow screen, so the baseline column is never cut off. */}
+      <div className="overflow-x-auto">
+        <table className="w-full text-sm" data-testid="run-picker">
+          <thead>
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id} className="border-b border-rule text-xs text-ink-soft">
+                {group.headers.map((header) => (
+                  <SortHeader key={header.id} header={header} className={`px-1 py-1 font-medium ${header.id === 'id' ? 'text-left' : 'text-center'}`} />
+                ))}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className={`border-b border-rule/60 align-top ${row.original.sweepId !== null ? 'bg-paper/60' : ''}`}>
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className={`px-1 py-1 ${cell.column.id === 'id' ? 'text-left [overflow-wrap:anywhere]' : 'text-center'}`}>
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </div>
   );
 }
