@@ -11,8 +11,11 @@ export interface SweepMechanical {
 }
 
 export type ZeroMechanical =
-  /** No finished point has zero mechanical hours. */
-  | { kind: 'none' }
+  /**
+   * No finished point has zero mechanical hours; the fewest, at the first point that has them (null before any
+   * point finishes). Hours that stay mechanical at every setpoint are usually too humid for the envelope.
+   */
+  | { kind: 'none'; fewest: { index: number; value: SweepValue; mechanicalHours: number } | null }
   /** Zero at this point and at every finished point after it: "from X". */
   | { kind: 'from'; index: number; value: SweepValue }
   /** Zero from the first point up to this one, above zero after it (a larger approach, say): "up to X". */
@@ -23,7 +26,11 @@ export type ZeroMechanical =
 export function zeroMechanical(points: readonly SweepMechanical[]): ZeroMechanical {
   const finished = points.map((p, index) => ({ ...p, index })).filter((p) => p.mechanicalHours !== null);
   const first = finished.findIndex((p) => p.mechanicalHours === 0);
-  if (first < 0) return { kind: 'none' };
+  if (first < 0) {
+    let fewest: (typeof finished)[number] | null = null;
+    for (const q of finished) if (fewest === null || q.mechanicalHours! < fewest.mechanicalHours!) fewest = q;
+    return { kind: 'none', fewest: fewest && { index: fewest.index, value: fewest.value, mechanicalHours: fewest.mechanicalHours! } };
+  }
   const rest = finished.slice(first);
   const p = finished[first];
   if (rest.every((q) => q.mechanicalHours === 0)) return { kind: 'from', index: p.index, value: p.value };
@@ -39,7 +46,9 @@ export function zeroMechanical(points: readonly SweepMechanical[]): ZeroMechanic
 export function zeroMechanicalText(zero: ZeroMechanical, format: (value: SweepValue) => string): string {
   switch (zero.kind) {
     case 'none':
-      return 'No swept point reaches zero mechanical hours.';
+      return zero.fewest
+        ? `No swept point reaches zero mechanical hours; the fewest are ${zero.fewest.mechanicalHours.toLocaleString('en')} h, first at ${format(zero.fewest.value)}.`
+        : 'No swept point reaches zero mechanical hours.';
     case 'from':
       return zero.index === 0
         ? `Mechanical hours are zero at every swept point, from ${format(zero.value)}.`

@@ -16,9 +16,11 @@ describe('where mechanical hours reach zero', () => {
     expect(zeroMechanicalText(zero, (v) => `${v} kW`)).toBe('Mechanical hours are zero at every swept point, from 500 kW.');
   });
 
-  it('says so when no point reaches zero', () => {
-    const zero = zeroMechanical(line([[20, 310], [21, 122]]));
-    expect(zeroMechanicalText(zero, celsius)).toBe('No swept point reaches zero mechanical hours.');
+  it('says so when no point reaches zero, and where the fewest mechanical hours are', () => {
+    // 13 hours stay mechanical from 24 °C on: too humid for the envelope at any setpoint.
+    const zero = zeroMechanical(line([[20, 310], [22, 41], [24, 13], [26, 13]]));
+    expect(zero).toEqual({ kind: 'none', fewest: { index: 2, value: 24, mechanicalHours: 13 } });
+    expect(zeroMechanicalText(zero, celsius)).toBe('No swept point reaches zero mechanical hours; the fewest are 13 h, first at 24 °C.');
   });
 
   it('says "up to X" when zero comes first and ends (a larger approach adds hours)', () => {
@@ -31,7 +33,8 @@ describe('where mechanical hours reach zero', () => {
 
   it('skips points not yet finished', () => {
     expect(zeroMechanical(line([[20, 5], [21, null], [22, 0], [23, null]]))).toEqual({ kind: 'from', index: 2, value: 22 });
-    expect(zeroMechanical(line([[20, null]]))).toEqual({ kind: 'none' });
+    expect(zeroMechanical(line([[20, null]]))).toEqual({ kind: 'none', fewest: null });
+    expect(zeroMechanicalText(zeroMechanical(line([[20, null]])), celsius)).toBe('No swept point reaches zero mechanical hours.');
   });
 });
 
