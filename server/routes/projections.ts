@@ -6,7 +6,7 @@ import {
   MORPHING_CITATION,
   projectionRequestSchema,
   type ChangeFactors,
-  type MonthlyClimate,
+  type Derivation,
   type ProjectionRequest,
 } from '../../shared/morphing';
 import { standardPressurePa } from '../../shared/psychrometrics';
@@ -27,25 +27,6 @@ export const PROJECTION_METHOD = 'Belcher, Hacker and Powell (2005) morphing';
 export const PROJECTION_NOTE =
   'A projection: the parent file re-shaped by the stated monthly change factors. It is a what-if for design comparison, not a forecast of any year.';
 
-/** How a projection was made, as stored in climate_files.derivationJson and answered by GET. */
-export interface Derivation {
-  kind: 'projection';
-  method: string;
-  citation: string;
-  note: string;
-  /** Humidity is morphed through specific humidity, kg/kg of moist air, then back to RH. */
-  humidityQuantity: 'specific humidity';
-  parent: { id: number; name: string; sha256: string; hours: number };
-  source: string | null;
-  factors: ChangeFactors;
-  /** Site-local months on the site's standard time. */
-  utcOffsetMinutes: number;
-  alphaByMonth: number[];
-  clampedHighHours: number;
-  clampedLowHours: number;
-  lostHours: number;
-  comparison: { parent: MonthlyClimate; projection: MonthlyClimate };
-}
 
 /** Future-climate files derived from an uploaded one by Belcher morphing. */
 export function projectionRoutes(deps: AppDeps): RouteSpec[] {

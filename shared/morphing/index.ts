@@ -24,6 +24,7 @@ export {
   type ProjectionRequest,
 } from './factors';
 export { parseFactorsCsv, type FactorsCsvResult } from './factors-csv';
+export type { Derivation } from './derivation';
 
 /** The method's source, as stored with every projection and shown on its page. */
 export const MORPHING_CITATION =

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ProjectionRequest } from '../../../../shared/morphing';
+import type { Derivation, ProjectionRequest } from '../../../../shared/morphing';
 import { apiFetch } from '@/lib/api-client';
-import type { Derivation, ProjectionFileListing } from './get-projection';
+import type { ProjectionFileListing } from './get-projection';
 
 /** Stores the projection as a new climate file on the parent's site. */
 export const createProjection = (projectId: number, fileId: number, request: ProjectionRequest) =>

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ChangeFactors, MonthlyClimate } from '../../../../shared/morphing';
+import type { Derivation } from '../../../../shared/morphing';
 import { apiFetch } from '@/lib/api-client';
 
 /** A climate file as lists give it, with what the projection pages need. */
@@ -15,23 +15,6 @@ export interface ProjectionFileListing {
   projection: { method: string; parentName: string } | null;
 }
 
-/** How a projection was made (server/routes/projections.ts Derivation). */
-export interface Derivation {
-  kind: 'projection';
-  method: string;
-  citation: string;
-  note: string;
-  humidityQuantity: 'specific humidity';
-  parent: { id: number; name: string; sha256: string; hours: number };
-  source: string | null;
-  factors: ChangeFactors;
-  utcOffsetMinutes: number;
-  alphaByMonth: number[];
-  clampedHighHours: number;
-  clampedLowHours: number;
-  lostHours: number;
-  comparison: { parent: MonthlyClimate; projection: MonthlyClimate };
-}
 
 export interface ProjectionDetail {
   climateFile: ProjectionFileListing;
