@@ -1,11 +1,9 @@
-import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { directAirSample, siteFileAndScenario } from '../support/study-setup';
 
-const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
-const directAir = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
 
 let t: TestApp;
 let engineer: TestPerson;
@@ -25,18 +23,11 @@ beforeAll(async () => {
     [viewer, 'viewer'],
   ]);
   projectWithMembers(t.db, 'Another study', [[outsider, 'owner']]);
-  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Brackenfold', elevationM: 120 }).expect(201);
-  const file = await request(t.app)
-    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
-    .set(asPerson(engineer))
-    .set('content-type', 'text/csv')
-    .send(threeDays)
-    .expect(201);
-  const scenario = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: directAir }).expect(201);
+  const { climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer);
   const created = await request(t.app)
     .post(`/api/projects/${projectId}/runs`)
     .set(asPerson(engineer))
-    .send({ scenarioIds: [scenario.body.scenario.id], climateFileIds: [file.body.climateFile.id] })
+    .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
     .expect(202);
   runId = created.body.runs[0].id;
   await t.runQueue.idle();
@@ -47,7 +38,7 @@ describe('an operator checking a proposal against a run', () => {
   it('a viewer gets the run\'s own setpoint by default, with the run\'s hours per mode', async () => {
     const res = await request(t.app).get(url()).set(asPerson(viewer)).expect(200);
     const { run, proposal, analysis, reference } = res.body;
-    expect(proposal.supplyAirC).toBe(directAir.system.supplyAirC);
+    expect(proposal.supplyAirC).toBe(directAirSample.system.supplyAirC);
     expect(proposal.floatUpToC).toBeNull();
     expect(proposal.recommended.id).toBe('ashrae-2021-recommended');
     expect(proposal.allowable.id).toBe('ashrae-2021-a1');

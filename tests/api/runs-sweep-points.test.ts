@@ -1,12 +1,9 @@
-import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { siteFileAndScenario } from '../support/study-setup';
 
-// Synthetic test weather: 72 hours of July at an invented site (tests/fixtures/api/three-days.csv).
-const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
-const directAir = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
 
 let t: TestApp;
 let engineer: TestPerson;
@@ -24,16 +21,7 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Harrowgate Fen', elevationM: 40 }).expect(201);
-  const file = await request(t.app)
-    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
-    .set(asPerson(engineer))
-    .set('content-type', 'text/csv')
-    .send(threeDays)
-    .expect(201);
-  const climateFileId = file.body.climateFile.id;
-  const scenario = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: directAir }).expect(201);
-  const scenarioId = scenario.body.scenario.id;
+  const { climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer, { siteName: 'Harrowgate Fen', elevationM: 40 });
   const plain = await request(t.app).post(`/api/projects/${projectId}/runs`).set(asPerson(engineer)).send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }).expect(202);
   plainRunId = plain.body.runs[0].id;
   // A 2 × 2 grid: supply air outer, IT load inner, so each point names two inputs in that order.

@@ -1,4 +1,3 @@
-import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -7,9 +6,7 @@ import { createRunQueue } from '../../server/runs/queue';
 import type { WorkerPool } from '../../workers/pool';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
-
-const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
-const directAir = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+import { directAirSample, siteFileAndScenario } from '../support/study-setup';
 
 let t: TestApp;
 let engineer: TestPerson;
@@ -26,22 +23,13 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Brackenfold', elevationM: 120 }).expect(201);
-  const file = await request(t.app)
-    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
-    .set(asPerson(engineer))
-    .set('content-type', 'text/csv')
-    .send(threeDays)
-    .expect(201);
-  climateFileId = file.body.climateFile.id;
-  const scenario = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: directAir }).expect(201);
-  scenarioId = scenario.body.scenario.id;
+  ({ climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer));
 });
 afterAll(() => t.close());
 
 describe('an engineer running a scenario', () => {
   it('refuses a scenario with a bad field, naming it', async () => {
-    const bad = { ...directAir, system: { ...directAir.system, supplyAirC: 90 } };
+    const bad = { ...directAirSample, system: { ...directAirSample.system, supplyAirC: 90 } };
     const res = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: bad }).expect(400);
     expect(res.body.error.message).toContain('supplyAirC');
   });
@@ -50,7 +38,7 @@ describe('an engineer running a scenario', () => {
     const res = await request(t.app)
       .post(`/api/projects/${projectId}/scenarios/preview`)
       .set(asPerson(engineer))
-      .send({ scenario: directAir, climateFileId })
+      .send({ scenario: directAirSample, climateFileId })
       .expect(200);
     const h = res.body.hours;
     expect(h.free + h.adiabatic + h.mechanical + h.noData).toBe(72);
@@ -69,7 +57,7 @@ describe('an engineer running a scenario', () => {
     const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}`).set(asPerson(viewer)).expect(200);
     expect(res.body.run.status).toBe('done');
     expect(res.body.run.engineVersion).toBeTypeOf('string');
-    expect(res.body.run.scenario.name).toBe(directAir.name);
+    expect(res.body.run.scenario.name).toBe(directAirSample.name);
     expect(res.body.run.climate.sha256).toMatch(/^[0-9a-f]{64}$/);
     const h = res.body.run.results.hours;
     expect(h.total).toBe(72);
@@ -93,10 +81,10 @@ describe('an engineer running a scenario', () => {
     await request(t.app)
       .put(`/api/projects/${projectId}/scenarios/${scenarioId}`)
       .set(asPerson(engineer))
-      .send({ scenario: { ...directAir, name: 'Renamed later', system: { ...directAir.system, supplyAirC: 20 } } })
+      .send({ scenario: { ...directAirSample, name: 'Renamed later', system: { ...directAirSample.system, supplyAirC: 20 } } })
       .expect(200);
     const after = await request(t.app).get(`/api/projects/${projectId}/runs/${before.id}`).set(asPerson(viewer)).expect(200);
-    expect(after.body.run.scenario.name).toBe(directAir.name);
+    expect(after.body.run.scenario.name).toBe(directAirSample.name);
     expect(after.body.run.scenario.system.supplyAirC).toBe(25);
   });
 

@@ -1,14 +1,11 @@
-import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditEvents } from '../../server/db/schema';
 import type { Mailer, OutgoingMail } from '../../server/mail/mailer';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { siteFileAndScenario } from '../support/study-setup';
 import { createTestApp, type TestApp } from '../support/test-app';
 
-// Synthetic test weather: 72 hours of July at an invented site (tests/fixtures/api/three-days.csv).
-const threeDaysText = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url), 'utf8');
-const scenario = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
 
 const sent: OutgoingMail[] = [];
 const mailer: Mailer = { send: async (mail) => void sent.push(mail), close: () => {} };
@@ -26,18 +23,11 @@ afterAll(() => t.close());
 
 describe('notices for a sweep', () => {
   it('come once, when its last point settles, linking to the sweep; the points are not audited one by one', async () => {
-    const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Pellow Yard', elevationM: 40 }).expect(201);
-    const file = await request(t.app)
-      .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
-      .set(asPerson(engineer))
-      .set('content-type', 'text/csv')
-      .send(threeDaysText)
-      .expect(201);
-    const saved = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario }).expect(201);
+    const { scenarioId, climateFileId } = await siteFileAndScenario(t, projectId, engineer, { siteName: 'Pellow Yard', elevationM: 40 });
     const res = await request(t.app)
       .post(`/api/projects/${projectId}/sweeps`)
       .set(asPerson(engineer))
-      .send({ scenarioId: saved.body.scenario.id, climateFileId: file.body.climateFile.id, axes: [{ input: 'system.supplyAirC', from: 18, to: 24, step: 2 }] })
+      .send({ scenarioId, climateFileId, axes: [{ input: 'system.supplyAirC', from: 18, to: 24, step: 2 }] })
       .expect(202);
     const sweepId = res.body.sweep.id as number;
     await t.runQueue.idle();

@@ -1,4 +1,3 @@
-import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { eq, isNotNull } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -8,11 +7,9 @@ import { createRunQueue } from '../../server/runs/queue';
 import type { WorkerPool } from '../../workers/pool';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { directAirSample, siteFileAndScenario, threeDaysCsv as threeDaysText } from '../support/study-setup';
 import { psychrolib as psy } from '../unit/psychrometrics/reference-psychrolib';
 
-// Synthetic test weather: 72 hours of July at an invented site, 6.3…22.0 °C (tests/fixtures/api/three-days.csv).
-const threeDaysText = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url), 'utf8');
-const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
 // No evaporative stage, so every hour is free cooling or mechanical and the count below needs no wet-bulb line.
 const directAir = { ...directAirSample, name: 'Direct air, dry', system: { ...directAirSample.system, evaporativeEffectiveness: 0 } };
 const SITE_ELEVATION_M = 120;
@@ -56,16 +53,7 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Quillmoor', elevationM: SITE_ELEVATION_M }).expect(201);
-  const file = await request(t.app)
-    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
-    .set(asPerson(engineer))
-    .set('content-type', 'text/csv')
-    .send(threeDaysText)
-    .expect(201);
-  climateFileId = file.body.climateFile.id;
-  const scenario = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: directAir }).expect(201);
-  scenarioId = scenario.body.scenario.id;
+  ({ climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer, { siteName: 'Quillmoor', elevationM: SITE_ELEVATION_M, scenario: directAir }));
 });
 afterAll(() => t.close());
 
