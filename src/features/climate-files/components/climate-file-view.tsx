@@ -17,6 +17,7 @@ import { DeleteClimateFile } from './delete-climate-file';
 import { DesignValues } from './design-values';
 import { MonthlyTable } from './monthly-table';
 import { ValidationReport } from './validation-report';
+import { Fact } from '@/components/ui/fact';
 
 /** What a stored climate file holds: coverage, monthly statistics, design values, carpet, chart and downloads. */
 export function ClimateFileView({
@@ -146,16 +147,6 @@ function Loaded({
           </div>
         </details>
       </Panel>
-    </div>
-  );
-}
-
-function Fact({ label, value, note }: { label: string; value: string; note?: string }) {
-  return (
-    <div className="rounded-md border border-rule bg-panel px-4 py-3">
-      <dt className="text-xs text-ink-soft">{label}</dt>
-      <dd className="num mt-0.5 text-lg font-semibold">{value}</dd>
-      {note && <dd className="text-xs text-ink-soft">{note}</dd>}
     </div>
   );
 }

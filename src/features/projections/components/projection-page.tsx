@@ -10,6 +10,7 @@ import { MonthlyComparison } from './monthly-comparison';
 import { ProjectionCaution } from './projection-caution';
 import { RunOnBothPanel } from './run-on-both-panel';
 import { UnitsSwitch } from './units-switch';
+import { Fact } from '@/components/ui/fact';
 
 /** /projects/:projectId/projections/:fileId — today and the projection side by side, the factors, and runs on both. */
 export function ProjectionPage() {
@@ -89,15 +90,5 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
         Method: {d.citation} Humidity through specific humidity (ASHRAE Handbook—Fundamentals 2017 ch. 1), back to relative humidity bounded to 0–100 %.
       </p>
     </>
-  );
-}
-
-function Fact({ label, value, note }: { label: string; value: string; note?: string }) {
-  return (
-    <div className="rounded-md border border-rule bg-panel px-4 py-3">
-      <dt className="text-xs text-ink-soft">{label}</dt>
-      <dd className="num mt-0.5 text-lg font-semibold">{value}</dd>
-      {note && <dd className="text-xs text-ink-soft">{note}</dd>}
-    </div>
   );
 }

@@ -1,6 +1,7 @@
 import { Notice } from '@/components/ui/notice';
 import { useCancelRun } from '../api/cancel-run';
 import type { RunRecord } from '../api/get-run';
+import { ProgressBar } from '@/components/ui/progress-bar';
 
 /** Progress while the run waits or computes, with a way to cancel; what happened when it did not finish. */
 export function RunStatus({ run, canEdit }: { run: RunRecord; canEdit: boolean }) {
@@ -33,16 +34,8 @@ export function RunStatus({ run, canEdit }: { run: RunRecord; canEdit: boolean }
           </button>
         )}
       </div>
-      <div
-        className="mt-3 h-2 overflow-hidden rounded-full bg-mist"
-        role="progressbar"
-        aria-label="Run progress"
-        aria-valuemin={0}
-        aria-valuemax={100}
-        aria-valuenow={pct}
-      >
-        <div className="h-full bg-harbour transition-[width] duration-500" style={{ width: `${Math.max(pct, run.status === 'queued' ? 0 : 5)}%` }} />
-      </div>
+      {/* A running run shows at least a sliver, so it never looks not started. */}
+      <ProgressBar label="Run progress" percent={Math.max(pct, run.status === 'queued' ? 0 : 5)} />
       <p className="mt-2 text-xs text-ink-soft">The results fill this page by themselves when the run finishes; you can leave and come back.</p>
       {cancel.isError && <p className="mt-2 text-xs text-signal-bad">{cancel.error.message}</p>}
     </div>

@@ -1,4 +1,5 @@
 import type { SweepProgress } from '../../../../shared/sweep';
+import { ProgressBar } from '@/components/ui/progress-bar';
 
 /** How far the sweep has got: one bar over all points, and the count in each state. */
 export function SweepProgressBar({ progress }: { progress: SweepProgress }) {
@@ -18,16 +19,7 @@ export function SweepProgressBar({ progress }: { progress: SweepProgress }) {
         </p>
         <span className="num text-sm">{pct} %</span>
       </div>
-      <div
-        className="mt-3 h-2 overflow-hidden rounded-full bg-mist"
-        role="progressbar"
-        aria-label="Sweep progress"
-        aria-valuemin={0}
-        aria-valuemax={100}
-        aria-valuenow={pct}
-      >
-        <div className={`h-full bg-harbour ${progress.finished ? '' : 'transition-[width] duration-500'}`} style={{ width: `${pct}%` }} />
-      </div>
+      <ProgressBar label="Sweep progress" percent={pct} animate={!progress.finished} />
       {!progress.finished && <p className="mt-2 text-xs text-ink-soft">The charts fill in as points finish; you can leave and come back.</p>}
     </div>
   );
