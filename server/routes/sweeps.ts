@@ -120,6 +120,17 @@ export function sweepRoutes(deps: AppDeps): RouteSpec[] {
       res.json({ sweep: presentSweep(row, pointRuns(row.id).map(presentPoint)) });
     }),
 
+    // Stops the points still waiting or running and keeps the finished ones, so a sweep started too wide can be cut short.
+    route('post', '/projects/:projectId/sweeps/:sweepId/cancel', access.engineer, (req, res) => {
+      const row = sweepOr404(req.projectId!, req.params);
+      const pending = pointRuns(row.id).filter((run) => run.status === 'queued' || run.status === 'running');
+      if (pending.length === 0) throw new HttpError(409, 'not_cancellable', `Sweep ${row.id} has no point waiting or running; nothing to stop.`);
+      let cancelled = 0;
+      for (const run of pending) if (runQueue.cancel(run.id)) cancelled++;
+      recordRequestAudit(db, req, 'sweep.cancel', `sweep ${row.id}: ${row.name}`, { sweepId: row.id, cancelled });
+      res.json({ cancelled });
+    }),
+
     route('delete', '/projects/:projectId/sweeps/:sweepId', access.engineer, (req, res) => {
       const row = sweepOr404(req.projectId!, req.params);
       const points = pointRuns(row.id);

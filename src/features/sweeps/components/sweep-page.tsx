@@ -5,6 +5,7 @@ import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { useProjectRole } from '@/lib/projects';
 import { useUnitSystem } from '@/lib/unit-system';
 import { SWEEP_INPUTS, zeroMechanical, zeroMechanicalText } from '../../../../shared/sweep';
+import { useCancelSweep } from '../api/cancel-sweep';
 import { useDeleteSweep } from '../api/delete-sweep';
 import { useSweep, type SweepRecord } from '../api/get-sweep';
 import { formatSweepValue, formatSweepValueWithUnit } from '../utils/sweep-format';
@@ -55,6 +56,7 @@ export function SweepPage() {
   const { canEdit } = useProjectRole(projectId);
   const query = useSweep(projectId, sweepId);
   const remove = useDeleteSweep(projectId, sweepId);
+  const stop = useCancelSweep(projectId, sweepId);
 
   if (query.isPending) return <div className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading sweep" />;
   if (query.isError) {
@@ -109,6 +111,17 @@ export function SweepPage() {
               Compare these runs
             </Link>
           )}
+          {canEdit && !sweep.progress.finished && (
+            <button
+              type="button"
+              onClick={() => stop.mutate()}
+              disabled={stop.isPending}
+              className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-50"
+              title="Cancel the points still waiting or running; the finished points stay"
+            >
+              Stop the rest
+            </button>
+          )}
           {canEdit && (
             <button type="button" onClick={deleteSweep} disabled={remove.isPending} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-50">
               {sweep.progress.finished ? 'Delete sweep' : 'Stop and delete'}
@@ -117,6 +130,7 @@ export function SweepPage() {
         </div>
       </header>
       {remove.isError && <Notice tone="bad" title="The sweep was not deleted">{remove.error.message}</Notice>}
+      {stop.isError && <Notice tone="bad" title="The sweep was not stopped">{stop.error.message}</Notice>}
 
       <SweepProgressBar progress={sweep.progress} />
       {sweep.progress.failed > 0 && (
