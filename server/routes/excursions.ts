@@ -7,8 +7,9 @@ import {
   DEFAULT_RECOMMENDED_ID,
   proposalQuerySchema,
   RUN_ENVELOPE,
+  type ChosenEnvelope,
 } from '../../shared/excursions/proposal-query';
-import { findEnvelopePreset, parseScenario, type EnvelopeLimits, type Scenario } from '../../shared/scenario';
+import { findEnvelopePreset, parseScenario, type Scenario } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { loadClimateSeries } from '../climate/store';
@@ -16,15 +17,6 @@ import { runs } from '../db/schema';
 import { HttpError } from '../http-error';
 
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
-
-interface ChosenEnvelope {
-  id: string;
-  label: string;
-  edition: string | null;
-  note: string | null;
-  recalledFromMemory: boolean;
-  limits: EnvelopeLimits;
-}
 
 function chooseEnvelope(id: string, scenario: Scenario): ChosenEnvelope {
   if (id === RUN_ENVELOPE) {

@@ -8,17 +8,11 @@ import { lnSaturationPressure } from '../psychrometrics/saturation';
 import { humidityRatioFromDewPoint } from '../psychrometrics';
 import { MOLAR_MASS_RATIO } from '../psychrometrics/constants';
 import { MS_PER_HOUR } from '../calendar';
+import type { InletLimits } from '../scenario/classify';
 import { xFactorAt } from './x-factor';
 
 /** Inlet limits an hour is checked against; dryBulbMaxC already derated for altitude. */
-export interface EnvelopeBounds {
-  dryBulbMinC: number;
-  dryBulbMaxC: number;
-  dewPointMinC: number;
-  dewPointMaxC: number;
-  rhMinPct: number;
-  rhMaxPct: number;
-}
+export type EnvelopeBounds = InletLimits;
 
 /** Why an hour is outside an envelope (bit flags; an hour may have two). */
 export const CAUSE = { warm: 1, cold: 2, humid: 4, dry: 8 } as const;

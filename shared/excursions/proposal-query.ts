@@ -3,7 +3,7 @@
  * in): one zod schema for the server and the client form. Every message names the field and the value.
  */
 import { z } from 'zod';
-import { ENVELOPE_PRESETS } from '../scenario/envelopes';
+import { ENVELOPE_PRESETS, type EnvelopeLimits } from '../scenario/envelopes';
 
 /** Envelope choices: a preset id, or 'run' for the run's own envelope. */
 export const RUN_ENVELOPE = 'run';
@@ -50,3 +50,13 @@ export const proposalQuerySchema = z
   });
 
 export type ProposalQuery = z.infer<typeof proposalQuerySchema>;
+
+/** An envelope as the analysis applied it: a preset with its edition and source note, or the run's own. */
+export interface ChosenEnvelope {
+  id: string;
+  label: string;
+  edition: string | null;
+  note: string | null;
+  recalledFromMemory: boolean;
+  limits: EnvelopeLimits;
+}

@@ -1,18 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { ExcursionAnalysis, XFactorPoint } from '../../../../shared/excursions';
-import type { ProposalQuery } from '../../../../shared/excursions/proposal-query';
-import type { EnvelopeLimits } from '../../../../shared/scenario/envelopes';
+import type { ChosenEnvelope, ProposalQuery } from '../../../../shared/excursions/proposal-query';
+
 import type { ModeHours } from '../../../../shared/scenario/results';
 
-export interface ChosenEnvelope {
-  id: string;
-  label: string;
-  edition: string | null;
-  note: string | null;
-  recalledFromMemory: boolean;
-  limits: EnvelopeLimits;
-}
 
 export interface ExcursionsResponse {
   run: {

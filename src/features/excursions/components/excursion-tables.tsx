@@ -1,6 +1,7 @@
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import type { ChosenEnvelope, ExcursionsResponse } from '../api/get-excursions';
+import type { ChosenEnvelope } from '../../../../shared/excursions/proposal-query';
+import type { ExcursionsResponse } from '../api/get-excursions';
 import { hoursText } from './excursion-format';
 
 const binLabel = (b: { fromHours: number; toHours: number | null }) =>
