@@ -60,8 +60,8 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
   });
   const floats = watch('floats');
   const { errors } = formState;
-  const box = 'w-24 rounded border border-rule bg-paper px-2 py-1 text-right num focus-visible:outline-2 focus-visible:outline-harbour';
-  const select = 'w-full rounded border border-rule bg-paper px-2 py-1 text-sm focus-visible:outline-2 focus-visible:outline-harbour';
+  const box = 'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
+  const select = 'w-full rounded border border-rule bg-panel px-2 py-1 text-sm focus-visible:outline-2 focus-visible:outline-harbour';
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="grid gap-x-6 gap-y-3 text-sm md:grid-cols-2 xl:grid-cols-[1fr_1fr_1fr_auto]" aria-label="Proposal" noValidate>
       <div className="space-y-2">
