@@ -45,12 +45,21 @@ export const pointAsText = (values: SweepPointValues) =>
 
 const MAX_NAME = 200;
 
+/** " · supply air 24 °C, IT load 500 kW": what a point's run name ends with (SI, as the scenario stores values). */
+export function sweepPointSuffix(values: SweepPointValues): string {
+  return ` · ${(Object.entries(values) as [SweepInputPath, SweepValue][]).map(([path, value]) => describeSweepValue(path, value)).join(', ')}`;
+}
+
+/** A point's run name without the point's values: the base scenario's name (cut short if it was long). */
+export function baseNameOfPoint(name: string, values: SweepPointValues): string {
+  const suffix = sweepPointSuffix(values);
+  return name.endsWith(suffix) ? name.slice(0, -suffix.length) : name;
+}
+
 /** The base scenario with this point's values, named after them; not yet validated. */
 export function applySweepPoint(base: Scenario, values: SweepPointValues): ScenarioInput {
   let scenario: ScenarioInput = structuredClone(base);
-  const parts: string[] = [];
   for (const [path, value] of Object.entries(values) as [SweepInputPath, SweepValue][]) {
-    parts.push(describeSweepValue(path, value));
     if (path === 'envelope.presetId') {
       const preset = typeof value === 'string' ? findEnvelopePreset(value) : undefined;
       if (!preset) throw new RangeError(`envelope.presetId: there is no envelope preset "${value}"`);
@@ -59,7 +68,7 @@ export function applySweepPoint(base: Scenario, values: SweepPointValues): Scena
       scenario = withValueAt(scenario, path, value);
     }
   }
-  const suffix = ` · ${parts.join(', ')}`;
+  const suffix = sweepPointSuffix(values);
   scenario.name = `${base.name.slice(0, Math.max(1, MAX_NAME - suffix.length))}${suffix}`.slice(0, MAX_NAME);
   return scenario;
 }

@@ -1,6 +1,6 @@
 import { formatQuantity, unitOf, type QuantityKind } from './quantity';
 import type { UnitSystem } from './unit-system';
-import { isSweepInputPath, presetLabel, SWEEP_INPUTS, type SweepInputPath, type SweepPointValues, type SweepQuantity, type SweepValue } from '../../shared/sweep';
+import { baseNameOfPoint, isSweepInputPath, presetLabel, SWEEP_INPUTS, type SweepInputPath, type SweepPointValues, type SweepQuantity, type SweepValue } from '../../shared/sweep';
 
 /** The quantity kind a swept value's number follows on the SI/IP switch; null for plain numbers and presets. */
 export const sweepQuantityKind: Record<SweepQuantity, QuantityKind | null> = {
@@ -48,4 +48,14 @@ export function sweepPointParts(point: SweepPointValues, system: UnitSystem): { 
       ? [{ path, label: SWEEP_INPUTS[path].label, short: SWEEP_INPUTS[path].short, value: formatSweepValueWithUnit(path, system, value) }]
       : [],
   );
+}
+
+/**
+ * A run's name as shown: a sweep point's stored name ends with its values in SI ("… · supply air 24 °C"), so that
+ * ending is written again in the person's units ("… · supply air 75.2 °F"). Other runs keep their name.
+ */
+export function runDisplayName(name: string, sweepPoint: SweepPointValues | null, system: UnitSystem): string {
+  if (!sweepPoint) return name;
+  const parts = sweepPointParts(sweepPoint, system);
+  return parts.length ? `${baseNameOfPoint(name, sweepPoint)} · ${parts.map((p) => `${p.short} ${p.value}`).join(', ')}` : name;
 }

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { pickerViewOptions, runsInView, defaultPickerView } from '@/features/compare/utils/run-picker-view';
 import { foldSweepPoints, freeShareText, sweepRowSummary, type FoldableRun } from '@/lib/run-list-folding';
-import { sweepPointParts } from '@/lib/sweep-value';
+import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 
 const words = (point: Parameters<typeof sweepPointParts>[0], system: 'SI' | 'IP') =>
   sweepPointParts(point, system)
@@ -117,5 +117,15 @@ describe('a sweep point in words', () => {
     const text = words({ 'envelope.presetId': 'ashrae-2021-a2', 'system.unknown': 3 } as never, 'SI');
     expect(text).toBe('Inlet envelope preset = Allowable A2 (2021)');
     expect(text).not.toContain('unknown');
+  });
+});
+
+describe('a sweep point\'s run name as shown', () => {
+  it('writes the point\'s values again in the reader\'s units; other names stay as they are', () => {
+    const point = { 'system.supplyAirC': 24 };
+    // 24 °C × 9/5 + 32 = 75.2 °F (exact).
+    expect(runDisplayName('Direct air, A1 · supply air 24 °C', point, 'IP')).toBe('Direct air, A1 · supply air 75.2 °F');
+    expect(runDisplayName('Direct air, A1 · supply air 24 °C', point, 'SI')).toBe('Direct air, A1 · supply air 24.0 °C');
+    expect(runDisplayName('Direct air, A1', null, 'IP')).toBe('Direct air, A1');
   });
 });

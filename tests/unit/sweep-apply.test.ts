@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { findEnvelopePreset, type Scenario } from '../../shared/scenario';
-import { applySweepPoint, prepareSweep, sweepInputRefusal, withValueAt } from '../../shared/sweep';
+import { applySweepPoint, baseNameOfPoint, prepareSweep, sweepInputRefusal, withValueAt } from '../../shared/sweep';
 import { makeScenario } from './scenario/fixtures';
 
 describe('setting a value at a path', () => {
@@ -28,6 +28,9 @@ describe('applying a sweep point to a scenario', () => {
     expect(s.energy.itLoadKw).toBe(1500);
     expect(s.name).toBe(`${base.name} · supply air 26.5 °C, IT load 1,500 kW`);
     expect(base.system.supplyAirC).toBe(24);
+    // The base name comes back from the stored name, so a list can write the values again in the reader's units.
+    expect(baseNameOfPoint(s.name, { 'system.supplyAirC': 26.5, 'energy.itLoadKw': 1500 })).toBe(base.name);
+    expect(baseNameOfPoint('Renamed by hand', { 'system.supplyAirC': 26.5 })).toBe('Renamed by hand');
   });
 
   it('replaces the whole envelope with a preset, as the editor does', () => {

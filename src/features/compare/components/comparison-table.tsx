@@ -1,4 +1,5 @@
 import { downloadCsv } from '@/lib/download';
+import { runDisplayName } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
 import type { ComparedRow } from '../utils/compare-runs';
@@ -12,7 +13,7 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
   const { unitSystem } = useUnitSystem();
   const byId = new Map(runs.map((r) => [r.id, r]));
   function download() {
-    const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${r.scenario.name} / ${r.climate.name}`]));
+    const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${runDisplayName(r.scenario.name, r.sweepPoint, unitSystem)} / ${r.climate.name}`]));
     downloadCsv(`comparison-${runs.map((r) => r.id).join('-')}.csv`, comparisonCsv(rows, labels, unitSystem));
   }
   return (
@@ -34,7 +35,7 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
                     Run {run.id}
                     {run.id === baselineId && <span className="ml-1 rounded bg-harbour px-1 text-[10px] text-paper">baseline</span>}
                   </span>
-                  <span className="block font-normal">{run.scenario.name}</span>
+                  <span className="block font-normal">{runDisplayName(run.scenario.name, run.sweepPoint, unitSystem)}</span>
                   <span className="block font-normal text-ink-faint">
                     {run.climate.site.name} · {run.climate.name}
                   </span>

@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
-import { sweepPointParts } from '@/lib/sweep-value';
+import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import { ResultCautions } from './cautions';
 import { EnergyWaterCards } from './energy-water-cards';
@@ -50,7 +50,7 @@ export function RunPage() {
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <ProjectCrumb projectId={projectId} />
-          <h1 className="text-xl font-semibold">{run.scenario.name}</h1>
+          <h1 className="text-xl font-semibold">{runDisplayName(run.scenario.name, run.sweepPoint, unitSystem)}</h1>
           <p className="text-sm text-ink-soft">
             {run.climate.site.name} · {run.climate.name} · {run.climate.hours.toLocaleString('en')} hours
           </p>
