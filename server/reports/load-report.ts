@@ -3,6 +3,7 @@ import { z } from 'zod';
 import type { ImportReport } from '../../shared/climate';
 import { baselineFirst, shapeReportRun, type ComparisonReportData, type ReportRun, type RunClimateSnapshot, type RunReportData } from '../../shared/report';
 import type { ScenarioResults } from '../../shared/scenario';
+import type { SweepPointValues } from '../../shared/sweep';
 import type { Db } from '../db/client';
 import { climateFiles, projects, runs, sites } from '../db/schema';
 import { HttpError } from '../http-error';
@@ -52,6 +53,7 @@ export function loadReportRuns(db: Db, projectId: number, runIds: number[]): Rep
       createdAt: row.createdAt,
       finishedAt: row.finishedAt,
       scenario: JSON.parse(row.scenarioJson),
+      sweepPoint: row.sweepPointJson ? (JSON.parse(row.sweepPointJson) as SweepPointValues) : null,
       climate: JSON.parse(row.climateJson) as RunClimateSnapshot,
       results: JSON.parse(row.resultsJson) as ScenarioResults,
       file: file

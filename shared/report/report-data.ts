@@ -8,6 +8,7 @@ import type { ImportReport } from '../climate/types';
 import { findEnvelopePreset } from '../scenario/envelopes';
 import type { ScenarioResults } from '../scenario/run';
 import type { Scenario } from '../scenario/schema';
+import type { SweepPointValues } from '../sweep/expand';
 
 export interface ReportSite {
   name: string;
@@ -72,6 +73,8 @@ export interface ReportRun {
   createdAt: string;
   finishedAt: string | null;
   scenario: Scenario;
+  /** For a sweep point, the swept inputs' values (SI), so the name can be shown in the reader's units; else null. */
+  sweepPoint: SweepPointValues | null;
   site: ReportSite;
   climate: ReportClimate;
   envelope: ReportEnvelope;
@@ -114,6 +117,7 @@ export interface ReportRunSource {
   createdAt: Date;
   finishedAt: Date | null;
   scenario: Scenario;
+  sweepPoint: SweepPointValues | null;
   climate: RunClimateSnapshot;
   results: ScenarioResults;
   /** The stored file, when it still exists. */
@@ -137,6 +141,7 @@ export function shapeReportRun(source: ReportRunSource): ReportRun {
     createdAt: source.createdAt.toISOString(),
     finishedAt: source.finishedAt ? source.finishedAt.toISOString() : null,
     scenario: source.scenario,
+    sweepPoint: source.sweepPoint,
     site: {
       name: climate.site.name,
       elevationM: climate.elevationM,

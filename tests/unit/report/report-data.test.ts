@@ -40,6 +40,7 @@ function source(id: number, supplyAirC: number, overrides: Partial<ReportRunSour
     createdAt: new Date(Date.UTC(2026, 0, 5, 9)),
     finishedAt: new Date(Date.UTC(2026, 0, 5, 9, 1)),
     scenario,
+    sweepPoint: null,
     climate: {
       name: 'Synthetic two days',
       sha256: 'ab'.repeat(32),

@@ -13,6 +13,7 @@ import { MethodSection, ModelLimits } from './method-section';
 import { dateTime, day, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
 import { ModeShareBar } from './results-tables';
+import { runDisplayName } from '@/lib/sweep-value';
 
 function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
   if (value === null) return '–';
@@ -84,7 +85,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
             key: String(run.id),
             cells: [
               runLabel(run, baselineId),
-              run.scenario.name,
+              runDisplayName(run.scenario.name, run.sweepPoint, unitSystem),
               <span className="text-xs">{systemInWords(run)}</span>,
               <span className="text-xs">
                 {run.site.name} · {run.climate.name} ({day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)})
@@ -103,7 +104,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
               {runs.map((run) => (
                 <th key={run.id} scope="col" className="px-2 py-1 text-right font-medium">
                   <span className="block text-ink">{runLabel(run, baselineId)}</span>
-                  <span className="block font-normal">{run.scenario.name}</span>
+                  <span className="block font-normal">{runDisplayName(run.scenario.name, run.sweepPoint, unitSystem)}</span>
                 </th>
               ))}
             </tr>

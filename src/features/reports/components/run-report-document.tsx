@@ -12,6 +12,7 @@ import { MethodSection, ModelLimits } from './method-section';
 import { dateTime, day, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
 import { ReportSection, ReportSheet, SubHeading } from './report-layout';
 import { EnergyTable, ExcursionFacts, ModeHoursTable, MonthlyTable, WaterTable, YearTable } from './results-tables';
+import { runDisplayName } from '@/lib/sweep-value';
 
 function Headline({ label, value, note }: { label: string; value: string; note?: string }) {
   return (
@@ -33,7 +34,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
     <ReportSheet>
       <header className="space-y-1 border-b-2 border-harbour pb-3">
         <p className="text-xs uppercase tracking-wider text-ink-soft">Tramontane · cooling-hours report{linkTitle ? ` · ${linkTitle}` : ''}</p>
-        <h1 className="text-2xl font-semibold text-ink" data-testid="report-title">{run.scenario.name}</h1>
+        <h1 className="text-2xl font-semibold text-ink" data-testid="report-title">{runDisplayName(run.scenario.name, run.sweepPoint, unitSystem)}</h1>
         <p className="text-sm text-ink-soft">
           {report.projectName} · run {run.id} · {run.site.name} · {run.climate.name} · generated {dateTime(report.generatedAt)} · units {unitSystem}
         </p>
