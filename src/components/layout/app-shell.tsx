@@ -13,7 +13,8 @@ export function AppShell() {
   return (
     <div className="min-h-screen flex flex-col">
       <UnitSystemSync />
-      <header className="bg-harbour text-paper">
+      {/* Any page prints without the app's navigation; reports and the excursion review also drop the footer. */}
+      <header className="bg-harbour text-paper print:hidden">
         <div className="mx-auto flex max-w-screen-2xl items-center gap-8 px-6 py-3">
           <a href="/" className="flex items-baseline gap-2">
             <span className="text-lg font-semibold tracking-wide">Tramontane</span>
@@ -39,7 +40,7 @@ export function AppShell() {
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-screen-2xl flex-1 px-6 py-6">
+      <main className="mx-auto w-full max-w-screen-2xl flex-1 px-6 py-6 print:max-w-none print:px-0 print:py-2">
         <Outlet />
       </main>
       <footer className="border-t border-rule bg-panel">

@@ -71,7 +71,7 @@ export function RunPage() {
             </p>
           )}
         </div>
-        <div className="flex items-center gap-2 text-sm">
+        <div className="flex items-center gap-2 text-sm print:hidden">
           <span className={`rounded px-2 py-0.5 text-xs font-medium ${statusStyle[run.status]}`} data-testid="run-status">
             {run.status}
           </span>

@@ -105,7 +105,7 @@ export function SweepPage() {
             ))}
           </p>
         </div>
-        <div className="flex items-center gap-2 text-sm">
+        <div className="flex items-center gap-2 text-sm print:hidden">
           {doneIds.length >= 2 && (
             <Link to={`/projects/${projectId}/compare?runs=${doneIds.join(',')}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
               Compare these runs
