@@ -6,6 +6,9 @@
 export const MS_PER_HOUR = 3_600_000;
 export const MS_PER_DAY = 86_400_000;
 
+/** Short English month names, January first: month m (1–12) is MONTH_SHORT[m - 1]. */
+export const MONTH_SHORT = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
+
 /** Year, month 1–12 and day 1–31 of a count of days since 1970-01-01. Writes into `into` to avoid allocation. */
 export function civilFromDays(days: number, into: { year: number; month: number; day: number }): void {
   const z = days + 719_468;

@@ -3,6 +3,8 @@
  * Every chart, table and legend takes its colours from here. Chosen to stay apart in lightness
  * as well as hue (blue, light amber, dark plum), so they read under the common colour-vision deficiencies.
  */
+import type { ModeHours } from './scenario/results';
+
 export const modeKeys = ['free', 'adiabatic', 'mechanical', 'no_data'] as const;
 export type ModeKey = (typeof modeKeys)[number];
 
@@ -27,3 +29,11 @@ export const modeInk: Record<ModeKey, string> = {
   mechanical: '#ffffff',
   no_data: '#1d2327',
 };
+
+/** Where each mode's hours sit in a results table (ModeHours names the no-data hours `noData`). */
+const modeHoursField: Record<ModeKey, 'free' | 'adiabatic' | 'mechanical' | 'noData'> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
+
+/** The hours of one mode in a results table (a run's, a month's, a year's). */
+export function hoursOfMode(row: Omit<ModeHours, 'total'>, mode: ModeKey): number {
+  return row[modeHoursField[mode]];
+}

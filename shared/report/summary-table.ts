@@ -5,7 +5,8 @@
  */
 import { csvRow } from '../csv';
 import { celsiusToFahrenheit, kelvinDifferenceToFahrenheit, metreToFoot } from '../units';
-import { modeKeys, modeLabels, type ModeKey } from '../modes';
+import { MONTH_SHORT } from '../calendar';
+import { hoursOfMode, modeKeys, modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import type { ScenarioResults } from '../scenario/run';
 import { flattenInputs, inputUnitSi } from './inputs';
@@ -18,12 +19,6 @@ export interface SummaryRow {
   value: number | string | null;
 }
 
-const monthShort = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-const fieldOf: Record<ModeKey, keyof ModeHours> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
-
-export function hoursOfMode(row: ModeHours, mode: ModeKey): number {
-  return row[fieldOf[mode]];
-}
 
 /** Fixed decimals as a number (not text), so a spreadsheet still reads it as a number. */
 export function rounded(value: number | null | undefined, decimals: number): number | null {
@@ -72,7 +67,7 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'water', figure: 'Water total per 8,760 h', unit: 'L', value: rounded(w.annualL, 1) },
     { section: 'water', figure: 'WUE', unit: 'L/kWh', value: rounded(w.wueLPerKwh, 4) },
   ];
-  for (const m of r.hoursByMonth) rows.push(...modeRows('by month', `${monthShort[m.month - 1]}: `, m));
+  for (const m of r.hoursByMonth) rows.push(...modeRows('by month', `${MONTH_SHORT[m.month - 1]}: `, m));
   for (const y of r.hoursByYear) {
     rows.push(...modeRows('by year', `${y.year}: `, y));
     rows.push({ section: 'by year', figure: `${y.year}: cooling energy`, unit: 'kWh', value: rounded(y.coolingKwh, 1) });

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { dryBulbBins } from '@/features/runs/utils/bin-table';
 import { climateStates } from '@/features/runs/utils/climate-states';
 import { flattenInputs } from '@/features/runs/utils/inputs-as-run';
-import { monthlyModeRows } from '@/features/runs/utils/monthly-hours';
+import { monthlyModeRows } from '@/components/charts/monthly-mode-rows';
 
 const psychrolib = createRequire(import.meta.url)('psychrolib');
 psychrolib.SetUnitSystem(psychrolib.SI);

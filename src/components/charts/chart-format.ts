@@ -1,5 +1,5 @@
-/** Small helpers shared by the chart components: month names, calendar labels of the carpet grid. */
-export const monthNames = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+/** Small helpers shared by the chart components: calendar labels of the carpet grid. */
+import { MONTH_SHORT } from '../../../shared/calendar';
 
 /** First day (1-based) of each month on the carpet's leap-year calendar. */
 export const carpetMonthStartDays = [1, 32, 61, 92, 122, 153, 183, 214, 245, 275, 306, 336];
@@ -8,7 +8,7 @@ export const carpetMonthStartDays = [1, 32, 61, 92, 122, 153, 183, 214, 245, 275
 export function carpetDayLabel(day: number): string {
   let m = 11;
   while (m > 0 && carpetMonthStartDays[m] > day) m--;
-  return `${day - carpetMonthStartDays[m] + 1} ${monthNames[m]}`;
+  return `${day - carpetMonthStartDays[m] + 1} ${MONTH_SHORT[m]}`;
 }
 
 /** "UTC" or "UTC+01:00" for an offset in minutes. */

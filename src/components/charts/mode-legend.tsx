@@ -1,4 +1,5 @@
-import { modeColours, modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
+import { modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
+import { ModeSwatch } from '../ui/mode-marks';
 
 /** The one legend for the cooling modes: the palette of shared/modes.ts, in its order. */
 export function ModeLegend({ include = modeKeys }: { include?: readonly ModeKey[] }) {
@@ -6,7 +7,7 @@ export function ModeLegend({ include = modeKeys }: { include?: readonly ModeKey[
     <ul aria-label="Modes" className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink-soft">
       {include.map((key) => (
         <li key={key} className="flex items-center gap-1.5">
-          <span aria-hidden className="inline-block size-3 rounded-sm" style={{ background: modeColours[key] }} />
+          <ModeSwatch mode={key} className="size-3" />
           {modeLabels[key]}
         </li>
       ))}

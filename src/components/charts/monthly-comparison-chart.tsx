@@ -1,9 +1,10 @@
 import { useCallback, useMemo } from 'react';
 import { ModeLegend } from './mode-legend';
 import { PlotFigure, type PlotModule } from './plot-figure';
-import { modeColours, modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
+import { hoursOfMode, modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
 import type { ModeHours } from '../../../shared/scenario/results';
-import { hoursOfMode, monthShort as months } from './monthly-mode-rows';
+import { MONTH_SHORT as months } from '../../../shared/calendar';
+import { modeColourScale, modeLabelOrder } from './mode-scale';
 
 type MonthRow = ModeHours & { month: number };
 
@@ -36,14 +37,14 @@ export function MonthlyComparisonChart({ series, withTable = true }: { series: {
         fx: { domain: months, label: 'Month', padding: 0.15 },
         x: { domain: series.map((s) => `Run ${s.runId}`), tickRotate: -40, label: null },
         y: { label: 'Hours (h)', grid: true, labelArrow: 'up' },
-        color: { domain: modeKeys.map((k) => modeLabels[k]), range: modeKeys.map((k) => modeColours[k]) },
+        color: modeColourScale,
         marks: [
           Plot.barY(bars, {
             fx: 'month',
             x: 'run',
             y: 'hours',
             fill: (d: Bar) => modeLabels[d.mode],
-            order: modeKeys.map((k) => modeLabels[k]),
+            order: modeLabelOrder,
             tip: { format: { fx: true, x: true, y: (v: number) => `${v.toLocaleString('en')} h`, fill: true } },
           }),
           Plot.ruleY([0]),

@@ -1,9 +1,11 @@
 import { useCallback, useMemo } from 'react';
 import { ModeLegend } from './mode-legend';
 import { PlotFigure, type PlotModule } from './plot-figure';
-import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
+import { hoursOfMode, modeKeys, modeLabels } from '../../../shared/modes';
 import type { ModeHours } from '../../../shared/scenario/results';
-import { hoursOfMode, monthlyModeRows, monthShort } from './monthly-mode-rows';
+import { MONTH_SHORT as monthShort } from '../../../shared/calendar';
+import { monthlyModeRows } from './monthly-mode-rows';
+import { modeColourScale, modeLabelOrder } from './mode-scale';
 
 /**
  * Stacked hours per mode for each calendar month (site standard time), with the table beside it
@@ -22,13 +24,13 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true }: { byM
         style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
         x: { domain: monthShort, label: `Month (${zoneLabel})`, labelAnchor: 'center', labelArrow: 'none' },
         y: { label: 'Hours (h)', grid: true, labelArrow: 'up' },
-        color: { domain: modeKeys.map((k) => modeLabels[k]), range: modeKeys.map((k) => modeColours[k]) },
+        color: modeColourScale,
         marks: [
           Plot.barY(rows, {
             x: (d: (typeof rows)[number]) => monthShort[d.month - 1],
             y: 'hours',
             fill: (d: (typeof rows)[number]) => modeLabels[d.mode],
-            order: modeKeys.map((k) => modeLabels[k]),
+            order: modeLabelOrder,
             tip: { format: { x: true, y: (v: number) => `${v.toLocaleString('en')} h`, fill: true } },
           }),
           Plot.ruleY([0]),

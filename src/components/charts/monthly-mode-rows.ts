@@ -1,10 +1,5 @@
-import { modeKeys, type ModeKey } from '../../../shared/modes';
+import { hoursOfMode, modeKeys, type ModeKey } from '../../../shared/modes';
 import type { ModeHours } from '../../../shared/scenario/results';
-import { hoursOfMode } from '../../../shared/report/summary-table';
-
-export { hoursOfMode };
-
-export const monthShort = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 export interface MonthModeHours {
   month: number;

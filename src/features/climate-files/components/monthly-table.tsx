@@ -2,8 +2,8 @@ import type { ClimateSummary } from '../../../../shared/climate-summary';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
+import { MONTH_SHORT } from '../../../../shared/calendar';
 
-const months = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /** Monthly minimum, mean and maximum of dry-bulb and dew point over every year in the file. */
 export function MonthlyTable({ summary }: { summary: ClimateSummary }) {
@@ -32,7 +32,7 @@ export function MonthlyTable({ summary }: { summary: ClimateSummary }) {
               const dp = summary.monthly.dewPointC[k];
               return (
                 <tr key={db.month} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{months[db.month - 1]}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{MONTH_SHORT[db.month - 1]}</th>
                   <td className="px-2">{t(db.min)}</td>
                   <td className="px-2 font-semibold">{t(db.mean)}</td>
                   <td className="px-2">{t(db.max)}</td>

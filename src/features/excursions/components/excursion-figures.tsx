@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { modeColours, modeKeys, modeLabels, type ModeKey } from '../../../../shared/modes';
+import { ModeSwatch } from '@/components/ui/mode-marks';
+import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
 import type { ExcursionsResponse } from '../api/get-excursions';
 import { hoursText, percentText, siteTime } from './excursion-format';
 
@@ -83,8 +84,6 @@ export function ExcursionFigures({ data }: { data: ExcursionsResponse }) {
   );
 }
 
-const modeField: Record<ModeKey, 'free' | 'adiabatic' | 'mechanical' | 'noData'> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
-
 /** Hours per mode as run and under the proposal: what the change buys in free cooling. */
 export function ModeChangeTable({ data }: { data: ExcursionsResponse }) {
   const asRun = data.run.hours;
@@ -100,13 +99,13 @@ export function ModeChangeTable({ data }: { data: ExcursionsResponse }) {
       </thead>
       <tbody>
         {modeKeys.map((k) => {
-          const proposed = data.analysis.modes[modeField[k]];
-          const before = asRun ? asRun[modeField[k]] : null;
+          const proposed = hoursOfMode(data.analysis.modes, k);
+          const before = asRun ? hoursOfMode(asRun, k) : null;
           const change = before === null ? null : proposed - before;
           return (
             <tr key={k} className="border-b border-rule/60">
               <th scope="row" className="py-0.5 text-left font-sans font-normal">
-                <span className="mr-1.5 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
+                <ModeSwatch mode={k} className="mr-1.5 size-2.5" />
                 {modeLabels[k]}
               </th>
               <td className="px-2 py-0.5">{before === null ? '–' : hoursText(before)}</td>

@@ -1,7 +1,7 @@
 import { useCallback, useMemo, useState } from 'react';
 import type { MonthlyClimate } from '../../../../shared/morphing';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
-import { monthNames } from '@/components/charts/chart-format';
+import { MONTH_SHORT as monthNames } from '../../../../shared/calendar';
 import { SegmentedSwitch } from '@/components/charts/segmented-switch';
 import { formatQuantity, toDisplay, unitOf, type QuantityKind } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';

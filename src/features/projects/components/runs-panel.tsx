@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { modeColours, modeLabels } from '../../../../shared/modes';
+import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeShareBar } from '@/components/ui/mode-marks';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { foldSweepPoints, freeShareText, sweepRowSummary, type SweepRow } from '@/lib/run-list-folding';
@@ -13,21 +14,16 @@ const statusStyle: Record<RunStatus, { text: string; className: string }> = {
   cancelled: { text: 'cancelled', className: 'bg-paper text-ink-soft' },
 };
 
-/** The share of hours in each mode as one thin bar, in the one mode palette. */
-function ModeShareBar({ hours }: { hours: NonNullable<RunListing['results']>['hours'] }) {
-  const parts = [
-    ['free', hours.free],
-    ['adiabatic', hours.adiabatic],
-    ['mechanical', hours.mechanical],
-    ['no_data', hours.noData],
-  ] as const;
+/** The share of hours in each mode as one thin bar, in the one mode palette, and the free-cooling share in words. */
+function ModeShares({ hours }: { hours: NonNullable<RunListing['results']>['hours'] }) {
   const total = hours.total || 1;
-  const words = parts.filter(([, n]) => n > 0).map(([k, n]) => `${modeLabels[k]} ${((100 * n) / total).toFixed(0)} %`).join(', ');
+  const words = modeKeys
+    .filter((k) => hoursOfMode(hours, k) > 0)
+    .map((k) => `${modeLabels[k]} ${((100 * hoursOfMode(hours, k)) / total).toFixed(0)} %`)
+    .join(', ');
   return (
     <div className="flex items-center gap-2">
-      <div className="flex h-2 w-32 overflow-hidden rounded-sm" role="img" aria-label={words} title={words}>
-        {parts.map(([k, n]) => (n > 0 ? <span key={k} style={{ width: `${(100 * n) / total}%`, background: modeColours[k] }} /> : null))}
-      </div>
+      <ModeShareBar hours={hours} className="h-2 w-32" label={words} />
       <span className="num text-xs text-ink-soft">{((100 * hours.free) / total).toFixed(1)} % free</span>
     </div>
   );
@@ -119,7 +115,7 @@ export function RunsPanel({ projectId }: { projectId: number }) {
                       {r.status === 'running' && ` ${Math.round(r.progress * 100)} %`}
                     </span>
                   </td>
-                  <td className="px-2">{r.results ? <ModeShareBar hours={r.results.hours} /> : <span className="text-xs text-ink-faint">–</span>}</td>
+                  <td className="px-2">{r.results ? <ModeShares hours={r.results.hours} /> : <span className="text-xs text-ink-faint">–</span>}</td>
                 </tr>
               );
             })}

@@ -1,5 +1,6 @@
 import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
-import { hoursOfMode, monthShort } from '@/components/charts/monthly-mode-rows';
+import { MONTH_SHORT as monthShort } from '../../../../shared/calendar';
+import { hoursOfMode } from '../../../../shared/modes';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
@@ -12,7 +13,7 @@ import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
 import { dateTime, day, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
-import { ModeShareBar } from './results-tables';
+import { ModeShareBar } from '@/components/ui/mode-marks';
 import { runDisplayName } from '@/lib/sweep-value';
 
 function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
@@ -114,7 +115,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
               <th scope="row" className="py-1 pr-2 text-left font-normal">Share of hours</th>
               {runs.map((run) => (
                 <td key={run.id} className="px-2 py-1">
-                  <ModeShareBar h={run.results.hours} />
+                  <ModeShareBar hours={run.results.hours} />
                 </td>
               ))}
             </tr>

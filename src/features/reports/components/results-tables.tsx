@@ -1,35 +1,24 @@
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
-import { hoursOfMode, monthShort } from '@/components/charts/monthly-mode-rows';
-import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
+import { MONTH_SHORT as monthShort } from '../../../../shared/calendar';
+import { hoursOfMode } from '../../../../shared/modes';
+import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
+import { modeKeys, modeLabels } from '../../../../shared/modes';
 import type { ModeHours, YearResults } from '../../../../shared/scenario/results';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 import { hours, kw, mwh, ratio, share } from './report-format';
 import { Facts, ReportTable } from './report-layout';
 
-function Swatch({ mode }: { mode: (typeof modeKeys)[number] }) {
-  return <span className="mr-2 inline-block size-3 rounded-sm align-middle" style={{ background: modeColours[mode] }} aria-hidden />;
-}
-
-/** The modes' shares as one bar; the table beside it carries the figures. */
-export function ModeShareBar({ h }: { h: ModeHours }) {
-  return (
-    <div className="flex h-4 overflow-hidden rounded-sm" aria-hidden>
-      {modeKeys.map((k) => (hoursOfMode(h, k) > 0 ? <div key={k} style={{ width: `${(100 * hoursOfMode(h, k)) / h.total}%`, background: modeColours[k] }} /> : null))}
-    </div>
-  );
-}
-
 export function ModeHoursTable({ results }: { results: ScenarioResults }) {
   const h = results.hours;
   return (
     <div className="keep-together space-y-2">
-      <ModeShareBar h={h} />
+      <ModeShareBar hours={h} />
       <ReportTable
         testId="report-mode-hours"
         head={['Mode', 'Hours', 'Share']}
         rows={[
-          ...modeKeys.map((k) => ({ key: k, cells: [<><Swatch mode={k} />{modeLabels[k]}</>, hoursOfMode(h, k).toLocaleString('en'), share(hoursOfMode(h, k), h.total)] })),
+          ...modeKeys.map((k) => ({ key: k, cells: [<><ModeSwatch mode={k} />{modeLabels[k]}</>, hoursOfMode(h, k).toLocaleString('en'), share(hoursOfMode(h, k), h.total)] })),
           { key: 'all', strong: true, cells: ['All hours', h.total.toLocaleString('en'), '100.0 %'] },
         ]}
       />

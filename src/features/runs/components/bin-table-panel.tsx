@@ -5,7 +5,8 @@ import { downloadCsv } from '@/lib/download';
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
-import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeSwatch } from '@/components/ui/mode-marks';
+import { modeKeys, modeLabels } from '../../../../shared/modes';
 import { dryBulbBins, type DryBulbBin } from '../utils/bin-table';
 
 const column = createColumnHelper<DryBulbBin>();
@@ -38,7 +39,7 @@ export function BinTablePanel({
           id: k,
           header: () => (
             <>
-              <span className="mr-1 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
+              <ModeSwatch mode={k} className="mr-1 size-2.5" />
               {modeLabels[k]}
             </>
           ),

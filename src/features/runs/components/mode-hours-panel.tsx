@@ -1,8 +1,7 @@
 import { Panel } from '@/components/ui/panel';
-import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
+import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
-
-const field = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' } as const;
 
 const pct = (part: number, whole: number) => (whole > 0 ? ((100 * part) / whole).toFixed(1) : '0.0');
 
@@ -11,9 +10,7 @@ export function ModeHoursPanel({ results }: { results: ScenarioResults }) {
   const h = results.hours;
   return (
     <Panel title="Hours per mode">
-      <div className="flex h-5 overflow-hidden rounded-sm" aria-hidden>
-        {modeKeys.map((k) => (h[field[k]] > 0 ? <div key={k} style={{ width: `${(100 * h[field[k]]) / h.total}%`, background: modeColours[k] }} /> : null))}
-      </div>
+      <ModeShareBar hours={h} className="h-5" />
       <table className="mt-3 w-full text-sm" data-testid="mode-hours">
         <thead>
           <tr className="border-b border-rule text-xs text-ink-soft">
@@ -26,11 +23,11 @@ export function ModeHoursPanel({ results }: { results: ScenarioResults }) {
           {modeKeys.map((k) => (
             <tr key={k} className="border-b border-rule/60">
               <th scope="row" className="py-1 text-left font-normal">
-                <span className="mr-2 inline-block size-3 rounded-sm align-middle" style={{ background: modeColours[k] }} aria-hidden />
+                <ModeSwatch mode={k} />
                 {modeLabels[k]}
               </th>
-              <td className="num py-1 text-right">{h[field[k]].toLocaleString('en')}</td>
-              <td className="num py-1 text-right">{pct(h[field[k]], h.total)} %</td>
+              <td className="num py-1 text-right">{hoursOfMode(h, k).toLocaleString('en')}</td>
+              <td className="num py-1 text-right">{pct(hoursOfMode(h, k), h.total)} %</td>
             </tr>
           ))}
           <tr>

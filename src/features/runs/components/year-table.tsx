@@ -1,9 +1,9 @@
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
-import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeSwatch } from '@/components/ui/mode-marks';
+import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
 import type { YearResults } from '../../../../shared/scenario/results';
 import { WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
-import { hoursOfMode } from '../utils/monthly-hours';
 
 const hoursText = (h: number) => Math.round(h).toLocaleString('en');
 const mwhText = (kwh: number) => (kwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
@@ -42,7 +42,7 @@ export function YearTable({ years }: { years: YearResults[] }) {
               <th scope="col" className="py-1 text-left font-sans font-medium">Year</th>
               {modeKeys.map((k) => (
                 <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">
-                  <span className="mr-1 inline-block size-2.5 rounded-sm" style={{ background: modeColours[k] }} aria-hidden />
+                  <ModeSwatch mode={k} className="mr-1 size-2.5" />
                   {modeLabels[k]} (h)
                 </th>
               ))}

@@ -1,15 +1,9 @@
 import { useId } from 'react';
-import { modeColours, modeLabels, type ModeKey } from '../../../../shared/modes';
+import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
 import type { Scenario } from '../../../../shared/scenario/schema';
 import { useScenarioPreview } from '../api/preview-scenario';
 import type { ClimateFileListing } from '../api/get-climate-files';
-
-const shown: { key: ModeKey; field: 'free' | 'adiabatic' | 'mechanical' | 'noData' }[] = [
-  { key: 'free', field: 'free' },
-  { key: 'adiabatic', field: 'adiabatic' },
-  { key: 'mechanical', field: 'mechanical' },
-  { key: 'no_data', field: 'noData' },
-];
 
 /** Hours per mode for the scenario as it stands in the editor, on one climate file, refreshed as it changes. */
 export function ModePreview({
@@ -55,22 +49,18 @@ export function ModePreview({
       {!hours && preview.isFetching && <div className="h-20 animate-pulse rounded bg-mist" aria-label="Computing preview" />}
       {hours && (
         <div className={preview.isFetching || invalid ? 'opacity-40 transition-opacity' : ''} data-testid="mode-preview" aria-disabled={invalid || undefined}>
-          <div className="flex h-4 overflow-hidden rounded-sm" aria-hidden>
-            {shown.map(({ key, field }) =>
-              hours[field] > 0 ? <div key={key} style={{ width: `${(100 * hours[field]) / total}%`, background: modeColours[key] }} /> : null,
-            )}
-          </div>
+          <ModeShareBar hours={hours} />
           <table className="mt-2 w-full text-sm">
             <caption className="sr-only">Preview of hours per mode</caption>
             <tbody>
-              {shown.map(({ key, field }) => (
+              {modeKeys.map((key) => (
                 <tr key={key} className="border-b border-rule/60 last:border-0">
                   <th scope="row" className="py-1 text-left font-normal">
-                    <span className="mr-2 inline-block size-2.5 rounded-sm align-middle" style={{ background: modeColours[key] }} aria-hidden />
+                    <ModeSwatch mode={key} className="mr-2 size-2.5 align-middle" />
                     {modeLabels[key]}
                   </th>
-                  <td className="num py-1 text-right">{hours[field].toLocaleString('en')} h</td>
-                  <td className="num w-16 py-1 text-right text-ink-soft">{total ? ((100 * hours[field]) / total).toFixed(1) : '0.0'} %</td>
+                  <td className="num py-1 text-right">{hoursOfMode(hours, key).toLocaleString('en')} h</td>
+                  <td className="num w-16 py-1 text-right text-ink-soft">{total ? ((100 * hoursOfMode(hours, key)) / total).toFixed(1) : '0.0'} %</td>
                 </tr>
               ))}
             </tbody>

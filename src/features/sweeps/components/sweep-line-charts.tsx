@@ -2,10 +2,11 @@ import { useCallback, useMemo } from 'react';
 import { ModeLegend } from '@/components/charts/mode-legend';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
-import { modeColours, modeKeys, modeLabels } from '../../../../shared/modes';
+import { modeColours, modeLabels } from '../../../../shared/modes';
 import { metricRows, modeHoursRows, type SweepInputPath, type SweepMetric, type SweepPoint, type SweepValue, type ZeroMechanical } from '../../../../shared/sweep';
 import { compactPresetLabel, displayNumber, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
 import { metricDisplay, metricTitle } from '../utils/metric-format';
+import { modeColourScale, modeLabelOrder } from '@/components/charts/mode-scale';
 
 const plotStyle = { fontFamily: 'var(--font-sans)', fontSize: '12px' };
 
@@ -31,8 +32,6 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
   const zeroX = zero.kind === 'none' ? null : axis.x(zero.value);
   const render = useCallback(
     (Plot: PlotModule, widthPx: number) => {
-      const colour = { domain: modeKeys.map((k) => modeLabels[k]), range: modeKeys.map((k) => modeColours[k]) };
-      const order = modeKeys.map((k) => modeLabels[k]);
       const marker =
         zeroX === null
           ? []
@@ -51,11 +50,11 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
           ? { type: 'band', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, padding: 0.2 }
           : { label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36 },
         y: { label: 'Hours over the file (h)', grid: true, labelArrow: 'up' },
-        color: colour,
+        color: modeColourScale,
         marks: [
           axis.preset
-            ? Plot.barY(rows, { x: 'x', y: 'hours', fill: 'label', order, tip: true })
-            : Plot.areaY(rows, { x: 'x', y: 'hours', fill: 'label', order, curve: 'linear', tip: true }),
+            ? Plot.barY(rows, { x: 'x', y: 'hours', fill: 'label', order: modeLabelOrder, tip: true })
+            : Plot.areaY(rows, { x: 'x', y: 'hours', fill: 'label', order: modeLabelOrder, curve: 'linear', tip: true }),
           Plot.ruleY([0]),
           ...marker,
         ],

@@ -3,7 +3,7 @@ import { downloadCsv } from '@/lib/download';
 import { toDisplay } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
-import { modeColours } from '../../../../shared/modes';
+import { ModeSwatch } from '@/components/ui/mode-marks';
 import type { SweepInputPath, SweepPoint, SweepRunStatus } from '../../../../shared/sweep';
 import { displayNumber, formatSweepValue, sweepAxisTitle, sweepUnit } from '../utils/sweep-format';
 import { formatMetric, metricUnit } from '../utils/metric-format';
@@ -87,7 +87,7 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
               </th>
               {hoursHeads.map(([k, label]) => (
                 <th key={k} scope="col" className="px-2 font-medium">
-                  <span aria-hidden className="mr-1 inline-block size-2.5 rounded-sm align-middle" style={{ background: modeColours[k] }} />
+                  <ModeSwatch mode={k} className="mr-1 size-2.5 align-middle" />
                   {label}
                 </th>
               ))}
