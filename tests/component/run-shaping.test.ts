@@ -2,7 +2,7 @@ import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import { dryBulbBins } from '@/features/runs/utils/bin-table';
 import { climateStates } from '@/features/runs/utils/climate-states';
-import { flattenInputs } from '@/features/runs/utils/inputs-as-run';
+import { flattenInputs } from '../../shared/report/inputs';
 import { monthlyModeRows } from '@/components/charts/monthly-mode-rows';
 
 const psychrolib = createRequire(import.meta.url)('psychrolib');

@@ -6,7 +6,7 @@ import { useRuns } from '../api/get-runs';
 import { useRunTables } from '../api/get-run-tables';
 import { compareRuns } from '../utils/compare-runs';
 import { ComparisonTable } from './comparison-table';
-import { MonthlyComparisonChart } from './monthly-comparison-chart';
+import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
 import { RunPicker } from './run-picker';
 import { YearSpreadTable } from './year-spread-table';
 import { ProjectCrumb } from '@/components/ui/project-crumb';

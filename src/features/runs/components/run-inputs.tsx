@@ -1,7 +1,7 @@
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
-import { flattenInputs } from '../utils/inputs-as-run';
+import { flattenInputs } from '../../../../shared/report/inputs';
 import { formatInputValue } from '@/components/ui/input-value';
 import { inputLabel } from '../../../../shared/scenario/input-labels';
 

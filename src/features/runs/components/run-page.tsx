@@ -6,10 +6,10 @@ import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
 import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
-import { ResultCautions } from './cautions';
+import { ResultCautions } from '@/components/ui/result-cautions';
 import { EnergyWaterCards } from './energy-water-cards';
 import { ModeHoursPanel } from './mode-hours-panel';
-import { MonthlyHoursChart } from './monthly-hours-chart';
+import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { RunHourViews } from './run-hour-views';
 import { RunInputs } from './run-inputs';
 import { RunStatus } from './run-status';
@@ -113,7 +113,7 @@ export function RunPage() {
           <div className="grid gap-4 xl:grid-cols-[24rem_minmax(0,1fr)]">
             <ModeHoursPanel results={results} />
             <Panel title="Hours per mode by month">
-              <MonthlyHoursChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} />
+              <MonthlyModeChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} />
             </Panel>
           </div>
           <EnergyWaterCards results={results} />
