@@ -9,7 +9,7 @@ import { axisValues, MAX_SWEEP_POINTS, prepareSweep, sweepPointCount, sweepSpecS
 import { useClimateFiles } from '../api/get-climate-files';
 import { useCreateSweep } from '../api/create-sweep';
 import { useScenarios } from '../api/get-scenarios';
-import { formatSweepValue, sweepUnit } from '../utils/sweep-format';
+import { formatSweepValue, sweepUnit } from '@/lib/sweep-value';
 import { applicableInputs, AxisFields, draftFor, type AxisDraft } from './axis-fields';
 
 const specAxis = (a: AxisDraft) => (a.input === 'envelope.presetId' ? { input: a.input, presetIds: a.presetIds } : { input: a.input, from: a.from, to: a.to, step: a.step });

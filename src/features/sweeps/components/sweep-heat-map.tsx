@@ -3,7 +3,8 @@ import { densityRamp } from '@/components/charts/colour-ramps';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { axisOrder, gridCells, SWEEP_METRICS, sweepMetricLabels, type SweepInputPath, type SweepMetric, type SweepPoint } from '../../../../shared/sweep';
-import { compactPresetLabel, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
+import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
+import { compactPresetLabel } from '../utils/sweep-format';
 import { formatMetric, metricDisplay, metricTitle } from '../utils/metric-format';
 
 /** Ink on the pale half of the ramp, paper on the dark half, so every cell's figure keeps its contrast. */

@@ -4,7 +4,8 @@ import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { modeColours, modeLabels } from '../../../../shared/modes';
 import { metricRows, modeHoursRows, type SweepInputPath, type SweepMetric, type SweepPoint, type SweepValue, type ZeroMechanical } from '../../../../shared/sweep';
-import { compactPresetLabel, displayNumber, formatSweepValue, sweepAxisTitle } from '../utils/sweep-format';
+import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
+import { compactPresetLabel, displayNumber } from '../utils/sweep-format';
 import { metricDisplay, metricTitle } from '../utils/metric-format';
 import { modeColourScale, modeLabelOrder } from '@/components/charts/mode-scale';
 

@@ -8,7 +8,7 @@ import { SWEEP_INPUTS, zeroMechanical, zeroMechanicalText } from '../../../../sh
 import { useCancelSweep } from '../api/cancel-sweep';
 import { useDeleteSweep } from '../api/delete-sweep';
 import { useSweep, type SweepRecord } from '../api/get-sweep';
-import { formatSweepValue, formatSweepValueWithUnit } from '../utils/sweep-format';
+import { formatSweepValue, formatSweepValueWithUnit } from '@/lib/sweep-value';
 import { SweepHeatMap } from './sweep-heat-map';
 import { SweepLineCharts } from './sweep-line-charts';
 import { SweepPointsTable } from './sweep-points-table';

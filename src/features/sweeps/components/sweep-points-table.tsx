@@ -5,7 +5,8 @@ import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
 import { ModeSwatch } from '@/components/ui/mode-marks';
 import type { SweepInputPath, SweepPoint, SweepRunStatus } from '../../../../shared/sweep';
-import { displayNumber, formatSweepValue, sweepAxisTitle, sweepUnit } from '../utils/sweep-format';
+import { formatSweepValue, sweepAxisTitle, sweepUnit } from '@/lib/sweep-value';
+import { displayNumber } from '../utils/sweep-format';
 import { formatMetric, metricUnit } from '../utils/metric-format';
 
 const statusClass: Record<SweepRunStatus, string> = {

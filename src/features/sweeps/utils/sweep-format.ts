@@ -1,5 +1,3 @@
-// The value formatting (sweepUnit, sweepAxisTitle, formatSweepValue…) lives in src/lib/sweep-value.ts, shared with the run lists.
-export { formatSweepValue, formatSweepValueWithUnit, sweepAxisTitle, sweepUnit } from '@/lib/sweep-value';
 import { fromDisplay, toDisplay } from '@/lib/quantity';
 import { sweepQuantityKind as kindOf } from '@/lib/sweep-value';
 import type { UnitSystem } from '@/lib/unit-system';
