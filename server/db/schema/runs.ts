@@ -91,7 +91,7 @@ export const runs = sqliteTable(
     startedAt: integer({ mode: 'timestamp_ms' }),
     finishedAt: integer({ mode: 'timestamp_ms' }),
   },
-  (table) => [index('runs_project_idx').on(table.projectId), index('runs_status_idx').on(table.status)],
+  (table) => [index('runs_project_idx').on(table.projectId), index('runs_status_idx').on(table.status), index('runs_sweep_idx').on(table.sweepId)],
 );
 
 /** Per-hour outcome of a finished run, column-wise: mode codes and the compressors' share of the load. */
