@@ -1,11 +1,13 @@
 import { hourlyJson } from '../shared/report/hourly-json';
-import { hourlyCsvInput, parseScenario, runScenario, writeHourlyCsv, type RunOptions, type ScenarioSeries } from '../shared/scenario';
+import { standardPressurePa } from '../shared/psychrometrics';
+import { hourlyCsvInput, outdoorStates, parseScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
 
 export interface FormatHourlyInput {
   /** Scenario JSON as stored with the run; validated again because a worker must not trust its caller. */
   scenario: unknown;
   series: ScenarioSeries;
-  options: RunOptions;
+  /** The elevation the run used (its site's, as snapshotted); the scenario's own when absent. */
+  elevationM?: number;
   /** The run's stored per-hour outcome, used as it was rather than classified again. */
   modes: Uint8Array;
   mechanicalFraction: Float64Array;
@@ -19,14 +21,14 @@ const encoder = new TextEncoder();
 /**
  * Piscina task: a finished run's hourly file, as bytes. The run keeps only each hour's mode and
  * compressor share, so the outdoor states (wet-bulb, dew point, RH, W, h) are recomputed here from the
- * climate series with the run's own scenario, elevation and clock, exactly as the run computed them —
- * a second or more for 30 years, kept off the server's main thread.
+ * climate series at the run's elevation, exactly as the run computed them (its first step, outdoorStates),
+ * and written beside the stored modes — kept off the server's main thread.
  */
-export function formatHourly({ scenario, series, options, modes, mechanicalFraction, format, about }: FormatHourlyInput): Uint8Array {
+export function formatHourly({ scenario, series, elevationM, modes, mechanicalFraction, format, about }: FormatHourlyInput): Uint8Array {
   const parsed = parseScenario(scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
-  const computed = runScenario(parsed.scenario, series, options);
-  const hourly = { ...hourlyCsvInput(series, computed), modes, mechanicalFraction };
+  const { states } = outdoorStates(series, standardPressurePa(elevationM ?? parsed.scenario.elevationM));
+  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction } });
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];
   let length = 0;

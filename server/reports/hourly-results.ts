@@ -10,7 +10,8 @@ import { HttpError } from '../http-error';
 /**
  * The hourly file of a finished run (the command line's --hourly columns, as CSV or column-wise JSON),
  * made on the worker pool: the outdoor states are recomputed there from the stored climate series with
- * the run's own scenario, elevation and clock, and the stored modes and compressor shares are used as they were.
+ * the pressure at the run's elevation (the engine's own first step), and the stored modes and compressor shares are used
+ * as they were.
  */
 export async function hourlyFileOf(
   db: Db,
@@ -34,7 +35,7 @@ export async function hourlyFileOf(
   const bytes = await pool.run('formatHourly', {
     scenario: JSON.parse(run.scenarioJson),
     series,
-    options: { elevationM: climate.elevationM, utcOffsetMinutes: climate.utcOffsetMinutes },
+    elevationM: climate.elevationM,
     modes,
     mechanicalFraction,
     format,

@@ -34,8 +34,11 @@ export interface HourlyCsvInput {
   mechanicalFraction: Float64Array;
 }
 
-/** The hourly CSV's columns from the series a run was given and the run itself. */
-export function hourlyCsvInput(series: ScenarioSeries, run: ScenarioRun): HourlyCsvInput {
+/** The hourly CSV's columns from the series a run was given and the run itself (its states and per-hour outcome). */
+export function hourlyCsvInput(
+  series: ScenarioSeries,
+  run: Pick<ScenarioRun, 'states'> & { classification: Pick<ScenarioRun['classification'], 'modes' | 'mechanicalFraction'> },
+): HourlyCsvInput {
   return {
     timestampsMs: series.timestampsMs,
     modes: run.classification.modes,

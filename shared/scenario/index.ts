@@ -10,7 +10,7 @@ export { hourlyEnergy, hallAirMassFlowKgPerS, copAt, CP_AIR_KJ_PER_KG_K, LATENT_
 export type { HourlyEnergy } from './energy';
 export { aggregateResults } from './results';
 export type { AggregatedResults, ModeHours, EnergyTotals, YearResults } from './results';
-export { runScenario } from './run';
+export { outdoorStates, runScenario } from './run';
 export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun } from './run';
 export { ENGINE_VERSION } from './version';
 export { HOURLY_CSV_COLUMNS, writeHourlyCsv, writeFixed, hourlyCsvInput } from './hourly-csv';

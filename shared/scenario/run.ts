@@ -60,9 +60,7 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
   const elevationM = options.elevationM ?? scenario.elevationM;
   const sitePressurePa = standardPressurePa(elevationM);
-  const { pressurePa, filledHours } = resolvePressure(series.pressurePa, sitePressurePa);
-
-  const states = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
+  const { states, pressurePa, filledHours } = outdoorStates(series, sitePressurePa);
   const { envelope, system } = scenario;
   const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
   const classification = classifyHours(system, limits, {
@@ -114,6 +112,16 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
     classification,
     energy,
   };
+}
+
+/**
+ * Every hour's outdoor moist-air state at its pressure: the station's where the series has it, the standard
+ * atmosphere at the site (`sitePressurePa`) where it has none or a hole. The first step of a run, and all the
+ * hourly downloads need to write a run's states again.
+ */
+export function outdoorStates(series: ScenarioSeries, sitePressurePa: number): { states: BulkState; pressurePa: Float64Array | number; filledHours: number } {
+  const { pressurePa, filledHours } = resolvePressure(series.pressurePa, sitePressurePa);
+  return { states: bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa }), pressurePa, filledHours };
 }
 
 /** Station pressure where the series has it; the standard atmosphere where it has none or a hole. */
