@@ -10,10 +10,10 @@ import type { OidcClient } from './auth/oidc';
 import type { Mailer } from './mail/mailer';
 import type { Mailbox } from './mail/fake-smtp';
 import { mountRoutes, type RouteSpec } from './auth/access';
+import { refuseDeepJson } from './middleware/json-depth';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
-import { seriesToolRoutes } from './routes/series-tools';
 import { authRoutes } from './routes/auth';
 import { meRoutes } from './routes/me';
 import { memberRoutes } from './routes/members';
@@ -63,7 +63,6 @@ export function apiRoutes(deps: AppDeps): RouteSpec[] {
   return [
     ...healthRoutes(deps),
     ...projectRoutes(deps),
-    ...seriesToolRoutes(deps),
     ...siteRoutes(deps),
     ...climateFileRoutes(deps),
     ...envelopeRoutes(deps),
@@ -89,7 +88,7 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', 'loopback');
 
   const api = express.Router();
-  api.use(express.json({ limit: '20mb' }));
+  api.use(express.json({ limit: '20mb', verify: (_req, _res, raw) => refuseDeepJson(raw) }));
   api.use(loadSession(deps.db, { clock: deps.clock, policy: deps.sessionPolicy }));
   api.use(refuseCrossSite);
   mountRoutes(api, deps.db, apiRoutes(deps));

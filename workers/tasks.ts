@@ -2,7 +2,6 @@
  * The tasks the pool runs, by name: `pool.run('<name>', input)` (workers/pool.ts).
  * Each is a thin wrapper over shared/.
  */
-export { summarise } from './summarise';
 export { importClimate } from './import-climate';
 export { summariseClimate } from './summarise-climate';
 export { executeRun } from './execute-run';

@@ -25,6 +25,12 @@ export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler
       res.status(400).json(body('invalid_request', summary, fields));
       return;
     }
+    if (error?.code === 'SQLITE_FULL') {
+      // A transaction that hits a full disk is rolled back whole, so nothing half-stored is left to clean up.
+      log(error);
+      res.status(507).json(body('disk_full', "The server's disk is full; nothing was stored. Tell the administrator."));
+      return;
+    }
     const status = typeof error?.status === 'number' && error.status >= 400 && error.status < 500 ? error.status : 500;
     if (error?.type === 'entity.too.large') {
       const limitMb = Math.round(Number(error.limit) / (1024 * 1024));

@@ -4,6 +4,7 @@ import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { memberships, projects } from '../db/schema';
+import { parsePatch } from '../patch-body';
 
 const projectInput = z.object({
   name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters'),
@@ -36,7 +37,7 @@ export function projectRoutes({ db }: AppDeps): RouteSpec[] {
       res.status(201).json({ project: { ...project, role: 'owner' } });
     }),
     route('patch', '/projects/:projectId', access.owner, (req, res) => {
-      const input = projectInput.partial().parse(req.body);
+      const input = parsePatch(projectInput, req.body);
       const project = db.transaction((tx) => {
         const row = tx.update(projects).set(input).where(eq(projects.id, req.projectId!)).returning().get();
         recordRequestAudit(tx, req, 'project.update', row.name, { changed: Object.keys(input) });

@@ -6,6 +6,7 @@ import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { sites } from '../db/schema';
 import { HttpError } from '../http-error';
+import { parsePatch } from '../patch-body';
 
 const siteParams = z.object({ siteId: z.coerce.number().int().positive('siteId must be a positive whole number') });
 
@@ -41,7 +42,7 @@ export function siteRoutes(deps: AppDeps): RouteSpec[] {
     route('patch', '/projects/:projectId/sites/:siteId', access.engineer, (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       findSite(deps, req.projectId!, siteId);
-      const input = siteInputSchema.partial().parse(req.body);
+      const input = parsePatch(siteInputSchema, req.body);
       const site = db.transaction((tx) => {
         const row = tx.update(sites).set(input).where(eq(sites.id, siteId)).returning().get();
         recordRequestAudit(tx, req, 'site.update', row.name, { siteId, changed: Object.keys(input) });

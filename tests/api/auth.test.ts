@@ -171,7 +171,19 @@ describe('the callback refuses what does not belong to a sign-in it started', ()
 });
 
 describe('no open redirect', () => {
-  it.each(['//evil.example/steal', 'https://evil.example/', '/\\evil.example', 'javascript:alert(1)', '/%0d%0aLocation: x'.replace('%0d%0a', '\r\n')])(
+  it.each([
+    '//evil.example/steal',
+    'https://evil.example/',
+    '/\\evil.example',
+    'javascript:alert(1)',
+    '/%0d%0aLocation: x'.replace('%0d%0a', '\r\n'),
+    // Paths that only become another host once normalised.
+    '/.//evil.example/x',
+    '/..//evil.example',
+    '/a/..//evil.example/x?y=1',
+    '/%2e%2e//evil.example',
+    '/./%2e//evil.example',
+  ])(
     'refuses returnTo=%s',
     async (returnTo) => {
       const res = await request(t.app).get(`/api/auth/sign-in?returnTo=${encodeURIComponent(returnTo)}`).expect(400);

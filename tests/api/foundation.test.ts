@@ -28,30 +28,28 @@ describe('a visitor checking the server', () => {
   });
 
   it('gets a 400 naming the problem for malformed JSON, without a stack trace', async () => {
-    const res = await request(t.app).post('/api/series/summary').set('content-type', 'application/json').send('{bad').expect(400);
+    const res = await request(t.app).post('/api/projects').set('content-type', 'application/json').send('{bad').expect(400);
     expect(res.body.error.message).toBeTypeOf('string');
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts:\d+/);
   });
 });
 
-describe('summarising a column on the worker pool', () => {
-  it('returns count, missing, min, max and mean computed on a pool thread', async () => {
-    const res = await request(t.app)
-      .post('/api/series/summary')
-      .send({ values: [12.5, -3, null, 20.5, 6] })
-      .expect(200);
-    // Hand computation: four numbers, one missing; mean = (12.5 - 3 + 20.5 + 6) / 4 = 9.
-    expect(res.body.summary).toEqual({ count: 4, missing: 1, min: -3, max: 20.5, mean: 9 });
+describe('routes that are not there', () => {
+  it('has no public column summary: nothing in the client used it, and anyone signed out could stall the server with it', async () => {
+    await request(t.app).post('/api/series/summary').send({ values: [1, 2, 3] }).expect(404);
+  });
+});
+
+describe('hostile or unlucky requests', () => {
+  it('answers 400 naming the limit for a body nested thousands deep (a 9 KB request), not 500', async () => {
+    const deep = `{"name":"x","envelope":${'['.repeat(4500)}${']'.repeat(4500)}}`;
+    const res = await request(t.app).post('/api/projects').set('content-type', 'application/json').send(deep).expect(400);
+    expect(res.body.error).toEqual({ code: 'too_deep', message: 'The request body is nested more than 32 levels deep; no Tramontane request needs that.' });
   });
 
-  it('refuses an empty column with a message naming the field', async () => {
-    const res = await request(t.app).post('/api/series/summary').send({ values: [] }).expect(400);
-    expect(res.body.error.code).toBe('invalid_request');
-    expect(res.body.error.message).toContain('values');
-  });
-
-  it('refuses text where numbers belong', async () => {
-    const res = await request(t.app).post('/api/series/summary').send({ values: [1, 'warm'] }).expect(400);
-    expect(res.body.error.details[0].path).toBe('values.1');
+  it('does not count brackets inside strings', async () => {
+    const text = JSON.stringify({ name: '['.repeat(100) });
+    // Signed out, so the route answers 401: the body got past the depth check.
+    await request(t.app).post('/api/projects').set('content-type', 'application/json').send(text).expect(401);
   });
 });
