@@ -54,6 +54,8 @@ export interface AppDeps {
   clock?: Clock;
   sessionPolicy?: SessionPolicy;
   inviteLifetimeMs?: number;
+  /** E-mails (lower case) that become organisation admins when they sign in with a provider-verified address. */
+  adminEmails?: readonly string[];
   /** Sign-in and callback requests allowed per address per window. */
   signInRateLimit?: { limit: number; windowMs: number };
 }

@@ -1,6 +1,14 @@
 import path from 'node:path';
 import { z } from 'zod';
 
+/** An on/off variable: 1/true or 0/false (unset is off). */
+const flag = z
+  .enum(['0', '1', 'true', 'false'], { error: 'must be 1 or 0' })
+  .default('0')
+  .transform((value) => value === '1' || value === 'true');
+
+const LOOPBACK_HOSTS = new Set(['127.0.0.1', '::1', 'localhost']);
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65_535).default(3000),
@@ -33,7 +41,32 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default('Tramontane <tramontane@localhost>'),
   /** Port of the local fake SMTP server when no SMTP_HOST is set. */
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65_535).default(2525),
+
+  /**
+   * Demo mode: the local sign-in provider and mail server stand in where OIDC_ISSUER / SMTP_HOST are unset, and an
+   * empty database gets the synthetic demo workspace. `npm start` and `npm run dev` turn it on; a deployment leaves it off.
+   */
+  TRAMONTANE_DEMO: flag,
+  /** Lets demo mode listen beyond loopback; anyone who reaches it can pick the demo admin on the local provider's page. */
+  TRAMONTANE_DEMO_PUBLIC: flag,
+  /** Comma-separated e-mails that become organisation admins when they sign in with a provider-verified address. */
+  TRAMONTANE_ADMIN_EMAILS: z
+    .string()
+    .default('')
+    .transform((list) => list.split(',').map((email) => email.trim().toLowerCase()).filter(Boolean))
+    .pipe(z.array(z.email({ error: (issue) => `TRAMONTANE_ADMIN_EMAILS holds ${JSON.stringify(issue.input)}, which is not an e-mail address` }))),
 }).superRefine((env, ctx) => {
+  if (!env.TRAMONTANE_DEMO) {
+    const standIn = 'or set TRAMONTANE_DEMO=1 for the local stand-ins (never on a shared server)';
+    if (!env.OIDC_ISSUER) ctx.addIssue({ code: 'custom', path: ['OIDC_ISSUER'], message: `OIDC_ISSUER is required outside demo mode: name your sign-in provider, ${standIn}` });
+    if (!env.SMTP_HOST) ctx.addIssue({ code: 'custom', path: ['SMTP_HOST'], message: `SMTP_HOST is required outside demo mode: name your mail server, ${standIn}` });
+  } else if (!LOOPBACK_HOSTS.has(env.HOST) && !env.TRAMONTANE_DEMO_PUBLIC) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['HOST'],
+      message: `demo mode listens on loopback only (HOST=${env.HOST}): its local sign-in page lets anyone pick the demo admin. Set TRAMONTANE_DEMO_PUBLIC=1 to allow it anyway`,
+    });
+  }
   if (env.OIDC_ISSUER && !env.OIDC_CLIENT_ID) {
     ctx.addIssue({ code: 'custom', path: ['OIDC_CLIENT_ID'], message: 'OIDC_CLIENT_ID is required when OIDC_ISSUER is set' });
   }

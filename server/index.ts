@@ -11,7 +11,7 @@ import { startAuthRuntime } from './auth/runtime';
 async function main(): Promise<void> {
   const env = loadEnv();
   const db = openDatabase(env.databaseFile);
-  const { seeded } = seedDemo(db);
+  const { seeded } = env.TRAMONTANE_DEMO ? seedDemo(db) : { seeded: false };
   const pool = createWorkerPool({ threads: env.TRAMONTANE_WORKERS });
 
   let devMiddleware;
@@ -28,11 +28,11 @@ async function main(): Promise<void> {
   const resumed = runQueue.resume();
   if (resumed > 0) console.log(`Resuming ${resumed} run(s) left pending`);
 
-  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, ...auth.deps });
+  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, adminEmails: env.TRAMONTANE_ADMIN_EMAILS, ...auth.deps });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : env.PORT;
-    console.log(`Tramontane (${env.NODE_ENV}) on http://localhost:${port}  data: ${env.TRAMONTANE_DATA_DIR}${seeded ? '  (demo data loaded)' : ''}`);
+    console.log(`Tramontane (${env.NODE_ENV}${env.TRAMONTANE_DEMO ? ', demo mode' : ''}) on http://localhost:${port}  data: ${env.TRAMONTANE_DATA_DIR}${seeded ? '  (demo data loaded)' : ''}`);
   });
 
   let stopping = false;

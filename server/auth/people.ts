@@ -10,9 +10,15 @@ import type { VerifiedIdentity } from './oidc';
  * - otherwise a person added ahead of time (demo people) with the same e-mail and no identity yet,
  *   linked only when the provider says the e-mail is verified;
  * - otherwise a new person.
- * When nobody in the installation is an admin yet, this person becomes one: the first to sign in runs it.
+ * Who becomes an organisation admin: with `adminEmails` given, the people whose provider-verified e-mail is on
+ * that list (TRAMONTANE_ADMIN_EMAILS); without it, the first person to sign in while nobody is admin.
  */
-export function personForIdentity(db: Db, identity: VerifiedIdentity, now: Date): { id: number; isAdmin: boolean; created: boolean; madeAdmin: boolean } {
+export function personForIdentity(
+  db: Db,
+  identity: VerifiedIdentity,
+  now: Date,
+  adminEmails: readonly string[] = [],
+): { id: number; isAdmin: boolean; created: boolean; madeAdmin: boolean } {
   return db.transaction((tx) => {
     let created = false;
     let person = tx
@@ -41,8 +47,10 @@ export function personForIdentity(db: Db, identity: VerifiedIdentity, now: Date)
         created = true;
       }
     }
-    const admins = tx.select({ n: count() }).from(users).where(eq(users.isAdmin, true)).get()!.n;
-    const madeAdmin = admins === 0;
+    const listed = identity.emailVerified && adminEmails.includes(identity.email.toLowerCase());
+    const firstPerson = adminEmails.length === 0 && tx.select({ n: count() }).from(users).where(eq(users.isAdmin, true)).get()!.n === 0;
+    const wasAdmin = tx.select({ isAdmin: users.isAdmin }).from(users).where(eq(users.id, person.id)).get()!.isAdmin;
+    const madeAdmin = !wasAdmin && (listed || firstPerson);
     // Follow a changed address at the provider, unless someone else here already holds it.
     const holder = tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, identity.email)).get();
     const email = !holder || holder.id === person.id ? { email: identity.email } : {};

@@ -101,7 +101,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
       }
       let person;
       try {
-        person = personForIdentity(db, identity, now);
+        person = personForIdentity(db, identity, now, deps.adminEmails);
       } catch (problem) {
         if (problem instanceof EmailTaken) return fail(req, res, 'email_taken');
         throw problem;

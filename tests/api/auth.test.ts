@@ -18,7 +18,7 @@ const clock = () => new Date(now);
 
 let t: SignInStack;
 beforeAll(async () => {
-  t = await startSignInStack({ overrides: { clock, sessionPolicy: { idleMs: 2 * hour, absoluteMs: 10 * hour } } });
+  t = await startSignInStack({ overrides: { clock, sessionPolicy: { idleMs: 2 * hour, absoluteMs: 10 * hour }, signInRateLimit: { limit: 100, windowMs: 60_000 } } });
 });
 afterAll(() => t.close());
 
