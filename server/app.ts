@@ -11,6 +11,7 @@ import type { Mailer } from './mail/mailer';
 import type { Mailbox } from './mail/fake-smtp';
 import { mountRoutes, type RouteSpec } from './auth/access';
 import { refuseDeepJson } from './middleware/json-depth';
+import { securityHeaders } from './middleware/security-headers';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
@@ -88,6 +89,7 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  app.use(securityHeaders({ development: Boolean(deps.devMiddleware) }));
 
   const api = express.Router();
   api.use(express.json({ limit: '20mb', verify: (_req, _res, raw) => refuseDeepJson(raw) }));
