@@ -57,6 +57,8 @@ export interface AppDeps {
   inviteLifetimeMs?: number;
   /** E-mails (lower case) that become organisation admins when they sign in with a provider-verified address. */
   adminEmails?: readonly string[];
+  /** Share-link reads (report and downloads) allowed per address per window; tokens are unguessable, this bounds the load. */
+  sharedLinkRateLimit?: { limit: number; windowMs: number };
   /** Sign-in and callback requests allowed per address per window. */
   signInRateLimit?: { limit: number; windowMs: number };
 }

@@ -1,6 +1,7 @@
 import { and, desc, eq } from 'drizzle-orm';
 import type { Request } from 'express';
 import { z } from 'zod';
+import { withoutControlCharacters } from '../../shared/schemas/plain-text';
 import { hashToken, randomToken } from '../auth/session';
 import type { Db } from '../db/client';
 import { memberships, shareLinks, shareTargets, users } from '../db/schema';
@@ -15,7 +16,7 @@ export const createShareInput = z
     target: z.enum(shareTargets, { error: "target must be 'run' or 'comparison'" }),
     /** One run for a run report; two or more for a comparison, the baseline first. */
     runIds: z.array(z.number().int().positive()).min(1, 'runIds must name at least one run').max(12, 'at most 12 runs'),
-    title: z.string().trim().min(1, 'title must not be empty').max(200, 'title must be at most 200 characters'),
+    title: z.string().trim().min(1, 'title must not be empty').max(200, 'title must be at most 200 characters').refine(...withoutControlCharacters('title')),
     /** ISO 8601 date-time; absent or null keeps the link for signed-in members of the project only. */
     publicUntil: z.iso.datetime({ offset: true, error: 'publicUntil must be an ISO 8601 date-time, e.g. 2026-03-31T23:59:59Z' }).nullish(),
   })

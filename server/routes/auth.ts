@@ -1,11 +1,11 @@
 import type { Request, Response } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import { eq, lt } from 'drizzle-orm';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordAudit } from '../auth/audit';
 import { EmailTaken, personForIdentity } from '../auth/people';
 import { safeReturnTo } from '../auth/return-to';
+import { perAddressLimit } from '../middleware/rate-limit';
 import {
   cookieOptions,
   defaultSessionPolicy,
@@ -30,15 +30,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
   const clock = deps.clock ?? systemClock;
   const policy = deps.sessionPolicy ?? defaultSessionPolicy;
   const limits = deps.signInRateLimit ?? { limit: 30, windowMs: 5 * 60_000 };
-  const limiter = () =>
-    rateLimit({
-      windowMs: limits.windowMs,
-      limit: limits.limit,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) =>
-        next(new HttpError(429, 'too_many_requests', 'Too many sign-in attempts from this address; wait a few minutes and try again.')),
-    });
+  const limiter = () => perAddressLimit(limits, 'Too many sign-in attempts from this address; wait a few minutes and try again.');
 
   const oidc = () => {
     if (!deps.oidc) throw new HttpError(503, 'sign_in_unavailable', 'Sign-in is not set up on this server (no OIDC provider configured).');

@@ -1,5 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import { z } from 'zod';
+import { withoutControlCharacters } from '../../shared/schemas/plain-text';
 import { ENVELOPE_PRESETS, envelopeSchema } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
@@ -8,8 +9,8 @@ import { envelopes } from '../db/schema';
 import { HttpError } from '../http-error';
 
 const envelopeInput = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120),
-  note: z.string().max(2000).default(''),
+  name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')),
+  note: z.string().max(2000).refine(...withoutControlCharacters('note', { multiLine: true })).default(''),
   limits: envelopeSchema,
 });
 const envelopeParams = z.object({ envelopeId: z.coerce.number().int().positive('envelopeId must be a positive whole number') });

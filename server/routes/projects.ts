@@ -1,5 +1,6 @@
 import { and, asc, eq } from 'drizzle-orm';
 import { z } from 'zod';
+import { withoutControlCharacters } from '../../shared/schemas/plain-text';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
@@ -7,8 +8,8 @@ import { memberships, projects } from '../db/schema';
 import { parsePatch } from '../patch-body';
 
 const projectInput = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters'),
-  description: z.string().trim().max(2000, 'description must be at most 2000 characters').default(''),
+  name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters').refine(...withoutControlCharacters('name')),
+  description: z.string().trim().max(2000, 'description must be at most 2000 characters').refine(...withoutControlCharacters('description', { multiLine: true })).default(''),
 });
 
 export function projectRoutes({ db }: AppDeps): RouteSpec[] {

@@ -8,6 +8,7 @@ import { recordRequestAudit } from '../auth/audit';
 import { systemClock } from '../auth/session';
 import { runs, shareLinks } from '../db/schema';
 import { HttpError } from '../http-error';
+import { perAddressLimit } from '../middleware/rate-limit';
 import { hourlyFileOf } from '../reports/hourly-results';
 import { comparisonQuery, comparisonReport, runReport } from '../reports/load-report';
 import { checkPublicUntil, createShareInput, listLinks, newShareToken, presentLink, resolveShareToken } from '../reports/share-links';
@@ -100,6 +101,8 @@ async function sendDownload(
 export function reportRoutes(deps: AppDeps): RouteSpec[] {
   const { db } = deps;
   const now = () => (deps.clock ?? systemClock)();
+  // One limiter for both share-link routes, so a reader's report and downloads count together.
+  const sharedLimit = perAddressLimit(deps.sharedLinkRateLimit ?? { limit: 120, windowMs: 60_000 }, 'Too many report-link requests from this address; wait a minute and try again.');
 
   /** The report a share link shows, built afresh from the runs it names. */
   function linkedReport(link: typeof shareLinks.$inferSelect): ReportData {
@@ -189,7 +192,7 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
     }),
 
     // Anyone may ask; resolveShareToken decides: public until its date, otherwise the project's members only.
-    route('get', '/shared/:token', access.public, (req, res) => {
+    route('get', '/shared/:token', access.public, sharedLimit, (req, res) => {
       const link = resolveShareToken(db, req, String(req.params.token), now());
       res.json({
         link: { title: link.title, target: link.target, publicUntil: link.publicUntil?.toISOString() ?? null },
@@ -197,7 +200,7 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
       });
     }),
 
-    route('get', '/shared/:token/downloads/:file', access.public, async (req, res) => {
+    route('get', '/shared/:token/downloads/:file', access.public, sharedLimit, async (req, res) => {
       const link = resolveShareToken(db, req, String(req.params.token), now());
       const file = runFile.parse(req.params.file);
       const { run } = sharedRunQuery.parse(req.query);

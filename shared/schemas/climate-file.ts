@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { withoutControlCharacters } from './plain-text';
 import { isKnownTimeZone } from '../climate/local-time';
 
 /** A column named by its 0-based index or its header text. */
@@ -47,7 +48,7 @@ export type TimeBasis = (typeof timeBases)[number];
 
 /** Query of the upload and preview routes (the file itself is the request body). */
 export const climateUploadQuerySchema = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120).optional(),
+  name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')).optional(),
   fileName: z.string().trim().min(1).max(255).default('upload.csv'),
   /**
    * How local timestamps without an offset are read: the site's civil time (with daylight saving),
@@ -72,7 +73,7 @@ export const climateUploadQuerySchema = z.object({
 });
 
 export const siteInputSchema = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120),
+  name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')),
   latitude: z.number().min(-90).max(90).nullable().default(null),
   longitude: z.number().min(-180).max(180).nullable().default(null),
   elevationM: z.number().min(-450, 'elevationM must be at least −450 m').max(6000, 'elevationM must be at most 6000 m').default(0),

@@ -1,5 +1,6 @@
 /** The sweep request: which scenario on which climate file, and one or two inputs with their ranges. */
 import { z } from 'zod';
+import { withoutControlCharacters } from '../schemas/plain-text';
 import { ENVELOPE_PRESETS } from '../scenario/envelopes';
 import { SWEEP_INPUT_PATHS } from './inputs';
 import { MAX_SWEEP_POINTS, rangeCount, sweepPointCount, type SweepAxis } from './expand';
@@ -46,7 +47,7 @@ export const sweepAxisSchema = z
 
 export const sweepSpecSchema = z
   .object({
-    name: z.string().trim().max(200, { error: 'name must be at most 200 characters' }).optional(),
+    name: z.string().trim().max(200, { error: 'name must be at most 200 characters' }).refine(...withoutControlCharacters('name')).optional(),
     scenarioId: z.number({ error: 'scenarioId must be a scenario id' }).int().positive(),
     climateFileId: z.number({ error: 'climateFileId must be a climate file id' }).int().positive(),
     axes: z.array(sweepAxisSchema).min(1, { error: 'axes must hold one input (a line) or two (a grid)' }).max(2, { error: 'axes must hold one input (a line) or two (a grid)' }),
