@@ -6,5 +6,6 @@ import tailwindcss from '@tailwindcss/vite';
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
-  build: { outDir: 'dist', emptyOutDir: true },
+  // The server, worker and command-line bundles go beside it in dist/ (server/build.mjs).
+  build: { outDir: 'dist/client', emptyOutDir: true },
 });

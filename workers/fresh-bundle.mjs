@@ -29,6 +29,25 @@ function writeWhole(file, contents) {
 }
 
 /**
+ * esbuild's options for one bundle of `entry` (a path from the project root) for Node 20: the same for the bundles
+ * built on demand here and for the ones `npm run build` writes to dist/ (server/build.mjs).
+ * @param {{ entry: string, format: 'esm' | 'cjs' }} options
+ */
+export function bundleOptions({ entry, format }) {
+  return {
+    entryPoints: [path.join(projectRoot, entry)],
+    absWorkingDir: projectRoot,
+    bundle: true,
+    platform: 'node',
+    format,
+    target: 'node20',
+    logLevel: 'error',
+    // papaparse is CommonJS; an ESM bundle needs a require to load it.
+    ...(format === 'esm' ? { banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" } } : {}),
+  };
+}
+
+/**
  * The bundle of `entry` (a path from the project root) as `name`.mjs (ESM) or `name`.cjs (CommonJS), built
  * first if it is missing or stale. Returns its absolute path and whether it was just built.
  * @param {{ entry: string, name: string, format: 'esm' | 'cjs' }} options
@@ -41,20 +60,7 @@ export function freshBundle({ entry, name, format }) {
   mkdirSync(cacheDir, { recursive: true });
   // Loaded only to build: a fresh bundle is the common case, and loading esbuild costs more than the check.
   const { buildSync } = createRequire(import.meta.url)('esbuild');
-  const result = buildSync({
-    entryPoints: [path.join(projectRoot, entry)],
-    absWorkingDir: projectRoot,
-    bundle: true,
-    platform: 'node',
-    format,
-    target: 'node20',
-    outfile: file,
-    write: false,
-    metafile: true,
-    logLevel: 'error',
-    // papaparse is CommonJS; an ESM bundle needs a require to load it.
-    ...(format === 'esm' ? { banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" } } : {}),
-  });
+  const result = buildSync({ ...bundleOptions({ entry, format }), outfile: file, write: false, metafile: true });
   writeWhole(file, result.outputFiles[0].contents);
   writeWhole(inputsFile, JSON.stringify(Object.keys(result.metafile.inputs)));
   return { file, rebuilt: true };

@@ -5,6 +5,15 @@ import type * as tasks from './tasks';
 import { freshBundle } from './fresh-bundle.mjs';
 
 type Tasks = typeof tasks;
+
+/** Set to true by esbuild in the production server bundle (server/build.mjs); undefined when run from source. */
+declare const __TRAMONTANE_BUNDLE__: boolean | undefined;
+
+/** The production bundle's threads run dist/workers.mjs, built beside it; from source, a bundle built when stale. */
+function workerBundleUrl(): string {
+  if (typeof __TRAMONTANE_BUNDLE__ !== 'undefined') return new URL('./workers.mjs', import.meta.url).href;
+  return pathToFileURL(freshBundle({ entry: 'workers/dispatch.ts', name: 'workers', format: 'esm' }).file).href;
+}
 export type TaskName = keyof Tasks;
 
 export interface WorkerPool {
@@ -27,9 +36,8 @@ export interface WorkerPool {
  */
 export function createWorkerPool(options: { threads?: number } = {}): WorkerPool {
   const threads = options.threads && options.threads > 0 ? options.threads : availableParallelism();
-  const { file } = freshBundle({ entry: 'workers/dispatch.ts', name: 'workers', format: 'esm' });
   const piscina = new Piscina({
-    filename: pathToFileURL(file).href,
+    filename: workerBundleUrl(),
     minThreads: 1,
     maxThreads: threads,
     idleTimeout: 60_000,
