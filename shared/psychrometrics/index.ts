@@ -14,6 +14,8 @@ export {
 } from './saturation';
 export { rhOverWaterFromRhOverIce, dewPointFromFrostPoint } from './over-ice';
 export { standardPressurePa, standardElevationM } from './atmosphere';
+export { hourlyPressurePa } from './site-pressure';
+export type { HourlyPressure, PressureSeries } from './site-pressure';
 export {
   humidityRatioFromVapourPressure,
   vapourPressureFromHumidityRatio,
