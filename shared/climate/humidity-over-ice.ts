@@ -40,10 +40,10 @@ export function readHumidityOverIce(series: ClimateSeries, log: IssueLog): void 
       converted++;
     }
   }
-  const what = kind === 'relative-humidity-pct' ? 'relative humidity at dry-bulbs at or below 0 °C' : 'dew points at or below 0 °C (frost points)';
+  const what = kind === 'relative-humidity-pct' ? 'relative humidity converted to over liquid water' : 'frost points converted to dew points over liquid water';
   log.info(
     'humidity-over-ice',
-    `Humidity read over ice below 0 °C, as chosen: the ${what} of ${converted.toLocaleString('en')} hours converted to over liquid water, the convention Tramontane computes and reports in (WMO-No. 8).`,
+    `Humidity read over ice below 0 °C, as chosen: ${what} in ${converted.toLocaleString('en')} hours at or below 0 °C. Tramontane computes and reports over liquid water at every temperature (WMO-No. 8).`,
     { value: String(converted) },
   );
 }

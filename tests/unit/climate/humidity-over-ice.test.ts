@@ -55,7 +55,7 @@ describe('relative humidity below 0 °C', () => {
     expect(overIce.result.report.humidityOverIce).toBe(true);
     const note = overIce.result.report.issues.find((issue) => issue.kind === 'humidity-over-ice');
     expect(note).toMatchObject({ severity: 'info', value: '3' });
-    expect(note!.message).toMatch(/3 hours converted to over liquid water/);
+    expect(note!.message).toMatch(/relative humidity converted to over liquid water in 3 hours at or below 0 °C/);
   });
 });
 
