@@ -1,5 +1,4 @@
 import { hourlyJson } from '../shared/report/hourly-json';
-import { standardPressurePa } from '../shared/psychrometrics';
 import { hourlyCsvInput, outdoorStates, parseScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
 
 export interface FormatHourlyInput {
@@ -27,7 +26,7 @@ const encoder = new TextEncoder();
 export function formatHourly({ scenario, series, elevationM, modes, mechanicalFraction, format, about }: FormatHourlyInput): Uint8Array {
   const parsed = parseScenario(scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
-  const { states } = outdoorStates(series, standardPressurePa(elevationM ?? parsed.scenario.elevationM));
+  const { states } = outdoorStates(series, elevationM ?? parsed.scenario.elevationM);
   const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction } });
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];

@@ -12,11 +12,11 @@ export type MorphClimateTaskResult =
 export function morphClimate(input: MorphClimateInput & { keepSeries: boolean }): MorphClimateTaskResult {
   const out = morph(input);
   if (!out.ok) return out;
-  const { utcOffsetMinutes, fallbackPressurePa } = input;
+  const { utcOffsetMinutes, elevationM } = input;
   return {
     ...out,
     series: input.keepSeries ? out.series : null,
-    parentMonthly: monthlyClimate(input.series, utcOffsetMinutes, fallbackPressurePa),
-    projectionMonthly: monthlyClimate(out.series, utcOffsetMinutes, fallbackPressurePa),
+    parentMonthly: monthlyClimate(input.series, utcOffsetMinutes, elevationM),
+    projectionMonthly: monthlyClimate(out.series, utcOffsetMinutes, elevationM),
   };
 }

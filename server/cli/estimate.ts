@@ -28,6 +28,8 @@ Column mapping, when recognition needs help (COL is a header text or a 1-based c
   --delimiter comma|semicolon|tab   --decimal dot|comma
   --time-zone ZONE              IANA zone of timestamps written without offset (default UTC)
   --max-gap-hours N             longest gap filled by interpolation (default 6)
+  --humidity-over-ice           the file gives RH or dew point below 0 °C over ice (default: over liquid
+                                water at every temperature, WMO-No. 8); sub-zero values are converted
 `;
 
 class UsageError extends Error {}
@@ -51,6 +53,7 @@ function main(argv: string[]): number {
       decimal: { type: 'string' },
       'time-zone': { type: 'string' },
       'max-gap-hours': { type: 'string' },
+      'humidity-over-ice': { type: 'boolean' },
       help: { type: 'boolean', short: 'h' },
     },
     strict: true,
@@ -82,6 +85,7 @@ function main(argv: string[]): number {
   if (Object.keys(mapping).length > 0) options.mapping = mapping;
   if (values['time-zone']) options.timeZone = values['time-zone'];
   if (values['max-gap-hours'] !== undefined) options.maxGapHours = numberOption('--max-gap-hours', values['max-gap-hours'], 0, 8784);
+  if (values['humidity-over-ice']) options.humidityOverIce = true;
 
   const imported = importClimateText(readText(values.weather, '--weather'), options);
   if (!imported.ok || !imported.series) {
@@ -116,6 +120,7 @@ function main(argv: string[]): number {
       missingHours: report.counts.missingHours,
       timeLayout: report.timeLayout,
       humidityKind: series.humidity.kind,
+      humidityOverIce: report.humidityOverIce,
     },
   };
   process.stdout.write(`${JSON.stringify(summary, null, 2)}\n`);

@@ -1,7 +1,6 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { standardOffsetMinutes } from '../../shared/climate';
 import { zeroFactors, type ProjectionRequest } from '../../shared/morphing';
-import { standardPressurePa } from '../../shared/psychrometrics';
 import { morphClimate } from '../../workers/morph-climate';
 import { loadClimateSeries } from '../climate/store';
 import type { Db } from '../db/client';
@@ -44,7 +43,7 @@ export function seedDemoProjection(db: Db, projectId: number, createdBy: number 
     factors: { dryBulbMethod: 'shift-and-stretch', humidityMethod: 'stretch', months },
   };
   const utcOffsetMinutes = standardOffsetMinutes(site.timeZone);
-  const morphed = morphClimate({ series, factors: request.factors, utcOffsetMinutes, fallbackPressurePa: standardPressurePa(site.elevationM), keepSeries: true });
+  const morphed = morphClimate({ series, factors: request.factors, utcOffsetMinutes, elevationM: site.elevationM, keepSeries: true });
   if (!morphed.ok) throw new Error(`Demo projection refused: ${morphed.problems.join('; ')}`);
   return db.transaction((tx) => storeProjection(tx, { projectId, parent, request, morphed: { ...morphed, utcOffsetMinutes }, createdBy }).row.id);
 }

@@ -49,7 +49,12 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     }
     const result: ImportResult = await pool.run('importClimate', {
       text,
-      options: { mapping: query.mapping, maxGapHours: query.maxGapHours, timeZone: importTimeZone(query.timeBasis, timeZone) },
+      options: {
+        mapping: query.mapping,
+        maxGapHours: query.maxGapHours,
+        timeZone: importTimeZone(query.timeBasis, timeZone),
+        humidityOverIce: query.humidityOverIce,
+      },
     });
     return { query, bytes, text, result };
   }

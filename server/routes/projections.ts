@@ -9,7 +9,6 @@ import {
   type Derivation,
   type ProjectionRequest,
 } from '../../shared/morphing';
-import { standardPressurePa } from '../../shared/psychrometrics';
 import type { MorphClimateTaskResult } from '../../workers/morph-climate';
 import type { AppDeps } from '../app';
 import type { DbOrTx } from '../db/client';
@@ -55,7 +54,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       series,
       factors,
       utcOffsetMinutes,
-      fallbackPressurePa: standardPressurePa(elevationM),
+      elevationM,
       keepSeries,
     });
     if (!result.ok) {

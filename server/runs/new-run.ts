@@ -1,5 +1,6 @@
 import { ENGINE_VERSION } from '../../shared/scenario';
 import { standardOffsetMinutes } from '../../shared/climate';
+import type { ImportReport } from '../../shared/climate';
 import type { climateFiles, runs, sites } from '../db/schema';
 
 /**
@@ -30,6 +31,8 @@ export function newRunValues(input: {
       site: { id: site.id, name: site.name, elevationM: site.elevationM, timeZone: site.timeZone },
       elevationM: site.elevationM,
       utcOffsetMinutes: standardOffsetMinutes(site.timeZone),
+      // How the file's humidity was read (an import option); shown with the run's inputs.
+      humidityOverIce: (JSON.parse(file.reportJson) as Partial<ImportReport>).humidityOverIce === true,
     }),
     engineVersion: ENGINE_VERSION,
     createdBy: input.createdBy,

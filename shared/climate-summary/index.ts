@@ -1,5 +1,5 @@
 import type { ClimateSeries } from '../climate';
-import { bulkStates, humidityRatioFromDewPoint, standardPressurePa } from '../psychrometrics';
+import { bulkStates, humidityRatioFromDewPoint, hourlyPressurePa } from '../psychrometrics';
 import { designConditions, type DesignConditions } from './design-conditions';
 import { civilFromDays, MS_PER_DAY } from '../calendar';
 import { monthlyStats, type MonthlyStat } from './monthly';
@@ -16,12 +16,8 @@ export interface ClimateSummary {
 
 /** What a climate file holds: coverage per year, monthly statistics and design conditions. */
 export function summariseClimate(series: ClimateSeries, elevationM: number): ClimateSummary {
-  const fallbackPressurePa = standardPressurePa(elevationM);
-  const state = bulkStates({
-    dryBulbC: series.dryBulbC,
-    humidity: series.humidity,
-    pressurePa: series.pressurePa ?? fallbackPressurePa,
-  });
+  const { pressurePa, sitePressurePa: fallbackPressurePa } = hourlyPressurePa(series, elevationM);
+  const state = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
   let pressureSum = 0;
   let pressureN = 0;
   if (series.pressurePa) {

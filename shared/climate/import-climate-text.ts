@@ -22,6 +22,7 @@ import { readRows } from './read-rows';
 import { recogniseColumns } from './recognise-columns';
 import { findLayout, isBlankRow, isCommentRow, spreadSample } from './table-layout';
 import { formatUtc } from './time-cells';
+import { readHumidityOverIce } from './humidity-over-ice';
 import type { ClimateSeries, ImportOptions, ImportReport, ImportResult } from './types';
 
 export { DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-context';
@@ -50,6 +51,7 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
     years,
     maxGapHours: ctx.maxGapHours,
     timeZone: ctx.timeZone,
+    humidityOverIce: ctx.humidityOverIce,
     counts: c,
     issues: ctx.log.issues,
   };
@@ -68,6 +70,7 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
     mapping: emptyMapping(),
     maxGapHours: DEFAULT_MAX_GAP_HOURS,
     timeZone: 'UTC',
+    humidityOverIce: false,
     stepMinutes: null,
     fileOffsetMs: 0,
     hourEnding: false,
@@ -98,6 +101,13 @@ function checkOptions(options: ImportOptions, ctx: Context): boolean {
       return false;
     }
     ctx.timeZone = options.timeZone;
+  }
+  if (options.humidityOverIce !== undefined) {
+    if (typeof options.humidityOverIce !== 'boolean') {
+      log.error('invalid-option', `humidityOverIce must be true or false, not ${String(options.humidityOverIce)}.`, { value: String(options.humidityOverIce) });
+      return false;
+    }
+    ctx.humidityOverIce = options.humidityOverIce;
   }
   return true;
 }
@@ -162,6 +172,8 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
   reportMapping(recognition, layout, ctx);
   buildMapping(parsed, layout, recognition, ctx);
   if (log.hasErrors() || !recognition.time || !recognition.dryBulb || !recognition.humidity) return null;
-  return readRows(parsed, layout, recognition.time, recognition.dryBulb, recognition.humidity, recognition.pressure, ctx, dataRows);
+  const series = readRows(parsed, layout, recognition.time, recognition.dryBulb, recognition.humidity, recognition.pressure, ctx, dataRows);
+  if (series && ctx.humidityOverIce) readHumidityOverIce(series, log);
+  return series;
 }
 

@@ -54,6 +54,8 @@ export interface Context {
   mapping: DetectedMapping;
   maxGapHours: number;
   timeZone: string;
+  /** The humidityOverIce option as given (default false). */
+  humidityOverIce: boolean;
   stepMinutes: number | null;
   /** Local minus UTC of the first row read, ms: the file's own clock for the years covered. */
   fileOffsetMs: number;

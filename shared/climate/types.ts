@@ -105,6 +105,12 @@ export interface ImportOptions {
    * or a fixed offset such as 'UTC-07:00' for files in local standard time. Default 'UTC'.
    */
   timeZone?: string;
+  /**
+   * The file gives relative humidity (or dew point) below 0 °C with respect to ice. Default false: over liquid
+   * water at every temperature, the meteorological convention (WMO-No. 8). When true, sub-zero values are
+   * converted to over water at import, and the report records it.
+   */
+  humidityOverIce?: boolean;
 }
 
 export type IssueKind =
@@ -141,7 +147,8 @@ export type IssueKind =
   | 'span-too-long'
   | 'too-many-rejected'
   | 'too-little-data'
-  | 'invalid-option';
+  | 'invalid-option'
+  | 'humidity-over-ice';
 
 export type IssueSeverity = 'error' | 'warning' | 'info';
 
@@ -201,6 +208,11 @@ export interface ImportReport {
   years: number[];
   maxGapHours: number;
   timeZone: string;
+  /**
+   * True when the file was read with humidity over ice below 0 °C (the import option) and its sub-zero values
+   * converted to over liquid water; false for the default reading. Absent in reports stored before the option.
+   */
+  humidityOverIce: boolean;
   counts: ImportCounts;
   issues: ImportIssue[];
 }
@@ -209,7 +221,7 @@ export interface ClimateSeries {
   /** UTC epoch ms, one per hour, strictly hourly and increasing (missing hours present with NaN values). */
   timestampsMs: Float64Array;
   dryBulbC: Float64Array;
-  /** SI: %, °C or kg/kg according to kind. */
+  /** SI: %, °C or kg/kg according to kind; RH and dew point over liquid water at every temperature. */
   humidity: { kind: HumidityKind; values: Float64Array };
   /** null when the file has no pressure. */
   pressurePa: Float64Array | null;

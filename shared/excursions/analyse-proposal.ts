@@ -3,7 +3,7 @@
  * the excursion totals (excursion-count.ts) against a recommended range and an allowable class.
  * Pure and synchronous: the worker task and the tests call the same function.
  */
-import { bulkStates, standardPressurePa } from '../psychrometrics';
+import { bulkStates, hourlyPressurePa } from '../psychrometrics';
 import { MODE } from '../scenario/classify';
 import { deratedDryBulbMaxC, type EnvelopeLimits } from '../scenario/envelopes';
 import type { ScenarioSeries } from '../scenario/run';
@@ -49,7 +49,7 @@ export interface ExcursionAnalysis extends ExcursionCounts {
 export function analyseProposal(scenario: Scenario, series: ScenarioSeries, elevationM: number, proposal: Proposal): ExcursionAnalysis {
   const n = series.dryBulbC.length;
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
-  const pressurePa = filledPressure(series.pressurePa, standardPressurePa(elevationM));
+  const { pressurePa } = hourlyPressurePa(series, elevationM);
   const states = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
 
   const derate = (e: EnvelopeLimits): EnvelopeBounds => ({
@@ -107,12 +107,4 @@ export function analyseProposal(scenario: Scenario, series: ScenarioSeries, elev
     allowableEventsPerYear: yearsOfData > 0 ? counts.allowableEvents.count / yearsOfData : null,
     yearsOfData,
   };
-}
-
-/** Station pressure where the series has it, the standard atmosphere at the site where it has none or a hole (as a run does). */
-function filledPressure(series: Float64Array | null, sitePressurePa: number): Float64Array | number {
-  if (!series) return sitePressurePa;
-  const filled = new Float64Array(series.length);
-  for (let i = 0; i < series.length; i++) filled[i] = series[i] === series[i] ? series[i] : sitePressurePa;
-  return filled;
 }

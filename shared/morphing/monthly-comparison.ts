@@ -1,6 +1,6 @@
 import type { ClimateSeries } from '../climate';
 import { monthlyStats } from '../climate-summary/monthly';
-import { bulkStates } from '../psychrometrics';
+import { bulkStates, hourlyPressurePa } from '../psychrometrics';
 import { localCalendar } from './local-days';
 import { monthlyDayStatistics } from './monthly-day-statistics';
 
@@ -30,9 +30,9 @@ const rows = (stats: ReturnType<typeof monthlyStats>): MonthRow[] =>
  * means of daily extremes of dry-bulb: what the projection page sets side by side for parent and projection.
  * Dew point and W from the engine's bulk states (ASHRAE Handbook—Fundamentals 2017 ch. 1); q = W/(1+W), eq. 9b.
  */
-export function monthlyClimate(series: ClimateSeries, utcOffsetMinutes: number, fallbackPressurePa: number): MonthlyClimate {
+export function monthlyClimate(series: ClimateSeries, utcOffsetMinutes: number, elevationM: number): MonthlyClimate {
   const offsetMs = utcOffsetMinutes * 60_000;
-  const state = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa: series.pressurePa ?? fallbackPressurePa });
+  const state = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa: hourlyPressurePa(series, elevationM).pressurePa });
   const q = state.humidityRatio;
   for (let i = 0; i < q.length; i++) q[i] = (1000 * q[i]) / (1 + q[i]);
   const days = monthlyDayStatistics(series.dryBulbC, localCalendar(series.timestampsMs, utcOffsetMinutes));

@@ -1,4 +1,5 @@
 import type { ClimateSeries } from '../climate';
+import { hourlyPressurePa } from '../psychrometrics';
 import { HOUR_FLAG } from '../climate/types';
 import { MONTH_NAMES, type ChangeFactors } from './factors';
 import { rhPctFromSpecificHumidity, specificHumidityOfHours } from './humidity';
@@ -11,8 +12,8 @@ export interface MorphClimateInput {
   factors: ChangeFactors;
   /** The site's standard-time offset, minutes: days and months are the site's. */
   utcOffsetMinutes: number;
-  /** Pressure, Pa, for a file without a pressure column (the site's standard atmosphere). */
-  fallbackPressurePa: number;
+  /** The site's elevation, m: the standard atmosphere there fills missing station pressure (hourlyPressurePa). */
+  elevationM: number;
 }
 
 export interface MorphedClimate {
@@ -43,7 +44,7 @@ const orNull = (a: Float64Array) => Array.from(a, (v) => (v === v ? v : null));
  * Refuses (ok: false, naming the month) factors whose ΔTmax − ΔTmin would invert a month's mean daily range.
  */
 export function morphClimate(input: MorphClimateInput): MorphOutcome {
-  const { series, factors, utcOffsetMinutes, fallbackPressurePa } = input;
+  const { series, factors, utcOffsetMinutes, elevationM } = input;
   const n = series.timestampsMs.length;
   const calendar = localCalendar(series.timestampsMs, utcOffsetMinutes);
   const stats = monthlyDayStatistics(series.dryBulbC, calendar);
@@ -70,7 +71,7 @@ export function morphClimate(input: MorphClimateInput): MorphOutcome {
     shiftByMonth(series.dryBulbC, calendar.monthOfHour, pick((m) => m.deltaMeanK), dryBulbC);
   }
 
-  const pressurePa = series.pressurePa ?? fallbackPressurePa;
+  const { pressurePa } = hourlyPressurePa(series, elevationM);
   const q = specificHumidityOfHours({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
   if (factors.humidityMethod === 'stretch') stretchByMonth(q, calendar.monthOfHour, pick((m) => 1 + m.humidityChangePct / 100), q);
   else shiftByMonth(q, calendar.monthOfHour, pick((m) => m.humidityShiftGPerKg / 1000), q);

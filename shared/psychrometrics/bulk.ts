@@ -1,10 +1,11 @@
 /**
  * Bulk moist-air states for whole hourly series: Float64Array in, Float64Array out, one pass, no
  * object per hour. An hour whose inputs are missing (NaN) or invalid (out of range, supersaturated)
- * gets NaN in every output; the loop never throws. Same equations as the scalar API.
+ * gets NaN in every output; the loop never throws. Same equations as the scalar API: relative humidity
+ * and dew point over liquid water at every temperature, in and out (WMO-No. 8; see saturation.ts).
  */
 import { CP_DRY_AIR, CP_VAPOUR, LATENT_HEAT_0C, MOLAR_MASS_RATIO } from './constants';
-import { lnSaturationPressure, temperatureAtLnSaturation } from './saturation';
+import { dewPointAtLnPressure, frostOrDewPointAtLnPressure, LN_TRIPLE_POINT_PRESSURE, lnSaturationPressure } from './saturation';
 import { DRY_AIR_SLACK, humidityRatioFromWetBulbUnchecked, wetBulbUnchecked } from './wet-bulb';
 import { isPressureOk, isTemperatureOk, requirePressurePa, SATURATION_SLACK } from './validate';
 
@@ -72,16 +73,18 @@ export function bulkStates(input: BulkStateInput): BulkState {
       const lnPws = lnSaturationPressure(t);
       const pws = Math.exp(lnPws);
       let pw = Number.NaN;
+      let lnPw = Number.NaN;
       if (kindCode === 0) {
         if (v >= 0 && v <= 100) {
           rh = v;
           pw = (v / 100) * pws;
-          if (pw > 0) dew = temperatureAtLnSaturation(Math.log(v / 100) + lnPws);
+          if (pw > 0) lnPw = Math.log(v / 100) + lnPws;
         }
       } else if (kindCode === 1) {
         if (v <= t && isTemperatureOk(v)) {
           dew = v;
-          pw = Math.exp(lnSaturationPressure(v));
+          lnPw = lnSaturationPressure(v);
+          pw = Math.exp(lnPw);
         }
       } else if (kindCode === 2) {
         if (v <= t && isTemperatureOk(v)) {
@@ -90,23 +93,26 @@ export function bulkStates(input: BulkStateInput): BulkState {
             wb = v;
             w = wFromWb > 0 ? wFromWb : 0;
             pw = (p * w) / (MOLAR_MASS_RATIO + w);
-            if (pw > 0) dew = temperatureAtLnSaturation(Math.log(pw));
           }
         }
       } else if (v >= 0) {
         pw = (p * v) / (MOLAR_MASS_RATIO + v);
-        if (pw <= pws * SATURATION_OK) {
-          w = v;
-          if (pw > 0) dew = temperatureAtLnSaturation(Math.log(pw));
-        } else {
-          pw = Number.NaN;
-        }
+        if (pw <= pws * SATURATION_OK) w = v;
+        else pw = Number.NaN;
       }
       if (pw >= 0 && pw < p) {
         if (w !== w) w = (MOLAR_MASS_RATIO * pw) / (p - pw);
         if (rh !== rh) rh = Math.min((100 * pw) / pws, 100);
-        if (dew > t) dew = t;
-        if (wb !== wb) wb = wetBulbUnchecked(t, w, p, dew);
+        if (pw > 0) {
+          if (lnPw !== lnPw) lnPw = Math.log(pw);
+          if (dew !== dew) dew = dewPointAtLnPressure(lnPw);
+          if (dew > t) dew = t;
+          // The wet-bulb solver starts from the saturation temperature on ASHRAE's switch: below the
+          // triple point that is the frost point, not the dew point over water.
+          if (wb !== wb) wb = wetBulbUnchecked(t, w, p, lnPw > LN_TRIPLE_POINT_PRESSURE ? dew : frostOrDewPointAtLnPressure(lnPw));
+        } else if (wb !== wb) {
+          wb = wetBulbUnchecked(t, w, p, Number.NaN);
+        }
       } else {
         w = Number.NaN;
         dew = Number.NaN;

@@ -1,9 +1,21 @@
 /**
  * The psychrometric engine: moist-air properties by the equations of ASHRAE Handbook—Fundamentals
- * (2017) ch. 1, SI throughout (°C, Pa, kg/kg, kJ/kg dry air). The equations and their sources: README.md, "How it works".
+ * (2017) ch. 1, SI throughout (°C, Pa, kg/kg, kJ/kg dry air). Relative humidity, dew point and
+ * saturation are over liquid water at every temperature (WMO-No. 8); ice only in the wet-bulb
+ * equation's ice branch and the frost point (saturation.ts). The equations and their sources:
+ * README.md, "How it works".
  */
-export { saturationPressurePa, dewPointFromVapourPressure, boilingPointC } from './saturation';
+export {
+  saturationPressurePa,
+  saturationPressureOverIcePa,
+  dewPointFromVapourPressure,
+  frostPointFromVapourPressure,
+  boilingPointC,
+} from './saturation';
+export { rhOverWaterFromRhOverIce, dewPointFromFrostPoint } from './over-ice';
 export { standardPressurePa, standardElevationM } from './atmosphere';
+export { hourlyPressurePa } from './site-pressure';
+export type { HourlyPressure, PressureSeries } from './site-pressure';
 export {
   humidityRatioFromVapourPressure,
   vapourPressureFromHumidityRatio,
@@ -12,6 +24,7 @@ export {
   rhPctFromHumidityRatio,
   humidityRatioFromDewPoint,
   dewPointFromHumidityRatio,
+  frostPointFromHumidityRatio,
   degreeOfSaturation,
   specificHumidity,
 } from './moisture';

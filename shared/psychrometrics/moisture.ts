@@ -1,10 +1,12 @@
 /**
- * Moisture content of moist air: humidity ratio, vapour pressure, relative humidity, dew point,
- * degree of saturation and specific humidity, at a given barometric pressure.
+ * Moisture content of moist air: humidity ratio, vapour pressure, relative humidity, dew point, frost
+ * point, degree of saturation and specific humidity, at a given barometric pressure.
+ * Relative humidity, dew point and saturation are over liquid water at every temperature (WMO-No. 8
+ * part I ch. 4; see saturation.ts); the frost point is over ice.
  * Source of every relation: ASHRAE Handbook—Fundamentals (2017) ch. 1 (equations cited per function).
  */
 import { MOLAR_MASS_RATIO } from './constants';
-import { lnSaturationPressure, temperatureAtLnSaturation } from './saturation';
+import { dewPointAtLnPressure, frostPointFromVapourPressure, lnSaturationPressure } from './saturation';
 import {
   requireHumidityRatio,
   requirePressurePa,
@@ -50,9 +52,10 @@ export function vapourPressureFromHumidityRatio(humidityRatio: number, pressureP
 }
 
 /**
- * Humidity ratio of saturated air, kg/kg, at tC and pressurePa.
+ * Humidity ratio of air saturated over liquid water (supercooled below 0 °C), kg/kg, at tC and pressurePa:
+ * the W at which relative humidity is 100 %.
  * @param tC dry-bulb temperature, °C, −100…200 and below the boiling point at pressurePa
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 23 with pws from eq. 5/6.
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 23 with pws from eq. 6.
  */
 export function saturationHumidityRatio(tC: number, pressurePa: number): number {
   requireTemperatureC('tC', tC);
@@ -65,7 +68,7 @@ export function saturationHumidityRatio(tC: number, pressurePa: number): number 
 }
 
 /**
- * Humidity ratio, kg/kg, from dry-bulb and relative humidity: pw = φ · pws(t), then eq. 20.
+ * Humidity ratio, kg/kg, from dry-bulb and relative humidity over liquid water: pw = φ · pws(t), then eq. 20.
  * @param tC dry-bulb, °C, −100…200
  * @param rhPct relative humidity, %, 0…100
  * @param pressurePa barometric pressure, Pa, 10…120 kPa
@@ -83,7 +86,7 @@ export function humidityRatioFromRh(tC: number, rhPct: number, pressurePa: numbe
 }
 
 /**
- * Relative humidity, %, of air at dry-bulb tC holding humidityRatio kg/kg at pressurePa.
+ * Relative humidity over liquid water, %, of air at dry-bulb tC holding humidityRatio kg/kg at pressurePa.
  * Throws a RangeError saying "supersaturated" when the vapour pressure exceeds saturation.
  * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 22 and 20.
  */
@@ -99,8 +102,8 @@ export function rhPctFromHumidityRatio(tC: number, humidityRatio: number, pressu
 }
 
 /**
- * Humidity ratio, kg/kg, of air whose dew point (frost point below 0.01 °C) is dewPointC.
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 36 (pw = pws(td)) and eq. 20.
+ * Humidity ratio, kg/kg, of air whose dew point over liquid water is dewPointC (also below 0 °C).
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 36 (pw = pws(td), eq. 6) and eq. 20.
  */
 export function humidityRatioFromDewPoint(dewPointC: number, pressurePa: number): number {
   requireTemperatureC('dewPointC', dewPointC);
@@ -113,19 +116,33 @@ export function humidityRatioFromDewPoint(dewPointC: number, pressurePa: number)
 }
 
 /**
- * Dew point (frost point below 0.01 °C), °C, of air holding humidityRatio kg/kg at pressurePa.
+ * Dew point over liquid water (also below 0 °C), °C, of air holding humidityRatio kg/kg at pressurePa.
  * @param humidityRatio kg/kg, > 0 (dry air has no dew point)
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 20 and 36, eq. 5/6 inverted by Newton's method.
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 20 and 36, eq. 6 inverted by Newton's method.
  */
 export function dewPointFromHumidityRatio(humidityRatio: number, pressurePa: number): number {
   requireHumidityRatio('humidityRatio', humidityRatio);
   requirePressurePa('pressurePa', pressurePa);
   const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
-  const t = pw > 0 ? temperatureAtLnSaturation(Math.log(pw)) : Number.NaN;
+  const t = pw > 0 ? dewPointAtLnPressure(Math.log(pw)) : Number.NaN;
   if (Number.isNaN(t)) {
     throw new RangeError(`humidityRatio = ${humidityRatio} kg/kg has no dew point within −100…200 °C at ${pressurePa} Pa`);
   }
   return t;
+}
+
+/**
+ * Frost point, °C, of air holding humidityRatio kg/kg at pressurePa: where it saturates over ice. A
+ * quantity of its own, not a dew point; NaN when the vapour pressure is at or above the triple point's
+ * (611.66 Pa), since such air reaches its dew point, above 0 °C, first.
+ * @param humidityRatio kg/kg, > 0
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 20, eq. 5 inverted by Newton's method.
+ */
+export function frostPointFromHumidityRatio(humidityRatio: number, pressurePa: number): number {
+  requireHumidityRatio('humidityRatio', humidityRatio);
+  requirePressurePa('pressurePa', pressurePa);
+  if (!(humidityRatio > 0)) throw new RangeError(`humidityRatio = ${humidityRatio} kg/kg: dry air has no frost point`);
+  return frostPointFromVapourPressure(vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa));
 }
 
 /**

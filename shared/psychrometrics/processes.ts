@@ -13,7 +13,7 @@ import {
   saturationHumidityRatio,
   vapourPressureFromHumidityRatio,
 } from './moisture';
-import { temperatureAtLnSaturation } from './saturation';
+import { dewPointAtLnPressure } from './saturation';
 import { humidityRatioFromWetBulb, wetBulbFromHumidityRatio } from './wet-bulb';
 import {
   requireHumidityRatio,
@@ -149,8 +149,9 @@ export function coolAndDehumidify(entering: AirPoint, leavingDryBulbC: number, p
 }
 
 /**
- * Humidity ratio, kg/kg, at which air meets a dew-point limit (the same at every dry-bulb).
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 36 and 20.
+ * Humidity ratio, kg/kg, at which air meets a dew-point limit (the same at every dry-bulb). The limit is
+ * read over liquid water also below 0 °C, as envelopes and weather data state dew points (WMO-No. 8).
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 36 (with eq. 6) and 20.
  */
 export function humidityRatioAtDewPointLimit(dewPointLimitC: number, pressurePa: number): number {
   return humidityRatioFromDewPoint(dewPointLimitC, pressurePa);
@@ -167,13 +168,13 @@ export function humidityRatioAtRhLimit(tC: number, rhLimitPct: number, pressureP
 /**
  * Dry-bulb, °C, at which air holding humidityRatio reaches rhLimitPct: below it the RH is higher.
  * Useful for "how far may this air be cooled before it breaks the RH limit".
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 22 with eq. 5/6 inverted by Newton's method.
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 22 with eq. 6 (RH over liquid water) inverted by Newton's method.
  */
 export function dryBulbAtRhLimit(humidityRatio: number, rhLimitPct: number, pressurePa: number): number {
   requireHumidityRatio('humidityRatio', humidityRatio);
   requireInRange('rhLimitPct', rhLimitPct, Number.MIN_VALUE, 100, '%');
   const pw = vapourPressureFromHumidityRatio(humidityRatio, pressurePa);
-  const t = pw > 0 ? temperatureAtLnSaturation(Math.log(pw / (rhLimitPct / 100))) : Number.NaN;
+  const t = pw > 0 ? dewPointAtLnPressure(Math.log(pw / (rhLimitPct / 100))) : Number.NaN;
   if (Number.isNaN(t)) throw new RangeError(`humidityRatio = ${humidityRatio} kg/kg reaches rhLimitPct = ${rhLimitPct} % outside −100…200 °C`);
   return t;
 }

@@ -1,11 +1,20 @@
 /**
  * Saturation vapour pressure of water by the Hyland–Wexler equations as given in ASHRAE Handbook—
- * Fundamentals (2017) ch. 1 eq. 5 (over ice) and eq. 6 (over liquid water), valid −100…200 °C;
- * its inverse (dew point above the triple point, frost point below) and the boiling point.
- * Ice is used at and below the triple point (0.01 °C), as psychrolib does.
+ * Fundamentals (2017) ch. 1: eq. 6 over liquid water and eq. 5 over ice; their inverses and the boiling point.
+ *
+ * Two conventions live here, each where it belongs:
+ * - **Over liquid water at every temperature** (the engine's default): relative humidity and dew point as
+ *   weather data give them (WMO-No. 8, *Guide to Instruments and Methods of Observation*, part I ch. 4:
+ *   humidity is reported with respect to water, also below 0 °C). Below 0 °C this is saturation over
+ *   supercooled water: eq. 6 extended below its stated range (0…200 °C). The extension is an
+ *   extrapolation, as WMO-No. 8 notes of its own formulas for supercooled water; it stays within a few
+ *   0.5 % of the WMO-No. 8 (Magnus-type) formula over water down to −40 °C (tested).
+ * - **ASHRAE's switch** — ice at and below the triple point (0.01 °C), water above, as psychrolib does —
+ *   kept for the formulas that need ice: the wet-bulb equation's ice branch (eq. 35 takes Ws* over ice
+ *   at t* < 0 °C, wet-bulb.ts) and the frost point.
  */
 import { KELVIN_OFFSET, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, TRIPLE_POINT_C } from './constants';
-import { requirePressurePa, requireTemperatureC, requireFinite } from './validate';
+import { requireFinite, requireInRange, requirePressurePa, requireTemperatureC } from './validate';
 
 // ASHRAE 2017 ch. 1 eq. 5 (ice), coefficients C1…C7.
 const I1 = -5.6745359e3;
@@ -43,69 +52,66 @@ export function dLnSaturationOverWater(tK: number): number {
   return -W8 / (tK * tK) + W10 + tK * (2 * W11 + tK * 3 * W12) + W13 / tK;
 }
 
-/** d²(ln pws)/dT² at tC, 1/K², on the same branch as {@link lnSaturationPressure} (second derivative of eq. 5/6). No checks. */
+/** d²(ln pws)/dT² over liquid water at tC, 1/K² (second derivative of eq. 6). No checks. */
 export function d2LnSaturationPressure(tC: number): number {
-  const tK = tC + KELVIN_OFFSET;
-  const invT = 1 / tK;
-  return tC <= TRIPLE_POINT_C
-    ? 2 * I1 * invT * invT * invT + 2 * I4 + tK * (6 * I5 + tK * 12 * I6) - I7 * invT * invT
-    : 2 * W8 * invT * invT * invT + 2 * W11 + 6 * W12 * tK - W13 * invT * invT;
+  const invT = 1 / (tC + KELVIN_OFFSET);
+  return 2 * W8 * invT * invT * invT + 2 * W11 + 6 * W12 * (tC + KELVIN_OFFSET) - W13 * invT * invT;
 }
 
-/** ln pws(tC) in Pa, ice at and below the triple point. No checks. */
+/** ln pws(tC) in Pa over liquid water at every temperature (eq. 6, extrapolated below 0 °C). No checks. */
 export function lnSaturationPressure(tC: number): number {
+  return lnSaturationOverWater(tC + KELVIN_OFFSET);
+}
+
+/** d(ln pws)/dT over liquid water at tC, 1/K. No checks. */
+export function dLnSaturationPressure(tC: number): number {
+  return dLnSaturationOverWater(tC + KELVIN_OFFSET);
+}
+
+/**
+ * ln pws(tC) in Pa on ASHRAE's switch: over ice at and below the triple point, over liquid water above.
+ * For the wet-bulb equation (eq. 33/35) and the frost point only. No checks.
+ */
+export function lnSaturationIceOrWater(tC: number): number {
   const tK = tC + KELVIN_OFFSET;
   return tC <= TRIPLE_POINT_C ? lnSaturationOverIce(tK) : lnSaturationOverWater(tK);
 }
 
-/** d(ln pws)/dT at tC, 1/K, on the same branch as {@link lnSaturationPressure}. No checks. */
-export function dLnSaturationPressure(tC: number): number {
+/** d(ln pws)/dT at tC, 1/K, on the same branch as {@link lnSaturationIceOrWater}. No checks. */
+export function dLnSaturationIceOrWater(tC: number): number {
   const tK = tC + KELVIN_OFFSET;
   return tC <= TRIPLE_POINT_C ? dLnSaturationOverIce(tK) : dLnSaturationOverWater(tK);
 }
 
-// The Newton loops need ln pws and its slope at the same point: one division and one logarithm serve
-// both. The slope goes into this one-slot register rather than an object, so the loops allocate nothing
-// (each worker has its own module instance, and JavaScript runs one call at a time within it).
-const slopeRegister = new Float64Array(1);
-
-/** ln pws over ice (eq. 5), T in kelvin; its slope d ln pws/dT is left for {@link lastSaturationSlope}. */
-export function lnSaturationOverIceWithSlope(tK: number): number {
-  const invT = 1 / tK;
-  slopeRegister[0] = -I1 * invT * invT + I3 + tK * (2 * I4 + tK * (3 * I5 + tK * 4 * I6)) + I7 * invT;
-  return I1 * invT + I2 + tK * (I3 + tK * (I4 + tK * (I5 + tK * I6))) + I7 * Math.log(tK);
-}
-
-/** ln pws over liquid water (eq. 6), T in kelvin; its slope is left for {@link lastSaturationSlope}. */
-export function lnSaturationOverWaterWithSlope(tK: number): number {
-  const invT = 1 / tK;
-  slopeRegister[0] = -W8 * invT * invT + W10 + tK * (2 * W11 + tK * 3 * W12) + W13 * invT;
-  return W8 * invT + W9 + tK * (W10 + tK * (W11 + tK * W12)) + W13 * Math.log(tK);
-}
-
-/** ln pws(tC), ice at and below the triple point; its slope is left for {@link lastSaturationSlope}. */
-export function lnSaturationWithSlope(tC: number): number {
+/** d²(ln pws)/dT² at tC, 1/K², on the same branch as {@link lnSaturationIceOrWater} (second derivative of eq. 5/6). No checks. */
+export function d2LnSaturationIceOrWater(tC: number): number {
+  if (tC > TRIPLE_POINT_C) return d2LnSaturationPressure(tC);
   const tK = tC + KELVIN_OFFSET;
-  return tC <= TRIPLE_POINT_C ? lnSaturationOverIceWithSlope(tK) : lnSaturationOverWaterWithSlope(tK);
-}
-
-/** d ln pws/dT, 1/K, at the point of the last *WithSlope call. */
-export function lastSaturationSlope(): number {
-  return slopeRegister[0];
+  const invT = 1 / tK;
+  return 2 * I1 * invT * invT * invT + 2 * I4 + tK * (6 * I5 + tK * 12 * I6) - I7 * invT * invT;
 }
 
 /**
- * Saturation vapour pressure of water, Pa, over ice at and below 0.01 °C and over liquid water above.
- * @param tC temperature, °C, −100…200
- * Source: Hyland–Wexler, ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 5 and 6.
+ * Saturation vapour pressure over liquid water, Pa, at every temperature: over supercooled water below
+ * 0 °C. This is the pressure relative humidity and dew point refer to (WMO-No. 8 part I ch. 4).
+ * @param tC temperature, °C, −100…200 (below 0 °C eq. 6 is extrapolated beyond its stated range)
+ * Source: Hyland–Wexler, ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 6.
  */
 export function saturationPressurePa(tC: number): number {
   requireTemperatureC('tC', tC);
   return Math.exp(lnSaturationPressure(tC));
 }
 
-/** ln pws at the triple point on the water branch: the boundary that picks the branch of the inverse. */
-const LN_TRIPLE_POINT_WATER = lnSaturationOverWater(TRIPLE_POINT_C + KELVIN_OFFSET);
+/**
+ * Saturation vapour pressure over ice, Pa: what frost forms against.
+ * @param tC temperature, °C, −100…0.01 (ice does not exist in equilibrium above the triple point)
+ * Source: Hyland–Wexler, ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 5.
+ */
+export function saturationPressureOverIcePa(tC: number): number {
+  requireInRange('tC', tC, MIN_TEMPERATURE_C, TRIPLE_POINT_C, '°C');
+  return Math.exp(lnSaturationOverIce(tC + KELVIN_OFFSET));
+}
+
 const LN_611_2 = Math.log(611.2);
 /**
  * Newton converges quadratically on ln pws: after a step s the error is about c·s² with
@@ -113,31 +119,30 @@ const LN_611_2 = Math.log(611.2);
  * (a hundredth of psychrolib's own 0.001 K tolerance, five hundred times inside the 0.005 K goal).
  */
 const STOP_STEP_K = 0.03;
-const LN_PWS_MIN = lnSaturationOverIce(MIN_TEMPERATURE_C + KELVIN_OFFSET);
+const LN_PWS_ICE_MIN = lnSaturationOverIce(MIN_TEMPERATURE_C + KELVIN_OFFSET);
+const LN_PWS_WATER_MIN = lnSaturationOverWater(MIN_TEMPERATURE_C + KELVIN_OFFSET);
 const LN_PWS_MAX = lnSaturationOverWater(MAX_TEMPERATURE_C + KELVIN_OFFSET);
+/** ln pws at the triple point on the water branch: below it, a frost point exists. */
+export const LN_TRIPLE_POINT_PRESSURE = lnSaturationOverWater(TRIPLE_POINT_C + KELVIN_OFFSET);
 
-/**
- * Temperature (°C) at which saturation pressure equals exp(lnPw): the dew point above the triple
- * point, the frost point below. First guess from a Magnus-type formula (Alduchov & Eskridge 1996
- * coefficients), then Newton steps on the exact Hyland–Wexler ln pws. The branch is chosen once from
- * the pressure, so Newton never hops between the ice and water equations. No range checks; returns
- * NaN when lnPw is NaN or outside the −100…200 °C saturation range.
- */
-export function temperatureAtLnSaturation(lnPw: number): number {
-  if (!(lnPw >= LN_PWS_MIN && lnPw <= LN_PWS_MAX)) return Number.NaN;
+/** Newton on ln pws over water from the Magnus-type guess (WMO-No. 8 coefficients 17.62, 243.12 °C). */
+function solveOverWater(lnPw: number): number {
   const a = lnPw - LN_611_2;
-  if (lnPw > LN_TRIPLE_POINT_WATER) {
-    let tK = (243.12 * a) / (17.62 - a) + KELVIN_OFFSET;
-    for (let i = 0; i < 12; i++) {
-      const step = (lnSaturationOverWaterWithSlope(tK) - lnPw) / slopeRegister[0];
-      tK -= step;
-      if (Math.abs(step) < STOP_STEP_K) break;
-    }
-    return tK - KELVIN_OFFSET;
+  let tK = (243.12 * a) / (17.62 - a) + KELVIN_OFFSET;
+  for (let i = 0; i < 12; i++) {
+    const step = (lnSaturationOverWater(tK) - lnPw) / dLnSaturationOverWater(tK);
+    tK -= step;
+    if (Math.abs(step) < STOP_STEP_K) break;
   }
+  return tK - KELVIN_OFFSET;
+}
+
+/** Newton on ln pws over ice from the Magnus-type guess over ice (22.46, 272.62 °C). */
+function solveOverIce(lnPw: number): number {
+  const a = lnPw - LN_611_2;
   let tK = (272.62 * a) / (22.46 - a) + KELVIN_OFFSET;
   for (let i = 0; i < 12; i++) {
-    const step = (lnSaturationOverIceWithSlope(tK) - lnPw) / slopeRegister[0];
+    const step = (lnSaturationOverIce(tK) - lnPw) / dLnSaturationOverIce(tK);
     tK -= step;
     if (Math.abs(step) < STOP_STEP_K) break;
   }
@@ -145,20 +150,57 @@ export function temperatureAtLnSaturation(lnPw: number): number {
 }
 
 /**
- * Dew point (frost point below 0.01 °C), °C, at which water vapour of partial pressure
- * vapourPressurePa would saturate: the inverse of {@link saturationPressurePa}.
- * @param vapourPressurePa partial pressure of water vapour, Pa, between pws(−100 °C) and pws(200 °C)
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 5 and 6 inverted by Newton's method.
+ * Dew point over liquid water, °C: the temperature at which pws over water (eq. 6, extrapolated below
+ * 0 °C) equals exp(lnPw). First guess from a Magnus-type formula (the WMO-No. 8 coefficients over water),
+ * then Newton steps on the exact equation. No range checks; NaN when lnPw is NaN or outside −100…200 °C.
+ */
+export function dewPointAtLnPressure(lnPw: number): number {
+  if (!(lnPw >= LN_PWS_WATER_MIN && lnPw <= LN_PWS_MAX)) return Number.NaN;
+  return solveOverWater(lnPw);
+}
+
+/**
+ * Temperature (°C) at which saturation pressure on ASHRAE's switch equals exp(lnPw): the dew point above
+ * the triple point, the frost point below. What the wet-bulb solver starts from. The branch is chosen once
+ * from the pressure, so Newton never hops between the ice and water equations. No range checks; NaN when
+ * lnPw is NaN or outside the −100…200 °C saturation range.
+ */
+export function frostOrDewPointAtLnPressure(lnPw: number): number {
+  if (!(lnPw >= LN_PWS_ICE_MIN && lnPw <= LN_PWS_MAX)) return Number.NaN;
+  return lnPw > LN_TRIPLE_POINT_PRESSURE ? solveOverWater(lnPw) : solveOverIce(lnPw);
+}
+
+/**
+ * Dew point over liquid water, °C, at which water vapour of partial pressure vapourPressurePa would
+ * saturate (over supercooled water below 0 °C): the inverse of {@link saturationPressurePa}.
+ * @param vapourPressurePa partial pressure of water vapour, Pa, between pws(−100 °C) and pws(200 °C) over water
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 6 inverted by Newton's method.
  */
 export function dewPointFromVapourPressure(vapourPressurePa: number): number {
   requireFinite('vapourPressurePa', vapourPressurePa);
-  const t = vapourPressurePa > 0 ? temperatureAtLnSaturation(Math.log(vapourPressurePa)) : Number.NaN;
+  const t = vapourPressurePa > 0 ? dewPointAtLnPressure(Math.log(vapourPressurePa)) : Number.NaN;
   if (Number.isNaN(t)) {
     throw new RangeError(
-      `vapourPressurePa must lie between the saturation pressures at ${MIN_TEMPERATURE_C} °C and ${MAX_TEMPERATURE_C} °C (got ${vapourPressurePa})`,
+      `vapourPressurePa must lie between the saturation pressures over water at ${MIN_TEMPERATURE_C} °C and ${MAX_TEMPERATURE_C} °C (got ${vapourPressurePa})`,
     );
   }
   return t;
+}
+
+/**
+ * Frost point, °C: the temperature at which vapour of partial pressure vapourPressurePa saturates over
+ * ice. A separate quantity from the dew point; it exists only below the triple point (pw < 611.66 Pa):
+ * above it, cooled air reaches its dew point, over water, first. NaN there.
+ * @param vapourPressurePa Pa, ≥ pws over ice at −100 °C
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 5 inverted by Newton's method.
+ */
+export function frostPointFromVapourPressure(vapourPressurePa: number): number {
+  requireFinite('vapourPressurePa', vapourPressurePa);
+  const lnPw = vapourPressurePa > 0 ? Math.log(vapourPressurePa) : Number.NaN;
+  if (!(lnPw >= LN_PWS_ICE_MIN)) {
+    throw new RangeError(`vapourPressurePa must be at least the saturation pressure over ice at ${MIN_TEMPERATURE_C} °C (got ${vapourPressurePa})`);
+  }
+  return lnPw < LN_TRIPLE_POINT_PRESSURE ? solveOverIce(lnPw) : Number.NaN;
 }
 
 /**
@@ -168,5 +210,5 @@ export function dewPointFromVapourPressure(vapourPressurePa: number): number {
  */
 export function boilingPointC(pressurePa: number): number {
   requirePressurePa('pressurePa', pressurePa);
-  return temperatureAtLnSaturation(Math.log(pressurePa));
+  return dewPointAtLnPressure(Math.log(pressurePa));
 }

@@ -10,6 +10,7 @@ import { dryBulbFromEnthalpy, enthalpyKJPerKg, humidityRatioFromEnthalpy } from 
 import {
   degreeOfSaturation,
   dewPointFromHumidityRatio,
+  frostPointFromHumidityRatio,
   humidityRatioFromDewPoint,
   humidityRatioFromRh,
   rhPctFromHumidityRatio,
@@ -41,7 +42,7 @@ export interface MoistAirRequest {
   wetBulbC?: number;
   humidityRatio?: number;
   enthalpyKJPerKg?: number;
-  /** Air in equilibrium with liquid water or ice: on the saturation curve, one property fixes the state. */
+  /** Air saturated over liquid water (supercooled below 0 °C, the RH = 100 % curve): one property fixes the state. */
   saturated?: boolean;
 }
 
@@ -51,9 +52,15 @@ export interface MoistAirState {
   dryBulbC: number;
   /** kg water per kg dry air. */
   humidityRatio: number;
+  /** Relative humidity over liquid water, also below 0 °C (WMO-No. 8). */
   rhPct: number;
-  /** Dew point above 0.01 °C, frost point below; NaN for perfectly dry air. */
+  /** Dew point over liquid water, also below 0 °C; NaN for perfectly dry air. */
   dewPointC: number;
+  /**
+   * Frost point, over ice: a separate quantity, meaningful only when the vapour pressure is below the
+   * triple point's (dew point below about 0 °C); NaN otherwise and for dry air.
+   */
+  frostPointC: number;
   /** Thermodynamic wet-bulb (ASHRAE 2017 ch. 1 eq. 33/35). */
   wetBulbC: number;
   /** kJ per kg dry air, dry air and liquid water at 0 °C as zero. */
@@ -175,7 +182,7 @@ export function moistAirState(request: MoistAirRequest): MoistAirState {
   const saturated = request.saturated === true;
   const needed = saturated ? 1 : 2;
   const rule = saturated
-    ? 'saturated air (in equilibrium with liquid water or ice) has two independent properties: pressure plus one'
+    ? 'saturated air (in equilibrium with liquid water, supercooled below 0 °C) has two independent properties: pressure plus one'
     : 'moist air has three independent properties: pressure plus two';
   if (given.length < needed) {
     throw new StateRequestError('under-determined', `${rule}; got pressure plus ${given.length} (${given.join(', ') || 'none'})`);
@@ -213,6 +220,7 @@ function stateFromDryBulbAndHumidityRatio(tC: number, w: number, pressurePa: num
     humidityRatio: w,
     rhPct,
     dewPointC: w > 0 ? Math.min(dewPointFromHumidityRatio(w, pressurePa), tC) : Number.NaN,
+    frostPointC: w > 0 ? frostPointFromHumidityRatio(w, pressurePa) : Number.NaN,
     wetBulbC: wetBulbFromHumidityRatio(tC, w, pressurePa),
     enthalpyKJPerKg: enthalpyKJPerKg(tC, w),
     vapourPressurePa: vapourPressureFromHumidityRatio(w, pressurePa),

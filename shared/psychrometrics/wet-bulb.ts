@@ -1,10 +1,22 @@
 /**
  * Thermodynamic wet-bulb temperature by the psychrometric equation of ASHRAE Handbook—Fundamentals
  * (2017) ch. 1: eq. 33 over liquid water (t* ≥ 0 °C) and eq. 35 over ice (t* < 0 °C), with the
- * saturation humidity ratio at t* from eq. 23 and Hyland–Wexler pws.
+ * saturation humidity ratio at t* from eq. 23 and Hyland–Wexler pws on ASHRAE's switch (ice at and
+ * below 0.01 °C, eq. 5; water above, eq. 6): the one place besides the frost point where the engine
+ * uses saturation over ice (see saturation.ts).
  */
-import { FREEZING_POINT_C, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO, TRIPLE_POINT_C } from './constants';
-import { d2LnSaturationPressure, dLnSaturationPressure, lastSaturationSlope, lnSaturationPressure, lnSaturationWithSlope, temperatureAtLnSaturation } from './saturation';
+import { FREEZING_POINT_C, KELVIN_OFFSET, MIN_TEMPERATURE_C, MOLAR_MASS_RATIO, TRIPLE_POINT_C } from './constants';
+import {
+  d2LnSaturationIceOrWater,
+  dLnSaturationIceOrWater,
+  dLnSaturationOverIce,
+  dLnSaturationOverWater,
+  frostOrDewPointAtLnPressure,
+  lnSaturationIceOrWater,
+  lnSaturationOverIce,
+  lnSaturationOverWater,
+  lnSaturationPressure,
+} from './saturation';
 import { vapourPressureFromHumidityRatioUnchecked } from './moisture';
 import {
   requireHumidityRatio,
@@ -24,21 +36,21 @@ const C_ICE = 2.1;
 /** Round-off allowed below W = 0 when a wet-bulb is that of (nearly) dry air, kg/kg. */
 export const DRY_AIR_SLACK = 1e-8;
 /** Saturation pressure over ice at 0 °C, Pa (eq. 5), where the two psychrometric equations meet. */
-const PWS_AT_0C = Math.exp(lnSaturationPressure(FREEZING_POINT_C));
+const PWS_AT_0C = Math.exp(lnSaturationIceOrWater(FREEZING_POINT_C));
 
 /**
  * W from the psychrometric equation, given Ws* at the wet-bulb. No checks: kernel for loops.
  * May be negative when the wet-bulb is too low for the dry-bulb (no such air).
  */
 export function humidityRatioFromWetBulbUnchecked(tC: number, wetBulbC: number, pressurePa: number): number {
-  const pws = Math.exp(lnSaturationPressure(wetBulbC));
+  const pws = Math.exp(lnSaturationIceOrWater(wetBulbC));
   const wsStar = (MOLAR_MASS_RATIO * pws) / (pressurePa - pws);
   return wetBulbC >= FREEZING_POINT_C
     ? ((A_WATER - B_WATER * wetBulbC) * wsStar - 1.006 * (tC - wetBulbC)) / (A_WATER + 1.86 * tC - C_WATER * wetBulbC)
     : ((A_ICE - B_ICE * wetBulbC) * wsStar - 1.006 * (tC - wetBulbC)) / (A_ICE + 1.86 * tC - C_ICE * wetBulbC);
 }
 
-/** W by eq. 35 (ice, a = 2830) or eq. 33 (water, a = 2501) at t* = 0 °C, where the two forms meet; ice gives the higher W. */
+/** W by eq. 35 (ice, a = 2830) or eq. 33 (water, a = 2501) at t* = 0 °C, where the two forms meet; ice gives the higher W. No checks. */
 function humidityRatioAtFreezing(tC: number, pressurePa: number, a: number): number {
   const wsStar0 = (MOLAR_MASS_RATIO * PWS_AT_0C) / (pressurePa - PWS_AT_0C);
   return (a * wsStar0 - 1.006 * tC) / (a + 1.86 * tC);
@@ -56,7 +68,11 @@ function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo:
   const cpm = 1.006 + 1.86 * humidityRatio;
   let t = guess > lo && guess < hi ? guess : 0.5 * (lo + hi);
   for (let i = 0; i < 60; i++) {
-    const pws = Math.exp(lnSaturationWithSlope(t));
+    // ln pws and its slope on ASHRAE's switch, computed side by side: no shared state, nothing allocated.
+    const tK = t + KELVIN_OFFSET;
+    const overIce = t <= TRIPLE_POINT_C;
+    const pws = Math.exp(overIce ? lnSaturationOverIce(tK) : lnSaturationOverWater(tK));
+    const slope = overIce ? dLnSaturationOverIce(tK) : dLnSaturationOverWater(tK);
     const dry = pressurePa - pws;
     if (!(dry > 0)) {
       // Above the boiling point at this pressure: Ws* is unbounded, so the root is lower.
@@ -66,7 +82,7 @@ function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo:
     }
     const invDry = 1 / dry;
     const ws = MOLAR_MASS_RATIO * pws * invDry;
-    const dWs = ws * lastSaturationSlope() * pressurePa * invDry;
+    const dWs = ws * slope * pressurePa * invDry;
     const water = t >= FREEZING_POINT_C;
     const b = water ? B_WATER : B_ICE;
     const latent = (water ? A_WATER : A_ICE) - b * t;
@@ -90,41 +106,50 @@ function solveWetBulb(tC: number, humidityRatio: number, pressurePa: number, lo:
 }
 
 /**
- * Wet-bulb, °C, of air at dry-bulb tC with humidityRatio at pressurePa, given its dew point (NaN if
- * unknown). The root lies between the dew point and the dry-bulb. First guess: expand Ws* about the dew
- * point (see below); then Newton's method on the exact equation, usually one or two steps.
- * Near 0 °C eq. 33 and eq. 35 overlap: at t* = 0 the ice form gives the higher W, so some W have a root on
- * each side of freezing. The engine takes the ice root whenever it exists (a wick below 0 °C is frozen;
- * supercooled water is metastable). See {@link wetBulbRootsNearFreezing}.
- * No argument checks; returns NaN for NaN input. Expects W ≤ Ws(tC).
+ * Wet-bulb, °C, of air at dry-bulb tC with humidityRatio at pressurePa, given its saturation temperature
+ * on ASHRAE's switch (`saturationC`: the dew point, or the frost point below 0.01 °C; NaN if unknown).
+ * The root lies between that temperature and the dry-bulb.
+ * - Near 0 °C eq. 33 and eq. 35 overlap: at t* = 0 the ice form gives the higher W, so some W have a root
+ *   on each side of freezing. The engine takes the root over liquid water (t* ≥ 0 °C) whenever it exists:
+ *   evaporative pads, wicks and tower fill carry liquid water. See {@link wetBulbRootsNearFreezing}.
+ * - Below 0 °C air may hold more vapour than saturation over ice allows (relative humidity is over water,
+ *   WMO-No. 8): then its frost point is above its dry-bulb and eq. 35's root would lie above the dry-bulb
+ *   (an iced bulb gains vapour and warms, by at most about 0.35 K at 100 % RH over water). The engine
+ *   returns the dry-bulb: such air has no wet-bulb depression to use.
+ * No argument checks; returns NaN for NaN input. Expects W ≤ Ws(tC) over water.
  */
-export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: number, dewPointC: number): number {
-  let lo = dewPointC >= MIN_TEMPERATURE_C ? dewPointC : MIN_TEMPERATURE_C;
+export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: number, saturationC: number): number {
+  let lo = saturationC >= MIN_TEMPERATURE_C ? saturationC : MIN_TEMPERATURE_C;
   let hi = tC;
-  if (!(hi > lo)) return hi === lo ? tC : Number.NaN;
+  if (!(hi > lo)) return tC;
   if (lo < FREEZING_POINT_C && hi > FREEZING_POINT_C) {
-    if (humidityRatio <= humidityRatioAtFreezing(tC, pressurePa, A_ICE)) hi = FREEZING_POINT_C;
-    else lo = FREEZING_POINT_C;
+    if (humidityRatio >= humidityRatioAtFreezing(tC, pressurePa, A_WATER)) lo = FREEZING_POINT_C;
+    else hi = FREEZING_POINT_C;
   }
+  return solveFromSaturation(tC, humidityRatio, pressurePa, saturationC, lo, hi);
+}
+
+/** The wet-bulb in [lo, hi], starting from a guess expanded about the saturation temperature (when known). */
+function solveFromSaturation(tC: number, humidityRatio: number, pressurePa: number, saturationC: number, lo: number, hi: number): number {
   let guess = Number.NaN;
-  if (dewPointC === dewPointC) {
+  if (saturationC === saturationC) {
     // The psychrometric equation as L(t*)·(Ws* − W) = cpm·(t − t*) (see solveWetBulb), with Ws* about
-    // the dew point as W·exp(u), u = k·x + k2·x²/2, x = t* − td, k and k2 the first two derivatives of
-    // ln Ws at td. Keeping u ≈ k·x and e^u ≈ 1 + u + u²/2 gives a quadratic in x; one Newton step on the
-    // full model (L varying with t*, e^u to fifth order) then lands within 0.01 K of the root for most
-    // air, so a single exact Newton step usually finishes the job.
+    // the saturation temperature as W·exp(u), u = k·x + k2·x²/2, x = t* − td, k and k2 the first two
+    // derivatives of ln Ws at td. Keeping u ≈ k·x and e^u ≈ 1 + u + u²/2 gives a quadratic in x; one Newton
+    // step on the full model (L varying with t*, e^u to fifth order) then lands within 0.01 K of the root
+    // for most air, so a single exact Newton step usually finishes the job.
     const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
     const invDry = 1 / (pressurePa - pw);
-    const d1 = dLnSaturationPressure(dewPointC);
+    const d1 = dLnSaturationIceOrWater(saturationC);
     const k = d1 * pressurePa * invDry;
-    const k2 = d2LnSaturationPressure(dewPointC) * pressurePa * invDry + d1 * d1 * pressurePa * pw * invDry * invDry;
+    const k2 = d2LnSaturationIceOrWater(saturationC) * pressurePa * invDry + d1 * d1 * pressurePa * pw * invDry * invDry;
     const cpm = 1.006 + 1.86 * humidityRatio;
-    const water = dewPointC >= FREEZING_POINT_C;
+    const water = saturationC >= FREEZING_POINT_C;
     const b = water ? B_WATER : B_ICE;
-    const latent0 = (water ? A_WATER : A_ICE) - b * dewPointC;
+    const latent0 = (water ? A_WATER : A_ICE) - b * saturationC;
     const latentW = latent0 * humidityRatio;
     const a1 = latentW * k + cpm;
-    const depression = tC - dewPointC;
+    const depression = tC - saturationC;
     const x0 = (2 * cpm * depression) / (a1 + Math.sqrt(a1 * a1 + 2 * latentW * k * k * cpm * depression));
     const u = x0 * (k + 0.5 * k2 * x0);
     const du = k + k2 * x0;
@@ -133,7 +158,7 @@ export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: 
     const latent = latent0 - b * x0;
     const model = latent * humidityRatio * expU1 - cpm * (depression - x0);
     const dModel = -b * humidityRatio * expU1 + latent * humidityRatio * dExpU1 + cpm;
-    guess = dewPointC + x0 - model / dModel;
+    guess = saturationC + x0 - model / dModel;
   }
   return solveWetBulb(tC, humidityRatio, pressurePa, lo, hi, guess);
 }
@@ -141,7 +166,8 @@ export function wetBulbUnchecked(tC: number, humidityRatio: number, pressurePa: 
 /**
  * Both wet-bulbs, °C, when the psychrometric equation has one on each side of 0 °C for this air
  * (eq. 35 over ice below, eq. 33 over water above, overlapping near freezing); null when there is one.
- * The engine's wet-bulb is `ice`. Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 33 and 35.
+ * The engine's wet-bulb is `waterC` (pads and wicks carry liquid water).
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 33 and 35.
  */
 export function wetBulbRootsNearFreezing(tC: number, humidityRatio: number, pressurePa: number): { iceC: number; waterC: number } | null {
   requireTemperatureC('tC', tC);
@@ -152,12 +178,13 @@ export function wetBulbRootsNearFreezing(tC: number, humidityRatio: number, pres
   const water0 = humidityRatioAtFreezing(tC, pressurePa, A_WATER);
   if (!(humidityRatio > water0 && humidityRatio <= ice0)) return null;
   const pw = vapourPressureFromHumidityRatioUnchecked(humidityRatio, pressurePa);
-  const dewPointC = pw > 0 ? temperatureAtLnSaturation(Math.log(pw)) : MIN_TEMPERATURE_C;
+  const frostC = pw > 0 ? frostOrDewPointAtLnPressure(Math.log(pw)) : Number.NaN;
+  const lo = frostC >= MIN_TEMPERATURE_C ? frostC : MIN_TEMPERATURE_C;
   return {
-    // The engine's own solve, first guess included: for this air it brackets the root below 0 °C. A bare
-    // solve from the dew point failed for nearly dry air, whose dew point lies far below the root.
-    iceC: wetBulbUnchecked(tC, humidityRatio, pressurePa, dewPointC),
-    waterC: solveWetBulb(tC, humidityRatio, pressurePa, FREEZING_POINT_C, tC, Number.NaN),
+    // The first guess from the frost point matters: a bare solve from it failed for nearly dry air, whose
+    // frost point lies far below the root.
+    iceC: solveFromSaturation(tC, humidityRatio, pressurePa, frostC, lo, FREEZING_POINT_C),
+    waterC: wetBulbUnchecked(tC, humidityRatio, pressurePa, frostC),
   };
 }
 
@@ -172,7 +199,7 @@ export function humidityRatioFromWetBulb(tC: number, wetBulbC: number, pressureP
   requireTemperatureC('wetBulbC', wetBulbC);
   requirePressurePa('pressurePa', pressurePa);
   if (wetBulbC > tC) throw supersaturatedError('wetBulbC', wetBulbC, `a wet-bulb above the dry-bulb ${tC} °C is not moist air`);
-  if (Math.exp(lnSaturationPressure(wetBulbC)) >= pressurePa) {
+  if (Math.exp(lnSaturationIceOrWater(wetBulbC)) >= pressurePa) {
     throw new RangeError(`wetBulbC = ${wetBulbC} °C is at or above the boiling point at pressurePa = ${pressurePa} Pa`);
   }
   const w = humidityRatioFromWetBulbUnchecked(tC, wetBulbC, pressurePa);
@@ -184,7 +211,8 @@ export function humidityRatioFromWetBulb(tC: number, wetBulbC: number, pressureP
 
 /**
  * Thermodynamic wet-bulb, °C, of air at dry-bulb tC holding humidityRatio kg/kg at pressurePa.
- * Solved by Newton's method on the psychrometric equation (see {@link wetBulbUnchecked}).
+ * Solved by Newton's method on the psychrometric equation (see {@link wetBulbUnchecked}: the root over
+ * liquid water where two exist, the dry-bulb for air supersaturated over ice).
  * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 33 and 35.
  */
 export function wetBulbFromHumidityRatio(tC: number, humidityRatio: number, pressurePa: number): number {
@@ -196,6 +224,6 @@ export function wetBulbFromHumidityRatio(tC: number, humidityRatio: number, pres
   if (pws < pressurePa && pw > pws * (1 + SATURATION_SLACK)) {
     throw supersaturatedError('humidityRatio', humidityRatio, `its vapour pressure exceeds saturation at ${tC} °C`);
   }
-  const dewPointC = pw > 0 ? Math.min(temperatureAtLnSaturation(Math.log(pw)), tC) : Number.NaN;
-  return wetBulbUnchecked(tC, humidityRatio, pressurePa, dewPointC);
+  const saturationC = pw > 0 ? frostOrDewPointAtLnPressure(Math.log(pw)) : Number.NaN;
+  return wetBulbUnchecked(tC, humidityRatio, pressurePa, saturationC);
 }

@@ -32,6 +32,11 @@ export interface ReportClimate {
   validation: ReportValidation | null;
   /** Set for a derived future-climate file: a projection, not measured weather. */
   projection: { method: string | null; note: string | null } | null;
+  /**
+   * The file's humidity was read over ice below 0 °C (the import option) rather than over liquid water; null when
+   * neither the run nor the file recorded it (runs and files from before the option).
+   */
+  humidityOverIce: boolean | null;
 }
 
 export interface ReportValidation {
@@ -109,6 +114,8 @@ export interface RunClimateSnapshot {
   site: { name: string; elevationM: number; timeZone: string };
   elevationM: number;
   utcOffsetMinutes: number;
+  /** The file was read with humidity over ice below 0 °C (import option); absent for runs made before the option. */
+  humidityOverIce?: boolean;
 }
 
 export interface ReportRunSource {
@@ -159,6 +166,7 @@ export function shapeReportRun(source: ReportRunSource): ReportRun {
       lastHourMs: climate.lastHourMs,
       validation: file ? validationOf(file.report, file.hasPressure, file.humidityKind) : null,
       projection: file?.derivationJson ? projectionOf(file.derivationJson) : null,
+      humidityOverIce: climate.humidityOverIce ?? (typeof file?.report.humidityOverIce === 'boolean' ? file.report.humidityOverIce : null),
     },
     envelope: envelopeOf(source.scenario.envelope.presetId),
     results: source.results,

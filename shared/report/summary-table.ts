@@ -9,6 +9,7 @@ import { MONTH_SHORT } from '../calendar';
 import { hoursOfMode, modeKeys, modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import type { ScenarioResults } from '../scenario/run';
+import { humidityReadingWords } from './humidity-reading';
 import { flattenInputs, inputUnitSi } from './inputs';
 import type { ReportRun } from './report-data';
 
@@ -43,6 +44,7 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'run', figure: 'Site', unit: '', value: run.site.name },
     { section: 'run', figure: 'Climate file', unit: '', value: run.climate.name },
     { section: 'run', figure: 'Climate file SHA-256', unit: '', value: run.climate.sha256 },
+    { section: 'run', figure: 'Humidity in the file', unit: '', value: humidityReadingWords(run.climate.humidityOverIce) },
     { section: 'run', figure: 'Envelope', unit: '', value: run.envelope.label },
     { section: 'run', figure: 'Engine version', unit: '', value: run.engineVersion },
     ...modeRows('hours', '', r.hours),

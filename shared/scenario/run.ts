@@ -2,7 +2,7 @@
  * One scenario over one hourly climate series: outdoor states, classification, energy, results.
  * Pure and synchronous, so the worker task, the command line and the tests call the same function.
  */
-import { bulkStates, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
+import { bulkStates, hourlyPressurePa, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
 import { classifyHours, moistureTargets, type HourClassification, type InletLimits } from './classify';
 import { hourlyEnergy, type HourlyEnergy } from './energy';
 import { deratedDryBulbMaxC } from './envelopes';
@@ -34,7 +34,7 @@ export interface ScenarioResults extends AggregatedResults {
     elevationM: number;
     /** 'weather' when the series carries station pressure, else the standard atmosphere at elevationM. */
     pressureSource: 'weather' | 'elevation';
-    /** Hours whose missing station pressure was replaced by the standard atmosphere. */
+    /** Hours with data whose missing station pressure was replaced by the standard atmosphere (hourlyPressurePa). */
     pressureFilledHours: number;
   };
   envelope: {
@@ -60,7 +60,7 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
   const elevationM = options.elevationM ?? scenario.elevationM;
   const sitePressurePa = standardPressurePa(elevationM);
-  const { states, pressurePa, filledHours } = outdoorStates(series, sitePressurePa);
+  const { states, pressurePa, filledHours } = outdoorStates(series, elevationM);
   const { envelope, system } = scenario;
   const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
   const classification = classifyHours(system, limits, {
@@ -116,23 +116,12 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
 
 /**
  * Every hour's outdoor moist-air state at its pressure: the station's where the series has it, the standard
- * atmosphere at the site (`sitePressurePa`) where it has none or a hole. The first step of a run, and all the
- * hourly downloads need to write a run's states again.
+ * atmosphere at the site's elevation where it has none or a hole (hourlyPressurePa). The first step of a run,
+ * and all the hourly downloads need to write a run's states again.
  */
-export function outdoorStates(series: ScenarioSeries, sitePressurePa: number): { states: BulkState; pressurePa: Float64Array | number; filledHours: number } {
-  const { pressurePa, filledHours } = resolvePressure(series.pressurePa, sitePressurePa);
+export function outdoorStates(series: ScenarioSeries, elevationM: number): { states: BulkState; pressurePa: Float64Array | number; filledHours: number } {
+  const { pressurePa, filledHours } = hourlyPressurePa(series, elevationM);
   return { states: bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa }), pressurePa, filledHours };
-}
-
-/** Station pressure where the series has it; the standard atmosphere where it has none or a hole. */
-function resolvePressure(series: Float64Array | null, sitePressurePa: number): { pressurePa: Float64Array | number; filledHours: number } {
-  if (!series) return { pressurePa: sitePressurePa, filledHours: 0 };
-  let filledHours = 0;
-  for (let i = 0; i < series.length; i++) if (Number.isNaN(series[i])) filledHours++;
-  if (filledHours === 0) return { pressurePa: series, filledHours };
-  const filled = Float64Array.from(series);
-  for (let i = 0; i < filled.length; i++) if (Number.isNaN(filled[i])) filled[i] = sitePressurePa;
-  return { pressurePa: filled, filledHours };
 }
 
 const round2 = (x: number): number => Math.round(x * 100) / 100;

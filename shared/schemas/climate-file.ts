@@ -56,6 +56,14 @@ export const climateUploadQuerySchema = z.object({
    */
   timeBasis: z.enum(timeBases).default('site-civil'),
   maxGapHours: z.coerce.number().int().min(0, 'maxGapHours must be 0 or more').max(168, 'maxGapHours must be at most 168').default(6),
+  /**
+   * The file gives RH (or dew point) below 0 °C over ice; by default both are over liquid water at every
+   * temperature (WMO-No. 8). Sent as `true` or `false` in the query.
+   */
+  humidityOverIce: z
+    .enum(['true', 'false'], { message: 'humidityOverIce must be true or false' })
+    .default('false')
+    .transform((text) => text === 'true'),
   mapping: z
     .string()
     .max(10_000)

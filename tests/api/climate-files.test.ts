@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditEvents, climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { directAirSample } from '../support/study-setup';
 
 const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
 
@@ -111,6 +112,37 @@ describe('an engineer uploading hourly weather', () => {
     expect(await preview('site-civil')).toBe(Date.UTC(2023, 6, 1, 11));
     expect(await preview('site-standard')).toBe(Date.UTC(2023, 6, 1, 12));
     expect(await preview('utc')).toBe(Date.UTC(2023, 6, 1, 12));
+  });
+
+  it('reads humidity below 0 °C over ice when asked, stores it over water, and a run records the choice', async () => {
+    // Synthetic winter hours: RH 80 % at −10 °C.
+    const text = 'timestamp,dry_bulb_c,relative_humidity_pct\n2023-01-10T00:00Z,-10,80\n2023-01-10T01:00Z,-10,80\n';
+    const plain = await upload(text, '?fileName=winter.csv').expect(201);
+    expect(plain.body.report.humidityOverIce).toBe(false);
+    const res = await upload(text, '?fileName=winter-ice.csv&humidityOverIce=true').expect(201);
+    expect(res.body.report.humidityOverIce).toBe(true);
+    const fileId = res.body.climateFile.id;
+    const stored = await request(t.app).get(`/api/projects/${projectId}/climate-files/${fileId}`).set(asPerson(viewer)).expect(200);
+    expect(stored.body.report.humidityOverIce).toBe(true);
+    // 80 % over ice is 80 × pws,ice/pws,water = 72.56 % over water at −10 °C (Hyland–Wexler eq. 5 and 6, ASHRAE 2017 ch. 1).
+    const hours = await request(t.app).get(`/api/projects/${projectId}/climate-files/${fileId}/hours`).set(asPerson(viewer)).expect(200);
+    expect(hours.body.humidity[0]).toBeCloseTo(72.56, 2);
+
+    const scenario = await request(t.app).post(`/api/projects/${projectId}/scenarios`).set(asPerson(engineer)).send({ scenario: directAirSample }).expect(201);
+    const created = await request(t.app)
+      .post(`/api/projects/${projectId}/runs`)
+      .set(asPerson(engineer))
+      .send({ scenarioIds: [scenario.body.scenario.id], climateFileIds: [fileId, plain.body.climateFile.id] })
+      .expect(202);
+    const [iceRun, waterRun] = created.body.runs.map((r: { id: number }) => r.id);
+    const runOf = async (id: number) => (await request(t.app).get(`/api/projects/${projectId}/runs/${id}`).set(asPerson(viewer)).expect(200)).body.run;
+    expect((await runOf(iceRun)).climate.humidityOverIce).toBe(true);
+    expect((await runOf(waterRun)).climate.humidityOverIce).toBe(false);
+  });
+
+  it('refuses a humidityOverIce that is not true or false, naming it', async () => {
+    const res = await upload('timestamp,dry_bulb_c,relative_humidity_pct\n2023-01-10T00:00Z,-10,80\n', '?humidityOverIce=yes').expect(400);
+    expect(JSON.stringify(res.body.error)).toMatch(/humidityOverIce must be true or false/);
   });
 
   it('refuses a file without humidity with a 422 report and stores nothing', async () => {

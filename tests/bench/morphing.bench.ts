@@ -46,7 +46,7 @@ export const suite: BenchSuite = {
     const factors = { dryBulbMethod: 'shift-and-stretch' as const, humidityMethod: 'stretch' as const, months };
     log(`morphing ${HOURS.toLocaleString('en')} hours`);
     const morphMs = best(3, () => {
-      const out = morphClimate({ series, factors, utcOffsetMinutes: 60, fallbackPressurePa: 101_325 });
+      const out = morphClimate({ series, factors, utcOffsetMinutes: 60, elevationM: 0 });
       if (!out.ok) throw new Error(out.problems.join('; '));
     });
     const statesMs = best(3, () => void bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa: 101_325 }));

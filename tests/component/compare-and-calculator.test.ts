@@ -4,6 +4,7 @@ import type { RunListing } from '@/features/compare/api/get-runs';
 import { compareRuns } from '@/features/compare/utils/compare-runs';
 import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
 import { solveState } from '@/features/calculator/utils/state-request';
+import { stateRows } from '@/features/calculator/utils/state-rows';
 
 const psychrolib = createRequire(import.meta.url)('psychrolib');
 psychrolib.SetUnitSystem(psychrolib.SI);
@@ -112,5 +113,22 @@ describe('the air-state calculator', () => {
       ok: false,
       message: 'Dry-bulb is not a number.',
     });
+  });
+
+  it('reports dew point and RH over liquid water and gives the frost point apart, only below 0 °C', () => {
+    // −5 °C with a −10 °C dew point over water (WMO-No. 8). Its vapour pressure, 286.56 Pa (Hyland–Wexler eq. 6 at −10 °C,
+    // ASHRAE 2017 ch. 1), saturates over ice at −8.90 °C: psychrolib's sub-zero "dew point" is that frost point.
+    const out = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '-5', dewPointC: '-10' }, saturated: false }, 'SI');
+    expect(out.ok).toBe(true);
+    if (!out.ok) return;
+    expect(out.state.dewPointC).toBeCloseTo(-10, 4);
+    expect(out.state.frostPointC).toBeCloseTo(psychrolib.GetTDewPointFromHumRatio(-5, out.state.humidityRatio, out.state.pressurePa), 2);
+    const rows = Object.fromEntries(stateRows(out.state, 'SI').map((r) => [r.label, r.value]));
+    expect(rows['Dew point (over water)']).toMatch(/^−?-?10\.0/);
+    expect(rows['Frost point (over ice)']).toMatch(/8\.9/);
+    // In IP: −8.90 °C is 15.98 °F.
+    expect(Object.fromEntries(stateRows(out.state, 'IP').map((r) => [r.label, r.value]))['Frost point (over ice)']).toMatch(/16\.0 °F/);
+    const warm = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '30', rhPct: '50' }, saturated: false }, 'SI');
+    if (warm.ok) expect(Object.fromEntries(stateRows(warm.state, 'SI').map((r) => [r.label, r.value]))['Frost point (over ice)']).toBe('— (only below 0 °C)');
   });
 });

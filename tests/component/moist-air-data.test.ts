@@ -10,6 +10,7 @@ import {
   stateToChartXY,
 } from '../../src/components/charts/moist-air-data';
 import { psychrolib } from '../unit/psychrometrics/reference-psychrolib';
+import { hylandWexlerWaterPa } from '../unit/psychrometrics/reference-over-water';
 
 const seaLevelPa = 101_325;
 
@@ -87,7 +88,9 @@ describe('envelopes and the chart window', () => {
     const ceilingAt18 = Math.max(...polygon.filter((p) => p.dryBulbC === 18).map((p) => p.humidityRatio));
     expect(ceilingAt18).toBeCloseTo(psychrolib.GetHumRatioFromRelHum(18, 0.6, seaLevelPa), 5);
     const floor = Math.min(...polygon.map((p) => p.humidityRatio));
-    expect(floor).toBeCloseTo(psychrolib.GetHumRatioFromTDewPoint(-9, seaLevelPa), 5);
+    // The −9 °C dew-point floor is over liquid water (WMO-No. 8), as the engine reads envelope limits; psychrolib would
+    // read −9 °C as a frost point, so it is fed pws over water by Hyland–Wexler eq. 6 evaluated apart (reference-over-water.ts).
+    expect(floor).toBeCloseTo(psychrolib.GetHumRatioFromVapPres(hylandWexlerWaterPa(-9), seaLevelPa), 5);
   });
 
   it('is empty when the limits leave no room', () => {

@@ -3,7 +3,7 @@ import { analyseProposal, countExcursions, durationBin, modelInletHours, xFactor
 import { findEnvelopePreset } from '../../shared/scenario/envelopes';
 import { MODE } from '../../shared/scenario/classify';
 import { runScenario } from '../../shared/scenario/run';
-import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb } from './scenario/fixtures';
+import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, wFromDewPoint } from './scenario/fixtures';
 import { HOT_HUMID, MILD_MARITIME, syntheticSeries } from './scenario/synthetic-climate';
 
 // ASHRAE TC 9.9 2021 recommended range and class A1 (recalled from memory, as shared/scenario/envelopes.ts).
@@ -12,9 +12,12 @@ const A1: EnvelopeBounds = { dryBulbMinC: 15, dryBulbMaxC: 32, dewPointMinC: -12
 const HOUR = 3_600_000;
 const T0 = Date.UTC(2019, 6, 1);
 
-/** Hourly inlet series from dry-bulbs at one dew point (psychrolib gives W: the reference library, not the engine). */
+/**
+ * Hourly inlet series from dry-bulbs at one dew point (psychrolib gives W: the reference library, not the engine;
+ * a dew point below 0 °C is over liquid water, WMO-No. 8, so psychrolib is fed its vapour pressure: fixtures.ts).
+ */
 function inletSeries(temps: number[], dewPointC = 5, step = HOUR) {
-  const w = psy.GetHumRatioFromTDewPoint(dewPointC, SEA_LEVEL_PA);
+  const w = wFromDewPoint(dewPointC, SEA_LEVEL_PA);
   return {
     timestampsMs: Float64Array.from(temps, (_, i) => T0 + i * step),
     inletC: Float64Array.from(temps),
@@ -84,7 +87,7 @@ describe('excursion events on a constructed series with known runs', () => {
   it('tells humid and dry hours apart by the dew-point and RH limits', () => {
     // 25 °C at 16 °C dew point: above the recommended 15 °C dew point, inside A1 (17 °C, 80 % RH).
     expect(countExcursions(inletSeries([25], 16)).causes).toEqual({ recommended: { warm: 0, cold: 0, humid: 1, dry: 0 }, allowable: { warm: 0, cold: 0, humid: 0, dry: 0 } });
-    // 20 °C at −10 °C dew point: below the recommended −9 °C, inside A1 (−12 °C and 8 % RH; about 11 % RH here).
+    // 20 °C at −10 °C dew point: below the recommended −9 °C, inside A1 (−12 °C and 8 % RH; about 12 % RH over water here).
     const dry = countExcursions(inletSeries([20], -10));
     expect(dry.causes.recommended.dry).toBe(1);
     expect(dry.outsideRecommendedHours).toBe(1);

@@ -131,7 +131,7 @@ describe('humidity through specific humidity', () => {
     const [ts, tC] = twoJanuaryDays();
     // Humidity ratio 4 g/kg every hour (below saturation at 2 °C, Ws ≈ 4.4 g/kg).
     const parent = series(ts, tC, { kind: 'humidity-ratio-kgkg', values: new Float64Array(48).fill(0.004) });
-    const out = morphClimate({ series: parent, factors: factors({ deltaMeanK: 2, deltaMaxK: 3, deltaMinK: 1, humidityChangePct: 10 }), utcOffsetMinutes: 60, fallbackPressurePa: P });
+    const out = morphClimate({ series: parent, factors: factors({ deltaMeanK: 2, deltaMaxK: 3, deltaMinK: 1, humidityChangePct: 10 }), utcOffsetMinutes: 60, elevationM: 0 });
     if (!out.ok) throw new Error(out.problems.join('; '));
     expect(out.alphaByMonth[0]).toBeCloseTo(0.4, 12);
     expect(out.series.dryBulbC[12]).toBeCloseTo(8.2, 12);
@@ -148,14 +148,14 @@ describe('humidity through specific humidity', () => {
     const [ts, tC] = twoJanuaryDays();
     const rh = Float64Array.from({ length: 48 }, (_, i) => 30 + i);
     const pressure = Float64Array.from({ length: 48 }, (_, i) => 95_000 + 100 * i);
-    const out = morphClimate({ series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }, pressure), factors: factors({}), utcOffsetMinutes: 60, fallbackPressurePa: P });
+    const out = morphClimate({ series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }, pressure), factors: factors({}), utcOffsetMinutes: 60, elevationM: 0 });
     if (!out.ok) throw new Error('refused');
     for (let i = 0; i < 48; i++) {
       expect(out.series.dryBulbC[i]).toBeCloseTo(tC[i], 12);
       expect(out.series.humidity.values[i]).toBeCloseTo(rh[i], 9);
     }
     const dew = Float64Array.from({ length: 48 }, (_, i) => tC[i] - 3);
-    const fromDew = morphClimate({ series: series(ts, tC, { kind: 'dew-point-c', values: dew }), factors: factors({}), utcOffsetMinutes: 60, fallbackPressurePa: P });
+    const fromDew = morphClimate({ series: series(ts, tC, { kind: 'dew-point-c', values: dew }), factors: factors({}), utcOffsetMinutes: 60, elevationM: 0 });
     if (!fromDew.ok) throw new Error('refused');
     // Reference: psychrolib GetHumRatioFromTDewPoint then GetRelHumFromHumRatio (SI).
     const w = psychrolib.GetHumRatioFromTDewPoint(3, P);
@@ -172,7 +172,7 @@ describe('humidity through specific humidity', () => {
     const [ts, tC] = twoJanuaryDays();
     const humid = series(ts, tC, { kind: 'relative-humidity-pct', values: new Float64Array(48).fill(95) });
     // ΔT = −3 K everywhere at unchanged q: every hour at 95 % RH ends above saturation (RH at t − 3 K > 100 %).
-    const cooled = morphClimate({ series: humid, factors: factors({ deltaMeanK: -3, deltaMaxK: -3, deltaMinK: -3 }), utcOffsetMinutes: 60, fallbackPressurePa: P });
+    const cooled = morphClimate({ series: humid, factors: factors({ deltaMeanK: -3, deltaMaxK: -3, deltaMinK: -3 }), utcOffsetMinutes: 60, elevationM: 0 });
     if (!cooled.ok) throw new Error('refused');
     expect(cooled.clampedHighHours).toBe(48);
     expect(Math.max(...cooled.series.humidity.values)).toBe(100);
@@ -180,7 +180,7 @@ describe('humidity through specific humidity', () => {
       series: humid,
       factors: factors({ humidityShiftGPerKg: -20 }, { humidityMethod: 'shift' }),
       utcOffsetMinutes: 60,
-      fallbackPressurePa: P,
+      elevationM: 0,
     });
     if (!dried.ok) throw new Error('refused');
     expect(dried.clampedLowHours).toBe(48);
@@ -193,7 +193,7 @@ describe('humidity through specific humidity', () => {
       series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }),
       factors: factors({ deltaMeanK: 1.5, deltaMaxK: 9, deltaMinK: -9 }, { dryBulbMethod: 'shift' }),
       utcOffsetMinutes: 60,
-      fallbackPressurePa: P,
+      elevationM: 0,
     });
     if (!out.ok) throw new Error('refused');
     // 2 + 1.5 = 3.5; 6 + 1.5 = 7.5; 4 + 1.5 = 5.5; 10 + 1.5 = 11.5
@@ -209,7 +209,7 @@ describe('humidity through specific humidity', () => {
     tC[5] = Number.NaN;
     const rh = new Float64Array(48).fill(60);
     rh[7] = Number.NaN;
-    const out = morphClimate({ series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }), factors: factors({ deltaMeanK: 1, deltaMaxK: 1, deltaMinK: 1 }), utcOffsetMinutes: 60, fallbackPressurePa: P });
+    const out = morphClimate({ series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }), factors: factors({ deltaMeanK: 1, deltaMaxK: 1, deltaMinK: 1 }), utcOffsetMinutes: 60, elevationM: 0 });
     if (!out.ok) throw new Error('refused');
     expect(out.series.dryBulbC[5]).toBeNaN();
     expect(out.series.humidity.values[5]).toBeNaN();
@@ -226,7 +226,7 @@ describe('humidity through specific humidity', () => {
       series: series(ts, tC, { kind: 'relative-humidity-pct', values: new Float64Array(48).fill(60) }),
       factors: factors({ deltaMeanK: 1, deltaMaxK: -2, deltaMinK: 4 }),
       utcOffsetMinutes: 60,
-      fallbackPressurePa: P,
+      elevationM: 0,
     });
     expect(out.ok).toBe(false);
     if (!out.ok) expect(out.problems[0]).toMatch(/^January: /);

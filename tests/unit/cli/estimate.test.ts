@@ -8,6 +8,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { tightPsychrolib as psy } from '../psychrometrics/reference-psychrolib';
+import { hylandWexlerIcePa, hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
 
 const root = path.resolve(import.meta.dirname, '../../..');
 const dir = mkdtempSync(path.join(tmpdir(), 'estimate-cli-'));
@@ -121,5 +122,30 @@ describe('estimate command line', { timeout: 30_000 }, () => {
     expect(high.envelope.highHumidityRatioGPerKg).toBeGreaterThan(low.envelope.highHumidityRatioGPerKg);
     // A1 derating: 1 K per 300 m above 900 m (recalled from memory) → 32 − 1100/300.
     expect(high.envelope.dryBulbMaxC).toBeCloseTo(32 - 1100 / 300, 9);
+  });
+
+  it('reads sub-zero humidity over liquid water, or over ice with --humidity-over-ice, and writes it over water', () => {
+    // Synthetic winter hours: RH 80 % at −10 °C and a dew point of −10 °C, at the scenario's 120 m.
+    const rh = file('winter-rh.csv', 'timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-10T00:00Z,-10,80\n2021-01-10T01:00Z,-10,80\n');
+    const dew = file('winter-dew.csv', 'timestamp,dry_bulb_c,dew_point_c\n2021-01-10T00:00Z,-5,-10\n2021-01-10T01:00Z,-5,-10\n');
+    const p = psy.GetStandardAtmPressure(120);
+    const run = (weather: string, extra: string[]) => {
+      const hourly = path.join(dir, `hourly-${path.basename(weather)}-${extra.length}.csv`);
+      const r = estimate(['--weather', weather, '--scenario', SCENARIO, '--hourly', hourly, ...extra]);
+      expect(r.stderr).toBe('');
+      return { summary: JSON.parse(r.stdout), row: readFileSync(hourly, 'utf8').trimEnd().split('\n')[1].split(',') };
+    };
+    const water = run(rh, []);
+    const ice = run(rh, ['--humidity-over-ice']);
+    expect(water.summary.weather.humidityOverIce).toBe(false);
+    expect(ice.summary.weather.humidityOverIce).toBe(true);
+    // W by psychrolib's eq. 20 fed 80 % of pws over water (eq. 6) or over ice (eq. 5), evaluated apart from the engine.
+    expect(Number(water.row[6])).toBeCloseTo(psy.GetHumRatioFromVapPres(0.8 * hylandWexlerWaterPa(-10), p) * 1000, 3);
+    expect(Number(ice.row[6])).toBeCloseTo(psy.GetHumRatioFromVapPres(0.8 * hylandWexlerIcePa(-10), p) * 1000, 3);
+    // relative_humidity_pct is over water: 80 % as given, or 80 % × pws,ice/pws,water = 72.56 % for the over-ice file.
+    expect(water.row[5]).toBe('80.00');
+    expect(Number(ice.row[5])).toBeCloseTo(72.56, 2);
+    // A dew point of −10 °C comes back as −10 °C (it used to come back as a frost point, about −8.9 °C).
+    expect(run(dew, []).row[4]).toBe('-10.00');
   });
 });

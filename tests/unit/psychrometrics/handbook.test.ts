@@ -4,12 +4,14 @@
  * say why they are not tighter.
  */
 import { describe, expect, it } from 'vitest';
+import { hylandWexlerWaterPa, wmoWaterPa } from './reference-over-water';
 import {
   dewPointFromHumidityRatio,
   enthalpyKJPerKg,
   humidityRatioFromWetBulb,
   rhPctFromHumidityRatio,
   saturationHumidityRatio,
+  saturationPressureOverIcePa,
   saturationPressurePa,
   specificVolumeM3PerKg,
   standardPressurePa,
@@ -23,8 +25,6 @@ describe('saturation pressure against ASHRAE 2017 ch. 1 Table 3', () => {
   // Table 3 is computed from the IAPWS formulations, of which the Hyland–Wexler eq. 5 and 6 are fits:
   // agreement within 0.03 % is what the fit gives, so that is the tolerance.
   const table3: Array<[tC: number, kPa: number]> = [
-    [-20, 0.10326], // over ice
-    [-5, 0.40178], // over ice
     [5, 0.87257],
     [25, 3.1699],
     [50, 12.352],
@@ -35,9 +35,47 @@ describe('saturation pressure against ASHRAE 2017 ch. 1 Table 3', () => {
     expect(Math.abs(pa / (kPa * 1000) - 1)).toBeLessThan(3e-4);
   });
 
+  // Table 3 below 0 °C is over ice. These rows used to be checked with saturationPressurePa, which switched
+  // to ice at the triple point; that function is now over liquid water at every temperature (WMO-No. 8),
+  // so the ice rows check the ice function.
+  const table3Ice: Array<[tC: number, kPa: number]> = [
+    [-20, 0.10326],
+    [-5, 0.40178],
+  ];
+  it.each(table3Ice)('pws over ice(%s °C) ≈ %s kPa', (tC, kPa) => {
+    expect(Math.abs(saturationPressureOverIcePa(tC) / (kPa * 1000) - 1)).toBeLessThan(3e-4);
+  });
+
   it('boils at 100 °C at standard sea-level pressure', () => {
     // ASHRAE 2017 ch. 1 Table 3: pws(100 °C) = 101.42 kPa (recalled), so the boiling point at 101.325 kPa is just under 100 °C.
     expect(boilingPointC(SEA_LEVEL_PA)).toBeCloseTo(99.97, 2);
+  });
+});
+
+describe('saturation over supercooled water (the convention of weather data, WMO-No. 8 part I ch. 4)', () => {
+  // Hyland–Wexler eq. 6 (ASHRAE 2017 ch. 1) extended below its stated 0…200 °C: an extrapolation, as WMO-No. 8
+  // notes of its own formulas over supercooled water. Evaluated term by term apart from the engine
+  // (reference-over-water.ts): eq. 6 gives 286.56 Pa at −10 °C and 125.63 Pa at −20 °C.
+  it.each([
+    [-10, 286.56],
+    [-20, 125.63],
+  ])('pws over water(%s °C) ≈ %s Pa by eq. 6 evaluated independently', (tC, pa) => {
+    expect(saturationPressurePa(tC)).toBeCloseTo(hylandWexlerWaterPa(tC), 9);
+    expect(saturationPressurePa(tC)).toBeCloseTo(pa, 2);
+  });
+
+  // WMO-No. 8 Annex 4.B Magnus-type formula over water (recalled from memory): 287.04 Pa at −10 °C, 125.98 Pa at
+  // −20 °C. The two formulas differ by 0.16 % and 0.27 % there and by at most 0.27 % over −40…0 °C; 0.5 % is the agreement we ask of two
+  // independent fits to supercooled-water data (our tolerance, not a stated one).
+  it.each([-5, -10, -20, -30, -40])('agrees with the WMO-No. 8 formula over water within 0.5 %, at %s °C', (tC) => {
+    expect(Math.abs(saturationPressurePa(tC) / wmoWaterPa(tC) - 1)).toBeLessThan(5e-3);
+  });
+
+  it('is above saturation over ice below 0 °C: by 10.3 % at −10 °C and 21.7 % at −20 °C (eq. 6 over eq. 5)', () => {
+    expect(saturationPressurePa(-10) / saturationPressureOverIcePa(-10)).toBeCloseTo(1.1026, 3);
+    expect(saturationPressurePa(-20) / saturationPressureOverIcePa(-20)).toBeCloseTo(1.2166, 3);
+    // The two meet at the triple point (0.01 °C, 611.657 Pa in ASHRAE 2017 ch. 1, recalled).
+    expect(saturationPressurePa(0.01) / saturationPressureOverIcePa(0.01)).toBeCloseTo(1, 3);
   });
 });
 

@@ -11,7 +11,9 @@ import {
   humidityRatioFromRh,
   humidityRatioFromWetBulb,
   rhPctFromHumidityRatio,
+  saturationPressureOverIcePa,
   saturationPressurePa,
+  vapourPressureFromHumidityRatio,
   wetBulbFromHumidityRatio,
   wetBulbRootsNearFreezing,
   enthalpyKJPerKg,
@@ -61,23 +63,29 @@ describe('round trips', () => {
         const back = wetBulbFromHumidityRatio(t, w, p);
         const roots = wetBulbRootsNearFreezing(t, w, p);
         if (roots === null) expect(Math.abs(back - wb)).toBeLessThan(1e-4);
-        else expect(Math.min(Math.abs(roots.iceC - wb), Math.abs(roots.waterC - wb))).toBeLessThan(1e-4);
+        else {
+          // Two roots: the given wet-bulb is one of them, and the engine answers with the one over liquid water.
+          expect(Math.min(Math.abs(roots.iceC - wb), Math.abs(roots.waterC - wb))).toBeLessThan(1e-4);
+          expect(back).toBe(roots.waterC);
+        }
       }),
       runs,
     );
   });
 
   it('finds both wet-bulbs for nearly dry air near freezing (a case fast-check found)', () => {
-    // Dry air at 10.77 °C and 88.4 kPa has its wet-bulb at −0.71 °C, below the dew-point-seeded bracket a bare
-    // solve could handle; the ice root must match the engine's wet-bulb.
+    // Dry air at 10.77 °C and 88.4 kPa has an ice-form wet-bulb at −0.71 °C, below the bracket a bare solve from
+    // its frost point could handle, and (for the slightest moisture) a water-form root at 0 °C. The engine now takes
+    // the root over liquid water; before the change to the water root this test checked the ice root instead.
     const t = 10.766131477788024;
     const p = 88_383.62540331097;
-    const wb = wetBulbFromHumidityRatio(t, 0, p);
-    const w = humidityRatioFromWetBulb(t, wb, p);
+    const wbIce = -0.7144944226119904;
+    const w = humidityRatioFromWetBulb(t, wbIce, p);
     const roots = wetBulbRootsNearFreezing(t, w, p);
     expect(roots).not.toBeNull();
-    expect(Math.abs(roots!.iceC - wb)).toBeLessThan(1e-4);
-    expect(roots!.iceC).toBeCloseTo(wetBulbFromHumidityRatio(t, w, p), 9);
+    expect(Math.abs(roots!.iceC - wbIce)).toBeLessThan(1e-4);
+    expect(roots!.waterC).toBeGreaterThanOrEqual(0);
+    expect(roots!.waterC).toBeCloseTo(wetBulbFromHumidityRatio(t, w, p), 9);
   });
 
   it('W → wet-bulb → W everywhere, including the two-root band', () => {
@@ -85,6 +93,13 @@ describe('round trips', () => {
       fc.property(dryBulb, rh, pressure, (t, r, p) => {
         const w = humidityRatioFromRh(t, r, p);
         const wb = wetBulbFromHumidityRatio(t, w, p);
+        // RH is over liquid water, so at and below the triple point (0.01 °C) air may hold more vapour than saturation over ice allows; its
+        // ice-form wet-bulb would lie above the dry-bulb and the engine gives the dry-bulb (wet-bulb.ts). Such air
+        // does not come back from its wet-bulb: there the check is the clamp itself.
+        if (t <= 0.01 && vapourPressureFromHumidityRatio(w, p) >= saturationPressureOverIcePa(t)) {
+          expect(wb).toBe(t);
+          return;
+        }
         // dW/dt* ≤ 0.003 /K at these states, so a 1e-5 K wet-bulb gives W within 3e-8 kg/kg.
         expect(Math.abs(humidityRatioFromWetBulb(t, wb, p) - w)).toBeLessThan(1e-7);
       }),
@@ -119,7 +134,7 @@ describe('orderings', () => {
     );
   });
 
-  it('saturation pressure rises with temperature, across the ice/water switch too', () => {
+  it('saturation pressure over water rises with temperature, through 0 °C too', () => {
     fc.assert(
       fc.property(fc.double({ min: -100, max: 200, noNaN: true }), fc.double({ min: 1e-6, max: 50, noNaN: true }), (t, dt) => {
         const t2 = Math.min(200, t + dt);

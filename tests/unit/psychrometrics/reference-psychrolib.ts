@@ -12,6 +12,8 @@ export interface Psychrolib {
   SetUnitSystem(system: number): void;
   GetSatVapPres(tC: number): number;
   GetHumRatioFromRelHum(tC: number, rh: number, pressurePa: number): number;
+  GetHumRatioFromVapPres(vapourPressurePa: number, pressurePa: number): number;
+  GetVapPresFromHumRatio(w: number, pressurePa: number): number;
   GetHumRatioFromTDewPoint(dewPointC: number, pressurePa: number): number;
   GetHumRatioFromTWetBulb(tC: number, wetBulbC: number, pressurePa: number): number;
   GetTDewPointFromHumRatio(tC: number, w: number, pressurePa: number): number;

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { classifyHours, EXCURSION, MODE, type InletLimits } from '../../../shared/scenario/classify';
-import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, type ReferenceState } from './fixtures';
+import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, wFromDewPoint, type ReferenceState } from './fixtures';
 
 const p = SEA_LEVEL_PA;
 const limits: InletLimits = RECOMMENDED;
@@ -21,8 +21,10 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
   const f = 1;
   const Tr = Ts + 12;
   // W_hi = min(W at 15 °C dew point, W at 24 °C and 70 % RH); W_lo = max(W at −9 °C dew point, W at 0 % RH).
+  // The −9 °C dew point is over liquid water (WMO-No. 8), as the engine reads envelope limits: 1.91 g/kg, not the
+  // 1.75 g/kg of a −9 °C frost point this test used when the engine read sub-zero dew points over ice.
   const wHi = Math.min(psy.GetHumRatioFromTDewPoint(15, p), psy.GetHumRatioFromRelHum(Ts, 0.7, p));
-  const wLo = Math.max(psy.GetHumRatioFromTDewPoint(-9, p), 0);
+  const wLo = Math.max(wFromDewPoint(-9, p), 0);
   const withEvap = makeScenario('direct-air', { system: { evaporativeEffectiveness: 0.8 } });
   const dry = makeScenario('direct-air', { system: { evaporativeEffectiveness: 0 } });
 
@@ -30,7 +32,7 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
     // W at 15 °C dew point ≈ 10.65 g/kg is smaller than W at (24 °C, 70 %) ≈ 13.1 g/kg, so the dew point binds.
     expect(wHi).toBeCloseTo(psy.GetHumRatioFromTDewPoint(15, p), 12);
     expect(wHi * 1000).toBeCloseTo(10.65, 2);
-    expect(wLo * 1000).toBeCloseTo(1.75, 2);
+    expect(wLo * 1000).toBeCloseTo(1.91, 2);
   });
 
   it('rule 1: W above W_hi is mechanical (the coil must dehumidify)', () => {

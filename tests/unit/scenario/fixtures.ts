@@ -6,6 +6,7 @@
 import { parseScenario, type Scenario, type ScenarioInput } from '../../../shared/scenario';
 import type { OutdoorHours } from '../../../shared/scenario/classify';
 import { tightPsychrolib as psy } from '../psychrometrics/reference-psychrolib';
+import { hylandWexlerIcePa, hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
 
 export const SEA_LEVEL_PA = 101_325;
 
@@ -52,16 +53,40 @@ export interface ReferenceState {
   twb: number;
 }
 
-/** Outdoor state from dry-bulb and dew point at pressurePa, by psychrolib. */
-export function stateFromDewPoint(t: number, dewPointC: number, pressurePa = SEA_LEVEL_PA): ReferenceState {
-  const w = psy.GetHumRatioFromTDewPoint(dewPointC, pressurePa);
-  return { t, w, twb: psy.GetTWetBulbFromHumRatio(t, w, pressurePa) };
+/*
+ * The humidity convention (WMO-No. 8): RH and dew point are over liquid water also below 0 °C, in the weather and in
+ * envelope limits. psychrolib reads both over ice at and below 0.01 °C, so there it is fed the vapour pressure over
+ * water (Hyland–Wexler eq. 6 evaluated apart from the engine, reference-over-water.ts) and computes W from it (eq. 20).
+ */
+
+/** W, kg/kg, of air whose dew point over liquid water is dewPointC, by psychrolib. */
+export function wFromDewPoint(dewPointC: number, pressurePa: number): number {
+  return dewPointC > 0.01 ? psy.GetHumRatioFromTDewPoint(dewPointC, pressurePa) : psy.GetHumRatioFromVapPres(hylandWexlerWaterPa(dewPointC), pressurePa);
 }
 
-/** Outdoor state from dry-bulb and relative humidity (%) at pressurePa, by psychrolib. */
+/** W, kg/kg, at dry-bulb t and RH over liquid water rhPct, by psychrolib. */
+export function wFromRh(t: number, rhPct: number, pressurePa: number): number {
+  return t > 0.01 ? psy.GetHumRatioFromRelHum(t, rhPct / 100, pressurePa) : psy.GetHumRatioFromVapPres((rhPct / 100) * hylandWexlerWaterPa(t), pressurePa);
+}
+
+/**
+ * psychrolib's wet-bulb; for air at or below 0.01 °C holding more vapour than saturation over ice allows (possible once
+ * RH is over water) the dry-bulb, as the engine gives it: psychrolib's bracket from its frost point is then upside down.
+ */
+export function wetBulbOf(t: number, w: number, pressurePa: number): number {
+  return t <= 0.01 && psy.GetVapPresFromHumRatio(w, pressurePa) >= hylandWexlerIcePa(t) ? t : psy.GetTWetBulbFromHumRatio(t, w, pressurePa);
+}
+
+/** Outdoor state from dry-bulb and dew point (over liquid water) at pressurePa, by psychrolib. */
+export function stateFromDewPoint(t: number, dewPointC: number, pressurePa = SEA_LEVEL_PA): ReferenceState {
+  const w = wFromDewPoint(dewPointC, pressurePa);
+  return { t, w, twb: wetBulbOf(t, w, pressurePa) };
+}
+
+/** Outdoor state from dry-bulb and relative humidity (%, over liquid water) at pressurePa, by psychrolib. */
 export function stateFromRh(t: number, rhPct: number, pressurePa = SEA_LEVEL_PA): ReferenceState {
-  const w = psy.GetHumRatioFromRelHum(t, rhPct / 100, pressurePa);
-  return { t, w, twb: psy.GetTWetBulbFromHumRatio(t, w, pressurePa) };
+  const w = wFromRh(t, rhPct, pressurePa);
+  return { t, w, twb: wetBulbOf(t, w, pressurePa) };
 }
 
 /** Outdoor state from dry-bulb and wet-bulb at pressurePa, by psychrolib. */

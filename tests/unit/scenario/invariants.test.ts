@@ -104,13 +104,14 @@ describe('classification invariants', () => {
   });
 
   it('known exception: with an RH lower limit, a warmer supply is drier in RH, so a direct-air hour can move from free to adiabatic', () => {
-    // A1-like lower limits: −12 °C dew point and 8 % RH. At 18 °C supply W(8 %) ≈ 1.03 g/kg < W(−12 °C dew point) ≈ 1.31 g/kg,
-    // at 27 °C W(8 %) ≈ 1.79 g/kg binds: outdoor air at 1.5 g/kg is free at 18 °C but needs humidifying at 27 °C.
+    // A1-like lower limits: −12 °C dew point and 8 % RH. At 18 °C supply W(8 %) ≈ 1.03 g/kg < W(−12 °C dew point) ≈ 1.51 g/kg
+    // (over liquid water, WMO-No. 8; over ice it was 1.31 g/kg and the outdoor air here was 1.5 g/kg),
+    // at 27 °C W(8 %) ≈ 1.76 g/kg binds: outdoor air at 1.6 g/kg is free at 18 °C but needs humidifying at 27 °C.
     const envelope = { dryBulbMinC: 15, dryBulbMaxC: 32, dewPointMinC: -12, dewPointMaxC: 17, rhMinPct: 8, rhMaxPct: 80 };
     const series: ScenarioSeries = {
       timestampsMs: Float64Array.of(0),
       dryBulbC: Float64Array.of(5),
-      humidity: { kind: 'humidity-ratio-kgkg', values: Float64Array.of(0.0015) },
+      humidity: { kind: 'humidity-ratio-kgkg', values: Float64Array.of(0.0016) },
       pressurePa: null,
     };
     const cool = hoursOf(makeScenario('direct-air', { system: { supplyAirC: 18 }, envelope }), series);

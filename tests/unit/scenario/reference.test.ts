@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { MODE, runScenario, type Scenario } from '../../../shared/scenario';
-import { makeScenario, psy } from './fixtures';
+import { makeScenario, psy, wetBulbOf, wFromDewPoint, wFromRh } from './fixtures';
 import { HOT_DRY_HIGH, HOT_HUMID, MILD_MARITIME, syntheticSeries } from './synthetic-climate';
 
 const CLIMATES = [MILD_MARITIME, HOT_HUMID, HOT_DRY_HIGH];
@@ -30,8 +30,9 @@ function referenceHour(scenario: Scenario, t: number, w: number, twb: number, p:
   const eps = s.evaporativeEffectiveness;
   const Tr = Ts + s.itDeltaTK;
   if (s.kind === 'direct-air') {
-    const wHi = Math.min(psy.GetHumRatioFromTDewPoint(e.dewPointMaxC, p), psy.GetHumRatioFromRelHum(Ts, e.rhMaxPct / 100, p));
-    const wLo = Math.max(psy.GetHumRatioFromTDewPoint(e.dewPointMinC, p), psy.GetHumRatioFromRelHum(Ts, e.rhMinPct / 100, p));
+    // Envelope dew points are over liquid water also below 0 °C (WMO-No. 8), as the engine reads them (fixtures.ts).
+    const wHi = Math.min(wFromDewPoint(e.dewPointMaxC, p), psy.GetHumRatioFromRelHum(Ts, e.rhMaxPct / 100, p));
+    const wLo = Math.max(wFromDewPoint(e.dewPointMinC, p), psy.GetHumRatioFromRelHum(Ts, e.rhMinPct / 100, p));
     const offCoil = Ts - f;
     let mode: number;
     if (w > wHi) mode = MODE.mechanical;
@@ -86,8 +87,9 @@ describe.each(CLIMATES.map((c, i) => [c.name, c, i] as const))('%s', (_name, cli
   const series = syntheticSeries(climate, { hours: 8760, step: 4, seed: 17 + index });
   const p = psy.GetStandardAtmPressure(climate.elevationM);
   const reference = Array.from(series.dryBulbC, (t, k) => {
-    const w = psy.GetHumRatioFromRelHum(t, series.humidity.values[k] / 100, p);
-    return { t, w, twb: psy.GetTWetBulbFromHumRatio(t, w, p) };
+    // RH over liquid water at every temperature: psychrolib is fed the vapour pressure over water below 0.01 °C (fixtures.ts).
+    const w = wFromRh(t, series.humidity.values[k], p);
+    return { t, w, twb: wetBulbOf(t, w, p) };
   });
 
   it.each(Object.keys(SCENARIOS))('%s agrees with the independent calculation', (key) => {

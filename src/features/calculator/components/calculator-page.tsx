@@ -46,7 +46,8 @@ export function CalculatorPage() {
         <h1 className="text-xl font-semibold">Air-state calculator</h1>
         <p className="text-sm text-ink-soft">
           Fill any two properties at a pressure or elevation — or one, for saturated air — and read the rest. Same engine as the runs (ASHRAE Handbook—Fundamentals
-          2017, ch. 1).
+          2017, ch. 1). Relative humidity and dew point are over liquid water at every temperature, as weather data give them (WMO-No. 8); the frost point is
+          over ice.
         </p>
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
@@ -93,7 +94,7 @@ export function CalculatorPage() {
               ))}
               <label className="mt-2 flex items-center gap-2 text-sm">
                 <input type="checkbox" className="accent-harbour" checked={input.saturated} onChange={(e) => setInput((i) => ({ ...i, saturated: e.target.checked }))} />
-                Saturated air (on the saturation curve: one property is enough)
+                Saturated air (on the saturation curve over liquid water: one property is enough)
               </label>
               <div className="mt-3 flex items-center justify-between text-xs text-ink-soft">
                 <span>

@@ -15,8 +15,13 @@ export function stateRows(s: MoistAirState, system: UnitSystem): { label: string
     { label: 'Pressure', value: formatQuantity('pressure', system, s.pressurePa) },
     { label: 'Dry-bulb', value: formatQuantity('temperature', system, s.dryBulbC) },
     { label: 'Wet-bulb (thermodynamic)', value: formatQuantity('temperature', system, s.wetBulbC) },
-    { label: 'Dew point', value: formatQuantity('temperature', system, s.dewPointC) },
-    { label: 'Relative humidity', value: `${fixed(s.rhPct, 1)} %` },
+    { label: 'Dew point (over water)', value: formatQuantity('temperature', system, s.dewPointC) },
+    {
+      // A separate quantity: where the air saturates over ice. It exists only when the dew point is below about 0 °C.
+      label: 'Frost point (over ice)',
+      value: Number.isNaN(s.frostPointC) ? '— (only below 0 °C)' : formatQuantity('temperature', system, s.frostPointC),
+    },
+    { label: 'Relative humidity (over water)', value: `${fixed(s.rhPct, 1)} %` },
     { label: 'Humidity ratio', value: formatQuantity('humidityRatio', system, s.humidityRatio) },
     { label: 'Enthalpy', value: formatQuantity('enthalpy', system, s.enthalpyKJPerKg) },
     { label: 'Vapour pressure', value: formatQuantity('pressure', system, s.vapourPressurePa) },

@@ -7,6 +7,8 @@ export interface UploadParams {
   maxGapHours: number;
   timeBasis: TimeBasis;
   mapping?: MappingOverride;
+  /** The file states RH or dew point below 0 °C over ice (import option; default over liquid water). */
+  humidityOverIce?: boolean;
 }
 
 /** Upload progress: bytes sent of the total; `phase` turns to 'processing' once the body is sent and the server reads it. */
@@ -20,6 +22,7 @@ export function uploadQuery(params: UploadParams): string {
   const query = new URLSearchParams({ fileName: params.fileName, maxGapHours: String(params.maxGapHours), timeBasis: params.timeBasis });
   if (params.name) query.set('name', params.name);
   if (params.mapping && Object.keys(params.mapping).length) query.set('mapping', JSON.stringify(params.mapping));
+  if (params.humidityOverIce) query.set('humidityOverIce', 'true');
   return query.toString();
 }
 

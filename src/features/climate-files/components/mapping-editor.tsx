@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import type { DetectedMapping } from '../../../../shared/climate/types';
+import { HumidityOverIceChoice } from './humidity-over-ice-choice';
 import { defaultHumidityUnit, draftFromDetected, timeDraftFor, type HumidityDraft, type MappingDraft, type TimeDraft } from '../lib/mapping-draft';
 
 const selectClass = 'rounded border border-rule bg-panel px-2 py-1 text-sm';
@@ -168,6 +169,8 @@ export function MappingEditor({
           ))}
         </select>
       </Row>
+
+      <HumidityOverIceChoice draft={draft} onChange={onChange} />
 
       <Row
         label="Station pressure"

@@ -75,6 +75,7 @@ export function UploadWizard({
     maxGapHours,
     timeBasis,
     mapping: mappingDraft ? overrideFromDraft(mappingDraft) : undefined,
+    humidityOverIce: mappingDraft?.humidityOverIce ?? false,
   });
 
   function explain(e: unknown): string {

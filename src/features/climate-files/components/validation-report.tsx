@@ -1,6 +1,7 @@
 import type { ImportIssue, ImportReport } from '../../../../shared/climate/types';
 import { csvRow } from '../../../../shared/csv';
 import { Notice } from '@/components/ui/notice';
+import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
 
 const severityStyle: Record<ImportIssue['severity'], string> = {
   error: 'text-signal-bad',
@@ -35,6 +36,9 @@ export function ValidationReport({ report }: { report: ImportReport }) {
       <Notice tone={report.ok ? (report.counts.missingHours || report.issues.some((i) => i.severity === 'warning') ? 'warn' : 'info') : 'bad'} title={report.ok ? 'The file can be stored' : 'The file cannot be stored as it is'}>
         {report.summary}
         {report.timeLayout && <span className="block">Time: {report.timeLayout}.</span>}
+        <span className="block" data-testid="report-humidity-reading">
+          Relative humidity and dew point read {humidityReadingWords(report.humidityOverIce === true)}.
+        </span>
         <span className="block">
           Gaps up to {report.maxGapHours} h are filled by linear interpolation and marked as filled; longer gaps stay missing and count as hours with no data.
         </span>

@@ -1,9 +1,9 @@
 /**
  * The stored hours as the charts need them: typed arrays (JSON nulls back to NaN) and the humidity
- * ratio of every hour at the file's pressure, or at the site's standard-atmosphere pressure when the
- * file has none.
+ * ratio of every hour at the file's pressure, or at the site's standard-atmosphere pressure where the
+ * file has none (hourlyPressurePa, as a run does).
  */
-import { bulkStates, standardPressurePa } from '../../../../shared/psychrometrics';
+import { bulkStates, hourlyPressurePa } from '../../../../shared/psychrometrics';
 import type { ClimateFileHours } from '../api/get-climate-file-hours';
 
 export interface ChartSeries {
@@ -25,10 +25,8 @@ export function toFloat64(values: ArrayLike<number | null>): Float64Array {
 
 export function chartSeries(hours: ClimateFileHours, elevationM: number): ChartSeries {
   const dryBulbC = toFloat64(hours.dryBulbC);
-  const state = bulkStates({
-    dryBulbC,
-    humidity: { kind: hours.humidityKind, values: toFloat64(hours.humidity) },
-    pressurePa: hours.pressurePa ? toFloat64(hours.pressurePa) : standardPressurePa(elevationM),
-  });
+  const humidity = { kind: hours.humidityKind, values: toFloat64(hours.humidity) };
+  const { pressurePa } = hourlyPressurePa({ dryBulbC, humidity, pressurePa: hours.pressurePa ? toFloat64(hours.pressurePa) : null }, elevationM);
+  const state = bulkStates({ dryBulbC, humidity, pressurePa });
   return { timestampsMs: Float64Array.from(hours.timestampsMs), dryBulbC, humidityRatio: state.humidityRatio, dewPointC: state.dewPointC };
 }

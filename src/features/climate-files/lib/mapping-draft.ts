@@ -17,6 +17,8 @@ export interface MappingDraft {
   dryBulb: Override['dryBulb'] | null;
   humidity: HumidityDraft | null;
   pressure: Override['pressure'];
+  /** The import option humidityOverIce: the file states RH or dew point below 0 °C over ice (not part of the column override). */
+  humidityOverIce: boolean;
 }
 
 export function draftFromDetected(m: DetectedMapping): MappingDraft {
@@ -38,6 +40,7 @@ export function draftFromDetected(m: DetectedMapping): MappingDraft {
     dryBulb: m.dryBulb && m.dryBulb.quantity === 'dry-bulb' ? { column: m.dryBulb.column, unit: m.dryBulb.unit } : null,
     humidity,
     pressure: m.pressure && m.pressure.quantity === 'pressure' ? { column: m.pressure.column, unit: m.pressure.unit } : null,
+    humidityOverIce: false,
   };
 }
 

@@ -3,6 +3,7 @@ import { Notice } from '@/components/ui/notice';
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import type { ReportRun } from '../../../../shared/report/report-data';
+import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
 import { day, humidityWords } from './report-format';
 import { Facts } from './report-layout';
 
@@ -30,6 +31,7 @@ export function ClimateFacts({ run }: { run: ReportRun }) {
     ['Climate file', c.name],
     ['Uploaded as', c.fileName ?? 'the file has since been deleted from the project'],
     ['Period', <span className="num">{day(c.firstHourMs)} to {day(c.lastHourMs)} ({c.hours.toLocaleString('en')} hours)</span>],
+    ['Humidity in the file', <span data-testid="humidity-reading">{humidityReadingWords(c.humidityOverIce)}</span>],
   ];
   if (v) {
     items.push(

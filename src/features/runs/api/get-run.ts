@@ -17,6 +17,8 @@ export interface RunClimate {
   site: { id: number; name: string; elevationM: number; timeZone: string };
   elevationM: number;
   utcOffsetMinutes: number;
+  /** The file was read with humidity over ice below 0 °C (import option); absent for runs made before the option. */
+  humidityOverIce?: boolean;
 }
 
 export interface RunRecord {

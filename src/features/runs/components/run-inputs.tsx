@@ -4,6 +4,7 @@ import type { RunRecord } from '../api/get-run';
 import { flattenInputs } from '../../../../shared/report/inputs';
 import { formatInputValue } from '@/components/ui/input-value';
 import { inputLabel } from '../../../../shared/scenario/input-labels';
+import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
 
 /** Everything the run was computed from, exactly as stored with it: scenario, climate file, engine. */
 export function RunInputs({ run }: { run: RunRecord }) {
@@ -45,6 +46,8 @@ export function RunInputs({ run }: { run: RunRecord }) {
           {run.results ? formatQuantity('elevation', unitSystem, run.results.site.elevationM) : '–'}
           <span className="block text-ink-faint">the site's; it takes the place of the scenario's elevationM</span>
         </dd>
+        <dt className="text-ink-soft">Humidity in the file</dt>
+        <dd data-testid="run-humidity-reading">{humidityReadingWords(c.humidityOverIce)}</dd>
         <dt className="text-ink-soft">Pressure</dt>
         <dd>{run.results?.site.pressureSource === 'weather' ? 'station pressure from the file' : 'standard atmosphere at the site elevation'}</dd>
       </dl>

@@ -1,4 +1,4 @@
-import { bulkStates, standardPressurePa, type BulkState, type HumidityKind } from '../../../../shared/psychrometrics';
+import { bulkStates, hourlyPressurePa, type BulkState, type HumidityKind } from '../../../../shared/psychrometrics';
 
 export interface ClimateColumns {
   humidityKind: HumidityKind;
@@ -25,24 +25,20 @@ function column(values: ArrayLike<number | null>): Float64Array {
 /**
  * Each hour's full moist-air state from the climate file's columns, by the same engine the run used:
  * station pressure where the file has it, else the standard atmosphere at the site's elevation
- * (ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 3). Missing hours give NaN.
+ * (hourlyPressurePa, as a run does). Missing hours give NaN.
  */
 export function climateStates(columns: ClimateColumns, elevationM: number): HourStates {
-  const standardPa = standardPressurePa(elevationM);
   const dryBulbC = column(columns.dryBulbC);
-  let pressure: Float64Array | number = standardPa;
-  let sitePressurePa = standardPa;
-  if (columns.pressurePa) {
-    const p = column(columns.pressurePa);
+  const humidity = { kind: columns.humidityKind, values: column(columns.humidity) };
+  const station = columns.pressurePa ? column(columns.pressurePa) : null;
+  const pressure = hourlyPressurePa({ dryBulbC, humidity, pressurePa: station }, elevationM);
+  let sitePressurePa = pressure.sitePressurePa;
+  if (station) {
     let sum = 0;
     let count = 0;
-    for (let i = 0; i < p.length; i++) {
-      if (p[i] !== p[i]) p[i] = standardPa;
-      else (sum += p[i]), count++;
-    }
-    pressure = p;
+    for (let i = 0; i < station.length; i++) if (station[i] === station[i]) (sum += station[i]), count++;
     if (count > 0) sitePressurePa = sum / count;
   }
-  const states = bulkStates({ dryBulbC, humidity: { kind: columns.humidityKind, values: column(columns.humidity) }, pressurePa: pressure });
+  const states = bulkStates({ dryBulbC, humidity, pressurePa: pressure.pressurePa });
   return { ...states, dryBulbC, sitePressurePa };
 }
