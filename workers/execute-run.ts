@@ -11,6 +11,7 @@ export interface ExecuteRunOutput {
   results: ScenarioResults;
   modes: Uint8Array;
   mechanicalFraction: Float64Array;
+  humidified: Uint8Array;
 }
 
 /** Piscina task: one run, returning the summary and the per-hour modes the run page draws. */
@@ -18,5 +19,6 @@ export function executeRun({ scenario, series, options }: ExecuteRunInput): Exec
   const parsed = parseScenario(scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
   const run = runScenario(parsed.scenario, series, options);
-  return { results: run.results, modes: run.classification.modes, mechanicalFraction: run.classification.mechanicalFraction };
+  const { modes, mechanicalFraction, humidified } = run.classification;
+  return { results: run.results, modes, mechanicalFraction, humidified };
 }
