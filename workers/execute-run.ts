@@ -1,4 +1,4 @@
-import { parseScenario, runScenario, type RunOptions, type ScenarioResults, type ScenarioSeries } from '../shared/scenario';
+import { migrateScenario, parseScenario, runScenario, type RunOptions, type ScenarioResults, type ScenarioSeries } from '../shared/scenario';
 
 export interface ExecuteRunInput {
   /** Scenario JSON as stored; validated again here because a worker must not trust its caller. */
@@ -16,7 +16,8 @@ export interface ExecuteRunOutput {
 
 /** Piscina task: one run, returning the summary and the per-hour modes the run page draws. */
 export function executeRun({ scenario, series, options }: ExecuteRunInput): ExecuteRunOutput {
-  const parsed = parseScenario(scenario);
+  // A run queued before engine 2.0.0 holds a scenario with retired inputs; it runs on their migration.
+  const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
   const run = runScenario(parsed.scenario, series, options);
   const { modes, mechanicalFraction, humidified } = run.classification;
