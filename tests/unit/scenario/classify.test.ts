@@ -6,14 +6,14 @@
  */
 import { describe, expect, it } from 'vitest';
 import { classifyHours, EXCURSION, MODE, type InletLimits } from '../../../shared/scenario/classify';
-import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, wFromDewPoint, type ReferenceState } from './fixtures';
+import { makeScenario, outdoorHours, plantOf, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, wFromDewPoint, type ReferenceState } from './fixtures';
 
 const p = SEA_LEVEL_PA;
 const limits: InletLimits = RECOMMENDED;
 
 function classifyOne(scenario: ReturnType<typeof makeScenario>, state: ReferenceState, envelope: InletLimits = limits) {
-  const out = classifyHours(scenario.system, envelope, outdoorHours([state]));
-  return { mode: out.modes[0], fraction: out.mechanicalFraction[0], excursion: out.excursions[0], evaporation: out.evaporationKgPerKgAir[0] };
+  const out = classifyHours(scenario.system, envelope, outdoorHours([state]), plantOf(scenario));
+  return { mode: out.modes[0], fraction: out.mechanicalFraction[0], excursion: out.excursions[0], evaporation: out.evaporationKgPerKgAir[0], humidified: out.humidified[0] };
 }
 
 describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelope at sea level)', () => {
@@ -61,13 +61,19 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
     expect(r.excursion).toBe(0);
   });
 
-  it('rule 2: too dry with an evaporative stage is adiabatic assist, humidifying the outdoor share to W_lo', () => {
+  // Engine 2.0.0: this hour was "adiabatic assist" in 1.0.0; the stage only adds moisture, so it is free cooling
+  // with humidification (issue 12 §2), and the outdoor share now comes from an enthalpy balance, not a dry-bulb one.
+  it('rule 2: too dry with an evaporative stage is free cooling with humidification, the outdoor share humidified to W_lo', () => {
     const hour = stateFromDewPoint(-5, -20);
     expect(hour.w).toBeLessThan(wLo);
     const r = classifyOne(withEvap, hour);
-    expect(r.mode).toBe(MODE.adiabatic);
-    // Outdoor share of the supply from the sensible mixing balance: (Tr − (Ts − f)) / (Tr − T).
-    const share = (Tr - (Ts - f)) / (Tr - hour.t);
+    expect(r.mode).toBe(MODE.free);
+    expect(r.humidified).toBe(1);
+    // Outdoor share x from h(Ts − f, W_lo) = x·h_out + (1 − x)·h(Tr, W_lo): the mix is humidified at constant enthalpy.
+    const hOf = (t: number, w: number) => psy.GetMoistAirEnthalpy(t, w) / 1000;
+    const share = (hOf(Tr, wLo) - hOf(Ts - f, wLo)) / (hOf(Tr, wLo) - hOf(hour.t, hour.w));
+    expect(share).toBeGreaterThan(0);
+    expect(share).toBeLessThan((Tr - (Ts - f)) / (Tr - hour.t)); // less outdoor air than a dry-bulb balance gives
     expect(r.evaporation).toBeCloseTo(share * (wLo - hour.w), 7);
     expect(r.excursion).toBe(0);
   });
@@ -98,15 +104,29 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
     expect(r.fraction).toBeCloseTo(7 / 13, 6);
   });
 
-  it('rule 3: ε reaches Ts − f but the leaving air is too humid, so mechanical without pre-cooling', () => {
+  // Engine 2.0.0: the stage is modulated to the moisture limit in mechanical hours (issue 12 §5) instead of staying off.
+  it('rule 3: ε reaches Ts − f but the leaving air is too humid, so mechanical with the stage modulated to W_hi', () => {
     const hour = stateFromDewPoint(35, 10);
     expect(hour.w).toBeLessThanOrEqual(wHi);
     expect(hour.t - 0.8 * (hour.t - hour.twb)).toBeLessThanOrEqual(Ts - f);
     expect(psy.GetHumRatioFromTWetBulb(Ts - f, hour.twb, p)).toBeGreaterThan(wHi);
     const r = classifyOne(withEvap, hour);
     expect(r.mode).toBe(MODE.mechanical);
-    expect(r.fraction).toBeCloseTo((35 - 23) / 13, 6);
-    expect(r.evaporation).toBe(0);
+    // The stage wets the air along its wet-bulb line only until W = W_hi: find that dry-bulb with psychrolib by bisection.
+    let lo = hour.twb;
+    let hi = hour.t;
+    for (let k = 0; k < 60; k++) {
+      const mid = (lo + hi) / 2;
+      if (psy.GetHumRatioFromTWetBulb(mid, hour.twb, p) > wHi) lo = mid;
+      else hi = mid;
+    }
+    const enteringC = (lo + hi) / 2;
+    const hOf = (t: number, w: number) => psy.GetMoistAirEnthalpy(t, w) / 1000;
+    const outdoorLoad = hOf(enteringC, wHi) - hOf(Ts - f, wHi);
+    const recirculationLoad = hOf(Tr, hour.w) - hOf(Ts - f, hour.w);
+    expect(r.fraction).toBeCloseTo(outdoorLoad / recirculationLoad, 4);
+    expect(r.fraction).toBeLessThan((35 - 23) / 13); // better than the unwetted air
+    expect(r.evaporation).toBeCloseTo(wHi - hour.w, 6);
   });
 
   it('rule 3: ε cannot reach Ts − f, so mechanical with the pre-cooled outdoor air easing the coil', () => {
@@ -218,13 +238,13 @@ describe('no data', () => {
     const scenario = makeScenario('direct-air');
     const hours = outdoorHours([stateFromDewPoint(10, 5), { t: Number.NaN, w: 0.005, twb: 5 }, stateFromDewPoint(12, 5), { t: 10, w: Number.NaN, twb: 5 }]);
     hours.flags = Uint8Array.from([0, 0, 2, 1]);
-    const out = classifyHours(scenario.system, limits, hours);
+    const out = classifyHours(scenario.system, limits, hours, plantOf(scenario));
     expect([...out.modes]).toEqual([MODE.free, MODE.noData, MODE.noData, MODE.noData]);
     expect([...out.mechanicalFraction]).toEqual([0, 0, 0, 0]);
   });
 
   it('refuses arrays of different lengths with a RangeError naming the array', () => {
     const hours = outdoorHours([stateFromDewPoint(10, 5)]);
-    expect(() => classifyHours(makeScenario('direct-air').system, limits, { ...hours, wetBulbC: new Float64Array(2) })).toThrow(/wetBulbC has 2 hours/);
+    expect(() => classifyHours(makeScenario('direct-air').system, limits, { ...hours, wetBulbC: new Float64Array(2) }, { fanHeatK: 1 })).toThrow(/wetBulbC has 2 hours/);
   });
 });
