@@ -5,6 +5,7 @@ import { useProjectRole } from '@/lib/projects';
 import { useScenario } from '../api/get-scenario';
 import { newScenarioValues, toFormValues } from '../utils/scenario-form';
 import { ScenarioForm } from './scenario-form';
+import { MigrationNotice } from './migration-notice';
 
 /** /projects/:projectId/scenarios/new and /projects/:projectId/scenarios/:scenarioId */
 export function ScenarioEditorPage() {
@@ -27,14 +28,17 @@ export function ScenarioEditorPage() {
   }
   const stored = scenario.data?.scenario;
   return (
-    <ScenarioForm
-      key={stored?.id ?? 'new'}
-      projectId={projectId}
-      scenarioId={stored?.id ?? null}
-      initial={stored ? toFormValues(stored.scenario) : newScenarioValues}
-      climateFiles={climateFiles.data?.climateFiles ?? []}
-      canEdit={role === undefined ? false : canEdit}
-      roleKnown={role !== undefined}
-    />
+    <div className="space-y-4">
+      {stored && <MigrationNotice projectId={projectId} stored={stored} canDismiss={role !== undefined && canEdit} />}
+      <ScenarioForm
+        key={stored?.id ?? 'new'}
+        projectId={projectId}
+        scenarioId={stored?.id ?? null}
+        initial={stored ? toFormValues(stored.scenario) : newScenarioValues}
+        climateFiles={climateFiles.data?.climateFiles ?? []}
+        canEdit={role === undefined ? false : canEdit}
+        roleKnown={role !== undefined}
+      />
+    </div>
   );
 }
