@@ -34,6 +34,6 @@ export const modeInk: Record<ModeKey, string> = {
 const modeHoursField: Record<ModeKey, 'free' | 'adiabatic' | 'mechanical' | 'noData'> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
 
 /** The hours of one mode in a results table (a run's, a month's, a year's). */
-export function hoursOfMode(row: Omit<ModeHours, 'total'>, mode: ModeKey): number {
+export function hoursOfMode(row: Pick<ModeHours, 'free' | 'adiabatic' | 'mechanical' | 'noData'>, mode: ModeKey): number {
   return row[modeHoursField[mode]];
 }

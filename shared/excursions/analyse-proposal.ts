@@ -6,6 +6,7 @@
 import { bulkStates, standardPressurePa } from '../psychrometrics';
 import { MODE } from '../scenario/classify';
 import { deratedDryBulbMaxC, type EnvelopeLimits } from '../scenario/envelopes';
+import { designFanHeatK } from '../scenario/fans';
 import type { ScenarioSeries } from '../scenario/run';
 import type { Scenario } from '../scenario/schema';
 import { countExcursions, type EnvelopeBounds, type ExcursionCounts } from './excursion-count';
@@ -72,6 +73,7 @@ export function analyseProposal(scenario: Scenario, series: ScenarioSeries, elev
     control,
     { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa, flags: series.flags },
     { supplyAirC: proposal.supplyAirC, ceilingC, hallDewPointC },
+    { fanHeatK: designFanHeatK(scenario.energy.fanPowerFraction, scenario.system.itDeltaTK) },
   );
   const counts = countExcursions({
     timestampsMs: series.timestampsMs,

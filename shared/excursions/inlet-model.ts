@@ -10,12 +10,13 @@
  *
  * direct-air — outdoor air reaches the hall; mixing with return air never lets the supply fall below Ts:
  *   free: dry-bulb max(Ts, T + f), moisture the outdoor humidity ratio;
- *   adiabatic, air too dry (T + f ≤ Tc): dry-bulb max(Ts, T + f), humidified to the envelope's lower limit;
+ *   free with humidification (air too dry): dry-bulb max(Ts, T + f), humidified to the envelope's lower limit;
  *   adiabatic, cooling (T + f > Tc): dry-bulb max(Ts, tE + f), moisture on the outdoor wet-bulb line at
  *     that temperature less the fan heat (the stage modulated to just reach it);
  *   mechanical: the coil holds Ts and dehumidifies to the envelope's upper limit at Ts: min(W, W_hi(Ts)).
  * indirect-air — hall air never meets outdoor air. The exchanger's steady supply with return = supply +
- *   ΔT_IT is S = Tsc + (ΔT_IT(1 − ε_hx) + f) / ε_hx for scavenger air at Tsc (the same condition the
+ *   ΔT_IT is S = Tsc + (ΔT_IT(1 − ε_hx) + f) / ε_hx for scavenger air at Tsc, ε_hx the hall-side
+ *   effectiveness at the scenario's scavenger air ratio (shared/scenario/exchanger.ts) (the same condition the
  *   classifier tests, solved for S): free max(Ts, S(T)); adiabatic max(Ts, S(tE)); mechanical Ts.
  * water-side — the coil keeps the scenario's approach a = supplyAirC − chilledWaterSupplyC: the
  *   economiser's water w = (Twb for a tower, else T, or tE when the dry cooler is wetted) + approachK gives
@@ -25,7 +26,8 @@
  *   modelled) at the dew point `hallDewPointC` the caller chooses; only their dry-bulb moves.
  */
 import { humidityRatioFromDewPoint, humidityRatioFromWetBulb } from '../psychrometrics';
-import { classifyHours, MODE, moistureTargets, type InletLimits, type OutdoorHours } from '../scenario/classify';
+import { classifyHours, MODE, moistureTargets, type ClassifierPlant, type InletLimits, type OutdoorHours } from '../scenario/classify';
+import { hallSideEffectiveness } from '../scenario/exchanger';
 import type { ScenarioSystem } from '../scenario/schema';
 
 export interface InletProposal {
@@ -50,16 +52,17 @@ export interface InletHours {
  * Inlet dry-bulb and humidity ratio per hour for `system` (as run) under `proposal`, with the control
  * envelope `limits` (dry-bulb maximum already derated). Psychrometric relations: ASHRAE Handbook—
  * Fundamentals (2017) ch. 1 (eq. 33/35 wet-bulb line, eq. 36 dew point) through shared/psychrometrics.
+ * `plant.fanHeatK` is the design fan heat derived from the fan power (shared/scenario/fans.ts, designFanHeatK).
  * Throws RangeError for a bad proposal (a ceiling below the setpoint, a non-finite value).
  */
-export function modelInletHours(system: ScenarioSystem, limits: InletLimits, outdoor: OutdoorHours, proposal: InletProposal): InletHours {
+export function modelInletHours(system: ScenarioSystem, limits: InletLimits, outdoor: OutdoorHours, proposal: InletProposal, plant: ClassifierPlant): InletHours {
   const { supplyAirC: ts, ceilingC: tc, hallDewPointC } = proposal;
   if (!Number.isFinite(ts)) throw new RangeError(`supplyAirC must be a finite number, got ${ts}`);
   if (!Number.isFinite(tc) || tc < ts) throw new RangeError(`ceilingC must be a number at or above supplyAirC ${ts} °C, got ${tc}`);
   if (!Number.isFinite(hallDewPointC)) throw new RangeError(`hallDewPointC must be a finite number, got ${hallDewPointC}`);
 
-  const classified = classifyHours(atCeiling(system, tc), limits, outdoor);
-  const { modes } = classified;
+  const classified = classifyHours(atCeiling(system, tc), limits, outdoor, plant);
+  const { modes, humidified } = classified;
   const n = modes.length;
   const inletC = new Float64Array(n);
   const inletW = new Float64Array(n);
@@ -67,7 +70,7 @@ export function modelInletHours(system: ScenarioSystem, limits: InletLimits, out
   const fixedPressure = typeof pressurePa === 'number' ? pressurePa : Number.NaN;
   const pressureSeries = typeof pressurePa === 'number' ? null : pressurePa;
   const eps = system.evaporativeEffectiveness;
-  const f = system.fanHeatK;
+  const f = plant.fanHeatK;
 
   // Moisture targets and the hall's humidity ratio change only with pressure: recomputed when it changes.
   let cachedPressure = Number.NaN;
@@ -78,7 +81,7 @@ export function modelInletHours(system: ScenarioSystem, limits: InletLimits, out
   // Dry-bulb offset of the supply above the scavenger air or economiser water, K (indirect-air, water-side).
   let offsetK = 0;
   if (system.kind === 'indirect-air') {
-    const hx = system.heatExchangerEffectiveness;
+    const hx = hallSideEffectiveness(system.heatExchangerEffectiveness, system.scavengerAirRatio);
     offsetK = (system.itDeltaTK * (1 - hx) + f) / hx;
   } else if (system.kind === 'water-side') {
     offsetK = system.supplyAirC - system.chilledWaterSupplyC + system.approachK;
@@ -110,10 +113,7 @@ export function modelInletHours(system: ScenarioSystem, limits: InletLimits, out
         inletW[i] = w < highWAtSetpoint ? w : highWAtSetpoint;
       } else if (mode === MODE.free) {
         inletC[i] = Math.max(ts, t + f);
-        inletW[i] = w;
-      } else if (t + f <= tc) {
-        inletC[i] = Math.max(ts, t + f);
-        inletW[i] = lowWAtCeiling;
+        inletW[i] = humidified[i] === 1 ? lowWAtCeiling : w;
       } else {
         const c = Math.max(ts, tE + f);
         inletC[i] = c;

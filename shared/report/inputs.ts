@@ -15,11 +15,32 @@ export interface InputRow {
  */
 export function flattenInputs(value: unknown, prefix = ''): InputRow[] {
   if (value === null || value === undefined) return [];
+  if (Array.isArray(value)) return [{ path: prefix, value: listText(value), kind: 'plain' }];
   if (typeof value !== 'object') {
     const key = prefix.split('.').pop() ?? prefix;
     return [{ path: prefix, value: value as string | number | boolean, kind: typeof value === 'number' ? kindOfKey(key) : 'plain' }];
   }
   return Object.entries(value as Record<string, unknown>).flatMap(([k, v]) => flattenInputs(v, prefix ? `${prefix}.${k}` : k));
+}
+
+/** Lists longer than this are summarised rather than written out (an hourly load profile has 8760 values). */
+const LIST_WRITTEN_OUT = 30;
+
+/** A list input as one text: short lists written out, long numeric lists summarised by count, range and mean. */
+function listText(list: unknown[]): string {
+  if (list.length <= LIST_WRITTEN_OUT) return list.map(String).join(', ');
+  const numbers = list.filter((v): v is number => typeof v === 'number');
+  if (numbers.length !== list.length) return `${list.length} values`;
+  let min = Infinity;
+  let max = -Infinity;
+  let sum = 0;
+  for (const v of numbers) {
+    if (v < min) min = v;
+    if (v > max) max = v;
+    sum += v;
+  }
+  const r = (x: number) => Math.round(x * 1000) / 1000;
+  return `${list.length} values, ${r(min)} to ${r(max)}, mean ${r(sum / list.length)}`;
 }
 
 export function kindOfKey(key: string): InputKind {

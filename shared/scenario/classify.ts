@@ -1,7 +1,7 @@
 /**
- * The hour classifier: each hour of outdoor weather becomes free cooling, adiabatic assist,
- * mechanical or no data, with the fraction of the cooling load the compressors carry, the
- * envelope excursions, and the water the evaporative stage takes up. Typed arrays in and out,
+ * The hour classifier: each hour of outdoor weather becomes free cooling (with or without
+ * humidification), adiabatic assist, mechanical or no data, with the fraction of the cooling load the
+ * compressors carry, the envelope excursions, and the water the evaporative stage takes up. Typed arrays in and out,
  * no object per hour; the rules per system kind are written out in README.md, "How it works".
  */
 import {
@@ -12,6 +12,7 @@ import {
   maxHumidityRatioForLimits,
 } from '../psychrometrics';
 import type { EnvelopeLimits } from './envelopes';
+import { hallSideEffectiveness } from './exchanger';
 import type { ScenarioSystem } from './schema';
 
 export const MODE = { free: 0, adiabatic: 1, mechanical: 2, noData: 3 } as const;
@@ -43,15 +44,27 @@ export interface OutdoorHours {
   flags?: Uint8Array | null;
 }
 
+/** What the classifier needs beyond the system's own inputs, derived from the energy inputs. */
+export interface ClassifierPlant {
+  /** Fan heat of the hall fans at design, K (shared/scenario/fans.ts, designFanHeatK). */
+  fanHeatK: number;
+}
+
 export interface HourClassification {
   modes: Uint8Array;
+  /**
+   * 1 for a free-cooling hour in which the evaporative stage only adds moisture (direct air drier than the
+   * envelope's lower moisture limit); 0 otherwise.
+   */
+  humidified: Uint8Array;
   /** Share of the cooling load (IT + fan heat) carried by compressors, 0…1; 0 outside mechanical hours. */
   mechanicalFraction: Float64Array;
   excursions: Uint8Array;
   /**
    * Water taken up in the evaporative stage, kg per kg of dry air: per kg of hall supply air for
-   * the air-side kinds, per kg of heat-rejection air for a water-side dry cooler; 0 for towers
-   * (their evaporation follows from the heat rejected, see energy.ts).
+   * the air-side kinds (the scavenger air ratio already applied for indirect air), per kg of
+   * heat-rejection air for a wetted dry cooler; 0 for towers (their evaporation follows from the heat
+   * rejected and the weather, see tower.ts). Humidification water in humidified hours.
    */
   evaporationKgPerKgAir: Float64Array;
 }
@@ -81,7 +94,7 @@ export function moistureTargets(limits: InletLimits, supplyAirC: number, pressur
  * Classifies every hour. Hours with a NaN input or a missing flag are MODE.noData with fraction 0.
  * Throws RangeError only for a bad argument (array lengths); never mid-series for bad data.
  */
-export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours: OutdoorHours): HourClassification {
+export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours: OutdoorHours, plant: ClassifierPlant): HourClassification {
   const n = hours.dryBulbC.length;
   for (const [name, array] of [['wetBulbC', hours.wetBulbC], ['humidityRatio', hours.humidityRatio]] as const) {
     if (array.length !== n) throw new RangeError(`${name} has ${array.length} hours, dryBulbC has ${n}`);
@@ -93,6 +106,7 @@ export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours
 
   const out: HourClassification = {
     modes: new Uint8Array(n),
+    humidified: new Uint8Array(n),
     mechanicalFraction: new Float64Array(n),
     excursions: new Uint8Array(n),
     evaporationKgPerKgAir: new Float64Array(n),
@@ -101,7 +115,11 @@ export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours
     (system.supplyAirC > limits.dryBulbMaxC ? EXCURSION.supplyAboveMax : 0) | (system.supplyAirC < limits.dryBulbMinC ? EXCURSION.supplyBelowMin : 0);
 
   const rule =
-    system.kind === 'direct-air' ? directAirHour(system, limits, out) : system.kind === 'indirect-air' ? indirectAirHour(system, out) : waterSideHour(system, out);
+    system.kind === 'direct-air'
+      ? directAirHour(system, plant.fanHeatK, limits, out)
+      : system.kind === 'indirect-air'
+        ? indirectAirHour(system, plant.fanHeatK, out)
+        : waterSideHour(system, out);
   const { dryBulbC, humidityRatio, wetBulbC, pressurePa, flags } = hours;
   const fixedPressure = typeof pressurePa === 'number' ? pressurePa : Number.NaN;
   const pressureSeries = typeof pressurePa === 'number' ? null : pressurePa;
@@ -135,12 +153,24 @@ function wetBulbLineW(tC: number, wetBulbC: number, pressurePa: number): number 
 /** Moist-air enthalpy, kJ/kg dry air: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 32. Inlined for the loop. */
 const enthalpy = (tC: number, w: number): number => 1.006 * tC + w * (2501 + 1.86 * tC);
 
-function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, limits: InletLimits, out: HourClassification): HourRule {
-  const { supplyAirC, fanHeatK, itDeltaTK, evaporativeEffectiveness: eps } = system;
+/**
+ * Dry-bulb, °C, where the hour's wet-bulb line reaches humidity ratio w: eq. 33 of ASHRAE 2017 ch. 1 solved for t,
+ *   t = [(2501 − 2.326·t*)·Ws* + 1.006·t* − W·(2501 − 4.186·t*)] / (1.006 + 1.86·W),
+ * with Ws* the saturation humidity ratio at the wet-bulb t* (the line's W at t = t*).
+ */
+function wetBulbLineC(w: number, wetBulbC: number, pressurePa: number): number {
+  const wsStar = wetBulbLineW(wetBulbC, wetBulbC, pressurePa);
+  return ((2501 - 2.326 * wetBulbC) * wsStar + 1.006 * wetBulbC - w * (2501 - 4.186 * wetBulbC)) / (1.006 + 1.86 * w);
+}
+
+function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, fanHeatK: number, limits: InletLimits, out: HourClassification): HourRule {
+  const { supplyAirC, itDeltaTK, evaporativeEffectiveness: eps } = system;
   const offCoilC = supplyAirC - fanHeatK;
   const returnC = supplyAirC + itDeltaTK;
   let targetsPressure = Number.NaN;
   let targets: MoistureTargets = { highW: 0, lowW: 0, highDewPointC: 0 };
+  // Where the mechanical-hour evaporative stage leaves the outdoor air, written by enteringState.
+  const entering = { c: 0, w: 0 };
 
   return (i, t, w, twb, p) => {
     if (p !== targetsPressure) {
@@ -154,17 +184,17 @@ function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, 
       out.modes[i] = MODE.mechanical;
       suppliedW = highW;
     } else if (t <= offCoilC) {
-      if (w >= lowW) {
-        out.modes[i] = MODE.free;
-      } else if (eps > 0) {
-        // Mixing with return air warms the outdoor air to the off-coil temperature; the outdoor share
-        // of the supply follows from a sensible mixing balance; the evaporative stage humidifies it to lowW.
-        out.modes[i] = MODE.adiabatic;
-        const outdoorShare = returnC > t ? Math.min(1, Math.max(0, (returnC - offCoilC) / (returnC - t))) : 1;
-        out.evaporationKgPerKgAir[i] = outdoorShare * (lowW - w);
+      out.modes[i] = MODE.free;
+      if (w < lowW && eps > 0) {
+        // Free cooling with humidification: outdoor air mixes with return air (held at lowW) and the evaporative
+        // stage humidifies the mix to lowW at constant enthalpy, ending at the off-coil temperature. The outdoor
+        // share x follows from the enthalpy balance h(offCoil, lowW) = x·h_out + (1 − x)·h(return, lowW).
+        out.humidified[i] = 1;
+        const returnH = enthalpy(returnC, lowW);
+        const outdoorH = enthalpy(t, w);
+        const share = returnH > outdoorH ? (returnH - enthalpy(offCoilC, lowW)) / (returnH - outdoorH) : 1;
+        out.evaporationKgPerKgAir[i] = (share < 0 ? 0 : share > 1 ? 1 : share) * (lowW - w);
         suppliedW = lowW;
-      } else {
-        out.modes[i] = MODE.free;
       }
     } else {
       const leavingW = eps > 0 && t - eps * (t - twb) <= offCoilC ? wetBulbLineW(offCoilC, twb, p) : Number.NaN;
@@ -178,16 +208,13 @@ function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, 
     }
 
     if (out.modes[i] === MODE.mechanical) {
-      const fraction = directAirMechanicalFraction(t, w, twb, p, eps, offCoilC, returnC, targets);
+      enteringState(t, w, twb, p, eps, highW, entering);
+      const fraction = directAirMechanicalFraction(t, w, entering.c, entering.w, offCoilC, returnC, targets);
       out.mechanicalFraction[i] = fraction;
       if (fraction >= 1) return; // full recirculation: the hall keeps its own moisture
-      if (w <= highW && eps > 0) {
-        // The outdoor-air path was the cheaper one; its evaporative pre-cooling runs at full effectiveness.
-        const preCooledW = wetBulbLineW(t - eps * (t - twb), twb, p);
-        if (preCooledW <= highW) {
-          out.evaporationKgPerKgAir[i] = preCooledW - w;
-          suppliedW = preCooledW;
-        }
+      if (entering.w > w) {
+        out.evaporationKgPerKgAir[i] = entering.w - w;
+        suppliedW = entering.w;
       }
     }
     if (suppliedW < lowW) out.excursions[i] |= EXCURSION.lowHumidity;
@@ -195,17 +222,40 @@ function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, 
 }
 
 /**
+ * Outdoor air after the evaporative stage in a direct-air mechanical hour, written to `into`: the stage is
+ * modulated to the moisture limit — at full effectiveness while the wetted air stays at or below highW, else
+ * only as far as highW along the wet-bulb line; off when the outdoor air is already above highW or there is
+ * no stage.
+ */
+function enteringState(t: number, w: number, twb: number, p: number, eps: number, highW: number, into: { c: number; w: number }): void {
+  into.c = t;
+  into.w = w;
+  if (!(eps > 0) || w >= highW) return;
+  const fullC = t - eps * (t - twb);
+  const fullW = wetBulbLineW(fullC, twb, p);
+  if (fullW <= highW) {
+    into.c = fullC;
+    into.w = fullW;
+    return;
+  }
+  const limitC = wetBulbLineC(highW, twb, p);
+  if (limitC < t) {
+    into.c = limitC;
+    into.w = highW;
+  }
+}
+
+/**
  * Share of the cooling load left to the coil in a direct-air mechanical hour: the cheaper of cooling
- * (pre-cooled) outdoor air to the off-coil temperature, or cooling recirculated return air, over
- * the recirculation load. Too-humid outdoor air is cooled to the dew point of highW and mixed with
- * return air to the off-coil temperature.
+ * the outdoor air (as it leaves the evaporative stage, enteringC/enteringW) to the off-coil temperature, or
+ * cooling recirculated return air, over the recirculation load. Too-humid outdoor air is cooled to the
+ * dew point of highW and mixed with return air to the off-coil temperature.
  */
 function directAirMechanicalFraction(
   t: number,
   w: number,
-  twb: number,
-  p: number,
-  eps: number,
+  enteringC: number,
+  enteringW: number,
   offCoilC: number,
   returnC: number,
   targets: MoistureTargets,
@@ -214,16 +264,6 @@ function directAirMechanicalFraction(
   const recirculationLoad = enthalpy(returnC, hallW) - enthalpy(offCoilC, hallW);
   let outdoorLoad: number;
   if (w <= targets.highW) {
-    let enteringC = t;
-    let enteringW = w;
-    if (eps > 0) {
-      const preCooledC = t - eps * (t - twb);
-      const preCooledW = wetBulbLineW(preCooledC, twb, p);
-      if (preCooledW <= targets.highW) {
-        enteringC = preCooledC;
-        enteringW = preCooledW;
-      }
-    }
     outdoorLoad = enthalpy(enteringC, enteringW) - enthalpy(offCoilC, enteringW);
   } else if (targets.highDewPointC < offCoilC) {
     const outdoorShare = (returnC - offCoilC) / (returnC - targets.highDewPointC);
@@ -234,8 +274,10 @@ function directAirMechanicalFraction(
   return Math.min(1, Math.max(0, Math.min(outdoorLoad, recirculationLoad) / recirculationLoad));
 }
 
-function indirectAirHour(system: Extract<ScenarioSystem, { kind: 'indirect-air' }>, out: HourClassification): HourRule {
-  const { supplyAirC, fanHeatK, itDeltaTK, evaporativeEffectiveness: eps, heatExchangerEffectiveness: hx, scavengerAirRatio } = system;
+function indirectAirHour(system: Extract<ScenarioSystem, { kind: 'indirect-air' }>, fanHeatK: number, out: HourClassification): HourRule {
+  const { supplyAirC, itDeltaTK, evaporativeEffectiveness: eps, scavengerAirRatio } = system;
+  // The exchanger's hall-side effectiveness at this scavenger air ratio (ε-NTU, cross-flow both unmixed).
+  const hx = hallSideEffectiveness(system.heatExchangerEffectiveness, scavengerAirRatio);
   const returnC = supplyAirC + itDeltaTK;
   // Without the exchanger the coil would cool from return plus fan heat down to the supply setpoint.
   const fullLoadK = returnC + fanHeatK - supplyAirC;
@@ -270,14 +312,15 @@ function indirectAirHour(system: Extract<ScenarioSystem, { kind: 'indirect-air' 
 }
 
 function waterSideHour(system: Extract<ScenarioSystem, { kind: 'water-side' }>, out: HourClassification): HourRule {
-  const { chilledWaterSupplyC, chilledWaterDeltaTK, approachK, heatRejection, evaporativeEffectiveness: eps } = system;
+  const { chilledWaterSupplyC, chilledWaterDeltaTK, approachK, heatRejection, evaporativeEffectiveness: eps, freezeProtectionWetBulbC } = system;
   const tower = heatRejection === 'cooling-tower';
   // Water leaving the heat rejection at this temperature exactly meets the chilled-water setpoint.
   const neededAirC = chilledWaterSupplyC - approachK;
 
   return (i, t, w, twb, p) => {
-    // A tower's water approaches the wet-bulb; a dry cooler's the dry-bulb, or the pre-cooled air when wetted.
-    const dryWaterC = (tower ? twb : t) + approachK;
+    // A tower's water approaches the wet-bulb (the dry-bulb when it runs dry below the freeze-protection
+    // wet-bulb); a dry cooler's the dry-bulb, or the pre-cooled air when wetted.
+    const dryWaterC = (tower && twb >= freezeProtectionWetBulbC ? twb : t) + approachK;
     if (dryWaterC <= chilledWaterSupplyC) {
       out.modes[i] = MODE.free;
       return;

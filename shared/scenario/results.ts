@@ -13,6 +13,10 @@ export interface ModeHours {
   mechanical: number;
   noData: number;
   total: number;
+  /** Free-cooling hours in which the evaporative stage only adds moisture (a subset of free). Engine 2.0.0 on. */
+  humidified: number;
+  /** Mechanical hours in which the economiser still carries part of the load, 0 < mechanical fraction < 1 (a subset of mechanical). Engine 2.0.0 on. */
+  partialMechanical: number;
 }
 
 export interface EnergyTotals {
@@ -20,7 +24,9 @@ export interface EnergyTotals {
   fanKwh: number;
   compressorKwh: number;
   pumpKwh: number;
-  /** Fans + compressors + pumps. */
+  /** Cooling-tower basin heaters in freeze-protection hours. Engine 2.0.0 on. */
+  basinHeaterKwh: number;
+  /** Fans + compressors + pumps + basin heaters. */
   coolingKwh: number;
 }
 
@@ -47,14 +53,23 @@ export interface AggregatedResults {
   peakCompressorKw: number;
   /** Sums over the hours with data. */
   energy: EnergyTotals & {
-    /** (IT + cooling) / IT energy; null without data. */
+    /** (IT + cooling) / IT energy; null without data or without IT energy. */
     partialPue: number | null;
     /** The same totals scaled to 8760 hours of data; null without data. */
     annual: EnergyTotals | null;
   };
   water: {
+    /** humidificationL + evaporativeCoolingL. */
     evaporatedL: number;
+    /** Water that only adds moisture, in humidified free-cooling hours. Engine 2.0.0 on. */
+    humidificationL: number;
+    /** Water evaporated to cool: evaporative stages, wetted dry coolers, cooling towers. Engine 2.0.0 on. */
+    evaporativeCoolingL: number;
+    /** Cooling-tower drift, a share of the circulating water. Engine 2.0.0 on. */
+    driftL: number;
+    /** Water drained to hold the cycles of concentration. */
     blowdownL: number;
+    /** evaporatedL + driftL + blowdownL. */
     totalL: number;
     /** Total scaled to 8760 hours of data; null without data. */
     annualL: number | null;
@@ -67,33 +82,55 @@ export interface AggregateInput {
   timestampsMs: Float64Array;
   classification: HourClassification;
   energy: HourlyEnergy;
-  itLoadKw: number;
-  blowdownRatio: number;
+  /** Cycles of concentration of the evaporative water: blowdown = evaporation / (cycles − 1) − drift. */
+  cyclesOfConcentration: number;
   /** Offset added to the timestamps before months and hours of day are taken; 0 keeps UTC. */
   utcOffsetMinutes?: number;
 }
 
-const emptyModeHours = (): ModeHours => ({ free: 0, adiabatic: 0, mechanical: 0, noData: 0, total: 0 });
-const MODE_KEYS = ['free', 'adiabatic', 'mechanical', 'noData'] as const;
+const emptyModeHours = (): ModeHours => ({ free: 0, adiabatic: 0, mechanical: 0, noData: 0, total: 0, humidified: 0, partialMechanical: 0 });
+/** Slots of a count block: the four modes by their MODE code, then the two subsets. */
+const SLOT_KEYS = ['free', 'adiabatic', 'mechanical', 'noData', 'humidified', 'partialMechanical'] as const;
+const SLOTS = SLOT_KEYS.length;
+const HUMIDIFIED_SLOT = 4;
+const PARTIAL_SLOT = 5;
 const HOURS_PER_YEAR = 8760;
 
+/**
+ * Blowdown of one hour, litres: B = E / (C − 1) − D, never below 0 — the mass balance of dissolved solids
+ * at C cycles of concentration, where drift D also carries solids away (ASHRAE Handbook—HVAC Systems and
+ * Equipment, cooling-tower chapter; recalled from memory).
+ */
+export function blowdownL(evaporatedL: number, driftL: number, cyclesOfConcentration: number): number {
+  if (!(cyclesOfConcentration > 1)) throw new RangeError(`cyclesOfConcentration must be above 1, got ${cyclesOfConcentration}`);
+  const b = evaporatedL / (cyclesOfConcentration - 1) - driftL;
+  return b > 0 ? b : 0;
+}
+
 export function aggregateResults(input: AggregateInput): AggregatedResults {
-  const { timestampsMs, classification, energy, itLoadKw, blowdownRatio } = input;
-  const { modes, excursions } = classification;
+  const { timestampsMs, classification, energy, cyclesOfConcentration } = input;
+  const { modes, excursions, humidified, mechanicalFraction } = classification;
   const n = modes.length;
   if (timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${timestampsMs.length} hours, the classification has ${n}`);
+  if (!(cyclesOfConcentration > 1)) throw new RangeError(`cyclesOfConcentration must be above 1, got ${cyclesOfConcentration}`);
   const offsetMs = (input.utcOffsetMinutes ?? 0) * 60_000;
+  const blowdownPerEvaporated = 1 / (cyclesOfConcentration - 1);
 
   // Counts in flat typed arrays during the loop; shaped into objects at the end.
-  const total = new Float64Array(4);
-  const byMonth = new Float64Array(12 * 4);
-  const byHour = new Float64Array(24 * 4);
+  const total = new Float64Array(SLOTS);
+  const byMonth = new Float64Array(12 * SLOTS);
+  const byHour = new Float64Array(24 * SLOTS);
   type YearTotals = { counts: Float64Array; coolingKwh: number; waterL: number };
   const yearIndex = new Map<number, YearTotals>();
+  let itKwh = 0;
   let fanKwh = 0;
   let compressorKwh = 0;
   let pumpKwh = 0;
-  let evaporatedL = 0;
+  let basinHeaterKwh = 0;
+  let humidificationL = 0;
+  let evaporativeCoolingL = 0;
+  let driftL = 0;
+  let blowdownTotalL = 0;
   let peakMechanicalLoadKw = 0;
   let peakCompressorKw = 0;
   let lowHumidityHours = 0;
@@ -107,7 +144,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
 
   const civil = { year: 0, month: 0, day: 0 };
   let currentDay = Number.NaN;
-  let year: YearTotals = { counts: new Float64Array(4), coolingKwh: 0, waterL: 0 };
+  let year: YearTotals = { counts: new Float64Array(SLOTS), coolingKwh: 0, waterL: 0 };
   let previousMs = Number.NaN;
 
   for (let i = 0; i < n; i++) {
@@ -118,17 +155,28 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
       civilFromDays(day, civil);
       let entry = yearIndex.get(civil.year);
       if (!entry) {
-        entry = { counts: new Float64Array(4), coolingKwh: 0, waterL: 0 };
+        entry = { counts: new Float64Array(SLOTS), coolingKwh: 0, waterL: 0 };
         yearIndex.set(civil.year, entry);
       }
       year = entry;
     }
     const hourOfDay = Math.floor((localMs - day * MS_PER_DAY) / MS_PER_HOUR);
     const mode = modes[i];
+    const monthBase = (civil.month - 1) * SLOTS;
+    const hourBase = hourOfDay * SLOTS;
     total[mode]++;
-    byMonth[(civil.month - 1) * 4 + mode]++;
-    byHour[hourOfDay * 4 + mode]++;
+    byMonth[monthBase + mode]++;
+    byHour[hourBase + mode]++;
     year.counts[mode]++;
+    let subset = -1;
+    if (humidified[i] === 1 && mode === MODE.free) subset = HUMIDIFIED_SLOT;
+    else if (mode === MODE.mechanical && mechanicalFraction[i] > 0 && mechanicalFraction[i] < 1) subset = PARTIAL_SLOT;
+    if (subset >= 0) {
+      total[subset]++;
+      byMonth[monthBase + subset]++;
+      byHour[hourBase + subset]++;
+      year.counts[subset]++;
+    }
 
     // A run is broken by a no-data hour or by a step that is not one hour.
     const contiguous = timestampsMs[i] - previousMs === MS_PER_HOUR;
@@ -151,29 +199,40 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
     const fan = energy.fanKw[i];
     const compressor = energy.compressorKw[i];
     const pump = energy.pumpKw[i];
-    const water = energy.evaporatedL[i];
+    const heater = energy.basinHeaterKw[i];
+    const humidifying = energy.humidificationL[i];
+    const cooling = energy.evaporativeCoolingL[i];
+    const drift = energy.driftL[i];
+    // B = E / (C − 1) − D, never below 0 (see blowdownL).
+    const blowdownHour = (humidifying + cooling) * blowdownPerEvaporated - drift;
+    const blowdown = blowdownHour > 0 ? blowdownHour : 0;
+    itKwh += energy.itKw[i];
     fanKwh += fan;
     compressorKwh += compressor;
     pumpKwh += pump;
-    evaporatedL += water;
-    year.coolingKwh += fan + compressor + pump;
-    year.waterL += water * (1 + blowdownRatio);
+    basinHeaterKwh += heater;
+    humidificationL += humidifying;
+    evaporativeCoolingL += cooling;
+    driftL += drift;
+    blowdownTotalL += blowdown;
+    year.coolingKwh += fan + compressor + pump + heater;
+    year.waterL += humidifying + cooling + drift + blowdown;
     if (energy.mechanicalLoadKw[i] > peakMechanicalLoadKw) peakMechanicalLoadKw = energy.mechanicalLoadKw[i];
     if (compressor > peakCompressorKw) peakCompressorKw = compressor;
   }
 
   const dataHours = n - total[MODE.noData];
-  const itKwh = itLoadKw * dataHours;
-  const coolingKwh = fanKwh + compressorKwh + pumpKwh;
-  const blowdownL = evaporatedL * blowdownRatio;
-  const totalL = evaporatedL + blowdownL;
+  const coolingKwh = fanKwh + compressorKwh + pumpKwh + basinHeaterKwh;
+  const evaporatedL = humidificationL + evaporativeCoolingL;
+  const totalL = evaporatedL + driftL + blowdownTotalL;
   const scale = dataHours > 0 ? HOURS_PER_YEAR / dataHours : Number.NaN;
   const hasData = dataHours > 0;
+  const hasIt = hasData && itKwh > 0;
 
   return {
     hours: modeHours(total, 0),
-    hoursByMonth: Array.from({ length: 12 }, (_, m) => ({ month: m + 1, ...modeHours(byMonth, m * 4) })),
-    hoursByHourOfDay: Array.from({ length: 24 }, (_, h) => ({ hour: h, ...modeHours(byHour, h * 4) })),
+    hoursByMonth: Array.from({ length: 12 }, (_, m) => ({ month: m + 1, ...modeHours(byMonth, m * SLOTS) })),
+    hoursByHourOfDay: Array.from({ length: 24 }, (_, h) => ({ hour: h, ...modeHours(byHour, h * SLOTS) })),
     hoursByYear: [...yearIndex.entries()]
       .sort(([a], [b]) => a - b)
       .map(([y, entry]) => ({ year: y, ...modeHours(entry.counts, 0), coolingKwh: entry.coolingKwh, waterL: entry.waterL })),
@@ -192,29 +251,39 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
       fanKwh,
       compressorKwh,
       pumpKwh,
+      basinHeaterKwh,
       coolingKwh,
       // ISO/IEC 30134-2 style ratio restricted to cooling: (IT + cooling) / IT.
-      partialPue: hasData ? (itKwh + coolingKwh) / itKwh : null,
+      partialPue: hasIt ? (itKwh + coolingKwh) / itKwh : null,
       annual: hasData
-        ? { itKwh: itKwh * scale, fanKwh: fanKwh * scale, compressorKwh: compressorKwh * scale, pumpKwh: pumpKwh * scale, coolingKwh: coolingKwh * scale }
+        ? {
+            itKwh: itKwh * scale,
+            fanKwh: fanKwh * scale,
+            compressorKwh: compressorKwh * scale,
+            pumpKwh: pumpKwh * scale,
+            basinHeaterKwh: basinHeaterKwh * scale,
+            coolingKwh: coolingKwh * scale,
+          }
         : null,
     },
     water: {
       evaporatedL,
-      blowdownL,
+      humidificationL,
+      evaporativeCoolingL,
+      driftL,
+      blowdownL: blowdownTotalL,
       totalL,
       annualL: hasData ? totalL * scale : null,
       // ISO/IEC 30134-9: WUE = annual site water use (L) / IT equipment energy (kWh).
-      wueLPerKwh: hasData ? totalL / itKwh : null,
+      wueLPerKwh: hasIt ? totalL / itKwh : null,
     },
   };
 }
 
+/** Mode counts of one block; total is the four modes (the subsets are inside them). */
 function modeHours(counts: Float64Array, offset: number): ModeHours {
   const result = emptyModeHours();
-  for (let m = 0; m < 4; m++) {
-    result[MODE_KEYS[m]] = counts[offset + m];
-    result.total += counts[offset + m];
-  }
+  for (let k = 0; k < SLOTS; k++) result[SLOT_KEYS[k]] = counts[offset + k];
+  result.total = counts[offset] + counts[offset + 1] + counts[offset + 2] + counts[offset + 3];
   return result;
 }

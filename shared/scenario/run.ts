@@ -6,6 +6,8 @@ import { bulkStates, standardPressurePa, type BulkState, type HumidityKind } fro
 import { classifyHours, moistureTargets, type HourClassification, type InletLimits } from './classify';
 import { hourlyEnergy, type HourlyEnergy } from './energy';
 import { deratedDryBulbMaxC } from './envelopes';
+import { designFanHeatK } from './fans';
+import { hourlyLoadFractions } from './load-profile';
 import { aggregateResults, type AggregatedResults } from './results';
 import type { Scenario } from './schema';
 import { ENGINE_VERSION } from './version';
@@ -30,6 +32,8 @@ export interface ScenarioResults extends AggregatedResults {
   engineVersion: string;
   scenarioName: string;
   systemKind: Scenario['system']['kind'];
+  /** Hall fan heat at design, K, derived from energy.fanPowerFraction (ΔT = P_fan / (ṁ·cp)). */
+  fanHeatK: number;
   site: {
     elevationM: number;
     /** 'weather' when the series carries station pressure, else the standard atmosphere at elevationM. */
@@ -63,20 +67,27 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   const { states, pressurePa, filledHours } = outdoorStates(series, sitePressurePa);
   const { envelope, system } = scenario;
   const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
-  const classification = classifyHours(system, limits, {
-    dryBulbC: series.dryBulbC,
-    wetBulbC: states.wetBulbC,
-    humidityRatio: states.humidityRatio,
-    pressurePa,
-    flags: series.flags,
-  });
-  const energy = hourlyEnergy(system, scenario.energy, series.dryBulbC, classification);
+  const fanHeatK = designFanHeatK(scenario.energy.fanPowerFraction, system.itDeltaTK);
+  const classification = classifyHours(
+    system,
+    limits,
+    { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa, flags: series.flags },
+    { fanHeatK },
+  );
+  const loadFraction = hourlyLoadFractions(scenario.energy.itLoadProfile, series.timestampsMs, options.utcOffsetMinutes);
+  const energy = hourlyEnergy(
+    system,
+    scenario.energy,
+    { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio },
+    loadFraction,
+    classification,
+    sitePressurePa,
+  );
   const aggregated = aggregateResults({
     timestampsMs: series.timestampsMs,
     classification,
     energy,
-    itLoadKw: scenario.energy.itLoadKw,
-    blowdownRatio: scenario.energy.blowdownRatio,
+    cyclesOfConcentration: scenario.energy.cyclesOfConcentration,
     utcOffsetMinutes: options.utcOffsetMinutes,
   });
   const targets = moistureTargets(limits, system.supplyAirC, sitePressurePa);
@@ -99,6 +110,7 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
       scenarioName: scenario.name,
       systemKind: system.kind,
       ...aggregated,
+      fanHeatK,
       site: { elevationM, pressureSource: series.pressurePa ? 'weather' : 'elevation', pressureFilledHours: filledHours },
       envelope: {
         dryBulbMinC: limits.dryBulbMinC,

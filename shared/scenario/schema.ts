@@ -11,6 +11,25 @@ const between = (min: number, max: number, unit: string) => {
 
 const fraction = (max = 1) => between(0, max, '');
 
+/**
+ * An input that no longer exists: accepted only when absent, refused with a message naming what replaced it
+ * (shared/scenario/migrate.ts turns a saved scenario that still carries it into the new inputs).
+ */
+const retired = (replacement: string) => {
+  const message = `is retired: ${replacement} (saved scenarios are migrated by migrateScenario)`;
+  return z.undefined({ error: message }).optional();
+};
+
+/** Retired inputs and what replaced each, by path; one wording for the schema, the migration and the docs. */
+export const RETIRED_INPUTS = {
+  'system.fanHeatK': 'fan heat is now derived from energy.fanPowerFraction and the air flow; set energy.fanPowerFraction',
+  'energy.copSlopePerK': 'compressor COP now follows its lift, calibrated to energy.mechanicalCop at the rating conditions',
+  'energy.copReferenceC': 'compressor COP now follows its lift, calibrated to energy.mechanicalCop at the rating conditions',
+  'energy.copMin': 'compressor COP now follows its lift (with a lift floor), calibrated to energy.mechanicalCop at the rating conditions',
+  'energy.blowdownRatio': 'set energy.cyclesOfConcentration instead (blowdown = evaporation / (cycles − 1) − drift)',
+  'energy.towerEvaporationShare': 'the tower evaporation now follows the conditions (saturated leaving air, Merkel); nothing to set',
+} as const;
+
 export const altitudeDeratingSchema = z.object({
   aboveElevationM: between(0, 9000, 'm'),
   metresPerKelvin: between(1, 10_000, 'm per K'),
@@ -34,7 +53,7 @@ export const envelopeSchema = z
 const commonSystem = {
   supplyAirC: between(5, 45, '°C'),
   itDeltaTK: between(1, 40, 'K'),
-  fanHeatK: between(0, 10, 'K'),
+  fanHeatK: retired(RETIRED_INPUTS['system.fanHeatK']),
   evaporativeEffectiveness: fraction(),
 };
 
@@ -44,7 +63,10 @@ export const indirectAirSchema = z.object({
   kind: z.literal('indirect-air'),
   ...commonSystem,
   heatExchangerEffectiveness: between(0.05, 1, ''),
-  /** Scavenger (outdoor) air mass flow per unit of hall air mass flow; 1 is common practice. */
+  /**
+   * Scavenger (outdoor) air mass flow per unit of hall air mass flow; 1 is common practice. The exchanger's
+   * effectiveness follows it (ε-NTU, cross-flow both unmixed) from heatExchangerEffectiveness, rated at 1.
+   */
   scavengerAirRatio: between(0.1, 5, '').default(1),
 });
 
@@ -55,33 +77,83 @@ export const waterSideSchema = z.object({
   chilledWaterDeltaTK: between(1, 20, 'K'),
   approachK: between(0, 20, 'K'),
   heatRejection: z.enum(['dry-cooler', 'cooling-tower'], { error: "must be 'dry-cooler' or 'cooling-tower'" }),
-  /** Air temperature rise across the dry cooler, which sets its air flow; 10 K is common practice. */
+  /** Air temperature rise across the dry cooler at design, which sets its design air flow; 10 K is common practice. */
   dryCoolerAirRiseK: between(2, 30, 'K').default(10),
+  /**
+   * Cooling tower: below this outdoor wet-bulb the tower runs dry (water bypasses the fill, no evaporation,
+   * the water approaches the dry-bulb) and its basin heaters run. 2 °C is a common-practice setting.
+   */
+  freezeProtectionWetBulbC: between(-20, 10, '°C').default(2),
 });
 
 export const systemSchema = z.discriminatedUnion('kind', [directAirSchema, indirectAirSchema, waterSideSchema], {
   error: "kind must be 'direct-air', 'indirect-air' or 'water-side'",
 });
 
+const loadFraction = z.number({ error: 'must be a number from 0 to 1' }).min(0, { error: 'must be a number from 0 to 1' }).max(1, { error: 'must be a number from 0 to 1' });
+
+/** Hours in the profile of an hourly IT load: a 365-day year (29 February repeats 28 February). */
+export const LOAD_PROFILE_HOURS = 8760;
+
+/**
+ * IT load through the years, as fractions of energy.itLoadKw (the design load):
+ * constant; a ramp by calendar year from the first year of the weather (the last value holds after the
+ * list ends); or a profile per hour of the local standard-time year.
+ */
+export const itLoadProfileSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('constant') }),
+    z.object({ kind: z.literal('yearly-ramp'), fractions: z.array(loadFraction).min(1, { error: 'must list at least one year' }).max(100, { error: 'must list at most 100 years' }) }),
+    z.object({
+      kind: z.literal('hourly-profile'),
+      name: z.string({ error: 'must be a text' }).trim().min(1, { error: 'must not be empty' }).max(200, { error: 'must be at most 200 characters' }),
+      fractions: z.array(loadFraction).length(LOAD_PROFILE_HOURS, { error: `must hold ${LOAD_PROFILE_HOURS} hourly values` }),
+    }),
+  ],
+  { error: "kind must be 'constant', 'yearly-ramp' or 'hourly-profile'" },
+);
+
 export const energySchema = z.object({
+  /** Design IT load, kW; the load profile gives each hour's share of it. */
   itLoadKw: between(0.001, 1e7, 'kW'),
-  /** Compressor COP (cooling kW per electric kW) at copReferenceC outdoor dry-bulb. */
+  itLoadProfile: itLoadProfileSchema.default({ kind: 'constant' }),
+  /**
+   * Rated compressor COP (cooling kW per electric kW) at full load and the rating conditions of the condensing
+   * side (AHRI 550/590: 35 °C entering air for air-cooled, 29.4 °C entering condenser water for water-cooled,
+   * 6.7 °C leaving chilled water). The hour's COP follows its lift from there (shared/scenario/compressor.ts).
+   */
   mechanicalCop: between(0.5, 30, ''),
-  /** COP change per K of outdoor dry-bulb above copReferenceC (negative: worse when hotter). */
-  copSlopePerK: between(-2, 2, 'per K').default(0),
-  copReferenceC: between(-40, 60, '°C').default(35),
-  /** Floor on the temperature-adjusted COP, so a steep slope cannot give zero or negative COP. */
-  copMin: between(0.5, 30, '').default(1),
-  /** Hall (and supply) fan power as a fraction of IT load, every hour with data. */
+  /** Evaporating temperature below the leaving air or chilled water, K; 5 K is common practice. */
+  evaporatorApproachK: between(0, 20, 'K').default(5),
+  /** Condensing temperature above the entering condensing air or water, K; 10 K is common practice. */
+  condenserApproachK: between(0, 30, 'K').default(10),
+  /** Lowest compressor capacity before it cycles on and off, as a fraction of design; 0.2 is common practice. */
+  compressorMinTurndown: between(0.05, 1, '').default(0.2),
+  /** Hall (and supply) fan power at design air flow, as a fraction of design IT load; fan heat follows from it. */
   fanPowerFraction: fraction(0.5).default(0.05),
-  /** Pump power as a fraction of IT load: water-side every hour, air-side only while the evaporative stage runs. */
+  /** Lowest hall fan speed, as a fraction of design air flow (fan affinity law below it does not apply). */
+  fanMinSpeedFraction: between(0.1, 1, '').default(0.3),
+  /** Pump power at design flow as a fraction of design IT load: water-side every hour, air-side only while the evaporative stage runs. */
   pumpPowerFraction: fraction(0.5).default(0.01),
-  /** Heat-rejection or scavenger fan power as a fraction of IT load (water-side and indirect-air, every hour). */
+  /** Lowest pump speed, as a fraction of design flow. */
+  pumpMinSpeedFraction: between(0.1, 1, '').default(0.3),
+  /**
+   * Heat-rejection fan power (dry cooler, tower) or scavenger fan power (at a scavenger air ratio of 1) at design,
+   * as a fraction of design IT load.
+   */
   heatRejectionFanFraction: fraction(0.5).default(0.02),
-  /** Blowdown volume per volume evaporated; 1/(cycles of concentration − 1), 0.33 ≈ 4 cycles (common practice). */
-  blowdownRatio: fraction(5).default(0.33),
-  /** Share of a cooling tower's heat rejected by evaporation; 0.85 is a common-practice rule of thumb. */
-  towerEvaporationShare: fraction().default(0.85),
+  /** Cycles of concentration of evaporative water (towers, media); blowdown = evaporation / (cycles − 1) − drift. 4 is common practice. */
+  cyclesOfConcentration: between(1.5, 50, '').default(4),
+  /** Tower drift, as a fraction of the circulating water; 0.0002 (0.02 %) is common practice for drift eliminators. */
+  towerDriftFraction: between(0, 0.01, '').default(0.0002),
+  /** Tower basin-heater power, as a fraction of design IT load, in hours below the freeze-protection wet-bulb. */
+  basinHeaterFraction: fraction(0.05).default(0.001),
+  copSlopePerK: retired(RETIRED_INPUTS['energy.copSlopePerK']),
+  copReferenceC: retired(RETIRED_INPUTS['energy.copReferenceC']),
+  copMin: retired(RETIRED_INPUTS['energy.copMin']),
+  blowdownRatio: retired(RETIRED_INPUTS['energy.blowdownRatio']),
+  towerEvaporationShare: retired(RETIRED_INPUTS['energy.towerEvaporationShare']),
 });
 
 export const scenarioSchema = z
@@ -102,6 +174,7 @@ export type ScenarioInput = z.input<typeof scenarioSchema>;
 export type ScenarioSystem = Scenario['system'];
 export type ScenarioEnvelope = Scenario['envelope'];
 export type ScenarioEnergy = Scenario['energy'];
+export type ItLoadProfile = z.infer<typeof itLoadProfileSchema>;
 
 export type ParseScenarioResult = { ok: true; scenario: Scenario } | { ok: false; errors: string[] };
 

@@ -34,7 +34,8 @@ const counts = () => ({
  * RH maximum, at the site's standard pressure) — issue 5's direct-air rules 1–3 with ε = 0.
  */
 function referenceMechanicalHours(supplyAirC: number): number {
-  const { fanHeatK } = directAir.system;
+  // Fan heat derived from the fan power: ΔT_fan = fanPowerFraction · ΔT_IT.
+  const fanHeatK = directAir.energy.fanPowerFraction * directAir.system.itDeltaTK;
   const { dewPointMaxC, rhMaxPct } = directAir.envelope;
   const standardPa = psy.GetStandardAtmPressure(SITE_ELEVATION_M);
   const wHigh = Math.min(psy.GetHumRatioFromTDewPoint(dewPointMaxC, standardPa), psy.GetHumRatioFromRelHum(supplyAirC, rhMaxPct / 100, standardPa));

@@ -19,7 +19,7 @@ export const suite: BenchSuite = {
       name: 'bench direct air',
       elevationM: 100,
       envelope: findEnvelopePreset('ashrae-2021-a1')!.limits,
-      system: { kind: 'direct-air', supplyAirC: 22, itDeltaTK: 12, fanHeatK: 1, evaporativeEffectiveness: 0.8 },
+      system: { kind: 'direct-air', supplyAirC: 22, itDeltaTK: 12, evaporativeEffectiveness: 0.8 },
       energy: { itLoadKw: 1000, mechanicalCop: 4 },
     });
     if (!parsed.ok) throw new Error(parsed.errors.join('; '));

@@ -35,8 +35,9 @@ const SCENARIO_INPUT: ScenarioInput = {
   name: 'bench direct air',
   elevationM: 100,
   envelope: { dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9, dewPointMaxC: 15, rhMinPct: 0, rhMaxPct: 70 },
-  system: { kind: 'direct-air', supplyAirC: 24, itDeltaTK: 12, fanHeatK: 1, evaporativeEffectiveness: 0.8 },
-  energy: { itLoadKw: 1000, mechanicalCop: 4, copSlopePerK: -0.08 },
+  system: { kind: 'direct-air', supplyAirC: 24, itDeltaTK: 12, evaporativeEffectiveness: 0.8 },
+  // Engine 1.0.0 ran this bench with fanHeatK 1 and copSlopePerK −0.08; fanPowerFraction 1/12 is its migration.
+  energy: { itLoadKw: 1000, mechanicalCop: 4, fanPowerFraction: 1 / 12 },
 };
 
 function scenarioWithSupply(supplyAirC: number): Scenario {

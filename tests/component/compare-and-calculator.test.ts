@@ -25,15 +25,16 @@ function run(id: number, free: number, mechanical: number, partialPue: number, a
     scenario: { name: `Scenario ${id}`, system: { kind: 'direct-air' } },
     climate: { name: 'synthetic', hours: 100, site: { name: 'Site' } },
     results: {
-      hours: { free, adiabatic: 100 - free - mechanical, mechanical, noData: 0, total: 100 },
+      hours: { free, adiabatic: 100 - free - mechanical, mechanical, noData: 0, total: 100, humidified: 0, partialMechanical: 0 },
       energy: {
         itKwh: 1000,
         fanKwh: 0,
         compressorKwh: 0,
         pumpKwh: 0,
+        basinHeaterKwh: 0,
         coolingKwh: 0,
         partialPue,
-        annual: { itKwh: 0, fanKwh: 0, compressorKwh: 0, pumpKwh: 0, coolingKwh: annualCoolingKwh },
+        annual: { itKwh: 0, fanKwh: 0, compressorKwh: 0, pumpKwh: 0, basinHeaterKwh: 0, coolingKwh: annualCoolingKwh },
       },
       water: { evaporatedL: 0, blowdownL: 0, totalL: 0, annualL: 0, wueLPerKwh: 0 },
       peakMechanicalLoadKw: mechanical * 10,

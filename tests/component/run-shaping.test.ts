@@ -74,7 +74,7 @@ describe('hour states for the chart and the bins', () => {
 
 describe('monthly rows and inputs as run', () => {
   it('lays out each month in the palette order of the modes', () => {
-    const rows = monthlyModeRows([{ month: 7, free: 39, adiabatic: 6, mechanical: 27, noData: 0, total: 72 }]);
+    const rows = monthlyModeRows([{ month: 7, free: 39, adiabatic: 6, mechanical: 27, noData: 0, total: 72, humidified: 0, partialMechanical: 0 }]);
     expect(rows).toEqual([
       { month: 7, mode: 'free', hours: 39 },
       { month: 7, mode: 'adiabatic', hours: 6 },

@@ -3,7 +3,7 @@ import { analyseProposal, countExcursions, durationBin, modelInletHours, xFactor
 import { findEnvelopePreset } from '../../shared/scenario/envelopes';
 import { MODE } from '../../shared/scenario/classify';
 import { runScenario } from '../../shared/scenario/run';
-import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb } from './scenario/fixtures';
+import { makeScenario, outdoorHours, plantOf, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb } from './scenario/fixtures';
 import { HOT_HUMID, MILD_MARITIME, syntheticSeries } from './scenario/synthetic-climate';
 
 // ASHRAE TC 9.9 2021 recommended range and class A1 (recalled from memory, as shared/scenario/envelopes.ts).
@@ -103,12 +103,12 @@ describe('the inlet model, one worked hour per system kind', () => {
   it('direct air: mixing holds the setpoint in cool hours; a float lets the supply follow outdoor air + fan heat', () => {
     const scenario = makeScenario('direct-air', { system: { supplyAirC: 20, evaporativeEffectiveness: 0 } });
     const hours = outdoorHours([stateFromDewPoint(10, 5), stateFromDewPoint(24, 5)]);
-    const held = modelInletHours(scenario.system, RECOMMENDED, hours, hold);
+    const held = modelInletHours(scenario.system, RECOMMENDED, hours, hold, plantOf(scenario));
     // 10 °C + 1 K fan heat ≤ 20 °C: free, mixed up to 20 °C. 24 °C + 1 K > 20 °C and no evaporative stage: mechanical at 20 °C.
     expect(Array.from(held.modes)).toEqual([MODE.free, MODE.mechanical]);
     expect(Array.from(held.inletC)).toEqual([20, 20]);
     expect(held.inletW[0]).toBeCloseTo(hours.humidityRatio[0], 15); // outdoor moisture reaches the hall
-    const floated = modelInletHours(scenario.system, RECOMMENDED, hours, { ...hold, ceilingC: 27 });
+    const floated = modelInletHours(scenario.system, RECOMMENDED, hours, { ...hold, ceilingC: 27 }, plantOf(scenario));
     // 24 + 1 = 25 °C ≤ 27 °C: free cooling at 25 °C.
     expect(Array.from(floated.modes)).toEqual([MODE.free, MODE.free]);
     expect(floated.inletC[1]).toBeCloseTo(25, 12);
@@ -119,7 +119,7 @@ describe('the inlet model, one worked hour per system kind', () => {
     // 30 °C dry-bulb, 16 °C wet-bulb: the stage reaches tE = 30 − 0.8·14 = 18.8 °C ≤ Ts − f = 19 °C, so adiabatic
     // (classifier rule 3); the inlet is max(Ts, tE + f) = max(20, 19.8) = 20 °C.
     const hours = outdoorHours([stateFromWetBulb(30, 16)]);
-    const inlet = modelInletHours(scenario.system, RECOMMENDED, hours, hold);
+    const inlet = modelInletHours(scenario.system, RECOMMENDED, hours, hold, plantOf(scenario));
     expect(inlet.modes[0]).toBe(MODE.adiabatic);
     expect(inlet.inletC[0]).toBe(20);
     // Moisture where the 16 °C wet-bulb line reaches 19 °C (psychrolib as reference).
@@ -130,7 +130,7 @@ describe('the inlet model, one worked hour per system kind', () => {
     // ΔT 12 K, ε_hx 0.7, f 1 K: offset (12·0.3 + 1)/0.7 = 6.5714… K.
     const scenario = makeScenario('indirect-air', { system: { supplyAirC: 20, evaporativeEffectiveness: 0 } });
     const hours = outdoorHours([stateFromDewPoint(10, 5), stateFromDewPoint(20, 5)]);
-    const floated = modelInletHours(scenario.system, RECOMMENDED, hours, { ...hold, ceilingC: 30 });
+    const floated = modelInletHours(scenario.system, RECOMMENDED, hours, { ...hold, ceilingC: 30 }, plantOf(scenario));
     expect(Array.from(floated.modes)).toEqual([MODE.free, MODE.free]);
     expect(floated.inletC[0]).toBe(20); // 16.57 °C held up to 20 °C
     expect(floated.inletC[1]).toBeCloseTo(20 + 4.6 / 0.7, 12);
@@ -142,18 +142,18 @@ describe('the inlet model, one worked hour per system kind', () => {
     // Supply 24 °C, chilled water 18 °C (coil approach 6 K), tower approach 5 K: free while Twb + 5 ≤ 18.
     const scenario = makeScenario('water-side', { system: { heatRejection: 'cooling-tower' } });
     const hours = outdoorHours([stateFromWetBulb(25, 15)]);
-    const held = modelInletHours(scenario.system, RECOMMENDED, hours, { supplyAirC: 24, ceilingC: 24, hallDewPointC: 3 });
+    const held = modelInletHours(scenario.system, RECOMMENDED, hours, { supplyAirC: 24, ceilingC: 24, hallDewPointC: 3 }, plantOf(scenario));
     expect(held.modes[0]).toBe(MODE.mechanical);
     expect(held.inletC[0]).toBe(24);
     // Ceiling 27 °C: chilled water may rise to 21 °C; 15 + 5 = 20 ≤ 21, free, supply 15 + 5 + 6 = 26 °C.
-    const floated = modelInletHours(scenario.system, RECOMMENDED, hours, { supplyAirC: 24, ceilingC: 27, hallDewPointC: 3 });
+    const floated = modelInletHours(scenario.system, RECOMMENDED, hours, { supplyAirC: 24, ceilingC: 27, hallDewPointC: 3 }, plantOf(scenario));
     expect(floated.modes[0]).toBe(MODE.free);
     expect(floated.inletC[0]).toBeCloseTo(26, 9);
   });
 
   it('refuses a ceiling below the setpoint, naming it', () => {
     const scenario = makeScenario('direct-air');
-    expect(() => modelInletHours(scenario.system, RECOMMENDED, outdoorHours([stateFromDewPoint(10, 5)]), { ...hold, ceilingC: 19 })).toThrow(/ceilingC/);
+    expect(() => modelInletHours(scenario.system, RECOMMENDED, outdoorHours([stateFromDewPoint(10, 5)]), { ...hold, ceilingC: 19 }, plantOf(scenario))).toThrow(/ceilingC/);
   });
 });
 

@@ -6,13 +6,13 @@
  */
 import { describe, expect, it } from 'vitest';
 import { classifyHours, EXCURSION, MODE, type InletLimits } from '../../../shared/scenario/classify';
-import { makeScenario, outdoorHours, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, type ReferenceState } from './fixtures';
+import { makeScenario, outdoorHours, plantOf, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, type ReferenceState } from './fixtures';
 
 const p = SEA_LEVEL_PA;
 const limits: InletLimits = RECOMMENDED;
 
 function classifyOne(scenario: ReturnType<typeof makeScenario>, state: ReferenceState, envelope: InletLimits = limits) {
-  const out = classifyHours(scenario.system, envelope, outdoorHours([state]));
+  const out = classifyHours(scenario.system, envelope, outdoorHours([state]), plantOf(scenario));
   return { mode: out.modes[0], fraction: out.mechanicalFraction[0], excursion: out.excursions[0], evaporation: out.evaporationKgPerKgAir[0] };
 }
 
@@ -216,13 +216,13 @@ describe('no data', () => {
     const scenario = makeScenario('direct-air');
     const hours = outdoorHours([stateFromDewPoint(10, 5), { t: Number.NaN, w: 0.005, twb: 5 }, stateFromDewPoint(12, 5), { t: 10, w: Number.NaN, twb: 5 }]);
     hours.flags = Uint8Array.from([0, 0, 2, 1]);
-    const out = classifyHours(scenario.system, limits, hours);
+    const out = classifyHours(scenario.system, limits, hours, plantOf(scenario));
     expect([...out.modes]).toEqual([MODE.free, MODE.noData, MODE.noData, MODE.noData]);
     expect([...out.mechanicalFraction]).toEqual([0, 0, 0, 0]);
   });
 
   it('refuses arrays of different lengths with a RangeError naming the array', () => {
     const hours = outdoorHours([stateFromDewPoint(10, 5)]);
-    expect(() => classifyHours(makeScenario('direct-air').system, limits, { ...hours, wetBulbC: new Float64Array(2) })).toThrow(/wetBulbC has 2 hours/);
+    expect(() => classifyHours(makeScenario('direct-air').system, limits, { ...hours, wetBulbC: new Float64Array(2) }, { fanHeatK: 1 })).toThrow(/wetBulbC has 2 hours/);
   });
 });

@@ -35,7 +35,7 @@ describe('envelope presets', () => {
         name: preset.id,
         elevationM: 0,
         envelope: { presetId: preset.id, ...preset.limits },
-        system: { kind: 'direct-air', supplyAirC: 20, itDeltaTK: 10, fanHeatK: 1, evaporativeEffectiveness: 0 },
+        system: { kind: 'direct-air', supplyAirC: 20, itDeltaTK: 10, evaporativeEffectiveness: 0 },
         energy: { itLoadKw: 100, mechanicalCop: 4 },
       });
       expect(parsed.ok).toBe(true);

@@ -14,14 +14,19 @@ export const RECOMMENDED = { dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9,
 
 type SystemInput = ScenarioInput['system'];
 
+/** Fan power of the fixtures: 1 K of fan heat at their 12 K rise across the IT. */
+export const FIXTURE_FAN_POWER_FRACTION = 1 / 12;
+
+/** Design fan heat of a scenario, K (the classifier's plant input). */
+export const plantOf = (scenario: Scenario) => ({ fanHeatK: scenario.energy.fanPowerFraction * scenario.system.itDeltaTK });
+
 const SYSTEM_DEFAULTS: Record<SystemInput['kind'], SystemInput> = {
-  'direct-air': { kind: 'direct-air', supplyAirC: 24, itDeltaTK: 12, fanHeatK: 1, evaporativeEffectiveness: 0.8 },
-  'indirect-air': { kind: 'indirect-air', supplyAirC: 24, itDeltaTK: 12, fanHeatK: 1, evaporativeEffectiveness: 0.8, heatExchangerEffectiveness: 0.7 },
+  'direct-air': { kind: 'direct-air', supplyAirC: 24, itDeltaTK: 12, evaporativeEffectiveness: 0.8 },
+  'indirect-air': { kind: 'indirect-air', supplyAirC: 24, itDeltaTK: 12, evaporativeEffectiveness: 0.8, heatExchangerEffectiveness: 0.7 },
   'water-side': {
     kind: 'water-side',
     supplyAirC: 24,
     itDeltaTK: 12,
-    fanHeatK: 1,
     evaporativeEffectiveness: 0.8,
     chilledWaterSupplyC: 18,
     chilledWaterDeltaTK: 6,
@@ -40,7 +45,8 @@ export function makeScenario(
     elevationM: overrides.elevationM ?? 0,
     envelope: { ...RECOMMENDED, ...overrides.envelope },
     system: { ...SYSTEM_DEFAULTS[kind], ...overrides.system },
-    energy: { itLoadKw: 1000, mechanicalCop: 4, ...overrides.energy },
+    // Fan power 1/12 of IT at a 12 K rise gives 1 K of fan heat (ΔT_fan = fanPowerFraction · ΔT_IT).
+    energy: { itLoadKw: 1000, mechanicalCop: 4, fanPowerFraction: FIXTURE_FAN_POWER_FRACTION, ...overrides.energy },
   });
   if (!parsed.ok) throw new Error(parsed.errors.join('; '));
   return parsed.scenario;

@@ -26,7 +26,7 @@ function referenceHour(scenario: Scenario, t: number, w: number, twb: number, p:
   const s = scenario.system;
   const e = scenario.envelope;
   const Ts = s.supplyAirC;
-  const f = s.fanHeatK;
+  const f = scenario.energy.fanPowerFraction * s.itDeltaTK; // fan heat = P_fan / (ṁ·cp) = fanPowerFraction · ΔT_IT
   const eps = s.evaporativeEffectiveness;
   const Tr = Ts + s.itDeltaTK;
   if (s.kind === 'direct-air') {

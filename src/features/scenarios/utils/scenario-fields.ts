@@ -58,7 +58,6 @@ export const siteFields: NumericField[] = [
 export const systemFields: NumericField[] = [
   field(sys.supplyAirC, 'system.supplyAirC', 'temperature', 'Air temperature held at the IT inlet.'),
   field(sys.itDeltaTK, 'system.itDeltaTK', 'temperatureDifference', 'Return air is the supply plus this rise; sets the air flow.'),
-  field(sys.fanHeatK, 'system.fanHeatK', 'temperatureDifference', 'Warming of the air by the hall fans, added before the IT inlet.'),
   field(
     sys.evaporativeEffectiveness,
     'system.evaporativeEffectiveness',
@@ -76,7 +75,7 @@ export const systemFields: NumericField[] = [
     ind.scavengerAirRatio as AnyNumber,
     'system.scavengerAirRatio',
     'ratio',
-    'Outdoor air mass flow through the exchanger per unit of hall air flow; 1 is common practice.',
+    'Outdoor air mass flow through the exchanger per unit of hall air flow; 1 is common practice. Less scavenger air lowers the exchanger’s effectiveness (and its fan power).',
     ['indirect-air'],
   ),
   field(ws.chilledWaterSupplyC, 'system.chilledWaterSupplyC', 'temperature', 'Water temperature leaving the plant to the hall coils; must be below the supply air.', ['water-side']),
@@ -92,9 +91,19 @@ export const systemFields: NumericField[] = [
     ws.dryCoolerAirRiseK as AnyNumber,
     'system.dryCoolerAirRiseK',
     'temperatureDifference',
-    'Air temperature rise through the dry cooler, which sets its air flow; 10 K is common practice.',
+    'Air temperature rise through the dry cooler at design, which sets its air flow (and a wetted cooler’s water); 10 K is common practice.',
     ['water-side'],
   ),
+  {
+    ...field(
+      ws.freezeProtectionWetBulbC as AnyNumber,
+      'system.freezeProtectionWetBulbC',
+      'temperature',
+      'Below this outdoor wet-bulb the tower runs dry with its basin heaters on; 2 °C is common practice.',
+      ['water-side'],
+    ),
+    heatRejection: 'cooling-tower',
+  },
 ];
 
 export const envelopeFields: NumericField[] = [
@@ -106,32 +115,43 @@ export const envelopeFields: NumericField[] = [
   field(envelopeShape.rhMaxPct, 'envelope.rhMaxPct', 'percent', 'Upper RH limit at the inlet.'),
 ];
 
+/** A tower-only energy input. */
+const towerField = (f: NumericField): NumericField => ({ ...f, kinds: ['water-side'], heatRejection: 'cooling-tower' });
+
 export const energyFields: NumericField[] = [
-  field(en.itLoadKw, 'energy.itLoadKw', 'power', 'Constant IT power of the hall; every energy figure scales with it.'),
-  field(en.mechanicalCop, 'energy.mechanicalCop', 'ratio', 'Cooling kW per electric kW at the reference outdoor temperature.'),
-  field(en.copSlopePerK, 'energy.copSlopePerK', 'perKelvin', 'Negative when compressors work harder in hot weather.'),
-  field(en.copReferenceC, 'energy.copReferenceC', 'temperature', 'Outdoor dry-bulb at which the COP above holds.'),
-  field(en.copMin, 'energy.copMin', 'ratio', 'Floor on the adjusted COP, so a steep slope cannot reach zero.'),
-  field(en.fanPowerFraction, 'energy.fanPowerFraction', 'shareAsPercent', 'Fan power as a share of IT load, every hour with data.'),
-  field(en.pumpPowerFraction, 'energy.pumpPowerFraction', 'shareAsPercent', 'Share of IT load; water-side every hour, air-side only while the evaporative stage runs.'),
+  field(en.itLoadKw, 'energy.itLoadKw', 'power', 'Design IT power of the hall; the load profile gives each hour’s share of it.'),
+  field(
+    en.mechanicalCop,
+    'energy.mechanicalCop',
+    'ratio',
+    'Rated full-load COP at the rating conditions (35 °C air for air-cooled, 29.4 °C condenser water for water-cooled, 6.7 °C leaving water); the hour’s COP follows its lift.',
+  ),
+  field(en.evaporatorApproachK, 'energy.evaporatorApproachK', 'temperatureDifference', 'Evaporating temperature below the leaving air or chilled water.'),
+  field(en.condenserApproachK, 'energy.condenserApproachK', 'temperatureDifference', 'Condensing temperature above the air or water entering the condenser.'),
+  field(en.compressorMinTurndown, 'energy.compressorMinTurndown', 'shareAsPercent', 'Lowest compressor capacity before it cycles on and off.'),
+  field(en.fanPowerFraction, 'energy.fanPowerFraction', 'shareAsPercent', 'Hall fan power at design flow as a share of IT load; the fan heat follows from it.'),
+  field(en.fanMinSpeedFraction, 'energy.fanMinSpeedFraction', 'shareAsPercent', 'Fans follow the load down to this speed; power goes with speed cubed.'),
+  field(en.pumpPowerFraction, 'energy.pumpPowerFraction', 'shareAsPercent', 'Pump power at design flow as a share of IT load; water-side every hour, air-side only while the evaporative stage runs.'),
+  field(en.pumpMinSpeedFraction, 'energy.pumpMinSpeedFraction', 'shareAsPercent', 'Pumps follow the load down to this speed; power goes with speed cubed.'),
   field(
     en.heatRejectionFanFraction,
     'energy.heatRejectionFanFraction',
     'shareAsPercent',
-    'Share of IT load for dry-cooler, tower or scavenger fans, every hour.',
+    'Share of IT load for dry-cooler or tower fans, or scavenger fans at a scavenger air ratio of 1, at design.',
     ['water-side', 'indirect-air'],
   ),
-  field(en.blowdownRatio, 'energy.blowdownRatio', 'ratio', 'Water drained per volume evaporated; 0.33 is about four cycles of concentration.'),
-  {
-    ...field(
-      en.towerEvaporationShare,
-      'energy.towerEvaporationShare',
-      'shareAsPercent',
-      'Share of a cooling tower’s heat rejected by evaporation; 85 % is a common rule of thumb.',
-      ['water-side'],
-    ),
-    heatRejection: 'cooling-tower',
-  },
+  field(en.cyclesOfConcentration, 'energy.cyclesOfConcentration', 'ratio', 'Dissolved solids in the circulating water over the make-up water; sets the blowdown. 4 is common practice.'),
+  towerField(field(en.towerDriftFraction, 'energy.towerDriftFraction', 'shareAsPercent', 'Water carried off as droplets, as a share of the circulating water.')),
+  towerField(field(en.basinHeaterFraction, 'energy.basinHeaterFraction', 'shareAsPercent', 'Basin-heater power in freeze-protection hours, as a share of IT load; take it from the tower’s data.')),
+];
+
+export type LoadProfileKind = Scenario['energy']['itLoadProfile']['kind'];
+
+/** The ways of giving the IT load through the year, for the editor's choice. */
+export const loadProfileKinds: { kind: LoadProfileKind; label: string; help: string }[] = [
+  { kind: 'constant', label: 'Constant', help: 'The design IT load every hour.' },
+  { kind: 'yearly-ramp', label: 'Ramp by year', help: 'A share of the design load for each year from the first year of the weather; the last share holds after.' },
+  { kind: 'hourly-profile', label: 'Hourly profile', help: 'A file of 8760 shares of the design load, one per hour of the year in local standard time.' },
 ];
 
 export const systemKinds: { kind: SystemKind; label: string; help: string }[] = [

@@ -13,7 +13,6 @@ export interface ScenarioFormValues {
     kind: SystemKind;
     supplyAirC: number;
     itDeltaTK: number;
-    fanHeatK: number;
     evaporativeEffectiveness: number;
     heatExchangerEffectiveness: number;
     scavengerAirRatio: number;
@@ -22,6 +21,7 @@ export interface ScenarioFormValues {
     approachK: number;
     heatRejection: 'dry-cooler' | 'cooling-tower';
     dryCoolerAirRiseK: number;
+    freezeProtectionWetBulbC: number;
   };
   energy: Scenario['energy'];
 }
@@ -44,7 +44,6 @@ export const newScenarioValues: ScenarioFormValues = {
     kind: 'direct-air',
     supplyAirC: 24,
     itDeltaTK: 12,
-    fanHeatK: 1,
     evaporativeEffectiveness: 0.85,
     heatExchangerEffectiveness: 0.7,
     scavengerAirRatio: 1,
@@ -53,18 +52,23 @@ export const newScenarioValues: ScenarioFormValues = {
     approachK: 5,
     heatRejection: 'cooling-tower',
     dryCoolerAirRiseK: 10,
+    freezeProtectionWetBulbC: 2,
   },
   energy: {
     itLoadKw: 1000,
+    itLoadProfile: { kind: 'constant' },
     mechanicalCop: 4.5,
-    copSlopePerK: 0,
-    copReferenceC: 35,
-    copMin: 1,
+    evaporatorApproachK: 5,
+    condenserApproachK: 10,
+    compressorMinTurndown: 0.2,
     fanPowerFraction: 0.05,
+    fanMinSpeedFraction: 0.3,
     pumpPowerFraction: 0.01,
+    pumpMinSpeedFraction: 0.3,
     heatRejectionFanFraction: 0.02,
-    blowdownRatio: 0.33,
-    towerEvaporationShare: 0.85,
+    cyclesOfConcentration: 4,
+    towerDriftFraction: 0.0002,
+    basinHeaterFraction: 0.001,
   },
 };
 
