@@ -7,8 +7,8 @@ import { useDismissMigrationNotice } from '../api/dismiss-migration-notice';
 import type { StoredScenario } from '../api/get-scenario';
 
 /** A value before or after the migration, in the reader's units where its field name gives one. */
-function changeValue(path: string, value: unknown, system: UnitSystem): string {
-  if (value === undefined || value === null) return '(none)';
+function changeValue(path: string, value: unknown, system: UnitSystem, missing: string): string {
+  if (value === undefined || value === null) return missing;
   if (typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean') {
     const key = path.split('.').pop() ?? path;
     return formatInputValue({ path, value, kind: typeof value === 'number' ? kindOfKey(key) : 'plain' }, system);
@@ -48,8 +48,8 @@ export function MigrationNotice({ projectId, stored, canDismiss }: { projectId: 
                   {inputLabel(c.path)}
                   <span className="block font-mono text-[11px] text-ink-faint">{c.path}</span>
                 </th>
-                <td className="num py-1 pr-3">{changeValue(c.path, c.before, unitSystem)}</td>
-                <td className="num py-1 pr-3">{changeValue(c.path, c.after, unitSystem)}</td>
+                <td className="num py-1 pr-3">{changeValue(c.path, c.before, unitSystem, 'not set')}</td>
+                <td className="num py-1 pr-3">{changeValue(c.path, c.after, unitSystem, 'removed')}</td>
                 <td className="py-1">{c.note}</td>
               </tr>
             ))}
