@@ -64,6 +64,7 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'energy', figure: 'Hall fans', unit: 'kWh', value: rounded(e.fanKwh, 1) },
     { section: 'energy', figure: 'Compressors', unit: 'kWh', value: rounded(e.compressorKwh, 1) },
     { section: 'energy', figure: 'Pumps', unit: 'kWh', value: rounded(e.pumpKwh, 1) },
+    { section: 'energy', figure: 'Basin heaters', unit: 'kWh', value: rounded(e.basinHeaterKwh, 1) },
     { section: 'energy', figure: 'Cooling total', unit: 'kWh', value: rounded(e.coolingKwh, 1) },
     { section: 'energy', figure: 'Cooling total per 8,760 h', unit: 'kWh', value: rounded(e.annual?.coolingKwh, 1) },
     { section: 'energy', figure: 'Partial PUE (cooling)', unit: '', value: rounded(e.partialPue, 4) },

@@ -108,6 +108,7 @@ export function EnergyTable({ results }: { results: ScenarioResults }) {
           row('fans', 'Hall fans', e.fanKwh, a?.fanKwh),
           row('compressors', 'Compressors', e.compressorKwh, a?.compressorKwh),
           row('pumps', 'Pumps', e.pumpKwh, a?.pumpKwh),
+          ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [row('basin', 'Basin heaters', e.basinHeaterKwh, a?.basinHeaterKwh)] : []),
           row('cooling', 'Cooling total', e.coolingKwh, a?.coolingKwh, true),
           row('it', 'IT equipment', e.itKwh, a?.itKwh),
         ]}

@@ -30,6 +30,8 @@ export function EnergyWaterCards({ results, engineVersion }: { results: Scenario
     { label: 'Hall fans', kwh: e.fanKwh },
     { label: 'Compressors', kwh: e.compressorKwh },
     { label: 'Pumps', kwh: e.pumpKwh },
+    // Only towers in freeze protection use them; runs before engine 2.0.0 have no such figure.
+    ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [{ label: 'Basin heaters', kwh: e.basinHeaterKwh }] : []),
   ];
   return (
     <div className="grid gap-4 lg:grid-cols-2">
