@@ -97,9 +97,9 @@ export function waterPartL(water: object, key: WaterPartKey): number | null {
   return typeof value === 'number' && Number.isFinite(value) ? value : null;
 }
 
-/** The water parts a view lists: all of them for an old run (shown as not counted), drift only where the engine gave it. */
+/** The water parts a view lists: the split of the evaporated water always (NOT_COUNTED for an old run), drift where there is some (towers). */
 export function waterPartsShown(water: object, counted: boolean): readonly WaterPart[] {
-  return counted ? waterParts.filter((p) => p.ofEvaporated || waterPartL(water, p.key) !== null) : waterParts.filter((p) => p.ofEvaporated);
+  return waterParts.filter((p) => p.ofEvaporated || (counted && (waterPartL(water, p.key) ?? 0) > 0));
 }
 
 /** Engine versions among some runs, in first-seen order; more than one means the comparison mixes engines. */

@@ -143,12 +143,17 @@ function RampBars({ fractions, itLoadKw }: { fractions: number[]; itLoadKw: numb
   );
 }
 
-/** Range and full-load hours, and the average week drawn as one line (Monday of the profile's first week at the left). */
+/** Range and full-load hours, and the average week drawn as one line (the profile's first day at the left). */
 function ProfileSummary({ name, fractions, itLoadKw }: { name: string; fractions: number[]; itLoadKw: number }) {
   const s = summariseLoadProfile(fractions);
-  const widthPx = 336;
-  const heightPx = 64;
-  const points = s.averageWeek.map((f, i) => `${((i + 0.5) * widthPx) / 168},${heightPx - f * heightPx}`).join(' ');
+  // The axis runs from a tenth below the lowest hour to design load, so a shallow daily swing still shows.
+  const low = Math.max(0, Math.floor(s.minFraction * 10) / 10 - 0.1);
+  const leftPx = 36;
+  const widthPx = 372;
+  const plotPx = widthPx - leftPx;
+  const heightPx = 72;
+  const y = (f: number) => heightPx - ((f - low) / (1 - low || 1)) * heightPx;
+  const points = s.averageWeek.map((f, i) => `${leftPx + ((i + 0.5) * plotPx) / 168},${y(f)}`).join(' ');
   return (
     <div className="rounded border border-rule px-3 py-2 text-xs" data-testid="load-profile-summary">
       <p className="font-medium text-ink">{name}</p>
@@ -164,17 +169,19 @@ function ProfileSummary({ name, fractions, itLoadKw }: { name: string; fractions
         <dt className="text-ink-soft">Full-load hours</dt>
         <dd className="num">{Math.round(s.fullLoadHours).toLocaleString('en')} h of 8,760</dd>
       </dl>
-      <svg viewBox={`0 0 ${widthPx} ${heightPx + 14}`} width={widthPx} height={heightPx + 14} className="mt-2 max-w-full" role="img" aria-label="Average week of the profile">
-        <line x1={0} x2={widthPx} y1={heightPx} y2={heightPx} stroke="currentColor" className="text-rule" />
-        <line x1={0} x2={widthPx} y1={0} y2={0} stroke="currentColor" strokeDasharray="3,3" className="text-rule" />
+      <svg viewBox={`0 -6 ${widthPx} ${heightPx + 22}`} width={widthPx} height={heightPx + 22} className="mt-2 max-w-full text-ink-soft" role="img" aria-label="Average week of the profile">
+        <line x1={leftPx} x2={widthPx} y1={y(1)} y2={y(1)} stroke="currentColor" strokeDasharray="3,3" opacity={0.5} />
+        <line x1={leftPx} x2={widthPx} y1={heightPx} y2={heightPx} stroke="currentColor" opacity={0.5} />
+        <text x={leftPx - 4} y={y(1) + 3} fontSize={9} textAnchor="end" fill="currentColor">100 %</text>
+        <text x={leftPx - 4} y={heightPx + 3} fontSize={9} textAnchor="end" fill="currentColor">{pct(low)}</text>
         <polyline points={points} fill="none" stroke="currentColor" strokeWidth={1.5} className="text-harbour" />
-        {['day 1', 'day 2', 'day 3', 'day 4', 'day 5', 'day 6', 'day 7'].map((d, i) => (
-          <text key={d} x={(i * widthPx) / 7 + 2} y={heightPx + 11} fontSize={9} fill="currentColor" className="text-ink-soft">
-            {d}
+        {[1, 2, 3, 4, 5, 6, 7].map((d) => (
+          <text key={d} x={leftPx + ((d - 1) * plotPx) / 7 + 2} y={heightPx + 12} fontSize={9} fill="currentColor">
+            day {d}
           </text>
         ))}
       </svg>
-      <p className="text-ink-soft">Average week over the year (dashed line: design load). Day 1 is 1 January.</p>
+      <p className="text-ink-soft">Average week over the year, as a share of design load (dashed: design load). Day 1 is 1 January.</p>
     </div>
   );
 }

@@ -28,17 +28,15 @@ export function ScenarioEditorPage() {
   }
   const stored = scenario.data?.scenario;
   return (
-    <div className="space-y-4">
-      {stored && <MigrationNotice projectId={projectId} stored={stored} canDismiss={role !== undefined && canEdit} />}
-      <ScenarioForm
-        key={stored?.id ?? 'new'}
-        projectId={projectId}
-        scenarioId={stored?.id ?? null}
-        initial={stored ? toFormValues(stored.scenario) : newScenarioValues}
-        climateFiles={climateFiles.data?.climateFiles ?? []}
-        canEdit={role === undefined ? false : canEdit}
-        roleKnown={role !== undefined}
-      />
-    </div>
+    <ScenarioForm
+      key={stored?.id ?? 'new'}
+      projectId={projectId}
+      scenarioId={stored?.id ?? null}
+      initial={stored ? toFormValues(stored.scenario) : newScenarioValues}
+      climateFiles={climateFiles.data?.climateFiles ?? []}
+      canEdit={role === undefined ? false : canEdit}
+      roleKnown={role !== undefined}
+      notice={stored && <MigrationNotice projectId={projectId} stored={stored} canDismiss={role !== undefined && canEdit} />}
+    />
   );
 }

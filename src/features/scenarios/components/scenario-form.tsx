@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
@@ -31,6 +31,7 @@ export function ScenarioForm({
   climateFiles,
   canEdit,
   roleKnown,
+  notice,
 }: {
   projectId: number;
   scenarioId: number | null;
@@ -38,6 +39,8 @@ export function ScenarioForm({
   climateFiles: ClimateFileListing[];
   canEdit: boolean;
   roleKnown: boolean;
+  /** Shown under the title, above the form (the one-time notice of the start-up migration). */
+  notice?: ReactNode;
 }) {
   const navigate = useNavigate();
   const form = useForm<ScenarioFormValues, unknown, Scenario>({ defaultValues: initial, resolver, mode: 'onChange' });
@@ -109,6 +112,7 @@ export function ScenarioForm({
         )}
       </div>
 
+      {notice}
       {roleKnown && readOnly && (
         <Notice title="Read-only">You can read this scenario and its runs; editing and running need the engineer or owner role in this project.</Notice>
       )}
