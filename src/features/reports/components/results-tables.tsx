@@ -34,7 +34,7 @@ export function ModeHoursTable({ results, engineVersion }: { results: ScenarioRe
             if (spec.kind === 'mode') return { key: spec.mode, cells: [<><ModeSwatch mode={spec.mode} />{modeLabels[spec.mode]}</>, hoursText(n), share(n ?? 0, h.total)] };
             return {
               key: spec.subset.key,
-              cells: [<span className="pl-5 text-xs text-ink-soft">{spec.subset.rowLabel}</span>, <span className="text-xs text-ink-soft">{hoursText(n)}</span>, <span className="text-xs text-ink-soft">{n === null ? '' : share(n, h.total)}</span>],
+              cells: [<span className="whitespace-nowrap pl-5 text-xs text-ink-soft">{spec.subset.rowLabel}</span>, <span className="text-xs text-ink-soft">{hoursText(n)}</span>, <span className="text-xs text-ink-soft">{n === null ? '' : share(n, h.total)}</span>],
             };
           }),
           { key: 'all', strong: true, cells: ['All hours', h.total.toLocaleString('en'), '100.0 %'] },
