@@ -1,4 +1,4 @@
-import { parseScenario, runScenario, type RunOptions, type ScenarioResults, type ScenarioSeries } from '../shared/scenario';
+import { migrateScenario, parseScenario, runScenario, type RunOptions, type ScenarioResults, type ScenarioSeries } from '../shared/scenario';
 
 export interface ExecuteRunInput {
   /** Scenario JSON as stored; validated again here because a worker must not trust its caller. */
@@ -11,12 +11,15 @@ export interface ExecuteRunOutput {
   results: ScenarioResults;
   modes: Uint8Array;
   mechanicalFraction: Float64Array;
+  humidified: Uint8Array;
 }
 
 /** Piscina task: one run, returning the summary and the per-hour modes the run page draws. */
 export function executeRun({ scenario, series, options }: ExecuteRunInput): ExecuteRunOutput {
-  const parsed = parseScenario(scenario);
+  // A run queued before engine 2.0.0 holds a scenario with retired inputs; it runs on their migration.
+  const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
   const run = runScenario(parsed.scenario, series, options);
-  return { results: run.results, modes: run.classification.modes, mechanicalFraction: run.classification.mechanicalFraction };
+  const { modes, mechanicalFraction, humidified } = run.classification;
+  return { results: run.results, modes, mechanicalFraction, humidified };
 }

@@ -1,6 +1,6 @@
 import { hourlyJson } from '../shared/report/hourly-json';
 import { standardPressurePa } from '../shared/psychrometrics';
-import { hourlyCsvInput, outdoorStates, parseScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
+import { hourlyCsvInput, migrateScenario, outdoorStates, parseScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
 
 export interface FormatHourlyInput {
   /** Scenario JSON as stored with the run; validated again because a worker must not trust its caller. */
@@ -11,6 +11,8 @@ export interface FormatHourlyInput {
   /** The run's stored per-hour outcome, used as it was rather than classified again. */
   modes: Uint8Array;
   mechanicalFraction: Float64Array;
+  /** Stored humidified flags; null for runs made before engine 2.0.0 (the column is left empty). */
+  humidified: Uint8Array | null;
   format: 'csv' | 'json';
   /** For JSON: what the file is of (run id, names), written first. */
   about?: Record<string, unknown>;
@@ -24,11 +26,13 @@ const encoder = new TextEncoder();
  * climate series at the run's elevation, exactly as the run computed them (its first step, outdoorStates),
  * and written beside the stored modes — kept off the server's main thread.
  */
-export function formatHourly({ scenario, series, elevationM, modes, mechanicalFraction, format, about }: FormatHourlyInput): Uint8Array {
-  const parsed = parseScenario(scenario);
+export function formatHourly({ scenario, series, elevationM, modes, mechanicalFraction, humidified, format, about }: FormatHourlyInput): Uint8Array {
+  // A run's scenario is stored as it ran; one from engine 1.0.0 carries retired inputs, so it is migrated first
+  // (only its elevation is used here).
+  const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
   const { states } = outdoorStates(series, standardPressurePa(elevationM ?? parsed.scenario.elevationM));
-  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction } });
+  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } });
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];
   let length = 0;

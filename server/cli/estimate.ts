@@ -1,15 +1,16 @@
 /**
- * `npm run --silent estimate -- --weather FILE.csv --scenario SCENARIO.json [--hourly OUT.csv] [--elevation M]`
+ * `npm run --silent estimate -- --weather FILE.csv --scenario SCENARIO.json [--hourly OUT.csv] [--elevation M] [--load-profile FILE.csv]`
  *
  * Reads hourly weather through the climate importer, runs one scenario, prints one JSON summary on
  * stdout and, with --hourly, writes one CSV row per hour in file order. Errors go to stderr with a
  * non-zero exit: 2 for a usage or input mistake, 1 for anything else.
  */
 import { closeSync, openSync, readFileSync, writeSync } from 'node:fs';
+import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { importClimateText } from '../../shared/climate';
 import type { ColumnMappingOverride, ImportOptions, PressureUnit, QuantityColumn, TemperatureUnit } from '../../shared/climate/types';
-import { hourlyCsvInput, parseScenario, runScenario, writeHourlyCsv } from '../../shared/scenario';
+import { hourlyCsvInput, parseLoadProfileCsv, parseScenario, runScenario, writeHourlyCsv } from '../../shared/scenario';
 
 const USAGE = `Usage: npm run --silent estimate -- --weather FILE.csv --scenario SCENARIO.json [options]
 
@@ -18,6 +19,8 @@ const USAGE = `Usage: npm run --silent estimate -- --weather FILE.csv --scenario
   --hourly FILE         also write one CSV row per hour (timestamps in UTC, file order)
   --elevation M         site elevation in metres (overrides the scenario's elevationM)
   --utc-offset-minutes N  local standard time offset for months and hours of day (default 0)
+  --load-profile FILE   hourly IT load profile: 8760 fractions of the design load (0–1), one per hour of the
+                        local standard-time year (replaces the scenario's energy.itLoadProfile)
 
 Column mapping, when recognition needs help (COL is a header text or a 1-based column number):
   --time COL                    one ISO 8601 time column
@@ -43,6 +46,7 @@ function main(argv: string[]): number {
       hourly: { type: 'string' },
       elevation: { type: 'string' },
       'utc-offset-minutes': { type: 'string' },
+      'load-profile': { type: 'string' },
       time: { type: 'string' },
       'dry-bulb': { type: 'string' },
       humidity: { type: 'string' },
@@ -76,6 +80,12 @@ function main(argv: string[]): number {
   }
   const parsed = parseScenario(scenarioJson);
   if (!parsed.ok) throw new UsageError(`${values.scenario}: invalid scenario:\n  ${parsed.errors.join('\n  ')}`);
+  if (values['load-profile']) {
+    const file = values['load-profile'];
+    const profile = parseLoadProfileCsv(readText(file, '--load-profile'));
+    if (!profile.ok) throw new UsageError(`--load-profile ${file}: not a load profile:\n  ${profile.errors.join('\n  ')}`);
+    parsed.scenario.energy.itLoadProfile = { kind: 'hourly-profile', name: path.basename(file), fractions: profile.fractions };
+  }
 
   const options: ImportOptions = {};
   const mapping = mappingFromFlags(values);

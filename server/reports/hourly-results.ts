@@ -28,6 +28,7 @@ export async function hourlyFileOf(
   }
   const modes = decodeUint8Column(stored.modes);
   const mechanicalFraction = decodeFloat64Column(stored.mechanicalFraction);
+  const humidified = stored.humidified ? decodeUint8Column(stored.humidified) : null;
   if (modes.length !== series.timestampsMs.length) {
     throw new HttpError(409, 'series_changed', `Run ${run.id} has ${modes.length} hours but its climate file now has ${series.timestampsMs.length}.`);
   }
@@ -38,6 +39,7 @@ export async function hourlyFileOf(
     elevationM: climate.elevationM,
     modes,
     mechanicalFraction,
+    humidified,
     format,
     about,
   });

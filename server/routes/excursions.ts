@@ -9,7 +9,7 @@ import {
   RUN_ENVELOPE,
   type ChosenEnvelope,
 } from '../../shared/excursions/proposal-query';
-import { findEnvelopePreset, parseScenario, type Scenario } from '../../shared/scenario';
+import { findEnvelopePreset, migrateScenario, parseScenario, type Scenario } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { loadClimateSeries } from '../climate/store';
@@ -44,7 +44,8 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
       if (run.status !== 'done') throw new HttpError(409, 'not_ready', `Run ${run.id} is ${run.status}; excursions can be worked out once it is done.`);
       const series = run.climateFileId === null ? undefined : loadClimateSeries(db, run.climateFileId);
       if (!series) throw new HttpError(409, 'climate_file_gone', `The climate file of run ${run.id} has been deleted, so its hours cannot be re-examined.`);
-      const parsed = parseScenario(JSON.parse(run.scenarioJson));
+      // A run made by engine 1.0.0 stored retired inputs: migrated (as saved scenarios are) before it is re-examined.
+      const parsed = parseScenario(migrateScenario(JSON.parse(run.scenarioJson)).scenario);
       if (!parsed.ok) throw new HttpError(409, 'invalid_scenario', `Run ${run.id}'s scenario no longer validates: ${parsed.errors.join('; ')}`);
       const scenario = parsed.scenario;
       const climate = JSON.parse(run.climateJson) as { name: string; elevationM: number; utcOffsetMinutes: number; site: { name: string } };

@@ -120,6 +120,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
             runId,
             modes: blob(out.modes),
             mechanicalFraction: blob(out.mechanicalFraction),
+            humidified: blob(out.humidified),
           })
           .run();
         tx.update(runs)

@@ -24,6 +24,7 @@ export const hourlyUnits: Record<HourlyColumn, string> = {
   humidity_ratio_gkg: 'g/kg dry air',
   enthalpy_kjkg: 'kJ/kg dry air',
   mechanical_fraction: 'share of the cooling load on compressors, 0–1',
+  humidified: '1 for free cooling with humidification, else 0; empty for runs before engine 2.0.0',
 };
 
 function column(values: Float64Array, decimals: number, scale = 1): (number | null)[] {
@@ -49,6 +50,7 @@ export function hourlyJson(input: HourlyCsvInput): HourlyJson {
       humidity_ratio_gkg: column(input.humidityRatio, 3, 1000),
       enthalpy_kjkg: column(input.enthalpyKJPerKg, 2),
       mechanical_fraction: mechanical,
+      humidified: Array.from(input.modes, (m, i) => (m === MODE.noData || input.humidified === null ? null : input.humidified[i] === 1 ? 1 : 0)),
     },
   };
 }

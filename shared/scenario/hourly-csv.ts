@@ -19,6 +19,7 @@ export const HOURLY_CSV_COLUMNS = [
   'humidity_ratio_gkg',
   'enthalpy_kjkg',
   'mechanical_fraction',
+  'humidified',
 ] as const;
 
 export interface HourlyCsvInput {
@@ -32,12 +33,16 @@ export interface HourlyCsvInput {
   humidityRatio: Float64Array;
   enthalpyKJPerKg: Float64Array;
   mechanicalFraction: Float64Array;
+  /** 1 for a free-cooling hour with humidification; null for runs made before engine 2.0.0 (empty cells). */
+  humidified: Uint8Array | null;
 }
 
 /** The hourly CSV's columns from the series a run was given and the run itself (its states and per-hour outcome). */
 export function hourlyCsvInput(
   series: ScenarioSeries,
-  run: Pick<ScenarioRun, 'states'> & { classification: Pick<ScenarioRun['classification'], 'modes' | 'mechanicalFraction'> },
+  run: Pick<ScenarioRun, 'states'> & {
+    classification: Pick<ScenarioRun['classification'], 'modes' | 'mechanicalFraction'> & { humidified: Uint8Array | null };
+  },
 ): HourlyCsvInput {
   return {
     timestampsMs: series.timestampsMs,
@@ -49,17 +54,19 @@ export function hourlyCsvInput(
     humidityRatio: run.states.humidityRatio,
     enthalpyKJPerKg: run.states.enthalpyKJPerKg,
     mechanicalFraction: run.classification.mechanicalFraction,
+    humidified: run.classification.humidified,
   };
 }
 
 const ROWS_PER_CHUNK = 8192;
-// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 9 separators.
-const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 9;
+// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 1 flag + 10 separators.
+const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 1 + 10;
 const COMMA = 44;
 const NEWLINE = 10;
 const MINUS = 45;
 const DOT = 46;
 const ZERO = 48;
+const ONE = 49;
 const POW10 = [1, 10, 100, 1000, 10_000];
 const encoder = new TextEncoder();
 const MODE_BYTES = MODE_NAMES.map((name) => encoder.encode(name));
@@ -153,8 +160,10 @@ function writeTimestamp(buf: Uint8Array, pos: number, ms: number, prefix: DayPre
 export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Array) => void): void {
   const n = input.modes.length;
   for (const key of Object.keys(input) as (keyof HourlyCsvInput)[]) {
-    if (input[key].length !== n) throw new RangeError(`${key} has ${input[key].length} hours, modes has ${n}`);
+    const column = input[key];
+    if (column !== null && column.length !== n) throw new RangeError(`${key} has ${column.length} hours, modes has ${n}`);
   }
+  const humidified = input.humidified;
   onChunk(encoder.encode(`${HOURLY_CSV_COLUMNS.join(',')}\n`));
   const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
   const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * MAX_ROW_BYTES);
@@ -180,7 +189,10 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
       buf[pos++] = COMMA;
       pos = writeFixed(buf, pos, input.enthalpyKJPerKg[i], 2);
       buf[pos++] = COMMA;
-      if (input.modes[i] !== MODE.noData) pos = writeFixed(buf, pos, input.mechanicalFraction[i], 3);
+      const hasData = input.modes[i] !== MODE.noData;
+      if (hasData) pos = writeFixed(buf, pos, input.mechanicalFraction[i], 3);
+      buf[pos++] = COMMA;
+      if (hasData && humidified !== null) buf[pos++] = humidified[i] === 1 ? ONE : ZERO;
       buf[pos++] = NEWLINE;
     }
     onChunk(buf.subarray(0, pos));

@@ -50,10 +50,17 @@ describe('scenario inputs in SI and IP', () => {
   it('offers only the fields of the chosen system kind', () => {
     expect(fieldsFor(systemFields, 'direct-air').map((f) => f.path)).not.toContain('system.approachK');
     expect(fieldsFor(systemFields, 'water-side').map((f) => f.path)).toContain('system.approachK');
-    expect(fieldsFor(energyFields, 'direct-air').map((f) => f.path)).not.toContain('energy.towerEvaporationShare');
-    // The tower's evaporation share only matters to a tower: a dry cooler's water comes from its spray stage.
-    expect(fieldsFor(energyFields, 'water-side', 'dry-cooler').map((f) => f.path)).not.toContain('energy.towerEvaporationShare');
-    expect(fieldsFor(energyFields, 'water-side', 'cooling-tower').map((f) => f.path)).toContain('energy.towerEvaporationShare');
+    // Engine 2.0.0: the tower's evaporation share is retired; drift and basin heaters only matter to a tower.
+    expect(fieldsFor(energyFields, 'direct-air').map((f) => f.path)).not.toContain('energy.towerDriftFraction');
+    expect(fieldsFor(energyFields, 'water-side', 'dry-cooler').map((f) => f.path)).not.toContain('energy.towerDriftFraction');
+    expect(fieldsFor(energyFields, 'water-side', 'cooling-tower').map((f) => f.path)).toEqual(expect.arrayContaining(['energy.towerDriftFraction', 'energy.basinHeaterFraction']));
+    expect(fieldsFor(systemFields, 'water-side', 'cooling-tower').map((f) => f.path)).toContain('system.freezeProtectionWetBulbC');
+    expect(fieldsFor(systemFields, 'water-side', 'dry-cooler').map((f) => f.path)).not.toContain('system.freezeProtectionWetBulbC');
+    // Retired inputs are no longer offered.
+    const all = [...systemFields, ...energyFields].map((f) => f.path);
+    for (const retired of ['system.fanHeatK', 'energy.copSlopePerK', 'energy.copReferenceC', 'energy.copMin', 'energy.blowdownRatio', 'energy.towerEvaporationShare']) {
+      expect(all).not.toContain(retired);
+    }
   });
 });
 

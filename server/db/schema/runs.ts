@@ -99,13 +99,17 @@ export const runs = sqliteTable(
   (table) => [index('runs_project_idx').on(table.projectId), index('runs_status_idx').on(table.status), index('runs_sweep_idx').on(table.sweepId)],
 );
 
-/** Per-hour outcome of a finished run, column-wise: mode codes and the compressors' share of the load. */
+/**
+ * Per-hour outcome of a finished run, column-wise: mode codes, the compressors' share of the load and (engine 2.0.0
+ * on; null before) the humidified flag of each hour.
+ */
 export const runHours = sqliteTable('run_hours', {
   runId: integer()
     .primaryKey()
     .references(() => runs.id, { onDelete: 'cascade' }),
   modes: blob({ mode: 'buffer' }).notNull(),
   mechanicalFraction: blob({ mode: 'buffer' }).notNull(),
+  humidified: blob({ mode: 'buffer' }),
 });
 
 export const shareTargets = ['run', 'comparison'] as const;

@@ -31,7 +31,9 @@ const WEATHER = file(
   'weather.csv',
   'timestamp,dry_bulb_c,dew_point_c\n2021-07-01T00:00Z,20,10\n2021-07-01T01:00Z,,10\n2021-07-01T02:00Z,31,12\n2021-07-01T03:00Z,35,22\n',
 );
-const COLUMNS = 'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction';
+const COLUMNS = 'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified';
+// Synthetic winter weather: a cold hour drier than the A1 lower limit (−12 °C dew point), and a mild one.
+const WINTER = file('winter.csv', 'timestamp,dry_bulb_c,dew_point_c\n2021-01-04T00:00Z,-5,-25\n2021-01-04T01:00Z,8,2\n');
 
 describe('estimate command line', { timeout: 30_000 }, () => {
   it('prints one JSON summary and writes one CSV row per hour in file order', () => {
@@ -40,7 +42,13 @@ describe('estimate command line', { timeout: 30_000 }, () => {
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     const summary = JSON.parse(r.stdout);
-    expect(summary.hours).toEqual({ free: 1, adiabatic: 1, mechanical: 1, noData: 1, total: 4 });
+    expect(summary.engineVersion).toBe('scenario-engine 2.0.0');
+    // The 35 °C / 22 °C dew-point hour is above the moisture limit: the coil carries all of it (not partial).
+    expect(summary.hours).toEqual({ free: 1, adiabatic: 1, mechanical: 1, noData: 1, total: 4, humidified: 0, partialMechanical: 0 });
+    expect(Object.keys(summary.water)).toEqual(
+      expect.arrayContaining(['evaporatedL', 'humidificationL', 'evaporativeCoolingL', 'driftL', 'blowdownL', 'totalL']),
+    );
+    expect(summary.water.evaporatedL).toBeCloseTo(summary.water.humidificationL + summary.water.evaporativeCoolingL, 9);
     expect(summary.energy.partialPue).toBeGreaterThan(1);
     expect(summary.water.totalL).toBeGreaterThan(0);
     const lines = readFileSync(hourly, 'utf8').trimEnd().split('\n');
@@ -52,11 +60,47 @@ describe('estimate command line', { timeout: 30_000 }, () => {
       ['2021-07-01T02:00Z', 'adiabatic'],
       ['2021-07-01T03:00Z', 'mechanical'],
     ]);
-    for (const line of lines.slice(1)) expect(line.split(',')).toHaveLength(9);
+    for (const line of lines.slice(1)) expect(line.split(',')).toHaveLength(10);
+    expect(lines.slice(1).map((line) => line.split(',')[9])).toEqual(['0', '', '0', '0']);
     // 20 °C with a 10 °C dew point at the scenario's 120 m: humidity ratio from psychrolib (reference library).
     const first = lines[1].split(',');
     expect(first[4]).toBe('10.00');
     expect(Number(first[6])).toBeCloseTo(psy.GetHumRatioFromTDewPoint(10, psy.GetStandardAtmPressure(120)) * 1000, 3);
+  });
+
+  it('counts a cold hour drier than the envelope as free cooling with humidification, its water apart', () => {
+    const hourly = path.join(dir, 'winter-hourly.csv');
+    const r = estimate(['--weather', WINTER, '--scenario', SCENARIO, '--hourly', hourly]);
+    expect(r.stderr).toBe('');
+    const summary = JSON.parse(r.stdout);
+    expect(summary.hours).toMatchObject({ free: 2, adiabatic: 0, humidified: 1 });
+    expect(summary.water.humidificationL).toBeGreaterThan(0);
+    expect(summary.water.evaporativeCoolingL).toBe(0);
+    const lines = readFileSync(hourly, 'utf8').trimEnd().split('\n');
+    expect(lines.slice(1).map((line) => [line.split(',')[1], line.split(',')[9]])).toEqual([
+      ['free', '1'],
+      ['free', '0'],
+    ]);
+  });
+
+  it('exits 2 on a retired input, naming its replacement', () => {
+    const old = JSON.parse(readFileSync(SCENARIO, 'utf8'));
+    old.system.fanHeatK = 1;
+    const r = estimate(['--weather', WEATHER, '--scenario', file('old-scenario.json', JSON.stringify(old))]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/system\.fanHeatK: is retired: .*energy\.fanPowerFraction/);
+  });
+
+  it('takes an hourly IT load profile with --load-profile, and names the bad lines of one', () => {
+    const fractions = Array.from({ length: 8760 }, () => '0.5');
+    const good = file('profile.csv', `fraction\n${fractions.join('\n')}\n`);
+    const full = JSON.parse(estimate(['--weather', WINTER, '--scenario', SCENARIO]).stdout);
+    const half = JSON.parse(estimate(['--weather', WINTER, '--scenario', SCENARIO, '--load-profile', good]).stdout);
+    expect(half.energy.itKwh).toBeCloseTo(full.energy.itKwh / 2, 6);
+    fractions[99] = '1.5';
+    const bad = estimate(['--weather', WINTER, '--scenario', SCENARIO, '--load-profile', file('bad-profile.csv', `fraction\n${fractions.join('\n')}\n`)]);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toMatch(/line 101: 1\.5 is outside 0 to 1/);
   });
 
   it('runs through npm as documented', () => {

@@ -18,6 +18,8 @@ export interface Psychrolib {
   GetTWetBulbFromHumRatio(tC: number, w: number, pressurePa: number): number;
   GetRelHumFromHumRatio(tC: number, w: number, pressurePa: number): number;
   GetMoistAirEnthalpy(tC: number, w: number): number;
+  GetSatHumRatio(tC: number, pressurePa: number): number;
+  GetSatAirEnthalpy(tC: number, pressurePa: number): number;
   GetMoistAirVolume(tC: number, w: number, pressurePa: number): number;
   GetStandardAtmPressure(elevationM: number): number;
 }

@@ -158,6 +158,7 @@ describe('hourly JSON', () => {
       humidityRatio: Float64Array.of(0.0034567, Number.NaN),
       enthalpyKJPerKg: Float64Array.of(8.4449, Number.NaN),
       mechanicalFraction: Float64Array.of(0, 0.5),
+      humidified: Uint8Array.of(1, 0),
     };
     const json = hourlyJson(input);
     expect(json.hours.timestamp).toEqual(['2024-01-01T00:00Z', '2024-01-01T01:00Z']);
@@ -166,5 +167,6 @@ describe('hourly JSON', () => {
     expect(json.hours.dry_bulb_c).toEqual([-0.13, null]);
     expect(json.hours.humidity_ratio_gkg).toEqual([3.457, null]);
     expect(json.hours.mechanical_fraction).toEqual([0, null]);
+    expect(json.hours.humidified).toEqual([1, null]);
   });
 });

@@ -13,7 +13,7 @@ const limits: InletLimits = RECOMMENDED;
 
 function classifyOne(scenario: ReturnType<typeof makeScenario>, state: ReferenceState, envelope: InletLimits = limits) {
   const out = classifyHours(scenario.system, envelope, outdoorHours([state]), plantOf(scenario));
-  return { mode: out.modes[0], fraction: out.mechanicalFraction[0], excursion: out.excursions[0], evaporation: out.evaporationKgPerKgAir[0] };
+  return { mode: out.modes[0], fraction: out.mechanicalFraction[0], excursion: out.excursions[0], evaporation: out.evaporationKgPerKgAir[0], humidified: out.humidified[0] };
 }
 
 describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelope at sea level)', () => {
@@ -59,13 +59,19 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
     expect(r.excursion).toBe(0);
   });
 
-  it('rule 2: too dry with an evaporative stage is adiabatic assist, humidifying the outdoor share to W_lo', () => {
+  // Engine 2.0.0: this hour was "adiabatic assist" in 1.0.0; the stage only adds moisture, so it is free cooling
+  // with humidification (issue 12 §2), and the outdoor share now comes from an enthalpy balance, not a dry-bulb one.
+  it('rule 2: too dry with an evaporative stage is free cooling with humidification, the outdoor share humidified to W_lo', () => {
     const hour = stateFromDewPoint(-5, -20);
     expect(hour.w).toBeLessThan(wLo);
     const r = classifyOne(withEvap, hour);
-    expect(r.mode).toBe(MODE.adiabatic);
-    // Outdoor share of the supply from the sensible mixing balance: (Tr − (Ts − f)) / (Tr − T).
-    const share = (Tr - (Ts - f)) / (Tr - hour.t);
+    expect(r.mode).toBe(MODE.free);
+    expect(r.humidified).toBe(1);
+    // Outdoor share x from h(Ts − f, W_lo) = x·h_out + (1 − x)·h(Tr, W_lo): the mix is humidified at constant enthalpy.
+    const hOf = (t: number, w: number) => psy.GetMoistAirEnthalpy(t, w) / 1000;
+    const share = (hOf(Tr, wLo) - hOf(Ts - f, wLo)) / (hOf(Tr, wLo) - hOf(hour.t, hour.w));
+    expect(share).toBeGreaterThan(0);
+    expect(share).toBeLessThan((Tr - (Ts - f)) / (Tr - hour.t)); // less outdoor air than a dry-bulb balance gives
     expect(r.evaporation).toBeCloseTo(share * (wLo - hour.w), 7);
     expect(r.excursion).toBe(0);
   });
@@ -96,15 +102,29 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
     expect(r.fraction).toBeCloseTo(7 / 13, 6);
   });
 
-  it('rule 3: ε reaches Ts − f but the leaving air is too humid, so mechanical without pre-cooling', () => {
+  // Engine 2.0.0: the stage is modulated to the moisture limit in mechanical hours (issue 12 §5) instead of staying off.
+  it('rule 3: ε reaches Ts − f but the leaving air is too humid, so mechanical with the stage modulated to W_hi', () => {
     const hour = stateFromDewPoint(35, 10);
     expect(hour.w).toBeLessThanOrEqual(wHi);
     expect(hour.t - 0.8 * (hour.t - hour.twb)).toBeLessThanOrEqual(Ts - f);
     expect(psy.GetHumRatioFromTWetBulb(Ts - f, hour.twb, p)).toBeGreaterThan(wHi);
     const r = classifyOne(withEvap, hour);
     expect(r.mode).toBe(MODE.mechanical);
-    expect(r.fraction).toBeCloseTo((35 - 23) / 13, 6);
-    expect(r.evaporation).toBe(0);
+    // The stage wets the air along its wet-bulb line only until W = W_hi: find that dry-bulb with psychrolib by bisection.
+    let lo = hour.twb;
+    let hi = hour.t;
+    for (let k = 0; k < 60; k++) {
+      const mid = (lo + hi) / 2;
+      if (psy.GetHumRatioFromTWetBulb(mid, hour.twb, p) > wHi) lo = mid;
+      else hi = mid;
+    }
+    const enteringC = (lo + hi) / 2;
+    const hOf = (t: number, w: number) => psy.GetMoistAirEnthalpy(t, w) / 1000;
+    const outdoorLoad = hOf(enteringC, wHi) - hOf(Ts - f, wHi);
+    const recirculationLoad = hOf(Tr, hour.w) - hOf(Ts - f, hour.w);
+    expect(r.fraction).toBeCloseTo(outdoorLoad / recirculationLoad, 4);
+    expect(r.fraction).toBeLessThan((35 - 23) / 13); // better than the unwetted air
+    expect(r.evaporation).toBeCloseTo(wHi - hour.w, 6);
   });
 
   it('rule 3: ε cannot reach Ts − f, so mechanical with the pre-cooled outdoor air easing the coil', () => {

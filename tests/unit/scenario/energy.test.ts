@@ -126,7 +126,8 @@ describe('hourly energy worked examples (IT 1000 kW, fans 5 %, pumps 1 %, heat-r
 
   it('a no-data hour uses no energy and no water', () => {
     const scenario = makeScenario('water-side', { system: { heatRejection: 'cooling-tower' } });
-    const e = hourlyEnergy(scenario.system, scenario.energy, outdoor(Number.NaN, Number.NaN), Float64Array.of(1), oneHour(MODE.noData, 0), SEA_LEVEL_PA);
+    const nan = Float64Array.of(Number.NaN);
+    const e = hourlyEnergy(scenario.system, scenario.energy, { dryBulbC: nan, wetBulbC: nan, humidityRatio: nan }, Float64Array.of(1), oneHour(MODE.noData, 0), SEA_LEVEL_PA);
     expect([e.itKw[0], e.fanKw[0], e.compressorKw[0], e.pumpKw[0], e.evaporativeCoolingL[0], e.driftL[0]]).toEqual([0, 0, 0, 0, 0, 0]);
   });
 });

@@ -103,7 +103,9 @@ describe('classification invariants', () => {
     );
   });
 
-  it('known exception: with an RH lower limit, a warmer supply is drier in RH, so a direct-air hour can move from free to adiabatic', () => {
+  // Engine 1.0.0 counted the warm-supply hour as adiabatic (an exception to the property above); since 2.0.0 an
+  // hour whose stage only adds moisture is free cooling with humidification, so the exception is gone.
+  it('with an RH lower limit, a warmer supply is drier in RH, so a direct-air hour can move from free to free with humidification', () => {
     // A1-like lower limits: −12 °C dew point and 8 % RH. At 18 °C supply W(8 %) ≈ 1.03 g/kg < W(−12 °C dew point) ≈ 1.31 g/kg,
     // at 27 °C W(8 %) ≈ 1.79 g/kg binds: outdoor air at 1.5 g/kg is free at 18 °C but needs humidifying at 27 °C.
     const envelope = { dryBulbMinC: 15, dryBulbMaxC: 32, dewPointMinC: -12, dewPointMaxC: 17, rhMinPct: 8, rhMaxPct: 80 };
@@ -115,8 +117,8 @@ describe('classification invariants', () => {
     };
     const cool = hoursOf(makeScenario('direct-air', { system: { supplyAirC: 18 }, envelope }), series);
     const warm = hoursOf(makeScenario('direct-air', { system: { supplyAirC: 27 }, envelope }), series);
-    expect(cool.free).toBe(1);
-    expect(warm.adiabatic).toBe(1);
+    expect([cool.free, cool.humidified]).toEqual([1, 0]);
+    expect([warm.free, warm.humidified]).toEqual([1, 1]);
   });
 });
 

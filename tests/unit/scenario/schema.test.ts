@@ -18,7 +18,52 @@ describe('scenario schema', () => {
   it('fills energy defaults', () => {
     const base = sample('direct-air-a1.json');
     const parsed = parseScenario({ ...base, energy: { itLoadKw: 500, mechanicalCop: 3 } });
-    expect(parsed.ok && parsed.scenario.energy).toMatchObject({ copSlopePerK: 0, fanPowerFraction: 0.05, blowdownRatio: 0.33, towerEvaporationShare: 0.85 });
+    expect(parsed.ok && parsed.scenario.energy).toEqual({
+      itLoadKw: 500,
+      mechanicalCop: 3,
+      itLoadProfile: { kind: 'constant' },
+      evaporatorApproachK: 5,
+      condenserApproachK: 10,
+      compressorMinTurndown: 0.2,
+      fanPowerFraction: 0.05,
+      fanMinSpeedFraction: 0.3,
+      pumpPowerFraction: 0.01,
+      pumpMinSpeedFraction: 0.3,
+      heatRejectionFanFraction: 0.02,
+      cyclesOfConcentration: 4,
+      towerDriftFraction: 0.0002,
+      basinHeaterFraction: 0.001,
+    });
+  });
+
+  it('refuses each retired input with a message naming its replacement (issue 12 §6)', () => {
+    const base = sample('water-side-tower.json');
+    const parsed = parseScenario({
+      ...base,
+      system: { ...base.system, fanHeatK: 1 },
+      energy: { ...base.energy, copSlopePerK: -0.1, copReferenceC: 35, copMin: 1, blowdownRatio: 0.33, towerEvaporationShare: 0.85 },
+    });
+    expect(parsed.ok).toBe(false);
+    if (parsed.ok) return;
+    expect(parsed.errors).toHaveLength(6);
+    expect(parsed.errors).toEqual(
+      expect.arrayContaining([
+        expect.stringMatching(/^system\.fanHeatK: is retired: .*energy\.fanPowerFraction.* \(got 1\)$/),
+        expect.stringMatching(/^energy\.copSlopePerK: is retired: .*energy\.mechanicalCop/),
+        expect.stringMatching(/^energy\.copReferenceC: is retired: .*energy\.mechanicalCop/),
+        expect.stringMatching(/^energy\.copMin: is retired: .*energy\.mechanicalCop/),
+        expect.stringMatching(/^energy\.blowdownRatio: is retired: .*energy\.cyclesOfConcentration/),
+        expect.stringMatching(/^energy\.towerEvaporationShare: is retired: /),
+      ]),
+    );
+  });
+
+  it('checks an hourly load profile for its 8760 fractions', () => {
+    const base = sample('direct-air-a1.json');
+    const short = parseScenario({ ...base, energy: { ...base.energy, itLoadProfile: { kind: 'hourly-profile', name: 'x', fractions: [0.5, 0.6] } } });
+    expect(!short.ok && short.errors).toEqual(['energy.itLoadProfile.fractions: must hold 8760 hourly values']);
+    const ramp = parseScenario({ ...base, energy: { ...base.energy, itLoadProfile: { kind: 'yearly-ramp', fractions: [0.4, 1.2] } } });
+    expect(!ramp.ok && ramp.errors).toEqual(['energy.itLoadProfile.fractions.1: must be a number from 0 to 1 (got 1.2)']);
   });
 
   it('names each bad field with its allowed range', () => {
