@@ -129,9 +129,9 @@ export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath
       <ModeHoursChart input={input} points={points} zero={zero} />
       <div className="grid gap-x-6 gap-y-2 lg:grid-cols-3">
         <MetricChart input={input} points={points} metric="mechanical" zero={zero} />
+        <MetricChart input={input} points={points} metric="partialMechanical" />
         <MetricChart input={input} points={points} metric="adiabatic" />
         <MetricChart input={input} points={points} metric="free" />
-        <MetricChart input={input} points={points} metric="partialMechanical" />
         <MetricChart input={input} points={points} metric="humidified" />
         <MetricChart input={input} points={points} metric="partialPue" />
         <MetricChart input={input} points={points} metric="waterL" />
