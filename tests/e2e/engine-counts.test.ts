@@ -153,5 +153,14 @@ describe('the scenario editor', () => {
     expect(await summary.innerText()).toContain('Typical daily and weekly shape');
     await page.getByTestId('load-profile').scrollIntoViewIfNeeded();
     await h.screenshot('engine-counts-load-profile');
+    // A ramp by year: a bad entry is named and not taken; a good ramp is drawn year by year.
+    await page.getByTestId('load-profile').getByText('Ramp by year').click();
+    await page.getByLabel('Fraction of design load for each year').fill('0.5, abc, 1');
+    expect(await page.getByTestId('load-profile-errors').innerText()).toContain('year 2: "abc" is not a number');
+    await page.getByLabel('Fraction of design load for each year').fill('0.5, 75 %, 1');
+    await page.getByTestId('load-profile-errors').waitFor({ state: 'detached' });
+    expect(await page.getByRole('img', { name: 'Load by year' }).innerText()).toContain('75 %');
+    await page.getByTestId('load-profile').scrollIntoViewIfNeeded();
+    await h.screenshot('engine-counts-load-ramp');
   });
 });

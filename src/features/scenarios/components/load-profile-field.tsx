@@ -57,7 +57,7 @@ export function LoadProfileField({ value, onChange, disabled, itLoadKw }: { valu
 
       {value.kind === 'yearly-ramp' && (
         <div className="space-y-1">
-          <label htmlFor="load-ramp" className="text-sm">
+          <label htmlFor="load-ramp" className="block text-sm">
             Fraction of design load for each year, first year first
           </label>
           <input
