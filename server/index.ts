@@ -1,7 +1,7 @@
 import type { Server } from 'node:http';
 import { loadEnv } from './env';
 import { openDatabase } from './db/client';
-import { seedDemo } from './demo/seed';
+import { prepareStoredData } from './start-up';
 import { createApp } from './app';
 import { appRoot, clientDistFolder } from './paths';
 import { createWorkerPool } from '../workers/pool';
@@ -11,7 +11,10 @@ import { startAuthRuntime } from './auth/runtime';
 async function main(): Promise<void> {
   const env = loadEnv();
   const db = openDatabase(env.databaseFile);
-  const { seeded } = env.TRAMONTANE_DEMO ? seedDemo(db) : { seeded: false };
+  const { seeded, migratedScenarios, migratedSweeps, skipped, requeuedDemoRuns } = prepareStoredData(db, { demo: env.TRAMONTANE_DEMO });
+  if (migratedScenarios + migratedSweeps > 0) console.log(`Brought ${migratedScenarios} saved scenario(s) and ${migratedSweeps} sweep base(s) up to the current inputs`);
+  if (skipped.length > 0) console.log(`Left unreadable scenario JSON as it was: ${skipped.join(', ')}`);
+  if (requeuedDemoRuns > 0) console.log(`Queued ${requeuedDemoRuns} demo run(s) again for the current engine`);
   const pool = createWorkerPool({ threads: env.TRAMONTANE_WORKERS });
 
   let devMiddleware;

@@ -6,6 +6,9 @@ import { seedDemoClimate } from './climate';
 import { seedDemoProjection } from './projections';
 import { seedDemoSweep } from './sweeps';
 
+/** The demo project's name: how start-up finds the project the seed made (server/demo/rerun.ts). */
+export const DEMO_PROJECT_NAME = 'Larchfield campus study (demo)';
+
 /**
  * Fills an empty database with the synthetic demo workspace. Every project, person and site in it
  * is invented. Does nothing when any project exists, so a user's data is never touched.
@@ -17,7 +20,7 @@ export function seedDemo(db: Db): { seeded: boolean } {
     const project = tx
       .insert(projects)
       .values({
-        name: 'Larchfield campus study (demo)',
+        name: DEMO_PROJECT_NAME,
         description: 'Synthetic demo project: four invented sites with synthetic weather, for trying Tramontane.',
       })
       .returning({ id: projects.id })

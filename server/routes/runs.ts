@@ -71,7 +71,7 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         runs: rows.map((row) => {
           const run = present(row, row.sweepId === null ? null : (sweepNames.get(row.sweepId) ?? null));
           const r = run.results;
-          return { ...run, results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw } : null };
+          return { ...run, results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw, excursions: r.excursions } : null };
         }),
       });
     }),

@@ -9,6 +9,7 @@ import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries } from '../climate/store';
 import { scenarios, sites } from '../db/schema';
 import { HttpError } from '../http-error';
+import { parseMigrationRecord, type ScenarioMigrationRecord } from '../scenarios/saved-migration';
 
 const scenarioParams = z.object({ scenarioId: z.coerce.number().int().positive('scenarioId must be a positive whole number') });
 const previewInput = z.object({ scenario: z.unknown(), climateFileId: z.number().int().positive() });
@@ -20,9 +21,10 @@ export function validScenario(input: unknown): Scenario {
   return parsed.scenario;
 }
 
+/** A saved scenario as the API gives it; `migration` lists what the start-up migration changed (null if never migrated). */
 function present(row: typeof scenarios.$inferSelect) {
-  const { scenarioJson, ...rest } = row;
-  return { ...rest, scenario: JSON.parse(scenarioJson) as Scenario };
+  const { scenarioJson, migrationJson, ...rest } = row;
+  return { ...rest, scenario: JSON.parse(scenarioJson) as Scenario, migration: parseMigrationRecord(migrationJson) };
 }
 
 export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
@@ -71,6 +73,23 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
           .returning()
           .get();
         recordRequestAudit(tx, req, 'scenario.update', updated.name, { scenarioId: existing.id, previousName: existing.name });
+        return updated;
+      });
+      res.json({ scenario: present(row) });
+    }),
+    // The notice of what the start-up migration changed is shown until an engineer or owner dismisses it, once.
+    route('post', '/projects/:projectId/scenarios/:scenarioId/migration-notice/dismiss', access.engineer, (req, res) => {
+      const existing = scenarioOr404(req.projectId!, req.params);
+      const record = parseMigrationRecord(existing.migrationJson);
+      if (!record) throw new HttpError(409, 'no_migration', `Scenario ${existing.id} was never migrated, so there is no notice to dismiss.`);
+      if (record.dismissedAt) {
+        res.json({ scenario: present(existing) });
+        return;
+      }
+      const dismissed: ScenarioMigrationRecord = { ...record, dismissedAt: new Date().toISOString(), dismissedBy: req.user!.id };
+      const row = db.transaction((tx) => {
+        const updated = tx.update(scenarios).set({ migrationJson: JSON.stringify(dismissed) }).where(eq(scenarios.id, existing.id)).returning().get();
+        recordRequestAudit(tx, req, 'scenario.update', existing.name, { scenarioId: existing.id, migrationNoticeDismissed: true, changes: record.changes.length });
         return updated;
       });
       res.json({ scenario: present(row) });

@@ -3,3 +3,4 @@ export * from './report-data';
 export * from './summary-table';
 export * from './inputs';
 export * from './hourly-json';
+export * from './mode-subsets';

@@ -6,8 +6,9 @@
 import { csvRow } from '../csv';
 import { celsiusToFahrenheit, kelvinDifferenceToFahrenheit, metreToFoot } from '../units';
 import { MONTH_SHORT } from '../calendar';
-import { hoursOfMode, modeKeys, modeLabels } from '../modes';
+import { modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
+import { countsSubsets, hoursOfSpec, modeRowSpecs, notCountedNote, modeSubsets, subsetHours, waterPartL, waterParts, type ModeSubsetKey, type WaterPartKey } from './mode-subsets';
 import type { ScenarioResults } from '../scenario/run';
 import { humidityReadingWords } from './humidity-reading';
 import { flattenInputs, inputUnitSi } from './inputs';
@@ -28,8 +29,14 @@ export function rounded(value: number | null | undefined, decimals: number): num
   return Math.round(value * scale) / scale;
 }
 
+/** Hours per mode, each mode followed by the counts that are part of it ("of which …"); null where the run's engine did not count them. */
 function modeRows(section: string, prefix: string, hours: ModeHours): SummaryRow[] {
-  return modeKeys.map((mode) => ({ section, figure: `${prefix}${modeLabels[mode]}`, unit: 'h', value: hoursOfMode(hours, mode) }));
+  return modeRowSpecs.map((spec) => ({
+    section,
+    figure: `${prefix}${spec.kind === 'mode' ? modeLabels[spec.mode] : `${modeLabels[spec.subset.parent]}: ${spec.subset.rowLabel}`}`,
+    unit: 'h',
+    value: hoursOfSpec(hours, spec),
+  }));
 }
 
 /** Every figure of one run: what it was, hours, excursions, energy, water, by month, by year, inputs. */
@@ -47,6 +54,7 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'run', figure: 'Humidity in the file', unit: '', value: humidityReadingWords(run.climate.humidityOverIce) },
     { section: 'run', figure: 'Envelope', unit: '', value: run.envelope.label },
     { section: 'run', figure: 'Engine version', unit: '', value: run.engineVersion },
+    ...(countsSubsets(r) ? [] : [{ section: 'run', figure: 'Not counted', unit: '', value: notCountedNote(run.engineVersion) }]),
     ...modeRows('hours', '', r.hours),
     { section: 'hours', figure: 'All hours', unit: 'h', value: r.hours.total },
     { section: 'hours', figure: 'Free cooling share', unit: '%', value: rounded(r.hours.total ? (100 * r.hours.free) / r.hours.total : null, 2) },
@@ -58,12 +66,14 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'energy', figure: 'Hall fans', unit: 'kWh', value: rounded(e.fanKwh, 1) },
     { section: 'energy', figure: 'Compressors', unit: 'kWh', value: rounded(e.compressorKwh, 1) },
     { section: 'energy', figure: 'Pumps', unit: 'kWh', value: rounded(e.pumpKwh, 1) },
+    { section: 'energy', figure: 'Basin heaters', unit: 'kWh', value: rounded(e.basinHeaterKwh, 1) },
     { section: 'energy', figure: 'Cooling total', unit: 'kWh', value: rounded(e.coolingKwh, 1) },
     { section: 'energy', figure: 'Cooling total per 8,760 h', unit: 'kWh', value: rounded(e.annual?.coolingKwh, 1) },
     { section: 'energy', figure: 'Partial PUE (cooling)', unit: '', value: rounded(e.partialPue, 4) },
     { section: 'energy', figure: 'Peak mechanical load', unit: 'kW', value: rounded(r.peakMechanicalLoadKw, 1) },
     { section: 'energy', figure: 'Peak compressor power', unit: 'kW', value: rounded(r.peakCompressorKw, 1) },
     { section: 'water', figure: 'Evaporated', unit: 'L', value: rounded(w.evaporatedL, 1) },
+    ...waterParts.map((p) => ({ section: 'water', figure: p.ofEvaporated ? `Evaporated: ${p.rowLabel}` : p.figure, unit: 'L', value: rounded(waterPartL(w, p.key), 1) })),
     { section: 'water', figure: 'Blowdown', unit: 'L', value: rounded(w.blowdownL, 1) },
     { section: 'water', figure: 'Water total', unit: 'L', value: rounded(w.totalL, 1) },
     { section: 'water', figure: 'Water total per 8,760 h', unit: 'L', value: rounded(w.annualL, 1) },
@@ -109,6 +119,9 @@ export function summaryCsv(rows: SummaryRow[]): string {
   return `${[csvRow(['section', 'figure', 'unit', 'value']), ...rows.map((r) => csvRow([r.section, r.figure, r.unit, r.value]))].join('\n')}\n`;
 }
 
+/** What a comparison reads of a run's results: the totals, not the per-month tables (the run list gives these). */
+export type ComparableResults = Pick<ScenarioResults, 'hours' | 'energy' | 'water' | 'peakMechanicalLoadKw' | 'excursions'>;
+
 export interface ComparedFigure {
   key: string;
   label: string;
@@ -116,14 +129,37 @@ export interface ComparedFigure {
   /** Which way is better; none for neutral figures. */
   better: 'higher' | 'lower' | 'none';
   decimals: number;
-  value: (r: ScenarioResults) => number | null;
+  /** A count older engines did not make: a run without it shows NOT_COUNTED, not a blank. */
+  notInOldRuns?: boolean;
+  /** Shown indented under the figure before it ("of which …"); `standalone` names it where rows stand alone (CSV). */
+  part?: boolean;
+  standalone?: string;
+  value: (r: ComparableResults) => number | null;
 }
 
-/** The figures runs are compared on; energy and water per 8,760 h so files of different lengths compare. */
+/** Litres over the file scaled to 8,760 hours of data, as the run's own annual total is. */
+function perYearL(r: ComparableResults, litres: number | null): number | null {
+  const dataHours = r.hours.total - r.hours.noData;
+  return litres === null || dataHours <= 0 ? null : (litres * 8760) / dataHours;
+}
+
+const subsetFigure = (key: ModeSubsetKey, better: ComparedFigure['better']): ComparedFigure => {
+  const subset = modeSubsets.find((s) => s.key === key)!;
+  return { key, label: subset.rowLabel, standalone: `${subset.figure} (part of ${modeLabels[subset.parent].toLowerCase()})`, unit: 'h', better, decimals: 0, notInOldRuns: true, part: true, value: (r) => subsetHours(r.hours, key) };
+};
+
+const waterPartFigure = (key: WaterPartKey): ComparedFigure => {
+  const part = waterParts.find((p) => p.key === key)!;
+  return { key, label: part.rowLabel, standalone: `${part.figure} per 8,760 h`, unit: 'L', better: 'lower', decimals: 1, notInOldRuns: true, part: true, value: (r) => perYearL(r, waterPartL(r.water, key)) };
+};
+
+/** The figures runs are compared on (the compare page, its CSV and the comparison report); energy and water per 8,760 h so files of different lengths compare. */
 export const comparedFigures: ComparedFigure[] = [
   { key: 'free', label: 'Free cooling', unit: 'h', better: 'higher', decimals: 0, value: (r) => r.hours.free },
+  subsetFigure('humidified', 'none'),
   { key: 'adiabatic', label: 'Adiabatic assist', unit: 'h', better: 'none', decimals: 0, value: (r) => r.hours.adiabatic },
   { key: 'mechanical', label: 'Mechanical', unit: 'h', better: 'lower', decimals: 0, value: (r) => r.hours.mechanical },
+  subsetFigure('partialMechanical', 'none'),
   { key: 'noData', label: 'No data', unit: 'h', better: 'none', decimals: 0, value: (r) => r.hours.noData },
   { key: 'excursions', label: 'Hours outside the envelope', unit: 'h', better: 'lower', decimals: 0, value: (r) => r.excursions.hours },
   { key: 'ppue', label: 'Partial PUE (cooling)', unit: '', better: 'lower', decimals: 4, value: (r) => r.energy.partialPue },
@@ -131,6 +167,8 @@ export const comparedFigures: ComparedFigure[] = [
   { key: 'compressor', label: 'Compressor energy per 8,760 h', unit: 'kWh', better: 'lower', decimals: 1, value: (r) => r.energy.annual?.compressorKwh ?? null },
   { key: 'peak', label: 'Peak mechanical load', unit: 'kW', better: 'lower', decimals: 1, value: (r) => r.peakMechanicalLoadKw },
   { key: 'water', label: 'Water per 8,760 h', unit: 'L', better: 'lower', decimals: 1, value: (r) => r.water.annualL },
+  waterPartFigure('humidificationL'),
+  waterPartFigure('evaporativeCoolingL'),
   { key: 'wue', label: 'WUE', unit: 'L/kWh', better: 'lower', decimals: 4, value: (r) => r.water.wueLPerKwh },
 ];
 
@@ -146,6 +184,10 @@ export interface ComparisonRow {
   figure: string;
   unit: string;
   better: ComparedFigure['better'];
+  notInOldRuns: boolean;
+  part: boolean;
+  /** The figure's name where it stands alone (a CSV line). */
+  standaloneFigure: string;
   cells: ComparisonCell[];
 }
 
@@ -162,6 +204,9 @@ export function comparisonRows(runs: ReportRun[], baselineId: number, units: Sum
       figure: f.label,
       unit: inUnits(f.unit, null, units).unit,
       better: f.better,
+      notInOldRuns: f.notInOldRuns ?? false,
+      part: f.part ?? false,
+      standaloneFigure: f.standalone ?? f.label,
       cells: runs.map((run) => {
         const value = f.value(run.results);
         const difference = run.id !== baseline.id && value !== null && base !== null ? value - base : null;
@@ -175,9 +220,9 @@ export function comparisonRows(runs: ReportRun[], baselineId: number, units: Sum
 export function comparisonCsv(runs: ReportRun[], baselineId: number, units: SummaryUnits = 'SI'): string {
   const label = (run: ReportRun) => `run ${run.id}${run.id === baselineId ? ' (baseline)' : ''}: ${run.scenario.name} / ${run.climate.name}`;
   const header = ['figure', 'unit', ...runs.flatMap((run) => [label(run), `run ${run.id} difference`])];
-  const lines = [csvRow(header)];
+  const lines = [csvRow(header), csvRow(['Engine version', '', ...runs.flatMap((run) => [run.engineVersion, ''])])];
   for (const row of comparisonRows(runs, baselineId, units)) {
-    lines.push(csvRow([row.figure, row.unit, ...row.cells.flatMap((c) => [c.value, c.difference])]));
+    lines.push(csvRow([row.standaloneFigure, row.unit, ...row.cells.flatMap((c) => [c.value, c.difference])]));
   }
   return `${lines.join('\n')}\n`;
 }

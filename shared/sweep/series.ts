@@ -3,6 +3,7 @@
  * and the other results against the swept value, and grid cells of one metric.
  */
 import type { ModeHours } from '../scenario/results';
+import { modeSubsets, subsetHours, waterPartL } from '../report/mode-subsets';
 import type { ScenarioResults } from '../scenario/run';
 import type { SweepPointValues, SweepValue } from './expand';
 
@@ -15,6 +16,9 @@ export interface SweepPointResults {
   coolingKwh: number;
   /** Site water over the file's hours with data, litres. */
   waterL: number;
+  /** Parts of the evaporated water, litres; null for a run whose engine did not split it (scenario-engine 1.0.0). */
+  humidificationL: number | null;
+  evaporativeCoolingL: number | null;
   wueLPerKwh: number | null;
   peakMechanicalLoadKw: number;
 }
@@ -34,6 +38,8 @@ export function pointResults(results: ScenarioResults): SweepPointResults {
     partialPue: results.energy.partialPue,
     coolingKwh: results.energy.coolingKwh,
     waterL: results.water.totalL,
+    humidificationL: waterPartL(results.water, 'humidificationL'),
+    evaporativeCoolingL: waterPartL(results.water, 'evaporativeCoolingL'),
     wueLPerKwh: results.water.wueLPerKwh,
     peakMechanicalLoadKw: results.peakMechanicalLoadKw,
   };
@@ -64,13 +70,15 @@ export function sweepProgress(points: readonly Pick<SweepPoint, 'status' | 'prog
   return p;
 }
 
-export const SWEEP_METRICS = ['free', 'adiabatic', 'mechanical', 'partialPue', 'waterL', 'peakMechanicalLoadKw'] as const;
+export const SWEEP_METRICS = ['free', 'humidified', 'adiabatic', 'mechanical', 'partialMechanical', 'partialPue', 'waterL', 'peakMechanicalLoadKw'] as const;
 export type SweepMetric = (typeof SWEEP_METRICS)[number];
 
 export const sweepMetricLabels: Record<SweepMetric, string> = {
   free: 'Free-cooling hours',
+  humidified: `${modeSubsets.find((m) => m.key === 'humidified')!.figure} hours`,
   adiabatic: 'Adiabatic-assist hours',
   mechanical: 'Mechanical hours',
+  partialMechanical: `${modeSubsets.find((m) => m.key === 'partialMechanical')!.figure} hours`,
   partialPue: 'Partial PUE (cooling)',
   waterL: 'Water use',
   peakMechanicalLoadKw: 'Peak mechanical load',
@@ -84,6 +92,9 @@ export function metricOf(results: SweepPointResults | null, metric: SweepMetric)
     case 'adiabatic':
     case 'mechanical':
       return results.hours[metric];
+    case 'humidified':
+    case 'partialMechanical':
+      return subsetHours(results.hours, metric);
     case 'partialPue':
       return results.partialPue;
     case 'waterL':

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { EnergyTotals, ModeHours } from '../../shared/scenario/results';
+import type { ComparableResults } from '../../shared/report/summary-table';
 import type { SweepPointValues } from '../../shared/sweep';
 import { apiFetch } from './api-client';
 
@@ -22,12 +22,10 @@ export interface RunListing {
   finishedAt: string | number | null;
   scenario: { name: string; system: { kind: string } };
   climate: { name: string; hours: number; site: { name: string } };
-  results: {
-    hours: ModeHours;
-    energy: EnergyTotals & { partialPue: number | null; annual: EnergyTotals | null };
-    water: { totalL: number; annualL: number | null; wueLPerKwh: number | null };
-    peakMechanicalLoadKw: number;
-  } | null;
+  /** The engine that made (or will make) the run, e.g. "scenario-engine 2.0.0". */
+  engineVersion: string;
+  /** Totals only (the figures a comparison reads); hours carry the "of which" counts from scenario-engine 2.0.0 on. */
+  results: ComparableResults | null;
 }
 
 export const getProjectRuns = (projectId: number) => apiFetch<{ runs: RunListing[] }>(`/projects/${projectId}/runs`);

@@ -20,6 +20,7 @@ function run(id: number, free: number, mechanical: number, partialPue: number, a
     sweepId: null,
     sweepName: null,
     sweepPoint: null,
+    engineVersion: 'scenario-engine 1.0.0',
     finishedAt: '2026-12-01T00:05:00Z',
     createdAt: '2026-12-01T00:00:00Z',
     scenario: { name: `Scenario ${id}`, system: { kind: 'direct-air' } },
@@ -36,8 +37,9 @@ function run(id: number, free: number, mechanical: number, partialPue: number, a
         partialPue,
         annual: { itKwh: 0, fanKwh: 0, compressorKwh: 0, pumpKwh: 0, basinHeaterKwh: 0, coolingKwh: annualCoolingKwh },
       },
-      water: { totalL: 0, annualL: 0, wueLPerKwh: 0 },
+      water: { evaporatedL: 0, humidificationL: 0, evaporativeCoolingL: 0, driftL: 0, blowdownL: 0, totalL: 0, annualL: 0, wueLPerKwh: 0 },
       peakMechanicalLoadKw: mechanical * 10,
+      excursions: { hours: 0, lowHumidityHours: 0, supplyAboveMaxHours: 0, supplyBelowMinHours: 0, longestRunHours: 0 },
     },
   };
 }

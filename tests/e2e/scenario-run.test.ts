@@ -130,7 +130,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await expect
       .poll(() => page.getByText('“Chilled-water supply” must be below “supply air setpoint”.').isVisible())
       .toBe(true);
-    expect(await page.getByLabel('Approach').isVisible()).toBe(true);
+    expect(await page.getByLabel('Approach', { exact: true }).isVisible()).toBe(true);
     await h.shot('scenario-editor-water-side-si');
     page.once('dialog', (dialog) => void dialog.accept());
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();

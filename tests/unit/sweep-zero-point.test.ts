@@ -41,7 +41,7 @@ describe('where mechanical hours reach zero', () => {
 describe('figures drawn from the points', () => {
   const hours = (free: number, adiabatic: number, mechanical: number) => ({ free, adiabatic, mechanical, noData: 0, total: free + adiabatic + mechanical, humidified: 0, partialMechanical: 0 });
   const points: SweepPoint[] = [
-    { runId: 1, values: { 'system.supplyAirC': 20 }, status: 'done', progress: 1, error: null, results: { hours: hours(50, 10, 12), partialPue: 1.2, coolingKwh: 10, waterL: 5, wueLPerKwh: 0.1, peakMechanicalLoadKw: 300 } },
+    { runId: 1, values: { 'system.supplyAirC': 20 }, status: 'done', progress: 1, error: null, results: { hours: hours(50, 10, 12), partialPue: 1.2, coolingKwh: 10, waterL: 5, humidificationL: null, evaporativeCoolingL: null, wueLPerKwh: 0.1, peakMechanicalLoadKw: 300 } },
     { runId: 2, values: { 'system.supplyAirC': 22 }, status: 'running', progress: 0.5, error: null, results: null },
     { runId: 3, values: { 'system.supplyAirC': 24 }, status: 'queued', progress: 0, error: null, results: null },
     { runId: 4, values: { 'system.supplyAirC': 26 }, status: 'failed', progress: 0.1, error: 'x', results: null },

@@ -31,6 +31,11 @@ export const scenarios = sqliteTable(
     name: text().notNull(),
     /** JSON of shared/scenario scenarioSchema, as last saved. */
     scenarioJson: text().notNull(),
+    /**
+     * JSON of server/scenarios/migrate-saved.ts ScenarioMigrationRecord: the retired inputs the start-up migration
+     * replaced (path, before, after, note) and whether an engineer or owner has dismissed the notice; null when never migrated.
+     */
+    migrationJson: text(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
     updatedAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),

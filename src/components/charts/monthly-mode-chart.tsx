@@ -1,17 +1,19 @@
 import { useCallback, useMemo } from 'react';
 import { ModeLegend } from './mode-legend';
 import { PlotFigure, type PlotModule } from './plot-figure';
-import { hoursOfMode, modeKeys, modeLabels } from '../../../shared/modes';
+import { modeLabels } from '../../../shared/modes';
+import { countsSubsets, hoursOfSpec, hoursText, modeRowSpecs, notCountedShort } from '../../../shared/report/mode-subsets';
 import type { ModeHours } from '../../../shared/scenario/results';
 import { MONTH_SHORT as monthShort } from '../../../shared/calendar';
 import { monthlyModeRows } from './monthly-mode-rows';
+import { ModeColumnHead, modeSpecKey } from '../ui/mode-marks';
 import { modeColourScale, modeLabelOrder } from './mode-scale';
 
 /**
  * Stacked hours per mode for each calendar month (site standard time), with the table beside it
  * (`withTable={false}` where the page prints the table itself, as the report does).
  */
-export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true }: { byMonth: (ModeHours & { month: number })[]; zoneLabel: string; withTable?: boolean }) {
+export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true, engineVersion }: { byMonth: (ModeHours & { month: number })[]; zoneLabel: string; withTable?: boolean; engineVersion?: string }) {
   const rows = useMemo(() => monthlyModeRows(byMonth), [byMonth]);
   const render = useCallback(
     (Plot: PlotModule, widthPx: number) =>
@@ -49,8 +51,8 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true }: { byM
             <thead>
               <tr className="border-b border-rule text-ink-soft">
                 <th scope="col" className="py-1 text-left font-sans font-medium">Month</th>
-                {modeKeys.map((k) => (
-                  <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">{modeLabels[k]} (h)</th>
+                {modeRowSpecs.map((spec) => (
+                  <ModeColumnHead key={modeSpecKey(spec)} spec={spec} />
                 ))}
               </tr>
             </thead>
@@ -58,13 +60,16 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true }: { byM
               {byMonth.map((m) => (
                 <tr key={m.month} className="border-b border-rule/60">
                   <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthShort[m.month - 1]}</th>
-                  {modeKeys.map((k) => (
-                    <td key={k} className="px-2 py-0.5">{hoursOfMode(m, k).toLocaleString('en')}</td>
+                  {modeRowSpecs.map((spec) => (
+                    <td key={modeSpecKey(spec)} className={`px-2 py-0.5 ${spec.kind === 'subset' ? 'text-ink-soft' : ''}`}>
+                      {hoursText(hoursOfSpec(m, spec))}
+                    </td>
                   ))}
                 </tr>
               ))}
             </tbody>
           </table>
+          {engineVersion && byMonth.length > 0 && !countsSubsets({ hours: byMonth[0] }) && <p className="mt-1 text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
         </details>
       )}
     </div>

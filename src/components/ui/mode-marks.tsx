@@ -1,4 +1,5 @@
-import { hoursOfMode, modeColours, modeKeys, type ModeKey } from '../../../shared/modes';
+import { hoursOfMode, modeColours, modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
+import { modeColumnLabel, type ModeRowSpec } from '../../../shared/report/mode-subsets';
 import type { ModeHours } from '../../../shared/scenario/results';
 
 /** A small square in a mode's colour, before its name in a table or legend. Decorative: the name says it. */
@@ -21,3 +22,26 @@ export function ModeShareBar({ hours, className = 'h-4', label }: { hours: Pick<
     </div>
   );
 }
+
+/**
+ * The head of one mode column in a table of hours: the mode with its swatch, or a count that is part of the
+ * mode before it ("with humidification"), set lighter and explained on hover.
+ */
+export function ModeColumnHead({ spec, className = 'px-2 py-1' }: { spec: ModeRowSpec; className?: string }) {
+  if (spec.kind === 'mode') {
+    return (
+      <th scope="col" className={`${className} font-sans font-medium`}>
+        <ModeSwatch mode={spec.mode} className="mr-1 size-2.5 align-middle" />
+        {modeColumnLabel(spec, modeLabels)}
+      </th>
+    );
+  }
+  return (
+    <th scope="col" className={`${className} font-sans font-normal italic`} title={spec.subset.description}>
+      {modeColumnLabel(spec, modeLabels)}
+    </th>
+  );
+}
+
+/** React key of a mode column. */
+export const modeSpecKey = (spec: ModeRowSpec) => (spec.kind === 'mode' ? spec.mode : spec.subset.key);

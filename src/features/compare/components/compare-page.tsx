@@ -10,6 +10,7 @@ import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-c
 import { RunPicker } from './run-picker';
 import { YearSpreadTable } from './year-spread-table';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
+import { mixedEngineNote } from '../../../../shared/report/mode-subsets';
 
 const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
 
@@ -81,6 +82,11 @@ export function ComparePage() {
             <Notice title="Pick two or more runs">Tick the runs to compare on the left; the first one ticked is the baseline until you choose another.</Notice>
           ) : (
             <>
+              {mixedEngineNote(selected) && (
+                <Notice tone="warn" title="Different engine versions">
+                  <span data-testid="mixed-engines">{mixedEngineNote(selected)}</span>
+                </Notice>
+              )}
               <Panel title="Side by side">
                 <ComparisonTable rows={rows} runs={selected} baselineId={baselineId} />
               </Panel>

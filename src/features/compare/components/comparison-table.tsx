@@ -5,6 +5,7 @@ import type { RunListing } from '../api/get-runs';
 import type { ComparedRow } from '../utils/compare-runs';
 import { comparisonCsv } from '../utils/comparison-csv';
 import { formatMetric } from './metric-format';
+import { countsSubsets, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';
 
 const verdictInk = { better: 'text-signal-ok', worse: 'text-signal-bad', same: 'text-ink-soft', none: 'text-ink-soft' };
 
@@ -14,7 +15,7 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
   const byId = new Map(runs.map((r) => [r.id, r]));
   function download() {
     const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${runDisplayName(r.scenario.name, r.sweepPoint, unitSystem)} / ${r.climate.name}`]));
-    downloadCsv(`comparison-${runs.map((r) => r.id).join('-')}.csv`, comparisonCsv(rows, labels, unitSystem));
+    downloadCsv(`comparison-${runs.map((r) => r.id).join('-')}.csv`, comparisonCsv(rows, labels, unitSystem, new Map(runs.map((r) => [r.id, r.engineVersion]))));
   }
   return (
     <div className="overflow-x-auto">
@@ -46,11 +47,11 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
         </thead>
         <tbody>
           {rows.map(({ metric, cells }) => (
-            <tr key={metric.key} className="border-b border-rule/60">
-              <th scope="row" className="py-1 pr-4 text-left font-normal">{metric.label}</th>
+            <tr key={metric.key} className={`border-b border-rule/60 ${metric.part ? 'text-ink-soft' : ''}`} data-testid={`compare-row-${metric.key}`}>
+              <th scope="row" className={metric.part ? 'py-0.5 pl-5 pr-4 text-left text-xs font-normal' : 'py-1 pr-4 text-left font-normal'}>{metric.label}</th>
               {cells.map((c) => (
-                <td key={c.runId} className="num px-2 py-1 text-right">
-                  <span className="block">{formatMetric(metric.format, unitSystem, c.value)}</span>
+                <td key={c.runId} className={`num px-2 text-right ${metric.part ? 'py-0.5 text-xs' : 'py-1'}`}>
+                  <span className="block">{c.value === null && metric.notInOldRuns ? NOT_COUNTED : formatMetric(metric.format, unitSystem, c.value)}</span>
                   {c.difference !== null && (
                     <span className={`block text-xs ${verdictInk[c.verdict]}`}>
                       {formatMetric(metric.format, unitSystem, c.difference, true)}
@@ -63,6 +64,11 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
           ))}
         </tbody>
       </table>
+      {runs.filter((r) => r.results && !countsSubsets(r.results)).map((r) => (
+        <p key={r.id} className="mt-2 text-xs text-ink-soft">
+          Run {r.id}: {notCountedShort(r.engineVersion)}
+        </p>
+      ))}
       <p className="mt-2 text-xs text-ink-soft">
         Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours so files of different
         lengths compare.

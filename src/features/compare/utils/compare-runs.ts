@@ -1,29 +1,16 @@
 import type { RunListing } from '../api/get-runs';
+import { comparedFigures, type ComparedFigure } from '../../../../shared/report/summary-table';
 
 type Results = NonNullable<RunListing['results']>;
 
-export interface Metric {
-  key: string;
-  label: string;
-  /** The figure in its display form; null when the run has none. */
-  value: (r: Results) => number | null;
+/** A compared figure (shared/report's one list, read by the report and its CSV too) with how this page writes it. */
+export interface Metric extends ComparedFigure {
   format: 'hours' | 'ratio' | 'mwh' | 'kw' | 'water' | 'wue';
-  /** Which way is better, for colouring the difference; none for neutral figures. */
-  better: 'higher' | 'lower' | 'none';
 }
 
-export const metrics: Metric[] = [
-  { key: 'free', label: 'Free cooling', value: (r) => r.hours.free, format: 'hours', better: 'higher' },
-  { key: 'adiabatic', label: 'Adiabatic assist', value: (r) => r.hours.adiabatic, format: 'hours', better: 'none' },
-  { key: 'mechanical', label: 'Mechanical', value: (r) => r.hours.mechanical, format: 'hours', better: 'lower' },
-  { key: 'noData', label: 'No data', value: (r) => r.hours.noData, format: 'hours', better: 'none' },
-  { key: 'ppue', label: 'Partial PUE (cooling)', value: (r) => r.energy.partialPue, format: 'ratio', better: 'lower' },
-  { key: 'cooling', label: 'Cooling energy per 8,760 h', value: (r) => r.energy.annual?.coolingKwh ?? null, format: 'mwh', better: 'lower' },
-  { key: 'compressor', label: 'Compressor energy per 8,760 h', value: (r) => r.energy.annual?.compressorKwh ?? null, format: 'mwh', better: 'lower' },
-  { key: 'peak', label: 'Peak mechanical load', value: (r) => r.peakMechanicalLoadKw, format: 'kw', better: 'lower' },
-  { key: 'water', label: 'Water per 8,760 h', value: (r) => r.water.annualL, format: 'water', better: 'lower' },
-  { key: 'wue', label: 'WUE', value: (r) => r.water.wueLPerKwh, format: 'wue', better: 'lower' },
-];
+const formatOfUnit: Record<string, Metric['format']> = { h: 'hours', '': 'ratio', kWh: 'mwh', kW: 'kw', L: 'water', 'L/kWh': 'wue' };
+
+export const metrics: Metric[] = comparedFigures.map((f) => ({ ...f, format: formatOfUnit[f.unit] ?? 'ratio' }));
 
 export interface ComparedCell {
   runId: number;
@@ -47,7 +34,7 @@ export function compareRuns(runs: RunListing[], baselineId: number): ComparedRow
   const baseline = done.find((r) => r.id === baselineId) ?? done[0];
   if (!baseline) return [];
   return metrics.map((metric) => {
-    const base = metric.value(baseline.results!);
+    const base = metric.value(baseline.results! satisfies Results);
     return {
       metric,
       cells: done.map((run) => {

@@ -22,15 +22,16 @@ function csvUnit(format: Metric['format'], system: UnitSystem): { unit: string; 
 }
 
 /** The comparison as CSV: one line per figure, each run's value then its difference from the baseline. */
-export function comparisonCsv(rows: ComparedRow[], runLabels: Map<number, string>, system: UnitSystem): string {
+export function comparisonCsv(rows: ComparedRow[], runLabels: Map<number, string>, system: UnitSystem, engineVersions?: Map<number, string>): string {
   if (rows.length === 0) return '';
   const runs = rows[0].cells.map((c) => c.runId);
   const header = ['figure', 'unit', ...runs.flatMap((id) => [`${runLabels.get(id) ?? `run ${id}`}`, `${runLabels.get(id) ?? `run ${id}`} difference`])];
   const lines = [csvRow(header)];
+  if (engineVersions) lines.push(csvRow(['Engine version', '', ...runs.flatMap((id) => [engineVersions.get(id) ?? null, null])]));
   for (const { metric, cells } of rows) {
     const { unit, value } = csvUnit(metric.format, system);
     const shown = (v: number | null) => (v === null || !Number.isFinite(v) ? null : value(v));
-    lines.push(csvRow([metric.label, unit, ...cells.flatMap((c) => [shown(c.value), shown(c.difference)])]));
+    lines.push(csvRow([metric.standalone ?? metric.label, unit, ...cells.flatMap((c) => [shown(c.value), shown(c.difference)])]));
   }
   return `${lines.join('\n')}\n`;
 }

@@ -15,6 +15,8 @@ import { dateTime, day, hours, kw, mwh, ratio, systemInWords, usesWater } from '
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
 import { ModeShareBar } from '@/components/ui/mode-marks';
 import { runDisplayName } from '@/lib/sweep-value';
+import { Notice } from '@/components/ui/notice';
+import { countsSubsets, mixedEngineNote, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';
 
 function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
   if (value === null) return '–';
@@ -54,6 +56,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
   const { unitSystem } = useUnitSystem();
   const { runs, baselineId } = report;
   const rows = comparisonRows(runs, baselineId);
+  const mixedEngines = mixedEngineNote(runs);
   // Runs on the same file show its validation once.
   const files = runs.filter((run, i) => runs.findIndex((other) => other.climate.sha256 === run.climate.sha256 && other.site.name === run.site.name) === i);
   // Runs with the same envelope as applied (limits and site derating) show it once.
@@ -72,6 +75,11 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
           {report.projectName} · generated {dateTime(report.generatedAt)} · units {unitSystem}
         </p>
       </header>
+      {mixedEngines && (
+        <Notice tone="warn" title="Different engine versions">
+          <span data-testid="report-mixed-engines">{mixedEngines}</span>
+        </Notice>
+      )}
 
       <ReportSection id="job" title="1. The job">
         <p className="text-sm leading-relaxed">
@@ -81,7 +89,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
         <ReportTable
           text
           testId="report-runs"
-          head={['Run', 'Scenario', 'Cooling design', 'Site · climate file', 'Envelope']}
+          head={['Run', 'Scenario', 'Cooling design', 'Site · climate file', 'Envelope', 'Engine']}
           rows={runs.map((run) => ({
             key: String(run.id),
             cells: [
@@ -92,6 +100,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
                 {run.site.name} · {run.climate.name} ({day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)})
               </span>,
               <span className="text-xs">{run.envelope.label}</span>,
+              <span className="num text-xs">{run.engineVersion}</span>,
             ],
           }))}
         />
@@ -120,11 +129,11 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
               ))}
             </tr>
             {rows.map((row) => (
-              <tr key={row.key} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 pr-2 text-left font-normal">{row.figure}</th>
+              <tr key={row.key} className={`border-b border-rule/60 ${row.part ? 'text-xs text-ink-soft' : ''}`}>
+                <th scope="row" className={`py-0.5 pr-2 text-left font-normal ${row.part ? 'pl-5' : ''}`}>{row.figure}</th>
                 {row.cells.map((cell) => (
                   <td key={cell.runId} className="num whitespace-nowrap px-2 py-0.5 text-right">
-                    {figure(row.unit, unitSystem, cell.value)}
+                    {cell.value === null && row.notInOldRuns ? NOT_COUNTED : figure(row.unit, unitSystem, cell.value)}
                     {cell.difference !== null && (
                       <span className={`ml-2 inline-block min-w-24 text-xs ${verdict(row, cell.difference, figure(row.unit, unitSystem, cell.difference, true))}`}>
                         {figure(row.unit, unitSystem, cell.difference, true)}
@@ -136,6 +145,11 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
             ))}
           </tbody>
         </table>
+        {runs.filter((run) => !countsSubsets(run.results)).map((run) => (
+          <p key={run.id} className="text-xs text-ink-soft">
+            Run {run.id}: {notCountedShort(run.engineVersion)}
+          </p>
+        ))}
         <p className="text-xs text-ink-soft">
           Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours
           of data so files of different lengths compare.

@@ -1,15 +1,26 @@
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { MONTH_SHORT as monthShort } from '../../../../shared/calendar';
-import { hoursOfMode } from '../../../../shared/modes';
-import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
-import { modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeShareBar, ModeSwatch, modeSpecKey } from '@/components/ui/mode-marks';
+import { modeLabels } from '../../../../shared/modes';
+import {
+  countsSubsets,
+  hoursOfSpec,
+  hoursText,
+  modeColumnLabel,
+  modeRowSpecs,
+  notCountedNote,
+  notCountedShort,
+  waterPartL,
+  waterPartsShown,
+  NOT_COUNTED,
+} from '../../../../shared/report/mode-subsets';
 import type { ModeHours, YearResults } from '../../../../shared/scenario/results';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 import { hours, kw, mwh, ratio, share } from './report-format';
 import { Facts, ReportTable } from './report-layout';
 
-export function ModeHoursTable({ results }: { results: ScenarioResults }) {
+export function ModeHoursTable({ results, engineVersion }: { results: ScenarioResults; engineVersion: string }) {
   const h = results.hours;
   return (
     <div className="keep-together space-y-2">
@@ -18,10 +29,18 @@ export function ModeHoursTable({ results }: { results: ScenarioResults }) {
         testId="report-mode-hours"
         head={['Mode', 'Hours', 'Share']}
         rows={[
-          ...modeKeys.map((k) => ({ key: k, cells: [<><ModeSwatch mode={k} />{modeLabels[k]}</>, hoursOfMode(h, k).toLocaleString('en'), share(hoursOfMode(h, k), h.total)] })),
+          ...modeRowSpecs.map((spec) => {
+            const n = hoursOfSpec(h, spec);
+            if (spec.kind === 'mode') return { key: spec.mode, cells: [<><ModeSwatch mode={spec.mode} />{modeLabels[spec.mode]}</>, hoursText(n), share(n ?? 0, h.total)] };
+            return {
+              key: spec.subset.key,
+              cells: [<span className="whitespace-nowrap pl-5 text-xs text-ink-soft">{spec.subset.rowLabel}</span>, <span className="text-xs text-ink-soft">{hoursText(n)}</span>, <span className="text-xs text-ink-soft">{n === null ? '' : share(n, h.total)}</span>],
+            };
+          }),
           { key: 'all', strong: true, cells: ['All hours', h.total.toLocaleString('en'), '100.0 %'] },
         ]}
       />
+      {!countsSubsets(results) && <p className="text-xs text-ink-soft" data-testid="report-not-counted">{notCountedNote(engineVersion)}</p>}
     </div>
   );
 }
@@ -40,28 +59,34 @@ export function ExcursionFacts({ results }: { results: ScenarioResults }) {
   );
 }
 
-export function MonthlyTable({ byMonth }: { byMonth: (ModeHours & { month: number })[] }) {
+export function MonthlyTable({ byMonth, engineVersion }: { byMonth: (ModeHours & { month: number })[]; engineVersion: string }) {
   return (
-    <ReportTable
-      testId="report-monthly"
-      caption="Hours per mode for each calendar month"
-      head={['Month', ...modeKeys.map((k) => `${modeLabels[k]} (h)`), 'All (h)']}
-      rows={byMonth.map((m) => ({ key: String(m.month), cells: [monthShort[m.month - 1], ...modeKeys.map((k) => hoursOfMode(m, k).toLocaleString('en')), m.total.toLocaleString('en')] }))}
-    />
+    <div className="space-y-1">
+      <ReportTable
+        testId="report-monthly"
+        caption="Hours per mode for each calendar month"
+        head={['Month', ...modeRowSpecs.map((spec) => <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>{modeColumnLabel(spec, modeLabels)}</span>), 'All (h)']}
+        rows={byMonth.map((m) => ({ key: String(m.month), cells: [monthShort[m.month - 1], ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(m, spec))), m.total.toLocaleString('en')] }))}
+      />
+      {byMonth.length > 0 && !countsSubsets({ hours: byMonth[0] }) && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
+    </div>
   );
 }
 
-export function YearTable({ years, unitSystem }: { years: YearResults[]; unitSystem: UnitSystem }) {
+export function YearTable({ years, unitSystem, engineVersion }: { years: YearResults[]; unitSystem: UnitSystem; engineVersion: string }) {
   return (
-    <ReportTable
-      testId="report-years"
-      caption="Hours, cooling energy and water for each calendar year"
-      head={['Year', ...modeKeys.map((k) => `${modeLabels[k]} (h)`), 'Cooling energy', 'Water']}
-      rows={years.map((y) => ({
-        key: String(y.year),
-        cells: [y.year, ...modeKeys.map((k) => hoursOfMode(y, k).toLocaleString('en')), mwh(y.coolingKwh), formatQuantity('water', unitSystem, y.waterL)],
-      }))}
-    />
+    <div className="space-y-1">
+      <ReportTable
+        testId="report-years"
+        caption="Hours, cooling energy and water for each calendar year"
+        head={['Year', ...modeRowSpecs.map((spec) => <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>{modeColumnLabel(spec, modeLabels)}</span>), 'Cooling energy', 'Water']}
+        rows={years.map((y) => ({
+          key: String(y.year),
+          cells: [y.year, ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(y, spec))), mwh(y.coolingKwh), formatQuantity('water', unitSystem, y.waterL)],
+        }))}
+      />
+      {years.length > 0 && !countsSubsets({ hours: years[0] }) && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
+    </div>
   );
 }
 
@@ -83,6 +108,7 @@ export function EnergyTable({ results }: { results: ScenarioResults }) {
           row('fans', 'Hall fans', e.fanKwh, a?.fanKwh),
           row('compressors', 'Compressors', e.compressorKwh, a?.compressorKwh),
           row('pumps', 'Pumps', e.pumpKwh, a?.pumpKwh),
+          ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [row('basin', 'Basin heaters', e.basinHeaterKwh, a?.basinHeaterKwh)] : []),
           row('cooling', 'Cooling total', e.coolingKwh, a?.coolingKwh, true),
           row('it', 'IT equipment', e.itKwh, a?.itKwh),
         ]}
@@ -98,9 +124,15 @@ export function EnergyTable({ results }: { results: ScenarioResults }) {
   );
 }
 
-export function WaterTable({ results, unitSystem }: { results: ScenarioResults; unitSystem: UnitSystem }) {
+export function WaterTable({ results, unitSystem, engineVersion }: { results: ScenarioResults; unitSystem: UnitSystem; engineVersion: string }) {
   const w = results.water;
   const water = (l: number | null) => formatQuantity('water', unitSystem, l);
+  const counted = countsSubsets(results);
+  const parts = waterPartsShown(w, counted);
+  const part = (key: (typeof parts)[number]['key']) => {
+    const litres = waterPartL(w, key);
+    return litres === null ? NOT_COUNTED : water(litres);
+  };
   return (
     <div className="space-y-3">
       <ReportTable
@@ -108,11 +140,14 @@ export function WaterTable({ results, unitSystem }: { results: ScenarioResults; 
         head={['Water', 'Over the file']}
         rows={[
           { key: 'evaporated', cells: ['Evaporated', water(w.evaporatedL)] },
+          ...parts.filter((p) => p.ofEvaporated).map((p) => ({ key: p.key, cells: [<span className="pl-5 text-xs text-ink-soft">{p.rowLabel}</span>, <span className="text-xs text-ink-soft">{part(p.key)}</span>] })),
           { key: 'blowdown', cells: ['Blowdown', water(w.blowdownL)] },
+          ...parts.filter((p) => !p.ofEvaporated).map((p) => ({ key: p.key, cells: [p.rowLabel, part(p.key)] })),
           { key: 'total', strong: true, cells: ['Total', water(w.totalL)] },
           { key: 'annual', cells: ['Total per 8,760 h', water(w.annualL)] },
         ]}
       />
+      {!counted && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
       <Facts items={[['WUE', <span className="num" data-testid="report-wue">{w.wueLPerKwh === null ? '–' : `${ratio(w.wueLPerKwh)} L/kWh`}</span>]]} />
     </div>
   );

@@ -13,6 +13,7 @@ import { dateTime, day, hours, kw, ratio, share, systemInWords, usesWater } from
 import { ReportSection, ReportSheet, SubHeading } from './report-layout';
 import { EnergyTable, ExcursionFacts, ModeHoursTable, MonthlyTable, WaterTable, YearTable } from './results-tables';
 import { runDisplayName } from '@/lib/sweep-value';
+import { subsetHours } from '../../../../shared/report/mode-subsets';
 
 function Headline({ label, value, note }: { label: string; value: string; note?: string }) {
   return (
@@ -23,6 +24,9 @@ function Headline({ label, value, note }: { label: string; value: string; note?:
     </div>
   );
 }
+
+/** "42.0 % · 310 h with humidification"; the share alone when the run's engine did not count the part. */
+const withPart = (shareText: string, part: number | null, words: string) => (part === null ? shareText : `${shareText} · ${hours(part)} ${words}`);
 
 /** The printable report of one run: what was asked, from what, what came out, how, and with which cautions. */
 export function RunReportDocument({ report, linkTitle }: { report: RunReportData; linkTitle?: string }) {
@@ -38,6 +42,9 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         <p className="text-sm text-ink-soft">
           {report.projectName} · run {run.id} · {run.site.name} · {run.climate.name} · generated {dateTime(report.generatedAt)} · units {unitSystem}
         </p>
+        <p className="text-xs text-ink-soft" data-testid="report-engine">
+          Made by <span className="num">{run.engineVersion}</span>
+        </p>
       </header>
 
       <ReportSection id="job" title="1. The job">
@@ -48,9 +55,9 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
           mechanical load?
         </p>
         <div className="grid grid-cols-3 gap-2 print:grid-cols-3" data-testid="report-headline">
-          <Headline label="Free cooling" value={hours(h.free)} note={share(h.free, h.total)} />
+          <Headline label="Free cooling" value={hours(h.free)} note={withPart(share(h.free, h.total), subsetHours(h, 'humidified'), 'with humidification')} />
           <Headline label="Adiabatic assist" value={hours(h.adiabatic)} note={share(h.adiabatic, h.total)} />
-          <Headline label="Mechanical" value={hours(h.mechanical)} note={share(h.mechanical, h.total)} />
+          <Headline label="Mechanical" value={hours(h.mechanical)} note={withPart(share(h.mechanical, h.total), subsetHours(h, 'partialMechanical'), 'partly economised')} />
           <Headline label="Partial PUE (cooling)" value={ratio(r.energy.partialPue)} note="(IT + cooling) / IT energy" />
           <Headline label="WUE" value={r.water.wueLPerKwh === null ? '–' : `${ratio(r.water.wueLPerKwh)} L/kWh`} note="site water per IT energy" />
           <Headline label="Peak mechanical load" value={kw(r.peakMechanicalLoadKw)} note="thermal" />
@@ -87,7 +94,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         <div className="grid gap-6 md:grid-cols-[20rem_1fr] print:grid-cols-[18rem_1fr]">
           <div className="space-y-3">
             <SubHeading>Hours per mode</SubHeading>
-            <ModeHoursTable results={r} />
+            <ModeHoursTable results={r} engineVersion={run.engineVersion} />
           </div>
           <div className="space-y-3">
             <SubHeading>Runs and excursions</SubHeading>
@@ -99,10 +106,10 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         <div className="max-w-[45rem]">
           <MonthlyModeChart byMonth={r.hoursByMonth} zoneLabel={utcOffsetLabel(run.site.utcOffsetMinutes)} withTable={false} />
         </div>
-        <MonthlyTable byMonth={r.hoursByMonth} />
+        <MonthlyTable byMonth={r.hoursByMonth} engineVersion={run.engineVersion} />
         <div className="keep-together space-y-2">
           <SubHeading>By year</SubHeading>
-          <YearTable years={r.hoursByYear} unitSystem={unitSystem} />
+          <YearTable years={r.hoursByYear} unitSystem={unitSystem} engineVersion={run.engineVersion} />
         </div>
         <div className="keep-together space-y-2">
           <SubHeading>Energy</SubHeading>
@@ -110,7 +117,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         </div>
         <div className="keep-together space-y-2">
           <SubHeading>Water</SubHeading>
-          <WaterTable results={r} unitSystem={unitSystem} />
+          <WaterTable results={r} unitSystem={unitSystem} engineVersion={run.engineVersion} />
         </div>
       </ReportSection>
 

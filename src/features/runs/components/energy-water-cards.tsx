@@ -1,6 +1,7 @@
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
+import { countsSubsets, NOT_COUNTED, notCountedShort, waterPartL, waterPartsShown } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 
 const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
@@ -19,14 +20,18 @@ function Figure({ label, value, note, testId }: { label: string; value: string; 
 }
 
 /** Partial PUE, WUE, peak mechanical load and the energy and water behind them. */
-export function EnergyWaterCards({ results }: { results: ScenarioResults }) {
+export function EnergyWaterCards({ results, engineVersion }: { results: ScenarioResults; engineVersion: string }) {
   const { unitSystem } = useUnitSystem();
   const e = results.energy;
   const w = results.water;
+  const counted = countsSubsets(results);
+  const parts = waterPartsShown(w, counted);
   const rows = [
     { label: 'Hall fans', kwh: e.fanKwh },
     { label: 'Compressors', kwh: e.compressorKwh },
     { label: 'Pumps', kwh: e.pumpKwh },
+    // Only towers in freeze protection use them; runs before engine 2.0.0 have no such figure.
+    ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [{ label: 'Basin heaters', kwh: e.basinHeaterKwh }] : []),
   ];
   return (
     <div className="grid gap-4 lg:grid-cols-2">
@@ -70,16 +75,36 @@ export function EnergyWaterCards({ results }: { results: ScenarioResults }) {
               <th scope="row" className="py-1 text-left font-normal">Evaporated</th>
               <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.evaporatedL)}</td>
             </tr>
+            {parts
+              .filter((p) => p.ofEvaporated)
+              .map((p) => {
+                const litres = waterPartL(w, p.key);
+                return (
+                  <tr key={p.key} className="border-b border-rule/60 text-ink-soft" data-testid={`water-${p.key}`}>
+                    <th scope="row" className="py-0.5 pl-5 text-left text-xs font-normal">{p.rowLabel}</th>
+                    <td className="num py-0.5 text-right text-xs">{litres === null ? NOT_COUNTED : formatQuantity('water', unitSystem, litres)}</td>
+                  </tr>
+                );
+              })}
             <tr className="border-b border-rule/60">
               <th scope="row" className="py-1 text-left font-normal">Blowdown</th>
               <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.blowdownL)}</td>
             </tr>
+            {parts
+              .filter((p) => !p.ofEvaporated)
+              .map((p) => (
+                <tr key={p.key} className="border-b border-rule/60" data-testid={`water-${p.key}`}>
+                  <th scope="row" className="py-1 text-left font-normal">{p.rowLabel}</th>
+                  <td className="num py-1 text-right">{formatQuantity('water', unitSystem, waterPartL(w, p.key))}</td>
+                </tr>
+              ))}
             <tr>
               <th scope="row" className="py-1 text-left font-medium">Total</th>
               <td className="num py-1 text-right font-medium">{formatQuantity('water', unitSystem, w.totalL)}</td>
             </tr>
           </tbody>
         </table>
+        {!counted && <p className="mt-1 text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
       </Panel>
     </div>
   );

@@ -1,13 +1,15 @@
 import { Panel } from '@/components/ui/panel';
 import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
-import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
+import { hoursOfMode, modeLabels } from '../../../../shared/modes';
+import { countsSubsets, modeRowSpecs, NOT_COUNTED, notCountedNote, subsetHours } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 
 const pct = (part: number, whole: number) => (whole > 0 ? ((100 * part) / whole).toFixed(1) : '0.0');
 
-/** Hours per mode, total and share, with the longest runs and the envelope excursions. */
-export function ModeHoursPanel({ results }: { results: ScenarioResults }) {
+/** Hours per mode, total and share (with the hours that are part of a mode indented under it), the longest runs and the envelope excursions. */
+export function ModeHoursPanel({ results, engineVersion }: { results: ScenarioResults; engineVersion: string }) {
   const h = results.hours;
+  const counted = countsSubsets(results);
   return (
     <Panel title="Hours per mode">
       <ModeShareBar hours={h} className="h-5" />
@@ -20,16 +22,31 @@ export function ModeHoursPanel({ results }: { results: ScenarioResults }) {
           </tr>
         </thead>
         <tbody>
-          {modeKeys.map((k) => (
-            <tr key={k} className="border-b border-rule/60">
-              <th scope="row" className="py-1 text-left font-normal">
-                <ModeSwatch mode={k} />
-                {modeLabels[k]}
-              </th>
-              <td className="num py-1 text-right">{hoursOfMode(h, k).toLocaleString('en')}</td>
-              <td className="num py-1 text-right">{pct(hoursOfMode(h, k), h.total)} %</td>
-            </tr>
-          ))}
+          {modeRowSpecs.map((spec) => {
+            if (spec.kind === 'mode') {
+              const k = spec.mode;
+              return (
+                <tr key={k} className="border-b border-rule/60">
+                  <th scope="row" className="py-1 text-left font-normal">
+                    <ModeSwatch mode={k} />
+                    {modeLabels[k]}
+                  </th>
+                  <td className="num py-1 text-right">{hoursOfMode(h, k).toLocaleString('en')}</td>
+                  <td className="num py-1 text-right">{pct(hoursOfMode(h, k), h.total)} %</td>
+                </tr>
+              );
+            }
+            const n = subsetHours(h, spec.subset.key);
+            return (
+              <tr key={spec.subset.key} className="border-b border-rule/60 text-ink-soft" data-testid={`subset-${spec.subset.key}`}>
+                <th scope="row" className="py-0.5 pl-5 text-left text-xs font-normal" title={spec.subset.description}>
+                  {spec.subset.rowLabel}
+                </th>
+                <td className="num py-0.5 text-right text-xs">{n === null ? NOT_COUNTED : n.toLocaleString('en')}</td>
+                <td className="num py-0.5 text-right text-xs">{n === null ? '' : `${pct(n, h.total)} %`}</td>
+              </tr>
+            );
+          })}
           <tr>
             <th scope="row" className="py-1 text-left font-medium">All hours</th>
             <td className="num py-1 text-right font-medium">{h.total.toLocaleString('en')}</td>
@@ -37,6 +54,11 @@ export function ModeHoursPanel({ results }: { results: ScenarioResults }) {
           </tr>
         </tbody>
       </table>
+      {!counted && (
+        <p className="mt-1 text-xs text-ink-soft" data-testid="not-counted-note">
+          {notCountedNote(engineVersion)}
+        </p>
+      )}
       <dl className="mt-3 grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 text-xs">
         <dt className="text-ink-soft">Longest run of mechanical hours</dt>
         <dd className="num text-right">{results.longestMechanicalRunHours.toLocaleString('en')} h</dd>

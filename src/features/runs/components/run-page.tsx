@@ -54,6 +54,9 @@ export function RunPage() {
           <p className="text-sm text-ink-soft">
             {run.climate.site.name} · {run.climate.name} · {run.climate.hours.toLocaleString('en')} hours
           </p>
+          <p className="text-xs text-ink-soft" data-testid="run-engine">
+            Made by <span className="num">{run.engineVersion}</span>
+          </p>
           {run.sweepId !== null && (
             <p className="text-sm text-ink-soft" data-testid="run-sweep-point">
               Point of sweep{' '}
@@ -111,15 +114,15 @@ export function RunPage() {
             </Notice>
           )}
           <div className="grid gap-4 xl:grid-cols-[24rem_minmax(0,1fr)]">
-            <ModeHoursPanel results={results} />
+            <ModeHoursPanel results={results} engineVersion={run.engineVersion} />
             <Panel title="Hours per mode by month">
-              <MonthlyModeChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} />
+              <MonthlyModeChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} engineVersion={run.engineVersion} />
             </Panel>
           </div>
-          <EnergyWaterCards results={results} />
+          <EnergyWaterCards results={results} engineVersion={run.engineVersion} />
           {results.hoursByYear.length > 1 && (
             <Panel title="By calendar year">
-              <YearTable years={results.hoursByYear} />
+              <YearTable years={results.hoursByYear} engineVersion={run.engineVersion} />
             </Panel>
           )}
           <RunHourViews run={run} />

@@ -1,7 +1,7 @@
 import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
-import { ModeSwatch } from '@/components/ui/mode-marks';
-import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
+import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
+import { countsSubsets, hoursOfSpec, hoursText as countText, modeRowSpecs, notCountedShort } from '../../../../shared/report/mode-subsets';
 import type { YearResults } from '../../../../shared/scenario/results';
 import { WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
 
@@ -29,7 +29,7 @@ const statRows: { label: string; title: string; cell: (s: MetricStatistics) => Y
  * Hours, cooling energy and water for each calendar year of a multi-year file, then the median, P10 and
  * P90 years, the worst year and the spread over the full years. Partial years are listed, flagged, left out.
  */
-export function YearTable({ years }: { years: YearResults[] }) {
+export function YearTable({ years, engineVersion }: { years: YearResults[]; engineVersion: string }) {
   const { unitSystem } = useUnitSystem();
   const stats = yearStatistics(years);
   const partial = new Set(stats.partialYears.map((p) => p.year));
@@ -40,11 +40,8 @@ export function YearTable({ years }: { years: YearResults[] }) {
           <thead>
             <tr className="border-b border-rule text-ink-soft">
               <th scope="col" className="py-1 text-left font-sans font-medium">Year</th>
-              {modeKeys.map((k) => (
-                <th key={k} scope="col" className="px-2 py-1 font-sans font-medium">
-                  <ModeSwatch mode={k} className="mr-1 size-2.5" />
-                  {modeLabels[k]} (h)
-                </th>
+              {modeRowSpecs.map((spec) => (
+                <ModeColumnHead key={modeSpecKey(spec)} spec={spec} />
               ))}
               <th scope="col" className="px-2 py-1 font-sans font-medium">Cooling energy (MWh)</th>
               <th scope="col" className="px-2 py-1 font-sans font-medium">Water ({unitOf('water', unitSystem)})</th>
@@ -58,8 +55,10 @@ export function YearTable({ years }: { years: YearResults[] }) {
                   {partial.has(y.year) && <span className="ml-1.5 rounded bg-mist px-1 font-sans text-[11px] not-italic">partial · left out</span>}
                   {stats.worst?.year === y.year && <span className="ml-1.5 rounded bg-signal-bad px-1 font-sans text-[11px] text-paper">worst</span>}
                 </th>
-                {modeKeys.map((k) => (
-                  <td key={k} className="px-2 py-0.5">{hoursText(hoursOfMode(y, k))}</td>
+                {modeRowSpecs.map((spec) => (
+                  <td key={modeSpecKey(spec)} className={`px-2 py-0.5 ${spec.kind === 'subset' ? 'text-ink-soft' : ''}`}>
+                    {countText(hoursOfSpec(y, spec))}
+                  </td>
                 ))}
                 <td className="px-2 py-0.5">{mwhText(y.coolingKwh)}</td>
                 <td className="px-2 py-0.5">{formatQuantity('water', unitSystem, y.waterL, false)}</td>
@@ -71,9 +70,9 @@ export function YearTable({ years }: { years: YearResults[] }) {
               {statRows.map((row) => (
                 <tr key={row.label} className="border-b border-rule/60 bg-mist/40">
                   <th scope="row" className="py-0.5 text-left font-sans font-medium" title={row.title}>{row.label}</th>
-                  {modeKeys.map((k) => {
-                    const column = statColumns.find((c) => c.metric === k);
-                    return <StatCell key={k} point={column ? row.cell(stats.metrics![column.metric]) : null} format={column?.format} system={unitSystem} />;
+                  {modeRowSpecs.map((spec) => {
+                    const column = spec.kind === 'mode' ? statColumns.find((c) => c.metric === spec.mode) : undefined;
+                    return <StatCell key={modeSpecKey(spec)} point={column ? row.cell(stats.metrics![column.metric]) : null} format={column?.format} system={unitSystem} />;
                   })}
                   {statColumns.slice(3).map((c) => (
                     <StatCell key={c.metric} point={row.cell(stats.metrics![c.metric])} format={c.format} system={unitSystem} />
@@ -84,6 +83,7 @@ export function YearTable({ years }: { years: YearResults[] }) {
           )}
         </table>
       </div>
+      {years.length > 0 && !countsSubsets({ hours: years[0] }) && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
       <YearNotes stats={stats} />
     </div>
   );

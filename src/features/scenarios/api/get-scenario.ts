@@ -2,6 +2,14 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { Scenario } from '../../../../shared/scenario/schema';
 
+/** One retired input the start-up migration replaced, as the server recorded it. */
+export interface ScenarioChange {
+  path: string;
+  before: unknown;
+  after: unknown;
+  note: string;
+}
+
 export interface StoredScenario {
   id: number;
   projectId: number;
@@ -9,6 +17,8 @@ export interface StoredScenario {
   scenario: Scenario;
   createdAt: string;
   updatedAt: string;
+  /** What the start-up migration changed; the editor shows it until an engineer or owner dismisses it. Null if never migrated. */
+  migration: { migratedAt: string; changes: ScenarioChange[]; dismissedAt: string | null; dismissedBy: number | null } | null;
 }
 
 export const getScenario = (projectId: number, scenarioId: number) =>

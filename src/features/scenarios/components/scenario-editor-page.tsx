@@ -5,6 +5,7 @@ import { useProjectRole } from '@/lib/projects';
 import { useScenario } from '../api/get-scenario';
 import { newScenarioValues, toFormValues } from '../utils/scenario-form';
 import { ScenarioForm } from './scenario-form';
+import { MigrationNotice } from './migration-notice';
 
 /** /projects/:projectId/scenarios/new and /projects/:projectId/scenarios/:scenarioId */
 export function ScenarioEditorPage() {
@@ -35,6 +36,7 @@ export function ScenarioEditorPage() {
       climateFiles={climateFiles.data?.climateFiles ?? []}
       canEdit={role === undefined ? false : canEdit}
       roleKnown={role !== undefined}
+      notice={stored && <MigrationNotice projectId={projectId} stored={stored} canDismiss={role !== undefined && canEdit} />}
     />
   );
 }

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type ReactNode } from 'react';
 import { useForm, useWatch, type Resolver } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
@@ -14,11 +14,13 @@ import type { ScenarioFormValues } from '../utils/scenario-form';
 import { useDebouncedValue } from '../utils/use-debounced-value';
 import { useLeaveGuard } from '../utils/use-leave-guard';
 import { EnvelopePicker } from './envelope-picker';
+import { LoadProfileField } from './load-profile-field';
 import { ModePreview } from './mode-preview';
 import { QuantityField } from './quantity-field';
 import { RunPanel } from './run-panel';
 import { ScenarioRuns } from './scenario-runs';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
+import { ChoiceCard } from '@/components/ui/choice-card';
 
 const resolver = zodResolver(scenarioSchema) as unknown as Resolver<ScenarioFormValues, unknown, Scenario>;
 
@@ -29,6 +31,7 @@ export function ScenarioForm({
   climateFiles,
   canEdit,
   roleKnown,
+  notice,
 }: {
   projectId: number;
   scenarioId: number | null;
@@ -36,6 +39,8 @@ export function ScenarioForm({
   climateFiles: ClimateFileListing[];
   canEdit: boolean;
   roleKnown: boolean;
+  /** Shown under the title, above the form (the one-time notice of the start-up migration). */
+  notice?: ReactNode;
 }) {
   const navigate = useNavigate();
   const form = useForm<ScenarioFormValues, unknown, Scenario>({ defaultValues: initial, resolver, mode: 'onChange' });
@@ -107,6 +112,7 @@ export function ScenarioForm({
         )}
       </div>
 
+      {notice}
       {roleKnown && readOnly && (
         <Notice title="Read-only">You can read this scenario and its runs; editing and running need the engineer or owner role in this project.</Notice>
       )}
@@ -146,18 +152,9 @@ export function ScenarioForm({
               <legend className="text-sm">System kind</legend>
               <div className="mt-1 grid gap-2 md:grid-cols-3">
                 {systemKinds.map((k) => (
-                  <label
-                    key={k.kind}
-                    className={`flex cursor-pointer gap-2 rounded border px-3 py-2 text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-harbour-soft ${
-                      kind === k.kind ? 'border-harbour bg-mist' : 'border-rule'
-                    }`}
-                  >
+                  <ChoiceCard key={k.kind} selected={kind === k.kind} label={k.label} help={k.help}>
                     <input type="radio" value={k.kind} {...register('system.kind')} className="mt-1 accent-harbour" />
-                    <span>
-                      <span className="font-medium">{k.label}</span>
-                      <span className="block text-xs text-ink-soft">{k.help}</span>
-                    </span>
-                  </label>
+                  </ChoiceCard>
                 ))}
               </div>
             </fieldset>
@@ -203,6 +200,12 @@ export function ScenarioForm({
           </Panel>
 
           <Panel title="Energy and water inputs">
+            <LoadProfileField
+              value={values.energy.itLoadProfile ?? { kind: 'constant' }}
+              itLoadKw={values.energy.itLoadKw}
+              disabled={readOnly}
+              onChange={(profile) => setValue('energy.itLoadProfile', profile, { shouldDirty: true, shouldValidate: true })}
+            />
             {fieldsFor(energyFields, kind, values.system.kind === 'water-side' ? values.system.heatRejection : undefined).map((f) => (
               <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
             ))}

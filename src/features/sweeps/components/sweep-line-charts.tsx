@@ -81,7 +81,8 @@ function flatDomain(values: number[], fromZero: boolean): { domain?: [number, nu
   return { domain: hi === 0 ? [0, 1] : [Math.min(0, hi), Math.abs(hi) * 1.1] };
 }
 
-const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical' };
+/** A count that is part of a mode is drawn in its mode's colour. */
+const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { free: 'free', humidified: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', partialMechanical: 'mechanical' };
 
 /**
  * One result against the swept value, as a line with a dot per finished point, on its own scale (a few
@@ -128,8 +129,10 @@ export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath
       <ModeHoursChart input={input} points={points} zero={zero} />
       <div className="grid gap-x-6 gap-y-2 lg:grid-cols-3">
         <MetricChart input={input} points={points} metric="mechanical" zero={zero} />
+        <MetricChart input={input} points={points} metric="partialMechanical" />
         <MetricChart input={input} points={points} metric="adiabatic" />
         <MetricChart input={input} points={points} metric="free" />
+        <MetricChart input={input} points={points} metric="humidified" />
         <MetricChart input={input} points={points} metric="partialPue" />
         <MetricChart input={input} points={points} metric="waterL" />
         <MetricChart input={input} points={points} metric="peakMechanicalLoadKw" />

@@ -3,7 +3,8 @@ import { downloadCsv } from '@/lib/download';
 import { toDisplay } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
-import { ModeSwatch } from '@/components/ui/mode-marks';
+import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
+import { hoursOfSpec, hoursText, modeRowSpecs, subsetHours } from '../../../../shared/report/mode-subsets';
 import type { SweepInputPath, SweepPoint, SweepRunStatus } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle, sweepUnit } from '@/lib/sweep-value';
 import { displayNumber } from '../utils/sweep-format';
@@ -17,16 +18,15 @@ const statusClass: Record<SweepRunStatus, string> = {
   cancelled: 'bg-paper text-ink-soft',
 };
 
-const hoursHeads = [
-  ['free', 'Free cooling (h)'],
-  ['adiabatic', 'Adiabatic (h)'],
-  ['mechanical', 'Mechanical (h)'],
-] as const;
+/** The mode columns (no-data hours left out), each followed by the hours that are part of it. */
+const hourSpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
 
 /** Every point with its run and results: the table beside the charts, and its CSV download in the person's units. */
 export function SweepPointsTable({ projectId, name, inputs, points }: { projectId: number; name: string; inputs: SweepInputPath[]; points: readonly SweepPoint[] }) {
   const { unitSystem } = useUnitSystem();
   const waterUnit = metricUnit('waterL', unitSystem);
+  const waterSuffix = waterUnit === 'm³' ? 'm3' : 'us_gal';
+  const water = (litres: number | null | undefined) => (litres === null || litres === undefined ? null : Math.round(toDisplay('water', unitSystem, litres) * 1000) / 1000);
 
   function download() {
     const head = csvRow([
@@ -34,11 +34,15 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
       ...inputs.map((p) => (sweepUnit(p, unitSystem) ? `${p} (${sweepUnit(p, unitSystem)})` : p)),
       'status',
       'free_h',
+      'humidified_h',
       'adiabatic_h',
       'mechanical_h',
+      'partial_mechanical_h',
       'no_data_h',
       'partial_pue',
-      `water_${waterUnit === 'm³' ? 'm3' : 'us_gal'}`,
+      `water_${waterSuffix}`,
+      `water_humidification_${waterSuffix}`,
+      `water_evaporative_cooling_${waterSuffix}`,
       'peak_mechanical_load_kw',
       'run_id',
     ]);
@@ -52,11 +56,15 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
         }),
         p.status,
         r?.hours.free,
+        r ? subsetHours(r.hours, 'humidified') : null,
         r?.hours.adiabatic,
         r?.hours.mechanical,
+        r ? subsetHours(r.hours, 'partialMechanical') : null,
         r?.hours.noData,
         r?.partialPue === null || r === null ? null : Math.round(r.partialPue * 1e4) / 1e4,
-        r ? Math.round(toDisplay('water', unitSystem, r.waterL) * 1000) / 1000 : null,
+        water(r?.waterL),
+        water(r?.humidificationL),
+        water(r?.evaporativeCoolingL),
         r ? Math.round(r.peakMechanicalLoadKw * 10) / 10 : null,
         p.runId,
       ]);
@@ -86,11 +94,8 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
               <th scope="col" className="px-2 text-left font-medium">
                 Status
               </th>
-              {hoursHeads.map(([k, label]) => (
-                <th key={k} scope="col" className="px-2 font-medium">
-                  <ModeSwatch mode={k} className="mr-1 size-2.5 align-middle" />
-                  {label}
-                </th>
+              {hourSpecs.map((spec) => (
+                <ModeColumnHead key={modeSpecKey(spec)} spec={spec} className="px-2" />
               ))}
               <th scope="col" className="px-2 font-medium">
                 Partial PUE
@@ -122,9 +127,9 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
                     {p.status === 'running' && ` ${Math.round(p.progress * 100)} %`}
                   </span>
                 </td>
-                {hoursHeads.map(([k]) => (
-                  <td key={k} className="num px-2">
-                    {p.results ? p.results.hours[k].toLocaleString('en') : '–'}
+                {hourSpecs.map((spec) => (
+                  <td key={modeSpecKey(spec)} className={`num px-2 ${spec.kind === 'subset' ? 'text-ink-soft' : ''}`}>
+                    {p.results ? hoursText(hoursOfSpec(p.results.hours, spec)) : '–'}
                   </td>
                 ))}
                 <td className="num px-2">{formatMetric('partialPue', unitSystem, p.results?.partialPue ?? null)}</td>
