@@ -9,9 +9,9 @@
  */
 import type { Context } from '../import-context';
 import { daysFromCivil, daysInMonth, MS_PER_DAY, MS_PER_HOUR } from '../time-cells';
-import type { ClimateSeries, ColumnMappingOverride, FileHeader, RecognisedFormat, TimeMapping } from '../types';
+import type { ClimateSeries, ColumnMappingOverride, FileHeader, RecognisedFormat } from '../types';
 import { fixedOffsetZone } from './fixed-offset';
-import { forEachLine, FormatRows, formatRecognition, integerIn, rejectRow, type FormatColumn } from './format-rows';
+import { forEachLine, FormatRows, formatRecognition, integerIn, rejectRow, yearMonthDayHour, type FormatColumn } from './format-rows';
 
 export const EPW_FORMAT: RecognisedFormat = {
   id: 'epw',
@@ -166,7 +166,7 @@ function humidityField(lines: string[]): number {
 }
 
 /** Reads an EPW text (BOM and line ends already handled by the caller). */
-export function readEpw(text: string, override: Partial<ColumnMappingOverride>, timeZoneAsked: string | undefined, ctx: Context): ClimateSeries | null {
+export function readEpw(text: string, override: Partial<ColumnMappingOverride>, ctx: Context): ClimateSeries | null {
   const { log } = ctx;
   const head = readHeader(text, ctx);
   if (!head) return null;
@@ -176,9 +176,6 @@ export function readEpw(text: string, override: Partial<ColumnMappingOverride>, 
   ctx.timeZone = zone;
   ctx.hourEnding = true;
   ctx.fileOffsetMs = offsetMs;
-  if (timeZoneAsked !== undefined && timeZoneAsked !== zone) {
-    log.info('format-header', `EPW times are local standard time at ${zone}, as the LOCATION record says; the time basis chosen for the upload (${timeZoneAsked}) is not used for this file.`);
-  }
 
   const lines: string[] = [];
   const lineNumbers: number[] = [];
@@ -192,28 +189,9 @@ export function readEpw(text: string, override: Partial<ColumnMappingOverride>, 
   const columns = [...COLUMNS];
   for (let c = columns.length; c < widest; c++) columns.push({ header: `Field ${c + 1}` });
 
-  const time: TimeMapping = {
-    layout: 'ymdh',
-    year: 0,
-    month: 1,
-    day: 2,
-    hour: 3,
-    minute: null,
-    hourConvention: 'ending-1-24',
-    confidence: 1,
-    description: `EPW year, month, day and hour 1–24 (hour ending), local standard time at ${zone} from the LOCATION record`,
-  };
-  const m = ctx.mapping;
-  m.delimiter = ',';
-  m.decimalSeparator = '.';
-  m.headerLine = null;
-  m.headers = columns.map((c) => c.header);
-  const recognition = formatRecognition(EPW_FORMAT, columns, time, { dryBulb: 6, humidity: humidityField(lines), pressure: 9 }, override, ctx);
-  m.time = recognition.time;
-  m.dryBulb = recognition.dryBulb;
-  m.humidity = recognition.humidity;
-  m.pressure = recognition.pressure;
-  m.confidence = 1;
+  const time = yearMonthDayHour('ending-1-24', `EPW year, month, day and hour 1–24 (hour ending), local standard time at ${zone} from the LOCATION record`);
+  const layout = { delimiter: ',' as const, headerLine: null, time };
+  const recognition = formatRecognition(EPW_FORMAT, columns, layout, { dryBulb: 6, humidity: humidityField(lines), pressure: 9 }, override, ctx);
   if (log.hasErrors()) return null;
 
   const rows = new FormatRows(lines.length, columns, recognition, ctx);

@@ -52,17 +52,24 @@ export function rejectRow(ctx: Context, line: number, message: string, at: { col
 
 /**
  * The recognition a format implies, with the caller's overrides of the value columns laid over it
- * (the time columns and the delimiter are the format's own: an override of them is reported, not used).
+ * (the time columns and the delimiter are the format's own: an override of them is reported, not used),
+ * written into the import's mapping as well.
  */
 export function formatRecognition(
   format: RecognisedFormat,
   columns: FormatColumn[],
-  time: TimeMapping,
+  layout: { delimiter: ',' | ';' | '\t'; headerLine: number | null; time: TimeMapping },
   chosen: { dryBulb: number; humidity: number; pressure: number | null },
   override: Partial<ColumnMappingOverride>,
   ctx: Context,
 ): Recognition {
+  const { time } = layout;
   const headers = columns.map((c) => c.header);
+  const m = ctx.mapping;
+  m.delimiter = layout.delimiter;
+  m.decimalSeparator = '.';
+  m.headerLine = layout.headerLine;
+  m.headers = headers;
   const assign = (column: number, reason: string): QuantityAssignment => ({
     ...(columns[column].holds as QuantityColumn),
     column,
@@ -91,7 +98,17 @@ export function formatRecognition(
   if (p && columns[p.column].notStationPressure) {
     ctx.log.error('mapping-override-invalid', `Column "${p.header}" cannot be used as station pressure: ${columns[p.column].notStationPressure}`, { column: p.header });
   }
+  m.time = recognition.time;
+  m.dryBulb = recognition.dryBulb;
+  m.humidity = recognition.humidity;
+  m.pressure = recognition.pressure;
+  m.confidence = 1;
   return recognition;
+}
+
+/** Time in the first four columns (year, month, day, hour), as EPW and the station records write it. */
+export function yearMonthDayHour(hourConvention: 'ending-1-24' | 'beginning-0-23', description: string): TimeMapping {
+  return { layout: 'ymdh', year: 0, month: 1, day: 2, hour: 3, minute: null, hourConvention, confidence: 1, description };
 }
 
 function sameTime(o: NonNullable<ColumnMappingOverride['time']>, t: TimeMapping, headers: string[]): boolean {

@@ -7,6 +7,8 @@
 import type { Context } from '../import-context';
 import type { ClimateSeries, ImportOptions, RecognisedFormat } from '../types';
 import { EPW_FORMAT, looksLikeEpw, readEpw } from './epw';
+import { HEADER_BLOCK_CSV_FORMAT, looksLikeHeaderBlockCsv, readHeaderBlockCsv } from './header-block-csv';
+import { looksLikeStationRecords, readStationRecords, STATION_RECORDS_FORMAT } from './station-records';
 
 interface PublishedReader {
   format: RecognisedFormat;
@@ -15,7 +17,9 @@ interface PublishedReader {
 }
 
 export const PUBLISHED_READERS: PublishedReader[] = [
-  { format: EPW_FORMAT, recognise: looksLikeEpw, read: (text, o, ctx) => readEpw(text, o.mapping ?? {}, o.timeZone, ctx) },
+  { format: EPW_FORMAT, recognise: looksLikeEpw, read: (text, o, ctx) => readEpw(text, o.mapping ?? {}, ctx) },
+  { format: HEADER_BLOCK_CSV_FORMAT, recognise: looksLikeHeaderBlockCsv, read: (text, o, ctx) => readHeaderBlockCsv(text, o.mapping ?? {}, ctx) },
+  { format: STATION_RECORDS_FORMAT, recognise: looksLikeStationRecords, read: (text, o, ctx) => readStationRecords(text, o.mapping ?? {}, ctx) },
 ];
 
 /** The series of a file in a published format (null when refused), or undefined when the text is none of them. */
@@ -24,5 +28,9 @@ export function readPublishedFormat(text: string, options: ImportOptions, ctx: C
   if (!reader) return undefined;
   ctx.mapping.format = reader.format;
   ctx.log.info('format-recognised', `Recognised as ${reader.format.name}: ${reader.format.conventions.join('; ')}.`);
-  return reader.read(text, options, ctx);
+  const series = reader.read(text, options, ctx);
+  if (options.timeZone !== undefined && options.timeZone !== ctx.timeZone && ctx.mapping.time) {
+    ctx.log.info('format-recognised', `${reader.format.name} times are read as the format states (${ctx.mapping.time.description}); the time zone asked for (${options.timeZone}) is not used for this file.`);
+  }
+  return series;
 }
