@@ -40,6 +40,6 @@ export function headerMismatches(header: FileHeader, site: { elevationM: number;
 
 /** Adds a warning for each disagreement between the header read and the site. */
 export function checkHeaderAgainstSite(ctx: Context, site: { elevationM: number; timeZone: string } | undefined): void {
-  if (!site || !ctx.fileHeader) return;
+  if (!site || typeof site !== 'object' || typeof site.timeZone !== 'string' || typeof site.elevationM !== 'number' || !ctx.fileHeader) return;
   for (const m of headerMismatches(ctx.fileHeader, site)) ctx.log.warning('header-site-mismatch', m.message, { line: ctx.fileHeader.line, column: m.field });
 }
