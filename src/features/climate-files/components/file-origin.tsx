@@ -35,11 +35,13 @@ export function FileOrigin({
   report,
   site,
   onNewSite,
+  newSiteOpen = false,
 }: {
   report: ImportReport;
   site?: { name: string; elevationM: number; timeZone: string; latitude?: number | null; longitude?: number | null };
-  /** Offered when given: start a new site from the header's values. */
+  /** Offered when given: start a new site from the header's values (the button toggles it). */
   onNewSite?: () => void;
+  newSiteOpen?: boolean;
 }) {
   const { unitSystem } = useUnitSystem();
   const header: FileHeader | null = report.fileHeader ?? null;
@@ -95,7 +97,7 @@ export function FileOrigin({
       )}
       {onNewSite && header && (
         <button type="button" className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist" onClick={onNewSite}>
-          New site from this header
+          {newSiteOpen ? 'Close the new-site form' : 'New site from this header'}
         </button>
       )}
     </div>

@@ -186,7 +186,7 @@ export function UploadWizard({
             <Panel title="What the file says about itself">
               <div className="space-y-3">
                 <FileFormatNote mapping={preview.mapping} />
-                <FileOrigin report={preview.report} site={site ?? undefined} onNewSite={() => setSiteFromHeader(true)} />
+                <FileOrigin report={preview.report} site={site ?? undefined} onNewSite={() => setSiteFromHeader(!siteFromHeader)} newSiteOpen={siteFromHeader} />
                 {siteFromHeader && preview.report.fileHeader && (
                   <div className="rounded border border-rule p-3">
                     <h3 className="mb-2 text-sm font-semibold">New site from the file's header</h3>

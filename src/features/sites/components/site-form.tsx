@@ -128,7 +128,7 @@ export function SiteForm({
 
   return (
     <form onSubmit={submit} className="space-y-3" noValidate aria-label={site ? `Edit ${site.name}` : 'New site'}>
-      {!site && (
+      {!site && !initial && (
         <div className="text-sm">
           <label htmlFor={`${ids}-header-file`} className="block font-medium">Fill from a weather file's header (optional)</label>
           <input
