@@ -32,7 +32,8 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
   const rawUpload = express.raw({ type: () => true, limit: limits.bytes });
 
   /** Reads the body as text and imports it on the pool; nothing is stored here. */
-  async function importUpload(req: express.Request, timeZone: string) {
+  async function importUpload(req: express.Request, site: { elevationM: number; timeZone: string }) {
+    const { timeZone } = site;
     const query = climateUploadQuerySchema.parse(req.query);
     const bytes = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
     if (bytes.byteLength === 0) {
@@ -54,6 +55,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
         maxGapHours: query.maxGapHours,
         timeZone: importTimeZone(query.timeBasis, timeZone),
         humidityOverIce: query.humidityOverIce,
+        site: { elevationM: site.elevationM, timeZone },
       },
     });
     return { query, bytes, text, result };
@@ -87,7 +89,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files/preview', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { result, text } = await importUpload(req, site.timeZone);
+      const { result, text } = await importUpload(req, site);
       const s = result.series;
       const hours = s
         ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
@@ -111,7 +113,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { query, bytes, result } = await importUpload(req, site.timeZone);
+      const { query, bytes, result } = await importUpload(req, site);
       if (!result.ok || !result.series) {
         recordRequestAudit(db, req, 'climate.rejected', query.fileName, { siteId, summary: result.report.summary });
         throw new HttpError(422, 'import_rejected', result.report.summary, { report: result.report, mapping: result.mapping });

@@ -20,6 +20,9 @@ import { buildMapping, reportMapping } from './mapping-report';
 import { sniffDecimalSeparator } from './number-cells';
 import { readRows } from './read-rows';
 import { recogniseColumns } from './recognise-columns';
+import { readPublishedFormat } from './formats/published-formats';
+import { checkHeaderAgainstSite } from './formats/site-check';
+import { noteStationLine, readStationLine } from './formats/station-line';
 import { findLayout, isBlankRow, isCommentRow, spreadSample } from './table-layout';
 import { formatUtc } from './time-cells';
 import { readHumidityOverIce } from './humidity-over-ice';
@@ -54,6 +57,8 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
     humidityOverIce: ctx.humidityOverIce,
     counts: c,
     issues: ctx.log.issues,
+    fileHeader: ctx.fileHeader ?? null,
+    typicalYear: ok ? (ctx.typicalYear ?? null) : null,
   };
   return { ok, series: ok ? series : null, report, mapping: ctx.mapping };
 }
@@ -76,7 +81,9 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
     hourEnding: false,
   };
   try {
-    return finish(ctx, runImport(text, options ?? {}, ctx));
+    const series = runImport(text, options ?? {}, ctx);
+    checkHeaderAgainstSite(ctx, options?.site);
+    return finish(ctx, series);
   } catch (error) {
     ctx.log.error('unexpected-failure', `The importer failed unexpectedly (${error instanceof Error ? error.message : String(error)}); nothing was imported.`);
     return finish(ctx, null);
@@ -131,6 +138,11 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('binary-input', 'The file looks binary (for example a spreadsheet workbook or an archive), not delimited text; save it as CSV.');
     return null;
   }
+  const published = readPublishedFormat(text, options, ctx);
+  if (published !== undefined) {
+    if (published && ctx.humidityOverIce) readHumidityOverIce(published, log);
+    return published;
+  }
   const body = skipLeadingComments(text);
   if (body.text.trim() === '') {
     log.error('empty-input', `The file holds only comment lines (${body.commentLines}) and no data.`);
@@ -148,6 +160,7 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('empty-input', 'The file holds no rows.');
     return null;
   }
+  if (layout.headerIndex > 0) noteStationLine(ctx, readStationLine(parsed.row(0), parsed.lineOf(0)));
   // Columns are sized for every remaining row; readRows counts the ones that hold data.
   const dataRows = parsed.count - layout.dataStart;
   let anyData = false;

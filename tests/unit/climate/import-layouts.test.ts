@@ -320,7 +320,8 @@ describe('typical-year files', () => {
     expect(iso(series!.timestampsMs[0])).toBe('1998-01-01T00:00:00.000Z');
     expect(series!.dryBulbC[0]).toBeCloseTo(12.24, 10);
     expect(series!.dryBulbC[1]).toBeCloseTo(1.01, 10);
-    expect(iso(series!.timestampsMs[8759])).toBe('1998-12-31T23:00:00.000Z');
+    expect(iso(series!.timestampsMs[8759])).toBe('1998-12-31T23:00:00.000Z');    // the year each month came from, kept for the climate-file page
+    expect(report.typicalYear).toEqual({ year: 1998, sourceYearByMonth: sourceYear });
   });
 
   it('leaves an ordinary year that crosses a new year alone', () => {
