@@ -8,7 +8,7 @@
  * Equations: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 5, 6, 20, 22, 26, 32, 33, 35.
  */
 import { CP_DRY_AIR, CP_VAPOUR, GAS_CONSTANT_DRY_AIR, KELVIN_OFFSET, LATENT_HEAT_0C, MOLAR_MASS_RATIO, VOLUME_VAPOUR_FACTOR } from './constants';
-import { lnSaturationPressure } from './saturation';
+import { lnSaturationIceOrWater, lnSaturationPressure } from './saturation';
 import { saturationTemperatureFromEnthalpy } from './saturated-enthalpy';
 import { humidityRatioFromWetBulbUnchecked } from './wet-bulb';
 import { requireFinite, requireInRange, requirePressurePa, requireRhPct, requireTemperatureC } from './validate';
@@ -94,16 +94,19 @@ export function saturationCurve(window: ChartWindow, projection: ChartProjection
 }
 
 /**
- * Line of constant thermodynamic wet-bulb wetBulbC: from the saturation curve (t = t*) to dry air
- * (W = 0, where 1.006·(t − t*) = (a − b·t*)·Ws* in eq. 33/35), sampled in `samples` points.
+ * Line of constant thermodynamic wet-bulb wetBulbC: from saturation at t = t* to dry air
+ * (W = 0, where 1.006·(t − t*) = (a − b·t*)·Ws* in eq. 33/35), sampled in `samples` points. Below 0 °C
+ * the line is eq. 35's, with Ws* over ice, so it starts on the ice-saturation curve, a little below the
+ * chart's saturation curve over liquid water (the RH = 100 % line; 9 % below it at −10 °C).
  */
 export function constantWetBulbLine(wetBulbC: number, window: ChartWindow, projection: ChartProjection, samples = 24): ChartLine {
   requireTemperatureC('wetBulbC', wetBulbC);
   validateWindow(window);
   requireInRange('samples', samples, 2, 10_000, '');
   const points: ChartPoint[] = [];
-  const wsStar = humidityRatioAtRh(wetBulbC, 1, window.pressurePa);
-  if (Number.isNaN(wsStar)) return { kind: 'wet-bulb', value: wetBulbC, points };
+  const pwsStar = Math.exp(lnSaturationIceOrWater(wetBulbC));
+  if (!(pwsStar < window.pressurePa)) return { kind: 'wet-bulb', value: wetBulbC, points };
+  const wsStar = (MOLAR_MASS_RATIO * pwsStar) / (window.pressurePa - pwsStar);
   const latent = wetBulbC >= 0 ? 2501 - 2.326 * wetBulbC : 2830 - 0.24 * wetBulbC;
   const dryEndC = wetBulbC + (latent * wsStar) / CP_DRY_AIR;
   for (let i = 0; i < samples; i++) {

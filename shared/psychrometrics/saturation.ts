@@ -7,7 +7,7 @@
  *   weather data give them (WMO-No. 8, *Guide to Instruments and Methods of Observation*, part I ch. 4:
  *   humidity is reported with respect to water, also below 0 °C). Below 0 °C this is saturation over
  *   supercooled water: eq. 6 extended below its stated range (0…200 °C). The extension is an
- *   extrapolation, as WMO-No. 8 notes of its own formulas for supercooled water; it stays within a few
+ *   extrapolation, as WMO-No. 8 notes of its own formulas for supercooled water; it stays within
  *   0.5 % of the WMO-No. 8 (Magnus-type) formula over water down to −40 °C (tested).
  * - **ASHRAE's switch** — ice at and below the triple point (0.01 °C), water above, as psychrolib does —
  *   kept for the formulas that need ice: the wet-bulb equation's ice branch (eq. 35 takes Ws* over ice
@@ -125,7 +125,7 @@ const LN_PWS_MAX = lnSaturationOverWater(MAX_TEMPERATURE_C + KELVIN_OFFSET);
 /** ln pws at the triple point on the water branch: below it, a frost point exists. */
 export const LN_TRIPLE_POINT_PRESSURE = lnSaturationOverWater(TRIPLE_POINT_C + KELVIN_OFFSET);
 
-/** Newton on ln pws over water from the Magnus-type guess (WMO-No. 8 coefficients 17.62, 243.12 °C). */
+/** Newton on ln pws over water from the Magnus-type guess (WMO-No. 8 coefficients over water, 17.62 and 243.12 °C; recalled). */
 function solveOverWater(lnPw: number): number {
   const a = lnPw - LN_611_2;
   let tK = (243.12 * a) / (17.62 - a) + KELVIN_OFFSET;
@@ -137,7 +137,7 @@ function solveOverWater(lnPw: number): number {
   return tK - KELVIN_OFFSET;
 }
 
-/** Newton on ln pws over ice from the Magnus-type guess over ice (22.46, 272.62 °C). */
+/** Newton on ln pws over ice from the Magnus-type guess (WMO-No. 8 coefficients over ice, 22.46 and 272.62 °C; recalled). */
 function solveOverIce(lnPw: number): number {
   const a = lnPw - LN_611_2;
   let tK = (272.62 * a) / (22.46 - a) + KELVIN_OFFSET;
