@@ -161,7 +161,8 @@ export function hourlyEnergy(
     out.mechanicalLoadKw[i] = mechanicalKw;
     out.compressorKw[i] = compressorKw;
     out.fanKw[i] = hallFanKw + rejectionFanKw;
-    out.pumpKw[i] = waterSide || evaporation > 0 ? affinityPowerKw(designPumpKw, speedFraction(load, pumpMinSpeedFraction)) : 0;
+    const pumpKw = affinityPowerKw(designPumpKw, speedFraction(load, pumpMinSpeedFraction));
+    out.pumpKw[i] = waterSide ? pumpKw : 0;
     out.rejectedKw[i] = rejectedKw;
 
     if (tower) {
@@ -186,6 +187,8 @@ export function hourlyEnergy(
       waterKg += (rejectedKw * condenserAirKgPerHPerKw * CP_AIR_KJ_PER_KG_K * eps * (t - twb)) / 2501;
     }
     if (waterKg > 0) {
+      // Air-side pumps run only while the evaporative stage (or the wetted condenser) takes water.
+      out.pumpKw[i] = pumpKw;
       if (humidified[i] === 1) out.humidificationL[i] = waterKg * LITRES_PER_KG;
       else out.evaporativeCoolingL[i] = waterKg * LITRES_PER_KG;
     }

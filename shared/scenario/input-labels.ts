@@ -23,6 +23,8 @@ export const INPUT_LABELS: Readonly<Record<string, string>> = {
   'energy.itLoadKw': 'IT load',
   'energy.itLoadProfile': 'IT load through the year',
   'energy.itLoadProfile.kind': 'IT load through the year',
+  'energy.itLoadProfile.name': 'IT load profile',
+  'energy.itLoadProfile.fractions': 'IT load, shares of design',
   'energy.mechanicalCop': 'Rated compressor COP',
   'energy.evaporatorApproachK': 'Evaporator approach',
   'energy.condenserApproachK': 'Condenser approach',

@@ -132,6 +132,11 @@ describe('an engineer designing, running and comparing scenarios', () => {
       .toBe(true);
     expect(await page.getByLabel('Approach', { exact: true }).isVisible()).toBe(true);
     await h.shot('scenario-editor-water-side-si');
+    // A cooling tower brings its own inputs: freeze protection, drift and basin heaters (engine 2.0.0).
+    await page.getByLabel('Heat rejection').selectOption('cooling-tower');
+    expect(await page.getByLabel('Tower freeze-protection wet-bulb').isVisible()).toBe(true);
+    expect(await page.getByLabel('Tower drift').inputValue()).toBe('0.02');
+    await h.shot('scenario-editor-tower-si');
     page.once('dialog', (dialog) => void dialog.accept());
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Projects' }).click();
     await page.waitForURL(`${h.baseUrl}/`);

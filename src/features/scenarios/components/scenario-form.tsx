@@ -180,7 +180,7 @@ export function ScenarioForm({
                 </div>
               </div>
             )}
-            {fieldsFor(systemFields, kind).map((f) => (
+            {fieldsFor(systemFields, kind, values.system.kind === 'water-side' ? values.system.heatRejection : undefined).map((f) => (
               <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
             ))}
           </Panel>

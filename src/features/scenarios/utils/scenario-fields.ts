@@ -87,13 +87,16 @@ export const systemFields: NumericField[] = [
     'Heat-rejection plus exchanger approach between outdoor (dry- or wet-bulb) and chilled-water temperature.',
     ['water-side'],
   ),
-  field(
-    ws.dryCoolerAirRiseK as AnyNumber,
-    'system.dryCoolerAirRiseK',
-    'temperatureDifference',
-    'Air temperature rise through the dry cooler at design, which sets its air flow (and a wetted cooler’s water); 10 K is common practice.',
-    ['water-side'],
-  ),
+  {
+    ...field(
+      ws.dryCoolerAirRiseK as AnyNumber,
+      'system.dryCoolerAirRiseK',
+      'temperatureDifference',
+      'Air temperature rise through the dry cooler at design, which sets its air flow (and a wetted cooler’s water); 10 K is common practice.',
+      ['water-side'],
+    ),
+    heatRejection: 'dry-cooler',
+  },
   {
     ...field(
       ws.freezeProtectionWetBulbC as AnyNumber,
@@ -124,7 +127,7 @@ export const energyFields: NumericField[] = [
     en.mechanicalCop,
     'energy.mechanicalCop',
     'ratio',
-    'Rated full-load COP at the rating conditions (35 °C air for air-cooled, 29.4 °C condenser water for water-cooled, 6.7 °C leaving water); the hour’s COP follows its lift.',
+    'Rated full-load COP at the rating conditions (35 °C / 95 °F air for air-cooled, 29.4 °C / 85 °F condenser water for water-cooled, 6.7 °C / 44 °F leaving water); the hour’s COP follows its lift.',
   ),
   field(en.evaporatorApproachK, 'energy.evaporatorApproachK', 'temperatureDifference', 'Evaporating temperature below the leaving air or chilled water.'),
   field(en.condenserApproachK, 'energy.condenserApproachK', 'temperatureDifference', 'Condensing temperature above the air or water entering the condenser.'),
