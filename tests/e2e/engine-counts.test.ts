@@ -117,6 +117,8 @@ describe('the new counts on screen', () => {
     expect(await page.getByTestId('mixed-engines').innerText()).toContain(`scenario-engine 1.0.0: run ${oldRun}`);
     expect(await page.getByTestId('compare-row-humidified').innerText()).toContain(fmt(results.hours.humidified));
     expect(await page.getByTestId('compare-row-humidified').innerText()).toContain('—');
+    // The run picker marks the run made by the older engine, and only that one.
+    expect(await page.getByTestId('older-engine').allInnerTexts()).toEqual([' · by scenario-engine 1.0.0']);
     await h.shot('engine-counts-compare');
 
     await page.goto(`${h.baseUrl}/projects/${projectId}/compare/report?runs=${oldRun},${newRun}&baseline=${oldRun}`);
