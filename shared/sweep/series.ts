@@ -151,6 +151,8 @@ export interface GridCell {
   column: SweepValue;
   runId: number;
   metric: number | null;
+  /** The point has finished (so a null metric is a count its run's engine did not make). */
+  done: boolean;
   /** The point has zero mechanical hours. */
   noMechanical: boolean;
 }
@@ -161,7 +163,7 @@ export function gridCells(points: readonly SweepPoint[], rowInput: string, colum
     const row = p.values[rowInput as keyof SweepPointValues];
     const column = p.values[columnInput as keyof SweepPointValues];
     if (row === undefined || column === undefined) return [];
-    return [{ row, column, runId: p.runId, metric: metricOf(p.results, metric), noMechanical: p.results?.hours.mechanical === 0 }];
+    return [{ row, column, runId: p.runId, metric: metricOf(p.results, metric), done: p.results !== null, noMechanical: p.results?.hours.mechanical === 0 }];
   });
 }
 

@@ -66,13 +66,13 @@ afterAll(() => h?.close());
 afterEach(() => expectNoPageErrors(pageErrors));
 
 describe('the new counts on screen', () => {
-  it('the run page shows humidified and partly economised hours and the water split, in SI and IP', async () => {
+  it('the run page shows humidified and partly economised hours and the water split, in SI and IP', { timeout: 180_000 }, async () => {
     expect(results.hours.humidified).toBeGreaterThan(0);
     expect(results.hours.partialMechanical).toBeGreaterThan(0);
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${newRun}`);
     await page.getByTestId('mode-hours').waitFor();
-    await chartsDrawn(page);
+    await chartsDrawn(page, { timeoutMs: 60_000 });
     expect(await page.getByTestId('run-engine').innerText()).toContain('scenario-engine 2.0.0');
     expect(await page.getByTestId('subset-humidified').innerText()).toContain(fmt(results.hours.humidified));
     expect(await page.getByTestId('subset-partialMechanical').innerText()).toContain(fmt(results.hours.partialMechanical));
@@ -84,18 +84,18 @@ describe('the new counts on screen', () => {
     await h.shot('engine-counts-run-si');
     await h.useUnits('IP');
     await page.getByTestId('mode-hours').waitFor();
-    await chartsDrawn(page);
+    await chartsDrawn(page, { timeoutMs: 60_000 });
     // 1 US gallon = 3.785 411 784 L (NIST SP 811, 2008, App. B).
     expect(await page.getByTestId('water-humidificationL').innerText()).toContain(`${fmt(Math.round(results.water.humidificationL / 3.785411784))} US gal`);
     await h.shot('engine-counts-run-ip');
     await h.useUnits('SI');
   });
 
-  it('the report shows the same counts and names its engine', async () => {
+  it('the report shows the same counts and names its engine', { timeout: 120_000 }, async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${newRun}/report`);
     await page.getByTestId('report-mode-hours').waitFor();
-    await chartsDrawn(page);
+    await chartsDrawn(page, { timeoutMs: 60_000 });
     expect(await page.getByTestId('report-engine').innerText()).toContain('scenario-engine 2.0.0');
     expect(await page.getByTestId('report-mode-hours').innerText()).toContain(fmt(results.hours.humidified));
     expect(await page.getByTestId('report-headline').innerText()).toContain(`${fmt(results.hours.humidified)} h with humidification`);
@@ -103,7 +103,7 @@ describe('the new counts on screen', () => {
     await h.shot('engine-counts-report');
   });
 
-  it('an old run shows — and says its engine did not count them; a comparison with it says the engines differ', async () => {
+  it('an old run shows — and says its engine did not count them; a comparison with it says the engines differ', { timeout: 120_000 }, async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${oldRun}`);
     await page.getByTestId('mode-hours').waitFor();
@@ -117,6 +117,8 @@ describe('the new counts on screen', () => {
     expect(await page.getByTestId('mixed-engines').innerText()).toContain(`scenario-engine 1.0.0: run ${oldRun}`);
     expect(await page.getByTestId('compare-row-humidified').innerText()).toContain(fmt(results.hours.humidified));
     expect(await page.getByTestId('compare-row-humidified').innerText()).toContain('—');
+    // The run picker marks the run made by the older engine, and only that one.
+    expect(await page.getByTestId('older-engine').allInnerTexts()).toEqual([' · by scenario-engine 1.0.0']);
     await h.shot('engine-counts-compare');
 
     await page.goto(`${h.baseUrl}/projects/${projectId}/compare/report?runs=${oldRun},${newRun}&baseline=${oldRun}`);

@@ -6,6 +6,7 @@ import { sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
 import { defaultPickerView, pickerViewOptions, runsInView, type PickerView } from '../utils/run-picker-view';
+import { ENGINE_VERSION } from '../../../../shared/scenario/version';
 
 const column = createColumnHelper<RunListing>();
 const share = (r: RunListing, key: 'free' | 'mechanical') => (r.results ? r.results.hours[key] / Math.max(1, r.results.hours.total) : 0);
@@ -59,6 +60,8 @@ export function RunPicker({
           const place = (
             <span className="block text-xs text-ink-soft">
               {r.climate.site.name} · {r.climate.name}
+              {/* A run by an older engine is marked, so like can be compared with like. */}
+              {r.engineVersion !== ENGINE_VERSION && <span className="text-signal-warn" data-testid="older-engine"> · by {r.engineVersion}</span>}
             </span>
           );
           // A sweep point is named by its swept value in the reader's units; its scenario name repeats the base and gives the value in SI.

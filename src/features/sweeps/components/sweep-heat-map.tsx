@@ -6,6 +6,7 @@ import { axisOrder, gridCells, SWEEP_METRICS, sweepMetricLabels, type SweepInput
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
 import { compactPresetLabel } from '../utils/sweep-format';
 import { formatMetric, metricDisplay, metricTitle } from '../utils/metric-format';
+import { NOT_COUNTED } from '../../../../shared/report/mode-subsets';
 
 /** Ink on the pale half of the ramp, paper on the dark half, so every cell's figure keeps its contrast. */
 const cellInk = (t: number) => (t < 0.45 ? '#1d2327' : '#ffffff');
@@ -28,7 +29,7 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
         rowLabel: formatSweepValue(rowInput, unitSystem, c.row),
         columnLabel: formatSweepValue(columnInput, unitSystem, c.column),
         shown: c.metric === null ? null : metricDisplay(metric, unitSystem, c.metric),
-        text: formatMetric(metric, unitSystem, c.metric),
+        text: c.metric === null && c.done ? NOT_COUNTED : formatMetric(metric, unitSystem, c.metric),
       })),
     [points, rowInput, columnInput, metric, unitSystem],
   );
