@@ -1,9 +1,10 @@
 import express from 'express';
 import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { decodeClimateBytes, standardOffsetMinutes, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
+import { decodeClimateBytes, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
 import { csvCell } from '../../shared/csv';
 import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
+import { fixedOffsetZone, standardOffsetMinutes } from '../../shared/time-zone';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
@@ -229,9 +230,7 @@ export function hourlyCsv(s: ClimateSeries): string {
 function importTimeZone(basis: 'site-civil' | 'site-standard' | 'utc', siteTimeZone: string): string {
   if (basis === 'utc') return 'UTC';
   if (basis === 'site-civil') return siteTimeZone;
-  const minutes = standardOffsetMinutes(siteTimeZone);
-  const abs = Math.abs(minutes);
-  return `UTC${minutes < 0 ? '-' : '+'}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+  return fixedOffsetZone(standardOffsetMinutes(siteTimeZone));
 }
 
 function round3(v: number): number {

@@ -15,7 +15,7 @@ import { applyMappingOverride } from './apply-mapping';
 import { countLines, firstLines, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
 import { IssueLog } from './issue-log';
-import { isKnownTimeZone } from './local-time';
+import { isKnownTimeZone } from '../time-zone';
 import { buildMapping, reportMapping } from './mapping-report';
 import { sniffDecimalSeparator } from './number-cells';
 import { readRows } from './read-rows';

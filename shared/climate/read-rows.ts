@@ -3,6 +3,7 @@ import type { ParsedRows } from './delimited-text';
 import type { RowColumns } from './hourly-grid';
 import { toHourlySeries } from './hourly-series';
 import { percent, REJECT_SHARE, round, type Context } from './import-context';
+import { utcOffsetLabel } from '../time-zone';
 import { createLocalToUtc, type LocalToUtc } from './local-time';
 import { classifyUnreadableCell, parseNumberCell } from './number-cells';
 import { describeYmdh, unitOf } from './recognise-columns';
@@ -166,7 +167,7 @@ export function readRows(
     if (rows.count === 0) ctx.fileOffsetMs = offsetNow;
     if (previousOffset === previousOffset && offsetNow !== previousOffset) {
       counts.daylightSavingJumps++;
-      log.info('daylight-saving-jump', `The UTC offset changes from ${offsetText(previousOffset)} to ${offsetText(offsetNow)} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
+      log.info('daylight-saving-jump', `The UTC offset changes from ${utcOffsetLabel(Math.round(previousOffset / MS_PER_MINUTE))} to ${utcOffsetLabel(Math.round(offsetNow / MS_PER_MINUTE))} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
         line,
         column: timeHeader,
       });
@@ -234,13 +235,6 @@ export function readRows(
   }
   if (log.hasErrors()) return null;
   return toHourlySeries(rows, humidityQuantity, ctx, !anyOffset && !zone);
-}
-
-function offsetText(offsetMs: number): string {
-  const minutes = Math.round(offsetMs / MS_PER_MINUTE);
-  const sign = minutes < 0 ? '−' : '+';
-  const abs = Math.abs(minutes);
-  return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
 }
 
 function impossibleHumidityMessage(humidity: QuantityAssignment, cell: string, dryBulbC: number): string {

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isKnownTimeZone } from '../climate/local-time';
+import { isKnownTimeZone } from '../time-zone';
 
 /** A column named by its 0-based index or its header text. */
 const columnRef = z.union([z.number().int().min(0), z.string().min(1).max(200)]);
@@ -79,7 +79,7 @@ export const siteInputSchema = z.object({
   timeZone: z
     .string()
     .default('UTC')
-    .refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo'),
+    .refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo or a fixed offset such as UTC-07:00'),
 });
 
 export type SiteInput = z.infer<typeof siteInputSchema>;

@@ -1,4 +1,4 @@
-import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { utcOffsetLabel } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';

@@ -1,4 +1,4 @@
-import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { utcOffsetLabel } from '../../../../shared/time-zone';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { Notice } from '@/components/ui/notice';
 import { ResultCautions } from '@/components/ui/result-cautions';
