@@ -33,7 +33,8 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
   const last = series && series.timestampsMs.length > 0 ? series.timestampsMs[series.timestampsMs.length - 1] : NaN;
   const years: number[] = [];
   if (ok && Number.isFinite(first)) {
-    const shift = ctx.fileOffsetMs - (ctx.hourEnding ? 1 : 0);
+    // hour-ending stamps were moved to their hour's start in readRows
+    const shift = ctx.fileOffsetMs;
     for (let y = new Date(first + shift).getUTCFullYear(); y <= new Date(last + shift).getUTCFullYear(); y++) years.push(y);
   }
   const c = ctx.counts;

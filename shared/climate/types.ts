@@ -132,6 +132,7 @@ export type IssueKind =
   | 'non-hourly-step'
   | 'timestamps-rounded'
   | 'typical-year-restamped'
+  | 'hour-ending-stamps'
   | 'malformed-row'
   | 'other-humidity-ignored'
   | 'pressure-ignored'
@@ -195,8 +196,8 @@ export interface ImportReport {
   firstTimestamp: string | null;
   lastTimestamp: string | null;
   /**
-   * Calendar years the series covers in the file's own clock (the UTC offset of its first row),
-   * an hour-ending stamp counting in the hour it ends (24:00 on 31 December belongs to that year).
+   * Calendar years the series covers in the file's own clock (the UTC offset of its first row), each hour
+   * by its start (an hour-ending stamp 24:00 on 31 December belongs to that year).
    */
   years: number[];
   maxGapHours: number;
