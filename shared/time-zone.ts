@@ -145,3 +145,8 @@ export function standardDay(utcMs: number, utcOffsetMinutes: number): string {
 export function standardYear(utcMs: number, utcOffsetMinutes: number): number {
   return clockOf(utcMs + utcOffsetMinutes * MS_PER_MINUTE).year;
 }
+
+/** `2021-01-01 to 2023-12-31`: the days of a series' first and last hours on the site's standard time. */
+export function standardPeriod(firstHourMs: number, lastHourMs: number, utcOffsetMinutes: number): string {
+  return `${standardDay(firstHourMs, utcOffsetMinutes)} to ${standardDay(lastHourMs, utcOffsetMinutes)}`;
+}

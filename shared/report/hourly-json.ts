@@ -4,6 +4,7 @@
  */
 import { MODE, MODE_NAMES } from '../scenario/classify';
 import { HOURLY_CSV_COLUMNS, type HourlyCsvInput } from '../scenario/hourly-csv';
+import { standardTimeIso } from '../time-zone';
 
 export type HourlyColumn = (typeof HOURLY_CSV_COLUMNS)[number];
 
@@ -11,7 +12,7 @@ export interface HourlyJson {
   columns: readonly HourlyColumn[];
   units: Record<HourlyColumn, string>;
   /** One array per column, one entry per hour in series order (UTC). */
-  hours: { timestamp: string[]; mode: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode'>, (number | null)[]>;
+  hours: { timestamp: string[]; mode: string[]; local_standard_time: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode' | 'local_standard_time'>, (number | null)[]>;
 }
 
 export const hourlyUnits: Record<HourlyColumn, string> = {
@@ -24,6 +25,7 @@ export const hourlyUnits: Record<HourlyColumn, string> = {
   humidity_ratio_gkg: 'g/kg dry air',
   enthalpy_kjkg: 'kJ/kg dry air',
   mechanical_fraction: 'share of the cooling load on compressors, 0–1',
+  local_standard_time: 'ISO 8601, site standard time (no daylight saving), no offset suffix',
 };
 
 function column(values: Float64Array, decimals: number, scale = 1): (number | null)[] {
@@ -49,6 +51,7 @@ export function hourlyJson(input: HourlyCsvInput): HourlyJson {
       humidity_ratio_gkg: column(input.humidityRatio, 3, 1000),
       enthalpy_kjkg: column(input.enthalpyKJPerKg, 2),
       mechanical_fraction: mechanical,
+      local_standard_time: Array.from(input.timestampsMs, (ms) => standardTimeIso(ms, input.utcOffsetMinutes)),
     },
   };
 }

@@ -9,6 +9,8 @@ import { MONTH_SHORT } from '../calendar';
 import { hoursOfMode, modeKeys, modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import type { ScenarioResults } from '../scenario/run';
+import { PARTIAL_YEAR_MARK, yearStatistics } from '../scenario/year-statistics';
+import { standardPeriod, utcOffsetLabel } from '../time-zone';
 import { flattenInputs, inputUnitSi } from './inputs';
 import type { ReportRun } from './report-data';
 
@@ -45,6 +47,8 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'run', figure: 'Climate file SHA-256', unit: '', value: run.climate.sha256 },
     { section: 'run', figure: 'Envelope', unit: '', value: run.envelope.label },
     { section: 'run', figure: 'Engine version', unit: '', value: run.engineVersion },
+    { section: 'run', figure: 'Period (site standard time)', unit: '', value: standardPeriod(run.climate.firstHourMs, run.climate.lastHourMs, run.site.utcOffsetMinutes) },
+    { section: 'run', figure: 'Site standard time', unit: '', value: utcOffsetLabel(run.site.utcOffsetMinutes) },
     ...modeRows('hours', '', r.hours),
     { section: 'hours', figure: 'All hours', unit: 'h', value: r.hours.total },
     { section: 'hours', figure: 'Free cooling share', unit: '%', value: rounded(r.hours.total ? (100 * r.hours.free) / r.hours.total : null, 2) },
@@ -68,7 +72,11 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'water', figure: 'WUE', unit: 'L/kWh', value: rounded(w.wueLPerKwh, 4) },
   ];
   for (const m of r.hoursByMonth) rows.push(...modeRows('by month', `${MONTH_SHORT[m.month - 1]}: `, m));
+  // Years on the site's standard time (as the run page); a partial year is marked as the run page marks it.
+  const partial = new Map(yearStatistics(r.hoursByYear).partialYears.map((p) => [p.year, p]));
   for (const y of r.hoursByYear) {
+    const p = partial.get(y.year);
+    rows.push({ section: 'by year', figure: `${y.year}: calendar year`, unit: '', value: p ? `${PARTIAL_YEAR_MARK} (${p.hours} of ${p.calendarHours} h)` : 'full' });
     rows.push(...modeRows('by year', `${y.year}: `, y));
     rows.push({ section: 'by year', figure: `${y.year}: cooling energy`, unit: 'kWh', value: rounded(y.coolingKwh, 1) });
     rows.push({ section: 'by year', figure: `${y.year}: water`, unit: 'L', value: rounded(y.waterL, 1) });

@@ -19,6 +19,7 @@ export const HOURLY_CSV_COLUMNS = [
   'humidity_ratio_gkg',
   'enthalpy_kjkg',
   'mechanical_fraction',
+  'local_standard_time',
 ] as const;
 
 export interface HourlyCsvInput {
@@ -32,12 +33,15 @@ export interface HourlyCsvInput {
   humidityRatio: Float64Array;
   enthalpyKJPerKg: Float64Array;
   mechanicalFraction: Float64Array;
+  /** The site's standard-time offset from UTC, minutes: local_standard_time is the hour's start on that clock. */
+  utcOffsetMinutes: number;
 }
 
 /** The hourly CSV's columns from the series a run was given and the run itself (its states and per-hour outcome). */
 export function hourlyCsvInput(
   series: ScenarioSeries,
   run: Pick<ScenarioRun, 'states'> & { classification: Pick<ScenarioRun['classification'], 'modes' | 'mechanicalFraction'> },
+  utcOffsetMinutes = 0,
 ): HourlyCsvInput {
   return {
     timestampsMs: series.timestampsMs,
@@ -49,12 +53,13 @@ export function hourlyCsvInput(
     humidityRatio: run.states.humidityRatio,
     enthalpyKJPerKg: run.states.enthalpyKJPerKg,
     mechanicalFraction: run.classification.mechanicalFraction,
+    utcOffsetMinutes,
   };
 }
 
 const ROWS_PER_CHUNK = 8192;
-// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 9 separators.
-const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 9;
+// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 16 (local standard time) + 10 separators.
+const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 16 + 10;
 const COMMA = 44;
 const NEWLINE = 10;
 const MINUS = 45;
@@ -153,10 +158,15 @@ function writeTimestamp(buf: Uint8Array, pos: number, ms: number, prefix: DayPre
 export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Array) => void): void {
   const n = input.modes.length;
   for (const key of Object.keys(input) as (keyof HourlyCsvInput)[]) {
-    if (input[key].length !== n) throw new RangeError(`${key} has ${input[key].length} hours, modes has ${n}`);
+    const column = input[key];
+    if (typeof column === 'number') continue;
+    if (column.length !== n) throw new RangeError(`${key} has ${column.length} hours, modes has ${n}`);
   }
+  const offsetMs = input.utcOffsetMinutes * 60_000;
+  if (!Number.isFinite(offsetMs) || Math.abs(input.utcOffsetMinutes) > 18 * 60) throw new RangeError(`utcOffsetMinutes must be within ±1080, got ${input.utcOffsetMinutes}`);
   onChunk(encoder.encode(`${HOURLY_CSV_COLUMNS.join(',')}\n`));
   const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
+  const localPrefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
   const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * MAX_ROW_BYTES);
   for (let start = 0; start < n; start += ROWS_PER_CHUNK) {
     const end = Math.min(n, start + ROWS_PER_CHUNK);
@@ -181,6 +191,9 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
       pos = writeFixed(buf, pos, input.enthalpyKJPerKg[i], 2);
       buf[pos++] = COMMA;
       if (input.modes[i] !== MODE.noData) pos = writeFixed(buf, pos, input.mechanicalFraction[i], 3);
+      buf[pos++] = COMMA;
+      // the same stamp on the site's standard time, without the Z (overwritten by the newline)
+      pos = writeTimestamp(buf, pos, input.timestampsMs[i] + offsetMs, localPrefix) - 1;
       buf[pos++] = NEWLINE;
     }
     onChunk(buf.subarray(0, pos));

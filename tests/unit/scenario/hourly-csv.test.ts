@@ -53,14 +53,18 @@ describe('writeHourlyCsv', () => {
       humidityRatio: new Float64Array(n).fill(0.0123456),
       enthalpyKJPerKg: new Float64Array(n).fill(42.1),
       mechanicalFraction: Float64Array.from({ length: n }, (_, i) => (i % 4 === MODE.mechanical ? 0.25 : 0)),
+      // UTC−07:00 (a fixed-offset site): 1999-12-31 22:00 UTC is 15:00 on its standard time
+      utcOffsetMinutes: -420,
     };
     const lines = csvText(input).split('\n');
     expect(lines[0]).toBe(HOURLY_CSV_COLUMNS.join(','));
-    expect(lines[0]).toBe('timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction');
+    expect(lines[0]).toBe('timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,local_standard_time');
     expect(lines).toHaveLength(n + 2); // header, n rows, final empty string after the last newline
-    expect(lines[1]).toBe('1999-12-31T22:00Z,free,-5.50,-1.23,-3.00,55.56,12.346,42.10,0.000');
-    expect(lines[3]).toBe('2000-01-01T00:00Z,mechanical,-3.50,-1.23,-3.00,55.56,12.346,42.10,0.250');
-    expect(lines[4]).toBe('2000-01-01T01:00Z,no_data,,-1.23,-3.00,55.56,12.346,42.10,');
+    expect(lines[1]).toBe('1999-12-31T22:00Z,free,-5.50,-1.23,-3.00,55.56,12.346,42.10,0.000,1999-12-31T15:00');
+    expect(lines[3]).toBe('2000-01-01T00:00Z,mechanical,-3.50,-1.23,-3.00,55.56,12.346,42.10,0.250,1999-12-31T17:00');
+    expect(lines[4]).toBe('2000-01-01T01:00Z,no_data,,-1.23,-3.00,55.56,12.346,42.10,,1999-12-31T18:00');
+    // 2000-01-01 07:00 UTC is midnight of the new year at UTC−07:00
+    expect(lines[10]).toBe('2000-01-01T07:00Z,adiabatic,3.50,-1.23,-3.00,55.56,12.346,42.10,0.000,2000-01-01T00:00');
     const last = lines[n];
     expect(last.startsWith(new Date(t0 + (n - 1) * 3_600_000).toISOString().slice(0, 16))).toBe(true);
   });
@@ -69,7 +73,7 @@ describe('writeHourlyCsv', () => {
     const one = Float64Array.of(1);
     expect(() =>
       writeHourlyCsv(
-        { timestampsMs: one, modes: Uint8Array.of(0), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: new Float64Array(2), humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: one },
+        { timestampsMs: one, modes: Uint8Array.of(0), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: new Float64Array(2), humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: one, utcOffsetMinutes: 0 },
         () => {},
       ),
     ).toThrow(/rhPct has 2 hours/);

@@ -6,6 +6,7 @@ import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
 import { modeKeys, modeLabels } from '../../../../shared/modes';
 import type { ModeHours, YearResults } from '../../../../shared/scenario/results';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
+import { PARTIAL_YEAR_MARK, partialYearsSentence, yearStatistics } from '../../../../shared/scenario/year-statistics';
 import { hours, kw, mwh, ratio, share } from './report-format';
 import { Facts, ReportTable } from './report-layout';
 
@@ -51,17 +52,32 @@ export function MonthlyTable({ byMonth }: { byMonth: (ModeHours & { month: numbe
   );
 }
 
+/** Each calendar year on the site's standard time; a partial year is marked and named as on the run page. */
 export function YearTable({ years, unitSystem }: { years: YearResults[]; unitSystem: UnitSystem }) {
+  const { partialYears } = yearStatistics(years);
+  const partial = new Set(partialYears.map((p) => p.year));
+  const note = partialYearsSentence(partialYears);
   return (
-    <ReportTable
-      testId="report-years"
-      caption="Hours, cooling energy and water for each calendar year"
-      head={['Year', ...modeKeys.map((k) => `${modeLabels[k]} (h)`), 'Cooling energy', 'Water']}
-      rows={years.map((y) => ({
-        key: String(y.year),
-        cells: [y.year, ...modeKeys.map((k) => hoursOfMode(y, k).toLocaleString('en')), mwh(y.coolingKwh), formatQuantity('water', unitSystem, y.waterL)],
-      }))}
-    />
+    <div className="space-y-1">
+      <ReportTable
+        testId="report-years"
+        caption="Hours, cooling energy and water for each calendar year (site standard time)"
+        head={['Year', ...modeKeys.map((k) => `${modeLabels[k]} (h)`), 'Cooling energy', 'Water']}
+        rows={years.map((y) => ({
+          key: String(y.year),
+          cells: [
+            <>
+              {y.year}
+              {partial.has(y.year) && <span className="ml-1.5 rounded bg-mist px-1 text-[11px]">{PARTIAL_YEAR_MARK}</span>}
+            </>,
+            ...modeKeys.map((k) => hoursOfMode(y, k).toLocaleString('en')),
+            mwh(y.coolingKwh),
+            formatQuantity('water', unitSystem, y.waterL),
+          ],
+        }))}
+      />
+      {note && <p className="text-xs text-ink-soft" data-testid="report-partial-years">{note}</p>}
+    </div>
   );
 }
 

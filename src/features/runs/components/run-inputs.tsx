@@ -1,4 +1,5 @@
 import { formatQuantity } from '@/lib/quantity';
+import { standardPeriod, utcOffsetLabel } from '../../../../shared/time-zone';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
 import { flattenInputs } from '../../../../shared/report/inputs';
@@ -34,7 +35,7 @@ export function RunInputs({ run }: { run: RunRecord }) {
         </dd>
         <dt className="text-ink-soft">Hours</dt>
         <dd className="num">
-          {c.hours.toLocaleString('en')} ({new Date(c.firstHourMs).toISOString().slice(0, 10)} to {new Date(c.lastHourMs).toISOString().slice(0, 10)})
+          {c.hours.toLocaleString('en')} ({standardPeriod(c.firstHourMs, c.lastHourMs, c.utcOffsetMinutes)}, site standard time {utcOffsetLabel(c.utcOffsetMinutes)})
         </dd>
         <dt className="text-ink-soft">File checksum</dt>
         <dd className="num break-all">sha256 {c.sha256}</dd>
