@@ -157,8 +157,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       let from = 0;
       let to = s.timestampsMs.length;
       if (year !== undefined) {
-        const start = Date.UTC(year, 0, 1);
-        const end = Date.UTC(year + 1, 0, 1);
+        // a calendar year on the site's standard time, as the file page and run pages count years
+        const offsetMs = standardOffsetMinutes(findSite(deps, req.projectId!, file.siteId).timeZone) * 60_000;
+        const start = Date.UTC(year, 0, 1) - offsetMs;
+        const end = Date.UTC(year + 1, 0, 1) - offsetMs;
         from = s.timestampsMs.findIndex((t) => t >= start);
         if (from < 0) from = to;
         const after = s.timestampsMs.findIndex((t) => t >= end);

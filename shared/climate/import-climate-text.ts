@@ -54,7 +54,7 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
     counts: c,
     issues: ctx.log.issues,
   };
-  return { ok, series: ok ? series : null, report, mapping: ctx.mapping };
+  return { ok, series: ok ? series : null, report, mapping: ctx.mapping, hourLines: ok ? ctx.hourLines : null };
 }
 
 /**
@@ -72,6 +72,7 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
     stepMinutes: null,
     fileOffsetMs: 0,
     hourEnding: false,
+    hourLines: null,
   };
   try {
     return finish(ctx, runImport(text, options ?? {}, ctx));

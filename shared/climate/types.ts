@@ -133,6 +133,9 @@ export type IssueKind =
   | 'timestamps-rounded'
   | 'typical-year-restamped'
   | 'hour-ending-stamps'
+  | 'files-overlap'
+  | 'files-gap'
+  | 'files-layout-differs'
   | 'malformed-row'
   | 'other-humidity-ignored'
   | 'pressure-ignored'
@@ -155,7 +158,26 @@ export interface ImportIssue {
   column?: string;
   /** The cell or value concerned, as text. */
   value?: string;
+  /** In a set of several files: the file the issue is in (its line numbers count in that file). */
+  file?: string;
   message: string;
+}
+
+/** One file of a set uploaded together, as the set's report lists it. */
+export interface FileInSet {
+  fileName: string;
+  bytes: number;
+  sha256: string;
+  ok: boolean;
+  summary: string;
+  firstTimestamp: string | null;
+  lastTimestamp: string | null;
+  hours: number;
+  /** Lines of the file's first and last hours. */
+  firstLine: number | null;
+  lastLine: number | null;
+  errors: number;
+  warnings: number;
 }
 
 export interface ImportCounts {
@@ -204,6 +226,8 @@ export interface ImportReport {
   timeZone: string;
   counts: ImportCounts;
   issues: ImportIssue[];
+  /** Present when several files were imported together as one series: each file, in time order. */
+  files?: FileInSet[];
 }
 
 export interface ClimateSeries {
@@ -223,6 +247,8 @@ export interface ImportResult {
   series: ClimateSeries | null;
   report: ImportReport;
   mapping: DetectedMapping;
+  /** Line of the last row read into each hour of the series (0 for an hour no row fell in); null when refused. */
+  hourLines?: Int32Array | null;
 }
 
 export const HOUR_FLAG = { measured: 0, filled: 1, missing: 2 } as const;
