@@ -71,6 +71,21 @@ export const climateUploadQuerySchema = z.object({
     .pipe(mappingOverrideSchema.optional()),
 });
 
+/** At most this many files in one upload: thirty years of monthly files fit. */
+export const MAX_FILES_PER_UPLOAD = 400;
+
+/** The files of one upload (a multipart body), checked before any is read. */
+export const uploadedFilesSchema = z
+  .array(
+    z.object({
+      fileName: z.string().trim().min(1, 'every file needs a name').max(255, 'file names must be at most 255 characters'),
+      byteLength: z.number().int().min(1, 'a file of the set is empty'),
+    }),
+  )
+  .min(1, 'send at least one file')
+  .max(MAX_FILES_PER_UPLOAD, `send at most ${MAX_FILES_PER_UPLOAD} files at once`)
+  .refine((files) => new Set(files.map((f) => f.fileName)).size === files.length, 'two files of the set have the same name');
+
 export const siteInputSchema = z.object({
   name: z.string().trim().min(1, 'name must not be empty').max(120),
   latitude: z.number().min(-90).max(90).nullable().default(null),
