@@ -61,7 +61,7 @@ export function utcOffsetLabel(minutes: number): string {
 
 /** `UTC+05:30`, `UTC-07:00`, `UTC+00:00`: an offset written so fixedOffsetMs reads it back (ASCII minus). */
 export function fixedOffsetZone(minutes: number): string {
-  const abs = Math.abs(minutes);
+  const abs = Math.abs(Math.round(minutes));
   return `UTC${minutes < 0 ? '-' : '+'}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
 }
 

@@ -13,11 +13,14 @@ import { hourlyCsvInput, parseScenario, runScenario, writeHourlyCsv } from '../.
 
 const USAGE = `Usage: npm run --silent estimate -- --weather FILE.csv --scenario SCENARIO.json [options]
 
-  --weather FILE        hourly weather (canonical CSV or any layout the importer recognises)
+  --weather FILE        hourly weather: canonical CSV, any layout the importer recognises, or a
+                        published format recognised without flags (EPW, header-block CSV,
+                        fixed-width station records)
   --scenario FILE       scenario JSON (see sample-weather/scenarios/)
   --hourly FILE         also write one CSV row per hour (timestamps in UTC, file order)
   --elevation M         site elevation in metres (overrides the scenario's elevationM)
-  --utc-offset-minutes N  local standard time offset for months and hours of day (default 0)
+  --utc-offset-minutes N  local standard time offset for months and hours of day (default: the
+                        offset the file's header gives (EPW, station line), else 0)
 
 Column mapping, when recognition needs help (COL is a header text or a 1-based column number):
   --time COL                    one ISO 8601 time column
@@ -90,7 +93,11 @@ function main(argv: string[]): number {
     throw new UsageError(`${values.weather}: ${imported.report.summary}${lines.length ? `\n${lines.join('\n')}` : ''}`);
   }
   const series = imported.series;
-  const run = runScenario(parsed.scenario, series, { elevationM, utcOffsetMinutes });
+  const { report } = imported;
+  // months and hours of day in the file's own standard time when its header gives one (EPW, station line)
+  const headerOffsetHours = report.fileHeader?.utcOffsetHours ?? null;
+  const offsetMinutes = utcOffsetMinutes ?? (headerOffsetHours === null ? undefined : Math.round(headerOffsetHours * 60));
+  const run = runScenario(parsed.scenario, series, { elevationM, utcOffsetMinutes: offsetMinutes });
 
   if (values.hourly) {
     const fd = openOutput(values.hourly);
@@ -101,7 +108,6 @@ function main(argv: string[]): number {
     }
   }
 
-  const { report } = imported;
   const summary = {
     ...run.results,
     weather: {
@@ -116,6 +122,9 @@ function main(argv: string[]): number {
       missingHours: report.counts.missingHours,
       timeLayout: report.timeLayout,
       humidityKind: series.humidity.kind,
+      format: imported.mapping.format?.id ?? null,
+      fileHeader: report.fileHeader ?? null,
+      typicalYear: report.typicalYear ?? null,
     },
   };
   process.stdout.write(`${JSON.stringify(summary, null, 2)}\n`);

@@ -40,7 +40,8 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
    * a set's files are read in parallel with the same options and mapping, then joined in time order
    * (shared/climate/join-files.ts). Nothing is stored here. The body limit (413) covers the whole set.
    */
-  async function importUpload(req: express.Request, timeZone: string) {
+  async function importUpload(req: express.Request, site: { elevationM: number; timeZone: string }) {
+    const { timeZone } = site;
     const query = climateUploadQuerySchema.parse(req.query);
     const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
     const boundary = multipartBoundary(req.headers['content-type']);
@@ -58,7 +59,12 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
         `The ${parts.length > 1 ? `${parts.length} files have` : 'file has'} ${rows.toLocaleString('en')} lines; the limit is ${limits.rows.toLocaleString('en')}. Split ${parts.length > 1 ? 'the set' : 'it'} by period.`,
       );
     }
-    const options = { mapping: query.mapping, maxGapHours: query.maxGapHours, timeZone: importTimeZone(query.timeBasis, timeZone) };
+    const options = {
+      mapping: query.mapping,
+      maxGapHours: query.maxGapHours,
+      timeZone: importTimeZone(query.timeBasis, timeZone),
+      site: { elevationM: site.elevationM, timeZone },
+    };
     const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options })));
     if (parts.length === 1) return { query, parts, text: texts[0], result: results[0], original: parts[0] };
     const files = parts.map((p, i) => ({ fileName: p.fileName, bytes: p.bytes.byteLength, sha256: sha256(p.bytes), result: results[i] }));
@@ -98,7 +104,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files/preview', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { result, text } = await importUpload(req, site.timeZone);
+      const { result, text } = await importUpload(req, site);
       const s = result.series;
       const hours = s
         ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
@@ -122,7 +128,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { query, parts, result, original } = await importUpload(req, site.timeZone);
+      const { query, parts, result, original } = await importUpload(req, site);
       const bytes = original.bytes;
       if (!result.ok || !result.series) {
         recordRequestAudit(db, req, 'climate.rejected', original.fileName, { siteId, files: parts.length, summary: result.report.summary });

@@ -15,14 +15,17 @@ import { applyMappingOverride } from './apply-mapping';
 import { countLines, firstLines, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
 import { IssueLog } from './issue-log';
-import { isKnownTimeZone } from '../time-zone';
+import { fixedOffsetMs, fixedOffsetZone, isKnownTimeZone } from '../time-zone';
 import { buildMapping, reportMapping } from './mapping-report';
 import { sniffDecimalSeparator } from './number-cells';
 import { readRows } from './read-rows';
 import { recogniseColumns } from './recognise-columns';
+import { readPublishedFormat } from './formats/published-formats';
+import { checkHeaderAgainstSite } from './formats/site-check';
+import { readStationLine } from './formats/station-line';
 import { findLayout, isBlankRow, isCommentRow, spreadSample } from './table-layout';
 import { formatUtc } from './time-cells';
-import type { ClimateSeries, ImportOptions, ImportReport, ImportResult } from './types';
+import type { ClimateSeries, FileHeader, ImportOptions, ImportReport, ImportResult } from './types';
 
 export { DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-context';
 
@@ -33,7 +36,7 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
   const last = series && series.timestampsMs.length > 0 ? series.timestampsMs[series.timestampsMs.length - 1] : NaN;
   const years: number[] = [];
   if (ok && Number.isFinite(first)) {
-    // hour-ending stamps were moved to their hour's start in readRows
+    // hour-ending stamps were moved to their hour's start (hour-starts.ts)
     const shift = ctx.fileOffsetMs;
     for (let y = new Date(first + shift).getUTCFullYear(); y <= new Date(last + shift).getUTCFullYear(); y++) years.push(y);
   }
@@ -53,6 +56,8 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
     timeZone: ctx.timeZone,
     counts: c,
     issues: ctx.log.issues,
+    fileHeader: ctx.fileHeader ?? null,
+    typicalYear: ok ? (ctx.typicalYear ?? null) : null,
   };
   return { ok, series: ok ? series : null, report, mapping: ctx.mapping, hourLines: ok ? ctx.hourLines : null };
 }
@@ -75,10 +80,23 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
     hourLines: null,
   };
   try {
-    return finish(ctx, runImport(text, options ?? {}, ctx));
+    const series = runImport(text, options ?? {}, ctx);
+    checkHeaderAgainstSite(ctx, options?.site);
+    return finish(ctx, series);
   } catch (error) {
     ctx.log.error('unexpected-failure', `The importer failed unexpectedly (${error instanceof Error ? error.message : String(error)}); nothing was imported.`);
     return finish(ctx, null);
+  }
+}
+
+/** Keeps what a station line says and warns when the file's times are read at another offset than it gives. */
+function noteStationLine(ctx: Context, header: FileHeader | null): void {
+  ctx.fileHeader = header;
+  if (!header || header.utcOffsetHours === null) return;
+  const zone = fixedOffsetZone(Math.round(header.utcOffsetHours * 60));
+  const asked = ctx.timeZone === 'UTC' ? 0 : fixedOffsetMs(ctx.timeZone);
+  if (asked !== fixedOffsetMs(zone)) {
+    ctx.log.warning('format-header', `The station line (line ${header.line}) gives the file's times as ${zone}; they are read in ${ctx.timeZone} as asked. Typical-year files are usually in local standard time: if so, read the file in the site's standard time.`, { line: header.line });
   }
 }
 
@@ -123,6 +141,8 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('binary-input', 'The file looks binary (for example a spreadsheet workbook or an archive), not delimited text; save it as CSV.');
     return null;
   }
+  const published = readPublishedFormat(text, options, ctx);
+  if (published !== undefined) return published;
   const body = skipLeadingComments(text);
   if (body.text.trim() === '') {
     log.error('empty-input', `The file holds only comment lines (${body.commentLines}) and no data.`);
@@ -140,6 +160,7 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('empty-input', 'The file holds no rows.');
     return null;
   }
+  if (layout.headerIndex > 0) noteStationLine(ctx, readStationLine(parsed.row(0), parsed.lineOf(0)));
   // Columns are sized for every remaining row; readRows counts the ones that hold data.
   const dataRows = parsed.count - layout.dataStart;
   let anyData = false;

@@ -1,6 +1,6 @@
 /** What one import carries from step to step: the issue log, the counts and the mapping. */
 import type { IssueLog } from './issue-log';
-import type { DetectedMapping, ImportCounts } from './types';
+import type { DetectedMapping, FileHeader, ImportCounts, TypicalYearInfo } from './types';
 
 export const DEFAULT_MAX_GAP_HOURS = 6;
 /** 100 years of hours: anything longer is a garbled date rather than weather. */
@@ -61,6 +61,10 @@ export interface Context {
   hourEnding: boolean;
   /** Line of the last row in each hour of the series, once built. */
   hourLines: Int32Array | null;
+  /** What the file's own header says about its station, when it has one. */
+  fileHeader?: FileHeader | null;
+  /** Set when the rows were placed in one year as a typical year. */
+  typicalYear?: TypicalYearInfo | null;
 }
 
 export function round(value: number): string {

@@ -4,6 +4,7 @@ import type { RowColumns } from './hourly-grid';
 import { toHourlySeries } from './hourly-series';
 import { percent, REJECT_SHARE, round, type Context } from './import-context';
 import { utcOffsetLabel } from '../time-zone';
+import { moveHourEndingToStart } from './hour-starts';
 import { createLocalToUtc, type LocalToUtc } from './local-time';
 import { classifyUnreadableCell, parseNumberCell } from './number-cells';
 import { describeYmdh, unitOf } from './recognise-columns';
@@ -13,7 +14,6 @@ import {
   formatUtc,
   lastParse,
   MS_PER_DAY,
-  MS_PER_HOUR,
   MS_PER_MINUTE,
   parseDateCell,
   parseDateTimeCell,
@@ -221,19 +221,7 @@ export function readRows(
   }
 
   ctx.hourEnding = (time.layout === 'ymdh' && time.hourConvention === 'ending-1-24') || (time.layout === 'date-time' && hour24 && !hourZero);
-  if (ctx.hourEnding && rows.count > 0) {
-    // Tramontane stores an hour by the instant it starts (shared/time-zone.ts): a stamp marking the end of its
-    // hour moves back one hour, so hour 24 of 31 December stays in its year and no phantom hour opens the next.
-    for (let i = 0; i < rows.count; i++) {
-      rows.timeMs[i] -= MS_PER_HOUR;
-      localTimes[i] -= MS_PER_HOUR;
-    }
-    log.info(
-      'hour-ending-stamps',
-      `Stamps mark the end of their hour (hour 1–24): each hour is stored by its start, one hour earlier, so the row stamped ${formatUtc(localTimes[0] + MS_PER_HOUR).slice(0, 16).replace('T', ' ')} is the hour from ${formatUtc(localTimes[0]).slice(11, 16)} and a year of such rows stays in its year.`,
-      { line: rows.line[0] },
-    );
-  }
+  moveHourEndingToStart(rows.timeMs, localTimes, rows.count, rows.line[0], ctx);
   checkRejectShares(dry, hum, pres, rows, ctx);
   if (pres && ctx.mapping.pressure === null) rows.pressurePa = null;
   const typical = detectTypicalYear(localTimes, rows.count);

@@ -60,7 +60,47 @@ export type TimeLayout =
 
 export type TimeMapping = TimeLayout & { confidence: number; description: string };
 
+/** Published weather formats read by their own readers (shared/climate/formats/), recognised without flags. */
+export type PublishedFormatId = 'epw' | 'header-block-csv' | 'fixed-width-station';
+
+/** A published format as recognised: its name and the conventions it is read with, in words. */
+export interface RecognisedFormat {
+  id: PublishedFormatId;
+  name: string;
+  conventions: string[];
+}
+
+/**
+ * What a file's own header says about where it was measured; every field null when not given.
+ * Offered to pre-fill a new site and checked against the chosen one.
+ */
+export interface FileHeader {
+  /** 1-based line the values come from (the first such line). */
+  line: number;
+  name: string | null;
+  region: string | null;
+  country: string | null;
+  source: string | null;
+  stationId: string | null;
+  /** Decimal degrees, north positive. */
+  latitude: number | null;
+  /** Decimal degrees, east positive. */
+  longitude: number | null;
+  elevationM: number | null;
+  /** Offset of the file's local standard time from UTC, hours (east positive). */
+  utcOffsetHours: number | null;
+}
+
+/** A typical year placed in one calendar year: the year used and the year each month came from. */
+export interface TypicalYearInfo {
+  year: number;
+  /** Source year of January…December (index 0–11); null for a month with no rows. */
+  sourceYearByMonth: (number | null)[];
+}
+
 export interface DetectedMapping {
+  /** Set when the file is one of the published formats; its columns are then fixed by the format. */
+  format?: RecognisedFormat | null;
   delimiter: ',' | ';' | '\t';
   decimalSeparator: '.' | ',';
   /** 1-based line of the header row, or null when the file has none. */
@@ -105,6 +145,11 @@ export interface ImportOptions {
    * or a fixed offset such as 'UTC-07:00' for files in local standard time. Default 'UTC'.
    */
   timeZone?: string;
+  /**
+   * The site the file is for: what the file's header says (elevation, UTC offset) is checked against it,
+   * with a warning when they disagree.
+   */
+  site?: { elevationM: number; timeZone: string };
 }
 
 export type IssueKind =
@@ -145,7 +190,12 @@ export type IssueKind =
   | 'span-too-long'
   | 'too-many-rejected'
   | 'too-little-data'
-  | 'invalid-option';
+  | 'invalid-option'
+  | 'format-recognised'
+  | 'format-header'
+  | 'header-site-mismatch'
+  | 'pressure-from-elevation'
+  | 'legend-skipped';
 
 export type IssueSeverity = 'error' | 'warning' | 'info';
 
@@ -228,6 +278,10 @@ export interface ImportReport {
   issues: ImportIssue[];
   /** Present when several files were imported together as one series: each file, in time order. */
   files?: FileInSet[];
+  /** What the file's header says about its station (published formats and station lines); absent or null when nothing. */
+  fileHeader?: FileHeader | null;
+  /** Set when the file was read as a typical year: the year it was placed in and each month's source year. */
+  typicalYear?: TypicalYearInfo | null;
 }
 
 export interface ClimateSeries {

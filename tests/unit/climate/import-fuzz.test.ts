@@ -3,37 +3,9 @@
  * the series keeps its invariants (strictly hourly, flags consistent with the values).
  */
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
-import { decodeClimateBytes, importClimateText, type ImportResult } from '../../../shared/climate';
-
-function checkResult(result: ImportResult): void {
-  expect(typeof result.ok).toBe('boolean');
-  expect(result.report.ok).toBe(result.ok);
-  expect(typeof result.report.summary).toBe('string');
-  // the report and mapping travel as JSON
-  expect(JSON.parse(JSON.stringify(result.report))).toEqual(result.report);
-  // a crash inside the importer would show as this kind: it must not happen on any input
-  expect(result.report.issues.filter((i) => i.kind === 'unexpected-failure')).toEqual([]);
-  for (const issue of result.report.issues) expect(issue.message.length).toBeGreaterThan(0);
-  if (!result.ok) {
-    expect(result.series).toBeNull();
-    expect(result.report.issues.some((i) => i.severity === 'error')).toBe(true);
-    return;
-  }
-  const s = result.series!;
-  const n = s.timestampsMs.length;
-  expect(n).toBeGreaterThan(0);
-  expect(s.dryBulbC.length).toBe(n);
-  expect(s.humidity.values.length).toBe(n);
-  expect(s.flags.length).toBe(n);
-  for (let h = 1; h < n; h++) expect(s.timestampsMs[h] - s.timestampsMs[h - 1]).toBe(3_600_000);
-  for (let h = 0; h < n; h++) {
-    const present = Number.isFinite(s.dryBulbC[h]) && Number.isFinite(s.humidity.values[h]);
-    expect(present).toBe(s.flags[h] !== 2);
-  }
-  expect(s.flags[0]).toBe(0);
-  expect(s.flags[n - 1]).toBe(0);
-}
+import { describe, it } from 'vitest';
+import { decodeClimateBytes, importClimateText } from '../../../shared/climate';
+import { checkResult } from '../../support/climate-invariants';
 
 const cell = fc.oneof(
   fc.constantFrom('', 'NA', '-', '"', '""', '"a,b"', '24:00', '2021-02-29T00:00Z', '9999', '-0', '1e400', '\u0000', '°C', 'Temp (F)'),
@@ -116,7 +88,7 @@ describe('importClimateText never throws', () => {
       checkResult(importClimateText(value as string));
       checkResult(importClimateText('timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:00Z,1,50\n', value as never));
       checkResult(
-        importClimateText('timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:00Z,1,50\n', { mapping: value as never, maxGapHours: value as never, timeZone: value as never }),
+        importClimateText('timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:00Z,1,50\n', { mapping: value as never, maxGapHours: value as never, timeZone: value as never, site: value as never }),
       );
     }
   });
