@@ -48,7 +48,7 @@ export function FileStep({
         }}
       >
         <div className="space-y-1">
-          <label htmlFor={`${ids}-file`} className="block text-sm font-medium">File or files</label>
+          <label htmlFor={`${ids}-file`} className="block text-sm font-medium">File</label>
           <input
             id={`${ids}-file`}
             type="file"

@@ -26,7 +26,7 @@ export function RunInputs({ run }: { run: RunRecord }) {
           ))}
         </tbody>
       </table>
-      <dl className="grid h-min grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-xs">
+      <dl className="grid h-min grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-xs" data-testid="run-climate">
         <dt className="text-ink-soft">Climate file</dt>
         <dd>{c.name}</dd>
         <dt className="text-ink-soft">Site</dt>
