@@ -1,6 +1,7 @@
 import type { FileInSet, ImportIssue, ImportReport } from '../../../../shared/climate/types';
 import { csvRow } from '../../../../shared/csv';
 import { Notice } from '@/components/ui/notice';
+import { wallClockReader, wallClockText } from '../../../../shared/time-zone';
 import { formatBytes } from './progress-bar';
 
 const severityStyle: Record<ImportIssue['severity'], string> = {
@@ -51,7 +52,7 @@ export function ValidationReport({ report }: { report: ImportReport }) {
           </div>
         ))}
       </dl>
-      {report.files && <FilesOfSet files={report.files} />}
+      {report.files && <FilesOfSet files={report.files} timeZone={report.timeZone} />}
       {report.issues.length > 0 ? (
         <div className="overflow-x-auto">
           <table className="w-full text-left text-xs">
@@ -94,15 +95,17 @@ export function ValidationReport({ report }: { report: ImportReport }) {
   );
 }
 
-const utcMinutes = (iso: string | null) => (iso ? `${iso.slice(0, 16).replace('T', ' ')}` : '–');
-
 /** Each file of a set read as one climate file, in time order: what it held and what was found in it. */
-function FilesOfSet({ files }: { files: FileInSet[] }) {
+function FilesOfSet({ files, timeZone }: { files: FileInSet[]; timeZone: string }) {
+  // hours on the clock the files were read in (the site's), as the files themselves write them
+  const clock = wallClockReader(timeZone);
+  const local = (iso: string | null) => (iso ? wallClockText(clock(Date.parse(iso))) : '–');
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-left text-xs" data-testid="files-of-set">
         <caption className="pb-1 text-left text-sm text-ink-soft">
-          {files.length} files read as one climate file, in time order (times in UTC, each hour by its start; lines as in each file).
+          {files.length} files read as one climate file, in time order (hours by their start, on the clock the files were read in, {timeZone}; lines as in each
+          file).
         </caption>
         <thead>
           <tr className="border-b border-rule text-ink-soft">
@@ -120,8 +123,8 @@ function FilesOfSet({ files }: { files: FileInSet[] }) {
             <tr key={f.fileName} className="border-b border-rule/60 align-top">
               <td className="num py-0.5 pr-2 whitespace-nowrap">{f.fileName}</td>
               <td className="num pr-2 whitespace-nowrap">{formatBytes(f.bytes)}</td>
-              <td className="num pr-2 whitespace-nowrap">{utcMinutes(f.firstTimestamp)}</td>
-              <td className="num pr-2 whitespace-nowrap">{utcMinutes(f.lastTimestamp)}</td>
+              <td className="num pr-2 whitespace-nowrap">{local(f.firstTimestamp)}</td>
+              <td className="num pr-2 whitespace-nowrap">{local(f.lastTimestamp)}</td>
               <td className="num pr-2 text-right">{f.hours.toLocaleString('en')}</td>
               <td className="num pr-2 whitespace-nowrap">{f.firstLine !== null && f.lastLine !== null ? `${f.firstLine}–${f.lastLine}` : '–'}</td>
               <td className={f.ok ? (f.warnings > 0 ? 'text-signal-warn' : 'text-ink-soft') : 'text-signal-bad'}>
