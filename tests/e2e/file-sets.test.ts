@@ -136,6 +136,14 @@ describe('weather files for a site on a fixed UTC offset', () => {
     expect(years.filter((y) => /^\d{4}/.test(y.trim())).map((y) => y.trim().slice(0, 4))).toEqual(['2021', '2022', '2023']);
     expect(years.join(' ')).not.toContain('partial');
     await h.shot('file-sets-run-page-si');
+    // the report gives the same period on the site's standard time
+    const runUrl = page.url();
+    await page.goto(`${runUrl}/report`);
+    await expect.poll(() => page.getByTestId('report-title').isVisible(), { timeout: 20_000 }).toBe(true);
+    expect(await page.locator('section[aria-labelledby="job-title"]').innerText()).toContain('From 2021-01-01 to 2023-12-31 (site standard time)');
+    expect(await page.getByTestId('report-years').innerText()).not.toContain('2024');
+    await h.shot('file-sets-report-page-si');
+    await page.goto(runUrl);
     await h.useUnits('IP');
     await page.reload();
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('done');
@@ -146,5 +154,28 @@ describe('weather files for a site on a fixed UTC offset', () => {
     await page.getByRole('button', { name: 'Continue to the report' }).click();
     await page.getByTestId('files-of-set').waitFor();
     await h.shot('file-sets-report-ip');
+  });
+
+  it('marks the typical-year EPW run’s partial year in the report as the run page does', { timeout: 120_000 }, async () => {
+    const page = h.page;
+    const { climateFiles } = await h.api<{ climateFiles: { id: number; name: string }[] }>(engineer, 'GET', `/projects/${projectId}/climate-files`);
+    const epwFile = climateFiles.find((f) => f.name === 'quellmoor-typical')!;
+    const { scenarios } = await h.api<{ scenarios: { id: number }[] }>(engineer, 'GET', `/projects/${projectId}/scenarios`);
+    const { runs } = await h.api<{ runs: { id: number }[] }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/runs`,
+      JSON.stringify({ scenarioIds: [scenarios[0].id], climateFileIds: [epwFile.id] }),
+    );
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runs[0].id}`);
+    await expect.poll(() => page.getByTestId('run-status').innerText(), { timeout: 60_000 }).toBe('done');
+    // 72 hours of the typical year 2001 (8,760 in the calendar year)
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runs[0].id}/report`);
+    await expect.poll(() => page.getByTestId('report-years').isVisible(), { timeout: 20_000 }).toBe(true);
+    expect(await page.getByTestId('report-years').innerText()).toContain('partial · left out');
+    expect(await page.getByTestId('report-partial-years').innerText()).toBe(
+      "Left out as partial (more than a day short of the calendar year's hours): 2001 (72 of 8,760 h).",
+    );
+    await h.shot('file-sets-report-partial-ip');
   });
 });
