@@ -70,9 +70,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     const files = parts.map((p, i) => ({ fileName: p.fileName, bytes: p.bytes.byteLength, sha256: sha256(p.bytes), result: results[i] }));
     const result = joinClimateFiles(files, query.maxGapHours);
     const setName = query.name ?? defaultSetName(result.report.files.map((f) => f.fileName));
-    // The originals of a set are kept as one POSIX tar archive, each file byte for byte, in time order.
+    // The originals of a set are kept as one POSIX tar archive, each file byte for byte, in time order; entries carry
+    // no upload time (mtime 0), so the same set always gives the same archive and the same SHA-256.
     const inTimeOrder = result.report.files.map((f) => parts.find((p) => p.fileName === f.fileName)!);
-    const original = { fileName: `${setName}.tar`, bytes: tarArchive(inTimeOrder, Date.now()) };
+    const original = { fileName: `${setName}.tar`, bytes: tarArchive(inTimeOrder, 0) };
     return { query, parts, text: texts[parts.indexOf(inTimeOrder[0])], result, original };
   }
 
