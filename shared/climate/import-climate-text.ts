@@ -15,17 +15,17 @@ import { applyMappingOverride } from './apply-mapping';
 import { countLines, firstLines, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
 import { IssueLog } from './issue-log';
-import { fixedOffsetMs, fixedOffsetZone, isKnownTimeZone } from '../time-zone';
+import { isKnownTimeZone } from '../time-zone';
 import { buildMapping, reportMapping } from './mapping-report';
 import { sniffDecimalSeparator } from './number-cells';
 import { readRows } from './read-rows';
 import { recogniseColumns } from './recognise-columns';
 import { readPublishedFormat } from './formats/published-formats';
 import { checkHeaderAgainstSite } from './formats/site-check';
-import { readStationLine } from './formats/station-line';
+import { noteStationLine, readStationLine } from './formats/station-line';
 import { findLayout, isBlankRow, isCommentRow, spreadSample } from './table-layout';
 import { formatUtc } from './time-cells';
-import type { ClimateSeries, FileHeader, ImportOptions, ImportReport, ImportResult } from './types';
+import type { ClimateSeries, ImportOptions, ImportReport, ImportResult } from './types';
 
 export { DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-context';
 
@@ -86,17 +86,6 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
   } catch (error) {
     ctx.log.error('unexpected-failure', `The importer failed unexpectedly (${error instanceof Error ? error.message : String(error)}); nothing was imported.`);
     return finish(ctx, null);
-  }
-}
-
-/** Keeps what a station line says and warns when the file's times are read at another offset than it gives. */
-function noteStationLine(ctx: Context, header: FileHeader | null): void {
-  ctx.fileHeader = header;
-  if (!header || header.utcOffsetHours === null) return;
-  const zone = fixedOffsetZone(Math.round(header.utcOffsetHours * 60));
-  const asked = ctx.timeZone === 'UTC' ? 0 : fixedOffsetMs(ctx.timeZone);
-  if (asked !== fixedOffsetMs(zone)) {
-    ctx.log.warning('format-header', `The station line (line ${header.line}) gives the file's times as ${zone}; they are read in ${ctx.timeZone} as asked. Typical-year files are usually in local standard time: if so, read the file in the site's standard time.`, { line: header.line });
   }
 }
 

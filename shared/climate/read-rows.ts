@@ -21,7 +21,7 @@ import {
   parseTimeCell,
 } from './time-cells';
 import type { ClimateSeries, HumidityQuantity, QuantityAssignment, TimeMapping } from './types';
-import { detectTypicalYear, intoYear } from './typical-year';
+import { detectTypicalYear, intoYear, sourceYearByMonth } from './typical-year';
 import { conversionToSi, type AffineConversion } from './units';
 import { checkHumidity, DRY_BULB_MAX_C, DRY_BULB_MIN_C, humidityCheck, PRESSURE_MAX_PA, PRESSURE_MIN_PA } from './value-limits';
 
@@ -228,6 +228,8 @@ export function readRows(
   if (typical) {
     // same offset as read, so a zone's daylight saving is not re-applied in the new year
     for (let i = 0; i < rows.count; i++) rows.timeMs[i] = intoYear(localTimes[i], typical.year) - (localTimes[i] - rows.timeMs[i]);
+    // local times already stand at their hour's start (moveHourEndingToStart above)
+    ctx.typicalYear = { year: typical.year, sourceYearByMonth: sourceYearByMonth(localTimes, rows.count, false) };
     const from = typical.sourceYears[0];
     const to = typical.sourceYears[typical.sourceYears.length - 1];
     log.warning(

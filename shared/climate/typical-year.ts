@@ -67,3 +67,22 @@ export function intoYear(localMs: number, year: number): number {
   const { month, day } = civilFromDays(days);
   return daysFromCivil(year, month, day) * MS_PER_DAY + (localMs - days * MS_PER_DAY);
 }
+
+/**
+ * The year each month's rows come from (January first; null for a month with no rows; the most
+ * frequent year where a month has rows from several), for local wall times (ms as if UTC).
+ * `hourEnding` counts a stamp in the hour it ends (24:00 on 31 January is still January).
+ */
+export function sourceYearByMonth(localMs: Float64Array, count: number, hourEnding: boolean): (number | null)[] {
+  const tally = Array.from({ length: 12 }, () => new Map<number, number>());
+  const shift = hourEnding ? 1 : 0;
+  for (let i = 0; i < count; i++) {
+    const { year, month } = civilFromDays(Math.floor((localMs[i] - shift) / MS_PER_DAY));
+    tally[month - 1].set(year, (tally[month - 1].get(year) ?? 0) + 1);
+  }
+  return tally.map((years) => {
+    let best: number | null = null;
+    for (const [year, n] of years) if (best === null || n > (years.get(best) ?? 0)) best = year;
+    return best;
+  });
+}

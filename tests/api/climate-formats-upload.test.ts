@@ -80,27 +80,42 @@ describe('published formats through the API, without flags', () => {
   });
 });
 
+/** Posts a body and checks the one promise: 201 with the file, series and original all stored, or a 4xx that says why with nothing stored. */
+async function answersSensibly(name: string, body: Buffer): Promise<boolean> {
+  const before = stored();
+  const res = await post(siteId, name, body);
+  const after = stored();
+  if (res.status === 201) {
+    expect(after).toEqual({ files: before.files + 1, series: before.series + 1, originals: before.originals + 1 });
+    return true;
+  }
+  expect(res.status).toBeGreaterThanOrEqual(400);
+  expect(res.status).toBeLessThan(500);
+  expect(res.body.error.message.length).toBeGreaterThan(0);
+  expect(after).toEqual(before);
+  return false;
+}
+
 describe('damaged published-format files through the upload route', () => {
   it('answers 201 or a 4xx with a message, never a 500, and stores all of a file or none of it', async () => {
     let storedCount = 0;
     await fc.assert(
       fc.asyncProperty(fc.constantFrom(...FILES), fc.array(damage, { minLength: 1, maxLength: 6 }), async ({ name }, damages) => {
-        const before = stored();
-        const res = await post(siteId, name, Buffer.from(damaged(fixture(name).toString('utf8'), damages)));
-        const after = stored();
-        if (res.status === 201) {
-          storedCount++;
-          expect(after).toEqual({ files: before.files + 1, series: before.series + 1, originals: before.originals + 1 });
-          return;
-        }
-        expect(res.status).toBeGreaterThanOrEqual(400);
-        expect(res.status).toBeLessThan(500);
-        expect(res.body.error.message.length).toBeGreaterThan(0);
-        expect(after).toEqual(before);
+        if (await answersSensibly(name, Buffer.from(damaged(fixture(name).toString('utf8'), damages)))) storedCount++;
       }),
       { numRuns: 60 },
     );
     // both branches run: most lightly damaged files are still good enough to keep
     expect(storedCount).toBeGreaterThan(10);
+  }, 120_000);
+
+  it('answers random bytes behind each format’s opening lines the same way', async () => {
+    const openings = FILES.map(({ name }) => fixture(name).subarray(0, 900));
+    await fc.assert(
+      fc.asyncProperty(fc.constantFrom(...openings), fc.uint8Array({ maxLength: 3000 }), async (opening, bytes) => {
+        await answersSensibly('random.epw', Buffer.concat([opening, Buffer.from(bytes)]));
+      }),
+      { numRuns: 40 },
+    );
   }, 120_000);
 });

@@ -6,6 +6,7 @@
  */
 import Papa from 'papaparse';
 import { importClimateText } from '../../shared/climate';
+import { stationRecordsText, typicalYearEpwText } from './published-formats';
 import type { BenchSuite } from './suite';
 
 const YEARS = 30;
@@ -67,6 +68,17 @@ async function run(context: { log: (line: string) => void }): Promise<Record<str
   const localMs = bestOf(5, () => {
     ok &&= importClimateText(local, { timeZone: 'Etc/GMT-1' }).ok;
   });
+  // published formats: a typical-year EPW (target < 150 ms) and 30 years of fixed-width station records as one text
+  const epw = typicalYearEpwText();
+  importClimateText(epw);
+  const epwMs = bestOf(5, () => {
+    ok &&= importClimateText(epw).ok;
+  });
+  context.log(`climate-import: typical-year EPW (8760 records) in ${epwMs.toFixed(0)} ms (target < 150 ms)`);
+  const station = stationRecordsText(1991, 1991 + YEARS - 1);
+  const stationMs = bestOf(3, () => {
+    ok &&= importClimateText(station).ok;
+  });
   // process peak so far: the generated texts plus our imports (maxRSS only grows, so read it before the reference runs)
   const peakRssMb = process.resourceUsage().maxRSS / 1024;
   naiveImport(text);
@@ -84,6 +96,10 @@ async function run(context: { log: (line: string) => void }): Promise<Record<str
     'climate-import.naiveMs': Math.round(naiveMs),
     'climate-import.speedupVsNaive': Math.round((naiveMs / canonicalMs) * 100) / 100,
     'climate-import.peakRssMb': Math.round(peakRssMb),
+    'climate-import.epwTypicalYearMs': Math.round(epwMs),
+    'climate-import.epwUnder150Ms': epwMs < 150 ? 'yes' : 'NO',
+    'climate-import.fixedWidth30YearsMs': Math.round(stationMs),
+    'climate-import.fixedWidthOverCanonical': Math.round((stationMs / canonicalMs) * 100) / 100,
   };
 }
 

@@ -167,10 +167,19 @@ export class FormatRows {
   }
 
   private value(r: ValueReader, cell: string | undefined, line: number): number {
+    const raw = cell === undefined ? NaN : parseNumberCell(cell, false);
+    if (raw === raw && !r.missing.includes(raw)) {
+      const si = raw * r.scale + r.offset;
+      if (si >= r.min && si <= r.max) return si;
+    }
+    return this.oddValue(r, cell, raw, line);
+  }
+
+  /** A cell that is missing, unreadable or out of range: counted and reported (the slow path). */
+  private oddValue(r: ValueReader, cell: string | undefined, raw: number, line: number): number {
     const { log, counts } = this.ctx;
     const header = r.assignment.header;
     const text = (cell ?? '').trim();
-    let raw = cell === undefined ? NaN : parseNumberCell(cell, false);
     // the importer's own sentinels (−9999 …) read as NaN: look at the number written
     const written = raw === raw ? raw : text === '' ? NaN : Number(text);
     if (written === written && r.missing.includes(written)) {
@@ -188,14 +197,10 @@ export class FormatRows {
       }
       return NaN;
     }
-    raw = raw * r.scale + r.offset;
-    if (raw < r.min || raw > r.max) {
-      r.bad++;
-      counts.impossibleValues++;
-      log.warning('impossible-value', `${r.assignment.quantity} ${text} in column "${header}" is outside the possible range; treated as missing.`, { line, column: header, value: text });
-      return NaN;
-    }
-    return raw;
+    r.bad++;
+    counts.impossibleValues++;
+    log.warning('impossible-value', `${r.assignment.quantity} ${text} in column "${header}" is outside the possible range; treated as missing.`, { line, column: header, value: text });
+    return NaN;
   }
 
   /** Adds one row: its wall time (ms as if UTC), its UTC instant and its cells. */
@@ -307,12 +312,23 @@ function reportTypicalYear(ctx: Context, year: number, years: number[], count: n
   );
 }
 
-/** Whole number in [min, max] from a cell (digits only, optional sign), else NaN. */
+/** Whole number in [min, max] from a cell (1–6 digits, optional sign, spaces around), else NaN. */
 export function integerIn(cell: string | undefined, min: number, max: number): number {
   if (cell === undefined) return NaN;
-  const text = cell.trim();
-  if (!/^[+-]?\d{1,6}$/.test(text)) return NaN;
-  const n = Number(text);
+  let i = 0;
+  let end = cell.length;
+  while (i < end && cell.charCodeAt(i) === 32) i++;
+  while (end > i && (cell.charCodeAt(end - 1) === 32 || cell.charCodeAt(end - 1) === 13)) end--;
+  const negative = cell.charCodeAt(i) === 45;
+  if (negative || cell.charCodeAt(i) === 43) i++;
+  if (end - i < 1 || end - i > 6) return NaN;
+  let n = 0;
+  for (; i < end; i++) {
+    const d = cell.charCodeAt(i) - 48;
+    if (d < 0 || d > 9) return NaN;
+    n = n * 10 + d;
+  }
+  if (negative) n = -n;
   return n >= min && n <= max ? n : NaN;
 }
 

@@ -42,3 +42,23 @@ export function checkHeaderAgainstSite(ctx: Context, site: { elevationM: number;
   if (!site || typeof site !== 'object' || typeof site.timeZone !== 'string' || typeof site.elevationM !== 'number' || !ctx.fileHeader) return;
   for (const m of headerMismatches(ctx.fileHeader, site)) ctx.log.warning('header-site-mismatch', m.message, { line: ctx.fileHeader.line, column: m.field });
 }
+
+/** Values a new site can start from, as far as the header gives them (the time zone as a fixed offset of its standard time). */
+export interface SitePrefill {
+  name?: string;
+  latitude?: number;
+  longitude?: number;
+  elevationM?: number;
+  timeZone?: string;
+}
+
+export function sitePrefillFromHeader(header: FileHeader): SitePrefill {
+  const prefill: SitePrefill = {};
+  const name = [header.name, header.region].filter((part): part is string => !!part && part !== '-').join(', ');
+  if (name) prefill.name = name.slice(0, 120);
+  if (header.latitude !== null) prefill.latitude = header.latitude;
+  if (header.longitude !== null) prefill.longitude = header.longitude;
+  if (header.elevationM !== null) prefill.elevationM = header.elevationM;
+  if (header.utcOffsetHours !== null) prefill.timeZone = fixedOffsetZone(Math.round(header.utcOffsetHours * 60));
+  return prefill;
+}

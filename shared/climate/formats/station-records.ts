@@ -51,17 +51,22 @@ export function looksLikeStationRecords(text: string): boolean {
   return lines.filter((l) => RECORD.test(l)).length * 2 > lines.length && RECORD.test(lines[0]);
 }
 
-/** Splits a line at runs of spaces and tabs into `cells` (reused), returns the count. */
-function splitWhitespace(line: string, cells: string[]): number {
+/**
+ * Splits a line at runs of spaces and tabs into `cells` (reused), returns the number of fields;
+ * only the first `keep` fields are cut out as strings (the rest are only counted).
+ */
+function splitWhitespace(line: string, cells: string[], keep: number): number {
   let k = 0;
   let i = 0;
   const n = line.length;
   while (i < n) {
-    while (i < n && (line.charCodeAt(i) === 32 || line.charCodeAt(i) === 9)) i++;
+    let c = line.charCodeAt(i);
+    while (i < n && (c === 32 || c === 9 || c === 13)) c = line.charCodeAt(++i);
     if (i >= n) break;
     const start = i;
-    while (i < n && line.charCodeAt(i) !== 32 && line.charCodeAt(i) !== 9) i++;
-    cells[k++] = line.substring(start, i);
+    while (i < n && c !== 32 && c !== 9 && c !== 13) c = line.charCodeAt(++i);
+    cells[k] = k < keep ? line.substring(start, i) : '';
+    k++;
   }
   cells.length = k;
   return k;
@@ -86,8 +91,9 @@ export function readStationRecords(text: string, override: Partial<ColumnMapping
   for (let at = text.indexOf('\n'); at !== -1; at = text.indexOf('\n', at + 1)) capacity++;
   const rows = new FormatRows(capacity, COLUMNS, recognition, ctx);
   const cells: string[] = [];
+  const keep = Math.max(4, rows.neededFields());
   forEachLine(text, 0, 1, (line, n) => {
-    const count = splitWhitespace(line, cells);
+    const count = splitWhitespace(line, cells, keep);
     if (count === 0 || cells[0].startsWith('#')) return;
     if (count !== FIELDS) {
       rejectRow(ctx, n, `Line ${n}: ${count} field${count === 1 ? '' : 's'}, expected ${FIELDS} (year month day hour temperature dew-point sea-level-pressure wind-direction wind-speed sky-cover precipitation-1h precipitation-6h); the line is left out.`, {

@@ -26,7 +26,7 @@ export function ClimateFileUploadRoute() {
           projectId={projectId}
           sites={sites.data.sites}
           initialSiteId={Number(search.get('siteId')) || undefined}
-          renderNewSite={(onCreated) => <SiteForm projectId={projectId} onCreated={(site) => onCreated(site.id)} />}
+          renderNewSite={(onCreated, prefill) => <SiteForm projectId={projectId} initial={prefill} onCreated={(site) => onCreated(site.id)} />}
           onStored={(fileId) => navigate(`/projects/${projectId}/climate-files/${fileId}`)}
         />
       )}

@@ -327,6 +327,8 @@ describe('typical-year files', () => {
     expect(iso(series!.timestampsMs[8759])).toBe('1998-12-31T23:00:00.000Z');
     expect(series!.dryBulbC[8759]).toBeCloseTo(12.24, 10);
     expect(report.years).toEqual([1998]);
+    // the year each month came from, kept for the climate-file page
+    expect(report.typicalYear).toEqual({ year: 1998, sourceYearByMonth: sourceYear });
   });
 
   it('leaves an ordinary year that crosses a new year alone', () => {

@@ -14,6 +14,7 @@ import { chartSeries } from '../lib/hours-series';
 import { formatBytes } from './progress-bar';
 import { DeleteClimateFile } from './delete-climate-file';
 import { DesignValues } from './design-values';
+import { FileFormatNote, FileOrigin } from './file-origin';
 import { MonthlyTable } from './monthly-table';
 import { ValidationReport } from './validation-report';
 import { Fact } from '@/components/ui/fact';
@@ -58,7 +59,7 @@ function Loaded({
   onDeleted: () => void;
 }) {
   const { unitSystem } = useUnitSystem();
-  const { climateFile: file, site, summary, report } = detail;
+  const { climateFile: file, site, summary, report, mapping } = detail;
   const hours = useClimateFileHours(projectId, fileId);
   const series = useMemo(() => (hours.data ? chartSeries(hours.data, site.elevationM) : null), [hours.data, site.elevationM]);
   const chartHours = useMemo(() => (series ? { dryBulbC: series.dryBulbC, humidityRatio: series.humidityRatio } : null), [series]);
@@ -114,6 +115,15 @@ function Loaded({
         <Fact label="Mean pressure" value={formatQuantity('pressure', unitSystem, summary.meanPressurePa)} note={file.hasPressure ? 'from the file' : `standard atmosphere at ${formatQuantity('elevation', unitSystem, site.elevationM)}`} />
         <Fact label="Site time" value={site.timeZone} note={`charts in the site's standard time (${utcOffsetLabel(offsetMinutes)})`} />
       </dl>
+
+      {(mapping.format || report.fileHeader || report.typicalYear) && (
+        <Panel title="Where the file comes from">
+          <div className="space-y-3">
+            <FileFormatNote mapping={mapping} />
+            <FileOrigin report={report} site={site} />
+          </div>
+        </Panel>
+      )}
 
       <div className="grid gap-5 xl:grid-cols-2">
         <MonthlyTable summary={summary} />

@@ -1,4 +1,5 @@
 import { useId, type ReactNode } from 'react';
+import type { SitePrefill } from '../../../../shared/climate/formats/site-check';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
@@ -9,7 +10,12 @@ export interface WizardSite {
   name: string;
   elevationM: number;
   timeZone: string;
+  latitude?: number | null;
+  longitude?: number | null;
 }
+
+/** The site form the route hands in; `prefill` starts a new site from a file header's values. */
+export type RenderNewSite = (onCreated: (siteId: number) => void, prefill?: SitePrefill) => ReactNode;
 
 /** Step 1: pick the site, or create one with the form the route hands in. */
 export function SiteStep({
@@ -26,7 +32,7 @@ export function SiteStep({
   setSiteId: (id: number) => void;
   creatingSite: boolean;
   setCreatingSite: (creating: boolean) => void;
-  renderNewSite: (onCreated: (siteId: number) => void) => ReactNode;
+  renderNewSite: RenderNewSite;
   onContinue: () => void;
 }) {
   const ids = useId();

@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useState, type ReactNode } from 'react';
+import { useState } from 'react';
 import type { ImportReport } from '../../../../shared/climate/types';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
@@ -13,7 +13,9 @@ import { MappingEditor } from './mapping-editor';
 import { PreviewTable } from './preview-table';
 import { FileStep } from './file-step';
 import { UploadProgressBar } from './progress-bar';
-import { SiteStep, type WizardSite } from './site-step';
+import { SiteStep, type RenderNewSite, type WizardSite } from './site-step';
+import { FileFormatNote, FileOrigin } from './file-origin';
+import { sitePrefillFromHeader } from '../../../../shared/climate/formats/site-check';
 import { ValidationReport } from './validation-report';
 import { button, quietButton } from './wizard-buttons';
 import type { TimeBasis } from '../../../../shared/schemas/climate-file';
@@ -46,7 +48,7 @@ export function UploadWizard({
   /** A site chosen before the wizard opened (from a site's page). */
   initialSiteId?: number;
   /** The form that creates a site; it calls back with the new site's id. */
-  renderNewSite: (onCreated: (siteId: number) => void) => ReactNode;
+  renderNewSite: RenderNewSite;
   onStored: (fileId: number) => void;
 }) {
   const queryClient = useQueryClient();
@@ -66,6 +68,7 @@ export function UploadWizard({
   const [readDraft, setReadDraft] = useState<string>('');
   const [error, setError] = useState<string | null>(null);
   const [rejected, setRejected] = useState<ImportReport | null>(null);
+  const [siteFromHeader, setSiteFromHeader] = useState(false);
   const site = sites.find((s) => s.id === siteId) ?? null;
   const busy = progress !== null;
 
@@ -84,13 +87,13 @@ export function UploadWizard({
     return e.message;
   }
 
-  async function read(mappingDraft: MappingDraft | null) {
-    if (files.length === 0 || !siteId) return;
+  async function read(mappingDraft: MappingDraft | null, forSiteId = siteId) {
+    if (files.length === 0 || !forSiteId) return;
     setError(null);
     setRejected(null);
     setProgress({ sentBytes: 0, totalBytes: uploadBytes(files), phase: 'sending' });
     try {
-      const result = await previewClimateFile(projectId, siteId, files, params(mappingDraft), setProgress);
+      const result = await previewClimateFile(projectId, forSiteId, files, params(mappingDraft), setProgress);
       setPreview(result);
       if (!mappingDraft) setFirstDetected(result.mapping);
       const next = mappingDraft ?? draftFromDetected(result.mapping);
@@ -179,6 +182,24 @@ export function UploadWizard({
 
       {step === 'mapping' && preview && draft && (
         <>
+          {(preview.mapping.format || preview.report.fileHeader || preview.report.typicalYear) && (
+            <Panel title="What the file says about itself">
+              <div className="space-y-3">
+                <FileFormatNote mapping={preview.mapping} />
+                <FileOrigin report={preview.report} site={site ?? undefined} onNewSite={() => setSiteFromHeader(!siteFromHeader)} newSiteOpen={siteFromHeader} />
+                {siteFromHeader && preview.report.fileHeader && (
+                  <div className="rounded border border-rule p-3">
+                    <h3 className="mb-2 text-sm font-semibold">New site from the file's header</h3>
+                    {renderNewSite((id) => {
+                      setSiteFromHeader(false);
+                      setSiteId(id);
+                      void read(draft, id);
+                    }, sitePrefillFromHeader(preview.report.fileHeader))}
+                  </div>
+                )}
+              </div>
+            </Panel>
+          )}
           <Panel title="How the columns were read">
             <p className="mb-2 text-sm text-ink-soft">
               Check each column and unit; change any that is wrong, then read the file again to see the effect below.

@@ -1,7 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useId, useMemo } from 'react';
+import { useId, useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
+import type { SitePrefill } from '../../../../shared/climate/formats/site-check';
 import { siteInputSchema } from '../../../../shared/schemas/climate-file';
 import { ApiError } from '@/lib/api-client';
 import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/quantity';
@@ -34,17 +35,31 @@ function siteFormSchema(system: UnitSystem) {
   });
 }
 
+/** The form's fields from prefill values (elevation in the person's units; blank where nothing is given). */
+function formValues(p: SitePrefill, system: UnitSystem) {
+  return {
+    name: p.name ?? '',
+    latitude: p.latitude === undefined ? '' : String(p.latitude),
+    longitude: p.longitude === undefined ? '' : String(p.longitude),
+    elevation: p.elevationM === undefined ? 0 : Math.round(toDisplay('elevation', system, p.elevationM) * 10) / 10,
+    timeZone: p.timeZone ?? 'UTC',
+  };
+}
+
 const inputClass = 'w-full rounded border border-rule bg-panel px-2 py-1.5 text-sm aria-[invalid=true]:border-signal-bad';
 
 /** Creates a site, or edits `site` when given; values are typed in the person's units. */
 export function SiteForm({
   projectId,
   site,
+  initial,
   onCreated,
   onCancel,
 }: {
   projectId: number;
   site?: Site;
+  /** Values a new site starts from (a weather file's header). */
+  initial?: SitePrefill;
   /** Called with the saved site, new or edited. */
   onCreated?: (site: Site) => void;
   onCancel?: () => void;
@@ -65,8 +80,24 @@ export function SiteForm({
           elevation: Math.round(toDisplay('elevation', unitSystem, site.elevationM) * 10) / 10,
           timeZone: site.timeZone,
         }
-      : { name: '', latitude: '', longitude: '', elevation: 0, timeZone: 'UTC' },
+      : formValues(initial ?? {}, unitSystem),
   });
+  const [fillNote, setFillNote] = useState<string | null>(null);
+
+  /** Fills the form from what a weather file's header says (its first 64 kB are read here, nothing is sent). */
+  async function fillFromFile(file: File) {
+    const { readFileHeaderOf } = await import('../lib/read-file-header');
+    const found = await readFileHeaderOf(file);
+    if (!found) {
+      setFillNote(`${file.name} has no header with station data (EPW, header-block CSV or a station line); nothing was filled.`);
+      return;
+    }
+    const values = formValues(found, unitSystem);
+    for (const key of Object.keys(values) as (keyof typeof values)[]) {
+      if (key in found || (key === 'elevation' && found.elevationM !== undefined)) form.setValue(key, values[key] as never, { shouldValidate: true });
+    }
+    setFillNote(`Filled from the header of ${file.name}: check each value before saving.`);
+  }
   const errors = form.formState.errors;
 
   const submit = form.handleSubmit(async (values) => {
@@ -97,6 +128,21 @@ export function SiteForm({
 
   return (
     <form onSubmit={submit} className="space-y-3" noValidate aria-label={site ? `Edit ${site.name}` : 'New site'}>
+      {!site && !initial && (
+        <div className="text-sm">
+          <label htmlFor={`${ids}-header-file`} className="block font-medium">Fill from a weather file's header (optional)</label>
+          <input
+            id={`${ids}-header-file`}
+            type="file"
+            className="mt-1 block text-xs"
+            onChange={(e) => {
+              const chosen = e.currentTarget.files?.[0];
+              if (chosen) void fillFromFile(chosen);
+            }}
+          />
+          <p className="text-xs text-ink-soft" role="status">{fillNote ?? 'EPW, header-block CSV or a CSV with a station line: name, position, elevation and UTC offset.'}</p>
+        </div>
+      )}
       <div className="grid gap-3 sm:grid-cols-2">
         {field('name', 'Site name', 'As the project calls it.', <input {...aria('name')} className={inputClass} {...form.register('name')} />)}
         {field(
