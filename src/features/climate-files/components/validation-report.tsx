@@ -37,7 +37,7 @@ export function ValidationReport({ report }: { report: ImportReport }) {
   )}`;
   return (
     <div className="space-y-3" data-testid="validation-report">
-      <Notice tone={report.ok ? (report.counts.missingHours || report.issues.some((i) => i.severity === 'warning') ? 'warn' : 'info') : 'bad'} title={report.ok ? 'The file can be stored' : 'The file cannot be stored as it is'}>
+      <Notice tone={report.ok ? (report.counts.missingHours || report.issues.some((i) => i.severity === 'warning') ? 'warn' : 'info') : 'bad'} title={report.files ? (report.ok ? `The ${report.files.length} files can be stored as one climate file` : 'The files cannot be stored as they are') : report.ok ? 'The file can be stored' : 'The file cannot be stored as it is'}>
         {report.summary}
         {report.timeLayout && <span className="block">Time: {report.timeLayout}.</span>}
         <span className="block">
