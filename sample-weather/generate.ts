@@ -12,7 +12,7 @@
 import { writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { wallClockReader } from '../shared/climate/local-time';
+import { wallClockReader } from '../shared/time-zone';
 import type { SampleSite } from './sample-site';
 import { seededRandom } from './seeded-random';
 

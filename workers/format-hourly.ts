@@ -7,6 +7,8 @@ export interface FormatHourlyInput {
   series: ScenarioSeries;
   /** The elevation the run used (its site's, as snapshotted); the scenario's own when absent. */
   elevationM?: number;
+  /** The site's standard-time offset the run used, minutes (for local_standard_time); 0 when absent. */
+  utcOffsetMinutes?: number;
   /** The run's stored per-hour outcome, used as it was rather than classified again. */
   modes: Uint8Array;
   mechanicalFraction: Float64Array;
@@ -25,13 +27,13 @@ const encoder = new TextEncoder();
  * climate series at the run's elevation, exactly as the run computed them (its first step, outdoorStates),
  * and written beside the stored modes — kept off the server's main thread.
  */
-export function formatHourly({ scenario, series, elevationM, modes, mechanicalFraction, humidified, format, about }: FormatHourlyInput): Uint8Array {
+export function formatHourly({ scenario, series, elevationM, utcOffsetMinutes, modes, mechanicalFraction, humidified, format, about }: FormatHourlyInput): Uint8Array {
   // A run's scenario is stored as it ran; one from engine 1.0.0 carries retired inputs, so it is migrated first
   // (only its elevation is used here).
   const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
   const { states } = outdoorStates(series, elevationM ?? parsed.scenario.elevationM);
-  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } });
+  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } }, utcOffsetMinutes ?? 0);
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];
   let length = 0;

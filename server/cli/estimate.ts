@@ -116,7 +116,7 @@ function main(argv: string[]): number {
   if (values.hourly) {
     const fd = openOutput(values.hourly);
     try {
-      writeHourlyCsv(hourlyCsvInput(series, run), (bytes) => writeAll(fd, bytes));
+      writeHourlyCsv(hourlyCsvInput(series, run, utcOffsetMinutes ?? 0), (bytes) => writeAll(fd, bytes));
     } finally {
       closeSync(fd);
     }

@@ -37,6 +37,7 @@ export async function hourlyFileOf(
     scenario: JSON.parse(run.scenarioJson),
     series,
     elevationM: climate.elevationM,
+    utcOffsetMinutes: climate.utcOffsetMinutes ?? 0,
     modes,
     mechanicalFraction,
     humidified,

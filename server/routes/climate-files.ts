@@ -1,13 +1,17 @@
 import express from 'express';
 import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { decodeClimateBytes, standardOffsetMinutes, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
+import { createHash } from 'node:crypto';
+import { decodeClimateBytes, joinClimateFiles, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
 import { csvCell } from '../../shared/csv';
-import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
+import { climateUploadQuerySchema, uploadedFilesSchema } from '../../shared/schemas/climate-file';
+import { fixedOffsetZone, standardOffsetMinutes } from '../../shared/time-zone';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
+import { multipartBoundary, readMultipartFiles } from '../climate/multipart';
 import { findClimateFile, loadClimateSeries, loadOriginal, saveClimateFile } from '../climate/store';
+import { tarArchive } from '../climate/tar-archive';
 import { climateFiles, sites } from '../db/schema';
 import { HttpError } from '../http-error';
 import { findSite } from './sites';
@@ -31,34 +35,47 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
   const limits = deps.uploadLimits ?? defaultUploadLimits;
   const rawUpload = express.raw({ type: () => true, limit: limits.bytes });
 
-  /** Reads the body as text and imports it on the pool; nothing is stored here. */
+  /**
+   * Reads the body — one raw file, or several files as multipart/form-data — and imports it on the pool:
+   * a set's files are read in parallel with the same options and mapping, then joined in time order
+   * (shared/climate/join-files.ts). Nothing is stored here. The body limit (413) covers the whole set.
+   */
   async function importUpload(req: express.Request, site: { elevationM: number; timeZone: string }) {
     const { timeZone } = site;
     const query = climateUploadQuerySchema.parse(req.query);
-    const bytes = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
-    if (bytes.byteLength === 0) {
+    const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
+    const boundary = multipartBoundary(req.headers['content-type']);
+    const parts = boundary ? readMultipartFiles(body, boundary) : [{ fileName: query.fileName, bytes: body }];
+    if (!boundary && body.byteLength === 0) {
       throw new HttpError(422, 'empty_file', 'The file is empty. Choose an hourly weather file (CSV or other delimited text).');
     }
-    const text = decodeClimateBytes(bytes);
-    const rows = countRows(text);
+    uploadedFilesSchema.parse(parts.map((p) => ({ fileName: p.fileName, byteLength: p.bytes.byteLength })));
+    const texts = parts.map((p) => decodeClimateBytes(p.bytes));
+    const rows = texts.reduce((sum, text) => sum + countRows(text), 0);
     if (rows > limits.rows) {
       throw new HttpError(
         413,
         'too_many_rows',
-        `The file has ${rows.toLocaleString('en')} lines; the limit is ${limits.rows.toLocaleString('en')}. Split it by period.`,
+        `The ${parts.length > 1 ? `${parts.length} files have` : 'file has'} ${rows.toLocaleString('en')} lines; the limit is ${limits.rows.toLocaleString('en')}. Split ${parts.length > 1 ? 'the set' : 'it'} by period.`,
       );
     }
-    const result: ImportResult = await pool.run('importClimate', {
-      text,
-      options: {
-        mapping: query.mapping,
-        maxGapHours: query.maxGapHours,
-        timeZone: importTimeZone(query.timeBasis, timeZone),
-        humidityOverIce: query.humidityOverIce,
-        site: { elevationM: site.elevationM, timeZone },
-      },
-    });
-    return { query, bytes, text, result };
+    const options = {
+      mapping: query.mapping,
+      maxGapHours: query.maxGapHours,
+      timeZone: importTimeZone(query.timeBasis, timeZone),
+      humidityOverIce: query.humidityOverIce,
+      site: { elevationM: site.elevationM, timeZone },
+    };
+    const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options })));
+    if (parts.length === 1) return { query, parts, text: texts[0], result: results[0], original: parts[0] };
+    const files = parts.map((p, i) => ({ fileName: p.fileName, bytes: p.bytes.byteLength, sha256: sha256(p.bytes), result: results[i] }));
+    const result = joinClimateFiles(files, query.maxGapHours);
+    const setName = query.name ?? defaultSetName(result.report.files.map((f) => f.fileName));
+    // The originals of a set are kept as one POSIX tar archive, each file byte for byte, in time order; entries carry
+    // no upload time (mtime 0), so the same set always gives the same archive and the same SHA-256.
+    const inTimeOrder = result.report.files.map((f) => parts.find((p) => p.fileName === f.fileName)!);
+    const original = { fileName: `${setName}.tar`, bytes: tarArchive(inTimeOrder, 0) };
+    return { query, parts, text: texts[parts.indexOf(inTimeOrder[0])], result, original };
   }
 
   function fileOr404(projectId: number, fileIdParam: unknown) {
@@ -113,9 +130,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { query, bytes, result } = await importUpload(req, site);
+      const { query, parts, result, original } = await importUpload(req, site);
+      const bytes = original.bytes;
       if (!result.ok || !result.series) {
-        recordRequestAudit(db, req, 'climate.rejected', query.fileName, { siteId, summary: result.report.summary });
+        recordRequestAudit(db, req, 'climate.rejected', original.fileName, { siteId, files: parts.length, summary: result.report.summary });
         throw new HttpError(422, 'import_rejected', result.report.summary, { report: result.report, mapping: result.mapping });
       }
       const series = result.series;
@@ -123,15 +141,16 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
         const saved = saveClimateFile(tx, {
           projectId: req.projectId!,
           siteId,
-          name: query.name ?? query.fileName.replace(/\.[^.]+$/, ''),
-          originalFileName: query.fileName,
+          name: query.name ?? original.fileName.replace(/\.[^.]+$/, ''),
+          originalFileName: original.fileName,
           bytes,
           imported: { ...result, series },
           createdBy: req.user?.id ?? null,
         });
         recordRequestAudit(tx, req, 'climate.import', saved.name, {
           climateFileId: saved.id,
-          fileName: query.fileName,
+          fileName: original.fileName,
+          files: parts.length,
           bytes: bytes.byteLength,
           hours: saved.hours,
           filledHours: saved.filledHours,
@@ -163,8 +182,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       let from = 0;
       let to = s.timestampsMs.length;
       if (year !== undefined) {
-        const start = Date.UTC(year, 0, 1);
-        const end = Date.UTC(year + 1, 0, 1);
+        // a calendar year on the site's standard time, as the file page and run pages count years
+        const offsetMs = standardOffsetMinutes(findSite(deps, req.projectId!, file.siteId).timeZone) * 60_000;
+        const start = Date.UTC(year, 0, 1) - offsetMs;
+        const end = Date.UTC(year + 1, 0, 1) - offsetMs;
         from = s.timestampsMs.findIndex((t) => t >= start);
         if (from < 0) from = to;
         const after = s.timestampsMs.findIndex((t) => t >= end);
@@ -236,9 +257,17 @@ export function hourlyCsv(s: ClimateSeries): string {
 function importTimeZone(basis: 'site-civil' | 'site-standard' | 'utc', siteTimeZone: string): string {
   if (basis === 'utc') return 'UTC';
   if (basis === 'site-civil') return siteTimeZone;
-  const minutes = standardOffsetMinutes(siteTimeZone);
-  const abs = Math.abs(minutes);
-  return `UTC${minutes < 0 ? '-' : '+'}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
+  return fixedOffsetZone(standardOffsetMinutes(siteTimeZone));
+}
+
+function sha256(bytes: Buffer): string {
+  return createHash('sha256').update(bytes).digest('hex');
+}
+
+/** "2019–2021 (3 files)": the first and last names of a set without their extensions, in time order. */
+function defaultSetName(fileNames: string[]): string {
+  const bare = fileNames.map((n) => n.replace(/\.[^.]+$/, ''));
+  return `${bare[0]}–${bare[bare.length - 1]} (${bare.length} files)`;
 }
 
 function round3(v: number): number {

@@ -154,7 +154,7 @@ export interface GapSummary {
 }
 
 /** Fills NaN cells strictly between `before` and `after` linearly between their nearest finite neighbours. */
-function interpolate(values: Float64Array, before: number, after: number): void {
+export function interpolate(values: Float64Array, before: number, after: number): void {
   let known = before;
   for (let h = before + 1; h <= after; h++) {
     if (values[h] !== values[h]) continue;

@@ -150,6 +150,7 @@ export function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx
     );
     return null;
   }
+  ctx.hourLines = grid.lastLine;
   const timestampsMs = new Float64Array(grid.hours);
   for (let h = 0; h < grid.hours; h++) timestampsMs[h] = (grid.startHour + h) * MS_PER_HOUR;
   return {

@@ -15,7 +15,7 @@ import { applyMappingOverride } from './apply-mapping';
 import { countLines, firstLines, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
 import { IssueLog } from './issue-log';
-import { isKnownTimeZone } from './local-time';
+import { isKnownTimeZone } from '../time-zone';
 import { buildMapping, reportMapping } from './mapping-report';
 import { sniffDecimalSeparator } from './number-cells';
 import { readRows } from './read-rows';
@@ -37,7 +37,8 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
   const last = series && series.timestampsMs.length > 0 ? series.timestampsMs[series.timestampsMs.length - 1] : NaN;
   const years: number[] = [];
   if (ok && Number.isFinite(first)) {
-    const shift = ctx.fileOffsetMs - (ctx.hourEnding ? 1 : 0);
+    // hour-ending stamps were moved to their hour's start (hour-starts.ts)
+    const shift = ctx.fileOffsetMs;
     for (let y = new Date(first + shift).getUTCFullYear(); y <= new Date(last + shift).getUTCFullYear(); y++) years.push(y);
   }
   const c = ctx.counts;
@@ -60,7 +61,7 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
     fileHeader: ctx.fileHeader ?? null,
     typicalYear: ok ? (ctx.typicalYear ?? null) : null,
   };
-  return { ok, series: ok ? series : null, report, mapping: ctx.mapping };
+  return { ok, series: ok ? series : null, report, mapping: ctx.mapping, hourLines: ok ? ctx.hourLines : null };
 }
 
 /**
@@ -79,6 +80,7 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
     stepMinutes: null,
     fileOffsetMs: 0,
     hourEnding: false,
+    hourLines: null,
   };
   try {
     const series = runImport(text, options ?? {}, ctx);

@@ -61,6 +61,8 @@ export interface Context {
   fileOffsetMs: number;
   /** True when stamps mark the end of their hour (hour 1–24 or a 24:00 time). */
   hourEnding: boolean;
+  /** Line of the last row in each hour of the series, once built. */
+  hourLines: Int32Array | null;
   /** What the file's own header says about its station, when it has one. */
   fileHeader?: FileHeader | null;
   /** Set when the rows were placed in one year as a typical year. */

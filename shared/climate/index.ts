@@ -2,7 +2,8 @@
 export { importClimateText, DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-climate-text';
 export { encodeColumn, decodeColumn, decodeFloat64Column, decodeUint8Column, type ColumnArray } from './column-codec';
 export { decodeClimateBytes } from './decode-bytes';
-export { isKnownTimeZone, standardOffsetMinutes } from './local-time';
+export { joinClimateFiles, type FileImport } from './join-files';
+export { isKnownTimeZone, standardOffsetMinutes } from '../time-zone';
 export { conversionToSi, type AffineConversion } from './units';
 export {
   DRY_BULB_MIN_C,
@@ -21,6 +22,7 @@ export type {
   ImportReport,
   ImportIssue,
   ImportCounts,
+  FileInSet,
   IssueKind,
   IssueSeverity,
   DetectedMapping,

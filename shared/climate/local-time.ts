@@ -1,7 +1,9 @@
 /**
- * Local wall-clock time in an IANA zone to UTC, through Intl (no time-zone data of our own).
+ * Local wall-clock time in an IANA zone or a fixed offset to UTC, through Intl (no time-zone data of our own;
+ * zones and offsets are read by shared/time-zone.ts).
  * Intl is slow (some 10 µs a call), so offsets come from a per-year table of the zone's changes.
  */
+import { fixedOffsetMs, wallClockReader } from '../time-zone';
 import { MS_PER_DAY } from './time-cells';
 
 export interface LocalTimeEvent {
@@ -23,72 +25,6 @@ export interface LocalToUtc {
 }
 
 const MINUTE_MS = 60_000;
-const FIXED_OFFSET = /^(?:UTC|GMT)?\s*([+\-\u2212])(\d{1,2})(?::?(\d{2}))?$/;
-
-/**
- * A fixed offset written `UTC+05:00`, `UTC-7`, `+0530` or `GMT−03:00`, in ms east of UTC; NaN otherwise.
- * Files in local standard time (no daylight saving) need this rather than their region's IANA zone.
- */
-export function fixedOffsetMs(timeZone: string): number {
-  const match = FIXED_OFFSET.exec(timeZone.trim());
-  if (!match) return NaN;
-  const hours = Number(match[2]);
-  const minutes = match[3] ? Number(match[3]) : 0;
-  if (hours > 14 || minutes > 59) return NaN;
-  return (match[1] === '+' ? 1 : -1) * (hours * 60 + minutes) * 60_000;
-}
-
-/** Whether the zone is a fixed offset or an IANA name Intl knows; false for anything else. */
-export function isKnownTimeZone(timeZone: string): boolean {
-  if (!Number.isNaN(fixedOffsetMs(timeZone))) return true;
-  try {
-    new Intl.DateTimeFormat('en-US', { timeZone });
-    return true;
-  } catch {
-    return false;
-  }
-}
-
-export interface WallClock {
-  year: number;
-  month: number;
-  day: number;
-  hour: number;
-  minute: number;
-  second: number;
-}
-
-/** Wall-clock reading of UTC instants in a zone (Intl, hours 0–23). */
-export function wallClockReader(timeZone: string): (utcMs: number) => WallClock {
-  const format = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-    second: 'numeric',
-  });
-  return (utcMs: number) => {
-    const clock: WallClock = { year: 0, month: 0, day: 0, hour: 0, minute: 0, second: 0 };
-    for (const part of format.formatToParts(utcMs)) {
-      if (part.type in clock) clock[part.type as keyof WallClock] = Number(part.value);
-    }
-    return clock;
-  };
-}
-
-/**
- * Offset of a zone's standard time from UTC in minutes: the smaller of its offsets on 1 January and
- * 1 July of `year`, since daylight saving only ever adds. A fixed offset is its own standard time.
- */
-export function standardOffsetMinutes(timeZone: string, year = 2023): number {
-  const fixed = fixedOffsetMs(timeZone);
-  if (!Number.isNaN(fixed)) return fixed / MINUTE_MS;
-  const offsetAt = offsetReader(timeZone);
-  return Math.min(offsetAt(Date.UTC(year, 0, 1)), offsetAt(Date.UTC(year, 6, 1))) / MINUTE_MS;
-}
 
 function offsetReader(timeZone: string): (utcMs: number) => number {
   const read = wallClockReader(timeZone);

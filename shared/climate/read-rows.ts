@@ -3,6 +3,8 @@ import type { ParsedRows } from './delimited-text';
 import type { RowColumns } from './hourly-grid';
 import { toHourlySeries } from './hourly-series';
 import { percent, REJECT_SHARE, round, type Context } from './import-context';
+import { utcOffsetLabel } from '../time-zone';
+import { moveHourEndingToStart } from './hour-starts';
 import { createLocalToUtc, type LocalToUtc } from './local-time';
 import { classifyUnreadableCell, parseNumberCell } from './number-cells';
 import { describeYmdh, unitOf } from './recognise-columns';
@@ -166,7 +168,7 @@ export function readRows(
     if (rows.count === 0) ctx.fileOffsetMs = offsetNow;
     if (previousOffset === previousOffset && offsetNow !== previousOffset) {
       counts.daylightSavingJumps++;
-      log.info('daylight-saving-jump', `The UTC offset changes from ${offsetText(previousOffset)} to ${offsetText(offsetNow)} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
+      log.info('daylight-saving-jump', `The UTC offset changes from ${utcOffsetLabel(Math.round(previousOffset / MS_PER_MINUTE))} to ${utcOffsetLabel(Math.round(offsetNow / MS_PER_MINUTE))} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
         line,
         column: timeHeader,
       });
@@ -219,13 +221,15 @@ export function readRows(
   }
 
   ctx.hourEnding = (time.layout === 'ymdh' && time.hourConvention === 'ending-1-24') || (time.layout === 'date-time' && hour24 && !hourZero);
+  moveHourEndingToStart(rows.timeMs, localTimes, rows.count, rows.line[0], ctx);
   checkRejectShares(dry, hum, pres, rows, ctx);
   if (pres && ctx.mapping.pressure === null) rows.pressurePa = null;
   const typical = detectTypicalYear(localTimes, rows.count);
   if (typical) {
     // same offset as read, so a zone's daylight saving is not re-applied in the new year
     for (let i = 0; i < rows.count; i++) rows.timeMs[i] = intoYear(localTimes[i], typical.year) - (localTimes[i] - rows.timeMs[i]);
-    ctx.typicalYear = { year: typical.year, sourceYearByMonth: sourceYearByMonth(localTimes, rows.count, ctx.hourEnding) };
+    // local times already stand at their hour's start (moveHourEndingToStart above)
+    ctx.typicalYear = { year: typical.year, sourceYearByMonth: sourceYearByMonth(localTimes, rows.count, false) };
     const from = typical.sourceYears[0];
     const to = typical.sourceYears[typical.sourceYears.length - 1];
     log.warning(
@@ -235,13 +239,6 @@ export function readRows(
   }
   if (log.hasErrors()) return null;
   return toHourlySeries(rows, humidityQuantity, ctx, !anyOffset && !zone);
-}
-
-function offsetText(offsetMs: number): string {
-  const minutes = Math.round(offsetMs / MS_PER_MINUTE);
-  const sign = minutes < 0 ? '−' : '+';
-  const abs = Math.abs(minutes);
-  return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
 }
 
 function impossibleHumidityMessage(humidity: QuantityAssignment, cell: string, dryBulbC: number): string {

@@ -183,6 +183,10 @@ export type IssueKind =
   | 'non-hourly-step'
   | 'timestamps-rounded'
   | 'typical-year-restamped'
+  | 'hour-ending-stamps'
+  | 'files-overlap'
+  | 'files-gap'
+  | 'files-layout-differs'
   | 'malformed-row'
   | 'other-humidity-ignored'
   | 'pressure-ignored'
@@ -211,7 +215,26 @@ export interface ImportIssue {
   column?: string;
   /** The cell or value concerned, as text. */
   value?: string;
+  /** In a set of several files: the file the issue is in (its line numbers count in that file). */
+  file?: string;
   message: string;
+}
+
+/** One file of a set uploaded together, as the set's report lists it. */
+export interface FileInSet {
+  fileName: string;
+  bytes: number;
+  sha256: string;
+  ok: boolean;
+  summary: string;
+  firstTimestamp: string | null;
+  lastTimestamp: string | null;
+  hours: number;
+  /** Lines of the file's first and last hours. */
+  firstLine: number | null;
+  lastLine: number | null;
+  errors: number;
+  warnings: number;
 }
 
 export interface ImportCounts {
@@ -252,8 +275,8 @@ export interface ImportReport {
   firstTimestamp: string | null;
   lastTimestamp: string | null;
   /**
-   * Calendar years the series covers in the file's own clock (the UTC offset of its first row),
-   * an hour-ending stamp counting in the hour it ends (24:00 on 31 December belongs to that year).
+   * Calendar years the series covers in the file's own clock (the UTC offset of its first row), each hour
+   * by its start (an hour-ending stamp 24:00 on 31 December belongs to that year).
    */
   years: number[];
   maxGapHours: number;
@@ -265,6 +288,8 @@ export interface ImportReport {
   humidityOverIce: boolean;
   counts: ImportCounts;
   issues: ImportIssue[];
+  /** Present when several files were imported together as one series: each file, in time order. */
+  files?: FileInSet[];
   /** What the file's header says about its station (published formats and station lines); absent or null when nothing. */
   fileHeader?: FileHeader | null;
   /** Set when the file was read as a typical year: the year it was placed in and each month's source year. */
@@ -288,6 +313,8 @@ export interface ImportResult {
   series: ClimateSeries | null;
   report: ImportReport;
   mapping: DetectedMapping;
+  /** Line of the last row read into each hour of the series (0 for an hour no row fell in); null when refused. */
+  hourLines?: Int32Array | null;
 }
 
 export const HOUR_FLAG = { measured: 0, filled: 1, missing: 2 } as const;

@@ -4,6 +4,7 @@
  */
 import { MODE, MODE_NAMES } from '../scenario/classify';
 import { HOURLY_CSV_COLUMNS, type HourlyCsvInput } from '../scenario/hourly-csv';
+import { standardTimeIso } from '../time-zone';
 
 export type HourlyColumn = (typeof HOURLY_CSV_COLUMNS)[number];
 
@@ -11,7 +12,7 @@ export interface HourlyJson {
   columns: readonly HourlyColumn[];
   units: Record<HourlyColumn, string>;
   /** One array per column, one entry per hour in series order (UTC). */
-  hours: { timestamp: string[]; mode: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode'>, (number | null)[]>;
+  hours: { timestamp: string[]; mode: string[]; local_standard_time: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode' | 'local_standard_time'>, (number | null)[]>;
 }
 
 export const hourlyUnits: Record<HourlyColumn, string> = {
@@ -25,6 +26,7 @@ export const hourlyUnits: Record<HourlyColumn, string> = {
   enthalpy_kjkg: 'kJ/kg dry air',
   mechanical_fraction: 'share of the cooling load on compressors, 0–1',
   humidified: '1 for free cooling with humidification, else 0; empty for runs before engine 2.0.0',
+  local_standard_time: 'ISO 8601, site standard time (no daylight saving), no offset suffix',
 };
 
 function column(values: Float64Array, decimals: number, scale = 1): (number | null)[] {
@@ -51,6 +53,7 @@ export function hourlyJson(input: HourlyCsvInput): HourlyJson {
       enthalpy_kjkg: column(input.enthalpyKJPerKg, 2),
       mechanical_fraction: mechanical,
       humidified: Array.from(input.modes, (m, i) => (m === MODE.noData || input.humidified === null ? null : input.humidified[i] === 1 ? 1 : 0)),
+      local_standard_time: Array.from(input.timestampsMs, (ms) => standardTimeIso(ms, input.utcOffsetMinutes)),
     },
   };
 }

@@ -11,6 +11,8 @@ import type { ModeHours } from '../scenario/results';
 import { countsSubsets, hoursOfSpec, modeRowSpecs, notCountedNote, modeSubsets, subsetHours, waterPartL, waterParts, type ModeSubsetKey, type WaterPartKey } from './mode-subsets';
 import type { ScenarioResults } from '../scenario/run';
 import { humidityReadingWords } from './humidity-reading';
+import { PARTIAL_YEAR_MARK, yearStatistics } from '../scenario/year-statistics';
+import { standardPeriod, utcOffsetLabel } from '../time-zone';
 import { flattenInputs, inputUnitSi } from './inputs';
 import type { ReportRun } from './report-data';
 
@@ -54,6 +56,8 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'run', figure: 'Humidity in the file', unit: '', value: humidityReadingWords(run.climate.humidityOverIce) },
     { section: 'run', figure: 'Envelope', unit: '', value: run.envelope.label },
     { section: 'run', figure: 'Engine version', unit: '', value: run.engineVersion },
+    { section: 'run', figure: 'Period (site standard time)', unit: '', value: standardPeriod(run.climate.firstHourMs, run.climate.lastHourMs, run.site.utcOffsetMinutes) },
+    { section: 'run', figure: 'Site standard time', unit: '', value: utcOffsetLabel(run.site.utcOffsetMinutes) },
     ...(countsSubsets(r) ? [] : [{ section: 'run', figure: 'Not counted', unit: '', value: notCountedNote(run.engineVersion) }]),
     ...modeRows('hours', '', r.hours),
     { section: 'hours', figure: 'All hours', unit: 'h', value: r.hours.total },
@@ -80,7 +84,11 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'water', figure: 'WUE', unit: 'L/kWh', value: rounded(w.wueLPerKwh, 4) },
   ];
   for (const m of r.hoursByMonth) rows.push(...modeRows('by month', `${MONTH_SHORT[m.month - 1]}: `, m));
+  // Years on the site's standard time (as the run page); a partial year is marked as the run page marks it.
+  const partial = new Map(yearStatistics(r.hoursByYear).partialYears.map((p) => [p.year, p]));
   for (const y of r.hoursByYear) {
+    const p = partial.get(y.year);
+    rows.push({ section: 'by year', figure: `${y.year}: calendar year`, unit: '', value: p ? `${PARTIAL_YEAR_MARK} (${p.hours} of ${p.calendarHours} h)` : 'full' });
     rows.push(...modeRows('by year', `${y.year}: `, y));
     rows.push({ section: 'by year', figure: `${y.year}: cooling energy`, unit: 'kWh', value: rounded(y.coolingKwh, 1) });
     rows.push({ section: 'by year', figure: `${y.year}: water`, unit: 'L', value: rounded(y.waterL, 1) });

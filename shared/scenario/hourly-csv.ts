@@ -20,6 +20,7 @@ export const HOURLY_CSV_COLUMNS = [
   'enthalpy_kjkg',
   'mechanical_fraction',
   'humidified',
+  'local_standard_time',
 ] as const;
 
 export interface HourlyCsvInput {
@@ -35,6 +36,8 @@ export interface HourlyCsvInput {
   mechanicalFraction: Float64Array;
   /** 1 for a free-cooling hour with humidification; null for runs made before engine 2.0.0 (empty cells). */
   humidified: Uint8Array | null;
+  /** The site's standard-time offset from UTC, minutes: local_standard_time is the hour's start on that clock. */
+  utcOffsetMinutes: number;
 }
 
 /** The hourly CSV's columns from the series a run was given and the run itself (its states and per-hour outcome). */
@@ -43,6 +46,7 @@ export function hourlyCsvInput(
   run: Pick<ScenarioRun, 'states'> & {
     classification: Pick<ScenarioRun['classification'], 'modes' | 'mechanicalFraction'> & { humidified: Uint8Array | null };
   },
+  utcOffsetMinutes = 0,
 ): HourlyCsvInput {
   return {
     timestampsMs: series.timestampsMs,
@@ -55,12 +59,13 @@ export function hourlyCsvInput(
     enthalpyKJPerKg: run.states.enthalpyKJPerKg,
     mechanicalFraction: run.classification.mechanicalFraction,
     humidified: run.classification.humidified,
+    utcOffsetMinutes,
   };
 }
 
 const ROWS_PER_CHUNK = 8192;
-// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 1 flag + 10 separators.
-const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 1 + 10;
+// Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 1 flag + 16 (local standard time) + 11 separators.
+const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 1 + 16 + 11;
 const COMMA = 44;
 const NEWLINE = 10;
 const MINUS = 45;
@@ -161,11 +166,15 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
   const n = input.modes.length;
   for (const key of Object.keys(input) as (keyof HourlyCsvInput)[]) {
     const column = input[key];
-    if (column !== null && column.length !== n) throw new RangeError(`${key} has ${column.length} hours, modes has ${n}`);
+    if (column === null || typeof column === 'number') continue;
+    if (column.length !== n) throw new RangeError(`${key} has ${column.length} hours, modes has ${n}`);
   }
   const humidified = input.humidified;
+  const offsetMs = input.utcOffsetMinutes * 60_000;
+  if (!Number.isFinite(offsetMs) || Math.abs(input.utcOffsetMinutes) > 18 * 60) throw new RangeError(`utcOffsetMinutes must be within ±1080, got ${input.utcOffsetMinutes}`);
   onChunk(encoder.encode(`${HOURLY_CSV_COLUMNS.join(',')}\n`));
   const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
+  const localPrefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
   const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * MAX_ROW_BYTES);
   for (let start = 0; start < n; start += ROWS_PER_CHUNK) {
     const end = Math.min(n, start + ROWS_PER_CHUNK);
@@ -193,6 +202,9 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
       if (hasData) pos = writeFixed(buf, pos, input.mechanicalFraction[i], 3);
       buf[pos++] = COMMA;
       if (hasData && humidified !== null) buf[pos++] = humidified[i] === 1 ? ONE : ZERO;
+      buf[pos++] = COMMA;
+      // the same stamp on the site's standard time, without the Z (overwritten by the newline)
+      pos = writeTimestamp(buf, pos, input.timestampsMs[i] + offsetMs, localPrefix) - 1;
       buf[pos++] = NEWLINE;
     }
     onChunk(buf.subarray(0, pos));

@@ -58,6 +58,16 @@ export interface YearStatistics {
   worst: WorstYear | null;
 }
 
+/** How a partial year is marked beside its row, on the run page, in the report and in the summary CSV. */
+export const PARTIAL_YEAR_MARK = 'partial · left out';
+
+/** The sentence under a year table naming the partial years, e.g. "… 2024 (1 of 8,784 h)."; null when there are none. */
+export function partialYearsSentence(partialYears: readonly PartialYear[]): string | null {
+  if (partialYears.length === 0) return null;
+  const h = (n: number) => Math.round(n).toLocaleString('en');
+  return `Left out as partial (more than a day short of the calendar year's hours): ${partialYears.map((p) => `${p.year} (${h(p.hours)} of ${h(p.calendarHours)} h)`).join(', ')}.`;
+}
+
 /** A year may lack this many of its hours and still count as a full year. */
 export const FULL_YEAR_SHORTFALL_HOURS = 24;
 

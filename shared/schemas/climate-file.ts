@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { withoutControlCharacters } from './plain-text';
-import { isKnownTimeZone } from '../climate/local-time';
+import { isKnownTimeZone } from '../time-zone';
 
 /** A column named by its 0-based index or its header text. */
 const columnRef = z.union([z.number().int().min(0), z.string().min(1).max(200)]);
@@ -80,6 +80,21 @@ export const climateUploadQuerySchema = z.object({
     .pipe(mappingOverrideSchema.optional()),
 });
 
+/** At most this many files in one upload: thirty years of monthly files fit. */
+export const MAX_FILES_PER_UPLOAD = 400;
+
+/** The files of one upload (a multipart body), checked before any is read. */
+export const uploadedFilesSchema = z
+  .array(
+    z.object({
+      fileName: z.string().trim().min(1, 'every file needs a name').max(255, 'file names must be at most 255 characters'),
+      byteLength: z.number().int().min(1, 'a file of the set is empty'),
+    }),
+  )
+  .min(1, 'send at least one file')
+  .max(MAX_FILES_PER_UPLOAD, `send at most ${MAX_FILES_PER_UPLOAD} files at once`)
+  .refine((files) => new Set(files.map((f) => f.fileName)).size === files.length, 'two files of the set have the same name');
+
 export const siteInputSchema = z.object({
   name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')),
   latitude: z.number().min(-90).max(90).nullable().default(null),
@@ -88,7 +103,7 @@ export const siteInputSchema = z.object({
   timeZone: z
     .string()
     .default('UTC')
-    .refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo'),
+    .refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo or a fixed offset such as UTC-07:00'),
 });
 
 export type SiteInput = z.infer<typeof siteInputSchema>;

@@ -89,7 +89,9 @@ describe('downloads of a run', () => {
     expect(Number(first.humidity_ratio_gkg)).toBeCloseTo(w * 1000, 3);
     expect(Number(first.enthalpy_kjkg)).toBeCloseTo(tightPsychrolib.GetMoistAirEnthalpy(8.3, w) / 1000, 2);
     // Nothing a spreadsheet could run: every cell is a number, a fixed mode word or a timestamp.
-    for (const line of lines.slice(1)) expect(line).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\dZ,(free|adiabatic|mechanical|no_data)(,-?\d+(\.\d+)?|,)+$/);
+    for (const line of lines.slice(1)) expect(line).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\dZ,(free|adiabatic|mechanical|no_data)(,-?\d+(\.\d+)?|,)+,\d{4}-\d\d-\d\dT\d\d:\d\d$/);
+    // the site's standard time beside the UTC stamp (this site keeps UTC)
+    expect(first.local_standard_time).toBe('2023-07-01T00:00');
   });
 
   it('gives the same hours as JSON, column by column', async () => {

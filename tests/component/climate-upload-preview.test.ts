@@ -90,3 +90,12 @@ describe('stored hours for the charts', () => {
     expect(Number.isNaN(atSite.humidityRatio[1])).toBe(true);
   });
 });
+
+describe('the preview on a site with a fixed-offset time zone', () => {
+  it('shows the site clock instead of failing with "Invalid time zone specified"', () => {
+    const rows = previewRows([hour], 'relative-humidity-pct', 'SI', 'UTC-07:00');
+    // 2023-07-01 00:00 UTC at UTC−07:00 is 30 June 17:00.
+    expect(rows[0].timeLocal).toBe('2023-06-30 17:00');
+    expect(previewRows([hour], 'relative-humidity-pct', 'SI', 'UTC+05:30')[0].timeLocal).toBe('2023-07-01 05:30');
+  });
+});

@@ -10,7 +10,7 @@
 import type { Context } from '../import-context';
 import { daysFromCivil, daysInMonth, MS_PER_DAY, MS_PER_HOUR } from '../time-cells';
 import type { ClimateSeries, ColumnMappingOverride, FileHeader, RecognisedFormat } from '../types';
-import { fixedOffsetZone } from './fixed-offset';
+import { fixedOffsetZone } from '../../time-zone';
 import { forEachLine, FormatRows, formatRecognition, integerIn, rejectRow, yearMonthDayHour, type FormatColumn } from './format-rows';
 
 export const EPW_FORMAT: RecognisedFormat = {

@@ -6,6 +6,7 @@
  */
 import { applyMappingOverride } from '../apply-mapping';
 import type { RowColumns } from '../hourly-grid';
+import { moveHourEndingToStart } from '../hour-starts';
 import { toHourlySeries } from '../hourly-series';
 import { percent, REJECT_SHARE, round, type Context } from '../import-context';
 import { parseNumberCell } from '../number-cells';
@@ -265,14 +266,14 @@ export class FormatRows {
       rows.pressurePa = null;
     }
     if (log.hasErrors()) return null;
+    moveHourEndingToStart(rows.timeMs, this.localMs, rows.count, rows.line[0], this.ctx);
     this.placeTypicalYear();
     return toHourlySeries(rows, this.humidityQuantity, this.ctx, false);
   }
 
   private placeTypicalYear(): void {
     const rows = this.rows;
-    // an hour-ending stamp belongs to the hour before it: 24:00 on 31 December is still December
-    const shift = this.ctx.hourEnding ? 1 : 0;
+    // hour-ending stamps were moved to their hour's start (hour-starts.ts): 24:00 on 31 December is 23:00, still December
     const civil = { year: 0, month: 0, day: 0 };
     const yearOfMonth: (number | null)[] = Array.from({ length: 12 }, () => null);
     let monthInTwoYears = false;
@@ -280,7 +281,7 @@ export class FormatRows {
     let leapDay = false;
     let previousKey = -Infinity;
     for (let i = 0; i < rows.count; i++) {
-      const t = this.localMs[i] - shift;
+      const t = this.localMs[i];
       const days = Math.floor(t / MS_PER_DAY);
       civilFromDays(days, civil);
       const known = yearOfMonth[civil.month - 1];
@@ -296,7 +297,7 @@ export class FormatRows {
     const year = leapDay ? TYPICAL_LEAP_YEAR_PLACEMENT : TYPICAL_YEAR_PLACEMENT;
     for (let i = 0; i < rows.count; i++) {
       const offset = this.localMs[i] - rows.timeMs[i];
-      const local = intoYear(this.localMs[i] - shift, year) + shift;
+      const local = intoYear(this.localMs[i], year);
       rows.timeMs[i] = local - offset;
     }
     this.ctx.typicalYear = { year, sourceYearByMonth: yearOfMonth };

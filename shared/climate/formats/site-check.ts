@@ -3,9 +3,8 @@
  * differs by more than 50 m or the UTC offset differs from the site zone's standard offset.
  */
 import type { Context } from '../import-context';
-import { isKnownTimeZone, standardOffsetMinutes } from '../local-time';
+import { fixedOffsetZone, isKnownTimeZone, standardOffsetMinutes } from '../../time-zone';
 import type { FileHeader } from '../types';
-import { fixedOffsetZone } from './fixed-offset';
 
 /** Elevations further apart than this are a different place or a wrong site (the threshold; about 0.6 kPa of pressure). */
 export const ELEVATION_MISMATCH_M = 50;

@@ -4,9 +4,8 @@
  * The general importer skips it as a note; this reads what it says about the station.
  */
 import type { Context } from '../import-context';
-import { fixedOffsetMs } from '../local-time';
+import { fixedOffsetMs, fixedOffsetZone } from '../../time-zone';
 import type { FileHeader } from '../types';
-import { fixedOffsetZone } from './fixed-offset';
 
 /** The header a station line gives, or null when the line is not one (seven fields, the last four numbers in range). */
 export function readStationLine(cells: string[], line: number): FileHeader | null {

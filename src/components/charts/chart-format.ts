@@ -10,11 +10,3 @@ export function carpetDayLabel(day: number): string {
   while (m > 0 && carpetMonthStartDays[m] > day) m--;
   return `${day - carpetMonthStartDays[m] + 1} ${MONTH_SHORT[m]}`;
 }
-
-/** "UTC" or "UTC+01:00" for an offset in minutes. */
-export function utcOffsetLabel(minutes: number): string {
-  if (!minutes) return 'UTC';
-  const sign = minutes < 0 ? '−' : '+';
-  const abs = Math.abs(minutes);
-  return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
-}

@@ -32,7 +32,7 @@ const WEATHER = file(
   'weather.csv',
   'timestamp,dry_bulb_c,dew_point_c\n2021-07-01T00:00Z,20,10\n2021-07-01T01:00Z,,10\n2021-07-01T02:00Z,31,12\n2021-07-01T03:00Z,35,22\n',
 );
-const COLUMNS = 'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified';
+const COLUMNS = 'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time';
 // Synthetic winter weather: a cold hour drier than the A1 lower limit (−12 °C dew point), and a mild one.
 const WINTER = file('winter.csv', 'timestamp,dry_bulb_c,dew_point_c\n2021-01-04T00:00Z,-5,-25\n2021-01-04T01:00Z,8,2\n');
 
@@ -61,8 +61,10 @@ describe('estimate command line', { timeout: 30_000 }, () => {
       ['2021-07-01T02:00Z', 'adiabatic'],
       ['2021-07-01T03:00Z', 'mechanical'],
     ]);
-    for (const line of lines.slice(1)) expect(line.split(',')).toHaveLength(10);
+    for (const line of lines.slice(1)) expect(line.split(',')).toHaveLength(11);
     expect(lines.slice(1).map((line) => line.split(',')[9])).toEqual(['0', '', '0', '0']);
+    // without --utc-offset-minutes the site clock is UTC
+    expect(lines[1].split(',')[10]).toBe('2021-07-01T00:00');
     // 20 °C with a 10 °C dew point at the scenario's 120 m: humidity ratio from psychrolib (reference library).
     const first = lines[1].split(',');
     expect(first[4]).toBe('10.00');

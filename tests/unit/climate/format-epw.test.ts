@@ -59,9 +59,11 @@ describe('EPW files', () => {
     expect(report.timeZone).toBe('UTC+01:00');
     const s = series!;
     expect(s.timestampsMs.length).toBe(72);
-    // record 1: 31 January hour 1 = the hour ending 01:00 at UTC+1, i.e. 00:00 UTC; placed in the typical year 2001
-    expect(s.timestampsMs[0]).toBe(Date.UTC(2001, 0, 31, 0));
-    expect(s.timestampsMs[71]).toBe(Date.UTC(2001, 1, 2, 23));
+    // record 1: 31 January hour 1 = the hour ending 01:00 at UTC+1, i.e. 00:00 UTC, stored by its start
+    // (23:00 UTC on the 30th); placed in the typical year 2001
+    expect(s.timestampsMs[0]).toBe(Date.UTC(2001, 0, 30, 23));
+    expect(s.timestampsMs[71]).toBe(Date.UTC(2001, 1, 2, 22));
+    expect(report.issues).toContainEqual(expect.objectContaining({ kind: 'hour-ending-stamps', line: 9 }));
     expect(s.dryBulbC[0]).toBe(-1.5);
     expect(s.humidity.kind).toBe('dew-point-c');
     expect(s.humidity.values[0]).toBe(-2.7);
@@ -92,7 +94,7 @@ describe('EPW files', () => {
     expect(report.years).toEqual([2001]);
     expect(report.typicalYear?.sourceYearByMonth).toEqual([1991, 1992, 1993, 1994, 1995, 1996, 1997, 1998, 1999, 2000, 2001, 2002]);
     // every hour begins in 2001 local standard time (UTC+1): the last one ends at midnight closing 31 December
-    const localStart = (i: number) => series!.timestampsMs[i] - HOUR_MS + OFFSET_MS;
+    const localStart = (i: number) => series!.timestampsMs[i] + OFFSET_MS;
     expect(new Date(localStart(0)).getUTCFullYear()).toBe(2001);
     expect(new Date(localStart(8759)).getUTCFullYear()).toBe(2001);
   });
@@ -101,7 +103,8 @@ describe('EPW files', () => {
     const { report, series } = importClimateText(epwText(yearOfDays(() => 2019)));
     expect(report.years).toEqual([2019]);
     expect(report.typicalYear).toBeNull();
-    expect(series!.timestampsMs[0]).toBe(Date.UTC(2019, 0, 1, 0));
+    // hour 1 of 1 January at UTC+1 starts at 00:00 local = 23:00 UTC on 31 December 2018
+    expect(series!.timestampsMs[0]).toBe(Date.UTC(2018, 11, 31, 23));
     expect(report.issues.filter((i) => i.kind === 'typical-year-restamped')).toEqual([]);
   });
 

@@ -126,8 +126,8 @@ describe('typical-year CSVs with a station line above the header (read as before
     expect(report.fileHeader).toMatchObject({ line: 2, stationId: '999002', name: 'QUELLMOOR SYNTHETIC (INVENTED)', latitude: 39.25, longitude: -104.5, elevationM: 1650, utcOffsetHours: -7 });
     const s = series!;
     expect(s.timestampsMs.length).toBe(72);
-    // 01/31/2002 01:00 at UTC−7 is the hour ending 08:00 UTC
-    expect(s.timestampsMs[0]).toBe(Date.UTC(2002, 0, 31, 8));
+    // 01/31/2002 01:00 at UTC−7 is the hour ending 08:00 UTC, stored by its start, 07:00 UTC
+    expect(s.timestampsMs[0]).toBe(Date.UTC(2002, 0, 31, 7));
     expect(s.dryBulbC[0]).toBe(-6.2);
     expect(s.humidity.values[0]).toBe(-10.1);
     // 835 mbar = 83 500 Pa

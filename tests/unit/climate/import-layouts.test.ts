@@ -106,15 +106,17 @@ describe('semicolon, decimal comma, BOM, CRLF, date and time columns', () => {
 
 describe('year, month, day, hour 1–24 as hour ending, °F, dew point °F, inHg', () => {
   const { series, mapping, report } = load('fahrenheit-inhg-ymdh.csv');
-  it('detects the layout and says hour 24 is midnight at the end of the day', () => {
+  it('detects the layout and stores each hour by its start (hour 24 is the hour before midnight)', () => {
     expect(mapping.time).toMatchObject({ layout: 'ymdh', year: 0, month: 1, day: 2, hour: 3, hourConvention: 'ending-1-24' });
     expect(report.timeLayout).toContain('hour ending (24 = midnight at the end of the day)');
+    // rows stamped 22, 23, 24 (2021-03-01) and 1 (2021-03-02), each the hour ending then
     expect(values(series?.timestampsMs).map(iso)).toEqual([
+      '2021-03-01T21:00:00.000Z',
       '2021-03-01T22:00:00.000Z',
-      '2021-03-01T23:00:00.000Z',
-      '2021-03-02T00:00:00.000Z', // 2021-03-01 hour 24
-      '2021-03-02T01:00:00.000Z',
+      '2021-03-01T23:00:00.000Z', // 2021-03-01 hour 24: 23:00–24:00
+      '2021-03-02T00:00:00.000Z',
     ]);
+    expect(report.issues).toContainEqual(expect.objectContaining({ kind: 'hour-ending-stamps', severity: 'info', line: 3 }));
   });
   it('converts °F and inHg with the NIST SP 811 factors', () => {
     expect(mapping.dryBulb).toMatchObject({ header: 'Temp (F)', unit: 'F' });
@@ -292,7 +294,8 @@ describe('details of recognition', () => {
 
   it('reads a file in local standard time through a fixed offset', () => {
     const { series } = load('fahrenheit-inhg-ymdh.csv', { timeZone: 'UTC-07:00' });
-    expect(iso(series!.timestampsMs[0])).toBe('2021-03-02T05:00:00.000Z'); // 22:00 local = 05:00 UTC next day
+    // hour ending 22:00 local is the hour from 21:00 local = 04:00 UTC next day
+    expect(iso(series!.timestampsMs[0])).toBe('2021-03-02T04:00:00.000Z');
   });
 });
 
@@ -316,11 +319,15 @@ describe('typical-year files', () => {
     expect(report.counts.hours).toBe(8760);
     expect(report.counts.missingHours).toBe(0);
     expect(report.issues).toContainEqual(expect.objectContaining({ kind: 'typical-year-restamped', severity: 'warning' }));
-    // the first row's year (1998, not leap) is kept; hour 24 of 31 December wraps to 1 January 00:00
+    // the first row's year (1998, not leap) is kept; hour 1 of 1 January is the hour from 00:00 and
+    // hour 24 of 31 December the last hour of the same year (no wrap into a phantom next year)
     expect(iso(series!.timestampsMs[0])).toBe('1998-01-01T00:00:00.000Z');
-    expect(series!.dryBulbC[0]).toBeCloseTo(12.24, 10);
-    expect(series!.dryBulbC[1]).toBeCloseTo(1.01, 10);
-    expect(iso(series!.timestampsMs[8759])).toBe('1998-12-31T23:00:00.000Z');    // the year each month came from, kept for the climate-file page
+    expect(series!.dryBulbC[0]).toBeCloseTo(1.01, 10);
+    expect(series!.dryBulbC[1]).toBeCloseTo(1.02, 10);
+    expect(iso(series!.timestampsMs[8759])).toBe('1998-12-31T23:00:00.000Z');
+    expect(series!.dryBulbC[8759]).toBeCloseTo(12.24, 10);
+    expect(report.years).toEqual([1998]);
+    // the year each month came from, kept for the climate-file page
     expect(report.typicalYear).toEqual({ year: 1998, sourceYearByMonth: sourceYear });
   });
 
@@ -344,10 +351,30 @@ describe('hour cells written as clock times', () => {
     expect(ok).toBe(true);
     expect(mapping.time).toMatchObject({ layout: 'ymdh', hourConvention: 'ending-1-24' });
     expect(values(series?.timestampsMs).map(iso)).toEqual([
+      '2021-03-01T21:00:00.000Z',
       '2021-03-01T22:00:00.000Z',
       '2021-03-01T23:00:00.000Z',
       '2021-03-02T00:00:00.000Z',
-      '2021-03-02T01:00:00.000Z',
     ]);
+  });
+});
+
+describe('a year of hour-ending stamps', () => {
+  it('is that year: stored by hour starts, no phantom hour in the next year', () => {
+    const lines = ['Year,Month,Day,Hour,Temp (C),RH (%)'];
+    for (let h = 1; h <= 8760; h++) {
+      const end = new Date(Date.UTC(2021, 0, 1) + h * 3_600_000);
+      // hour 24 of a day, as such files write it, rather than hour 0 of the next
+      const day = new Date(end.getTime() - 1);
+      const hour = end.getUTCHours() === 0 ? 24 : end.getUTCHours();
+      lines.push(`${day.getUTCFullYear()},${day.getUTCMonth() + 1},${day.getUTCDate()},${hour},10,80`);
+    }
+    const { ok, series, report } = importClimateText(lines.join('\n'), { timeZone: 'UTC-07:00' });
+    expect(ok).toBe(true);
+    expect(report.years).toEqual([2021]);
+    expect(series!.timestampsMs.length).toBe(8760);
+    // 2021-01-01 00:00 at UTC−07:00 is 07:00 UTC; the last hour starts 2021-12-31 23:00 local = 2022-01-01 06:00 UTC
+    expect(iso(series!.timestampsMs[0])).toBe('2021-01-01T07:00:00.000Z');
+    expect(iso(series!.timestampsMs[8759])).toBe('2022-01-01T06:00:00.000Z');
   });
 });

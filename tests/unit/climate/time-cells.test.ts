@@ -9,7 +9,8 @@ import {
   parseIntegerCell,
   parseTimeCell,
 } from '../../../shared/climate/time-cells';
-import { createLocalToUtc, fixedOffsetMs } from '../../../shared/climate/local-time';
+import { createLocalToUtc } from '../../../shared/climate/local-time';
+import { fixedOffsetMs } from '../../../shared/time-zone';
 
 describe('daysFromCivil', () => {
   it('agrees with Date.UTC on every day from 1600 to 2400', () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { ImportReport } from '../../../shared/climate';
 import { comparisonCsv, comparisonRows, hourlyJson, inUnits, runSummaryRows, shapeReportRun, summaryCsv, summaryRowsIn, type ReportRunSource } from '../../../shared/report';
+import { importClimateText } from '../../../shared/climate';
 import { MODE, runScenario, type HourlyCsvInput } from '../../../shared/scenario';
 import { makeScenario } from '../scenario/fixtures';
 
@@ -159,8 +160,11 @@ describe('hourly JSON', () => {
       enthalpyKJPerKg: Float64Array.of(8.4449, Number.NaN),
       mechanicalFraction: Float64Array.of(0, 0.5),
       humidified: Uint8Array.of(1, 0),
+      // Asia/Kolkata's UTC+05:30 (IANA tz database): a half-hour offset, which no Etc/GMT zone covers
+      utcOffsetMinutes: 330,
     };
     const json = hourlyJson(input);
+    expect(json.hours.local_standard_time).toEqual(['2024-01-01T05:30', '2024-01-01T06:30']);
     expect(json.hours.timestamp).toEqual(['2024-01-01T00:00Z', '2024-01-01T01:00Z']);
     expect(json.hours.mode).toEqual(['free', 'no_data']);
     // Half-way cases away from zero, as writeFixed in the CSV.
@@ -168,5 +172,50 @@ describe('hourly JSON', () => {
     expect(json.hours.humidity_ratio_gkg).toEqual([3.457, null]);
     expect(json.hours.mechanical_fraction).toEqual([0, null]);
     expect(json.hours.humidified).toEqual([1, null]);
+  });
+});
+
+describe('years and periods on the site standard time', () => {
+  /** A synthetic year 2021 stamped hour ending 1–24 in local standard time, as typical-year files write it. */
+  function hourEndingYear(): string {
+    const lines = ['Year,Month,Day,Hour,Temp (C),RH (%)'];
+    for (let h = 1; h <= 8760; h++) {
+      const end = new Date(Date.UTC(2021, 0, 1) + h * 3_600_000);
+      const day = new Date(end.getTime() - 1);
+      lines.push(`${day.getUTCFullYear()},${day.getUTCMonth() + 1},${day.getUTCDate()},${end.getUTCHours() === 0 ? 24 : end.getUTCHours()},15,60`);
+    }
+    return lines.join('\n');
+  }
+
+  it('keeps an hour-ending year in its year at a fixed-offset site: no phantom next year in the summary', () => {
+    const imported = importClimateText(hourEndingYear(), { timeZone: 'UTC-07:00' });
+    const series = imported.series!;
+    const s = source(9, 24);
+    const results = runScenario(s.scenario, series, { utcOffsetMinutes: -420 }).results;
+    const run = shapeReportRun({
+      ...s,
+      results,
+      climate: {
+        ...s.climate,
+        hours: 8760,
+        firstHourMs: series.timestampsMs[0],
+        lastHourMs: series.timestampsMs[8759],
+        site: { name: 'Invented mesa', elevationM: 0, timeZone: 'UTC-07:00' },
+        utcOffsetMinutes: -420,
+      },
+    });
+    expect(results.hoursByYear.map((y) => y.year)).toEqual([2021]);
+    const rows = runSummaryRows(run);
+    const value = (figure: string) => rows.find((r) => r.figure === figure)?.value;
+    expect(value('Period (site standard time)')).toBe('2021-01-01 to 2021-12-31');
+    expect(value('Site standard time')).toBe('UTC−07:00');
+    expect(value('2021: calendar year')).toBe('full');
+    expect(rows.some((r) => r.figure.startsWith('2022'))).toBe(false);
+  });
+
+  it('marks a partial year in the summary as the run page does', () => {
+    const rows = runSummaryRows(shapeReportRun(source(7, 24)));
+    // 48 hours of July 2024 against the 8,784 hours of the leap year 2024 (Gregorian calendar).
+    expect(rows.find((r) => r.figure === '2024: calendar year')?.value).toBe('partial · left out (48 of 8784 h)');
   });
 });

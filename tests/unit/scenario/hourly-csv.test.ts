@@ -54,29 +54,33 @@ describe('writeHourlyCsv', () => {
       enthalpyKJPerKg: new Float64Array(n).fill(42.1),
       mechanicalFraction: Float64Array.from({ length: n }, (_, i) => (i % 4 === MODE.mechanical ? 0.25 : 0)),
       humidified: Uint8Array.from({ length: n }, (_, i) => (i % 8 === 0 ? 1 : 0)),
+      // UTC−07:00 (a fixed-offset site): 1999-12-31 22:00 UTC is 15:00 on its standard time
+      utcOffsetMinutes: -420,
     };
     const lines = csvText(input).split('\n');
     expect(lines[0]).toBe(HOURLY_CSV_COLUMNS.join(','));
-    expect(lines[0]).toBe('timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified');
+    expect(lines[0]).toBe('timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time');
     expect(lines).toHaveLength(n + 2); // header, n rows, final empty string after the last newline
-    expect(lines[1]).toBe('1999-12-31T22:00Z,free,-5.50,-1.23,-3.00,55.56,12.346,42.10,0.000,1');
-    expect(lines[3]).toBe('2000-01-01T00:00Z,mechanical,-3.50,-1.23,-3.00,55.56,12.346,42.10,0.250,0');
-    expect(lines[4]).toBe('2000-01-01T01:00Z,no_data,,-1.23,-3.00,55.56,12.346,42.10,,');
+    expect(lines[1]).toBe('1999-12-31T22:00Z,free,-5.50,-1.23,-3.00,55.56,12.346,42.10,0.000,1,1999-12-31T15:00');
+    expect(lines[3]).toBe('2000-01-01T00:00Z,mechanical,-3.50,-1.23,-3.00,55.56,12.346,42.10,0.250,0,1999-12-31T17:00');
+    expect(lines[4]).toBe('2000-01-01T01:00Z,no_data,,-1.23,-3.00,55.56,12.346,42.10,,,1999-12-31T18:00');
+    // 2000-01-01 07:00 UTC is midnight of the new year at UTC−07:00
+    expect(lines[10]).toBe('2000-01-01T07:00Z,adiabatic,3.50,-1.23,-3.00,55.56,12.346,42.10,0.000,0,2000-01-01T00:00');
     const last = lines[n];
     expect(last.startsWith(new Date(t0 + (n - 1) * 3_600_000).toISOString().slice(0, 16))).toBe(true);
   });
 
   it('leaves the humidified column empty for a run made before engine 2.0.0 (no stored flags)', () => {
     const one = Float64Array.of(1);
-    const lines = csvText({ timestampsMs: Float64Array.of(0), modes: Uint8Array.of(MODE.free), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: one, humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: Float64Array.of(0), humidified: null }).split('\n');
-    expect(lines[1]).toBe('1970-01-01T00:00Z,free,1.00,1.00,1.00,1.00,1000.000,1.00,0.000,');
+    const lines = csvText({ timestampsMs: Float64Array.of(0), modes: Uint8Array.of(MODE.free), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: one, humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: Float64Array.of(0), humidified: null, utcOffsetMinutes: 0 }).split('\n');
+    expect(lines[1]).toBe('1970-01-01T00:00Z,free,1.00,1.00,1.00,1.00,1000.000,1.00,0.000,,1970-01-01T00:00');
   });
 
   it('refuses columns of different lengths, naming the column', () => {
     const one = Float64Array.of(1);
     expect(() =>
       writeHourlyCsv(
-        { timestampsMs: one, modes: Uint8Array.of(0), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: new Float64Array(2), humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: one, humidified: null },
+        { timestampsMs: one, modes: Uint8Array.of(0), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: new Float64Array(2), humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: one, humidified: null, utcOffsetMinutes: 0 },
         () => {},
       ),
     ).toThrow(/rhPct has 2 hours/);

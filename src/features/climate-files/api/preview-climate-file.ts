@@ -1,5 +1,5 @@
 import type { DetectedMapping, HumidityKind, ImportReport } from '../../../../shared/climate/types';
-import { sendFile, uploadQuery, type UploadParams, type UploadProgress } from './send-file';
+import { sendFile, uploadQuery, type UploadBody, type UploadParams, type UploadProgress } from './send-file';
 
 export interface PreviewHour {
   timestampMs: number;
@@ -24,7 +24,7 @@ export interface ClimatePreview {
 export const previewClimateFile = (
   projectId: number,
   siteId: number,
-  file: Blob,
+  file: UploadBody,
   params: UploadParams,
   onProgress?: (p: UploadProgress) => void,
 ) => sendFile<ClimatePreview>(`/projects/${projectId}/sites/${siteId}/climate-files/preview?${uploadQuery(params)}`, file, onProgress);

@@ -26,20 +26,32 @@ export function uploadQuery(params: UploadParams): string {
   return query.toString();
 }
 
+/** What an upload sends: one file as the raw body, or several files read as one climate file. */
+export type UploadBody = Blob | File[];
+
+/** Bytes of the files of an upload, for the progress bar before the browser knows the encoded size. */
+export function uploadBytes(body: UploadBody): number {
+  return Array.isArray(body) ? body.reduce((sum, f) => sum + f.size, 0) : body.size;
+}
+
 /**
- * Posts the raw file as the request body with XMLHttpRequest, whose upload events give real
- * progress (fetch has none), and answers like apiFetch: the parsed JSON, or an ApiError in the
- * server's one error shape.
+ * Posts the upload with XMLHttpRequest, whose upload events give real progress over the whole body
+ * (fetch has none): one file as the raw body, several as multipart/form-data (one `files` part each).
+ * Answers like apiFetch: the parsed JSON, or an ApiError in the server's one error shape.
  */
-export function sendFile<T>(path: string, file: Blob, onProgress?: (p: UploadProgress) => void, signal?: AbortSignal): Promise<T> {
+export function sendFile<T>(path: string, upload: UploadBody, onProgress?: (p: UploadProgress) => void, signal?: AbortSignal): Promise<T> {
+  const several = Array.isArray(upload) && upload.length > 1;
+  const file = Array.isArray(upload) ? (several ? null : upload[0]) : upload;
+  const size = uploadBytes(upload);
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', `/api${path}`);
-    xhr.setRequestHeader('content-type', 'text/csv');
+    // a FormData body sets its own multipart content type with the boundary
+    if (!several) xhr.setRequestHeader('content-type', 'text/csv');
     xhr.setRequestHeader('x-tramontane-request', '1');
     xhr.withCredentials = true;
-    xhr.upload.onprogress = (e) => onProgress?.({ sentBytes: e.loaded, totalBytes: e.lengthComputable ? e.total : file.size, phase: 'sending' });
-    xhr.upload.onload = () => onProgress?.({ sentBytes: file.size, totalBytes: file.size, phase: 'processing' });
+    xhr.upload.onprogress = (e) => onProgress?.({ sentBytes: e.loaded, totalBytes: e.lengthComputable ? e.total : size, phase: 'sending' });
+    xhr.upload.onload = () => onProgress?.({ sentBytes: size, totalBytes: size, phase: 'processing' });
     xhr.onerror = () => reject(new ApiError(0, 'network', 'The upload did not reach the server. Check the connection and try again.'));
     xhr.onabort = () => reject(new ApiError(0, 'aborted', 'The upload was cancelled.'));
     xhr.onload = () => {
@@ -54,6 +66,10 @@ export function sendFile<T>(path: string, file: Blob, onProgress?: (p: UploadPro
       reject(new ApiError(xhr.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${xhr.status}.`, error?.details));
     };
     signal?.addEventListener('abort', () => xhr.abort());
-    xhr.send(file);
+    if (several) {
+      const form = new FormData();
+      for (const part of upload as File[]) form.append('files', part, part.name);
+      xhr.send(form);
+    } else xhr.send(file);
   });
 }

@@ -1,6 +1,6 @@
 import type { DetectedMapping, ImportReport } from '../../../../shared/climate/types';
 import type { ClimateFileListing } from './get-climate-files';
-import { sendFile, uploadQuery, type UploadParams, type UploadProgress } from './send-file';
+import { sendFile, uploadQuery, type UploadBody, type UploadParams, type UploadProgress } from './send-file';
 
 /** The 422 answer's details when the importer refuses the file. */
 export interface RejectedImportDetails {
@@ -12,7 +12,7 @@ export interface RejectedImportDetails {
 export const uploadClimateFile = (
   projectId: number,
   siteId: number,
-  file: Blob,
+  file: UploadBody,
   params: UploadParams,
   onProgress?: (p: UploadProgress) => void,
 ) =>

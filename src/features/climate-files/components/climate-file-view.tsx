@@ -1,8 +1,7 @@
 import { useMemo } from 'react';
 import { Link } from 'react-router-dom';
-import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
+import { standardOffsetMinutes, utcOffsetLabel } from '../../../../shared/time-zone';
 import { CarpetPlot } from '@/components/charts/carpet-plot';
-import { utcOffsetLabel } from '@/components/charts/chart-format';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';

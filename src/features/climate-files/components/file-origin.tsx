@@ -1,6 +1,6 @@
 import type { DetectedMapping, FileHeader, ImportReport, TypicalYearInfo } from '../../../../shared/climate/types';
 import { MONTH_SHORT } from '../../../../shared/calendar';
-import { fixedOffsetZone } from '../../../../shared/climate/formats/fixed-offset';
+import { fixedOffsetZone } from '../../../../shared/time-zone';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 

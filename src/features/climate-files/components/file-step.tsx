@@ -8,8 +8,8 @@ import { button, quietButton } from './wizard-buttons';
 /** Step 2: the file, its name in the project, the longest gap to fill and the clock its times are on; reading it sends it with a progress bar. */
 export function FileStep({
   siteName,
-  file,
-  setFile,
+  files,
+  setFiles,
   name,
   setName,
   maxGapHours,
@@ -22,8 +22,8 @@ export function FileStep({
   onRead,
 }: {
   siteName: string;
-  file: File | null;
-  setFile: (file: File | null) => void;
+  files: File[];
+  setFiles: (files: File[]) => void;
   name: string;
   setName: (name: string) => void;
   maxGapHours: number;
@@ -52,16 +52,19 @@ export function FileStep({
           <input
             id={`${ids}-file`}
             type="file"
-            accept=".csv,.tsv,.txt,text/csv,text/plain"
+            multiple
+            accept=".csv,.tsv,.txt,.epw,.dat,text/csv,text/plain"
             className="block text-sm file:mr-3 file:rounded file:border file:border-rule file:bg-panel file:px-3 file:py-1.5"
             onChange={(e) => {
-              const chosen = e.target.files?.[0] ?? null;
-              setFile(chosen);
-              if (chosen && !name) setName(chosen.name.replace(/\.[^.]+$/, ''));
+              const chosen = Array.from(e.target.files ?? []).sort((a, b) => a.name.localeCompare(b.name, 'en', { numeric: true }));
+              setFiles(chosen);
+              if (chosen.length > 0 && !name) setName(setNameOf(chosen));
             }}
           />
           <p className="text-xs text-ink-soft">
-            Comma, semicolon or tab separated text; decimal point or comma; one time column, date and time columns, or year/month/day/hour columns. Up to 64 MB.
+            Comma, semicolon or tab separated text, EPW, or fixed-width station records; one time column, date and time columns, or year/month/day/hour
+            columns. Choose several files (thirty yearly files, twelve monthly ones) to read them as one climate file: they must share one layout and are
+            joined in time order. Up to 64 MB in all.
           </p>
         </div>
         <div className="grid gap-4 sm:grid-cols-2">
@@ -102,13 +105,41 @@ export function FileStep({
           </select>
           <p className="text-xs text-ink-soft">Many weather files are written in local standard time all year; loggers often follow the wall clock. Times that carry an offset or Z are read as written.</p>
         </div>
-        {file && <p className="num text-xs text-ink-soft">{file.name} · {formatBytes(file.size)}</p>}
-        {progress && <UploadProgressBar progress={progress} label="Reading the file" />}
+        {files.length === 1 && <p className="num text-xs text-ink-soft">{files[0].name} · {formatBytes(files[0].size)}</p>}
+        {files.length > 1 && <ChosenFiles files={files} />}
+        {progress && <UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? `Reading ${files.length} files` : 'Reading the file'} />}
         <div className="flex gap-2">
           <button type="button" className={quietButton} onClick={onBack} disabled={busy}>Back</button>
-          <button type="submit" className={button} disabled={!file || busy || !gapValid}>Read the file</button>
+          <button type="submit" className={button} disabled={files.length === 0 || busy || !gapValid}>
+            {files.length > 1 ? `Read the ${files.length} files` : 'Read the file'}
+          </button>
         </div>
       </form>
     </Panel>
+  );
+}
+
+/** "2019–2021 (3 files)" for a set, the bare name for one file: the name the server would give it. */
+function setNameOf(files: File[]): string {
+  const bare = files.map((f) => f.name.replace(/\.[^.]+$/, ''));
+  return bare.length === 1 ? bare[0] : `${bare[0]}–${bare[bare.length - 1]} (${bare.length} files)`;
+}
+
+/** The files chosen for one climate file, with their sizes and the total. */
+function ChosenFiles({ files }: { files: File[] }) {
+  const total = files.reduce((sum, f) => sum + f.size, 0);
+  return (
+    <div className="text-xs" data-testid="chosen-files">
+      <p className="text-ink-soft">
+        {files.length} files, {formatBytes(total)} in all, read as one climate file (joined in time order on the server):
+      </p>
+      <ul className="num mt-1 max-h-40 columns-2 overflow-y-auto text-ink-soft sm:columns-3">
+        {files.map((f) => (
+          <li key={f.name}>
+            {f.name} · {formatBytes(f.size)}
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }

@@ -1,7 +1,8 @@
 import type { UploadProgress } from '../api/send-file';
 
 /** Bytes sent of the file, then an indeterminate stripe while the server reads and checks it. */
-export function UploadProgressBar({ progress, label }: { progress: UploadProgress; label: string }) {
+export function UploadProgressBar({ progress, label, files = 1 }: { progress: UploadProgress; label: string; files?: number }) {
+  const what = files > 1 ? `${files} files` : 'the file';
   const pct = progress.totalBytes ? Math.round((100 * progress.sentBytes) / progress.totalBytes) : 0;
   const processing = progress.phase === 'processing';
   return (
@@ -12,15 +13,15 @@ export function UploadProgressBar({ progress, label }: { progress: UploadProgres
         aria-valuemin={0}
         aria-valuemax={100}
         aria-valuenow={processing ? undefined : pct}
-        aria-valuetext={processing ? 'Sent; the server is reading the file' : `${pct} % sent`}
+        aria-valuetext={processing ? `Sent; the server is reading ${what}` : `${pct} % sent`}
         className="h-2.5 w-full overflow-hidden rounded bg-mist"
       >
         <div className={`h-full bg-harbour-soft transition-[width] ${processing ? 'animate-pulse' : ''}`} style={{ width: `${processing ? 100 : pct}%` }} />
       </div>
       <p className="num text-xs text-ink-soft">
         {processing
-          ? `${formatBytes(progress.totalBytes)} sent · the server is reading and checking the file…`
-          : `${formatBytes(progress.sentBytes)} of ${formatBytes(progress.totalBytes)} sent (${pct} %)`}
+          ? `${formatBytes(progress.totalBytes)} sent · the server is reading and checking ${what}…`
+          : `${formatBytes(progress.sentBytes)} of ${formatBytes(progress.totalBytes)} sent (${pct} %)${files > 1 ? ` · ${files} files` : ''}`}
       </p>
     </div>
   );

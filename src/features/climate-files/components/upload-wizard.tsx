@@ -6,7 +6,7 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { climateFilesQueryKey } from '../api/get-climate-files';
 import { previewClimateFile, type ClimatePreview } from '../api/preview-climate-file';
-import type { UploadProgress } from '../api/send-file';
+import { uploadBytes, type UploadProgress } from '../api/send-file';
 import { uploadClimateFile, type RejectedImportDetails } from '../api/upload-climate-file';
 import { draftFromDetected, overrideFromDraft, type MappingDraft } from '../lib/mapping-draft';
 import { MappingEditor } from './mapping-editor';
@@ -57,7 +57,7 @@ export function UploadWizard({
     sites.some((s) => s.id === initialSiteId) ? initialSiteId! : sites.length === 1 ? sites[0].id : null,
   );
   const [creatingSite, setCreatingSite] = useState(sites.length === 0);
-  const [file, setFile] = useState<File | null>(null);
+  const [files, setFiles] = useState<File[]>([]);
   const [name, setName] = useState('');
   const [maxGapHours, setMaxGapHours] = useState(6);
   const [timeBasis, setTimeBasis] = useState<TimeBasis>('site-civil');
@@ -73,7 +73,7 @@ export function UploadWizard({
   const busy = progress !== null;
 
   const params = (mappingDraft: MappingDraft | null) => ({
-    fileName: file?.name ?? 'upload.csv',
+    fileName: files[0]?.name ?? 'upload.csv',
     name: name.trim() || undefined,
     maxGapHours,
     timeBasis,
@@ -83,18 +83,18 @@ export function UploadWizard({
 
   function explain(e: unknown): string {
     if (!(e instanceof ApiError)) return 'Something unexpected went wrong. Try again.';
-    if (e.status === 413) return `${e.message} Split the file by period, or remove columns it does not need.`;
+    if (e.status === 413) return `${e.message} ${files.length > 1 ? 'Send the set in parts' : 'Split the file by period'}, or remove columns it does not need.`;
     if (e.status === 403) return 'Your role in this project lets you read climate files but not add them. Ask an owner for the engineer role.';
     return e.message;
   }
 
   async function read(mappingDraft: MappingDraft | null, forSiteId = siteId) {
-    if (!file || !forSiteId) return;
+    if (files.length === 0 || !forSiteId) return;
     setError(null);
     setRejected(null);
-    setProgress({ sentBytes: 0, totalBytes: file.size, phase: 'sending' });
+    setProgress({ sentBytes: 0, totalBytes: uploadBytes(files), phase: 'sending' });
     try {
-      const result = await previewClimateFile(projectId, forSiteId, file, params(mappingDraft), setProgress);
+      const result = await previewClimateFile(projectId, forSiteId, files, params(mappingDraft), setProgress);
       setPreview(result);
       if (!mappingDraft) setFirstDetected(result.mapping);
       const next = mappingDraft ?? draftFromDetected(result.mapping);
@@ -109,12 +109,12 @@ export function UploadWizard({
   }
 
   async function store() {
-    if (!file || !siteId || !draft) return;
+    if (files.length === 0 || !siteId || !draft) return;
     setError(null);
     setRejected(null);
-    setProgress({ sentBytes: 0, totalBytes: file.size, phase: 'sending' });
+    setProgress({ sentBytes: 0, totalBytes: uploadBytes(files), phase: 'sending' });
     try {
-      const result = await uploadClimateFile(projectId, siteId, file, params(draft), setProgress);
+      const result = await uploadClimateFile(projectId, siteId, files, params(draft), setProgress);
       await queryClient.invalidateQueries({ queryKey: climateFilesQueryKey(projectId) });
       onStored(result.climateFile.id);
     } catch (e) {
@@ -166,8 +166,8 @@ export function UploadWizard({
       {step === 'file' && (
         <FileStep
           siteName={site?.name ?? 'the site'}
-          file={file}
-          setFile={setFile}
+          files={files}
+          setFiles={setFiles}
           name={name}
           setName={setName}
           maxGapHours={maxGapHours}
@@ -212,7 +212,7 @@ export function UploadWizard({
               </button>
               {stale && <span className="text-xs text-signal-warn">Changed: the hours below still show the previous reading.</span>}
             </div>
-            {progress && <div className="mt-3"><UploadProgressBar progress={progress} label="Reading the file again" /></div>}
+            {progress && <div className="mt-3"><UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? 'Reading the files again' : 'Reading the file again'} /></div>}
           </Panel>
           <Panel title="The first hours as interpreted">
             {preview.humidityKind ? (
@@ -243,11 +243,11 @@ export function UploadWizard({
           <Panel title="Validation report">
             <ValidationReport report={rejected ?? preview.report} />
           </Panel>
-          {progress && <UploadProgressBar progress={progress} label="Storing the file" />}
+          {progress && <UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? `Storing the ${files.length} files as one climate file` : 'Storing the file'} />}
           <div className="flex flex-wrap items-center gap-2">
             <button type="button" className={quietButton} onClick={() => setStep('mapping')} disabled={busy}>Back to the mapping</button>
             <button type="button" className={button} onClick={() => void store()} disabled={busy || !preview.ok}>
-              Store climate file
+              {files.length > 1 ? `Store ${files.length} files as one climate file` : 'Store climate file'}
             </button>
             {!preview.ok && <span className="text-sm text-signal-bad">Fix the mapping or the file first; nothing is stored while the report has errors.</span>}
           </div>

@@ -3,6 +3,7 @@
  * mapping step. Pure: tested without a browser.
  */
 import type { HumidityKind } from '../../../../shared/climate/types';
+import { wallClockReader, wallClockText } from '../../../../shared/time-zone';
 import { formatQuantity, unitOf, type QuantityKind } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 
@@ -70,11 +71,11 @@ const flags = ['measured', 'filled', 'missing'] as const;
 /** Each previewed hour in SI and in the person's unit system. */
 export function previewRows(hours: PreviewHourInput[], kind: HumidityKind, system: UnitSystem, timeZone = 'UTC'): PreviewRow[] {
   const h = humidityQuantity(kind);
-  // Swedish order is year-month-day hour:minute, the ISO layout without the T.
-  const local = new Intl.DateTimeFormat('sv-SE', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+  // The shared reader takes IANA names and fixed offsets (UTC-07:00) alike; Intl alone refuses the latter.
+  const local = wallClockReader(timeZone);
   return hours.map((hour) => ({
     timeUtc: new Date(hour.timestampMs).toISOString().slice(0, 16).replace('T', ' '),
-    timeLocal: local.format(hour.timestampMs),
+    timeLocal: wallClockText(local(hour.timestampMs)),
     flag: flags[hour.flag] ?? 'missing',
     values: {
       dryBulb: { si: show('temperature', 'SI', hour.dryBulbC), shown: show('temperature', system, hour.dryBulbC) },

@@ -1,4 +1,4 @@
-import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { utcOffsetLabel } from '../../../../shared/time-zone';
 
 /** Whole hours with thousands separators. */
 export const hoursText = (h: number) => Math.round(h).toLocaleString('en');

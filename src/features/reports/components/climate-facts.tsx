@@ -1,10 +1,10 @@
-import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { standardPeriod, utcOffsetLabel } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
-import { day, humidityWords } from './report-format';
+import { humidityWords } from './report-format';
 import { Facts } from './report-layout';
 
 /** Where the site is and which clock its months are on. */
@@ -30,12 +30,12 @@ export function ClimateFacts({ run }: { run: ReportRun }) {
   const items: Array<[string, React.ReactNode]> = [
     ['Climate file', c.name],
     ['Uploaded as', c.fileName ?? 'the file has since been deleted from the project'],
-    ['Period', <span className="num">{day(c.firstHourMs)} to {day(c.lastHourMs)} ({c.hours.toLocaleString('en')} hours)</span>],
+    ['Period', <span className="num">{standardPeriod(c.firstHourMs, c.lastHourMs, run.site.utcOffsetMinutes)} ({c.hours.toLocaleString('en')} hours, site standard time)</span>],
     ['Humidity in the file', <span data-testid="humidity-reading">{humidityReadingWords(c.humidityOverIce)}</span>],
   ];
   if (v) {
     items.push(
-      ['Calendar years', <span className="num">{v.years.join(', ')}</span>],
+      ['Calendar years', <span className="num">{run.results.hoursByYear.map((y) => y.year).join(', ')}</span>],
       ['Completeness', <span className="num" data-testid="completeness">{v.completenessPct.toFixed(1)} % of hours have data</span>],
       [
         'Hours',

@@ -11,7 +11,8 @@ import { ClimateFacts, SiteFacts } from './climate-facts';
 import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
-import { dateTime, day, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
+import { dateTime, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
+import { standardPeriod } from '../../../../shared/time-zone';
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
 import { ModeShareBar } from '@/components/ui/mode-marks';
 import { runDisplayName } from '@/lib/sweep-value';
@@ -97,7 +98,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
               runDisplayName(run.scenario.name, run.sweepPoint, unitSystem),
               <span className="text-xs">{systemInWords(run)}</span>,
               <span className="text-xs">
-                {run.site.name} · {run.climate.name} ({day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)})
+                {run.site.name} · {run.climate.name} ({standardPeriod(run.climate.firstHourMs, run.climate.lastHourMs, run.site.utcOffsetMinutes)})
               </span>,
               <span className="text-xs">{run.envelope.label}</span>,
               <span className="num text-xs">{run.engineVersion}</span>,

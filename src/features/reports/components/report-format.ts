@@ -14,7 +14,6 @@ export function share(part: number, whole: number): string {
 export const mwh = (kwh: number | null | undefined) => (kwh === null || kwh === undefined ? '–' : `${fixed(kwh / 1000, 1)} MWh`);
 export const kw = (v: number) => `${fixed(v, 0)} kW`;
 export const ratio = (v: number | null | undefined, digits = 3) => (v === null || v === undefined ? '–' : fixed(v, digits));
-export const day = (ms: number | string) => new Date(ms).toISOString().slice(0, 10);
 export const dateTime = (iso: string) => `${iso.slice(0, 16).replace('T', ' ')} UTC`;
 
 const systemWords: Record<ReportRun['scenario']['system']['kind'], string> = {

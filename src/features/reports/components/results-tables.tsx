@@ -17,6 +17,7 @@ import {
 } from '../../../../shared/report/mode-subsets';
 import type { ModeHours, YearResults } from '../../../../shared/scenario/results';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
+import { PARTIAL_YEAR_MARK, partialYearsSentence, yearStatistics } from '../../../../shared/scenario/year-statistics';
 import { hours, kw, mwh, ratio, share } from './report-format';
 import { Facts, ReportTable } from './report-layout';
 
@@ -73,19 +74,32 @@ export function MonthlyTable({ byMonth, engineVersion }: { byMonth: (ModeHours &
   );
 }
 
+/** Each calendar year on the site's standard time; a partial year is marked and named as on the run page. */
 export function YearTable({ years, unitSystem, engineVersion }: { years: YearResults[]; unitSystem: UnitSystem; engineVersion: string }) {
+  const { partialYears } = yearStatistics(years);
+  const partial = new Set(partialYears.map((p) => p.year));
+  const note = partialYearsSentence(partialYears);
   return (
     <div className="space-y-1">
       <ReportTable
         testId="report-years"
-        caption="Hours, cooling energy and water for each calendar year"
+        caption="Hours, cooling energy and water for each calendar year (site standard time)"
         head={['Year', ...modeRowSpecs.map((spec) => <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>{modeColumnLabel(spec, modeLabels)}</span>), 'Cooling energy', 'Water']}
         rows={years.map((y) => ({
           key: String(y.year),
-          cells: [y.year, ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(y, spec))), mwh(y.coolingKwh), formatQuantity('water', unitSystem, y.waterL)],
+          cells: [
+            <>
+              {y.year}
+              {partial.has(y.year) && <span className="ml-1.5 rounded bg-mist px-1 text-[11px]">{PARTIAL_YEAR_MARK}</span>}
+            </>,
+            ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(y, spec))),
+            mwh(y.coolingKwh),
+            formatQuantity('water', unitSystem, y.waterL),
+          ],
         }))}
       />
       {years.length > 0 && !countsSubsets({ hours: years[0] }) && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
+      {note && <p className="text-xs text-ink-soft" data-testid="report-partial-years">{note}</p>}
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { standardDay, utcOffsetLabel } from '../../../../shared/time-zone';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { Notice } from '@/components/ui/notice';
 import { ResultCautions } from '@/components/ui/result-cautions';
@@ -9,7 +9,7 @@ import { ClimateFacts, SiteFacts } from './climate-facts';
 import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
-import { dateTime, day, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
+import { dateTime, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
 import { ReportSection, ReportSheet, SubHeading } from './report-layout';
 import { EnergyTable, ExcursionFacts, ModeHoursTable, MonthlyTable, WaterTable, YearTable } from './results-tables';
 import { runDisplayName } from '@/lib/sweep-value';
@@ -49,7 +49,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
 
       <ReportSection id="job" title="1. The job">
         <p className="text-sm leading-relaxed">
-          From {day(run.climate.firstHourMs)} to {day(run.climate.lastHourMs)}, for how many hours can the IT halls at {run.site.name}, cooled by{' '}
+          From {standardDay(run.climate.firstHourMs, run.site.utcOffsetMinutes)} to {standardDay(run.climate.lastHourMs, run.site.utcOffsetMinutes)} (site standard time), for how many hours can the IT halls at {run.site.name}, cooled by{' '}
           {systemInWords(run)}, run on outside air or water alone (free cooling), with evaporative help (adiabatic assist), or only with
           compressors (mechanical), keeping the IT inlet within {run.envelope.label}; and what does that mean in energy, water and peak
           mechanical load?

@@ -1,4 +1,5 @@
 import { formatQuantity } from '@/lib/quantity';
+import { standardPeriod, utcOffsetLabel } from '../../../../shared/time-zone';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
 import { flattenInputs } from '../../../../shared/report/inputs';
@@ -26,7 +27,7 @@ export function RunInputs({ run }: { run: RunRecord }) {
           ))}
         </tbody>
       </table>
-      <dl className="grid h-min grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-xs">
+      <dl className="grid h-min grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-xs" data-testid="run-climate">
         <dt className="text-ink-soft">Climate file</dt>
         <dd>{c.name}</dd>
         <dt className="text-ink-soft">Site</dt>
@@ -35,7 +36,7 @@ export function RunInputs({ run }: { run: RunRecord }) {
         </dd>
         <dt className="text-ink-soft">Hours</dt>
         <dd className="num">
-          {c.hours.toLocaleString('en')} ({new Date(c.firstHourMs).toISOString().slice(0, 10)} to {new Date(c.lastHourMs).toISOString().slice(0, 10)})
+          {c.hours.toLocaleString('en')} ({standardPeriod(c.firstHourMs, c.lastHourMs, c.utcOffsetMinutes)}, site standard time {utcOffsetLabel(c.utcOffsetMinutes)})
         </dd>
         <dt className="text-ink-soft">File checksum</dt>
         <dd className="num break-all">sha256 {c.sha256}</dd>

@@ -1,5 +1,5 @@
 import { Link, useParams } from 'react-router-dom';
-import { utcOffsetLabel } from '@/components/charts/chart-format';
+import { utcOffsetLabel } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';

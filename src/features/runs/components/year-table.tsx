@@ -3,7 +3,7 @@ import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
 import { countsSubsets, hoursOfSpec, hoursText as countText, modeRowSpecs, notCountedShort } from '../../../../shared/report/mode-subsets';
 import type { YearResults } from '../../../../shared/scenario/results';
-import { WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
+import { PARTIAL_YEAR_MARK, partialYearsSentence, WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
 
 const hoursText = (h: number) => Math.round(h).toLocaleString('en');
 const mwhText = (kwh: number) => (kwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
@@ -52,7 +52,7 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
               <tr key={y.year} className={`border-b border-rule/60 ${partial.has(y.year) ? 'text-ink-soft italic' : ''}`}>
                 <th scope="row" className="py-0.5 text-left font-normal">
                   {y.year}
-                  {partial.has(y.year) && <span className="ml-1.5 rounded bg-mist px-1 font-sans text-[11px] not-italic">partial · left out</span>}
+                  {partial.has(y.year) && <span className="ml-1.5 rounded bg-mist px-1 font-sans text-[11px] not-italic">{PARTIAL_YEAR_MARK}</span>}
                   {stats.worst?.year === y.year && <span className="ml-1.5 rounded bg-signal-bad px-1 font-sans text-[11px] text-paper">worst</span>}
                 </th>
                 {modeRowSpecs.map((spec) => (
@@ -115,12 +115,7 @@ function YearNotes({ stats }: { stats: ReturnType<typeof yearStatistics> }) {
         column is ordered on its own, so the median year for free cooling need not be the median year for water. Spread is the sample standard
         deviation (divisor N − 1) and the range from the smallest to the largest year.
       </p>
-      {stats.partialYears.length > 0 && (
-        <p>
-          Left out as partial (more than a day short of the calendar year's hours):{' '}
-          {stats.partialYears.map((p) => `${p.year} (${hoursText(p.hours)} of ${hoursText(p.calendarHours)} h)`).join(', ')}.
-        </p>
-      )}
+      {stats.partialYears.length > 0 && <p>{partialYearsSentence(stats.partialYears)}</p>}
       {!stats.metrics && <p>No full calendar year in this file, so no year statistics.</p>}
     </div>
   );

@@ -156,7 +156,7 @@ export function SiteForm({
         {field(
           'timeZone',
           'Time zone',
-          'IANA name such as Europe/Oslo; reads local timestamps in files.',
+          'IANA name such as Europe/Oslo (with daylight saving), or a fixed offset such as UTC-07:00 (standard time all year); reads local timestamps in files.',
           <>
             <input {...aria('timeZone')} list={`${ids}-zones`} className={inputClass} {...form.register('timeZone')} />
             <datalist id={`${ids}-zones`}>

@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { standardPressurePa } from '../../../../shared/psychrometrics';
-import { standardOffsetMinutes } from '../../../../shared/climate/local-time';
+import { standardOffsetMinutes, utcOffsetLabel } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
@@ -9,12 +9,6 @@ import { useUnitSystem } from '@/lib/unit-system';
 import { useDeleteSite } from '../api/delete-site';
 import { useSites, type Site } from '../api/get-sites';
 import { SiteForm } from './site-form';
-
-function offsetWords(minutes: number): string {
-  const sign = minutes < 0 ? '−' : '+';
-  const abs = Math.abs(minutes);
-  return `UTC${sign}${String(Math.floor(abs / 60)).padStart(2, '0')}:${String(abs % 60).padStart(2, '0')}`;
-}
 
 const degrees = (v: number | null) => (v === null ? '–' : `${v.toFixed(3)}°`);
 
@@ -56,7 +50,7 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
     ['Elevation', formatQuantity('elevation', unitSystem, site.elevationM)],
     ['Standard pressure', formatQuantity('pressure', unitSystem, standardPressurePa(site.elevationM)), 'used when a file has no pressure (standard atmosphere)'],
     ['Latitude, longitude', site.latitude === null && site.longitude === null ? 'not given' : `${degrees(site.latitude)}, ${degrees(site.longitude)}`],
-    ['Time zone', site.timeZone, `standard time ${offsetWords(standardOffsetMinutes(site.timeZone))}; reads local timestamps in files`],
+    ['Time zone', site.timeZone, `standard time ${utcOffsetLabel(standardOffsetMinutes(site.timeZone))}; reads local timestamps in files`],
   ];
   return (
     <div className="space-y-5">
