@@ -208,5 +208,7 @@ function projectionReport(parent: ImportReport, series: ClimateSeries, d: Deriva
       `${(hours - measured - filled).toLocaleString('en')} without data; relative humidity bounded to 0–100 % in ${bounded.toLocaleString('en')} hours.`,
     counts: { ...parent.counts, hours, measuredHours: measured, filledHours: filled, missingHours: hours - measured - filled },
     issues: [],
+    // The parent's series was stored over liquid water whatever its file said; the projection's RH is computed over water.
+    humidityOverIce: false,
   };
 }

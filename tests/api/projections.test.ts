@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import { eq } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { zeroFactors, type ChangeFactors } from '../../shared/morphing';
@@ -45,7 +46,8 @@ beforeAll(async () => {
     .send({ name: 'Veldhaven', elevationM: 120, timeZone: 'Europe/Amsterdam' })
     .expect(201);
   const file = await request(t.app)
-    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv`)
+    // Read as a file whose sub-zero humidity is over ice: the stored series is over water either way.
+    .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=three-days.csv&humidityOverIce=true`)
     .set(asPerson(engineer))
     .set('content-type', 'text/csv')
     .send(threeDays)
@@ -131,6 +133,10 @@ describe('a stored projection', () => {
     expect(d.clampedHighHours + d.clampedLowHours).toBeTypeOf('number');
     expect(d.comparison.projection.dryBulbC[6].mean - d.comparison.parent.dryBulbC[6].mean).toBeCloseTo(8, 9);
     expect(res.body.parent.id).toBe(parentId);
+    // The parent was read over ice; the projection's humidity is computed over liquid water, and its report says so.
+    const reportOf = (id: number) => JSON.parse(t.db.select().from(climateFiles).where(eq(climateFiles.id, id)).get()!.reportJson);
+    expect(reportOf(parentId).humidityOverIce).toBe(true);
+    expect(reportOf(projectionId).humidityOverIce).toBe(false);
     const audits = projectionAudits();
     expect(audits).toHaveLength(1);
     expect(audits[0]).toMatchObject({ actorId: engineer.id, projectId, target: 'Veldhaven warmer July (projection)' });
