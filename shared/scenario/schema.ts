@@ -3,6 +3,7 @@
  * is accepted by the API and by the command line; field names are a contract.
  */
 import { z } from 'zod';
+import { withoutControlCharacters } from '../schemas/plain-text';
 
 const between = (min: number, max: number, unit: string) => {
   const message = `must be a number from ${min} to ${max}${unit ? ` ${unit}` : ''}`;
@@ -107,7 +108,12 @@ export const itLoadProfileSchema = z.discriminatedUnion(
     z.object({ kind: z.literal('yearly-ramp'), fractions: z.array(loadFraction).min(1, { error: 'must list at least one year' }).max(100, { error: 'must list at most 100 years' }) }),
     z.object({
       kind: z.literal('hourly-profile'),
-      name: z.string({ error: 'must be a text' }).trim().min(1, { error: 'must not be empty' }).max(200, { error: 'must be at most 200 characters' }),
+      name: z
+      .string({ error: 'must be a text' })
+      .trim()
+      .min(1, { error: 'must not be empty' })
+      .max(200, { error: 'must be at most 200 characters' })
+      .refine(...withoutControlCharacters('')),
       fractions: z.array(loadFraction).length(LOAD_PROFILE_HOURS, { error: `must hold ${LOAD_PROFILE_HOURS} hourly values` }),
     }),
   ],
@@ -158,7 +164,12 @@ export const energySchema = z.object({
 
 export const scenarioSchema = z
   .object({
-    name: z.string({ error: 'must be a text' }).trim().min(1, { error: 'must not be empty' }).max(200, { error: 'must be at most 200 characters' }),
+    name: z
+      .string({ error: 'must be a text' })
+      .trim()
+      .min(1, { error: 'must not be empty' })
+      .max(200, { error: 'must be at most 200 characters' })
+      .refine(...withoutControlCharacters('')),
     elevationM: between(-500, 6000, 'm'),
     envelope: envelopeSchema,
     system: systemSchema,

@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../support/test-app';
@@ -34,5 +35,14 @@ describe('names never carry control characters', () => {
   it('nothing was stored by the refused requests', async () => {
     const list = await request(t.app).get('/api/projects').set(asPerson(owner)).expect(200);
     expect(list.body.projects.map((p: { name: string; description: string }) => [p.name, p.description])).toEqual([['Quayside', 'Phase 1\nPhase 2\tlater']]);
+  });
+});
+
+describe('a scenario name', () => {
+  it('refuses control characters in the scenario schema, shared by the API and the command line', async () => {
+    const { parseScenario } = await import('../../shared/scenario/schema');
+    const scenario = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
+    const parsed = parseScenario({ ...scenario, name: 'Hall\u0000A' });
+    expect(parsed).toEqual({ ok: false, errors: ['name: must not contain control characters (U+0000) (got "Hall\\u0000A")'] });
   });
 });
