@@ -25,7 +25,7 @@ export interface HourlyEnergy {
   /** Cooling load carried by compressors, kW thermal. */
   mechanicalLoadKw: Float64Array;
   compressorKw: Float64Array;
-  /** Full-load compressor COP at the hour's lift; NaN outside mechanical hours. */
+  /** Full-load compressor COP at the hour's lift; 0 in hours without compressor load. */
   cop: Float64Array;
   /** Hall fans plus heat-rejection or scavenger fans, kW. */
   fanKw: Float64Array;
@@ -84,7 +84,7 @@ export function hourlyEnergy(
     itKw: new Float64Array(n),
     mechanicalLoadKw: new Float64Array(n),
     compressorKw: new Float64Array(n),
-    cop: new Float64Array(n).fill(Number.NaN),
+    cop: new Float64Array(n),
     fanKw: new Float64Array(n),
     pumpKw: new Float64Array(n),
     basinHeaterKw: new Float64Array(n),
@@ -157,12 +157,15 @@ export function hourlyEnergy(
     if (indirect) rejectionFanKw = fraction < 1 ? affinityPowerKw(designRejectionFanKw, scavengerRatio * fanSpeed) : 0;
     else if (waterSide) rejectionFanKw = affinityPowerKw(designRejectionFanKw, fanSpeed);
 
+    // The arrays start at 0: only the values that can be non-zero are written.
     out.itKw[i] = itKw;
-    out.mechanicalLoadKw[i] = mechanicalKw;
-    out.compressorKw[i] = compressorKw;
+    if (mechanicalKw > 0) {
+      out.mechanicalLoadKw[i] = mechanicalKw;
+      out.compressorKw[i] = compressorKw;
+    }
     out.fanKw[i] = hallFanKw + rejectionFanKw;
     const pumpKw = affinityPowerKw(designPumpKw, speedFraction(load, pumpMinSpeedFraction));
-    out.pumpKw[i] = waterSide ? pumpKw : 0;
+    if (waterSide) out.pumpKw[i] = pumpKw;
     out.rejectedKw[i] = rejectedKw;
 
     if (tower) {

@@ -21,8 +21,8 @@ export function MethodNotes({ data }: { data: ExcursionsResponse }) {
       {kind === 'direct-air' && (
         <ul className="list-disc space-y-0.5 pl-5">
           <li>Free cooling: outdoor air plus fan heat, mixed with return air so it never falls below the setpoint: max(setpoint, T + fan heat); moisture is the outdoor humidity ratio.</li>
-          <li>Adiabatic assist that cools: the air leaving the wetted stage at full effectiveness, T − ε(T − T_wb), plus fan heat, not below the setpoint; moisture where the outdoor wet-bulb line reaches that temperature.</li>
-          <li>Adiabatic assist that humidifies dry air: max(setpoint, T + fan heat), moisture raised to the control envelope's lower limit.</li>
+          <li>Free cooling with humidification (outdoor air drier than the lower limit): max(setpoint, T + fan heat), moisture raised to the control envelope's lower limit.</li>
+          <li>Adiabatic assist: the air leaving the wetted stage at full effectiveness, T − ε(T − T_wb), plus fan heat, not below the setpoint; moisture where the outdoor wet-bulb line reaches that temperature.</li>
           <li>Mechanical: the coil holds the setpoint and dehumidifies to the control envelope's upper moisture limit at the setpoint.</li>
         </ul>
       )}
@@ -30,7 +30,7 @@ export function MethodNotes({ data }: { data: ExcursionsResponse }) {
         <ul className="list-disc space-y-0.5 pl-5">
           <li>
             Free cooling and adiabatic assist: the air-to-air exchanger's steady supply with return = supply + IT temperature rise, S = T_sc + (ΔT_IT(1 − ε_hx) + fan heat)/ε_hx,
-            with scavenger air T_sc at the outdoor dry-bulb (free) or leaving the wetted stage (adiabatic); never below the setpoint.
+            with ε_hx the exchanger’s effectiveness at the scenario’s scavenger air ratio and scavenger air T_sc at the outdoor dry-bulb (free) or leaving the wetted stage (adiabatic); never below the setpoint. Fan heat is derived from the fan power: fan power share × IT temperature rise.
           </li>
           <li>Mechanical: the setpoint.</li>
           <li>Outdoor air never enters the hall: its moisture is assumed held at a dew point of {hallDewPoint === null ? '–' : t(hallDewPoint)}, the middle of the recommended range's dew-point limits, by humidity control not modelled here; only dry-bulb excursions can occur.</li>
