@@ -125,6 +125,8 @@ export function hourlyEnergy(
   const { dryBulbC, wetBulbC, humidityRatio } = outdoor;
   const { modes, mechanicalFraction, evaporationKgPerKgAir, humidified } = hours;
 
+  // The output columns as locals: the loop writes them without going through the out object each time.
+  const { itKw: outItKw, mechanicalLoadKw: outMechanicalLoadKw, compressorKw: outCompressorKw, cop: outCop, fanKw: outFanKw, pumpKw: outPumpKw, basinHeaterKw: outBasinHeaterKw, rejectedKw: outRejectedKw, humidificationL: outHumidificationL, evaporativeCoolingL: outEvaporativeCoolingL, driftL: outDriftL } = out;
   for (let i = 0; i < n; i++) {
     if (modes[i] === MODE.noData) continue;
     const load = loadFraction[i];
@@ -147,7 +149,7 @@ export function hourlyEnergy(
       else if (tower) mediumC = (twb >= freezeWetBulbC ? twb : t) + approachK;
       else mediumC = (eps > 0 ? t - eps * (t - twb) : t) + approachK;
       const cop = fullLoadCop(model, leavingC, mediumC);
-      out.cop[i] = cop;
+      outCop[i] = cop;
       compressorKw = compressorPowerKw(mechanicalKw, designCoolingKw, cop, model.minTurndown);
     }
     const rejectedKw = coolingLoadKw + compressorKw;
@@ -158,26 +160,26 @@ export function hourlyEnergy(
     else if (waterSide) rejectionFanKw = affinityPowerKw(designRejectionFanKw, fanSpeed);
 
     // The arrays start at 0: only the values that can be non-zero are written.
-    out.itKw[i] = itKw;
+    outItKw[i] = itKw;
     if (mechanicalKw > 0) {
-      out.mechanicalLoadKw[i] = mechanicalKw;
-      out.compressorKw[i] = compressorKw;
+      outMechanicalLoadKw[i] = mechanicalKw;
+      outCompressorKw[i] = compressorKw;
     }
-    out.fanKw[i] = hallFanKw + rejectionFanKw;
+    outFanKw[i] = hallFanKw + rejectionFanKw;
     const pumpKw = affinityPowerKw(designPumpKw, speedFraction(load, pumpMinSpeedFraction));
-    if (waterSide) out.pumpKw[i] = pumpKw;
-    out.rejectedKw[i] = rejectedKw;
+    if (waterSide) outPumpKw[i] = pumpKw;
+    outRejectedKw[i] = rejectedKw;
 
     if (tower) {
       if (twb < freezeWetBulbC) {
         // Dry (bypass) operation: no spray, no evaporation or drift; the basin heaters keep the water from freezing.
-        out.basinHeaterKw[i] = basinHeaterKw;
+        outBasinHeaterKw[i] = basinHeaterKw;
       } else {
         const w = humidityRatio[i];
         const hIn = 1.006 * t + w * (2501 + 1.86 * t);
         const gain = exit!.humidityRatioAt(hIn + TOWER_AIR_ENTHALPY_RISE_KJ_PER_KG) - w;
-        out.evaporativeCoolingL[i] = (gain > 0 ? gain * rejectedKw * towerAirKgPerHPerKw : 0) * LITRES_PER_KG;
-        out.driftL[i] = rejectedKw * driftKgPerHPerKw * LITRES_PER_KG;
+        outEvaporativeCoolingL[i] = (gain > 0 ? gain * rejectedKw * towerAirKgPerHPerKw : 0) * LITRES_PER_KG;
+        outDriftL[i] = rejectedKw * driftKgPerHPerKw * LITRES_PER_KG;
       }
       continue;
     }
@@ -191,9 +193,9 @@ export function hourlyEnergy(
     }
     if (waterKg > 0) {
       // Air-side pumps run only while the evaporative stage (or the wetted condenser) takes water.
-      out.pumpKw[i] = pumpKw;
-      if (humidified[i] === 1) out.humidificationL[i] = waterKg * LITRES_PER_KG;
-      else out.evaporativeCoolingL[i] = waterKg * LITRES_PER_KG;
+      outPumpKw[i] = pumpKw;
+      if (humidified[i] === 1) outHumidificationL[i] = waterKg * LITRES_PER_KG;
+      else outEvaporativeCoolingL[i] = waterKg * LITRES_PER_KG;
     }
   }
   return out;

@@ -124,6 +124,10 @@ describe('the new counts on screen', () => {
     await page.goto(`${h.baseUrl}/projects/${projectId}/compare/report?runs=${oldRun},${newRun}&baseline=${oldRun}`);
     await page.getByTestId('report-mixed-engines').waitFor();
     expect(await page.getByTestId('report-comparison').innerText()).toContain('of which with humidification');
+    // The monthly table gives each run's 'of which' counts too: — for the old run's months.
+    const monthly = await page.getByTestId('report-monthly-comparison').innerText();
+    expect(monthly).toContain('free cooling / with humidification / adiabatic assist / mechanical / partly economised');
+    expect(monthly).toMatch(/\d+ \/ — \/ \d+ \/ \d+ \/ —/);
     await h.shot('engine-counts-compare-report');
   });
 });

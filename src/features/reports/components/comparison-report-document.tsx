@@ -1,10 +1,9 @@
 import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
 import { MONTH_SHORT as monthShort } from '../../../../shared/calendar';
-import { hoursOfMode } from '../../../../shared/modes';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
-import { modeKeys, modeLabels } from '../../../../shared/modes';
+import { modeLabels } from '../../../../shared/modes';
 import type { ComparisonReportData, ReportRun } from '../../../../shared/report/report-data';
 import { comparisonRows, type ComparisonRow } from '../../../../shared/report/summary-table';
 import { ClimateFacts, SiteFacts } from './climate-facts';
@@ -17,7 +16,10 @@ import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-la
 import { ModeShareBar } from '@/components/ui/mode-marks';
 import { runDisplayName } from '@/lib/sweep-value';
 import { Notice } from '@/components/ui/notice';
-import { countsSubsets, mixedEngineNote, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';
+import { countsSubsets, hoursOfSpec, hoursText, mixedEngineNote, modeRowSpecs, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';
+
+/** The monthly table's figures per run: each mode with its 'of which' counts, no-data hours left out. */
+const monthlySpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
 
 function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
   if (value === null) return '–';
@@ -163,7 +165,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
         </div>
         <ReportTable
           testId="report-monthly-comparison"
-          caption={`Hours per month: ${modeKeys.slice(0, 3).map((k) => modeLabels[k].toLowerCase()).join(' / ')}`}
+          caption={`Hours per month: ${monthlySpecs.map((spec) => (spec.kind === 'mode' ? modeLabels[spec.mode].toLowerCase() : spec.subset.columnLabel)).join(' / ')}`}
           head={['Month', ...runs.map((run) => `Run ${run.id}`)]}
           rows={monthShort.map((name, i) => ({
             key: name,
@@ -171,7 +173,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
               name,
               ...runs.map((run) => {
                 const m = run.results.hoursByMonth.find((row) => row.month === i + 1);
-                return m ? modeKeys.slice(0, 3).map((k) => hoursOfMode(m, k).toLocaleString('en')).join(' / ') : '–';
+                return m ? monthlySpecs.map((spec) => hoursText(hoursOfSpec(m, spec))).join(' / ') : '–';
               }),
             ],
           }))}
