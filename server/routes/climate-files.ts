@@ -69,7 +69,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options })));
     if (parts.length === 1) return { query, parts, text: texts[0], result: results[0], original: parts[0] };
     const files = parts.map((p, i) => ({ fileName: p.fileName, bytes: p.bytes.byteLength, sha256: sha256(p.bytes), result: results[i] }));
-    const result = joinClimateFiles(files, query.maxGapHours);
+    const result = joinClimateFiles(files, query.maxGapHours, timeZone);
     const setName = query.name ?? defaultSetName(result.report.files.map((f) => f.fileName));
     // The originals of a set are kept as one POSIX tar archive, each file byte for byte, in time order; entries carry
     // no upload time (mtime 0), so the same set always gives the same archive and the same SHA-256.

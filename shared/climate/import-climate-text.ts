@@ -22,15 +22,15 @@ import { readRows } from './read-rows';
 import { recogniseColumns } from './recognise-columns';
 import { readPublishedFormat } from './formats/published-formats';
 import { checkHeaderAgainstSite } from './formats/site-check';
+import { importPeriodWords } from './import-period';
 import { noteStationLine, readStationLine } from './formats/station-line';
 import { findLayout, isBlankRow, isCommentRow, spreadSample } from './table-layout';
-import { formatUtc } from './time-cells';
 import { readHumidityOverIce } from './humidity-over-ice';
 import type { ClimateSeries, ImportOptions, ImportReport, ImportResult } from './types';
 
 export { DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-context';
 
-function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
+function finish(ctx: Context, series: ClimateSeries | null, siteTimeZone?: string): ImportResult {
   const ok = series !== null && !ctx.log.hasErrors();
   ctx.counts.issuesNotListed = ctx.log.notListed;
   const first = series && series.timestampsMs.length > 0 ? series.timestampsMs[0] : NaN;
@@ -43,7 +43,7 @@ function finish(ctx: Context, series: ClimateSeries | null): ImportResult {
   }
   const c = ctx.counts;
   const summary = ok
-    ? `Imported ${c.hours} hours from ${formatUtc(first)} to ${formatUtc(last)}: ${c.measuredHours} measured, ${c.filledHours} filled, ${c.missingHours} missing.`
+    ? `Imported ${c.hours} hours from ${importPeriodWords(first, last, siteTimeZone)}: ${c.measuredHours} measured, ${c.filledHours} filled, ${c.missingHours} missing.`
     : `Not imported: ${ctx.log.firstError()?.message ?? 'no usable data.'}`;
   const report: ImportReport = {
     ok,
@@ -85,7 +85,7 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
   try {
     const series = runImport(text, options ?? {}, ctx);
     checkHeaderAgainstSite(ctx, options?.site);
-    return finish(ctx, series);
+    return finish(ctx, series, options?.site?.timeZone);
   } catch (error) {
     ctx.log.error('unexpected-failure', `The importer failed unexpectedly (${error instanceof Error ? error.message : String(error)}); nothing was imported.`);
     return finish(ctx, null);

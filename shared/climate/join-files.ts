@@ -15,6 +15,7 @@
 import { interpolate } from './hourly-grid';
 import { MAX_SERIES_HOURS, MIN_MEASURED_SHARE, emptyCounts, emptyMapping, percent } from './import-context';
 import { IssueLog } from './issue-log';
+import { importPeriodWords } from './import-period';
 import { formatUtc, MS_PER_HOUR } from './time-cells';
 import { HOUR_FLAG, type ClimateSeries, type DetectedMapping, type FileInSet, type ImportCounts, type ImportResult } from './types';
 
@@ -42,7 +43,7 @@ function layoutOf(m: DetectedMapping): Record<string, string> {
 const utc = (ms: number) => formatUtc(ms).slice(0, 16).replace('T', ' ');
 
 /** Joins the imports of a set (any order) into one result; never throws. */
-export function joinClimateFiles(files: FileImport[], maxGapHours: number): ImportResult & { report: { files: FileInSet[] } } {
+export function joinClimateFiles(files: FileImport[], maxGapHours: number, siteTimeZone?: string): ImportResult & { report: { files: FileInSet[] } } {
   const log = new IssueLog();
   const counts: ImportCounts = emptyCounts();
   const fileReports: FileInSet[] = files.map((f) => ({
@@ -68,7 +69,7 @@ export function joinClimateFiles(files: FileImport[], maxGapHours: number): Impo
     }
   }
   const first = files[0];
-  const fail = (): ImportResult & { report: { files: FileInSet[] } } => finishSet(files, fileReports, log, counts, maxGapHours, null);
+  const fail = (): ImportResult & { report: { files: FileInSet[] } } => finishSet(files, fileReports, log, counts, maxGapHours, null, siteTimeZone);
   if (!first) {
     log.error('empty-input', 'No file was sent.');
     return fail();
@@ -175,7 +176,7 @@ export function joinClimateFiles(files: FileImport[], maxGapHours: number): Impo
     previous = f;
   }
   if (log.hasErrors()) return fail();
-  return finishSet(ordered, fileReports, log, counts, maxGapHours, series);
+  return finishSet(ordered, fileReports, log, counts, maxGapHours, series, siteTimeZone);
 }
 
 function sameValue(a: number, b: number): boolean {
@@ -189,6 +190,7 @@ function finishSet(
   counts: ImportCounts,
   maxGapHours: number,
   series: ClimateSeries | null,
+  siteTimeZone: string | undefined,
 ): ImportResult & { report: { files: FileInSet[] } } {
   if (series) {
     const n = series.flags.length;
@@ -220,7 +222,7 @@ function finishSet(
   const years = new Set<number>();
   for (const f of files) if (f.result.ok) for (const y of f.result.report.years) years.add(y);
   const summary = ok
-    ? `Imported ${counts.hours} hours from ${files.length} files, ${formatUtc(first)} to ${formatUtc(last)}: ${counts.measuredHours} measured, ${counts.filledHours} filled, ${counts.missingHours} missing.`
+    ? `Imported ${counts.hours} hours from ${files.length} files, ${importPeriodWords(first, last, siteTimeZone)}: ${counts.measuredHours} measured, ${counts.filledHours} filled, ${counts.missingHours} missing.`
     : `Not imported: ${log.firstError()?.message ?? 'no usable data.'}`;
   return {
     ok,

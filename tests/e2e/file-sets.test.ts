@@ -112,7 +112,7 @@ describe('weather files for a site on a fixed UTC offset', () => {
     expect(rows.map((r) => r.split('\t')[0])).toEqual(['red-mesa-2021.csv', 'red-mesa-2022.csv', 'red-mesa-2023.csv']);
     // each file: 8,760 hours on lines 2–8761
     for (const row of rows) expect(row).toMatch(/8,760\s+2–8761/);
-    expect(await page.getByTestId('validation-report').innerText()).toContain('Imported 26280 hours from 3 files');
+    expect(await page.getByTestId('validation-report').innerText()).toContain('Imported 26280 hours from 3 files, 2021-01-01 00:00 to 2023-12-31 23:00 site standard time (UTC−07:00)');
     await h.shot('file-sets-report-si');
     await page.getByRole('button', { name: 'Store 3 files as one climate file' }).click();
     await page.waitForURL(/\/climate-files\/\d+$/);
