@@ -6,6 +6,23 @@ import { freshBundle } from './fresh-bundle.mjs';
 
 type Tasks = typeof tasks;
 
+/**
+ * Longest one pool task may run before it is stopped and its thread freed: far above any real task (a 99-year run
+ * or import takes seconds), so only a stuck or hostile input meets it. A caller's own signal (a closed request)
+ * stops a task sooner.
+ */
+export const TASK_TIME_LIMIT_MS = 120_000;
+
+/** A pool task stopped at its time limit. */
+export class TaskTimeLimitError extends Error {
+  constructor(
+    readonly task: string,
+    readonly timeLimitMs: number,
+  ) {
+    super(`The ${task} task was stopped after ${Math.round(timeLimitMs / 1000)} s, its time limit.`);
+  }
+}
+
 /** Set to true by esbuild in the production server bundle (server/build.mjs); undefined when run from source. */
 declare const __TRAMONTANE_BUNDLE__: boolean | undefined;
 
@@ -21,7 +38,7 @@ export interface WorkerPool {
   run<K extends TaskName>(
     task: K,
     input: Parameters<Tasks[K]>[0],
-    options?: { transferList?: Transferable[]; signal?: AbortSignal },
+    options?: { transferList?: Transferable[]; signal?: AbortSignal; timeLimitMs?: number },
   ): Promise<Awaited<ReturnType<Tasks[K]>>>;
   readonly threads: number;
   destroy(): Promise<void>;
@@ -44,8 +61,15 @@ export function createWorkerPool(options: { threads?: number } = {}): WorkerPool
   });
   return {
     threads,
-    run: (task, input, { transferList, signal } = {}) =>
-      piscina.run({ task, input }, { transferList: transferList as never, signal }),
+    run: async (task, input, { transferList, signal, timeLimitMs = TASK_TIME_LIMIT_MS } = {}) => {
+      const limit = AbortSignal.timeout(timeLimitMs);
+      try {
+        return await piscina.run({ task, input }, { transferList: transferList as never, signal: signal ? AbortSignal.any([signal, limit]) : limit });
+      } catch (error) {
+        if (limit.aborted && !signal?.aborted) throw new TaskTimeLimitError(task, timeLimitMs);
+        throw error;
+      }
+    },
     destroy: () => piscina.destroy(),
   };
 }

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { z } from 'zod';
 import { HttpError, type ApiErrorBody } from '../http-error';
+import { TaskTimeLimitError } from '../../workers/pool';
 
 export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.originalUrl}.`));
@@ -23,6 +24,11 @@ export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler
       const fields = error.issues.map((issue) => ({ path: issue.path.join('.'), message: issue.message }));
       const summary = fields.map((f) => (f.path ? `${f.path}: ${f.message}` : f.message)).join('; ');
       res.status(400).json(body('invalid_request', summary, fields));
+      return;
+    }
+    if (error instanceof TaskTimeLimitError) {
+      log(error);
+      res.status(503).json(body('too_slow', `This took longer than the server allows (${Math.round(error.timeLimitMs / 1000)} s) and was stopped; nothing was stored.`));
       return;
     }
     if (error?.code === 'SQLITE_FULL') {

@@ -14,6 +14,7 @@ import { findClimateFile, loadClimateSeries, loadOriginal, saveClimateFile } fro
 import { tarArchive } from '../climate/tar-archive';
 import { climateFiles, sites } from '../db/schema';
 import { HttpError } from '../http-error';
+import { closedRequestSignal } from '../request-signal';
 import { findSite } from './sites';
 
 /** Upload limits: 64 MB and 1.2 million lines (over 100 years of hours) unless the app is given others. */
@@ -40,7 +41,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
    * a set's files are read in parallel with the same options and mapping, then joined in time order
    * (shared/climate/join-files.ts). Nothing is stored here. The body limit (413) covers the whole set.
    */
-  async function importUpload(req: express.Request, site: { elevationM: number; timeZone: string }) {
+  async function importUpload(req: express.Request, res: express.Response, site: { elevationM: number; timeZone: string }) {
     const { timeZone } = site;
     const query = climateUploadQuerySchema.parse(req.query);
     const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
@@ -66,7 +67,8 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       humidityOverIce: query.humidityOverIce,
       site: { elevationM: site.elevationM, timeZone },
     };
-    const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options })));
+    const signal = closedRequestSignal(res);
+    const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options }, { signal })));
     if (parts.length === 1) return { query, parts, text: texts[0], result: results[0], original: parts[0] };
     const files = parts.map((p, i) => ({ fileName: p.fileName, bytes: p.bytes.byteLength, sha256: sha256(p.bytes), result: results[i] }));
     const result = joinClimateFiles(files, query.maxGapHours, timeZone);
@@ -106,7 +108,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files/preview', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { result, text } = await importUpload(req, site);
+      const { result, text } = await importUpload(req, res, site);
       const s = result.series;
       const hours = s
         ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
@@ -130,7 +132,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { query, parts, result, original } = await importUpload(req, site);
+      const { query, parts, result, original } = await importUpload(req, res, site);
       const bytes = original.bytes;
       if (!result.ok || !result.series) {
         recordRequestAudit(db, req, 'climate.rejected', original.fileName, { siteId, files: parts.length, summary: result.report.summary });

@@ -202,3 +202,23 @@ export function countLines(text: string): number {
   }
   return lines;
 }
+
+/** The longest line of the text (characters, line ends not counted) and its 1-based number, in one pass. */
+export function longestLine(text: string): { length: number; line: number } {
+  let longest = 0;
+  let longestAt = 0;
+  let start = 0;
+  let line = 1;
+  while (start <= text.length) {
+    let end = text.indexOf('\n', start);
+    if (end === -1) end = text.length;
+    const length = end - start - (end > start && text.charCodeAt(end - 1) === 13 ? 1 : 0);
+    if (length > longest) {
+      longest = length;
+      longestAt = line;
+    }
+    start = end + 1;
+    line++;
+  }
+  return { length: longest, line: longestAt };
+}

@@ -12,7 +12,7 @@
  * Anything less is repaired where the report says so, and imported.
  */
 import { applyMappingOverride } from './apply-mapping';
-import { countLines, firstLines, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
+import { countLines, firstLines, longestLine, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
 import { IssueLog } from './issue-log';
 import { isKnownTimeZone } from '../time-zone';
@@ -29,6 +29,11 @@ import { readHumidityOverIce } from './humidity-over-ice';
 import type { ClimateSeries, ImportOptions, ImportReport, ImportResult } from './types';
 
 export { DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-context';
+
+/** Longest line the importer reads, characters; weather files' lines are a few hundred at most. */
+export const MAX_LINE_CHARS = 10_000;
+/** Most columns the importer reads. */
+export const MAX_COLUMNS = 200;
 
 function finish(ctx: Context, series: ClimateSeries | null, siteTimeZone?: string): ImportResult {
   const ok = series !== null && !ctx.log.hasErrors();
@@ -140,6 +145,12 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('binary-input', 'The file looks binary (for example a spreadsheet workbook or an archive), not delimited text; save it as CSV.');
     return null;
   }
+  // Checked before any parsing: a line of megabytes (a header of millions of columns) would hold a thread for a minute.
+  const widest = longestLine(text);
+  if (widest.length > MAX_LINE_CHARS) {
+    log.error('line-too-long', `Line ${widest.line} has ${widest.length.toLocaleString('en')} characters; a weather file's lines are far shorter, and Tramontane reads lines of at most ${MAX_LINE_CHARS.toLocaleString('en')}.`, { line: widest.line });
+    return null;
+  }
   const published = readPublishedFormat(text, options, ctx);
   if (published !== undefined) {
     if (published && ctx.humidityOverIce) readHumidityOverIce(published, log);
@@ -160,6 +171,10 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
   const layout = findLayout(parsed, ctx);
   if (!layout) {
     log.error('empty-input', 'The file holds no rows.');
+    return null;
+  }
+  if (layout.headers.length > MAX_COLUMNS) {
+    log.error('too-many-columns', `The header on line ${parsed.lineOf(layout.headerIndex)} has ${layout.headers.length.toLocaleString('en')} columns; Tramontane reads files of at most ${MAX_COLUMNS}. Keep the time, dry-bulb, humidity and pressure columns.`, { line: parsed.lineOf(layout.headerIndex) });
     return null;
   }
   if (layout.headerIndex > 0) noteStationLine(ctx, readStationLine(parsed.row(0), parsed.lineOf(0)));

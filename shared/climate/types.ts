@@ -160,6 +160,8 @@ export interface ImportOptions {
 
 export type IssueKind =
   | 'empty-input'
+  | 'line-too-long'
+  | 'too-many-columns'
   | 'binary-input'
   | 'header-only'
   | 'no-header'
