@@ -96,6 +96,14 @@ const loadFraction = z.number({ error: 'must be a number from 0 to 1' }).min(0, 
 /** Hours in the profile of an hourly IT load: a 365-day year (29 February repeats 28 February). */
 export const LOAD_PROFILE_HOURS = 8760;
 
+/** A scenario's or load profile's name: 1–200 characters of text without control characters. */
+const plainName = z
+  .string({ error: 'must be a text' })
+  .trim()
+  .min(1, { error: 'must not be empty' })
+  .max(200, { error: 'must be at most 200 characters' })
+  .refine(...withoutControlCharacters(''));
+
 /**
  * IT load through the years, as fractions of energy.itLoadKw (the design load):
  * constant; a ramp by calendar year from the first year of the weather (the last value holds after the
@@ -108,12 +116,7 @@ export const itLoadProfileSchema = z.discriminatedUnion(
     z.object({ kind: z.literal('yearly-ramp'), fractions: z.array(loadFraction).min(1, { error: 'must list at least one year' }).max(100, { error: 'must list at most 100 years' }) }),
     z.object({
       kind: z.literal('hourly-profile'),
-      name: z
-      .string({ error: 'must be a text' })
-      .trim()
-      .min(1, { error: 'must not be empty' })
-      .max(200, { error: 'must be at most 200 characters' })
-      .refine(...withoutControlCharacters('')),
+      name: plainName,
       fractions: z.array(loadFraction).length(LOAD_PROFILE_HOURS, { error: `must hold ${LOAD_PROFILE_HOURS} hourly values` }),
     }),
   ],
@@ -164,12 +167,7 @@ export const energySchema = z.object({
 
 export const scenarioSchema = z
   .object({
-    name: z
-      .string({ error: 'must be a text' })
-      .trim()
-      .min(1, { error: 'must not be empty' })
-      .max(200, { error: 'must be at most 200 characters' })
-      .refine(...withoutControlCharacters('')),
+    name: plainName,
     elevationM: between(-500, 6000, 'm'),
     envelope: envelopeSchema,
     system: systemSchema,

@@ -3,9 +3,9 @@ import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
-import { count } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { auditEvents, climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
+import { auditEvents } from '../../server/db/schema';
+import { storedClimateRows } from '../support/study-setup';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 
@@ -40,11 +40,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const stored = () => ({
-  files: t.db.select({ n: count() }).from(climateFiles).get()!.n,
-  originals: t.db.select({ n: count() }).from(climateOriginals).get()!.n,
-  series: t.db.select({ n: count() }).from(climateSeries).get()!.n,
-});
+const stored = () => storedClimateRows(t.db);
 
 function send(files: [string, string][], route = '', person = engineer, query = '?timeBasis=site-standard') {
   let req = request(t.app).post(`/api/projects/${projectId}/sites/${siteId}/climate-files${route}${query}`).set(asPerson(person));

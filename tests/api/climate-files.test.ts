@@ -1,11 +1,10 @@
 import { readFileSync } from 'node:fs';
 import request from 'supertest';
-import { count } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { auditEvents, climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
+import { auditEvents } from '../../server/db/schema';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
-import { directAirSample } from '../support/study-setup';
+import { directAirSample, storedClimateRows } from '../support/study-setup';
 
 const threeDays = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url));
 
@@ -32,11 +31,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const storedCounts = () => ({
-  files: t.db.select({ n: count() }).from(climateFiles).get()!.n,
-  originals: t.db.select({ n: count() }).from(climateOriginals).get()!.n,
-  series: t.db.select({ n: count() }).from(climateSeries).get()!.n,
-});
+const storedCounts = () => storedClimateRows(t.db);
 
 const upload = (body: Buffer | string, query = '') =>
   request(t.app)

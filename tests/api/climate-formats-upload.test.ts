@@ -5,12 +5,11 @@
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { count } from 'drizzle-orm';
 import fc from 'fast-check';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
+import { storedClimateRows } from '../support/study-setup';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { damage, damaged } from '../support/weather-damage';
 
@@ -37,11 +36,7 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const stored = () => ({
-  files: t.db.select({ n: count() }).from(climateFiles).get()!.n,
-  series: t.db.select({ n: count() }).from(climateSeries).get()!.n,
-  originals: t.db.select({ n: count() }).from(climateOriginals).get()!.n,
-});
+const stored = () => storedClimateRows(t.db);
 
 const post = (site: number, fileName: string, body: Buffer, preview = false) =>
   request(t.app)

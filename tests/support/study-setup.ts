@@ -1,5 +1,8 @@
 import { readFileSync } from 'node:fs';
 import request from 'supertest';
+import { count } from 'drizzle-orm';
+import type { Db } from '../../server/db/client';
+import { climateFiles, climateOriginals, climateSeries } from '../../server/db/schema';
 import type { TestApp } from './test-app';
 import { asPerson, type TestPerson } from './people';
 
@@ -42,4 +45,10 @@ export async function siteFileAndScenario(
     .send({ scenario: options.scenario ?? directAirSample })
     .expect(201);
   return { siteId: site.body.site.id, climateFileId: file.body.climateFile.id, scenarioId: scenario.body.scenario.id };
+}
+
+/** Climate files, originals and series rows stored: an upload stores all three or none. */
+export function storedClimateRows(db: Db): { files: number; originals: number; series: number } {
+  const rows = (table: typeof climateFiles | typeof climateOriginals | typeof climateSeries) => db.select({ n: count() }).from(table).get()!.n;
+  return { files: rows(climateFiles), originals: rows(climateOriginals), series: rows(climateSeries) };
 }

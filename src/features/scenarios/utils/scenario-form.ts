@@ -1,4 +1,4 @@
-import type { Scenario } from '../../../../shared/scenario/schema';
+import { energySchema, type Scenario } from '../../../../shared/scenario/schema';
 import type { SystemKind } from './scenario-fields';
 
 /**
@@ -54,22 +54,8 @@ export const newScenarioValues: ScenarioFormValues = {
     dryCoolerAirRiseK: 10,
     freezeProtectionWetBulbC: 2,
   },
-  energy: {
-    itLoadKw: 1000,
-    itLoadProfile: { kind: 'constant' },
-    mechanicalCop: 4.5,
-    evaporatorApproachK: 5,
-    condenserApproachK: 10,
-    compressorMinTurndown: 0.2,
-    fanPowerFraction: 0.05,
-    fanMinSpeedFraction: 0.3,
-    pumpPowerFraction: 0.01,
-    pumpMinSpeedFraction: 0.3,
-    heatRejectionFanFraction: 0.02,
-    cyclesOfConcentration: 4,
-    towerDriftFraction: 0.0002,
-    basinHeaterFraction: 0.001,
-  },
+  // The shared schema's defaults for every energy input but the two it requires.
+  energy: energySchema.parse({ itLoadKw: 1000, mechanicalCop: 4.5 }),
 };
 
 /** A stored scenario as editor values: its own fields over the defaults of the kinds it does not use. */
