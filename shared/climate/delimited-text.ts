@@ -191,34 +191,26 @@ function rowStartLines(text: string, firstLine: number): number[] {
   return starts;
 }
 
-/** Number of lines in a text (a final line break does not start a new line). */
-export function countLines(text: string): number {
-  if (text.length === 0) return 0;
-  let lines = 1;
-  let at = text.indexOf('\n');
-  while (at !== -1) {
-    if (at < text.length - 1) lines++;
-    at = text.indexOf('\n', at + 1);
-  }
-  return lines;
-}
-
-/** The longest line of the text (characters, line ends not counted) and its 1-based number, in one pass. */
-export function longestLine(text: string): { length: number; line: number } {
+/**
+ * Lines of the text (a final line end adds none) and its longest line — characters without the line end, and its
+ * 1-based number — in one pass.
+ */
+export function scanLines(text: string): { lines: number; longest: { length: number; line: number } } {
+  if (text.length === 0) return { lines: 0, longest: { length: 0, line: 0 } };
   let longest = 0;
   let longestAt = 0;
   let start = 0;
-  let line = 1;
-  while (start <= text.length) {
+  let lines = 0;
+  while (start < text.length) {
     let end = text.indexOf('\n', start);
     if (end === -1) end = text.length;
+    lines++;
     const length = end - start - (end > start && text.charCodeAt(end - 1) === 13 ? 1 : 0);
     if (length > longest) {
       longest = length;
-      longestAt = line;
+      longestAt = lines;
     }
     start = end + 1;
-    line++;
   }
-  return { length: longest, line: longestAt };
+  return { lines, longest: { length: longest, line: longestAt } };
 }

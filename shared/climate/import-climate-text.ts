@@ -12,7 +12,7 @@
  * Anything less is repaired where the report says so, and imported.
  */
 import { applyMappingOverride } from './apply-mapping';
-import { countLines, firstLines, longestLine, looksBinary, parseRows, skipLeadingComments, sniffDelimiter, stripBom } from './delimited-text';
+import { firstLines, looksBinary, parseRows, skipLeadingComments, scanLines, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
 import { IssueLog } from './issue-log';
 import { isKnownTimeZone } from '../time-zone';
@@ -136,7 +136,9 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
   let text = stripBom(rawText);
   // old Mac line ends (CR only): the line scanning below looks for LF
   if (text.indexOf('\n') === -1 && text.indexOf('\r') !== -1) text = text.replace(/\r/g, '\n');
-  counts.lines = countLines(text);
+  // One pass gives the line count and the longest line, checked below before any parsing.
+  const scanned = scanLines(text);
+  counts.lines = scanned.lines;
   if (text.trim() === '') {
     log.error('empty-input', 'The file is empty.');
     return null;
@@ -145,8 +147,8 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     log.error('binary-input', 'The file looks binary (for example a spreadsheet workbook or an archive), not delimited text; save it as CSV.');
     return null;
   }
-  // Checked before any parsing: a line of megabytes (a header of millions of columns) would hold a thread for a minute.
-  const widest = longestLine(text);
+  // A line of megabytes (a header of millions of columns) would hold a thread for a minute.
+  const widest = scanned.longest;
   if (widest.length > MAX_LINE_CHARS) {
     log.error('line-too-long', `Line ${widest.line} has ${widest.length.toLocaleString('en')} characters; a weather file's lines are far shorter, and Tramontane reads lines of at most ${MAX_LINE_CHARS.toLocaleString('en')}.`, { line: widest.line });
     return null;

@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { importClimateText, MAX_COLUMNS, MAX_LINE_CHARS } from '../../../shared/climate/import-climate-text';
-import { longestLine } from '../../../shared/climate/delimited-text';
+import { scanLines } from '../../../shared/climate/delimited-text';
 
 describe('lines and columns the importer refuses before parsing', () => {
-  it('finds the longest line and its number, CRLF or LF', () => {
-    expect(longestLine('ab\r\nabcd\r\nabc')).toEqual({ length: 4, line: 2 });
-    expect(longestLine('a\nbb\n')).toEqual({ length: 2, line: 2 });
+  it('counts the lines and finds the longest one and its number, CRLF or LF, in one pass', () => {
+    expect(scanLines('ab\r\nabcd\r\nabc')).toEqual({ lines: 3, longest: { length: 4, line: 2 } });
+    expect(scanLines('a\nbb\n')).toEqual({ lines: 2, longest: { length: 2, line: 2 } });
+    expect(scanLines('a\n\nb')).toEqual({ lines: 3, longest: { length: 1, line: 1 } });
+    expect(scanLines('')).toEqual({ lines: 0, longest: { length: 0, line: 0 } });
   });
 
   it('refuses a header of hundreds of thousands of columns at once, naming the line and its length', () => {
