@@ -89,6 +89,8 @@ export function importClimateText(text: string, options: ImportOptions = {}): Im
   };
   try {
     const series = runImport(text, options ?? {}, ctx);
+    // Every reader's humidity, published formats and delimited text alike, is converted here once.
+    if (series && ctx.humidityOverIce) readHumidityOverIce(series, ctx.log);
     checkHeaderAgainstSite(ctx, options?.site);
     return finish(ctx, series, options?.site?.timeZone);
   } catch (error) {
@@ -154,10 +156,7 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     return null;
   }
   const published = readPublishedFormat(text, options, ctx);
-  if (published !== undefined) {
-    if (published && ctx.humidityOverIce) readHumidityOverIce(published, log);
-    return published;
-  }
+  if (published !== undefined) return published;
   const body = skipLeadingComments(text);
   if (body.text.trim() === '') {
     log.error('empty-input', `The file holds only comment lines (${body.commentLines}) and no data.`);
@@ -204,8 +203,6 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
   reportMapping(recognition, layout, ctx);
   buildMapping(parsed, layout, recognition, ctx);
   if (log.hasErrors() || !recognition.time || !recognition.dryBulb || !recognition.humidity) return null;
-  const series = readRows(parsed, layout, recognition.time, recognition.dryBulb, recognition.humidity, recognition.pressure, ctx, dataRows);
-  if (series && ctx.humidityOverIce) readHumidityOverIce(series, log);
-  return series;
+  return readRows(parsed, layout, recognition.time, recognition.dryBulb, recognition.humidity, recognition.pressure, ctx, dataRows);
 }
 

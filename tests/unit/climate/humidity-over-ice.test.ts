@@ -6,6 +6,7 @@
  * at −20 °C.
  */
 import { describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
 import { importClimateText } from '../../../shared/climate';
 import { bulkStates } from '../../../shared/psychrometrics';
 import { hylandWexlerIcePa, hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
@@ -89,5 +90,28 @@ describe('the option itself', () => {
     const result = importClimateText(file('relative_humidity_pct', [80, 80, 80, 80]), { humidityOverIce: 'yes' as unknown as boolean });
     expect(result.ok).toBe(false);
     expect(result.report.issues[0]).toMatchObject({ kind: 'invalid-option', value: 'yes' });
+  });
+});
+
+describe('the option on a published format', () => {
+  it('converts the sub-zero dew points of an EPW file too, as frost points', () => {
+    const epw = readFileSync(new URL('../../fixtures/weather/synthetic-typical-year.epw', import.meta.url), 'utf8');
+    const plain = importClimateText(epw);
+    const overIce = importClimateText(epw, { humidityOverIce: true });
+    expect(overIce.report.humidityOverIce).toBe(true);
+    const before = plain.series!.humidity.values;
+    const after = overIce.series!.humidity.values;
+    let converted = 0;
+    for (let i = 0; i < before.length; i++) {
+      if (before[i] < 0) {
+        // The same vapour pressure's dew point over water lies below its frost point, since pws over water exceeds
+        // pws over ice below 0 °C (ASHRAE 2017 ch. 1 eq. 6 against eq. 5).
+        expect(after[i]).toBeLessThan(before[i]);
+        converted++;
+      } else if (before[i] === before[i]) {
+        expect(after[i]).toBe(before[i]);
+      }
+    }
+    expect(converted).toBeGreaterThan(0);
   });
 });
