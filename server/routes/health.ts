@@ -1,8 +1,9 @@
 import { sql } from 'drizzle-orm';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
+import { ENGINE_VERSION } from '../../shared/scenario/version';
+import packageJson from '../../package.json' with { type: 'json' };
 
-export const engineVersion = '0.1.0';
 
 export function healthRoutes({ db }: AppDeps): RouteSpec[] {
   return [
@@ -11,7 +12,8 @@ export function healthRoutes({ db }: AppDeps): RouteSpec[] {
       db.get(sql`select 1`);
       res.json({
         status: 'ok',
-        version: engineVersion,
+        version: packageJson.version,
+        engineVersion: ENGINE_VERSION,
         database: { reachable: true, latencyMs: Number((performance.now() - started).toFixed(3)) },
         time: new Date().toISOString(),
       });

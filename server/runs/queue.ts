@@ -97,7 +97,8 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     if (!run || run.status !== 'queued') return pump();
     const controller = new AbortController();
     running.set(runId, controller);
-    db.update(runs).set({ status: 'running', startedAt: new Date(), progress: 0.1 }).where(eq(runs.id, runId)).run();
+    // A run is one pool task: the server knows only that it started and when it finishes, so progress stays 0 until done.
+    db.update(runs).set({ status: 'running', startedAt: new Date(), progress: 0 }).where(eq(runs.id, runId)).run();
     const timer = setTimeout(() => controller.abort(new Error(`The run took longer than ${Math.round(timeoutMs / 1000)} s and was stopped.`)), timeoutMs);
     try {
       const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : loadClimateSeries(db, run.climateFileId);

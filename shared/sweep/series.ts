@@ -52,7 +52,7 @@ export interface SweepProgress {
   cancelled: number;
   running: number;
   queued: number;
-  /** 0…1: finished points count whole, running ones by their own progress. */
+  /** 0…1: the share of points that finished (done, failed or cancelled); a running point counts once it ends. */
   fraction: number;
   /** No point waits or runs any more. */
   finished: boolean;
@@ -63,7 +63,7 @@ export function sweepProgress(points: readonly Pick<SweepPoint, 'status' | 'prog
   let sum = 0;
   for (const point of points) {
     p[point.status]++;
-    sum += point.status === 'running' ? point.progress : point.status === 'queued' ? 0 : 1;
+    sum += point.status === 'running' || point.status === 'queued' ? 0 : 1;
   }
   p.fraction = points.length ? sum / points.length : 1;
   p.finished = p.running === 0 && p.queued === 0;

@@ -16,6 +16,12 @@ describe('a visitor checking the server', () => {
     expect(res.body.database.latencyMs).toBeGreaterThanOrEqual(0);
   });
 
+  it('reads the release and the engine that new runs are made by, each under its own name', async () => {
+    const res = await request(t.app).get('/api/health').expect(200);
+    expect(res.body.version).toBe('0.1.0');
+    expect(res.body.engineVersion).toBe('scenario-engine 2.0.0');
+  });
+
   it('is told to sign in before listing projects, in the one error shape', async () => {
     const res = await request(t.app).get('/api/projects').expect(401);
     expect(res.body).toEqual({ error: { code: 'unauthenticated', message: 'Sign in to use this.' } });

@@ -191,10 +191,10 @@ describe('an engineer designing, running and comparing scenarios', () => {
 });
 
 describe('a run still computing', () => {
-  it('shows its progress while it runs and can be cancelled', async () => {
+  it('says it is running and since when, with no made-up progress bar, and can be cancelled', async () => {
     // The pool finishes a 72-hour run in milliseconds, so the server's answers for one run are held at "running" here.
     const { run } = await h.api<{ run: Record<string, unknown> }>(engineer, 'GET', `/projects/${projectId}/runs/${firstRunId}`);
-    let state: Record<string, unknown> = { ...run, id: 9001, status: 'running', progress: 0.4, results: null, finishedAt: null };
+    let state: Record<string, unknown> = { ...run, id: 9001, status: 'running', progress: 0, startedAt: '2026-03-02T09:15:07Z', results: null, finishedAt: null };
     const page = h.page;
     await page.route(`**/api/projects/${projectId}/runs/9001`, (route) => route.fulfill({ json: { run: state } }));
     await page.route(`**/api/projects/${projectId}/runs/9001/cancel`, (route) => {
@@ -203,7 +203,9 @@ describe('a run still computing', () => {
     });
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/9001`);
     await page.getByTestId('run-progress').waitFor();
-    expect(await page.getByRole('progressbar').getAttribute('aria-valuenow')).toBe('40');
+    expect(await page.getByRole('status').innerText()).toMatch(/^Classifying [\d,]+ hours…/);
+    expect(await page.getByTestId('run-started').innerText()).toBe(`started ${new Date('2026-03-02T09:15:07Z').toLocaleTimeString('en-GB')}`);
+    expect(await page.getByRole('progressbar').count()).toBe(0);
     await h.shot('run-page-running-si');
     await page.getByRole('button', { name: 'Cancel run' }).click();
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('cancelled');

@@ -47,8 +47,8 @@ describe('figures drawn from the points', () => {
     { runId: 4, values: { 'system.supplyAirC': 26 }, status: 'failed', progress: 0.1, error: 'x', results: null },
   ];
 
-  it('counts progress: finished points whole, running ones by their own share', () => {
-    expect(sweepProgress(points)).toEqual({ total: 4, done: 1, failed: 1, cancelled: 0, running: 1, queued: 1, fraction: 2.5 / 4, finished: false });
+  it('counts progress by finished points only: a run reports no share of its own while it runs', () => {
+    expect(sweepProgress(points)).toEqual({ total: 4, done: 1, failed: 1, cancelled: 0, running: 1, queued: 1, fraction: 2 / 4, finished: false });
     expect(sweepProgress([]).finished).toBe(true);
   });
 

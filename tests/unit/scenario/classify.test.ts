@@ -5,7 +5,7 @@
  * which side of each threshold the hour falls on, then checks the engine's verdict.
  */
 import { describe, expect, it } from 'vitest';
-import { classifyHours, EXCURSION, MODE, type InletLimits } from '../../../shared/scenario/classify';
+import { classifyHours, EXCURSION, MODE, moistureTargets, type InletLimits } from '../../../shared/scenario/classify';
 import { makeScenario, outdoorHours, plantOf, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, wFromDewPoint, type ReferenceState } from './fixtures';
 
 const p = SEA_LEVEL_PA;
@@ -28,11 +28,15 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
   const withEvap = makeScenario('direct-air', { system: { evaporativeEffectiveness: 0.8 } });
   const dry = makeScenario('direct-air', { system: { evaporativeEffectiveness: 0 } });
 
-  it('has the moisture limits the rule defines', () => {
+  it('has the moisture limits the rule defines: the engine’s targets equal the psychrolib values', () => {
     // W at 15 °C dew point ≈ 10.65 g/kg is smaller than W at (24 °C, 70 %) ≈ 13.1 g/kg, so the dew point binds.
-    expect(wHi).toBeCloseTo(psy.GetHumRatioFromTDewPoint(15, p), 12);
     expect(wHi * 1000).toBeCloseTo(10.65, 2);
     expect(wLo * 1000).toBeCloseTo(1.91, 2);
+    const targets = moistureTargets(limits, Ts, p);
+    expect(targets.highW).toBeCloseTo(wHi, 7);
+    expect(targets.lowW).toBeCloseTo(wLo, 7);
+    // The coil leaves at the dew point of W_hi: 15 °C, the dew-point limit that binds.
+    expect(targets.highDewPointC).toBeCloseTo(15, 3);
   });
 
   it('rule 1: W above W_hi is mechanical (the coil must dehumidify)', () => {

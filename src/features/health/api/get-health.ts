@@ -3,7 +3,10 @@ import { apiFetch } from '@/lib/api-client';
 
 export interface Health {
   status: 'ok';
+  /** The app's release (package.json). */
   version: string;
+  /** The engine new runs are made by, e.g. 'scenario-engine 2.0.0'. */
+  engineVersion: string;
   database: { reachable: boolean; latencyMs: number };
   time: string;
 }

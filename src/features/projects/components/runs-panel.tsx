@@ -112,7 +112,6 @@ export function RunsPanel({ projectId }: { projectId: number }) {
                   <td className="px-2">
                     <span className={`num rounded px-1.5 py-0.5 text-xs ${statusStyle[r.status].className}`} title={r.error ?? undefined}>
                       {statusStyle[r.status].text}
-                      {r.status === 'running' && ` ${Math.round(r.progress * 100)} %`}
                     </span>
                   </td>
                   <td className="px-2">{r.results ? <ModeShares hours={r.results.hours} /> : <span className="text-xs text-ink-faint">–</span>}</td>

@@ -124,7 +124,6 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
                 <td className="px-2 text-left">
                   <span className={`num rounded px-1.5 py-0.5 text-xs ${statusClass[p.status]}`} title={p.error ?? undefined}>
                     {p.status}
-                    {p.status === 'running' && ` ${Math.round(p.progress * 100)} %`}
                   </span>
                 </td>
                 {hourSpecs.map((spec) => (
