@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { importClimateText, standardOffsetMinutes, type ClimateSeries, type ImportReport } from '../../shared/climate';
+import { cleanedSeriesCsv, importClimateText, standardOffsetMinutes, type ClimateSeries, type ImportReport } from '../../shared/climate';
 import {
   describeFactorIssues,
   MORPHING_CITATION,
@@ -17,7 +17,8 @@ import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries, saveClimateFile } from '../climate/store';
 import { climateFiles } from '../db/schema';
 import { HttpError } from '../http-error';
-import { hourlyCsv, listing } from './climate-files';
+import { closedRequestSignal } from '../request-signal';
+import { listing } from './climate-files';
 import { findSite } from './sites';
 
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
@@ -47,8 +48,8 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
     throw new HttpError(400, 'invalid_factors', `The change factors were refused: ${problems.join('; ')}.`, { problems });
   }
 
-  /** Morphs on the pool; refusals (a daily range turned upside down) come back as 422 naming the month. */
-  async function morph(series: ClimateSeries, timeZone: string, elevationM: number, factors: ChangeFactors, keepSeries: boolean) {
+  /** Morphs on the pool (a preview in its interactive lane), stopped if the client leaves; refusals (a daily range turned upside down) come back as 422 naming the month. */
+  async function morph(series: ClimateSeries, timeZone: string, elevationM: number, factors: ChangeFactors, keepSeries: boolean, signal: AbortSignal) {
     const utcOffsetMinutes = standardOffsetMinutes(timeZone);
     const result: MorphClimateTaskResult = await pool.run('morphClimate', {
       series,
@@ -56,7 +57,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       utcOffsetMinutes,
       elevationM,
       keepSeries,
-    });
+    }, { lane: keepSeries ? 'long' : 'interactive', signal });
     if (!result.ok) {
       throw new HttpError(422, 'invalid_factors', `The change factors do not fit this file: ${result.problems.join('; ')}.`, { problems: result.problems });
     }
@@ -67,7 +68,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/climate-files/:fileId/projections/preview', access.engineer, async (req, res) => {
       const { factors } = requestOf(req.body);
       const { series, site } = parentOf(req.projectId!, req.params.fileId);
-      const out = await morph(series, site.timeZone, site.elevationM, factors, false);
+      const out = await morph(series, site.timeZone, site.elevationM, factors, false, closedRequestSignal(res));
       res.json({
         comparison: { parent: out.parentMonthly, projection: out.projectionMonthly },
         alphaByMonth: out.alphaByMonth,
@@ -80,7 +81,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/climate-files/:fileId/projections', access.engineer, async (req, res) => {
       const body = requestOf(req.body);
       const { file: parent, series, site } = parentOf(req.projectId!, req.params.fileId);
-      const out = await morph(series, site.timeZone, site.elevationM, body.factors, true);
+      const out = await morph(series, site.timeZone, site.elevationM, body.factors, true, closedRequestSignal(res));
       const { row, derivation } = db.transaction((tx) => {
         const stored = storeProjection(tx, { projectId: req.projectId!, parent, request: body, morphed: out, createdBy: req.user?.id ?? null });
         recordRequestAudit(tx, req, 'climate.project', stored.row.name, {
@@ -188,7 +189,7 @@ function projectionCsv(series: ClimateSeries, name: string, d: Derivation): stri
     `# ${d.citation}`,
     `# ${d.note}`,
   ];
-  return `${head.join('\n')}\n${hourlyCsv(series)}`;
+  return `${head.join('\n')}\n${cleanedSeriesCsv(series)}`;
 }
 
 /** The parent's validation report, restated for the projection (its line-level issues belong to the parent's file). */
