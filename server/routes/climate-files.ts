@@ -2,7 +2,7 @@ import express from 'express';
 import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { createHash } from 'node:crypto';
-import { decodeClimateBytes, joinClimateFiles, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
+import { decodeClimateBytes, firstLinesEchoed, joinClimateFiles, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
 import { climateUploadQuerySchema, uploadedFilesSchema } from '../../shared/schemas/climate-file';
 import { fixedOffsetZone, standardOffsetMinutes } from '../../shared/time-zone';
 import type { AppDeps } from '../app';
@@ -10,7 +10,9 @@ import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { multipartBoundary, readMultipartFiles } from '../climate/multipart';
 import { findClimateFile, loadClimateSeries, loadEncodedSeries, loadOriginal, saveClimateFile } from '../climate/store';
+import { linkIssueList, loadIssueListCsv, packIssueList, saveIssueList, UNLINKED_LISTS_KEPT } from '../climate/issue-lists';
 import { tarArchive } from '../climate/tar-archive';
+import { climateFileBytes, requireStorage, storageLimitOf } from '../storage/quota';
 import { climateFiles, sites } from '../db/schema';
 import { HttpError } from '../http-error';
 import { closedRequestSignal } from '../request-signal';
@@ -22,6 +24,7 @@ const previewHours = 48;
 
 const siteParams = z.object({ siteId: z.coerce.number().int().positive('siteId must be a positive whole number') });
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
+const listParams = z.object({ listId: z.coerce.number().int().positive('listId must be a positive whole number') });
 const hoursQuery = z.object({ year: z.coerce.number().int().min(1800).max(2200).optional() });
 
 function countRows(text: string): number {
@@ -81,6 +84,14 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     return { query, parts, text: texts[parts.indexOf(inTimeOrder[0])], result, original };
   }
 
+  /** The report as answered: when it lists only the first issues, the full list is stored and the report says where. */
+  async function withFullIssueList(req: express.Request, result: ImportResult, climateFileId: number | null): Promise<ImportReport> {
+    const packed = await packIssueList(result);
+    if (!packed) return result.report;
+    const list = saveIssueList(db, { projectId: req.projectId!, climateFileId, createdBy: req.user?.id ?? null, list: packed });
+    return { ...result.report, fullIssueList: { path: list.path, issues: list.issues } };
+  }
+
   function fileOr404(projectId: number, fileIdParam: unknown) {
     const { fileId } = fileParams.parse({ fileId: fileIdParam });
     const file = findClimateFile(db, projectId, fileId);
@@ -122,6 +133,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
       const { result, text } = await importUpload(req, res, site, true);
+      const report = await withFullIssueList(req, result, null);
       const s = result.series;
       const hours = s
         ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
@@ -135,9 +147,9 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       res.json({
         ok: result.ok,
         mapping: result.mapping,
-        report: result.report,
+        report,
         humidityKind: s?.humidity.kind ?? null,
-        firstLines: text.split(/\r?\n/, 12),
+        firstLines: firstLinesEchoed(text),
         preview: hours,
       });
     }),
@@ -145,23 +157,32 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
+      // The upload itself is a floor of what it would store: refused before the import's work when even that does not fit.
+      requireStorage(db, req.projectId!, storageLimitOf(deps), Buffer.isBuffer(req.body) ? req.body.byteLength : 0, 'this upload');
       const { query, parts, result, original } = await importUpload(req, res, site, false);
       const bytes = original.bytes;
       if (!result.ok || !result.series) {
+        const report = await withFullIssueList(req, result, null);
         recordRequestAudit(db, req, 'climate.rejected', original.fileName, { siteId, files: parts.length, summary: result.report.summary });
-        throw new HttpError(422, 'import_rejected', result.report.summary, { report: result.report, mapping: result.mapping });
+        throw new HttpError(422, 'import_rejected', result.report.summary, { report, mapping: result.mapping });
       }
       const series = result.series;
+      const issueList = await packIssueList(result);
       const row = db.transaction((tx) => {
+        const hours = series.timestampsMs.length;
+        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(bytes.byteLength, hours, series.pressurePa !== null), 'this climate file');
+        const list = issueList && saveIssueList(tx, { projectId: req.projectId!, climateFileId: null, createdBy: req.user?.id ?? null, list: issueList });
+        const report = { ...result.report, fullIssueList: list && { path: list.path, issues: list.issues } };
         const saved = saveClimateFile(tx, {
           projectId: req.projectId!,
           siteId,
           name: query.name ?? original.fileName.replace(/\.[^.]+$/, ''),
           originalFileName: original.fileName,
           bytes,
-          imported: { ...result, series },
+          imported: { ...result, report, series },
           createdBy: req.user?.id ?? null,
         });
+        if (list) linkIssueList(tx, list.id, saved.id);
         recordRequestAudit(tx, req, 'climate.import', saved.name, {
           climateFileId: saved.id,
           fileName: original.fileName,
@@ -173,7 +194,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
         });
         return saved;
       });
-      res.status(201).json({ climateFile: listing(row, site.name), report: result.report });
+      res.status(201).json({ climateFile: listing(row, site.name), report: JSON.parse(row.reportJson) as ImportReport });
     }),
 
     route('get', '/projects/:projectId/climate-files/:fileId', access.viewer, async (req, res) => {
@@ -210,6 +231,13 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       const file = fileOr404(req.projectId!, req.params.fileId);
       const bytes = await formatOnPool(res, file.id, 'csv');
       res.attachment(`${file.name}-hourly.csv`).type('text/csv').send(bytes);
+    }),
+
+    route('get', '/projects/:projectId/climate-issue-lists/:listId', access.viewer, async (req, res) => {
+      const { listId } = listParams.parse(req.params);
+      const csv = await loadIssueListCsv(db, req.projectId!, listId);
+      if (!csv) throw new HttpError(404, 'not_found', `Issue list ${listId} was not found in this project; lists of previews and refused uploads are kept for the newest ${UNLINKED_LISTS_KEPT} only.`);
+      res.attachment(`climate-file-issues-${listId}.csv`).type('text/csv').send(csv);
     }),
 
     route('delete', '/projects/:projectId/climate-files/:fileId', access.engineer, (req, res) => {

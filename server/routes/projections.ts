@@ -18,10 +18,14 @@ import { findClimateFile, loadClimateSeries, saveClimateFile } from '../climate/
 import { climateFiles } from '../db/schema';
 import { HttpError } from '../http-error';
 import { closedRequestSignal } from '../request-signal';
+import { climateFileBytes, requireStorage, storageLimitOf } from '../storage/quota';
 import { listing } from './climate-files';
 import { findSite } from './sites';
 
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
+
+/** About the bytes of one hour of the projection's CSV (a timestamp and four values); the quota check's estimate. */
+const PROJECTION_CSV_BYTES_PER_HOUR = 45;
 
 export const PROJECTION_METHOD = 'Belcher, Hacker and Powell (2005) morphing';
 export const PROJECTION_NOTE =
@@ -83,6 +87,9 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       const { file: parent, series, site } = parentOf(req.projectId!, req.params.fileId);
       const out = await morph(series, site.timeZone, site.elevationM, body.factors, true, closedRequestSignal(res));
       const { row, derivation } = db.transaction((tx) => {
+        // The projection stores its series and, as its original, the series as CSV (about 45 bytes an hour).
+        const hours = out.series?.timestampsMs.length ?? 0;
+        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(hours * PROJECTION_CSV_BYTES_PER_HOUR, hours, Boolean(out.series?.pressurePa)), 'the projection');
         const stored = storeProjection(tx, { projectId: req.projectId!, parent, request: body, morphed: out, createdBy: req.user?.id ?? null });
         recordRequestAudit(tx, req, 'climate.project', stored.row.name, {
           climateFileId: stored.row.id,

@@ -40,3 +40,5 @@ export type {
   HumidityRatioUnit,
   PressureUnit,
 } from './types';
+export { cutCell, firstLinesEchoed, ECHO_CELL_CHARS } from './echo-limits';
+export { issueListCsv, ISSUES_LISTED } from './issue-log';

@@ -60,12 +60,23 @@ export function ValidationReport({ report }: { report: ImportReport }) {
       {report.issues.length > 0 ? (
         <div className="overflow-x-auto">
           <table className="w-full text-left text-xs">
-            <caption className="pb-1 text-left text-sm text-ink-soft">
-              {report.issues.length.toLocaleString('en')} {report.issues.length === 1 ? 'issue' : 'issues'} listed
-              {c.issuesNotListed > 0 && `, ${c.issuesNotListed.toLocaleString('en')} more of the same kinds not listed`}.{' '}
-              <a className="text-harbour underline" href={csvHref} download="climate-file-issues.csv">
-                Download as CSV
-              </a>
+            <caption className="pb-1 text-left text-sm text-ink-soft" data-testid="issue-count">
+              {report.fullIssueList ? (
+                <>
+                  The first {report.issues.length.toLocaleString('en')} of {report.fullIssueList.issues.toLocaleString('en')} issues are listed.{' '}
+                  <a className="text-harbour underline" href={report.fullIssueList.path} download>
+                    Download all {report.fullIssueList.issues.toLocaleString('en')} as CSV
+                  </a>
+                </>
+              ) : (
+                <>
+                  {report.issues.length.toLocaleString('en')} {report.issues.length === 1 ? 'issue' : 'issues'} listed
+                  {c.issuesNotListed > 0 && `, ${c.issuesNotListed.toLocaleString('en')} more not listed`}.{' '}
+                  <a className="text-harbour underline" href={csvHref} download="climate-file-issues.csv">
+                    Download as CSV
+                  </a>
+                </>
+              )}
             </caption>
             <thead>
               <tr className="border-b border-rule text-ink-soft">
@@ -78,7 +89,7 @@ export function ValidationReport({ report }: { report: ImportReport }) {
               </tr>
             </thead>
             <tbody>
-              {report.issues.slice(0, 400).map((issue, k) => (
+              {report.issues.map((issue, k) => (
                 <tr key={k} className="border-b border-rule/60 align-top">
                   <td className={`py-0.5 pr-2 font-medium ${severityStyle[issue.severity]}`}>{issue.severity}</td>
                   {report.files && <td className="num pr-2 whitespace-nowrap">{issue.file ?? 'the set'}</td>}
@@ -90,7 +101,6 @@ export function ValidationReport({ report }: { report: ImportReport }) {
               ))}
             </tbody>
           </table>
-          {report.issues.length > 400 && <p className="mt-1 text-xs text-ink-soft">The first 400 are shown; the CSV holds all listed issues.</p>}
         </div>
       ) : (
         <p className="text-sm text-ink-soft">No issues found.</p>
