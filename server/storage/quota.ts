@@ -1,10 +1,11 @@
 import { sql } from 'drizzle-orm';
 import type { DbOrTx } from '../db/client';
 import { HttpError } from '../http-error';
+import { BYTES_PER_MB, type ProjectStorage } from '../../shared/schemas/project-storage';
 
 /** Default per-project limit on stored bytes, MB of 1,000,000 bytes: 1 GB (a 200-point sweep on a 30-year file stores about 0.5 GB). */
 export const DEFAULT_PROJECT_STORAGE_MB = 1_000;
-export const BYTES_PER_MB = 1_000_000;
+export { BYTES_PER_MB };
 
 /** Header bytes of one stored column blob (shared/climate/column-codec.ts). */
 const COLUMN_HEADER_BYTES = 16;
@@ -26,19 +27,8 @@ export function climateFileBytes(originalBytes: number, hours: number, hasPressu
   return originalBytes + hours * (columns * 8 + 1) + (columns + 1) * COLUMN_HEADER_BYTES;
 }
 
-/** What a project stores, bytes, by what holds them. */
-export interface StorageUse {
-  climateFileBytes: number;
-  runBytes: number;
-  /** Runs queued or running, counted at what they will store (runBytes of their file's hours). */
-  pendingRunBytes: number;
-  issueListBytes: number;
-  usedBytes: number;
-  limitBytes: number;
-}
-
 /** The project's stored bytes, summed from the blobs' lengths (SQLite reads a blob's length without reading the blob). */
-export function storageUse(db: DbOrTx, projectId: number, limitBytes: number): StorageUse {
+export function storageUse(db: DbOrTx, projectId: number, limitBytes: number): ProjectStorage {
   const one = (query: ReturnType<typeof sql>) => Number(db.get<{ bytes: number | null }>(query)?.bytes ?? 0);
   const climate = one(sql`
     select sum(length(o.bytes) + length(s.timestamps_ms) + length(s.dry_bulb_c) + length(s.humidity) + coalesce(length(s.pressure_pa), 0) + length(s.flags)) as bytes
