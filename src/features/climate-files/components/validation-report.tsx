@@ -1,5 +1,6 @@
 import type { FileInSet, ImportIssue, ImportReport } from '../../../../shared/climate/types';
 import { csvRow } from '../../../../shared/csv';
+import { ISSUES_LISTED } from '../../../../shared/climate/issue-log';
 import { Notice } from '@/components/ui/notice';
 import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
 import { wallClockReader, wallClockText } from '../../../../shared/time-zone';
@@ -63,7 +64,8 @@ export function ValidationReport({ report }: { report: ImportReport }) {
             <caption className="pb-1 text-left text-sm text-ink-soft" data-testid="issue-count">
               {report.fullIssueList ? (
                 <>
-                  The first {report.issues.length.toLocaleString('en')} of {report.fullIssueList.issues.toLocaleString('en')} issues are listed.{' '}
+                  Listed: the first {Math.min(ISSUES_LISTED, report.issues.length).toLocaleString('en')} of {report.fullIssueList.issues.toLocaleString('en')} issues
+                  {report.issues.length > ISSUES_LISTED && ', and the errors after them'}.{' '}
                   <a className="text-harbour underline" href={report.fullIssueList.path} download>
                     Download all {report.fullIssueList.issues.toLocaleString('en')} as CSV
                   </a>

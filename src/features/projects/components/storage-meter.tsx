@@ -1,7 +1,11 @@
 import { BYTES_PER_MB, type ProjectStorage } from '../../../../shared/schemas/project-storage';
 import { useProjectStorage } from '../api/get-project-storage';
 
-const mb = (bytes: number) => `${(bytes / BYTES_PER_MB).toLocaleString('en', { maximumFractionDigits: bytes < 10 * BYTES_PER_MB ? 1 : 0 })} MB`;
+/** Decimal units, as the limit is set (MB of 1,000,000 bytes): kB below 1 MB, one decimal below 100 of a unit. */
+function mb(bytes: number): string {
+  const [value, unit] = bytes < BYTES_PER_MB ? [bytes / 1_000, 'kB'] : [bytes / BYTES_PER_MB, 'MB'];
+  return `${value.toLocaleString('en', { maximumFractionDigits: value < 100 ? 1 : 0 })} ${unit}`;
+}
 
 /** Share of the limit from which the meter warns that the project is nearly full. */
 const NEARLY_FULL = 0.9;
