@@ -24,9 +24,6 @@ import { findSite } from './sites';
 
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
 
-/** About the bytes of one hour of the projection's CSV (a timestamp and four values); the quota check's estimate. */
-const PROJECTION_CSV_BYTES_PER_HOUR = 45;
-
 export const PROJECTION_METHOD = 'Belcher, Hacker and Powell (2005) morphing';
 export const PROJECTION_NOTE =
   'A projection: the parent file re-shaped by the stated monthly change factors. It is a what-if for design comparison, not a forecast of any year.';
@@ -87,9 +84,9 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       const { file: parent, series, site } = parentOf(req.projectId!, req.params.fileId);
       const out = await morph(series, site.timeZone, site.elevationM, body.factors, true, closedRequestSignal(res));
       const { row, derivation } = db.transaction((tx) => {
-        // The projection stores its series and, as its original, the series as CSV (about 45 bytes an hour).
+        // The projection stores its series and, as its original, the series as CSV (its few head lines left out here).
         const hours = out.series?.timestampsMs.length ?? 0;
-        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(hours * PROJECTION_CSV_BYTES_PER_HOUR, hours, Boolean(out.series?.pressurePa)), 'the projection');
+        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(out.seriesCsv?.byteLength ?? 0, hours, Boolean(out.series?.pressurePa)), 'the projection');
         const stored = storeProjection(tx, { projectId: req.projectId!, parent, request: body, morphed: out, createdBy: req.user?.id ?? null });
         recordRequestAudit(tx, req, 'climate.project', stored.row.name, {
           climateFileId: stored.row.id,
@@ -156,16 +153,16 @@ export function storeProjection(
     lostHours: out.lostHours,
     comparison: { parent: out.parentMonthly, projection: out.projectionMonthly },
   };
-  const csv = projectionCsv(out.series, name, derivation);
+  const csv = projectionCsv(out.seriesCsv ?? Buffer.from(cleanedSeriesCsv(out.series)), name, derivation);
   const report = projectionReport(JSON.parse(parent.reportJson) as ImportReport, out.series, derivation);
   // The mapping the importer reads from the CSV's head: what an upload of the download would be mapped as.
-  const mapping = importClimateText(csv.split('\n', 60).join('\n'), { timeZone: 'UTC' }).mapping;
+  const mapping = importClimateText(csv.subarray(0, 16_384).toString('utf8').split('\n', 60).join('\n'), { timeZone: 'UTC' }).mapping;
   const saved = saveClimateFile(tx, {
     projectId: input.projectId,
     siteId: parent.siteId,
     name,
     originalFileName: `${fileNameOf(name)}.csv`,
-    bytes: Buffer.from(csv, 'utf8'),
+    bytes: csv,
     imported: { ok: true, series: out.series, report, mapping },
     createdBy: input.createdBy,
   });
@@ -188,7 +185,7 @@ function fileNameOf(name: string): string {
  * The projection's downloadable "original": the series in the canonical columns (the same writer as the
  * hourly download), headed by comment lines saying what it is, so it can be uploaded again as it stands.
  */
-function projectionCsv(series: ClimateSeries, name: string, d: Derivation): string {
+function projectionCsv(seriesCsv: Uint8Array, name: string, d: Derivation): Buffer {
   const oneLine = (s: string) => s.replace(/[\r\n]+/g, ' ');
   const head = [
     `# ${oneLine(name)}: future-climate projection, not measured weather`,
@@ -196,7 +193,7 @@ function projectionCsv(series: ClimateSeries, name: string, d: Derivation): stri
     `# ${d.citation}`,
     `# ${d.note}`,
   ];
-  return `${head.join('\n')}\n${cleanedSeriesCsv(series)}`;
+  return Buffer.concat([Buffer.from(`${head.join('\n')}\n`), seriesCsv]);
 }
 
 /** The parent's validation report, restated for the projection (its line-level issues belong to the parent's file). */
