@@ -84,11 +84,14 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     return { query, parts, text: texts[parts.indexOf(inTimeOrder[0])], result, original };
   }
 
-  /** The report as answered: when it lists only the first issues, the full list is stored and the report says where. */
-  async function withFullIssueList(req: express.Request, result: ImportResult, climateFileId: number | null): Promise<ImportReport> {
+  /**
+   * The report of a preview or a refused upload as answered: when it lists only the first issues, the full list is
+   * stored (among the project's newest unlinked lists) and the report says where.
+   */
+  async function withFullIssueList(req: express.Request, result: ImportResult): Promise<ImportReport> {
     const packed = await packIssueList(result);
     if (!packed) return result.report;
-    const list = saveIssueList(db, { projectId: req.projectId!, climateFileId, createdBy: req.user?.id ?? null, list: packed });
+    const list = saveIssueList(db, { projectId: req.projectId!, climateFileId: null, createdBy: req.user?.id ?? null, list: packed });
     return { ...result.report, fullIssueList: { path: list.path, issues: list.issues } };
   }
 
@@ -133,7 +136,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
       const { result, text } = await importUpload(req, res, site, true);
-      const report = await withFullIssueList(req, result, null);
+      const report = await withFullIssueList(req, result);
       const s = result.series;
       const hours = s
         ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
@@ -162,7 +165,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       const { query, parts, result, original } = await importUpload(req, res, site, false);
       const bytes = original.bytes;
       if (!result.ok || !result.series) {
-        const report = await withFullIssueList(req, result, null);
+        const report = await withFullIssueList(req, result);
         recordRequestAudit(db, req, 'climate.rejected', original.fileName, { siteId, files: parts.length, summary: result.report.summary });
         throw new HttpError(422, 'import_rejected', result.report.summary, { report, mapping: result.mapping });
       }
