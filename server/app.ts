@@ -35,6 +35,8 @@ export interface AppDeps {
   db: Db;
   pool: WorkerPool;
   runQueue: RunQueue;
+  /** Per-project limit on stored bytes (server/storage/quota.ts); 1 GB when absent. */
+  storageLimitBytes?: number;
   /** Climate-file upload limits; defaults in routes/climate-files.ts. */
   uploadLimits?: { bytes: number; rows: number };
   /** Built client to serve; omitted in API-only tests. */

@@ -1,5 +1,6 @@
 import path from 'node:path';
 import { z } from 'zod';
+import { DEFAULT_PROJECT_STORAGE_MB } from './storage/quota';
 
 /** An on/off variable: 1/true or 0/false (unset is off). */
 const flag = z
@@ -17,6 +18,8 @@ const envSchema = z.object({
   TRAMONTANE_DATA_DIR: z.string().min(1).default('./data'),
   /** Worker threads for the hour classifier; 0 means one per core. */
   TRAMONTANE_WORKERS: z.coerce.number().int().min(0).max(256).default(0),
+  /** Per-project limit on stored bytes (climate files, run hours, issue lists), MB of 1,000,000 bytes. */
+  TRAMONTANE_PROJECT_STORAGE_MB: z.coerce.number().int().min(1).max(10_000_000).default(DEFAULT_PROJECT_STORAGE_MB),
   /** The address people open the app at; links in e-mails and the sign-in callback are built from it. */
   TRAMONTANE_PUBLIC_URL: z.string().url().optional(),
   /** Signs invitation links; when unset a random one is made once and kept in the data folder. */

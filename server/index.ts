@@ -7,6 +7,7 @@ import { appRoot, clientDistFolder } from './paths';
 import { createWorkerPool } from '../workers/pool';
 import { createRunQueue } from './runs/queue';
 import { startAuthRuntime } from './auth/runtime';
+import { BYTES_PER_MB } from './storage/quota';
 
 async function main(): Promise<void> {
   const env = loadEnv();
@@ -31,7 +32,7 @@ async function main(): Promise<void> {
   const resumed = runQueue.resume();
   if (resumed > 0) console.log(`Resuming ${resumed} run(s) left pending`);
 
-  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, adminEmails: env.TRAMONTANE_ADMIN_EMAILS, ...auth.deps });
+  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, adminEmails: env.TRAMONTANE_ADMIN_EMAILS, storageLimitBytes: env.TRAMONTANE_PROJECT_STORAGE_MB * BYTES_PER_MB, ...auth.deps });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : env.PORT;

@@ -33,15 +33,35 @@ function workerBundleUrl(): string {
 }
 export type TaskName = keyof Tasks;
 
+/**
+ * Which queue a task waits in. `long`: imports, runs, sweeps, projections — work a person starts and then waits
+ * for. `interactive`: what a page needs to draw or a person is looking at now (previews, a file's hours and
+ * summary, downloads) — its own few threads, so it never waits behind a queue of long work.
+ */
+export type PoolLane = 'long' | 'interactive';
+
+export interface PoolRunOptions {
+  transferList?: Transferable[];
+  /** Stops the task (and frees its thread) when aborted: pass closedRequestSignal(res) for work done for one request. */
+  signal?: AbortSignal;
+  timeLimitMs?: number;
+  /** Default `long`. */
+  lane?: PoolLane;
+}
+
 export interface WorkerPool {
   /** Runs one task on a pool thread; typed arrays named in transferList move without a copy. */
-  run<K extends TaskName>(
-    task: K,
-    input: Parameters<Tasks[K]>[0],
-    options?: { transferList?: Transferable[]; signal?: AbortSignal; timeLimitMs?: number },
-  ): Promise<Awaited<ReturnType<Tasks[K]>>>;
+  run<K extends TaskName>(task: K, input: Parameters<Tasks[K]>[0], options?: PoolRunOptions): Promise<Awaited<ReturnType<Tasks[K]>>>;
+  /** Threads of the long lane (the run queue runs at most this many runs at once). */
   readonly threads: number;
+  /** Threads of the interactive lane. */
+  readonly interactiveThreads: number;
   destroy(): Promise<void>;
+}
+
+/** The interactive lane's size when not given: a quarter of the long lane's threads, at least 1 and at most 2. */
+export function defaultInteractiveThreads(longThreads: number): number {
+  return Math.max(1, Math.min(2, Math.floor(longThreads / 4)));
 }
 
 /**
@@ -50,26 +70,31 @@ export interface WorkerPool {
  * the same way in development, tests and production. (Loading TypeScript in each thread through tsx made a
  * 50-run sweep on two threads 10–20 % slower than the same bundle.)
  * To add a task: write workers/<task>.ts (a thin wrapper over shared/) and export it from workers/tasks.ts.
+ * Two lanes, each its own piscina over the same bundle: `long` (`threads`, one per core by default) and a small
+ * `interactive` one, so a preview or a page's data never queues behind a batch of imports or runs.
  */
-export function createWorkerPool(options: { threads?: number } = {}): WorkerPool {
+export function createWorkerPool(options: { threads?: number; interactiveThreads?: number } = {}): WorkerPool {
   const threads = options.threads && options.threads > 0 ? options.threads : availableParallelism();
-  const piscina = new Piscina({
-    filename: workerBundleUrl(),
-    minThreads: 1,
-    maxThreads: threads,
-    idleTimeout: 60_000,
-  });
+  const interactiveThreads = options.interactiveThreads && options.interactiveThreads > 0 ? options.interactiveThreads : defaultInteractiveThreads(threads);
+  const filename = workerBundleUrl();
+  const lanes: Record<PoolLane, Piscina> = {
+    long: new Piscina({ filename, minThreads: 1, maxThreads: threads, idleTimeout: 60_000 }),
+    interactive: new Piscina({ filename, minThreads: 1, maxThreads: interactiveThreads, idleTimeout: 60_000 }),
+  };
   return {
     threads,
-    run: async (task, input, { transferList, signal, timeLimitMs = TASK_TIME_LIMIT_MS } = {}) => {
+    interactiveThreads,
+    run: async (task, input, { transferList, signal, timeLimitMs = TASK_TIME_LIMIT_MS, lane = 'long' } = {}) => {
       const limit = AbortSignal.timeout(timeLimitMs);
       try {
-        return await piscina.run({ task, input }, { transferList: transferList as never, signal: signal ? AbortSignal.any([signal, limit]) : limit });
+        return await lanes[lane].run({ task, input }, { transferList: transferList as never, signal: signal ? AbortSignal.any([signal, limit]) : limit });
       } catch (error) {
         if (limit.aborted && !signal?.aborted) throw new TaskTimeLimitError(task, timeLimitMs);
         throw error;
       }
     },
-    destroy: () => piscina.destroy(),
+    destroy: async () => {
+      await Promise.all([lanes.long.destroy(), lanes.interactive.destroy()]);
+    },
   };
 }

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
-import { decodeFloat64Column, decodeUint8Column, encodeColumn, type ClimateSeries, type ImportResult } from '../../shared/climate';
+import { decodeClimateSeries, encodeColumn, type ClimateSeries, type EncodedClimateSeries, type ImportResult } from '../../shared/climate';
 import type { HumidityKind } from '../../shared/psychrometrics';
 import type { Db, DbOrTx } from '../db/client';
 import { climateFiles, climateOriginals, climateSeries } from '../db/schema';
@@ -71,8 +71,8 @@ export function findClimateFile(db: Db, projectId: number, fileId: number) {
     .get();
 }
 
-/** The hourly series of a stored file, as typed arrays ready for the engine or a worker. */
-export function loadClimateSeries(db: Db, fileId: number): ClimateSeries | undefined {
+/** The column blobs of a stored file's series, undecoded (a worker decodes them); undefined when none is stored. */
+export function loadEncodedSeries(db: Db, fileId: number): EncodedClimateSeries | undefined {
   const row = db
     .select({ kind: climateFiles.humidityKind, series: climateSeries })
     .from(climateSeries)
@@ -80,14 +80,14 @@ export function loadClimateSeries(db: Db, fileId: number): ClimateSeries | undef
     .where(eq(climateSeries.climateFileId, fileId))
     .get();
   if (!row) return undefined;
-  const s = row.series;
-  return {
-    timestampsMs: decodeFloat64Column(s.timestampsMs),
-    dryBulbC: decodeFloat64Column(s.dryBulbC),
-    humidity: { kind: row.kind as HumidityKind, values: decodeFloat64Column(s.humidity) },
-    pressurePa: s.pressurePa ? decodeFloat64Column(s.pressurePa) : null,
-    flags: decodeUint8Column(s.flags),
-  };
+  const { timestampsMs, dryBulbC, humidity, pressurePa, flags } = row.series;
+  return { humidityKind: row.kind as HumidityKind, timestampsMs, dryBulbC, humidity, pressurePa, flags };
+}
+
+/** The hourly series of a stored file, as typed arrays ready for the engine or a worker. */
+export function loadClimateSeries(db: Db, fileId: number): ClimateSeries | undefined {
+  const encoded = loadEncodedSeries(db, fileId);
+  return encoded && decodeClimateSeries(encoded);
 }
 
 export function loadOriginal(db: Db, fileId: number): Buffer | undefined {

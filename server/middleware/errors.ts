@@ -13,6 +13,8 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
  */
 export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler {
   return (error, _req, res, _next) => {
+    // Pool work stopped because its client went away (closedRequestSignal): nobody is left to answer, and nothing failed.
+    if (error?.name === 'AbortError' && res.destroyed) return;
     const body = (code: string, message: string, details?: unknown): ApiErrorBody => ({
       error: details === undefined ? { code, message } : { code, message, details },
     });

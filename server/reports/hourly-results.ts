@@ -11,7 +11,8 @@ import { HttpError } from '../http-error';
  * The hourly file of a finished run (the command line's --hourly columns, as CSV or column-wise JSON),
  * made on the worker pool: the outdoor states are recomputed there from the stored climate series with
  * the pressure at the run's elevation (the engine's own first step), and the stored modes and compressor shares are used
- * as they were.
+ * as they were. A download is interactive work (its own lane of the pool); pass the request's closedRequestSignal so
+ * a cancelled download stops.
  */
 export async function hourlyFileOf(
   db: Db,
@@ -19,6 +20,7 @@ export async function hourlyFileOf(
   run: typeof runs.$inferSelect,
   format: 'csv' | 'json',
   about?: Record<string, unknown>,
+  signal?: AbortSignal,
 ): Promise<Buffer> {
   const stored = db.select().from(runHours).where(eq(runHours.runId, run.id)).get();
   if (!stored || run.status !== 'done') throw new HttpError(409, 'not_ready', `Run ${run.id} is ${run.status}; its hours exist once it is done.`);
@@ -43,6 +45,6 @@ export async function hourlyFileOf(
     humidified,
     format,
     about,
-  });
+  }, { lane: 'interactive', signal });
   return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 }

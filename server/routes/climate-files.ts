@@ -2,16 +2,17 @@ import express from 'express';
 import { desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { createHash } from 'node:crypto';
-import { decodeClimateBytes, joinClimateFiles, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
-import { csvCell } from '../../shared/csv';
+import { decodeClimateBytes, firstLinesEchoed, joinClimateFiles, type ClimateSeries, type ImportReport, type ImportResult } from '../../shared/climate';
 import { climateUploadQuerySchema, uploadedFilesSchema } from '../../shared/schemas/climate-file';
 import { fixedOffsetZone, standardOffsetMinutes } from '../../shared/time-zone';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { multipartBoundary, readMultipartFiles } from '../climate/multipart';
-import { findClimateFile, loadClimateSeries, loadOriginal, saveClimateFile } from '../climate/store';
+import { findClimateFile, loadClimateSeries, loadEncodedSeries, loadOriginal, saveClimateFile } from '../climate/store';
+import { linkIssueList, loadIssueListCsv, packIssueList, saveIssueList, UNLINKED_LISTS_KEPT } from '../climate/issue-lists';
 import { tarArchive } from '../climate/tar-archive';
+import { climateFileBytes, requireStorage, storageLimitOf } from '../storage/quota';
 import { climateFiles, sites } from '../db/schema';
 import { HttpError } from '../http-error';
 import { closedRequestSignal } from '../request-signal';
@@ -23,6 +24,7 @@ const previewHours = 48;
 
 const siteParams = z.object({ siteId: z.coerce.number().int().positive('siteId must be a positive whole number') });
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
+const listParams = z.object({ listId: z.coerce.number().int().positive('listId must be a positive whole number') });
 const hoursQuery = z.object({ year: z.coerce.number().int().min(1800).max(2200).optional() });
 
 function countRows(text: string): number {
@@ -39,9 +41,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
   /**
    * Reads the body — one raw file, or several files as multipart/form-data — and imports it on the pool:
    * a set's files are read in parallel with the same options and mapping, then joined in time order
-   * (shared/climate/join-files.ts). Nothing is stored here. The body limit (413) covers the whole set.
+   * (shared/climate/join-files.ts). Nothing is stored here. The body limit (413) covers the whole set. A preview goes
+   * in the pool's interactive lane, an import in the long one; either stops if the client leaves.
    */
-  async function importUpload(req: express.Request, res: express.Response, site: { elevationM: number; timeZone: string }) {
+  async function importUpload(req: express.Request, res: express.Response, site: { elevationM: number; timeZone: string }, forPreview: boolean) {
     const { timeZone } = site;
     const query = climateUploadQuerySchema.parse(req.query);
     const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
@@ -68,7 +71,8 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       site: { elevationM: site.elevationM, timeZone },
     };
     const signal = closedRequestSignal(res);
-    const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options }, { signal })));
+    const lane = forPreview ? 'interactive' : 'long';
+    const results: ImportResult[] = await Promise.all(texts.map((text) => pool.run('importClimate', { text, options }, { signal, lane })));
     if (parts.length === 1) return { query, parts, text: texts[0], result: results[0], original: parts[0] };
     const files = parts.map((p, i) => ({ fileName: p.fileName, bytes: p.bytes.byteLength, sha256: sha256(p.bytes), result: results[i] }));
     const result = joinClimateFiles(files, query.maxGapHours, timeZone);
@@ -78,6 +82,17 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     const inTimeOrder = result.report.files.map((f) => parts.find((p) => p.fileName === f.fileName)!);
     const original = { fileName: `${setName}.tar`, bytes: tarArchive(inTimeOrder, 0) };
     return { query, parts, text: texts[parts.indexOf(inTimeOrder[0])], result, original };
+  }
+
+  /**
+   * The report of a preview or a refused upload as answered: when it lists only the first issues, the full list is
+   * stored (among the project's newest unlinked lists) and the report says where.
+   */
+  async function withFullIssueList(req: express.Request, result: ImportResult): Promise<ImportReport> {
+    const packed = await packIssueList(result);
+    if (!packed) return result.report;
+    const list = saveIssueList(db, { projectId: req.projectId!, climateFileId: null, createdBy: req.user?.id ?? null, list: packed });
+    return { ...result.report, fullIssueList: { path: list.path, issues: list.issues } };
   }
 
   function fileOr404(projectId: number, fileIdParam: unknown) {
@@ -91,6 +106,18 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     const series = loadClimateSeries(db, fileId);
     if (!series) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
     return series;
+  }
+
+  /**
+   * A stored file's hourly CSV or hours JSON, built on the pool's interactive lane from the undecoded columns (a
+   * century of hours takes seconds, which on the main thread would stall every other request), stopped if the
+   * client leaves.
+   */
+  async function formatOnPool(res: express.Response, fileId: number, format: 'csv' | 'hours-json', year?: { year: number; offsetMinutes: number }): Promise<Buffer> {
+    const encoded = loadEncodedSeries(db, fileId);
+    if (!encoded) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
+    const bytes = await pool.run('formatClimateSeries', { encoded, format, year }, { lane: 'interactive', signal: closedRequestSignal(res) });
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 
   return [
@@ -108,7 +135,8 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files/preview', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { result, text } = await importUpload(req, res, site);
+      const { result, text } = await importUpload(req, res, site, true);
+      const report = await withFullIssueList(req, result);
       const s = result.series;
       const hours = s
         ? Array.from({ length: Math.min(previewHours, s.timestampsMs.length) }, (_, i) => ({
@@ -122,9 +150,9 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       res.json({
         ok: result.ok,
         mapping: result.mapping,
-        report: result.report,
+        report,
         humidityKind: s?.humidity.kind ?? null,
-        firstLines: text.split(/\r?\n/, 12),
+        firstLines: firstLinesEchoed(text),
         preview: hours,
       });
     }),
@@ -132,23 +160,32 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/sites/:siteId/climate-files', access.engineer, rawUpload, async (req, res) => {
       const { siteId } = siteParams.parse(req.params);
       const site = findSite(deps, req.projectId!, siteId);
-      const { query, parts, result, original } = await importUpload(req, res, site);
+      // The upload itself is a floor of what it would store: refused before the import's work when even that does not fit.
+      requireStorage(db, req.projectId!, storageLimitOf(deps), Buffer.isBuffer(req.body) ? req.body.byteLength : 0, 'this upload');
+      const { query, parts, result, original } = await importUpload(req, res, site, false);
       const bytes = original.bytes;
       if (!result.ok || !result.series) {
+        const report = await withFullIssueList(req, result);
         recordRequestAudit(db, req, 'climate.rejected', original.fileName, { siteId, files: parts.length, summary: result.report.summary });
-        throw new HttpError(422, 'import_rejected', result.report.summary, { report: result.report, mapping: result.mapping });
+        throw new HttpError(422, 'import_rejected', result.report.summary, { report, mapping: result.mapping });
       }
       const series = result.series;
+      const issueList = await packIssueList(result);
       const row = db.transaction((tx) => {
+        const hours = series.timestampsMs.length;
+        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(bytes.byteLength, hours, series.pressurePa !== null), 'this climate file');
+        const list = issueList && saveIssueList(tx, { projectId: req.projectId!, climateFileId: null, createdBy: req.user?.id ?? null, list: issueList });
+        const report = { ...result.report, fullIssueList: list && { path: list.path, issues: list.issues } };
         const saved = saveClimateFile(tx, {
           projectId: req.projectId!,
           siteId,
           name: query.name ?? original.fileName.replace(/\.[^.]+$/, ''),
           originalFileName: original.fileName,
           bytes,
-          imported: { ...result, series },
+          imported: { ...result, report, series },
           createdBy: req.user?.id ?? null,
         });
+        if (list) linkIssueList(tx, list.id, saved.id);
         recordRequestAudit(tx, req, 'climate.import', saved.name, {
           climateFileId: saved.id,
           fileName: original.fileName,
@@ -160,14 +197,14 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
         });
         return saved;
       });
-      res.status(201).json({ climateFile: listing(row, site.name), report: result.report });
+      res.status(201).json({ climateFile: listing(row, site.name), report: JSON.parse(row.reportJson) as ImportReport });
     }),
 
     route('get', '/projects/:projectId/climate-files/:fileId', access.viewer, async (req, res) => {
       const file = fileOr404(req.projectId!, req.params.fileId);
       const site = findSite(deps, req.projectId!, file.siteId);
       const series = seriesOf(file.id);
-      const summary = await pool.run('summariseClimate', { series, elevationM: site.elevationM });
+      const summary = await pool.run('summariseClimate', { series, elevationM: site.elevationM }, { lane: 'interactive', signal: closedRequestSignal(res) });
       res.json({
         climateFile: listing(file, site.name),
         site,
@@ -177,31 +214,13 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       });
     }),
 
-    route('get', '/projects/:projectId/climate-files/:fileId/hours', access.viewer, (req, res) => {
+    route('get', '/projects/:projectId/climate-files/:fileId/hours', access.viewer, async (req, res) => {
       const file = fileOr404(req.projectId!, req.params.fileId);
       const { year } = hoursQuery.parse(req.query);
-      const s = seriesOf(file.id);
-      let from = 0;
-      let to = s.timestampsMs.length;
-      if (year !== undefined) {
-        // a calendar year on the site's standard time, as the file page and run pages count years
-        const offsetMs = standardOffsetMinutes(findSite(deps, req.projectId!, file.siteId).timeZone) * 60_000;
-        const start = Date.UTC(year, 0, 1) - offsetMs;
-        const end = Date.UTC(year + 1, 0, 1) - offsetMs;
-        from = s.timestampsMs.findIndex((t) => t >= start);
-        if (from < 0) from = to;
-        const after = s.timestampsMs.findIndex((t) => t >= end);
-        to = after < 0 ? to : after;
-      }
-      const pick = (a: Float64Array | null) => (a ? Array.from(a.subarray(from, to), round3) : null);
-      res.json({
-        humidityKind: s.humidity.kind,
-        timestampsMs: Array.from(s.timestampsMs.subarray(from, to)),
-        dryBulbC: pick(s.dryBulbC),
-        humidity: pick(s.humidity.values),
-        pressurePa: pick(s.pressurePa),
-        flags: Array.from(s.flags.subarray(from, to)),
-      });
+      // a calendar year on the site's standard time, as the file page and run pages count years
+      const window = year === undefined ? undefined : { year, offsetMinutes: standardOffsetMinutes(findSite(deps, req.projectId!, file.siteId).timeZone) };
+      const bytes = await formatOnPool(res, file.id, 'hours-json', window);
+      res.type('application/json').send(bytes);
     }),
 
     route('get', '/projects/:projectId/climate-files/:fileId/original', access.viewer, (req, res) => {
@@ -211,10 +230,17 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       res.attachment(file.originalFileName).type('application/octet-stream').send(bytes);
     }),
 
-    route('get', '/projects/:projectId/climate-files/:fileId/hourly.csv', access.viewer, (req, res) => {
+    route('get', '/projects/:projectId/climate-files/:fileId/hourly.csv', access.viewer, async (req, res) => {
       const file = fileOr404(req.projectId!, req.params.fileId);
-      const s = seriesOf(file.id);
-      res.attachment(`${file.name}-hourly.csv`).type('text/csv').send(hourlyCsv(s));
+      const bytes = await formatOnPool(res, file.id, 'csv');
+      res.attachment(`${file.name}-hourly.csv`).type('text/csv').send(bytes);
+    }),
+
+    route('get', '/projects/:projectId/climate-issue-lists/:listId', access.viewer, async (req, res) => {
+      const { listId } = listParams.parse(req.params);
+      const csv = await loadIssueListCsv(db, req.projectId!, listId);
+      if (!csv) throw new HttpError(404, 'not_found', `Issue list ${listId} was not found in this project; lists of previews and refused uploads are kept for the newest ${UNLINKED_LISTS_KEPT} only.`);
+      res.attachment(`climate-file-issues-${listId}.csv`).type('text/csv').send(csv);
     }),
 
     route('delete', '/projects/:projectId/climate-files/:fileId', access.engineer, (req, res) => {
@@ -226,33 +252,6 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
       res.status(204).end();
     }),
   ];
-}
-
-const canonicalHumidityColumn = {
-  'relative-humidity-pct': 'relative_humidity_pct',
-  'dew-point-c': 'dew_point_c',
-  'wet-bulb-c': 'wet_bulb_c',
-  'humidity-ratio-kgkg': 'humidity_ratio_gkg',
-} as const;
-
-const flagWords = ['measured', 'filled', 'missing'];
-
-/** The cleaned series in the command line's canonical columns, so it can be fed straight back in. */
-export function hourlyCsv(s: ClimateSeries): string {
-  const humidityScale = s.humidity.kind === 'humidity-ratio-kgkg' ? 1000 : 1;
-  const header = ['timestamp', 'dry_bulb_c', canonicalHumidityColumn[s.humidity.kind], ...(s.pressurePa ? ['pressure_kpa'] : []), 'flag'];
-  const lines = [header.join(',')];
-  for (let i = 0; i < s.timestampsMs.length; i++) {
-    const cells = [
-      new Date(s.timestampsMs[i]).toISOString().replace('.000Z', 'Z'),
-      csvCell(round3(s.dryBulbC[i])),
-      csvCell(round3(s.humidity.values[i] * humidityScale)),
-      ...(s.pressurePa ? [csvCell(round3(s.pressurePa[i] / 1000))] : []),
-      flagWords[s.flags[i]] ?? 'missing',
-    ];
-    lines.push(cells.join(','));
-  }
-  return `${lines.join('\n')}\n`;
 }
 
 /** The zone the importer reads local timestamps in, for the chosen time basis. */
@@ -270,10 +269,6 @@ function sha256(bytes: Buffer): string {
 function defaultSetName(fileNames: string[]): string {
   const bare = fileNames.map((n) => n.replace(/\.[^.]+$/, ''));
   return `${bare[0]}–${bare[bare.length - 1]} (${bare.length} files)`;
-}
-
-function round3(v: number): number {
-  return Math.round(v * 1000) / 1000;
 }
 
 function nullIfNaN(v: number): number | null {

@@ -15,6 +15,7 @@ import { access, route, type RouteSpec } from '../auth/access';
 import { loadClimateSeries } from '../climate/store';
 import { runs } from '../db/schema';
 import { HttpError } from '../http-error';
+import { closedRequestSignal } from '../request-signal';
 
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
 
@@ -69,7 +70,7 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
       };
       const transferList = [series.timestampsMs.buffer, series.dryBulbC.buffer, series.humidity.values.buffer, series.flags.buffer];
       if (series.pressurePa) transferList.push(series.pressurePa.buffer);
-      const analysis = await pool.run('analyseExcursions', { scenario, series, elevationM: climate.elevationM, proposal }, { transferList });
+      const analysis = await pool.run('analyseExcursions', { scenario, series, elevationM: climate.elevationM, proposal }, { transferList, lane: 'interactive', signal: closedRequestSignal(res) });
 
       res.json({
         run: {

@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { importClimateText, standardOffsetMinutes, type ClimateSeries, type ImportReport } from '../../shared/climate';
+import { cleanedSeriesCsv, importClimateText, standardOffsetMinutes, type ClimateSeries, type ImportReport } from '../../shared/climate';
 import {
   describeFactorIssues,
   MORPHING_CITATION,
@@ -17,7 +17,9 @@ import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries, saveClimateFile } from '../climate/store';
 import { climateFiles } from '../db/schema';
 import { HttpError } from '../http-error';
-import { hourlyCsv, listing } from './climate-files';
+import { closedRequestSignal } from '../request-signal';
+import { climateFileBytes, requireStorage, storageLimitOf } from '../storage/quota';
+import { listing } from './climate-files';
 import { findSite } from './sites';
 
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
@@ -47,8 +49,8 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
     throw new HttpError(400, 'invalid_factors', `The change factors were refused: ${problems.join('; ')}.`, { problems });
   }
 
-  /** Morphs on the pool; refusals (a daily range turned upside down) come back as 422 naming the month. */
-  async function morph(series: ClimateSeries, timeZone: string, elevationM: number, factors: ChangeFactors, keepSeries: boolean) {
+  /** Morphs on the pool (a preview in its interactive lane), stopped if the client leaves; refusals (a daily range turned upside down) come back as 422 naming the month. */
+  async function morph(series: ClimateSeries, timeZone: string, elevationM: number, factors: ChangeFactors, keepSeries: boolean, signal: AbortSignal) {
     const utcOffsetMinutes = standardOffsetMinutes(timeZone);
     const result: MorphClimateTaskResult = await pool.run('morphClimate', {
       series,
@@ -56,7 +58,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       utcOffsetMinutes,
       elevationM,
       keepSeries,
-    });
+    }, { lane: keepSeries ? 'long' : 'interactive', signal });
     if (!result.ok) {
       throw new HttpError(422, 'invalid_factors', `The change factors do not fit this file: ${result.problems.join('; ')}.`, { problems: result.problems });
     }
@@ -67,7 +69,7 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/climate-files/:fileId/projections/preview', access.engineer, async (req, res) => {
       const { factors } = requestOf(req.body);
       const { series, site } = parentOf(req.projectId!, req.params.fileId);
-      const out = await morph(series, site.timeZone, site.elevationM, factors, false);
+      const out = await morph(series, site.timeZone, site.elevationM, factors, false, closedRequestSignal(res));
       res.json({
         comparison: { parent: out.parentMonthly, projection: out.projectionMonthly },
         alphaByMonth: out.alphaByMonth,
@@ -80,8 +82,11 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
     route('post', '/projects/:projectId/climate-files/:fileId/projections', access.engineer, async (req, res) => {
       const body = requestOf(req.body);
       const { file: parent, series, site } = parentOf(req.projectId!, req.params.fileId);
-      const out = await morph(series, site.timeZone, site.elevationM, body.factors, true);
+      const out = await morph(series, site.timeZone, site.elevationM, body.factors, true, closedRequestSignal(res));
       const { row, derivation } = db.transaction((tx) => {
+        // The projection stores its series and, as its original, the series as CSV (its few head lines left out here).
+        const hours = out.series?.timestampsMs.length ?? 0;
+        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(out.seriesCsv?.byteLength ?? 0, hours, Boolean(out.series?.pressurePa)), 'the projection');
         const stored = storeProjection(tx, { projectId: req.projectId!, parent, request: body, morphed: out, createdBy: req.user?.id ?? null });
         recordRequestAudit(tx, req, 'climate.project', stored.row.name, {
           climateFileId: stored.row.id,
@@ -148,16 +153,16 @@ export function storeProjection(
     lostHours: out.lostHours,
     comparison: { parent: out.parentMonthly, projection: out.projectionMonthly },
   };
-  const csv = projectionCsv(out.series, name, derivation);
+  const csv = projectionCsv(out.seriesCsv ?? Buffer.from(cleanedSeriesCsv(out.series)), name, derivation);
   const report = projectionReport(JSON.parse(parent.reportJson) as ImportReport, out.series, derivation);
   // The mapping the importer reads from the CSV's head: what an upload of the download would be mapped as.
-  const mapping = importClimateText(csv.split('\n', 60).join('\n'), { timeZone: 'UTC' }).mapping;
+  const mapping = importClimateText(csv.subarray(0, 16_384).toString('utf8').split('\n', 60).join('\n'), { timeZone: 'UTC' }).mapping;
   const saved = saveClimateFile(tx, {
     projectId: input.projectId,
     siteId: parent.siteId,
     name,
     originalFileName: `${fileNameOf(name)}.csv`,
-    bytes: Buffer.from(csv, 'utf8'),
+    bytes: csv,
     imported: { ok: true, series: out.series, report, mapping },
     createdBy: input.createdBy,
   });
@@ -180,7 +185,7 @@ function fileNameOf(name: string): string {
  * The projection's downloadable "original": the series in the canonical columns (the same writer as the
  * hourly download), headed by comment lines saying what it is, so it can be uploaded again as it stands.
  */
-function projectionCsv(series: ClimateSeries, name: string, d: Derivation): string {
+function projectionCsv(seriesCsv: Uint8Array, name: string, d: Derivation): Buffer {
   const oneLine = (s: string) => s.replace(/[\r\n]+/g, ' ');
   const head = [
     `# ${oneLine(name)}: future-climate projection, not measured weather`,
@@ -188,7 +193,7 @@ function projectionCsv(series: ClimateSeries, name: string, d: Derivation): stri
     `# ${d.citation}`,
     `# ${d.note}`,
   ];
-  return `${head.join('\n')}\n${hourlyCsv(series)}`;
+  return Buffer.concat([Buffer.from(`${head.join('\n')}\n`), seriesCsv]);
 }
 
 /** The parent's validation report, restated for the projection (its line-level issues belong to the parent's file). */

@@ -6,13 +6,15 @@ import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { memberships, projects } from '../db/schema';
 import { parsePatch } from '../patch-body';
+import { storageLimitOf, storageUse } from '../storage/quota';
 
 const projectInput = z.object({
   name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters').refine(...withoutControlCharacters('name')),
   description: z.string().trim().max(2000, 'description must be at most 2000 characters').refine(...withoutControlCharacters('description', { multiLine: true })).default(''),
 });
 
-export function projectRoutes({ db }: AppDeps): RouteSpec[] {
+export function projectRoutes(deps: AppDeps): RouteSpec[] {
+  const { db } = deps;
   return [
     // Members see their projects with their role; an organisation admin sees every project, as owner where not a member.
     route('get', '/projects', access.signedIn, (req, res) => {
@@ -36,6 +38,10 @@ export function projectRoutes({ db }: AppDeps): RouteSpec[] {
         return row;
       });
       res.status(201).json({ project: { ...project, role: 'owner' } });
+    }),
+    // What the project stores against its limit, shown on the project page.
+    route('get', '/projects/:projectId/storage', access.viewer, (req, res) => {
+      res.json({ storage: storageUse(db, req.projectId!, storageLimitOf(deps)) });
     }),
     route('patch', '/projects/:projectId', access.owner, (req, res) => {
       const input = parsePatch(projectInput, req.body);

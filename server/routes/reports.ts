@@ -10,6 +10,7 @@ import { runs, shareLinks } from '../db/schema';
 import { HttpError } from '../http-error';
 import { perAddressLimit } from '../middleware/rate-limit';
 import { hourlyFileOf } from '../reports/hourly-results';
+import { closedRequestSignal } from '../request-signal';
 import { comparisonQuery, comparisonReport, runReport } from '../reports/load-report';
 import { checkPublicUntil, createShareInput, listLinks, newShareToken, presentLink, resolveShareToken } from '../reports/share-links';
 
@@ -68,11 +69,11 @@ async function sendDownload(
     if (!row) throw new HttpError(404, 'not_found', `Run ${run.id} was not found in this project.`);
     if (file === 'hourly.json') {
       const about = { id: run.id, scenario: run.scenario.name, site: run.site.name, climateFile: run.climate.name };
-      const bytes = await hourlyFileOf(db, pool, row, 'json', about);
+      const bytes = await hourlyFileOf(db, pool, row, 'json', about, closedRequestSignal(res));
       res.attachment(runFileName(run, 'hourly', 'json')).type('application/json').send(bytes);
       return;
     }
-    const bytes = await hourlyFileOf(db, pool, row, 'csv');
+    const bytes = await hourlyFileOf(db, pool, row, 'csv', undefined, closedRequestSignal(res));
     res.attachment(runFileName(run, 'hourly', 'csv')).type('text/csv; charset=utf-8').send(bytes);
     return;
   }

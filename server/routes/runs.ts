@@ -9,6 +9,7 @@ import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile } from '../climate/store';
 import { runHours, runs, scenarios, sites, sweeps } from '../db/schema';
 import { HttpError } from '../http-error';
+import { requireStorage, runBytes, storageLimitOf } from '../storage/quota';
 import { validScenario } from './scenarios';
 import { newRunValues } from '../runs/new-run';
 
@@ -96,6 +97,10 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         return { file, site };
       });
       const created = db.transaction((tx) => {
+        // Each run is counted at what it will store when done (its file's hours × RUN_BYTES_PER_HOUR), before any is queued.
+        const neededBytes = chosen.length * files.reduce((sum, { file }) => sum + runBytes(file.hours), 0);
+        const count = chosen.length * files.length;
+        requireStorage(tx, projectId, storageLimitOf(deps), neededBytes, count === 1 ? 'the run' : `these ${count} runs`);
         const rows = chosen.flatMap((scenarioRow) => {
           const scenario = validScenario(JSON.parse(scenarioRow.scenarioJson));
           return files.map(({ file, site }) =>

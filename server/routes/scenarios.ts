@@ -9,6 +9,7 @@ import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile, loadClimateSeries } from '../climate/store';
 import { scenarios, sites } from '../db/schema';
 import { HttpError } from '../http-error';
+import { closedRequestSignal } from '../request-signal';
 import { parseMigrationRecord, type ScenarioMigrationRecord } from '../scenarios/saved-migration';
 
 const scenarioParams = z.object({ scenarioId: z.coerce.number().int().positive('scenarioId must be a positive whole number') });
@@ -128,7 +129,7 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
         scenario,
         series,
         options: { elevationM: site.elevationM, utcOffsetMinutes: standardOffsetMinutes(site.timeZone) },
-      });
+      }, { lane: 'interactive', signal: closedRequestSignal(res) });
       res.json({ hours: out.results.hours, modes: MODE_NAMES, energy: out.results.energy, water: out.results.water });
     }),
   ];

@@ -9,6 +9,7 @@ import { findClimateFile } from '../climate/store';
 import { runs, scenarios, sites, sweeps } from '../db/schema';
 import { insertSweep, type StoredSweepSpec } from '../runs/new-sweep';
 import { HttpError } from '../http-error';
+import { requireStorage, runBytes, storageLimitOf } from '../storage/quota';
 import { validScenario } from './scenarios';
 
 const sweepParams = z.object({ sweepId: z.coerce.number().int().positive('sweepId must be a positive whole number') });
@@ -91,6 +92,8 @@ export function sweepRoutes(deps: AppDeps): RouteSpec[] {
 
       // The sweep and all its runs, or nothing.
       const { sweep, created } = db.transaction((tx) => {
+        const points = prepared.points.length;
+        requireStorage(tx, projectId, storageLimitOf(deps), points * runBytes(file.hours), `the sweep's ${points} runs`);
         const { sweep, created } = insertSweep(tx, {
           projectId,
           name: spec.name,

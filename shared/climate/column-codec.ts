@@ -7,6 +7,9 @@
  * bytes 8–11 element count (uint32 LE), bytes 12–15 zero, then the elements.
  */
 
+import type { HumidityKind } from '../psychrometrics';
+import type { ClimateSeries } from './types';
+
 const MAGIC = [0x54, 0x4d, 0x43, 0x31]; // "TMC1"
 const HEADER_BYTES = 16;
 const FLOAT64 = 1;
@@ -67,4 +70,25 @@ export function decodeUint8Column(blob: Uint8Array): Uint8Array {
   const column = decodeColumn(blob);
   if (column instanceof Float64Array) throw new RangeError('blob holds a float64 column, not uint8');
   return column;
+}
+
+/** A stored climate series as its column blobs, as read from the database: cheap to read, decoded where it is used. */
+export interface EncodedClimateSeries {
+  humidityKind: HumidityKind;
+  timestampsMs: Uint8Array;
+  dryBulbC: Uint8Array;
+  humidity: Uint8Array;
+  pressurePa: Uint8Array | null;
+  flags: Uint8Array;
+}
+
+/** The typed arrays of a stored series (each a fresh copy, so they can be transferred). */
+export function decodeClimateSeries(encoded: EncodedClimateSeries): ClimateSeries {
+  return {
+    timestampsMs: decodeFloat64Column(encoded.timestampsMs),
+    dryBulbC: decodeFloat64Column(encoded.dryBulbC),
+    humidity: { kind: encoded.humidityKind, values: decodeFloat64Column(encoded.humidity) },
+    pressurePa: encoded.pressurePa ? decodeFloat64Column(encoded.pressurePa) : null,
+    flags: decodeUint8Column(encoded.flags),
+  };
 }

@@ -14,6 +14,7 @@
 import { applyMappingOverride } from './apply-mapping';
 import { firstLines, looksBinary, parseRows, skipLeadingComments, scanLines, sniffDelimiter, stripBom } from './delimited-text';
 import { DEFAULT_MAX_GAP_HOURS, emptyCounts, emptyMapping, type Context } from './import-context';
+import { boundedMapping } from './echo-limits';
 import { IssueLog } from './issue-log';
 import { isKnownTimeZone } from '../time-zone';
 import { buildMapping, reportMapping } from './mapping-report';
@@ -66,7 +67,14 @@ function finish(ctx: Context, series: ClimateSeries | null, siteTimeZone?: strin
     fileHeader: ctx.fileHeader ?? null,
     typicalYear: ok ? (ctx.typicalYear ?? null) : null,
   };
-  return { ok, series: ok ? series : null, report, mapping: ctx.mapping, hourLines: ok ? ctx.hourLines : null };
+  return {
+    ok,
+    series: ok ? series : null,
+    report,
+    mapping: boundedMapping(ctx.mapping),
+    hourLines: ok ? ctx.hourLines : null,
+    issueList: { rows: ctx.log.rows, notWritten: ctx.log.notWritten, ofSet: false },
+  };
 }
 
 /**

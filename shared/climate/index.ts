@@ -1,6 +1,7 @@
 /** The climate-file importer: pure TypeScript for the server, workers and the command line. */
 export { importClimateText, DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './import-climate-text';
-export { encodeColumn, decodeColumn, decodeFloat64Column, decodeUint8Column, type ColumnArray } from './column-codec';
+export { encodeColumn, decodeColumn, decodeFloat64Column, decodeUint8Column, decodeClimateSeries, type ColumnArray, type EncodedClimateSeries } from './column-codec';
+export { cleanedSeriesCsv, seriesHoursJson, yearWindow } from './series-files';
 export { decodeClimateBytes } from './decode-bytes';
 export { joinClimateFiles, type FileImport } from './join-files';
 export { isKnownTimeZone, standardOffsetMinutes } from '../time-zone';
@@ -39,3 +40,5 @@ export type {
   HumidityRatioUnit,
   PressureUnit,
 } from './types';
+export { cutCell, firstLinesEchoed, ECHO_CELL_CHARS } from './echo-limits';
+export { issueListCsv, ISSUES_LISTED } from './issue-log';

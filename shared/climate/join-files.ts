@@ -44,7 +44,7 @@ const utc = (ms: number) => formatUtc(ms).slice(0, 16).replace('T', ' ');
 
 /** Joins the imports of a set (any order) into one result; never throws. */
 export function joinClimateFiles(files: FileImport[], maxGapHours: number, siteTimeZone?: string): ImportResult & { report: { files: FileInSet[] } } {
-  const log = new IssueLog();
+  const log = new IssueLog(true);
   const counts: ImportCounts = emptyCounts();
   const fileReports: FileInSet[] = files.map((f) => ({
     fileName: f.fileName,
@@ -61,7 +61,11 @@ export function joinClimateFiles(files: FileImport[], maxGapHours: number, siteT
     warnings: f.result.report.issues.filter((i) => i.severity === 'warning').length,
   }));
   // each file's own issues, named by file
-  for (const f of files) for (const issue of f.result.report.issues) log.add({ ...issue, file: f.fileName });
+  for (const f of files) {
+    for (const issue of f.result.report.issues) log.list({ ...issue, file: f.fileName });
+    log.notListed += f.result.report.counts.issuesNotListed;
+    if (f.result.issueList) log.adoptRows(f.result.issueList.rows, f.result.issueList.notWritten, f.fileName);
+  }
   for (const f of files) {
     for (const key of Object.keys(counts) as (keyof ImportCounts)[]) {
       if (key === 'hours' || key === 'measuredHours' || key === 'filledHours' || key === 'missingHours' || key === 'gaps' || key === 'longestGapHours') continue;
@@ -229,6 +233,7 @@ function finishSet(
     series: ok ? series : null,
     mapping: files[0]?.result.mapping ?? emptyMapping(),
     hourLines: null,
+    issueList: { rows: log.rows, notWritten: log.notWritten, ofSet: true },
     report: {
       ok,
       summary,

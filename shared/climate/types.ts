@@ -262,7 +262,7 @@ export interface ImportCounts {
   missingHours: number;
   gaps: number;
   longestGapHours: number;
-  /** Issues found beyond the per-kind cap of the issue list. */
+  /** Issues found but not in the report's list (it holds the first 200, at most 25 of a kind); the full list has them. */
   issuesNotListed: number;
 }
 
@@ -296,6 +296,11 @@ export interface ImportReport {
   fileHeader?: FileHeader | null;
   /** Set when the file was read as a typical year: the year it was placed in and each month's source year. */
   typicalYear?: TypicalYearInfo | null;
+  /**
+   * Where the full issue list can be downloaded as CSV (every issue, in the order found), when `issues`
+   * holds only the first ones; absent or null when it holds them all. Set by the server.
+   */
+  fullIssueList?: { path: string; issues: number } | null;
 }
 
 export interface ClimateSeries {
@@ -317,6 +322,11 @@ export interface ImportResult {
   mapping: DetectedMapping;
   /** Line of the last row read into each hour of the series (0 for an hour no row fell in); null when refused. */
   hourLines?: Int32Array | null;
+  /**
+   * Every issue found, as CSV rows (shared/climate/issue-log.ts, ISSUE_CSV_COLUMNS, a set's with `file` first), for the
+   * full list the report's first 200 are cut from; `notWritten` counts issues past the list's size limit.
+   */
+  issueList?: { rows: string[]; notWritten: number; ofSet: boolean } | null;
 }
 
 export const HOUR_FLAG = { measured: 0, filled: 1, missing: 2 } as const;

@@ -5,6 +5,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
+import type { AppDeps } from '../../server/app';
 import { appRoot } from '../../server/paths';
 import { asPerson, type TestPerson } from './people';
 import { startSignInStack, type SignInStack } from './sign-in';
@@ -40,13 +41,13 @@ export interface BrowserHarness {
 }
 
 /** The built app on a free loopback port, and Debian's Chromium with a fresh profile pointed at it. */
-export async function startBrowserHarness(): Promise<BrowserHarness> {
+export async function startBrowserHarness(overrides: Partial<AppDeps> = {}): Promise<BrowserHarness> {
   // The port comes first: the fake sign-in provider must know the app's callback address.
   const server: Server = await new Promise((resolve) => {
     const s = createServer().listen(0, '127.0.0.1', () => resolve(s));
   });
   const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  const testApp: SignInStack = await startSignInStack({ publicUrl: baseUrl, overrides: { clientDist: inject('clientDist') } });
+  const testApp: SignInStack = await startSignInStack({ publicUrl: baseUrl, overrides: { ...overrides, clientDist: inject('clientDist') } });
   server.on('request', testApp.app);
   const profile = mkdtempSync(path.join(tmpdir(), 'tramontane-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {

@@ -16,10 +16,10 @@ export interface TestApp {
 }
 
 /** A fresh app on its own SQLite file in a temporary folder, one per test file. */
-export function createTestApp(overrides: Partial<AppDeps> = {}): TestApp {
+export function createTestApp(overrides: Partial<AppDeps> = {}, poolSize: { threads?: number; interactiveThreads?: number } = { threads: 2 }): TestApp {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'tramontane-test-'));
   const db = openDatabase(path.join(dataDir, 'tramontane.db'));
-  const pool = createWorkerPool({ threads: 2 });
+  const pool = createWorkerPool(poolSize);
   const runQueue = createRunQueue({ db, pool, mailer: overrides.mailer, publicUrl: overrides.publicUrl });
   const app = createApp({ db, pool, runQueue, ...overrides });
   return {

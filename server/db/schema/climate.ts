@@ -77,3 +77,24 @@ export const climateSeries = sqliteTable('climate_series', {
   pressurePa: blob({ mode: 'buffer' }),
   flags: blob({ mode: 'buffer' }).notNull(),
 });
+
+/**
+ * The full issue list of an import whose report was cut to its first 200 issues, as gzipped CSV for download.
+ * Linked to the climate file when the import was stored (deleted with it); a preview's or a refused upload's list
+ * is kept until newer ones push it out (server/climate/issue-lists.ts).
+ */
+export const climateIssueLists = sqliteTable(
+  'climate_issue_lists',
+  {
+    id: integer().primaryKey({ autoIncrement: true }),
+    projectId: integer()
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    climateFileId: integer().references(() => climateFiles.id, { onDelete: 'cascade' }),
+    issues: integer().notNull(),
+    csvGzip: blob({ mode: 'buffer' }).notNull(),
+    createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+  },
+  (t) => [index('climate_issue_lists_project_idx').on(t.projectId)],
+);

@@ -167,12 +167,20 @@ describe('line numbers', () => {
     expect(ofKind(result, 'wrong-field-count')).toEqual([expect.objectContaining({ line: 3 })]);
   });
 
-  it('cap each kind of issue in the list but keep full counts', () => {
-    const rows = Array.from({ length: 400 }, (_, h) => `${new Date(Date.UTC(2021, 0, 1, h)).toISOString()},${h % 10 === 0 ? 'bad' : '10'},80\n`);
-    const result = importClimateText(`timestamp,dry_bulb_c,relative_humidity_pct\n${rows.join('')}`);
-    expect(result.report.counts.cellsUnreadable).toBe(40);
-    expect(ofKind(result, 'unparsable-value')).toHaveLength(25);
-    expect(result.report.counts.issuesNotListed).toBeGreaterThanOrEqual(15);
+  it('lists the first 200 issues and counts the rest', () => {
+    const rows = (n: number, every: number) =>
+      Array.from({ length: n }, (_, h) => `${new Date(Date.UTC(2021, 0, 1, h)).toISOString()},${h % every === 0 ? 'bad' : '10'},80\n`).join('');
+    const few = importClimateText(`timestamp,dry_bulb_c,relative_humidity_pct\n${rows(400, 10)}`);
+    expect(few.report.counts.cellsUnreadable).toBe(40);
+    expect(ofKind(few, 'unparsable-value')).toHaveLength(40);
+    expect(few.report.counts.issuesNotListed).toBe(0);
+    // 1,000 hours, every fourth dry-bulb unreadable: 250 warnings, listed up to 200; the error that refuses the file is listed too.
+    const many = importClimateText(`timestamp,dry_bulb_c,relative_humidity_pct\n${rows(1_000, 4)}`);
+    expect(many.report.counts.cellsUnreadable).toBe(250);
+    expect(ofKind(many, 'unparsable-value')).toHaveLength(200);
+    expect(many.report.issues.filter((i) => i.severity === 'error').map((i) => i.kind)).toEqual(['too-many-rejected']);
+    expect(many.report.counts.issuesNotListed).toBe(50);
+    expect(many.issueList?.rows).toHaveLength(251);
   });
 });
 

@@ -1,5 +1,6 @@
 import type { FileInSet, ImportIssue, ImportReport } from '../../../../shared/climate/types';
 import { csvRow } from '../../../../shared/csv';
+import { ISSUES_LISTED } from '../../../../shared/climate/issue-log';
 import { Notice } from '@/components/ui/notice';
 import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
 import { wallClockReader, wallClockText } from '../../../../shared/time-zone';
@@ -60,12 +61,24 @@ export function ValidationReport({ report }: { report: ImportReport }) {
       {report.issues.length > 0 ? (
         <div className="overflow-x-auto">
           <table className="w-full text-left text-xs">
-            <caption className="pb-1 text-left text-sm text-ink-soft">
-              {report.issues.length.toLocaleString('en')} {report.issues.length === 1 ? 'issue' : 'issues'} listed
-              {c.issuesNotListed > 0 && `, ${c.issuesNotListed.toLocaleString('en')} more of the same kinds not listed`}.{' '}
-              <a className="text-harbour underline" href={csvHref} download="climate-file-issues.csv">
-                Download as CSV
-              </a>
+            <caption className="pb-1 text-left text-sm text-ink-soft" data-testid="issue-count">
+              {report.fullIssueList ? (
+                <>
+                  Listed: the first {Math.min(ISSUES_LISTED, report.issues.length).toLocaleString('en')} of {report.fullIssueList.issues.toLocaleString('en')} issues
+                  {report.issues.length > ISSUES_LISTED && ', and the errors after them'}.{' '}
+                  <a className="text-harbour underline" href={report.fullIssueList.path} download>
+                    Download all {report.fullIssueList.issues.toLocaleString('en')} as CSV
+                  </a>
+                </>
+              ) : (
+                <>
+                  {report.issues.length.toLocaleString('en')} {report.issues.length === 1 ? 'issue' : 'issues'} listed
+                  {c.issuesNotListed > 0 && `, ${c.issuesNotListed.toLocaleString('en')} more not listed`}.{' '}
+                  <a className="text-harbour underline" href={csvHref} download="climate-file-issues.csv">
+                    Download as CSV
+                  </a>
+                </>
+              )}
             </caption>
             <thead>
               <tr className="border-b border-rule text-ink-soft">
@@ -78,7 +91,7 @@ export function ValidationReport({ report }: { report: ImportReport }) {
               </tr>
             </thead>
             <tbody>
-              {report.issues.slice(0, 400).map((issue, k) => (
+              {report.issues.map((issue, k) => (
                 <tr key={k} className="border-b border-rule/60 align-top">
                   <td className={`py-0.5 pr-2 font-medium ${severityStyle[issue.severity]}`}>{issue.severity}</td>
                   {report.files && <td className="num pr-2 whitespace-nowrap">{issue.file ?? 'the set'}</td>}
@@ -90,7 +103,6 @@ export function ValidationReport({ report }: { report: ImportReport }) {
               ))}
             </tbody>
           </table>
-          {report.issues.length > 400 && <p className="mt-1 text-xs text-ink-soft">The first 400 are shown; the CSV holds all listed issues.</p>}
         </div>
       ) : (
         <p className="text-sm text-ink-soft">No issues found.</p>

@@ -7,6 +7,7 @@ import { useProjects } from '../api/get-projects';
 import { MembersPanel } from './members-panel';
 import { RunsPanel } from './runs-panel';
 import { ScenariosPanel } from './scenarios-panel';
+import { StorageMeter } from './storage-meter';
 import { SweepsPanel } from './sweeps-panel';
 
 /**
@@ -66,12 +67,15 @@ export function ProjectOverview({
             )}
           </nav>
         </div>
-        {role && (
-          <p className="rounded border border-rule bg-panel px-3 py-1 text-xs text-ink-soft">
-            Your role: <span className="font-semibold text-ink">{role}</span>
-            {!canEdit && ' · you can read everything here; editing is for engineers and owners'}
-          </p>
-        )}
+        <div className="flex flex-col items-end gap-2">
+          {role && (
+            <p className="rounded border border-rule bg-panel px-3 py-1 text-xs text-ink-soft">
+              Your role: <span className="font-semibold text-ink">{role}</span>
+              {!canEdit && ' · you can read everything here; editing is for engineers and owners'}
+            </p>
+          )}
+          <StorageMeter projectId={projectId} />
+        </div>
       </div>
       <div className="grid gap-5 xl:grid-cols-2">
         {renderSites(canEdit)}
