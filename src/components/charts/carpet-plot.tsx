@@ -1,6 +1,6 @@
 import { useCallback, useMemo } from 'react';
 import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
-import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
+import { formatCount, formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from './carpet-data';
 import { MONTH_SHORT as monthNames } from '../../../shared/calendar';
@@ -102,7 +102,7 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
                   <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthNames[row.month - 1]}</th>
                   {row.values.map((v, i) => (
                     <td key={i} className="px-2 py-0.5">
-                      {kind === 'mode' ? v.toLocaleString('en') : formatQuantity('temperature', unitSystem, v, false)}
+                      {kind === 'mode' ? formatCount(v) : formatQuantity('temperature', unitSystem, v, false)}
                     </td>
                   ))}
                 </tr>
