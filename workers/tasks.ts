@@ -8,3 +8,4 @@ export { executeRun } from './execute-run';
 export { morphClimate } from './morph-climate';
 export { analyseExcursions } from './analyse-excursions';
 export { formatHourly } from './format-hourly';
+export { hourColumns } from './hour-columns';
