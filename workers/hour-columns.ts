@@ -4,6 +4,8 @@ import { runHourColumns, type RunHourInput } from '../shared/report/run-hour-col
 
 export interface HourColumnsInput extends RunHourInput {
   columns: HourColumnName[];
+  /** Width of the dry-bulb bins to put in the header, K; none when absent. */
+  binWidthK?: number;
   /** Compress here, off the server's main thread, when the caller accepts gzip. */
   gzip: boolean;
 }
@@ -12,8 +14,8 @@ export interface HourColumnsInput extends RunHourInput {
  * Piscina task: a finished run's hour columns as one binary message (shared/report/hour-columns.ts), gzipped when
  * asked. The outdoor states are computed here from the climate series, as the run computed them.
  */
-export function hourColumns({ columns, gzip, ...input }: HourColumnsInput): Uint8Array {
-  const message = runHourColumns(input, columns);
+export function hourColumns({ columns, gzip, binWidthK, ...input }: HourColumnsInput): Uint8Array {
+  const message = runHourColumns(input, columns, { binWidthK });
   // Level 4: the float columns shrink little further at higher levels and cost more time.
   return gzip ? gzipSync(message, { level: 4 }) : message;
 }

@@ -18,8 +18,12 @@ import { HOUR_COLUMN_NAMES, type HourColumnName } from '../../shared/report/hour
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
 const maxRunsPerRequest = 200;
 
-/** `?columns=modes,dryBulbC` picks columns of the hour-columns message; all of them when absent. */
+/**
+ * `?columns=modes,dryBulbC` picks columns of the hour-columns message (all of them when absent); `&bins=2` adds the
+ * dry-bulb bins of that width (K) to its header.
+ */
 const hourColumnsQuery = z.object({
+  bins: z.coerce.number().min(0.5, 'bins must be at least 0.5 K').max(10, 'bins must be at most 10 K').optional(),
   columns: z
     .string()
     .optional()
@@ -161,12 +165,12 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
     // The run page's hourly views: typed columns in one binary message (shared/report/hour-columns.ts), made on the pool.
     route('get', '/projects/:projectId/runs/:runId/hour-columns', access.viewer, async (req, res) => {
       const run = runOr404(req.projectId!, req.params);
-      const { columns } = hourColumnsQuery.parse(req.query);
+      const { columns, bins } = hourColumnsQuery.parse(req.query);
       const { series, modes, mechanicalFraction, humidified, climate } = storedRunHours(db, run);
       const gzip = /\bgzip\b/.test(req.get('accept-encoding') ?? '');
       const bytes = await pool.run(
         'hourColumns',
-        { series, elevationM: climate.elevationM, modes, mechanicalFraction, humidified, columns, gzip },
+        { series, elevationM: climate.elevationM, modes, mechanicalFraction, humidified, columns, gzip, binWidthK: bins },
         {
           signal: closedRequestSignal(res),
           // freshly decoded copies, each on its own buffer: moved to the thread, not copied

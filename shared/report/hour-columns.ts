@@ -6,7 +6,8 @@
  * Layout (all numbers little-endian):
  *   bytes 0–3    ASCII "THC1"
  *   bytes 4–7    uint32: byte length H of the JSON header
- *   bytes 8…8+H  the header, UTF-8 JSON (HourColumnsHeader): hours, startMs, stepMs, sitePressurePa, modeNames, and
+ *   bytes 8…8+H  the header, UTF-8 JSON (HourColumnsHeader): hours, startMs, stepMs, sitePressurePa, modeNames, the
+ *                dry-bulb bins when asked for, and
  *                for each column its name, type ('float64' | 'float32' | 'uint8'), byte offset from the start of the
  *                message and element count (= hours)
  *   then each column's elements at its offset; every offset is a multiple of 8, so a column is read in place as a
@@ -14,6 +15,8 @@
  * Hour i is at startMs + i × stepMs (UTC ms). When the hours are not evenly spaced, stepMs is null and a float64
  * column `timestampsMs` carries every hour's time. Missing values are NaN in float columns; mode 3 means no data.
  */
+
+import type { BinTable } from './dry-bulb-bins';
 
 const MAGIC = [0x54, 0x48, 0x43, 0x31]; // "THC1"
 const PREFIX_BYTES = 8;
@@ -63,6 +66,11 @@ export interface HourColumnsHeader {
   /** One pressure for charts, Pa: the mean station pressure where the file has one, else the standard atmosphere at the elevation. */
   sitePressurePa: number;
   modeNames: readonly string[];
+  /**
+   * Asked for with `bins`: hours per mode and the mean coincident wet-bulb in dry-bulb bins, from the full-precision
+   * states, so a page that shows only the bins needs no wet-bulb column.
+   */
+  dryBulbBins?: BinTable & { widthK: number };
   columns: Array<{ name: string; type: HourColumnType; offset: number; length: number }>;
 }
 

@@ -5,6 +5,7 @@
 import { standardPressurePa } from '../psychrometrics';
 import { MODE_NAMES } from '../scenario/classify';
 import { outdoorStates, type ScenarioSeries } from '../scenario/run';
+import { dryBulbBins } from './dry-bulb-bins';
 import { encodeHourColumns, evenStepMs, type HourColumnName, type HourColumns } from './hour-columns';
 
 export interface RunHourInput {
@@ -47,11 +48,13 @@ function rounded(values: ArrayLike<number>, decimals: number): Float32Array {
  * station pressure where the series has it, the standard atmosphere at the run's elevation elsewhere), rounded as
  * the hourly downloads write them, and the stored per-hour outcome as it was.
  */
-export function runHourColumns(input: RunHourInput, names: readonly HourColumnName[]): Uint8Array {
+export function runHourColumns(input: RunHourInput, names: readonly HourColumnName[], options: { binWidthK?: number } = {}): Uint8Array {
   const { series, elevationM, modes } = input;
   const n = series.timestampsMs.length;
   if (modes.length !== n) throw new RangeError(`modes has ${modes.length} hours but the series has ${n}`);
-  const needsStates = names.some((name) => ['humidityRatio', 'wetBulbC', 'dewPointC', 'rhPct', 'enthalpyKJPerKg', 'pressurePa'].includes(name));
+  const { binWidthK } = options;
+  const needsStates =
+    binWidthK !== undefined || names.some((name) => ['humidityRatio', 'wetBulbC', 'dewPointC', 'rhPct', 'enthalpyKJPerKg', 'pressurePa'].includes(name));
   const outdoor = needsStates ? outdoorStates(series, elevationM) : null;
   const columns: HourColumns['columns'] = {};
   for (const name of names) {
@@ -67,7 +70,14 @@ export function runHourColumns(input: RunHourInput, names: readonly HourColumnNa
   }
   const stepMs = evenStepMs(series.timestampsMs);
   return encodeHourColumns(
-    { hours: n, startMs: n ? series.timestampsMs[0] : null, stepMs, sitePressurePa: chartPressurePa(series, elevationM), modeNames: MODE_NAMES },
+    {
+      hours: n,
+      startMs: n ? series.timestampsMs[0] : null,
+      stepMs,
+      sitePressurePa: chartPressurePa(series, elevationM),
+      modeNames: MODE_NAMES,
+      ...(binWidthK === undefined ? {} : { dryBulbBins: { widthK: binWidthK, ...dryBulbBins(modes, series.dryBulbC, outdoor!.states.wetBulbC, binWidthK) } }),
+    },
     // timestamps first: float64 wants the 8-byte alignment every column starts at anyway
     stepMs === null ? { timestampsMs: series.timestampsMs, ...columns } : columns,
   );

@@ -77,6 +77,24 @@ describe("a run's hour columns", () => {
     expect(message.columns.dryBulbC).toBeInstanceOf(Float32Array);
   });
 
+  it('carry the dry-bulb bins in their header when asked, from the same states', async () => {
+    const res = await binary(request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hour-columns?bins=2`).set(asPerson(viewer))).expect(200);
+    const message = decodeHourColumns(arrayBufferOf(res.body));
+    const table = message.dryBulbBins!;
+    expect(table.widthK).toBe(2);
+    expect(table.hoursWithoutDryBulb).toBe(0);
+    // three-days.csv runs from 6.3 to 22.0 °C: bins [22, 24) down to [6, 8), warmest first
+    expect(table.bins.map((b) => b.fromC)).toEqual([22, 20, 18, 16, 14, 12, 10, 8, 6]);
+    const { dryBulbC, wetBulbC, modes } = message.columns;
+    for (const bin of table.bins) {
+      const inBin = Array.from(dryBulbC!.keys()).filter((i) => dryBulbC![i] >= bin.fromC && dryBulbC![i] < bin.toC);
+      expect(bin.total).toBe(inBin.length);
+      expect(bin.hours).toEqual([0, 1, 2, 3].map((m) => inBin.filter((i) => modes![i] === m).length));
+      // the mean of the wet-bulb column (checked against psychrolib above), which keeps 0.01 K
+      if (inBin.length) expect(bin.meanWetBulbC).toBeCloseTo(inBin.reduce((s, i) => s + wetBulbC![i], 0) / inBin.length, 2);
+    }
+  });
+
   it('refuse an unknown column, naming it', async () => {
     const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hour-columns?columns=modes,dryBulbF`).set(asPerson(viewer)).expect(400);
     expect(res.body.error.message).toContain('"dryBulbF"');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { dryBulbBins } from '@/features/runs/utils/bin-table';
+import { dryBulbBins } from '../../shared/report/dry-bulb-bins';
 import { flattenInputs } from '../../shared/report/inputs';
 import { monthlyModeRows } from '@/components/charts/monthly-mode-rows';
 

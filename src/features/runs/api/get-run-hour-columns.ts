@@ -1,9 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetchBytes } from '@/lib/api-client';
+import type { BinTable } from '../../../../shared/report/dry-bulb-bins';
 import { decodeHourColumns, hourTimestampsMs, type HourColumnName } from '../../../../shared/report/hour-columns';
 
-/** The columns the run page draws: modes for the carpet, the state for the moist-air chart, wet-bulb for the bins. */
-const RUN_PAGE_COLUMNS = ['modes', 'dryBulbC', 'humidityRatio', 'wetBulbC'] as const satisfies readonly HourColumnName[];
+/** The columns the run page draws: modes for the carpet, the state for the moist-air chart; the bins come made. */
+const RUN_PAGE_COLUMNS = ['modes', 'dryBulbC', 'humidityRatio'] as const satisfies readonly HourColumnName[];
+/** Width of the page's dry-bulb bins, K. */
+const BIN_WIDTH_K = 2;
 
 /** A finished run's hours for its page, column by column, SI; NaN where an hour has no data. */
 export interface RunHourColumns {
@@ -16,13 +19,15 @@ export interface RunHourColumns {
   dryBulbC: Float32Array;
   /** kg/kg dry air */
   humidityRatio: Float32Array;
-  wetBulbC: Float32Array;
+  /** Hours per mode and mean coincident wet-bulb in 2 K dry-bulb bins. */
+  bins: BinTable;
 }
 
 export async function getRunHourColumns(projectId: number, runId: number): Promise<RunHourColumns> {
-  const bytes = await apiFetchBytes(`/projects/${projectId}/runs/${runId}/hour-columns?columns=${RUN_PAGE_COLUMNS.join(',')}`);
+  const bytes = await apiFetchBytes(`/projects/${projectId}/runs/${runId}/hour-columns?columns=${RUN_PAGE_COLUMNS.join(',')}&bins=${BIN_WIDTH_K}`);
   const message = decodeHourColumns(bytes);
-  const { modes, dryBulbC, humidityRatio, wetBulbC } = message.columns;
+  const { modes, dryBulbC, humidityRatio } = message.columns;
+  if (!message.dryBulbBins) throw new RangeError('the hour columns came without their dry-bulb bins');
   return {
     hours: message.hours,
     timestampsMs: hourTimestampsMs(message),
@@ -30,7 +35,8 @@ export async function getRunHourColumns(projectId: number, runId: number): Promi
     modes: modes as Uint8Array,
     dryBulbC: dryBulbC as Float32Array,
     humidityRatio: humidityRatio as Float32Array,
-    wetBulbC: wetBulbC as Float32Array,
+    // JSON has no NaN: a bin without any wet-bulb arrives with null
+    bins: { ...message.dryBulbBins, bins: message.dryBulbBins.bins.map((b) => ({ ...b, meanWetBulbC: b.meanWetBulbC ?? Number.NaN })) },
   };
 }
 

@@ -7,24 +7,13 @@ import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
 import { ModeSwatch } from '@/components/ui/mode-marks';
 import { modeKeys, modeLabels } from '../../../../shared/modes';
-import { dryBulbBins, type DryBulbBin } from '../utils/bin-table';
+import type { BinTable, DryBulbBin } from '../../../../shared/report/dry-bulb-bins';
 
 const column = createColumnHelper<DryBulbBin>();
 
-/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb; sortable by any column, downloadable as CSV. */
-export function BinTablePanel({
-  modes,
-  dryBulbC,
-  wetBulbC,
-  fileStem,
-}: {
-  modes: ArrayLike<number>;
-  dryBulbC: ArrayLike<number>;
-  wetBulbC: ArrayLike<number>;
-  fileStem: string;
-}) {
+/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb (made on the server); sortable by any column, downloadable as CSV. */
+export function BinTablePanel({ table, fileStem }: { table: BinTable; fileStem: string }) {
   const { unitSystem } = useUnitSystem();
-  const table = useMemo(() => dryBulbBins(modes, dryBulbC, wetBulbC, 2), [modes, dryBulbC, wetBulbC]);
   const tUnit = unitOf('temperature', unitSystem);
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo(() => {

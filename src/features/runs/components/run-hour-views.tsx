@@ -107,7 +107,7 @@ export function RunHourViews({ run }: { run: RunRecord }) {
         )}
       </HourView>
       <HourView title="Dry-bulb bins" what="table" shown={turn('bins')} heightPx={420}>
-        {() => <BinTablePanel modes={data!.modes} dryBulbC={data!.dryBulbC} wetBulbC={data!.wetBulbC} fileStem={stem} />}
+        {() => <BinTablePanel table={data!.bins} fileStem={stem} />}
       </HourView>
     </div>
   );
