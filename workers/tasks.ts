@@ -9,3 +9,4 @@ export { morphClimate } from './morph-climate';
 export { analyseExcursions } from './analyse-excursions';
 export { formatHourly } from './format-hourly';
 export { formatClimateSeries } from './format-climate-series';
+export { hourColumns } from './hour-columns';

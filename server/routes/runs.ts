@@ -12,9 +12,29 @@ import { HttpError } from '../http-error';
 import { requireStorage, runBytes, storageLimitOf } from '../storage/quota';
 import { validScenario } from './scenarios';
 import { newRunValues } from '../runs/new-run';
+import { storedRunHours } from '../reports/hourly-results';
+import { closedRequestSignal } from '../request-signal';
+import { HOUR_COLUMN_NAMES, type HourColumnName } from '../../shared/report/hour-columns';
 
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
 const maxRunsPerRequest = 200;
+
+/**
+ * `?columns=modes,dryBulbC` picks columns of the hour-columns message (all of them when absent); `&bins=2` adds the
+ * dry-bulb bins of that width (K) to its header.
+ */
+const hourColumnsQuery = z.object({
+  bins: z.coerce.number().min(0.5, 'bins must be at least 0.5 K').max(10, 'bins must be at most 10 K').optional(),
+  columns: z
+    .string()
+    .optional()
+    .transform((list) => (list === undefined ? [...HOUR_COLUMN_NAMES] : list.split(',').map((name) => name.trim())))
+    .pipe(
+      z
+        .array(z.enum(HOUR_COLUMN_NAMES as [HourColumnName, ...HourColumnName[]], { error: (issue) => `columns: unknown column "${String(issue.input)}"; known: ${HOUR_COLUMN_NAMES.join(', ')}` }))
+        .min(1, 'columns must name at least one column'),
+    ),
+});
 
 /** One scenario on several climate files, several scenarios on one file, or any grid of both (a sweep). */
 const createRunsInput = z
@@ -43,7 +63,7 @@ function present(row: typeof runs.$inferSelect, sweepName: string | null = null)
 }
 
 export function runRoutes(deps: AppDeps): RouteSpec[] {
-  const { db, runQueue } = deps;
+  const { db, runQueue, pool } = deps;
 
   function runOr404(projectId: number, params: unknown) {
     const { runId } = runParams.parse(params);
@@ -145,6 +165,29 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         modes: Array.from(decodeUint8Column(hours.modes)),
         mechanicalFraction: Array.from(fraction, (v) => Math.round(v * 1000) / 1000),
       });
+    }),
+
+    // The run page's hourly views: typed columns in one binary message (shared/report/hour-columns.ts), made on the pool.
+    route('get', '/projects/:projectId/runs/:runId/hour-columns', access.viewer, async (req, res) => {
+      const run = runOr404(req.projectId!, req.params);
+      const { columns, bins } = hourColumnsQuery.parse(req.query);
+      const { series, modes, mechanicalFraction, humidified, climate } = storedRunHours(db, run);
+      const gzip = /\bgzip\b/.test(req.get('accept-encoding') ?? '');
+      const bytes = await pool.run(
+        'hourColumns',
+        { series, elevationM: climate.elevationM, modes, mechanicalFraction, humidified, columns, gzip, binWidthK: bins },
+        {
+          lane: 'interactive',
+          signal: closedRequestSignal(res),
+          // freshly decoded copies, each on its own buffer: moved to the thread, not copied
+          transferList: [series.timestampsMs, series.dryBulbC, series.humidity.values, series.pressurePa, series.flags, modes, mechanicalFraction, humidified]
+            .filter((a) => a !== null)
+            .map((a) => a.buffer as ArrayBuffer),
+        },
+      );
+      res.type('application/octet-stream').vary('Accept-Encoding');
+      if (gzip) res.set('Content-Encoding', 'gzip');
+      res.send(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength));
     }),
 
     route('post', '/projects/:projectId/runs/:runId/cancel', access.engineer, (req, res) => {

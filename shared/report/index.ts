@@ -4,3 +4,5 @@ export * from './summary-table';
 export * from './inputs';
 export * from './hourly-json';
 export * from './mode-subsets';
+export * from './hour-columns';
+export * from './run-hour-columns';

@@ -1,12 +1,7 @@
-import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
-import { dryBulbBins } from '@/features/runs/utils/bin-table';
-import { climateStates } from '@/features/runs/utils/climate-states';
+import { dryBulbBins } from '../../shared/report/dry-bulb-bins';
 import { flattenInputs } from '../../shared/report/inputs';
 import { monthlyModeRows } from '@/components/charts/monthly-mode-rows';
-
-const psychrolib = createRequire(import.meta.url)('psychrolib');
-psychrolib.SetUnitSystem(psychrolib.SI);
 
 describe('the bin table', () => {
   it('counts hours per mode in 2 K bins, warmest first, with the mean coincident wet-bulb', () => {
@@ -42,33 +37,6 @@ describe('the bin table', () => {
 
   it('refuses columns of different lengths, naming them', () => {
     expect(() => dryBulbBins([0], [1, 2], [1, 2])).toThrow(/modes \(1\)/);
-  });
-});
-
-describe('hour states for the chart and the bins', () => {
-  it('match psychrolib for relative-humidity files, at the standard pressure of the site', () => {
-    const elevationM = 120;
-    const states = climateStates(
-      { humidityKind: 'relative-humidity-pct', dryBulbC: [20, 30, null], humidity: [60, 50, 40], pressurePa: null },
-      elevationM,
-    );
-    // psychrolib GetStandardAtmPressure(120) = 99 891.7 Pa (ASHRAE 2017 ch. 1 eq. 3).
-    expect(states.sitePressurePa).toBeCloseTo(psychrolib.GetStandardAtmPressure(elevationM), 3);
-    const p = psychrolib.GetStandardAtmPressure(elevationM);
-    // psychrolib GetTWetBulbFromRelHum(20, 0.6, 99 891.7 Pa) = 15.117 °C.
-    expect(states.wetBulbC[0]).toBeCloseTo(psychrolib.GetTWetBulbFromRelHum(20, 0.6, p), 2);
-    expect(states.humidityRatio[1]).toBeCloseTo(psychrolib.GetHumRatioFromRelHum(30, 0.5, p), 6);
-    expect(states.wetBulbC[2]).toBeNaN();
-  });
-
-  it('use station pressure where the file has it, and its mean for the chart', () => {
-    const states = climateStates(
-      { humidityKind: 'relative-humidity-pct', dryBulbC: [30, 30], humidity: [50, 50], pressurePa: [101_325, null] },
-      1000,
-    );
-    expect(states.humidityRatio[0]).toBeCloseTo(psychrolib.GetHumRatioFromRelHum(30, 0.5, 101_325), 6);
-    expect(states.humidityRatio[1]).toBeCloseTo(psychrolib.GetHumRatioFromRelHum(30, 0.5, psychrolib.GetStandardAtmPressure(1000)), 6);
-    expect(states.sitePressurePa).toBe(101_325);
   });
 });
 

@@ -1,8 +1,8 @@
 import { useCallback, useMemo } from 'react';
 import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
-import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
+import { formatCount, formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from './carpet-data';
+import { CARPET_DAYS, carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from './carpet-data';
 import { MONTH_SHORT as monthNames } from '../../../shared/calendar';
 import { utcOffsetLabel } from '../../../shared/time-zone';
 import { carpetDayLabel, carpetMonthStartDays } from './chart-format';
@@ -32,25 +32,34 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
 
   const render = useCallback(
     (Plot: PlotModule, widthPx: number) => {
-      const index: number[] = [];
-      for (let c = 0; c < grid.cells.length; c++) if (grid.cells[c] === grid.cells[c]) index.push(c);
-      const day = (c: number) => Math.floor(c / HOURS_PER_DAY) + 1;
       // Without a 29 February in the data, close its column so March follows February directly.
       const shift = grid.leapDay ? 0 : 1;
-      const column = (c: number) => day(c) - (day(c) > LEAP_DAY_INDEX + 1 ? shift : 0);
+      const columns = CARPET_DAYS - shift;
+      const dayIndex = (c: number) => Math.floor(c / HOURS_PER_DAY);
+      // 0-based column of a cell
+      const column = (c: number) => dayIndex(c) - (dayIndex(c) > LEAP_DAY_INDEX ? shift : 0);
       const monthTicks = carpetMonthStartDays.map((d, m) => (m >= 2 ? d - shift : d));
       const hour = (c: number) => c % HOURS_PER_DAY;
-      const shown = (c: number) => toDisplay('temperature', unitSystem, grid.cells[c]);
       const many = grid.years > 1;
+      // Hover text for the hovered cell alone (Plot's tip formats only the hour it shows).
       const title = (c: number) => {
-        const when = `${carpetDayLabel(day(c))}, ${String(hour(c)).padStart(2, '0')}:00–${String(hour(c) + 1).padStart(2, '0')}:00`;
+        const when = `${carpetDayLabel(dayIndex(c) + 1)}, ${String(hour(c)).padStart(2, '0')}:00–${String(hour(c) + 1).padStart(2, '0')}:00`;
         if (kind === 'mode') {
           const key = modeKeys[grid.cells[c]];
           return `${when}\n${modeLabels[key]}${many ? ` (most frequent of ${grid.counts[c]} years)` : ''}`;
         }
         return `${when}\n${formatQuantity('temperature', unitSystem, grid.cells[c])}${many ? ` (mean of ${grid.counts[c]} years)` : ''}`;
       };
-      const cellChannels = { x1: column, x2: (c: number) => column(c) + 1, y1: hour, y2: (c: number) => hour(c) + 1 };
+      // One pixel per cell, row-major (hour × column), painted on a canvas by Plot's raster mark. Empty cells stay
+      // clear: NaN is outside the temperature scale, null is no colour.
+      const pixels: Array<number | string | null> = new Array(columns * HOURS_PER_DAY).fill(kind === 'temperature' ? Number.NaN : null);
+      const index: number[] = [];
+      for (let c = 0; c < grid.cells.length; c++) {
+        const v = grid.cells[c];
+        if (v !== v) continue;
+        index.push(c);
+        pixels[hour(c) * columns + column(c)] = kind === 'temperature' ? toDisplay('temperature', unitSystem, v) : modeColours[modeKeys[v]];
+      }
       return Plot.plot({
         width: widthPx,
         height: Math.max(220, Math.min(360, Math.round(widthPx * 0.28))),
@@ -64,10 +73,9 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
             ? { type: 'linear', interpolate: temperatureRamp, legend: true, label: `Dry-bulb (${unitOf('temperature', unitSystem)})` }
             : undefined,
         marks: [
-          kind === 'temperature'
-            ? Plot.rect(index, { ...cellChannels, fill: shown, inset: 0 })
-            : Plot.rect(index, { ...cellChannels, fill: (c: number) => modeColours[modeKeys[grid.cells[c]]], inset: 0 }),
-          Plot.tip(index, Plot.pointer({ x: (c: number) => column(c) + 0.5, y: (c: number) => hour(c) + 0.5, title })),
+          Plot.raster(pixels, { width: columns, height: HOURS_PER_DAY, x1: 1, x2: 1 + columns, y1: 0, y2: HOURS_PER_DAY, imageRendering: 'pixelated' }),
+          // The title channel carries the cell only; `format` writes the text when the tip shows it.
+          Plot.tip(index, Plot.pointer({ x: (c: number) => column(c) + 1.5, y: (c: number) => hour(c) + 0.5, title: (c: number) => c, format: { title } })),
         ],
       });
     },
@@ -102,7 +110,7 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
                   <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthNames[row.month - 1]}</th>
                   {row.values.map((v, i) => (
                     <td key={i} className="px-2 py-0.5">
-                      {kind === 'mode' ? v.toLocaleString('en') : formatQuantity('temperature', unitSystem, v, false)}
+                      {kind === 'mode' ? formatCount(v) : formatQuantity('temperature', unitSystem, v, false)}
                     </td>
                   ))}
                 </tr>

@@ -158,7 +158,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
           }),
           Plot.dot(markerRows, { x: 'x', y: 'y', r: 5, stroke: '#1d2327', strokeWidth: 2, fill: '#ffffff' }),
           Plot.text(markerRows, { x: 'x', y: 'y', text: 'label', dx: 9, textAnchor: 'start', fontWeight: 600, fill: '#1d2327', stroke: '#ffffff', strokeWidth: 3, paintOrder: 'stroke' }),
-          Plot.tip(drawn, Plot.pointer({ x: (i: number) => xy.x[i], y: (i: number) => xy.y[i], title, maxRadius: 24 })),
+          // The title channel carries only the hour's index; its text is made by `format` for the hovered hour alone.
+          Plot.tip(drawn, Plot.pointer({ x: (i: number) => xy.x[i], y: (i: number) => xy.y[i], title: (i: number) => i, format: { title }, maxRadius: 24 })),
         ],
       });
     },

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { modeKeys, modeLabels } from '../../../shared/modes';
-import { formatQuantity, unitOf } from '@/lib/quantity';
+import { formatCount, formatQuantity, unitOf } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { hoursInside, modeCodeAt, type ChartHours, type ChartMarker, type EnvelopeLimitsInput, hourStates } from './moist-air-data';
 
@@ -63,7 +63,7 @@ export function MoistAirTable({
       <div className="mt-2 grid gap-4 lg:grid-cols-2">
         <table className="num w-full text-xs">
           <caption className="pb-1 text-left font-sans text-ink-soft">
-            {stats.dryBulb.n.toLocaleString('en')} of {total.toLocaleString('en')} hours with data, at {formatQuantity('pressure', system, pressurePa)}
+            {formatCount(stats.dryBulb.n)} of {formatCount(total)} hours with data, at {formatQuantity('pressure', system, pressurePa)}
           </caption>
           <thead>
             <tr className="border-b border-rule font-sans text-ink-soft">
@@ -93,7 +93,7 @@ export function MoistAirTable({
               {envelopes.map((e, k) => (
                 <tr key={`e${k}`} className="border-b border-rule/60">
                   <th scope="row" className="py-0.5 text-left font-sans font-normal">Inside {e.label}</th>
-                  <td className={cell}>{stats.inside[k].inside.toLocaleString('en')} h</td>
+                  <td className={cell}>{formatCount(stats.inside[k].inside)} h</td>
                   <td className={cell}>{stats.inside[k].withData ? ((100 * stats.inside[k].inside) / stats.inside[k].withData).toFixed(1) : '–'} %</td>
                 </tr>
               ))}
@@ -101,7 +101,7 @@ export function MoistAirTable({
                 modeKeys.map((key, code) => (
                   <tr key={key} className="border-b border-rule/60">
                     <th scope="row" className="py-0.5 text-left font-sans font-normal">{modeLabels[key]}</th>
-                    <td className={cell}>{stats.modeHours[code].toLocaleString('en')} h</td>
+                    <td className={cell}>{formatCount(stats.modeHours[code])} h</td>
                     <td className={cell}>{total ? ((100 * stats.modeHours[code]) / total).toFixed(1) : '–'} %</td>
                   </tr>
                 ))}

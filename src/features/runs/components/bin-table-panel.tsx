@@ -2,29 +2,18 @@ import { useMemo, useState } from 'react';
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { SortHeader } from '@/components/ui/sort-header';
 import { downloadCsv } from '@/lib/download';
-import { formatQuantity, unitOf } from '@/lib/quantity';
+import { formatCount, formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
 import { ModeSwatch } from '@/components/ui/mode-marks';
 import { modeKeys, modeLabels } from '../../../../shared/modes';
-import { dryBulbBins, type DryBulbBin } from '../utils/bin-table';
+import type { BinTable, DryBulbBin } from '../../../../shared/report/dry-bulb-bins';
 
 const column = createColumnHelper<DryBulbBin>();
 
-/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb; sortable by any column, downloadable as CSV. */
-export function BinTablePanel({
-  modes,
-  dryBulbC,
-  wetBulbC,
-  fileStem,
-}: {
-  modes: ArrayLike<number>;
-  dryBulbC: ArrayLike<number>;
-  wetBulbC: ArrayLike<number>;
-  fileStem: string;
-}) {
+/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb (made on the server); sortable by any column, downloadable as CSV. */
+export function BinTablePanel({ table, fileStem }: { table: BinTable; fileStem: string }) {
   const { unitSystem } = useUnitSystem();
-  const table = useMemo(() => dryBulbBins(modes, dryBulbC, wetBulbC, 2), [modes, dryBulbC, wetBulbC]);
   const tUnit = unitOf('temperature', unitSystem);
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo(() => {
@@ -43,10 +32,10 @@ export function BinTablePanel({
               {modeLabels[k]}
             </>
           ),
-          cell: (c) => <span className={c.getValue() === 0 ? 'text-ink-faint' : ''}>{c.getValue().toLocaleString('en')}</span>,
+          cell: (c) => <span className={c.getValue() === 0 ? 'text-ink-faint' : ''}>{formatCount(c.getValue())}</span>,
         }),
       ),
-      column.accessor('total', { header: 'All (h)', cell: (c) => <span className="font-semibold">{c.getValue().toLocaleString('en')}</span> }),
+      column.accessor('total', { header: 'All (h)', cell: (c) => <span className="font-semibold">{formatCount(c.getValue())}</span> }),
       column.accessor((b) => (Number.isFinite(b.meanWetBulbC) ? b.meanWetBulbC : -Infinity), {
         id: 'meanWetBulbC',
         header: `Mean coincident wet-bulb (${tUnit})`,
@@ -79,7 +68,7 @@ export function BinTablePanel({
       <div className="mb-2 flex items-center justify-between">
         <p className="text-xs text-ink-soft">
           Bins of 2 K ({unitSystem === 'IP' ? '3.6 °F' : '2 °C'}) of outdoor dry-bulb, warmest first; choose a heading to sort by it.
-          {table.hoursWithoutDryBulb > 0 && ` ${table.hoursWithoutDryBulb.toLocaleString('en')} hours without a dry-bulb are left out.`}
+          {table.hoursWithoutDryBulb > 0 && ` ${formatCount(table.hoursWithoutDryBulb)} hours without a dry-bulb are left out.`}
         </p>
         <button type="button" onClick={csv} className="rounded border border-rule px-3 py-1 text-xs hover:bg-mist">
           Download CSV

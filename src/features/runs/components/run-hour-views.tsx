@@ -1,32 +1,52 @@
-import { useMemo } from 'react';
+import { useEffect, useMemo, useState, type ReactNode } from 'react';
 import { CarpetPlot } from '@/components/charts/carpet-plot';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
+import { ApiError } from '@/lib/api-client';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { useClimateHours } from '../api/get-climate-hours';
 import type { RunRecord } from '../api/get-run';
-import { useRunHours } from '../api/get-run-hours';
-import { climateStates } from '../utils/climate-states';
+import { useRunHourColumns } from '../api/get-run-hour-columns';
 import { BinTablePanel } from './bin-table-panel';
 
+/** The hourly views in the order they come in; each waits for the one before to be drawn. */
+const VIEWS = ['carpet', 'moist-air', 'bins'] as const;
+
 /**
- * The views that need every hour: the carpet of modes, the hours on the moist-air chart and the bin
- * table. Modes come from the run; dry-bulb and moisture from the climate file, through the same engine.
+ * Reveals `count` views one after another once `ready`: each in a task of its own after the one before has been
+ * committed, so the page paints (and answers) between them instead of building every chart in one long task.
+ */
+function useOneAfterAnother(ready: boolean, count: number): number {
+  const [shown, setShown] = useState(0);
+  useEffect(() => {
+    if (!ready || shown >= count) return;
+    const timer = setTimeout(() => setShown((n) => n + 1), 0);
+    return () => clearTimeout(timer);
+  }, [ready, shown, count]);
+  return ready ? shown : 0;
+}
+
+/** A panel's body, or its loading placeholder until the view's turn comes. */
+function HourView({ title, what, shown, heightPx, children }: { title: string; what: 'chart' | 'table'; shown: boolean; heightPx: number; children: () => ReactNode }) {
+  return (
+    <Panel title={title}>
+      {shown ? children() : <div className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />}
+    </Panel>
+  );
+}
+
+/**
+ * The views that need every hour: the carpet of modes, the hours on the moist-air chart and the bin table, from the
+ * run's hour columns (the engine's own outdoor states and the stored modes, made on the server). The summary above
+ * never waits for them; each view shows its own loading state and comes in when drawn.
  */
 export function RunHourViews({ run }: { run: RunRecord }) {
-  const hours = useRunHours(run.projectId, run.id, run.status === 'done');
-  const climate = useClimateHours(run.projectId, run.climateFileId, run.status === 'done');
+  const columns = useRunHourColumns(run.projectId, run.id, run.status === 'done' && run.climateFileId !== null);
   const results = run.results!;
-
-  const states = useMemo(() => (climate.data ? climateStates(climate.data, run.climate.elevationM) : null), [climate.data, run.climate.elevationM]);
-  const modes = useMemo(() => (hours.data ? Uint8Array.from(hours.data.modes) : null), [hours.data]);
-  const matched = states && modes && modes.length === states.dryBulbC.length;
-  const chartHours = useMemo(
-    () => (matched ? { dryBulbC: states.dryBulbC, humidityRatio: states.humidityRatio, modes } : null),
-    [matched, states, modes],
-  );
+  const data = columns.data;
+  const shown = useOneAfterAnother(!!data, VIEWS.length);
+  const chartHours = useMemo(() => (data ? { dryBulbC: data.dryBulbC, humidityRatio: data.humidityRatio, modes: data.modes } : null), [data]);
   const { unitSystem } = useUnitSystem();
   const envelopes = useMemo(
     () => [
@@ -48,46 +68,47 @@ export function RunHourViews({ run }: { run: RunRecord }) {
     [run.scenario.system.supplyAirC, results.envelope.highHumidityRatioGPerKg, results.envelope.lowHumidityRatioGPerKg],
   );
 
-  if (run.climateFileId === null) {
+  if (run.climateFileId === null || (columns.error instanceof ApiError && columns.error.code === 'climate_file_deleted')) {
     return (
       <Notice title="The climate file of this run was deleted">
         The carpet, the moist-air chart and the bin table need its hours. The totals above are as computed and stay.
       </Notice>
     );
   }
-  if (hours.isError || climate.isError) {
-    return (
-      <Notice tone="bad" title="The hourly views could not be loaded">
-        {(hours.error ?? climate.error)?.message} The totals above are complete; reload to try the hourly views again.
-      </Notice>
-    );
-  }
-  if (climate.data && hours.data && !matched) {
+  if (columns.error instanceof ApiError && columns.error.code === 'series_changed') {
     return (
       <Notice tone="warn" title="The climate file no longer matches this run">
-        The run has {hours.data.modes.length.toLocaleString('en')} hours and the file now has {climate.data.timestampsMs.length.toLocaleString('en')}. The totals above
-        are as computed.
+        {columns.error.message} The totals above are as computed.
       </Notice>
     );
   }
-  if (!chartHours || !states || !modes || !climate.data) {
-    return <div className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading hourly views" />;
+  if (columns.isError) {
+    return (
+      <Notice tone="bad" title="The hourly views could not be loaded">
+        {columns.error.message} The totals above are complete; reload to try the hourly views again.
+      </Notice>
+    );
   }
   const stem = `run-${run.id}`;
+  const turn = (view: (typeof VIEWS)[number]) => shown > VIEWS.indexOf(view);
   return (
     <div className="space-y-4">
-      <Panel title="Modes by day and hour">
-        <CarpetPlot timestampsMs={climate.data.timestampsMs} values={modes} kind="mode" utcOffsetMinutes={run.climate.utcOffsetMinutes} />
-      </Panel>
-      <Panel title="Hours on the moist-air chart">
-        <p className="mb-2 text-xs text-ink-soft">
-          Each outdoor hour coloured by its mode, at the site's pressure; the envelope as run and the supply setpoint between its moisture limits.
-        </p>
-        <MoistAirChart pressurePa={states.sitePressurePa} hours={chartHours} display="points" envelopes={envelopes} markers={markers} />
-      </Panel>
-      <Panel title="Dry-bulb bins">
-        <BinTablePanel modes={modes} dryBulbC={states.dryBulbC} wetBulbC={states.wetBulbC} fileStem={stem} />
-      </Panel>
+      <HourView title="Modes by day and hour" what="chart" shown={turn('carpet')} heightPx={320}>
+        {() => <CarpetPlot timestampsMs={data!.timestampsMs} values={data!.modes} kind="mode" utcOffsetMinutes={run.climate.utcOffsetMinutes} />}
+      </HourView>
+      <HourView title="Hours on the moist-air chart" what="chart" shown={turn('moist-air')} heightPx={560}>
+        {() => (
+          <>
+            <p className="mb-2 text-xs text-ink-soft">
+              Each outdoor hour coloured by its mode, at the site's pressure; the envelope as run and the supply setpoint between its moisture limits.
+            </p>
+            <MoistAirChart pressurePa={data!.sitePressurePa} hours={chartHours!} display="points" envelopes={envelopes} markers={markers} />
+          </>
+        )}
+      </HourView>
+      <HourView title="Dry-bulb bins" what="table" shown={turn('bins')} heightPx={420}>
+        {() => <BinTablePanel table={data!.bins} fileStem={stem} />}
+      </HourView>
     </div>
   );
 }

@@ -1,12 +1,12 @@
-import { formatQuantity, unitOf } from '@/lib/quantity';
+import { formatCount, formatQuantity, numberFormat, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
 import { countsSubsets, hoursOfSpec, hoursText as countText, modeRowSpecs, notCountedShort } from '../../../../shared/report/mode-subsets';
 import type { YearResults } from '../../../../shared/scenario/results';
 import { PARTIAL_YEAR_MARK, partialYearsSentence, WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
 
-const hoursText = (h: number) => Math.round(h).toLocaleString('en');
-const mwhText = (kwh: number) => (kwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+const hoursText = (h: number) => formatCount(Math.round(h));
+const mwhText = (kwh: number) => numberFormat(1).format(kwh / 1000);
 
 /** The columns the statistics cover, in the table's order, with how each value is written. */
 const statColumns: { metric: YearMetric; format: (v: number, system: UnitSystem) => string }[] = [

@@ -1,4 +1,4 @@
-import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
+import { formatQuantity, numberFormat, toDisplay, unitOf } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { sweepMetricLabels, type SweepMetric } from '../../../../shared/sweep';
 
@@ -26,5 +26,5 @@ export function formatMetric(metric: SweepMetric, system: UnitSystem, si: number
   if (si === null || !Number.isFinite(si)) return '–';
   if (metric === 'partialPue') return si.toFixed(3);
   if (metric === 'waterL') return formatQuantity('water', system, si, false);
-  return si.toLocaleString('en', { maximumFractionDigits: 0 });
+  return numberFormat(0).format(si);
 }
