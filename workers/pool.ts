@@ -45,6 +45,20 @@ export interface WorkerPool {
 }
 
 /**
+ * How the pool's threads are kept, in one place (another pool for interactive work takes the same settings with its
+ * own thread count):
+ * - `execArgv: []`: the threads run a plain-JavaScript bundle, so they start without the parent's flags (under the
+ *   tsx command line those are tsx's loader hooks, which every thread would otherwise load before its first task);
+ * - every thread starts with the pool and stays up (`minThreads` = `maxThreads`), so the first sweep after a
+ *   start already runs on all of them instead of waiting for a second thread to boot mid-sweep;
+ * - `idleTimeout` only matters for threads above `minThreads` (none here); kept long so a pool configured with
+ *   fewer warm threads still keeps them between the runs of a queue.
+ */
+export function poolSettings(threads: number) {
+  return { minThreads: threads, maxThreads: threads, idleTimeout: 10 * 60_000, execArgv: [] as string[] };
+}
+
+/**
  * The worker pool. Every thread loads one bundle of workers/dispatch.ts and the tasks it names, built by
  * esbuild when a source changed (workers/fresh-bundle.mjs): threads start quickly and run plain JavaScript,
  * the same way in development, tests and production. (Loading TypeScript in each thread through tsx made a
@@ -53,12 +67,7 @@ export interface WorkerPool {
  */
 export function createWorkerPool(options: { threads?: number } = {}): WorkerPool {
   const threads = options.threads && options.threads > 0 ? options.threads : availableParallelism();
-  const piscina = new Piscina({
-    filename: workerBundleUrl(),
-    minThreads: 1,
-    maxThreads: threads,
-    idleTimeout: 60_000,
-  });
+  const piscina = new Piscina({ filename: workerBundleUrl(), ...poolSettings(threads) });
   return {
     threads,
     run: async (task, input, { transferList, signal, timeLimitMs = TASK_TIME_LIMIT_MS } = {}) => {
