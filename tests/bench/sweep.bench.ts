@@ -16,33 +16,14 @@ import { runs } from '../../server/db/schema';
 import { createRunQueue } from '../../server/runs/queue';
 import { createWorkerPool } from '../../workers/pool';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
-import { syntheticSeries, type SyntheticClimate } from '../unit/scenario/synthetic-climate';
+import { BENCH_SCENARIO, canonicalCsv, HOURS_PER_YEAR, syntheticYears } from './bench-inputs';
 import type { BenchContext, BenchSuite } from './suite';
 
-const HOURS_PER_YEAR = 8760;
 const YEARS = 10;
 const POINTS = 50;
 const ROUNDS = 3;
-// Temperate synthetic climate (invented).
-const TEMPERATE: SyntheticClimate = { name: 'temperate (synthetic)', elevationM: 100, meanC: 12, seasonalK: 11, dailyK: 5, rhMean: 68, rhSpread: 30 };
-const SCENARIO = {
-  name: 'bench direct air',
-  elevationM: 100,
-  envelope: { dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9, dewPointMaxC: 15, rhMinPct: 0, rhMaxPct: 70 },
-  system: { kind: 'direct-air', supplyAirC: 24, itDeltaTK: 12, evaporativeEffectiveness: 0.8 },
-  energy: { itLoadKw: 1000, mechanicalCop: 4, fanPowerFraction: 1 / 12 },
-};
 // 18, 18.25, …, 30.25 °C: 50 points
 const AXES = [{ input: 'system.supplyAirC', from: 18, to: 18 + (POINTS - 1) * 0.25, step: 0.25 }];
-
-function canonicalCsv(years: number): string {
-  const series = syntheticSeries(TEMPERATE, { hours: years * HOURS_PER_YEAR, seed: 5 });
-  const lines = ['timestamp,dry_bulb_c,relative_humidity_pct'];
-  for (let i = 0; i < series.dryBulbC.length; i++) {
-    lines.push(`${new Date(series.timestampsMs[i]).toISOString().slice(0, 16)}Z,${series.dryBulbC[i].toFixed(1)},${series.humidity.values[i].toFixed(0)}`);
-  }
-  return `${lines.join('\n')}\n`;
-}
 
 interface Study {
   db: Db;
@@ -68,9 +49,9 @@ export async function prepareStudy(): Promise<Study> {
       .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=ten-years.csv`)
       .set(as)
       .set('content-type', 'text/csv')
-      .send(canonicalCsv(YEARS))
+      .send(canonicalCsv(syntheticYears(YEARS)))
       .expect(201);
-    const scenario = await request(app).post(`/api/projects/${projectId}/scenarios`).set(as).send({ scenario: SCENARIO }).expect(201);
+    const scenario = await request(app).post(`/api/projects/${projectId}/scenarios`).set(as).send({ scenario: BENCH_SCENARIO }).expect(201);
     return { db, dataDir, engineer, projectId, scenarioId: scenario.body.scenario.id, climateFileId: file.body.climateFile.id };
   } finally {
     await pool.destroy();
