@@ -4,6 +4,8 @@
  * Each measurement starts the app afresh on the same database — a new pool and queue, as a server restart does — and
  * times its first sweep ("right after a start") and then a second one (warm). One thread and two threads take turns,
  * three times each, the order swapped every round; the figures are medians. Target: two threads ≥ 1.8× one thread.
+ * The process's CPU time per warm sweep is given too: on a machine whose cores are taken by other work, two threads
+ * cannot run faster than one, and the CPU figures show what the second thread costs beyond the first.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -59,29 +61,31 @@ export async function prepareStudy(): Promise<Study> {
 }
 
 /** Starts an app on `threads` pool threads and times its first and second sweep, POST to idle, in ms. */
-export async function timeStartAndSweeps(study: Study, threads: number): Promise<{ firstMs: number; warmMs: number; free: number[] }> {
+export async function timeStartAndSweeps(study: Study, threads: number): Promise<{ firstMs: number; warmMs: number; warmCpuMs: number; free: number[] }> {
   const { db, engineer, projectId, scenarioId, climateFileId } = study;
   const pool = createWorkerPool({ threads });
   const runQueue = createRunQueue({ db, pool });
   const app = createApp({ db, pool, runQueue });
   const as = asPerson(engineer);
   const sweepOnce = async () => {
+    const cpuStart = process.cpuUsage();
     const start = performance.now();
     const res = await request(app).post(`/api/projects/${projectId}/sweeps`).set(as).send({ scenarioId, climateFileId, axes: AXES }).expect(202);
     await runQueue.idle();
     const ms = performance.now() - start;
+    const cpu = process.cpuUsage(cpuStart);
     const sweepId = res.body.sweep.id as number;
     const points = db.select({ status: runs.status, resultsJson: runs.resultsJson }).from(runs).where(eq(runs.sweepId, sweepId)).orderBy(runs.id).all();
     if (points.length !== POINTS || points.some((p) => p.status !== 'done')) throw new Error(`sweep ${sweepId}: not every point is done`);
     const free = points.map((p) => (JSON.parse(p.resultsJson!) as { hours: { free: number } }).hours.free);
     await request(app).delete(`/api/projects/${projectId}/sweeps/${sweepId}`).set(as).expect(204);
-    return { ms, free };
+    return { ms, cpuMs: (cpu.user + cpu.system) / 1000, free };
   };
   try {
     const first = await sweepOnce();
     const warm = await sweepOnce();
     if (first.free.some((f, k) => f !== warm.free[k])) throw new Error('two sweeps of the same points disagree');
-    return { firstMs: first.ms, warmMs: warm.ms, free: warm.free };
+    return { firstMs: first.ms, warmMs: warm.ms, warmCpuMs: warm.cpuMs, free: warm.free };
   } finally {
     await runQueue.idle();
     await pool.destroy();
@@ -93,7 +97,7 @@ const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floo
 async function run({ log }: BenchContext): Promise<Record<string, number | string>> {
   const study = await prepareStudy();
   try {
-    const times = { 1: { first: [] as number[], warm: [] as number[] }, 2: { first: [] as number[], warm: [] as number[] } };
+    const times = { 1: { first: [] as number[], warm: [] as number[], cpu: [] as number[] }, 2: { first: [] as number[], warm: [] as number[], cpu: [] as number[] } };
     let reference: number[] | null = null;
     for (let round = 0; round < ROUNDS; round++) {
       for (const threads of round % 2 === 0 ? [1, 2] : [2, 1]) {
@@ -102,6 +106,7 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
         if (measured.free.some((f, k) => f !== reference![k])) throw new Error(`the ${threads}-thread sweep disagrees with the first`);
         times[threads as 1 | 2].first.push(measured.firstMs);
         times[threads as 1 | 2].warm.push(measured.warmMs);
+        times[threads as 1 | 2].cpu.push(measured.warmCpuMs);
         log(`sweep round ${round + 1}, ${threads} thread(s): first after start ${measured.firstMs.toFixed(0)} ms, warm ${measured.warmMs.toFixed(0)} ms`);
       }
     }
@@ -119,6 +124,9 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
       'sweep.twoThreadsFirstAfterStartMs': Math.round(twoFirst),
       'sweep.twoThreadsSpeedupFirstAfterStart': Number((oneFirst / twoFirst).toFixed(2)),
       'sweep.twoThreadsHoursPerSecond': Math.round((hours / twoWarm) * 1000),
+      // CPU time of the whole process (main thread and pool threads) for a warm sweep: what two threads cost beyond one
+      'sweep.oneThreadCpuMs': Math.round(median(times[1].cpu)),
+      'sweep.twoThreadsCpuMs': Math.round(median(times[2].cpu)),
     };
   } finally {
     study.db.$client.close();
