@@ -30,7 +30,7 @@ interface Timing {
 /** Wall and CPU time of one command, as whole processes; throws with its stderr when it fails. */
 function timed(command: string, args: string[], cpuFile: string): Timing {
   writeFileSync(cpuFile, '');
-  const env = { ...process.env, TRAMONTANE_BENCH_CPU_FILE: cpuFile, NODE_OPTIONS: `--require ${path.join(here, 'command-line/report-cpu.cjs')}` };
+  const env = { ...process.env, TRAMONTANE_BENCH_CPU_FILE: cpuFile, NODE_OPTIONS: `--require ${JSON.stringify(path.join(here, 'command-line/report-cpu.cjs'))}` };
   const start = performance.now();
   const result = spawnSync(command, args, { cwd: root, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024, env });
   const wallMs = performance.now() - start;
