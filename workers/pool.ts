@@ -65,6 +65,20 @@ export function defaultInteractiveThreads(longThreads: number): number {
 }
 
 /**
+ * How the pool's threads are kept, in one place (another pool for interactive work takes the same settings with its
+ * own thread count):
+ * - `execArgv: []`: the threads run a plain-JavaScript bundle, so they start without the parent's flags (under the
+ *   tsx command line those are tsx's loader hooks, which every thread would otherwise load before its first task);
+ * - every thread starts with the pool and stays up (`minThreads` = `maxThreads`), so the first sweep after a
+ *   start already runs on all of them instead of waiting for a second thread to boot mid-sweep;
+ * - `idleTimeout` only matters for threads above `minThreads` (none here); kept long so a pool configured with
+ *   fewer warm threads still keeps them between the runs of a queue.
+ */
+export function poolSettings(threads: number) {
+  return { minThreads: threads, maxThreads: threads, idleTimeout: 10 * 60_000, execArgv: [] as string[] };
+}
+
+/**
  * The worker pool. Every thread loads one bundle of workers/dispatch.ts and the tasks it names, built by
  * esbuild when a source changed (workers/fresh-bundle.mjs): threads start quickly and run plain JavaScript,
  * the same way in development, tests and production. (Loading TypeScript in each thread through tsx made a
@@ -78,8 +92,8 @@ export function createWorkerPool(options: { threads?: number; interactiveThreads
   const interactiveThreads = options.interactiveThreads && options.interactiveThreads > 0 ? options.interactiveThreads : defaultInteractiveThreads(threads);
   const filename = workerBundleUrl();
   const lanes: Record<PoolLane, Piscina> = {
-    long: new Piscina({ filename, minThreads: 1, maxThreads: threads, idleTimeout: 60_000 }),
-    interactive: new Piscina({ filename, minThreads: 1, maxThreads: interactiveThreads, idleTimeout: 60_000 }),
+    long: new Piscina({ filename, ...poolSettings(threads) }),
+    interactive: new Piscina({ filename, ...poolSettings(interactiveThreads) }),
   };
   return {
     threads,

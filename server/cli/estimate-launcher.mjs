@@ -1,3 +1,4 @@
+#!/usr/bin/env node
 // `npm run estimate` starts here. The command runs from a single bundled file, so it starts in a
 // fraction of the time a TypeScript loader needs; the bundle is rebuilt first whenever any source it
 // was built from has changed since (workers/fresh-bundle.mjs), so the command always runs the code in the

@@ -13,6 +13,9 @@ export function openDatabase(file: string): Db {
   if (file !== ':memory:') mkdirSync(path.dirname(file), { recursive: true });
   const sqlite = new Database(file);
   sqlite.pragma('journal_mode = WAL');
+  // Under WAL, NORMAL syncs at checkpoints instead of at every commit: the database stays consistent after a crash
+  // or power cut, but the last commits before a power cut may be lost (DEVELOPERS.md, "The database").
+  sqlite.pragma('synchronous = NORMAL');
   sqlite.pragma('foreign_keys = ON');
   sqlite.pragma('busy_timeout = 5000');
   const db = drizzle({ client: sqlite, schema, casing: 'snake_case' });

@@ -2,7 +2,8 @@ import { and, eq, inArray } from 'drizzle-orm';
 import type { ClimateSeries } from '../../shared/climate';
 import type { Db } from '../db/client';
 import { runHours, runs, sweeps } from '../db/schema';
-import { blob, loadClimateSeries } from '../climate/store';
+import { blob } from '../climate/store';
+import { createSeriesCache } from './series-cache';
 import type { WorkerPool } from '../../workers/pool';
 import { recordAudit } from '../auth/audit';
 import type { Mailer } from '../mail/mailer';
@@ -42,6 +43,8 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
   const waiting: number[] = [];
   const running = new Map<number, AbortController>();
   let idleWaiters: Array<() => void> = [];
+  // A sweep's points read one file: decoded once while the queue has work, shared with the threads.
+  const seriesCache = createSeriesCache(db);
 
   /**
    * A run that finished or failed on its own goes into the audit trail and, when done, out as notices. A sweep's
@@ -86,6 +89,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
       void execute(runId);
     }
     if (running.size === 0 && waiting.length === 0) {
+      seriesCache.clear();
       const waiters = idleWaiters;
       idleWaiters = [];
       for (const w of waiters) w();
@@ -101,7 +105,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     db.update(runs).set({ status: 'running', startedAt: new Date(), progress: 0 }).where(eq(runs.id, runId)).run();
     const timer = setTimeout(() => controller.abort(new Error(`The run took longer than ${Math.round(timeoutMs / 1000)} s and was stopped.`)), timeoutMs);
     try {
-      const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : loadClimateSeries(db, run.climateFileId);
+      const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : seriesCache.get(run.climateFileId);
       if (!series) throw new Error('The climate file of this run was deleted before the run started.');
       const climate = JSON.parse(run.climateJson) as RunSnapshotClimate;
       const out = await pool.run(

@@ -115,12 +115,76 @@ export interface ParsedRows {
    * the young-generation collector.
    */
   row: (rowIndex: number) => string[];
-  /** The same cells in an array that is reused: valid only until the next call (for one pass over the rows). */
-  rowView: (rowIndex: number) => string[];
+  /** The same cells as bounds in a text, into `cells` (reused), for readers that parse cells in place. */
+  rowCells: (rowIndex: number, cells: RowCells) => RowCells;
   /** 1-based line number where each row starts. */
   lineOf: (rowIndex: number) => number;
   /** Malformed quoting reported by papaparse: row index and message. */
   errors: { row: number; message: string }[];
+}
+
+/**
+ * The cells of one row as bounds in a text: cell k is text.substring(starts[k], ends[k]). For text without quotes the
+ * text is the file's own, so reading a row makes no string at all.
+ */
+export interface RowCells {
+  text: string;
+  count: number;
+  starts: Int32Array;
+  ends: Int32Array;
+}
+
+export function newRowCells(): RowCells {
+  return { text: '', count: 0, starts: new Int32Array(16), ends: new Int32Array(16) };
+}
+
+/** Cell k of the row as a string; undefined past the row's last cell. For messages and slow paths. */
+export function cellText(row: RowCells, k: number): string | undefined {
+  return k < row.count ? row.text.substring(row.starts[k], row.ends[k]) : undefined;
+}
+
+/** The row's cells as strings (messages only). */
+export function rowCellTexts(row: RowCells): string[] {
+  return Array.from({ length: row.count }, (_, k) => cellText(row, k)!);
+}
+
+function addCell(cells: RowCells, start: number, end: number): void {
+  if (cells.count === cells.starts.length) {
+    const starts = new Int32Array(cells.count * 2);
+    const ends = new Int32Array(cells.count * 2);
+    starts.set(cells.starts);
+    ends.set(cells.ends);
+    cells.starts = starts;
+    cells.ends = ends;
+  }
+  cells.starts[cells.count] = start;
+  cells.ends[cells.count] = end;
+  cells.count++;
+}
+
+/** The bounds of the cells of text[start, end) split at the delimiter, into `cells`. */
+function boundsInto(text: string, start: number, end: number, delimiter: string, cells: RowCells): RowCells {
+  cells.text = text;
+  cells.count = 0;
+  let from = start;
+  for (let at = text.indexOf(delimiter, from); at !== -1 && at < end; at = text.indexOf(delimiter, from)) {
+    addCell(cells, from, at);
+    from = at + 1;
+  }
+  addCell(cells, from, end);
+  return cells;
+}
+
+/** Cells already split (papaparse's rows) as bounds in their joined text. */
+function boundsOfRow(row: string[], cells: RowCells): RowCells {
+  cells.text = row.join('');
+  cells.count = 0;
+  let offset = 0;
+  for (const cell of row) {
+    addCell(cells, offset, offset + cell.length);
+    offset += cell.length;
+  }
+  return cells;
 }
 
 /**
@@ -133,11 +197,10 @@ export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
   if (!text.includes('"')) {
     const starts = lineStarts(text);
     const count = starts.length - 1;
-    const view: string[] = [];
     return {
       count,
       row: (i) => text.slice(starts[i], starts[i + 1] - 1).split(delimiter),
-      rowView: (i) => splitInto(text, starts[i], starts[i + 1] - 1, delimiter, view),
+      rowCells: (i, cells) => boundsInto(text, starts[i], starts[i + 1] - 1, delimiter, cells),
       lineOf: (i) => body.firstLine + i,
       errors: [],
     };
@@ -148,20 +211,7 @@ export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
     .filter((e) => e.type === 'Quotes')
     .map((e) => ({ row: e.row ?? 0, message: e.message }));
   const starts = rowStartLines(text, body.firstLine);
-  return { count: rows.length, row: (i) => rows[i], rowView: (i) => rows[i], lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
-}
-
-/** The cells of text[start, end) split at the delimiter, into `cells` (resized); no line string is made. */
-function splitInto(text: string, start: number, end: number, delimiter: string, cells: string[]): string[] {
-  let k = 0;
-  let from = start;
-  for (let at = text.indexOf(delimiter, from); at !== -1 && at < end; at = text.indexOf(delimiter, from)) {
-    cells[k++] = text.substring(from, at);
-    from = at + 1;
-  }
-  cells[k++] = text.substring(from, end);
-  if (cells.length !== k) cells.length = k;
-  return cells;
+  return { count: rows.length, row: (i) => rows[i], rowCells: (i, cells) => boundsOfRow(rows[i], cells), lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
 }
 
 /** Offset where each LF-separated line starts, then one past the text's end: line i is text[starts[i], starts[i + 1] - 1). */

@@ -18,14 +18,19 @@ const POW10 = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12,
  * Number() of the same text, without building a string per cell. Anything else goes through Number().
  */
 export function parseNumberCell(cell: string, decimalComma: boolean): number {
-  let start = 0;
-  let end = cell.length;
-  while (start < end && cell.charCodeAt(start) === 32) start++;
-  while (end > start && (cell.charCodeAt(end - 1) === 32 || cell.charCodeAt(end - 1) === 13)) end--;
+  return parseNumberAt(cell, 0, cell.length, decimalComma);
+}
+
+/** {@link parseNumberCell} of the cell text[from, to), read in place: a string is made only for the slow path. */
+export function parseNumberAt(text: string, from: number, to: number, decimalComma: boolean): number {
+  let start = from;
+  let end = to;
+  while (start < end && text.charCodeAt(start) === 32) start++;
+  while (end > start && (text.charCodeAt(end - 1) === 32 || text.charCodeAt(end - 1) === 13)) end--;
   if (start === end) return NaN;
   const separator = decimalComma ? 44 : 46;
   let i = start;
-  let c = cell.charCodeAt(i);
+  let c = text.charCodeAt(i);
   const negative = c === 45;
   if (negative || c === 43) i++;
   let mantissa = 0;
@@ -33,7 +38,7 @@ export function parseNumberCell(cell: string, decimalComma: boolean): number {
   let fractionDigits = 0;
   let seenSeparator = false;
   for (; i < end; i++) {
-    c = cell.charCodeAt(i);
+    c = text.charCodeAt(i);
     if (c >= 48 && c <= 57) {
       mantissa = mantissa * 10 + (c - 48);
       digits++;
@@ -41,11 +46,11 @@ export function parseNumberCell(cell: string, decimalComma: boolean): number {
     } else if (c === separator && !seenSeparator) {
       seenSeparator = true;
     } else {
-      return parseNumberSlowly(cell, decimalComma);
+      return parseNumberSlowly(text.substring(from, to), decimalComma);
     }
   }
   if (digits === 0) return NaN;
-  if (digits > 15) return parseNumberSlowly(cell, decimalComma);
+  if (digits > 15) return parseNumberSlowly(text.substring(from, to), decimalComma);
   const magnitude = fractionDigits === 0 ? mantissa : mantissa / POW10[fractionDigits];
   const value = negative ? -magnitude : magnitude;
   if ((value >= 999 || value <= -999) && SENTINELS.has(value)) return NaN;

@@ -1,12 +1,12 @@
 /** Data rows → UTC times and SI values, with the checks each row gets. */
-import type { ParsedRows } from './delimited-text';
+import { cellText, newRowCells, rowCellTexts, type ParsedRows, type RowCells } from './delimited-text';
 import type { RowColumns } from './hourly-grid';
 import { toHourlySeries } from './hourly-series';
 import { percent, REJECT_SHARE, round, type Context } from './import-context';
 import { utcOffsetLabel } from '../time-zone';
 import { moveHourEndingToStart } from './hour-starts';
 import { createLocalToUtc, type LocalToUtc } from './local-time';
-import { classifyUnreadableCell, parseNumberCell } from './number-cells';
+import { classifyUnreadableCell, parseNumberAt } from './number-cells';
 import { describeYmdh, unitOf } from './recognise-columns';
 import { isBlankRow, isCommentRow, type Layout } from './table-layout';
 import {
@@ -16,7 +16,7 @@ import {
   MS_PER_DAY,
   MS_PER_MINUTE,
   parseDateCell,
-  parseDateTimeCell,
+  parseDateTimeAt,
   parseIntegerCell,
   parseTimeCell,
 } from './time-cells';
@@ -75,47 +75,53 @@ export function readRows(
   let previousOffset = NaN;
   let previousLine = 0;
 
-  const readValue = (r: ValueReader, cell: string | undefined, line: number, min: number, max: number): number => {
-    const raw = cell === undefined ? NaN : parseNumberCell(cell, decimalComma);
+  // Cells are read in place from the row's text; a cell's string is made only for a message.
+  const row: RowCells = newRowCells();
+  const cell = (column: number): string | undefined => cellText(row, column);
+  const readValue = (r: ValueReader, column: number, line: number, min: number, max: number): number => {
+    const raw = column < row.count ? parseNumberAt(row.text, row.starts[column], row.ends[column], decimalComma) : NaN;
     const header = r.assignment.header;
-    if (raw !== raw) {
-      counts.cellsUnreadable++;
-      if (cell === undefined || classifyUnreadableCell(cell, decimalComma) === 'unreadable') {
-        r.bad++;
-        const text = (cell ?? '').trim();
-        log.warning('unparsable-value', `"${text}" in column "${header}" is not a number; the value is treated as missing.`, {
-          line,
-          column: header,
-          value: text,
-        });
-      } else {
-        log.info('missing-value-marker', `Column "${header}" marks a missing value with "${cell.trim()}".`, { line, column: header, value: cell.trim() });
-      }
-      return NaN;
-    }
+    if (raw !== raw) return unreadableValue(r, cell(column), line);
     const si = raw * r.conversion.scale + r.conversion.offset;
     if (si < min || si > max) {
       r.bad++;
       counts.impossibleValues++;
-      log.warning('impossible-value', `${r.assignment.quantity} ${cell?.trim()} ${r.assignment.unit} in column "${header}" is outside the possible range; treated as missing.`, {
+      const text = cell(column)?.trim();
+      log.warning('impossible-value', `${r.assignment.quantity} ${text} ${r.assignment.unit} in column "${header}" is outside the possible range; treated as missing.`, {
         line,
         column: header,
-        value: cell?.trim(),
+        value: text,
       });
       return NaN;
     }
     return si;
   };
+  const unreadableValue = (r: ValueReader, cell: string | undefined, line: number): number => {
+    const header = r.assignment.header;
+    counts.cellsUnreadable++;
+    if (cell === undefined || classifyUnreadableCell(cell, decimalComma) === 'unreadable') {
+      r.bad++;
+      const text = (cell ?? '').trim();
+      log.warning('unparsable-value', `"${text}" in column "${header}" is not a number; the value is treated as missing.`, {
+        line,
+        column: header,
+        value: text,
+      });
+    } else {
+      log.info('missing-value-marker', `Column "${header}" marks a missing value with "${cell.trim()}".`, { line, column: header, value: cell.trim() });
+    }
+    return NaN;
+  };
 
   for (let r = layout.dataStart; r < parsed.count; r++) {
-    const row = parsed.rowView(r);
-    if (isBlankRow(row) || isCommentRow(row)) continue;
+    parsed.rowCells(r, row);
+    if (isBlankOrComment(row)) continue;
     counts.rows++;
     const line = parsed.lineOf(r);
-    if (row.length < needed) {
-      log.warning('wrong-field-count', `The row has ${row.length} fields where ${headers.length} were expected.`, {
+    if (row.count < needed) {
+      log.warning('wrong-field-count', `The row has ${row.count} fields where ${headers.length} were expected.`, {
         line,
-        value: row.join(ctx.mapping.delimiter).slice(0, 120),
+        value: rowCellTexts(row).join(ctx.mapping.delimiter).slice(0, 120),
       });
     }
 
@@ -123,19 +129,19 @@ export function readRows(
     let localMs = NaN;
     let offsetMinutes = NaN;
     if (time.layout === 'iso') {
-      localMs = parseDateTimeCell(row[time.column] ?? '', time.dateOrder ?? 'YMD');
+      localMs = time.column < row.count ? parseDateTimeAt(row.text, row.starts[time.column], row.ends[time.column], time.dateOrder ?? 'YMD') : NaN;
       offsetMinutes = lastParse.offsetMinutes;
     } else if (time.layout === 'date-time') {
-      const day = parseDateCell(row[time.dateColumn] ?? '', time.dateOrder);
-      const clock = parseTimeCell(row[time.timeColumn] ?? '');
+      const day = parseDateCell(cell(time.dateColumn) ?? '', time.dateOrder);
+      const clock = parseTimeCell(cell(time.timeColumn) ?? '');
       localMs = day + clock;
       if (clock === 0) hourZero = true;
       else if (clock === MS_PER_DAY) hour24 = true;
     } else {
-      const days = civilDays(parseIntegerCell(row[time.year] ?? ''), parseIntegerCell(row[time.month] ?? ''), parseIntegerCell(row[time.day] ?? ''));
+      const days = civilDays(parseIntegerCell(cell(time.year) ?? ''), parseIntegerCell(cell(time.month) ?? ''), parseIntegerCell(cell(time.day) ?? ''));
       // the hour cell may be a whole hour (13), hhmm (1300) or a clock time (13:00)
-      const hourMs = parseTimeCell(row[time.hour] ?? '');
-      let minute = time.minute === null ? 0 : parseIntegerCell(row[time.minute] ?? '');
+      const hourMs = parseTimeCell(cell(time.hour) ?? '');
+      let minute = time.minute === null ? 0 : parseIntegerCell(cell(time.minute) ?? '');
       if (minute === 60) minute = 0; // some exports write minute 60 beside an hour-ending hour
       if (hourMs >= 0 && minute >= 0 && minute < 60) {
         localMs = days * MS_PER_DAY + hourMs + minute * MS_PER_MINUTE;
@@ -145,7 +151,7 @@ export function readRows(
     }
     if (localMs !== localMs) {
       counts.rowsRejected++;
-      const cells = timeColumns.map((c) => (row[c] ?? '').trim()).join(' ');
+      const cells = timeColumns.map((c) => (cell(c) ?? '').trim()).join(' ');
       log.warning('unparsable-time', `The time "${cells}" could not be read; the row is left out.`, { line, column: timeHeader, value: cells });
       continue;
     }
@@ -177,25 +183,27 @@ export function readRows(
     previousLine = line;
 
     // values
-    const d = readValue(dry, row[dryBulb.column], line, DRY_BULB_MIN_C, DRY_BULB_MAX_C);
-    let w = readValue(hum, row[humidity.column], line, -Infinity, Infinity);
+    const d = readValue(dry, dryBulb.column, line, DRY_BULB_MIN_C, DRY_BULB_MAX_C);
+    let w = readValue(hum, humidity.column, line, -Infinity, Infinity);
     if (w === w) {
       checkHumidity(humidityQuantity, w, d);
       if (humidityCheck.verdict === 'impossible') {
         hum.bad++;
         counts.impossibleValues++;
-        log.warning('impossible-value', impossibleHumidityMessage(humidity, row[humidity.column], d), {
+        const text = cell(humidity.column)!;
+        log.warning('impossible-value', impossibleHumidityMessage(humidity, text, d), {
           line,
           column: humidity.header,
-          value: row[humidity.column].trim(),
+          value: text.trim(),
         });
         w = NaN;
       } else if (humidityCheck.verdict === 'clamped') {
         counts.clampedValues++;
-        log.info('clamped-value', `${humidity.quantity} ${row[humidity.column].trim()} in column "${humidity.header}" is just past saturation; set to ${round(humidityCheck.value)} ${humidityQuantity === 'relative-humidity' ? '%' : '°C'}.`, {
+        const text = cell(humidity.column)!.trim();
+        log.info('clamped-value', `${humidity.quantity} ${text} in column "${humidity.header}" is just past saturation; set to ${round(humidityCheck.value)} ${humidityQuantity === 'relative-humidity' ? '%' : '°C'}.`, {
           line,
           column: humidity.header,
-          value: row[humidity.column].trim(),
+          value: text,
         });
         w = humidityCheck.value;
       }
@@ -205,7 +213,7 @@ export function readRows(
     localTimes[i] = localMs;
     rows.dryBulbC[i] = d;
     rows.humidity[i] = w;
-    if (rows.pressurePa && pres && pressure) rows.pressurePa[i] = readValue(pres, row[pressure.column], line, PRESSURE_MIN_PA, PRESSURE_MAX_PA);
+    if (rows.pressurePa && pres && pressure) rows.pressurePa[i] = readValue(pres, pressure.column, line, PRESSURE_MIN_PA, PRESSURE_MAX_PA);
     rows.line[i] = line;
   }
 
@@ -239,6 +247,17 @@ export function readRows(
   }
   if (log.hasErrors()) return null;
   return toHourlySeries(rows, humidityQuantity, ctx, !anyOffset && !zone);
+}
+
+/** isBlankRow || isCommentRow (table-layout.ts) of a row read in place; strings are made only for an unusual row. */
+function isBlankOrComment(row: RowCells): boolean {
+  if (row.count === 0) return true;
+  const start = row.starts[0];
+  const first = start < row.ends[0] ? row.text.charCodeAt(start) : -1;
+  // several cells, the first starting with neither white space nor '#': data
+  if (row.count > 1 && first !== -1 && first !== 32 && first !== 9 && first !== 35) return false;
+  const cells = rowCellTexts(row);
+  return isBlankRow(cells) || isCommentRow(cells);
 }
 
 function impossibleHumidityMessage(humidity: QuantityAssignment, cell: string, dryBulbC: number): string {

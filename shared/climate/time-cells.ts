@@ -48,12 +48,16 @@ export const lastParse = {
   shortFirst: false,
 };
 
+/** The cell being read is s[pos, end): a whole cell string, or a cell inside a line of the file. */
 let pos = 0;
+let end = 0;
+/** Character code at i inside the cell, NaN past its end. */
+const at = (s: string, i: number): number => (i < end ? s.charCodeAt(i) : Number.NaN);
 
 function readDigits(s: string, maxCount: number): number {
   let value = 0;
   let count = 0;
-  while (count < maxCount && pos < s.length) {
+  while (count < maxCount && pos < end) {
     const c = s.charCodeAt(pos) - 48;
     if (c < 0 || c > 9) break;
     value = value * 10 + c;
@@ -71,7 +75,7 @@ function digitsRead(): number {
 
 function skipSpaces(s: string): void {
   // space, tab, and a CR left by a file whose line ends are mixed
-  while (pos < s.length && (s.charCodeAt(pos) === 32 || s.charCodeAt(pos) === 9 || s.charCodeAt(pos) === 13)) pos++;
+  while (pos < end && (s.charCodeAt(pos) === 32 || s.charCodeAt(pos) === 9 || s.charCodeAt(pos) === 13)) pos++;
 }
 
 function isDateSeparator(c: number): boolean {
@@ -86,12 +90,12 @@ function readDate(s: string, order: DateOrder): number {
   if (firstCount === 8) {
     return civilDays(Math.floor(first / 10000), Math.floor(first / 100) % 100, first % 100);
   }
-  if (pos >= s.length) return NaN;
+  if (pos >= end) return NaN;
   const sep = s.charCodeAt(pos);
   if (!isDateSeparator(sep)) return NaN;
   pos++;
   const second = readDigits(s, 2);
-  if (digitsRead() === 0 || pos >= s.length || s.charCodeAt(pos) !== sep) return NaN;
+  if (digitsRead() === 0 || pos >= end || s.charCodeAt(pos) !== sep) return NaN;
   pos++;
   if (firstCount === 4) {
     const day = readDigits(s, 2);
@@ -118,15 +122,15 @@ function readClock(s: string, allowCompact: boolean): number {
     // "1300" or "100": compact hhmm, as some loggers write
     minute = hour % 100;
     hour = Math.floor(hour / 100);
-  } else if (pos < s.length && s.charCodeAt(pos) === 58 /* : */) {
+  } else if (pos < end && s.charCodeAt(pos) === 58 /* : */) {
     pos++;
     minute = readDigits(s, 2);
     if (digitsRead() !== 2) return NaN;
-    if (pos < s.length && s.charCodeAt(pos) === 58) {
+    if (pos < end && s.charCodeAt(pos) === 58) {
       pos++;
       second = readDigits(s, 2);
       if (digitsRead() !== 2) return NaN;
-      if (pos < s.length && (s.charCodeAt(pos) === 46 || s.charCodeAt(pos) === 44)) {
+      if (pos < end && (s.charCodeAt(pos) === 46 || s.charCodeAt(pos) === 44)) {
         pos++;
         const fracStart = pos;
         const frac = readDigits(s, 9);
@@ -150,13 +154,13 @@ function readClock(s: string, allowCompact: boolean): number {
 function readMeridiem(s: string): number {
   const start = pos;
   skipSpaces(s);
-  const c = s.charCodeAt(pos) | 32;
+  const c = at(s, pos) | 32;
   if (c === 97 /* a */ || c === 112 /* p */) {
     let next = pos + 1;
-    if (s.charCodeAt(next) === 46) next++;
-    if ((s.charCodeAt(next) | 32) === 109 /* m */) {
+    if (at(s, next) === 46) next++;
+    if ((at(s, next) | 32) === 109 /* m */) {
       next++;
-      if (s.charCodeAt(next) === 46) next++;
+      if (at(s, next) === 46) next++;
       pos = next;
       return c === 97 ? 1 : 2;
     }
@@ -169,28 +173,28 @@ function readMeridiem(s: string): number {
 function readOffset(s: string): boolean {
   lastParse.offsetMinutes = NaN;
   skipSpaces(s);
-  if (pos >= s.length) return true;
+  if (pos >= end) return true;
   const c = s.charCodeAt(pos);
   if (c === 90 || c === 122 /* Z z */) {
     pos++;
     lastParse.offsetMinutes = 0;
     return true;
   }
-  if ((c === 85 || c === 117) && s.slice(pos, pos + 3).toUpperCase() === 'UTC') {
+  if ((c === 85 || c === 117) && pos + 3 <= end && s.slice(pos, pos + 3).toUpperCase() === 'UTC') {
     pos += 3;
-    if (pos >= s.length) {
+    if (pos >= end) {
       lastParse.offsetMinutes = 0;
       return true;
     }
   }
-  const signChar = s.charCodeAt(pos);
+  const signChar = at(s, pos);
   if (signChar !== 43 && signChar !== 45) return false;
   pos++;
   const hours = readDigits(s, 2);
   if (digitsRead() !== 2) return false;
   let minutes = 0;
-  if (pos < s.length && s.charCodeAt(pos) === 58) pos++;
-  if (pos < s.length) {
+  if (pos < end && s.charCodeAt(pos) === 58) pos++;
+  if (pos < end) {
     minutes = readDigits(s, 2);
     if (digitsRead() !== 2) return false;
   }
@@ -205,28 +209,34 @@ function readOffset(s: string): boolean {
  * (offset not applied; see lastParse.offsetMinutes) or NaN.
  */
 export function parseDateTimeCell(cell: string, order: DateOrder): number {
-  pos = 0;
+  return parseDateTimeAt(cell, 0, cell.length, order);
+}
+
+/** {@link parseDateTimeCell} of the cell text[start, stop), read in place (no string is made for the cell). */
+export function parseDateTimeAt(text: string, start: number, stop: number, order: DateOrder): number {
+  pos = start;
+  end = stop;
   lastParse.hasTime = false;
   lastParse.offsetMinutes = NaN;
-  skipSpaces(cell);
-  const days = readDate(cell, order);
+  skipSpaces(text);
+  const days = readDate(text, order);
   if (Number.isNaN(days)) return NaN;
   let clockMs = 0;
-  if (pos < cell.length) {
-    const c = cell.charCodeAt(pos);
+  if (pos < end) {
+    const c = text.charCodeAt(pos);
     if (c === 84 || c === 116 || c === 32 || c === 9 /* T t space */) {
       pos++;
-      skipSpaces(cell);
-      if (pos < cell.length) {
-        clockMs = readClock(cell, false);
+      skipSpaces(text);
+      if (pos < end) {
+        clockMs = readClock(text, false);
         if (Number.isNaN(clockMs)) return NaN;
         lastParse.hasTime = true;
       }
     }
   }
-  if (!readOffset(cell)) return NaN;
-  skipSpaces(cell);
-  if (pos !== cell.length) return NaN;
+  if (!readOffset(text)) return NaN;
+  skipSpaces(text);
+  if (pos !== end) return NaN;
   return days * MS_PER_DAY + clockMs;
 }
 
@@ -241,26 +251,28 @@ export function parseDateCell(cell: string, order: DateOrder): number {
 /** A time of day alone: `13:00`, `13:00:00`, `1300`, or a whole hour `13`; 24 allowed. Ms since midnight or NaN. */
 export function parseTimeCell(cell: string): number {
   pos = 0;
+  end = cell.length;
   skipSpaces(cell);
   const ms = readClock(cell, true);
   if (Number.isNaN(ms)) return NaN;
   skipSpaces(cell);
-  return pos === cell.length ? ms : NaN;
+  return pos === end ? ms : NaN;
 }
 
 /** A whole number cell (year, month, day, hour); NaN otherwise. `60.0`-style decimals of a whole number pass. */
 export function parseIntegerCell(cell: string): number {
   pos = 0;
+  end = cell.length;
   skipSpaces(cell);
   const value = readDigits(cell, 6);
   if (digitsRead() === 0) return NaN;
-  if (pos < cell.length && cell.charCodeAt(pos) === 46) {
+  if (pos < end && cell.charCodeAt(pos) === 46) {
     pos++;
     readDigits(cell, 6);
     if (digitsRead() > 0 && Number(cell.slice(cell.indexOf('.') + 1)) !== 0) return NaN;
   }
   skipSpaces(cell);
-  return pos === cell.length ? value : NaN;
+  return pos === end ? value : NaN;
 }
 
 /** ISO 8601 text of a UTC epoch ms, minutes precision (for messages). */
