@@ -36,7 +36,11 @@ export function climateStates(columns: ClimateColumns, elevationM: number): Hour
   if (station) {
     let sum = 0;
     let count = 0;
-    for (let i = 0; i < station.length; i++) if (station[i] === station[i]) (sum += station[i]), count++;
+    for (let i = 0; i < station.length; i++) {
+      if (station[i] !== station[i]) continue;
+      sum += station[i];
+      count++;
+    }
     if (count > 0) sitePressurePa = sum / count;
   }
   const states = bulkStates({ dryBulbC, humidity, pressurePa: pressure.pressurePa });
