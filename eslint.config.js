@@ -20,7 +20,7 @@ const features = readdirSync(new URL('./src/features', import.meta.url), { withF
  * The import boundaries DEVELOPERS.md states in prose ("Imports flow one way"). Paths are resolved
  * (the '@/…' alias included), so a relative path cannot slip past a rule.
  */
-export const boundaryZones = [
+const boundaryZones = [
   {
     target: './shared',
     from: ['./src', './server', './workers', './tests', './sample-weather'],
@@ -62,8 +62,7 @@ export default tseslint.config(
     languageOptions: { globals: { ...globals.node } },
     linterOptions: { reportUnusedDisableDirectives: 'error' },
     rules: {
-      // The type check reports unused locals and parameters (tsconfig noUnusedLocals/Parameters); a leading
-      // underscore marks one kept on purpose.
+      // As the type check's noUnusedParameters: a leading underscore marks a name kept on purpose.
       '@typescript-eslint/no-unused-vars': [
         'error',
         { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrorsIgnorePattern: '^_' },
