@@ -7,6 +7,7 @@
 export function safeReturnTo(value: unknown): string | undefined {
   if (value === undefined || value === '') return '/';
   if (typeof value !== 'string' || value.length > 2000) return undefined;
+  // eslint-disable-next-line no-control-regex -- finding control characters is this check's purpose
   if (!isSitePath(value) || /[\u0000-\u001f\u007f\\]/.test(value)) return undefined;
   try {
     const resolved = new URL(value, 'http://tramontane.invalid');

@@ -21,7 +21,11 @@ export function summariseClimate(series: ClimateSeries, elevationM: number): Cli
   let pressureSum = 0;
   let pressureN = 0;
   if (series.pressurePa) {
-    for (const p of series.pressurePa) if (p === p) (pressureSum += p), pressureN++;
+    for (const p of series.pressurePa) {
+      if (p !== p) continue;
+      pressureSum += p;
+      pressureN++;
+    }
   }
   const meanPressurePa = pressureN ? pressureSum / pressureN : fallbackPressurePa;
 

@@ -1,5 +1,7 @@
 /** C0 and C1 control characters and DEL; line breaks and tabs are allowed only where text may span lines. */
+// eslint-disable-next-line no-control-regex -- finding control characters is these patterns' purpose
 const CONTROL = /[\u0000-\u001f\u007f-\u009f]/;
+// eslint-disable-next-line no-control-regex -- as above
 const CONTROL_BUT_LINE_BREAKS = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/;
 
 /**

@@ -1,5 +1,5 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
-import { AppShell } from '@/components/layout/app-shell';
+import { AppShell } from './app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import { RouteError } from './routes/route-error';

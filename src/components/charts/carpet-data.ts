@@ -88,7 +88,10 @@ export function carpetBins(
     let bestCount = 0;
     for (let m = 0; m < NO_DATA_MODE; m++) {
       const n = modeCounts[c * MODE_CODES + m];
-      if (n > bestCount) (best = m), (bestCount = n);
+      if (n > bestCount) {
+        best = m;
+        bestCount = n;
+      }
     }
     cells[c] = best;
   }

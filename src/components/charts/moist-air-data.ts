@@ -53,7 +53,10 @@ export function chartWindowFor(
   let tMax = 40;
   let wMax = 0;
   const take = (t: number, w: number) => {
-    if (t === t) (tMin = Math.min(tMin, t)), (tMax = Math.max(tMax, t));
+    if (t === t) {
+      tMin = Math.min(tMin, t);
+      tMax = Math.max(tMax, t);
+    }
     if (w === w) wMax = Math.max(wMax, w);
   };
   for (let i = 0; i < hours.dryBulbC.length; i++) take(hours.dryBulbC[i], hours.humidityRatio[i]);

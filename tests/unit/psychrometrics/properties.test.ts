@@ -53,7 +53,7 @@ describe('round trips', () => {
         const wb = Math.min(t, wbDry + fraction * (t - wbDry));
         // Just above 0 °C the water form (eq. 33) gives dry air a higher wet-bulb than the ice form (eq. 35): a wet-bulb
         // in that gap belongs to no moist air, and the engine refuses it. Such draws are skipped, not counted.
-        let w = Number.NaN;
+        let w: number;
         try {
           w = humidityRatioFromWetBulb(t, wb, p);
         } catch (error) {

@@ -155,7 +155,12 @@ describe('other inputs against psychrolib (SI, tight)', () => {
     const dryBulbC = new Float64Array(n);
     const rh = new Float64Array(n);
     let k = 0;
-    for (const t of temperaturesC) for (const r of rhPcts) ((dryBulbC[k] = t), (rh[k++] = r));
+    for (const t of temperaturesC) {
+      for (const r of rhPcts) {
+        dryBulbC[k] = t;
+        rh[k++] = r;
+      }
+    }
     const p = 84_000;
     const out = bulkStates({ dryBulbC, humidity: { kind: 'relative-humidity-pct', values: rh }, pressurePa: p });
     for (let i = 0; i < n; i++) {

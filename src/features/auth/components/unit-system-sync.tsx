@@ -1,6 +1,6 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useEffectEvent, useRef } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { useUnitSystem } from '@/lib/unit-system';
+import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { meQueryOptions, useUpdateSettings } from '../api/me';
 import { useSession } from '../api/get-session';
 
@@ -15,6 +15,11 @@ export function UnitSystemSync() {
   const update = useUpdateSettings();
   const adoptedFor = useRef<number | null>(null);
   const atPageLoad = useRef(unitSystem);
+  // An effect event reads the mutation's latest pending flag without making each new mutation object (one per
+  // render) a reason to run the effect again.
+  const save = useEffectEvent((choice: UnitSystem) => {
+    if (!update.isPending) update.mutate({ unitSystem: choice === 'IP' ? 'ip' : 'si' });
+  });
 
   useEffect(() => {
     if (!me.data) return;
@@ -27,8 +32,7 @@ export function UnitSystemSync() {
         return;
       }
     }
-    if (saved !== unitSystem && !update.isPending) update.mutate({ unitSystem: unitSystem === 'IP' ? 'ip' : 'si' });
-    // `update` is a new object every render and is left out on purpose: only its pending flag is read.
+    if (saved !== unitSystem) save(unitSystem);
   }, [me.data, unitSystem, setUnitSystem]);
 
   return null;

@@ -28,11 +28,9 @@ export function ComparePage() {
   const baselineId = selected.some((r) => r.id === baselineParam) ? baselineParam : (selected[0]?.id ?? 0);
   const rows = useMemo(() => compareRuns(selected, baselineId), [selected, baselineId]);
   const tables = useRunTables(projectId, selected.map((r) => r.id));
-  const tablesKey = tables.map((q) => q.dataUpdatedAt).join(',');
-  const tablesReady = tables.every((q) => q.data);
-  // Rebuilt only when a run's tables arrive, so the chart is not redrawn on every render.
-  const monthlySeries = useMemo(() => (tablesReady ? tables.map((q) => q.data!) : null), [tablesKey, tablesReady]);
-  const yearlyByRun = useMemo(() => new Map(tables.flatMap((q) => (q.data ? [[q.data.runId, q.data.hoursByYear] as const] : []))), [tablesKey]);
+  // `tables` keeps its identity until a run's tables arrive, so the chart is not redrawn on every render.
+  const monthlySeries = useMemo(() => (tables.every((t) => t) ? tables.map((t) => t!) : null), [tables]);
+  const yearlyByRun = useMemo(() => new Map(tables.flatMap((t) => (t ? [[t.runId, t.hoursByYear] as const] : []))), [tables]);
   const anyMultiYear = [...yearlyByRun.values()].some((years) => years.length > 1);
 
   function update(runs: number[], baseline: number | null) {

@@ -54,7 +54,8 @@ export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { p
   const revoke = useRevokeShareLink(projectId);
   const [title, setTitle] = useState(defaultTitle);
   const [audience, setAudience] = useState<'members' | 'public'>('members');
-  const nowMs = Date.now();
+  // The clock is read once, when the panel opens: the date box's default and bounds must not move between renders.
+  const [nowMs] = useState(() => Date.now());
   const [until, setUntil] = useState(isoDay(nowMs + 14 * day));
   const [made, setMade] = useState<string | null>(null);
   const [copied, setCopied] = useState(false);

@@ -18,7 +18,10 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
   disabled?: boolean;
 }) {
   const { unitSystem } = useUnitSystem();
-  const { field: input, fieldState } = useController({ control, name: field.path as Path<T> });
+  const {
+    field: { ref: inputRef, value, onChange, onBlur },
+    fieldState,
+  } = useController({ control, name: field.path as Path<T> });
   const [draft, setDraft] = useState<string | null>(null);
   const id = useId();
   const unit = fieldUnitLabel(field.unit, unitSystem);
@@ -33,7 +36,7 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
       </label>
       <input
         id={id}
-        ref={input.ref}
+        ref={inputRef}
         name={field.path}
         inputMode="decimal"
         disabled={disabled}
@@ -42,15 +45,15 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
         className={`num w-full rounded border bg-panel px-2 py-1 text-right text-sm disabled:bg-paper disabled:text-ink-soft ${
           message ? 'border-signal-bad' : 'border-rule'
         }`}
-        value={draft ?? inputText(field.unit, unitSystem, input.value as number)}
-        onFocus={() => setDraft(inputText(field.unit, unitSystem, input.value as number))}
+        value={draft ?? inputText(field.unit, unitSystem, value as number)}
+        onFocus={() => setDraft(inputText(field.unit, unitSystem, value as number))}
         onChange={(e) => {
           setDraft(e.target.value);
-          input.onChange(parseInputText(field.unit, unitSystem, e.target.value));
+          onChange(parseInputText(field.unit, unitSystem, e.target.value));
         }}
         onBlur={() => {
           setDraft(null);
-          input.onBlur();
+          onBlur();
         }}
       />
       <span className="text-xs text-ink-soft">{unit}</span>

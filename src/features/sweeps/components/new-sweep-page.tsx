@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
@@ -35,14 +35,14 @@ export function NewSweepPage() {
   const file = files.data?.climateFiles.find((f) => f.id === fileId) ?? files.data?.climateFiles[0];
 
   // A new base scenario keeps the chosen inputs where they still apply, otherwise starts from the first that does.
-  useEffect(() => {
-    if (!base) return;
+  // Adjusted while rendering (React's pattern for state that follows a prop), not in an effect that renders twice.
+  const [axesBase, setAxesBase] = useState<typeof base | undefined>(undefined);
+  if (base && base !== axesBase) {
+    setAxesBase(base);
     const offered = applicableInputs(base.scenario);
-    setAxes((current) => {
-      const kept = current.filter((a) => offered.includes(a.input));
-      return kept.length ? kept : [draftFor(offered[0])];
-    });
-  }, [base]);
+    const kept = axes.filter((a) => offered.includes(a.input));
+    setAxes(kept.length ? kept : [draftFor(offered[0])]);
+  }
 
   const spec: SweepSpecInput | null = base && file ? { scenarioId: base.id, climateFileId: file.id, axes: axes.map(specAxis), ...(name.trim() ? { name: name.trim() } : {}) } : null;
   // Checked as the server will check it, on every edit: 200 points parse in well under a frame.
