@@ -72,12 +72,17 @@ function checkGrid(grid: StateGrid): void {
   if (!(grid.humidityRatioMin >= 0)) throw new RangeError(`humidityRatioMin must be 0 or above (got ${grid.humidityRatioMin})`);
 }
 
-/**
- * The design's region at the centre of every grid cell at pressurePa: each centre is classified as an hour
- * by classifyHours (wet-bulb from ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 33/35 through bulkStates).
- * Supersaturated centres are REGION.none.
- */
-export function operatingRegionGrid(design: DesignForRegions, grid: StateGrid, pressurePa: number): OperatingRegionGrid {
+/** The moist-air state at every cell centre at one pressure: what the classifier reads. Depends on the grid only, so a chart computes it once and reuses it while the design changes. */
+export interface GridStates extends StateGrid {
+  pressurePa: number;
+  dryBulbC: Float64Array;
+  humidityRatio: Float64Array;
+  /** NaN for a supersaturated centre. */
+  wetBulbC: Float64Array;
+}
+
+/** Every cell centre's state at pressurePa (wet-bulb by ASHRAE Handbook—Fundamentals 2017 ch. 1 eq. 33/35 through bulkStates). */
+export function gridStates(grid: StateGrid, pressurePa: number): GridStates {
   checkGrid(grid);
   const { nx, ny } = grid;
   const n = nx * ny;
@@ -91,10 +96,27 @@ export function operatingRegionGrid(design: DesignForRegions, grid: StateGrid, p
     }
   }
   const states = bulkStates({ dryBulbC, humidity: { kind: 'humidity-ratio-kgkg', values: humidityRatio }, pressurePa });
-  const c = classifyHours(design.system, design.limits, { dryBulbC, wetBulbC: states.wetBulbC, humidityRatio, pressurePa }, design.plant);
+  return { dryBulbMinC: grid.dryBulbMinC, dryBulbStepC: grid.dryBulbStepC, nx, humidityRatioMin: grid.humidityRatioMin, humidityRatioStep: grid.humidityRatioStep, ny, pressurePa, dryBulbC, humidityRatio, wetBulbC: states.wetBulbC };
+}
+
+/**
+ * The design's region at the centre of every grid cell: each centre classified as an hour by classifyHours at
+ * the grid's pressure. Supersaturated centres are REGION.none. Pass a StateGrid and a pressure, or GridStates
+ * already computed for them (the wet-bulb solve is most of the time, and it does not depend on the design).
+ */
+export function operatingRegionGrid(design: DesignForRegions, grid: StateGrid | GridStates, pressurePa?: number): OperatingRegionGrid {
+  const states = 'wetBulbC' in grid && (pressurePa === undefined || pressurePa === grid.pressurePa) ? grid : gridStates(grid, requirePressure(pressurePa));
+  const n = states.nx * states.ny;
+  const c = classifyHours(design.system, design.limits, { dryBulbC: states.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa: states.pressurePa }, design.plant);
   const regions = new Uint8Array(n);
   for (let k = 0; k < n; k++) regions[k] = regionOfHour(c.modes[k], c.humidified[k], c.mechanicalFraction[k]);
-  return { ...grid, pressurePa, regions };
+  const { dryBulbMinC, dryBulbStepC, nx, humidityRatioMin, humidityRatioStep, ny } = states;
+  return { dryBulbMinC, dryBulbStepC, nx, humidityRatioMin, humidityRatioStep, ny, pressurePa: states.pressurePa, regions };
+}
+
+function requirePressure(pressurePa: number | undefined): number {
+  if (pressurePa === undefined) throw new RangeError('pressurePa is needed with a StateGrid');
+  return pressurePa;
 }
 
 /** Hours in each cell and, per cell, how many of them ran in each region (REGION_KEYS order), plus the uncounted. */

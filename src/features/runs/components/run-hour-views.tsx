@@ -9,6 +9,7 @@ import { useClimateHours } from '../api/get-climate-hours';
 import type { RunRecord } from '../api/get-run';
 import { useRunHours } from '../api/get-run-hours';
 import { climateStates } from '../utils/climate-states';
+import { designAtSite } from '../../../../shared/scenario/run';
 import { BinTablePanel } from './bin-table-panel';
 
 /**
@@ -23,10 +24,16 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   const states = useMemo(() => (climate.data ? climateStates(climate.data, run.climate.elevationM) : null), [climate.data, run.climate.elevationM]);
   const modes = useMemo(() => (hours.data ? Uint8Array.from(hours.data.modes) : null), [hours.data]);
   const matched = states && modes && modes.length === states.dryBulbC.length;
+  const mechanicalFraction = useMemo(() => (hours.data ? Float64Array.from(hours.data.mechanicalFraction) : null), [hours.data]);
   const chartHours = useMemo(
-    () => (matched ? { dryBulbC: states.dryBulbC, humidityRatio: states.humidityRatio, modes } : null),
-    [matched, states, modes],
+    () => (matched && mechanicalFraction ? { dryBulbC: states.dryBulbC, humidityRatio: states.humidityRatio, modes, mechanicalFraction } : null),
+    [matched, states, modes, mechanicalFraction],
   );
+  // The design as run: its limits derated as the run derated them, its fan heat as the run derived it.
+  const design = useMemo(() => {
+    const atSite = designAtSite(run.scenario, results.site.elevationM);
+    return { ...atSite, limits: { ...atSite.limits, dryBulbMaxC: results.envelope.dryBulbMaxC }, plant: { fanHeatK: results.fanHeatK } };
+  }, [run.scenario, results.site.elevationM, results.envelope.dryBulbMaxC, results.fanHeatK]);
   const { unitSystem } = useUnitSystem();
   const envelopes = useMemo(
     () => [
@@ -79,11 +86,12 @@ export function RunHourViews({ run }: { run: RunRecord }) {
       <Panel title="Modes by day and hour">
         <CarpetPlot timestampsMs={climate.data.timestampsMs} values={modes} kind="mode" utcOffsetMinutes={run.climate.utcOffsetMinutes} />
       </Panel>
-      <Panel title="Hours on the moist-air chart">
+      <Panel title="The design on the moist-air chart">
         <p className="mb-2 text-xs text-ink-soft">
-          Each outdoor hour coloured by its mode, at the site's pressure; the envelope as run and the supply setpoint between its moisture limits.
+          Where the scenario as run cools freely, with adiabatic assist or with compressors, at the site's pressure; the site's hours shaded over it; the envelope as
+          run and the supply setpoint between its moisture limits.
         </p>
-        <MoistAirChart pressurePa={states.sitePressurePa} hours={chartHours} display="points" envelopes={envelopes} markers={markers} />
+        <MoistAirChart pressurePa={states.sitePressurePa} hours={chartHours} design={design} envelopes={envelopes} markers={markers} />
       </Panel>
       <Panel title="Dry-bulb bins">
         <BinTablePanel modes={modes} dryBulbC={states.dryBulbC} wetBulbC={states.wetBulbC} fileStem={stem} />

@@ -1,4 +1,5 @@
 import { bulkStates, hourlyPressurePa, type BulkState, type HumidityKind } from '../../../../shared/psychrometrics';
+import { toFloat64 } from '@/lib/climate-series';
 
 export interface ClimateColumns {
   humidityKind: HumidityKind;
@@ -13,24 +14,15 @@ export interface HourStates extends BulkState {
   sitePressurePa: number;
 }
 
-function column(values: ArrayLike<number | null>): Float64Array {
-  const out = new Float64Array(values.length);
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i];
-    out[i] = v === null ? Number.NaN : v;
-  }
-  return out;
-}
-
 /**
  * Each hour's full moist-air state from the climate file's columns, by the same engine the run used:
  * station pressure where the file has it, else the standard atmosphere at the site's elevation
  * (hourlyPressurePa, as a run does). Missing hours give NaN.
  */
 export function climateStates(columns: ClimateColumns, elevationM: number): HourStates {
-  const dryBulbC = column(columns.dryBulbC);
-  const humidity = { kind: columns.humidityKind, values: column(columns.humidity) };
-  const station = columns.pressurePa ? column(columns.pressurePa) : null;
+  const dryBulbC = toFloat64(columns.dryBulbC);
+  const humidity = { kind: columns.humidityKind, values: toFloat64(columns.humidity) };
+  const station = columns.pressurePa ? toFloat64(columns.pressurePa) : null;
   const pressure = hourlyPressurePa({ dryBulbC, humidity, pressurePa: station }, elevationM);
   let sitePressurePa = pressure.sitePressurePa;
   if (station) {
