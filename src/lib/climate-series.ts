@@ -12,6 +12,8 @@ export interface ClimateHoursJson {
   dryBulbC: Array<number | null>;
   humidity: Array<number | null>;
   pressurePa: Array<number | null> | null;
+  /** 0 measured, 1 filled, 2 missing */
+  flags?: number[];
 }
 
 export interface ChartSeries {
@@ -20,6 +22,10 @@ export interface ChartSeries {
   /** kg/kg dry air */
   humidityRatio: Float64Array;
   dewPointC: Float64Array;
+  wetBulbC: Float64Array;
+  /** Each hour's pressure, Pa (one number when the file has no station pressure), as a run takes it. */
+  pressurePa: Float64Array | number;
+  flags: Uint8Array | null;
   /** The chart's one pressure, Pa: the mean of the hours' pressures (station where given, else the standard atmosphere at the site). */
   chartPressurePa: number;
 }
@@ -44,5 +50,5 @@ export function chartSeries(hours: ClimateHoursJson, elevationM: number): ChartS
     for (let i = 0; i < pressurePa.length; i++) sum += pressurePa[i];
     chartPressurePa = sum / pressurePa.length;
   }
-  return { timestampsMs: Float64Array.from(hours.timestampsMs), dryBulbC, humidityRatio: state.humidityRatio, dewPointC: state.dewPointC, chartPressurePa };
+  return { timestampsMs: Float64Array.from(hours.timestampsMs), dryBulbC, humidityRatio: state.humidityRatio, dewPointC: state.dewPointC, wetBulbC: state.wetBulbC, pressurePa, flags: hours.flags ? Uint8Array.from(hours.flags) : null, chartPressurePa };
 }

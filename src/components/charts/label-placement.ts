@@ -31,9 +31,9 @@ export interface PlacedLabel<T> {
   box: LabelBox;
 }
 
-/** Approximate width of a label in the chart's 10–12 px sans face: 0.58 em per character. */
+/** Approximate width of a label in the chart's 10–12 px sans face: 0.6 em per character and a little room. */
 export function textWidthPx(text: string, fontPx: number): number {
-  return Math.ceil(text.length * fontPx * 0.58) + 2;
+  return Math.ceil(text.length * fontPx * 0.6) + 4;
 }
 
 const overlaps = (a: LabelBox, b: LabelBox): boolean => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;

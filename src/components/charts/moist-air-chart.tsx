@@ -68,10 +68,14 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
   const [chosenProjection, setProjection] = useState<ChartProjection>('dry-bulb-humidity-ratio');
   const projection = fixedProjection ?? chosenProjection;
 
-  const window = useMemo(
-    () => chartWindowFor(pressurePa, hours, envelopes.map((e) => e.limits), markers),
-    [pressurePa, hours, envelopes, markers],
+  const { dryBulbC, humidityRatio } = hours;
+  const fittedWindow = useMemo(
+    () => chartWindowFor(pressurePa, { dryBulbC, humidityRatio }, envelopes.map((e) => e.limits), markers),
+    [pressurePa, dryBulbC, humidityRatio, envelopes, markers],
   );
+  // Kept by value: a new design with the same window must not redo the grid's wet-bulbs.
+  const windowKey = JSON.stringify(fittedWindow);
+  const window = useMemo(() => fittedWindow, [windowKey]); // eslint-disable-line react-hooks/exhaustive-deps
   const regionGrid = useMemo(() => regionGridFor(window), [window]);
   // The cell states (wet-bulb solves) depend on the window only; a setpoint change re-runs the classifier alone.
   const cellStates = useMemo(() => (design ? gridStates(regionGrid, pressurePa) : null), [design !== null, regionGrid, pressurePa]); // eslint-disable-line react-hooks/exhaustive-deps
@@ -195,7 +199,12 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
         ],
       });
       const svg = (figure.tagName.toLowerCase() === 'svg' ? figure : figure.querySelector('svg')) as SVGSVGElement | null;
-      if (svg) scales.current = { x: figure.scale('x') as never, y: figure.scale('y') as never, svg };
+      if (svg) {
+        scales.current = { x: figure.scale('x') as never, y: figure.scale('y') as never, svg };
+        // Where the axes' domains sit, for tests and tools that point at a state: "x0 x1 y0 y1" display units → pixels.
+        svg.dataset.domains = [...domains.x, ...domains.y].join(' ');
+        svg.dataset.area = [m.left, widthPx - m.right, heightPx - m.bottom, m.top].join(' ');
+      }
       return figure;
     },
     [cells, compact, envelopes, markers, projection, regions, unitSystem, window],
@@ -256,7 +265,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
         {design ? 'Shaded: where the design runs in each region, from its own rules on a fine grid at this pressure. ' : ''}
         {hours.dryBulbC.length ? 'Hours: ink by how many fall in each cell. ' : ''}
         Lines: saturation (bold), relative humidity every 10 %, wet-bulb (dashed), enthalpy (dotted)
-        {projection === 'h-x' ? ', isotherms (grey, nearly level; 0 °C is exactly level)' : ''}. Point at the chart for a region’s rule and a cell’s hours.
+        {projection === 'h-x' ? ', isotherms (grey, nearly level; 0 °C is exactly level)' : ''}.
+        <span className="print:hidden"> Point at the chart for a region’s rule and a cell’s hours.</span>
       </p>
       {design && rules && compact && <RegionTable rules={rules} hours={regionHours} totalHours={hoursWithData} countedBy={cells?.totals ? 'modes' : 'grid'} />}
       {!compact && <MoistAirTable hours={hours} envelopes={envelopes} markers={markers} pressurePa={pressurePa} system={unitSystem} />}
@@ -391,6 +401,7 @@ function labelLayer(rows: Array<{ text: string; fill: string; weight: number; si
     t.setAttribute('x', String(r.left + 1));
     t.setAttribute('y', String(r.top + r.size));
     t.setAttribute('font-size', String(r.size));
+    t.setAttribute('text-anchor', 'start');
     t.setAttribute('font-weight', String(r.weight));
     t.setAttribute('fill', r.fill);
     t.setAttribute('stroke', '#ffffff');

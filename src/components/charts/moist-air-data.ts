@@ -33,6 +33,8 @@ export interface ChartHours {
   modes?: ArrayLike<number>;
   /** Share of the load on compressors per hour (tells partial from full mechanical hours). */
   mechanicalFraction?: ArrayLike<number>;
+  /** 1 for a humidified free-cooling hour. */
+  humidified?: ArrayLike<number>;
 }
 
 export interface ChartMarker {

@@ -40,8 +40,8 @@ export function RegionTable({ rules, hours, totalHours, countedBy }: RegionTable
                 </span>
                 {rules[key] && <span className="mt-0.5 block text-xs text-ink-soft">{rules[key]}</span>}
               </th>
-              <td className="num px-1 py-1 text-right">{n === null ? '…' : `${n.toLocaleString('en')} h`}</td>
-              <td className="num py-1 pl-1 text-right text-ink-soft">{n === null ? '' : totalHours ? `${((100 * n) / totalHours).toFixed(1)} %` : '–'}</td>
+              <td className="num whitespace-nowrap px-1 py-1 text-right">{n === null ? '…' : `${n.toLocaleString('en')} h`}</td>
+              <td className="num whitespace-nowrap py-1 pl-1 text-right text-ink-soft">{n === null ? '' : totalHours ? `${((100 * n) / totalHours).toFixed(1)} %` : '–'}</td>
             </tr>
           );
         })}

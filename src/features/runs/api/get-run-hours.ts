@@ -6,6 +6,8 @@ export interface RunHours {
   /** One mode code per hour of the climate file: 0 free, 1 adiabatic, 2 mechanical, 3 no data. */
   modes: number[];
   mechanicalFraction: number[];
+  /** 1 for a humidified free-cooling hour; null for runs made before engine 2.0.0. */
+  humidified: number[] | null;
 }
 
 export const getRunHours = (projectId: number, runId: number) => apiFetch<RunHours>(`/projects/${projectId}/runs/${runId}/hours`);

@@ -24,10 +24,18 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   const states = useMemo(() => (climate.data ? climateStates(climate.data, run.climate.elevationM) : null), [climate.data, run.climate.elevationM]);
   const modes = useMemo(() => (hours.data ? Uint8Array.from(hours.data.modes) : null), [hours.data]);
   const matched = states && modes && modes.length === states.dryBulbC.length;
-  const mechanicalFraction = useMemo(() => (hours.data ? Float64Array.from(hours.data.mechanicalFraction) : null), [hours.data]);
   const chartHours = useMemo(
-    () => (matched && mechanicalFraction ? { dryBulbC: states.dryBulbC, humidityRatio: states.humidityRatio, modes, mechanicalFraction } : null),
-    [matched, states, modes, mechanicalFraction],
+    () =>
+      matched && hours.data
+        ? {
+            dryBulbC: states.dryBulbC,
+            humidityRatio: states.humidityRatio,
+            modes,
+            mechanicalFraction: Float64Array.from(hours.data.mechanicalFraction),
+            humidified: hours.data.humidified ? Uint8Array.from(hours.data.humidified) : undefined,
+          }
+        : null,
+    [matched, states, modes, hours.data],
   );
   // The design as run: its limits derated as the run derated them, its fan heat as the run derived it.
   const design = useMemo(() => {

@@ -1,5 +1,6 @@
 import { useMemo, useState } from 'react';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
+import { classifyHours } from '../../../../shared/scenario/classify';
 import { designAtSite } from '../../../../shared/scenario/run';
 import { scenarioSchema, type Scenario } from '../../../../shared/scenario/schema';
 import { usePreviewClimate } from '../api/get-preview-climate';
@@ -20,7 +21,13 @@ export function DesignChartPreview({ projectId, climateFileId, values }: { proje
   const elevationM = climate.data?.elevationM;
   const design = useMemo(() => (lastValid && elevationM !== undefined ? designAtSite(lastValid, elevationM) : null), [lastValid, elevationM]);
   const series = climate.data?.series;
-  const hours = useMemo(() => (series ? { dryBulbC: series.dryBulbC, humidityRatio: series.humidityRatio } : null), [series]);
+  // Every hour of the file classified by the design as it stands (the engine's classifier at each hour's own
+  // pressure), so the table and the hover count hours as a run would.
+  const hours = useMemo(() => {
+    if (!series || !design) return null;
+    const c = classifyHours(design.system, design.limits, series, design.plant);
+    return { dryBulbC: series.dryBulbC, humidityRatio: series.humidityRatio, modes: c.modes, mechanicalFraction: c.mechanicalFraction, humidified: c.humidified };
+  }, [series, design]);
   const envelopes = useMemo(() => (design ? [{ label: 'Envelope', limits: design.limits }] : []), [design]);
   const markers = useMemo(() => [] as never[], []);
 
