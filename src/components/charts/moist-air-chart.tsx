@@ -353,15 +353,15 @@ interface LayerArgs {
   cells: CellHours | null;
 }
 
-/** The regions and density painted on a canvas at up to 2 device pixels per CSS pixel, as one SVG image. */
+/** The regions and density painted on a canvas, one pixel per CSS pixel, as one SVG image drawn without smoothing. */
 function layerImage(sc: InvertibleScales, a: LayerArgs): SVGElement {
   const ns = 'http://www.w3.org/2000/svg';
   const image = document.createElementNS(ns, 'image');
   const plotW = a.widthPx - a.m.left - a.m.right;
   const plotH = a.heightPx - a.m.top - a.m.bottom;
-  const dpr = Math.min(2, Math.max(1, globalThis.devicePixelRatio || 1));
-  const w = Math.round(plotW * dpr);
-  const h = Math.round(plotH * dpr);
+  // One canvas pixel per CSS pixel: the cells are many pixels wide, and this keeps a repaint cheap (npm run bench).
+  const w = Math.round(plotW);
+  const h = Math.round(plotH);
   const canvas = document.createElement('canvas');
   canvas.width = w;
   canvas.height = h;
@@ -370,14 +370,14 @@ function layerImage(sc: InvertibleScales, a: LayerArgs): SVGElement {
   const pixels = paintLayer({
     widthPx: w,
     heightPx: h,
-    xAt: (i) => sc.x.invert(a.m.left + (i + 0.5) / dpr),
-    yAt: (j) => sc.y.invert(a.m.top + (j + 0.5) / dpr),
+    xAt: (i) => sc.x.invert(a.m.left + i + 0.5),
+    yAt: (j) => sc.y.invert(a.m.top + j + 0.5),
     projection: a.projection,
     units: a.system,
     window: a.window,
     regions: a.regions,
     cells: a.cells,
-    gapPx: dpr,
+    gapPx: 1,
   });
   context.putImageData(new ImageData(pixels as unknown as Uint8ClampedArray<ArrayBuffer>, w, h), 0, 0);
   image.setAttribute('href', canvas.toDataURL('image/png'));
@@ -386,6 +386,8 @@ function layerImage(sc: InvertibleScales, a: LayerArgs): SVGElement {
   image.setAttribute('width', String(plotW));
   image.setAttribute('height', String(plotH));
   image.setAttribute('preserveAspectRatio', 'none');
+  image.setAttribute('image-rendering', 'pixelated');
+  image.style.imageRendering = 'pixelated';
   image.setAttribute('aria-hidden', 'true');
   return image;
 }

@@ -4,9 +4,9 @@
  * moist-air state in either projection, and the painting of regions and hour density into RGBA pixels. The
  * pixel count depends on the chart's size only, never on the number of hours.
  */
-import { saturationHumidityRatio, type ChartProjection, type ChartWindow } from '../../../shared/psychrometrics';
+import { dewPointFromHumidityRatio, saturationHumidityRatio, type ChartProjection, type ChartWindow } from '../../../shared/psychrometrics';
 import { CP_DRY_AIR, CP_VAPOUR } from '../../../shared/psychrometrics/constants';
-import { cellOf, REGION, REGION_KEYS, type CellHours, type OperatingRegionGrid, type StateGrid } from '../../../shared/scenario/operating-regions';
+import { REGION, REGION_KEYS, type CellHours, type OperatingRegionGrid, type StateGrid } from '../../../shared/scenario/operating-regions';
 import { fromDisplay, toDisplay } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { densityInk, regionTints } from './region-words';
@@ -72,73 +72,100 @@ export interface LayerInput {
 /**
  * RGBA pixels of the layer: the region's tint under each state (white where the design is not given, bare
  * above saturation), and over it each hour cell shaded in the neutral ink by the square root of its share of the
- * fullest cell.
+ * fullest cell. Display coordinates are linear in dry-bulb and humidity ratio along the axes, so each column and
+ * row is converted once and the loop over pixels only looks up cells.
  */
 export function paintLayer(input: LayerInput): Uint8ClampedArray {
   const { widthPx, heightPx, xAt, yAt, projection, units, window, regions, cells, gapPx } = input;
   const out = new Uint8ClampedArray(widthPx * heightPx * 4);
+  const hx = projection === 'h-x';
   const xs = Float64Array.from({ length: widthPx }, (_, i) => xAt(i));
   const ys = Float64Array.from({ length: heightPx }, (_, j) => yAt(j));
-  // Saturation humidity ratio every 0.1 K across the window, read by linear interpolation per pixel.
-  const satStepC = 0.1;
-  const satFromC = window.dryBulbMinC - 1;
-  const sat = Float64Array.from({ length: Math.ceil((window.dryBulbMaxC + 2 - satFromC) / satStepC) + 1 }, (_, k) => {
+  // Per column: dry-bulb (°C) in the dry-bulb projection, humidity ratio (kg/kg) in h–x; per row the other one
+  // (in h–x the row gives the ordinate in °C, and t = 1.006·y / (1.006 + 1.86·W), ASHRAE 2017 ch. 1 eq. 32).
+  const col = Float64Array.from(xs, (x) => (hx ? fromDisplay('humidityRatio', units, x) : fromDisplay('temperature', units, x)));
+  const row = Float64Array.from(ys, (y) => (hx ? fromDisplay('temperature', units, y) : fromDisplay('humidityRatio', units, y)));
+  // Saturation per column: the humidity ratio at saturation (dry-bulb projection) or the dew point of the column's W (h–x).
+  const saturation = Float64Array.from(col, (v) => {
     try {
-      return saturationHumidityRatio(satFromC + k * satStepC, window.pressurePa);
+      if (hx) return v > 0 ? dewPointFromHumidityRatio(v, window.pressurePa) : Number.NEGATIVE_INFINITY;
+      return saturationHumidityRatio(v, window.pressurePa);
     } catch {
-      return Number.POSITIVE_INFINITY;
+      return hx ? Number.POSITIVE_INFINITY : Number.NEGATIVE_INFINITY;
     }
   });
-  const tints = REGION_KEYS.map((key) => regionTints[key]);
+  const hxFactor = Float64Array.from(col, (w) => CP_DRY_AIR / (CP_DRY_AIR + CP_VAPOUR * w));
+  // Every colour a pixel can take, packed as RGBA bytes in one 32-bit word (little-endian): the white ground or a
+  // region's tint (6 bases), each under 65 levels of ink.
+  const bases: Array<[number, number, number]> = [[255, 255, 255], ...REGION_KEYS.map((key) => regionTints[key])];
+  const levels = 64;
+  const palette = new Uint32Array(bases.length * (levels + 1));
+  bases.forEach(([r, g, b], k) => {
+    for (let level = 0; level <= levels; level++) {
+      const a = level / levels;
+      const mix = (c: number, ink: number) => Math.round(c + (ink - c) * a);
+      palette[k * (levels + 1) + level] = ((255 << 24) | (mix(b, densityInk[2]) << 16) | (mix(g, densityInk[1]) << 8) | mix(r, densityInk[0])) >>> 0;
+    }
+  });
   const maxHours = cells?.maxHours ?? 0;
-  const alphaOf = new Float64Array(maxHours + 1);
-  for (let n = 1; n <= maxHours; n++) alphaOf[n] = 0.12 + 0.76 * Math.sqrt(n / maxHours);
+  const levelOf = new Uint8Array(maxHours + 1);
+  for (let n = 1; n <= maxHours; n++) levelOf[n] = Math.round(levels * (0.12 + 0.76 * Math.sqrt(n / maxHours)));
   // The gap between hour cells, from device pixels to K and kg/kg (in h–x the ordinate reads as dry-bulb).
   const perPxX = Math.abs(xs[widthPx - 1] - xs[0]) / Math.max(1, widthPx - 1);
   const perPxY = Math.abs(ys[heightPx - 1] - ys[0]) / Math.max(1, heightPx - 1);
   const kelvinPerShown = 1 / (toDisplay('temperature', units, 1) - toDisplay('temperature', units, 0));
   const kgPerShown = 1 / toDisplay('humidityRatio', units, 1);
-  const gapC = gapPx * (projection === 'h-x' ? perPxY : perPxX) * kelvinPerShown;
-  const gapKgPerKg = gapPx * (projection === 'h-x' ? perPxX : perPxY) * kgPerShown;
-  const [ir, ig, ib] = densityInk;
+  const gapC = gapPx * (hx ? perPxY : perPxX) * kelvinPerShown;
+  const gapKgPerKg = gapPx * (hx ? perPxX : perPxY) * kgPerShown;
+  const rg = regions;
+  const cg = cells && maxHours > 0 ? cells : null;
+  const out32 = new Uint32Array(out.buffer);
+  // Cell indices of whichever coordinate a column or row fixes (−1 outside the grid, or in the gap for hour cells):
+  // dry-bulb per column in the dry-bulb projection, humidity ratio per column in h–x; the other per row.
+  const regionT = rg ? (v: number) => indexIn(v, rg.dryBulbMinC, rg.dryBulbStepC, rg.nx, 0) : () => -1;
+  const regionW = rg ? (v: number) => indexIn(v, rg.humidityRatioMin, rg.humidityRatioStep, rg.ny, 0) : () => -1;
+  const cellT = cg ? (v: number) => indexIn(v, cg.dryBulbMinC, cg.dryBulbStepC, cg.nx, gapC) : () => -1;
+  const cellW = cg ? (v: number) => indexIn(v, cg.humidityRatioMin, cg.humidityRatioStep, cg.ny, gapKgPerKg) : () => -1;
+  const colRegion = Int32Array.from(col, hx ? regionW : regionT);
+  const colCell = Int32Array.from(col, hx ? cellW : cellT);
+  const rowRegion = Int32Array.from(row, hx ? () => -1 : regionW);
+  const rowCell = Int32Array.from(row, hx ? () => -1 : cellW);
+  const stride = levels + 1;
 
   for (let j = 0; j < heightPx; j++) {
+    const rowOffset = j * widthPx;
     for (let i = 0; i < widthPx; i++) {
-      const { dryBulbC: t, humidityRatio: w } = chartXYToState(xs[i], ys[j], projection, units);
-      const s = (t - satFromC) / satStepC;
-      const k = Math.floor(s);
-      if (!(w >= 0) || !(k >= 0 && k < sat.length - 1) || w > sat[k] + (sat[k + 1] - sat[k]) * (s - k)) continue;
-      let r = 255;
-      let g = 255;
-      let b = 255;
-      if (regions) {
-        const cell = cellOf(regions, t, w);
-        const code = cell < 0 ? REGION.none : regions.regions[cell];
-        if (code !== REGION.none) [r, g, b] = tints[code];
+      let ri: number;
+      let rj: number;
+      let ci: number;
+      let cj: number;
+      if (hx) {
+        const t = row[j] * hxFactor[i];
+        if (!(col[i] >= 0) || t < saturation[i]) continue;
+        ri = regionT(t);
+        rj = colRegion[i];
+        ci = cellT(t);
+        cj = colCell[i];
+      } else {
+        if (!(row[j] >= 0) || row[j] > saturation[i]) continue;
+        ri = colRegion[i];
+        rj = rowRegion[j];
+        ci = colCell[i];
+        cj = rowCell[j];
       }
-      if (cells && maxHours > 0) {
-        const cell = cellOf(cells, t, w);
-        const n = cell < 0 ? 0 : cells.hours[cell];
-        if (n > 0 && !inGap(cells, t, w, gapC, gapKgPerKg)) {
-          const a = alphaOf[n];
-          r += (ir - r) * a;
-          g += (ig - g) * a;
-          b += (ib - b) * a;
-        }
-      }
-      const p = (j * widthPx + i) * 4;
-      out[p] = r;
-      out[p + 1] = g;
-      out[p + 2] = b;
-      out[p + 3] = 255;
+      const code = ri >= 0 && rj >= 0 ? rg!.regions[rj * rg!.nx + ri] : REGION.none;
+      const base = code === REGION.none ? 0 : code + 1;
+      const level = ci >= 0 && cj >= 0 ? levelOf[cg!.hours[cj * cg!.nx + ci]] : 0;
+      out32[rowOffset + i] = palette[base * stride + level];
     }
   }
   return out;
 }
 
-/** Whether a state lies within the gap (K, kg/kg) at its cell's lower or left edge. */
-function inGap(grid: StateGrid, t: number, w: number, gapC: number, gapKgPerKg: number): boolean {
-  const ft = (t - grid.dryBulbMinC) / grid.dryBulbStepC;
-  const fw = (w - grid.humidityRatioMin) / grid.humidityRatioStep;
-  return (ft - Math.floor(ft)) * grid.dryBulbStepC < gapC || (fw - Math.floor(fw)) * grid.humidityRatioStep < gapKgPerKg;
+/** The cell index of v on an axis from `min` in steps of `step` (n cells); −1 outside, or within `gap` of the cell's lower edge. */
+function indexIn(v: number, min: number, step: number, n: number, gap: number): number {
+  const f = (v - min) / step;
+  const k = Math.floor(f);
+  if (!(k >= 0 && k < n)) return -1;
+  return (f - k) * step < gap ? -1 : k;
 }
