@@ -1,4 +1,11 @@
-import { saturationHumidityRatio, type ChartProjection } from '../../../shared/psychrometrics';
+import {
+  dewPointFromHumidityRatio,
+  enthalpyKJPerKg,
+  rhPctFromHumidityRatio,
+  saturationHumidityRatio,
+  wetBulbFromHumidityRatio,
+  type ChartProjection,
+} from '../../../shared/psychrometrics';
 import { cellOf, REGION, REGION_KEYS, type CellHours, type OperatingRegionGrid, type RegionKey } from '../../../shared/scenario/operating-regions';
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
@@ -9,6 +16,11 @@ import { regionNames, regionTintCss } from './region-words';
 export interface HoverPoint {
   dryBulbC: number;
   humidityRatio: number;
+  /** The pointed state's other properties at the chart's pressure (NaN where undefined, as for bone-dry air's dew point). */
+  rhPct: number;
+  wetBulbC: number;
+  dewPointC: number;
+  enthalpyKJPerKg: number;
   region: RegionKey | null;
   cell: {
     dryBulbFromC: number;
@@ -72,7 +84,23 @@ export function hoverAt(input: {
       };
     }
   }
-  return { dryBulbC, humidityRatio, region, cell };
+  const safe = (f: () => number) => {
+    try {
+      return f();
+    } catch {
+      return Number.NaN;
+    }
+  };
+  return {
+    dryBulbC,
+    humidityRatio,
+    rhPct: safe(() => rhPctFromHumidityRatio(dryBulbC, humidityRatio, pressurePa)),
+    wetBulbC: safe(() => wetBulbFromHumidityRatio(dryBulbC, humidityRatio, pressurePa)),
+    dewPointC: safe(() => dewPointFromHumidityRatio(humidityRatio, pressurePa)),
+    enthalpyKJPerKg: enthalpyKJPerKg(dryBulbC, humidityRatio),
+    region,
+    cell,
+  };
 }
 
 /** The hover card: the region's name and rule, then the cell's hours and how the run split them. */
@@ -89,6 +117,10 @@ export function ChartHover({ hover, rules, units }: { hover: HoverPoint; rules: 
     >
       <p className="num text-ink-soft">
         {formatQuantity('temperature', units, hover.dryBulbC)} · {formatQuantity('humidityRatio', units, hover.humidityRatio)}
+      </p>
+      <p className="num text-ink-soft">
+        RH {Number.isFinite(hover.rhPct) ? hover.rhPct.toFixed(0) : '–'} % · Wet-bulb {formatQuantity('temperature', units, hover.wetBulbC)} · Dew point{' '}
+        {formatQuantity('temperature', units, hover.dewPointC)} · h {formatQuantity('enthalpy', units, hover.enthalpyKJPerKg)}
       </p>
       {hover.region && (
         <div className="mt-1" data-testid="hover-region">
