@@ -266,7 +266,7 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
         {hours.dryBulbC.length ? 'Hours: ink by how many fall in each cell. ' : ''}
         Lines: saturation (bold), relative humidity every 10 %, wet-bulb (dashed), enthalpy (dotted)
         {projection === 'h-x' ? ', isotherms (grey, nearly level; 0 °C is exactly level)' : ''}.
-        <span className="print:hidden"> Point at the chart for a region’s rule and a cell’s hours.</span>
+        <span className="print:hidden"> Point at the chart for {design ? 'a region’s rule, ' : ''}the state there{hours.dryBulbC.length ? ' and its cell’s hours' : ''}.</span>
       </p>
       {design && rules && compact && <RegionTable rules={rules} hours={regionHours} totalHours={hoursWithData} countedBy={cells?.totals ? 'modes' : 'grid'} />}
       {!compact && <MoistAirTable hours={hours} envelopes={envelopes} markers={markers} pressurePa={pressurePa} system={unitSystem} />}
