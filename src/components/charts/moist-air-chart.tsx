@@ -76,7 +76,7 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
   // Kept by value: a new design with the same window must not redo the grid's wet-bulbs.
   const windowKey = JSON.stringify(fittedWindow);
   const window = useMemo(() => fittedWindow, [windowKey]); // eslint-disable-line react-hooks/exhaustive-deps
-  const regionGrid = useMemo(() => regionGridFor(window), [window]);
+  const regionGrid = useMemo(() => regionGridFor(window, compact), [window, compact]);
   // The cell states (wet-bulb solves) depend on the window only; a setpoint change re-runs the classifier alone.
   const cellStates = useMemo(() => (design ? gridStates(regionGrid, pressurePa) : null), [design !== null, regionGrid, pressurePa]); // eslint-disable-line react-hooks/exhaustive-deps
   const regions = useMemo(() => (design && cellStates ? operatingRegionGrid(design, cellStates) : null), [design, cellStates]);

@@ -11,11 +11,14 @@ import { fromDisplay, toDisplay } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { densityInk, regionTints } from './region-words';
 
-/** The fine grid the classifier is evaluated on: about 0.25 K by 1/200 of the window's moisture, at most 320 × 200 cells. */
-export function regionGridFor(window: ChartWindow): StateGrid {
+/**
+ * The fine grid the classifier is evaluated on: about 0.25 K by 1/200 of the window's moisture, at most 320 × 200
+ * cells; a narrow chart (the editor's preview) takes half as many each way, still finer than its pixels.
+ */
+export function regionGridFor(window: ChartWindow, narrow = false): StateGrid {
   const span = window.dryBulbMaxC - window.dryBulbMinC;
-  const nx = Math.min(320, Math.ceil(span / 0.25));
-  const ny = 200;
+  const nx = Math.min(narrow ? 160 : 320, Math.ceil(span / (narrow ? 0.5 : 0.25)));
+  const ny = narrow ? 100 : 200;
   return { dryBulbMinC: window.dryBulbMinC, dryBulbStepC: span / nx, nx, humidityRatioMin: 0, humidityRatioStep: window.humidityRatioMax / ny, ny };
 }
 
