@@ -163,7 +163,10 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
       res.json({
         modeNames: MODE_NAMES,
         modes: Array.from(decodeUint8Column(hours.modes)),
-        mechanicalFraction: Array.from(fraction, (v) => Math.round(v * 1000) / 1000),
+        // Rounded to 0.001, but a share under 1 stays under 1: it tells a partial mechanical hour from a full one.
+        mechanicalFraction: Array.from(fraction, (v) => (v < 1 ? Math.min(0.999, Math.round(v * 1000) / 1000) : 1)),
+        /** 1 for a free-cooling hour whose evaporative stage only added moisture; null for runs made before engine 2.0.0. */
+        humidified: hours.humidified ? Array.from(decodeUint8Column(hours.humidified)) : null,
       });
     }),
 

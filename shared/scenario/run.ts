@@ -3,7 +3,7 @@
  * Pure and synchronous, so the worker task, the command line and the tests call the same function.
  */
 import { bulkStates, hourlyPressurePa, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
-import { classifyHours, moistureTargets, type HourClassification, type InletLimits } from './classify';
+import { classifyHours, moistureTargets, type ClassifierPlant, type HourClassification, type InletLimits } from './classify';
 import { hourlyEnergy, type HourlyEnergy } from './energy';
 import { deratedDryBulbMaxC } from './envelopes';
 import { designFanHeatK } from './fans';
@@ -66,13 +66,13 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   const sitePressurePa = standardPressurePa(elevationM);
   const { states, pressurePa, filledHours } = outdoorStates(series, elevationM);
   const { envelope, system } = scenario;
-  const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
-  const fanHeatK = designFanHeatK(scenario.energy.fanPowerFraction, system.itDeltaTK);
+  const { limits, plant } = designAtSite(scenario, elevationM);
+  const { fanHeatK } = plant;
   const classification = classifyHours(
     system,
     limits,
     { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa, flags: series.flags },
-    { fanHeatK },
+    plant,
   );
   const loadFraction = hourlyLoadFractions(scenario.energy.itLoadProfile, series.timestampsMs, options.utcOffsetMinutes);
   const energy = hourlyEnergy(
@@ -124,6 +124,16 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
     classification,
     energy,
   };
+}
+
+/**
+ * What the classifier needs of a scenario at a site: its system, the envelope with the dry-bulb maximum derated
+ * for the site's elevation, and the design fan heat. The one derivation for runs and the operating-region chart.
+ */
+export function designAtSite(scenario: Scenario, elevationM: number): { system: Scenario['system']; limits: InletLimits; plant: ClassifierPlant } {
+  const { envelope, system } = scenario;
+  const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
+  return { system, limits, plant: { fanHeatK: designFanHeatK(scenario.energy.fanPowerFraction, system.itDeltaTK) } };
 }
 
 /**

@@ -70,6 +70,9 @@ describe('an engineer running a scenario', () => {
     const hours = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hours`).set(asPerson(viewer)).expect(200);
     expect(hours.body.modes).toHaveLength(72);
     expect(hours.body.modeNames).toEqual(['free', 'adiabatic', 'mechanical', 'no_data']);
+    // One humidified flag per hour (the moist-air chart counts humidified free cooling as its own region); as many as the results count.
+    expect(hours.body.humidified).toHaveLength(72);
+    expect(hours.body.humidified.filter((v: number) => v === 1).length).toBe(res.body.run.results.hours.humidified ?? 0);
 
     const trail = t.db.select().from(auditEvents).all();
     expect(trail.find((e) => e.action === 'run.start')).toMatchObject({ actorId: engineer.id, target: `run ${runId}` });

@@ -95,14 +95,14 @@ describe('an engineer adding hourly weather to a project', () => {
 
     await page.getByRole('group', { name: 'Units' }).getByRole('button', { name: 'IP' }).click();
     await expect.poll(() => page.getByRole('heading', { name: 'Monthly dry-bulb and dew point (°F)' }).isVisible()).toBe(true);
-    // Hovering the chart shows the nearest hour's full state.
+    // Pointing at the chart gives the state there in full, and the hours of the cell it falls in.
     await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent()).toContain('gr/lb');
-    const cell = page.getByTestId('moist-air-chart').locator('g[aria-label="rect"] rect').nth(40);
-    await cell.scrollIntoViewIfNeeded();
-    const box = (await cell.boundingBox())!;
-    await page.mouse.move(box.x + 1, box.y + 1);
-    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
-    await expect.poll(() => page.getByTestId('moist-air-chart').innerText()).toContain('Wet-bulb');
+    const figure = page.getByTestId('moist-air-figure').locator('svg').first();
+    await figure.scrollIntoViewIfNeeded();
+    const box = (await figure.boundingBox())!;
+    await page.mouse.move(box.x + box.width * 0.35, box.y + box.height * 0.85);
+    await expect.poll(() => page.getByTestId('chart-hover').innerText()).toContain('Wet-bulb');
+    expect(await page.getByTestId('chart-hover').innerText()).toMatch(/°F/);
     await h.screenshot('climate-file-page-ip-hover');
     // The text alternatives, and the page on a laptop and on a wide monitor.
     for (const summary of await page.getByText('Table of the same figures').all()) await summary.click();

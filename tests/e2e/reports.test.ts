@@ -92,7 +92,10 @@ describe('the report of a run', () => {
     if (run.results.hours.mechanical > 0 && run.results.hours.mechanical <= 13) {
       expect(await page.getByTestId('report-mode-hours').innerText()).toMatch(/Mechanical\s+\d+\s+< 0\.1 %/);
     }
-    await chartsDrawn(page);
+    // The monthly chart, and the hours on the charts: the design on the moist-air chart and the modes by day and hour.
+    await page.getByTestId('report-hour-charts').waitFor({ timeout: 60_000 });
+    await chartsDrawn(page, { atLeast: 3, timeoutMs: 30_000 });
+    expect(await page.getByTestId('report-hour-charts').getByTestId('region-table').innerText()).toContain('Free cooling');
     await h.shot('report-run-si');
 
     // The button hands the page to the browser's print dialog (stubbed here: headless Chromium has none).
@@ -120,7 +123,7 @@ describe('the report of a run', () => {
     await h.shot('report-run-ip');
     await printed('report-run-ip');
     await h.useUnits('SI');
-  });
+  }, 180_000);
 
   it('offers the downloads on the report and the run page, with the server’s file names', async () => {
     const page = h.page;
@@ -172,7 +175,9 @@ describe('share links', () => {
     await page.getByTestId('report-title').waitFor();
     expect(await page.getByTestId('shared-note').innerText()).toContain('open to anyone with the link until');
     expect(await page.getByTestId('report-mode-hours').innerText()).toMatch(/All hours\s+26,280/);
-    await chartsDrawn(page);
+    // Signed out, the link still draws the hourly charts (their hours come through the link's own download).
+    await page.getByTestId('report-hour-charts').waitFor({ timeout: 60_000 });
+    await chartsDrawn(page, { atLeast: 3, timeoutMs: 30_000 });
     await h.shot('report-shared-public-si');
     expect(await printed('report-shared-public')).toBeGreaterThan(1);
 
@@ -189,7 +194,7 @@ describe('share links', () => {
     await page.getByTestId('shared-refused').waitFor();
     expect(await page.getByTestId('shared-refused').innerText()).toContain('This link was revoked');
     await h.shot('report-shared-revoked');
-  });
+  }, 150_000);
 
   it('a members-only link asks a signed-out reader to sign in, and opens for a member', async () => {
     const { path: linkPath } = await h.api<{ path: string }>(

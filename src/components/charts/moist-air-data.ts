@@ -31,6 +31,10 @@ export interface ChartHours {
   humidityRatio: ArrayLike<number>;
   /** 0 free cooling, 1 adiabatic assist, 2 mechanical, 3 no data */
   modes?: ArrayLike<number>;
+  /** Share of the load on compressors per hour (tells partial from full mechanical hours). */
+  mechanicalFraction?: ArrayLike<number>;
+  /** 1 for a humidified free-cooling hour. */
+  humidified?: ArrayLike<number>;
 }
 
 export interface ChartMarker {

@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { modeKeys, modeLabels } from '../../../shared/modes';
 import { formatCount, formatQuantity, unitOf } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
@@ -7,20 +7,22 @@ import { hoursInside, modeCodeAt, type ChartHours, type ChartMarker, type Envelo
 /** The text alternative of the moist-air chart: ranges of every quantity, hours per envelope and mode, the markers. */
 export function MoistAirTable({
   hours,
-  states,
   envelopes,
   markers,
   pressurePa,
   system,
 }: {
   hours: ChartHours;
-  states: ReturnType<typeof hourStates>;
   envelopes: Array<{ label: string; limits: EnvelopeLimitsInput }>;
   markers: ChartMarker[];
   pressurePa: number;
   system: UnitSystem;
 }) {
+  // Each hour's full state is computed only once the table is opened (a 30-year series is 262,800 wet-bulb solves).
+  const [open, setOpen] = useState(false);
   const stats = useMemo(() => {
+    if (!open) return null;
+    const states = hourStates(hours, pressurePa);
     const range = (a: ArrayLike<number>) => {
       let min = Infinity;
       let max = -Infinity;
@@ -47,7 +49,16 @@ export function MoistAirTable({
       inside: envelopes.map((e) => hoursInside(hours, states, e.limits)),
       modeHours,
     };
-  }, [hours, states, envelopes]);
+  }, [open, hours, pressurePa, envelopes]);
+  const total = hours.dryBulbC.length;
+  const summary = <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>;
+  if (!stats) {
+    return (
+      <details className="text-sm" onToggle={(e) => setOpen(e.currentTarget.open)}>
+        {summary}
+      </details>
+    );
+  }
   const rows: Array<[string, 'temperature' | 'humidityRatio' | 'enthalpy', { min: number; mean: number; max: number }]> = [
     ['Dry-bulb', 'temperature', stats.dryBulb],
     ['Humidity ratio', 'humidityRatio', stats.humidityRatio],
@@ -55,11 +66,10 @@ export function MoistAirTable({
     ['Wet-bulb', 'temperature', stats.wetBulb],
     ['Enthalpy', 'enthalpy', stats.enthalpy],
   ];
-  const total = hours.dryBulbC.length;
   const cell = 'px-2 py-0.5 text-right';
   return (
-    <details className="text-sm">
-      <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
+    <details className="text-sm" open onToggle={(e) => setOpen(e.currentTarget.open)}>
+      {summary}
       <div className="mt-2 grid gap-4 lg:grid-cols-2">
         <table className="num w-full text-xs">
           <caption className="pb-1 text-left font-sans text-ink-soft">

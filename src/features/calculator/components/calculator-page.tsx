@@ -128,7 +128,7 @@ export function CalculatorPage() {
         </div>
         <Panel title="On the moist-air chart">
           {outcome.ok ? (
-            <MoistAirChart pressurePa={outcome.state.pressurePa} hours={noHours} display="points" markers={markers} />
+            <MoistAirChart pressurePa={outcome.state.pressurePa} hours={noHours} markers={markers} />
           ) : (
             <p className="text-sm text-ink-soft">The point appears here once the inputs fix one state.</p>
           )}

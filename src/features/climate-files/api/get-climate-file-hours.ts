@@ -1,15 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { HumidityKind } from '../../../../shared/psychrometrics';
 import { apiFetch } from '@/lib/api-client';
+import type { ClimateHoursJson } from '@/lib/climate-series';
 import { climateFilesQueryKey } from './get-climate-files';
 
 /** The stored hourly series, SI; humidity in the unit of its kind (%, °C or kg/kg). */
-export interface ClimateFileHours {
-  humidityKind: HumidityKind;
-  timestampsMs: number[];
-  dryBulbC: Array<number | null>;
-  humidity: Array<number | null>;
-  pressurePa: Array<number | null> | null;
+export interface ClimateFileHours extends ClimateHoursJson {
   /** 0 measured, 1 filled, 2 missing */
   flags: number[];
 }

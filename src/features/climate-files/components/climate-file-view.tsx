@@ -10,7 +10,7 @@ import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { useClimateFile, type ClimateFileDetail } from '../api/get-climate-file';
 import { useClimateFileHours } from '../api/get-climate-file-hours';
-import { chartSeries } from '../lib/hours-series';
+import { chartSeries } from '@/lib/climate-series';
 import { formatBytes } from './progress-bar';
 import { DeleteClimateFile } from './delete-climate-file';
 import { DesignValues } from './design-values';
@@ -142,7 +142,7 @@ function Loaded({
 
       <Panel title="The hours on the moist-air chart">
         {chartHours ? (
-          <MoistAirChart pressurePa={summary.meanPressurePa} hours={chartHours} display="density" />
+          <MoistAirChart pressurePa={summary.meanPressurePa} hours={chartHours} />
         ) : (
           <div className="h-96 animate-pulse rounded bg-mist" aria-label="Loading the chart" />
         )}

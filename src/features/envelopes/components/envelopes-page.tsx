@@ -143,7 +143,7 @@ export function EnvelopesPage() {
             <p className="mb-2 text-xs text-ink-soft">
               Tick up to {maxDrawn} envelopes to draw them. Drawn at sea-level standard pressure; a site's own pressure shifts the moisture lines slightly.
             </p>
-            <MoistAirChart pressurePa={seaLevelPa} hours={noHours} display="points" envelopes={chartEnvelopes} />
+            <MoistAirChart pressurePa={seaLevelPa} hours={noHours} envelopes={chartEnvelopes} />
           </Panel>
         </div>
       </div>

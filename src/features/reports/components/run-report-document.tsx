@@ -10,6 +10,7 @@ import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
 import { dateTime, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
+import { ReportHourCharts } from './report-hour-charts';
 import { ReportSection, ReportSheet, SubHeading } from './report-layout';
 import { EnergyTable, ExcursionFacts, ModeHoursTable, MonthlyTable, WaterTable, YearTable } from './results-tables';
 import { runDisplayName } from '@/lib/sweep-value';
@@ -29,7 +30,7 @@ function Headline({ label, value, note }: { label: string; value: string; note?:
 const withPart = (shareText: string, part: number | null, words: string) => (part === null ? shareText : `${shareText} · ${hours(part)} ${words}`);
 
 /** The printable report of one run: what was asked, from what, what came out, how, and with which cautions. */
-export function RunReportDocument({ report, linkTitle }: { report: RunReportData; linkTitle?: string }) {
+export function RunReportDocument({ report, linkTitle, downloadBase }: { report: RunReportData; linkTitle?: string; downloadBase?: string }) {
   const { unitSystem } = useUnitSystem();
   const run = report.run;
   const r = run.results;
@@ -121,11 +122,17 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         </div>
       </ReportSection>
 
-      <ReportSection id="method" title="6. Method and sources" newPage>
+      {downloadBase && (
+        <ReportSection id="hours" title="6. The hours on the charts" newPage>
+          <ReportHourCharts run={run} downloadBase={downloadBase} />
+        </ReportSection>
+      )}
+
+      <ReportSection id="method" title={`${downloadBase ? 7 : 6}. Method and sources`} newPage>
         <MethodSection runs={[run]} />
       </ReportSection>
 
-      <ReportSection id="cautions" title="7. Cautions">
+      <ReportSection id="cautions" title={`${downloadBase ? 8 : 7}. Cautions`}>
         <ResultCautions systemKind={run.scenario.system.kind} evaporative={usesWater(run)} />
         <ModelLimits />
       </ReportSection>

@@ -29,7 +29,7 @@ export function RunReportPage() {
         share={role === 'owner' ? { open: sharing, toggle: () => setSharing((open) => !open) } : undefined}
       />
       {sharing && <ShareLinksPanel projectId={projectId} target="run" runIds={[runId]} defaultTitle={`${report.run.scenario.name}: run ${runId}`} />}
-      <RunReportDocument report={report} />
+      <RunReportDocument report={report} downloadBase={`/api/projects/${projectId}/runs/${runId}/downloads`} />
     </div>
   );
 }

@@ -59,7 +59,7 @@ export function SharedReportPage() {
         A read-only report shared from Tramontane
         {link.publicUntil ? `, open to anyone with the link until ${link.publicUntil.slice(0, 10)}` : ' with the members of its project'}.
       </p>
-      {report.kind === 'run' ? <RunReportDocument report={report} linkTitle={link.title} /> : <ComparisonReportDocument report={report} linkTitle={link.title} />}
+      {report.kind === 'run' ? <RunReportDocument report={report} linkTitle={link.title} downloadBase={base} /> : <ComparisonReportDocument report={report} linkTitle={link.title} />}
     </div>
   );
 }

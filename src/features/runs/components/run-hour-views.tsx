@@ -8,6 +8,7 @@ import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
 import { useRunHourColumns } from '../api/get-run-hour-columns';
+import { designAtSite } from '../../../../shared/scenario/run';
 import { BinTablePanel } from './bin-table-panel';
 
 /** The hourly views in the order they come in; each waits for the one before to be drawn. */
@@ -46,7 +47,15 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   const results = run.results!;
   const data = columns.data;
   const shown = useOneAfterAnother(!!data, VIEWS.length);
-  const chartHours = useMemo(() => (data ? { dryBulbC: data.dryBulbC, humidityRatio: data.humidityRatio, modes: data.modes } : null), [data]);
+  const chartHours = useMemo(
+    () => (data ? { dryBulbC: data.dryBulbC, humidityRatio: data.humidityRatio, modes: data.modes, mechanicalFraction: data.mechanicalFraction, humidified: data.humidified } : null),
+    [data],
+  );
+  // The design as run: its limits derated as the run derated them, its fan heat as the run derived it.
+  const design = useMemo(() => {
+    const atSite = designAtSite(run.scenario, results.site.elevationM);
+    return { ...atSite, limits: { ...atSite.limits, dryBulbMaxC: results.envelope.dryBulbMaxC }, plant: { fanHeatK: results.fanHeatK } };
+  }, [run.scenario, results.site.elevationM, results.envelope.dryBulbMaxC, results.fanHeatK]);
   const { unitSystem } = useUnitSystem();
   const envelopes = useMemo(
     () => [
@@ -96,13 +105,14 @@ export function RunHourViews({ run }: { run: RunRecord }) {
       <HourView title="Modes by day and hour" what="chart" shown={turn('carpet')} heightPx={320}>
         {() => <CarpetPlot timestampsMs={data!.timestampsMs} values={data!.modes} kind="mode" utcOffsetMinutes={run.climate.utcOffsetMinutes} />}
       </HourView>
-      <HourView title="Hours on the moist-air chart" what="chart" shown={turn('moist-air')} heightPx={560}>
+      <HourView title="The design on the moist-air chart" what="chart" shown={turn('moist-air')} heightPx={560}>
         {() => (
           <>
             <p className="mb-2 text-xs text-ink-soft">
-              Each outdoor hour coloured by its mode, at the site's pressure; the envelope as run and the supply setpoint between its moisture limits.
+              Where the scenario as run cools freely, with adiabatic assist or with compressors, at the site's pressure; the site's hours shaded over it; the envelope
+              as run and the supply setpoint between its moisture limits.
             </p>
-            <MoistAirChart pressurePa={data!.sitePressurePa} hours={chartHours!} display="points" envelopes={envelopes} markers={markers} />
+            <MoistAirChart pressurePa={data!.sitePressurePa} hours={chartHours!} design={design} envelopes={envelopes} markers={markers} />
           </>
         )}
       </HourView>

@@ -15,6 +15,7 @@ import { useDebouncedValue } from '../utils/use-debounced-value';
 import { useLeaveGuard } from '../utils/use-leave-guard';
 import { EnvelopePicker } from './envelope-picker';
 import { LoadProfileField } from './load-profile-field';
+import { DesignChartPreview } from './design-chart-preview';
 import { ModePreview } from './mode-preview';
 import { QuantityField } from './quantity-field';
 import { RunPanel } from './run-panel';
@@ -127,7 +128,7 @@ export function ScenarioForm({
         </Notice>
       )}
 
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_26rem]">
         <fieldset disabled={readOnly} className="min-w-0 space-y-4">
           <Panel title="Design">
             <div className="grid grid-cols-[minmax(11rem,15rem)_1fr] items-baseline gap-x-3 gap-y-2">
@@ -227,6 +228,11 @@ export function ScenarioForm({
                   onClimateFileChange={setPreviewFileId}
                 />
               )}
+            </Panel>
+          )}
+          {climateFiles.length > 0 && (
+            <Panel title="The design on the moist-air chart">
+              <DesignChartPreview projectId={projectId} climateFileId={chosenPreviewFile} values={values} />
             </Panel>
           )}
           {canEdit && (
