@@ -1,5 +1,6 @@
 import { Link, useParams } from 'react-router-dom';
 import { utcOffsetLabel } from '../../../../shared/time-zone';
+import { usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
@@ -44,7 +45,7 @@ export function RunPage() {
   }
   const run = query.data.run;
   const results = run.status === 'done' ? run.results : null;
-  const evaporative = run.scenario.system.evaporativeEffectiveness > 0 || (run.scenario.system.kind === 'water-side' && run.scenario.system.heatRejection === 'cooling-tower');
+  const evaporative = usesEvaporativeWater(run.scenario.system);
   return (
     <div className="space-y-4">
       <header className="flex flex-wrap items-end justify-between gap-3">

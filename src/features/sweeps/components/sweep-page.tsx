@@ -5,6 +5,7 @@ import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { useProjectRole } from '@/lib/projects';
 import { useUnitSystem } from '@/lib/unit-system';
 import { SWEEP_INPUTS, zeroMechanical, zeroMechanicalText } from '../../../../shared/sweep';
+import { usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
 import { useCancelSweep } from '../api/cancel-sweep';
 import { useDeleteSweep } from '../api/delete-sweep';
 import { useSweep, type SweepRecord } from '../api/get-sweep';
@@ -32,9 +33,7 @@ function AxisSummary({ axis }: { axis: SweepRecord['axes'][number] }) {
 function SweepCautions({ sweep }: { sweep: SweepRecord }) {
   const system = sweep.baseScenario.system;
   const evaporative =
-    system.evaporativeEffectiveness > 0 ||
-    sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness') ||
-    (system.kind === 'water-side' && system.heatRejection === 'cooling-tower');
+    usesEvaporativeWater(system) || sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness');
   return (
     <Notice tone="warn" title="Read these results as estimates">
       <ul className="list-disc space-y-0.5 pl-5">
