@@ -212,7 +212,11 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
       </ReportSection>
 
       <ReportSection id="cautions" title="8. Cautions">
-        <ResultCautions systemKind={runs.some((r) => r.scenario.system.kind === 'direct-air') ? 'direct-air' : runs[0].scenario.system.kind} evaporative={runs.some(usesWater)} />
+        <ResultCautions
+          systemKind={runs.some((r) => hallAirSystem(r.scenario.system).kind === 'direct-air') ? 'direct-air' : hallAirSystem(runs[0].scenario.system).kind}
+          evaporative={runs.some(usesWater)}
+          hybrid={runs.some((r) => r.scenario.system.kind === 'hybrid')}
+        />
         <ModelLimits />
       </ReportSection>
     </ReportSheet>

@@ -1,6 +1,6 @@
 import { Link, useParams } from 'react-router-dom';
 import { utcOffsetLabel } from '../../../../shared/time-zone';
-import { usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
+import { hallAirSystem, usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
@@ -9,6 +9,8 @@ import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { EnergyWaterCards } from './energy-water-cards';
+import { HeatReuseCard } from './heat-reuse-card';
+import { HybridLoopsPanel } from './hybrid-loops-panel';
 import { ModeHoursPanel } from './mode-hours-panel';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { RunHourViews } from './run-hour-views';
@@ -121,6 +123,8 @@ export function RunPage() {
             </Panel>
           </div>
           <EnergyWaterCards results={results} engineVersion={run.engineVersion} />
+          <HybridLoopsPanel results={results} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} engineVersion={run.engineVersion} />
+          {results.heatReuse && <HeatReuseCard reuse={results.heatReuse} />}
           {results.hoursByYear.length > 1 && (
             <Panel title="By calendar year">
               <YearTable years={results.hoursByYear} engineVersion={run.engineVersion} />
@@ -130,7 +134,7 @@ export function RunPage() {
           <Panel title="Inputs as run">
             <RunInputs run={run} />
           </Panel>
-          <ResultCautions systemKind={run.scenario.system.kind} evaporative={evaporative} />
+          <ResultCautions systemKind={hallAirSystem(run.scenario.system).kind} evaporative={evaporative} hybrid={run.scenario.system.kind === 'hybrid'} />
         </>
       )}
     </div>
