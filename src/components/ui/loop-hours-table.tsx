@@ -10,8 +10,8 @@ type Hours = Pick<ModeHours, 'free' | 'adiabatic' | 'mechanical' | 'noData' | 't
  */
 export function LoopHoursTable({ hall, liquid, air, liquidShare }: { hall: Hours; liquid: Hours; air: Hours; liquidShare: number }) {
   const columns = [
-    { key: 'liquid', title: `Liquid loop (${Math.round(liquidShare * 100)} %)`, hours: liquid },
-    { key: 'air', title: `Air loop (${Math.round((1 - liquidShare) * 100)} %)`, hours: air },
+    { key: 'liquid', title: `Liquid ${Math.round(liquidShare * 100)} %`, hours: liquid },
+    { key: 'air', title: `Air ${Math.round((1 - liquidShare) * 100)} %`, hours: air },
     { key: 'hall', title: 'Hall', hours: hall },
   ];
   return (
@@ -23,7 +23,7 @@ export function LoopHoursTable({ hall, liquid, air, liquidShare }: { hall: Hours
             Mode
           </th>
           {columns.map((c) => (
-            <th key={c.key} scope="col" className="py-1 text-right font-normal">
+            <th key={c.key} scope="col" className="py-1 pl-2 text-right font-normal whitespace-nowrap">
               {c.title}
             </th>
           ))}
@@ -37,7 +37,7 @@ export function LoopHoursTable({ hall, liquid, air, liquidShare }: { hall: Hours
               {modeLabels[mode]}
             </th>
             {columns.map((c) => (
-              <td key={c.key} className="num py-1 text-right" data-testid={`loop-${c.key}-${mode}`}>
+              <td key={c.key} className="num py-1 pl-2 text-right whitespace-nowrap" data-testid={`loop-${c.key}-${mode}`}>
                 {hoursOfMode(c.hours, mode).toLocaleString('en')} h
               </td>
             ))}

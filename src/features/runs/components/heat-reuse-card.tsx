@@ -27,6 +27,7 @@ export function HeatReuseCard({ reuse }: { reuse: HeatReuseResults }) {
           <Figure label={`Reused (${Math.round(reuse.reusedShare * 100)} % taken)`} value={mwh(reuse.reusedKwh)} />
           <Figure label="ERF (ISO/IEC 30134-6)" value={reuse.erf === null ? '–' : reuse.erf.toFixed(3)} testId="erf" note="reused / data-centre energy" />
         </div>
+        {reuse.availableKwh > 0 && (
         <table className="w-full text-sm">
           <caption className="pb-1 text-left text-xs text-ink-soft">Heat available per month</caption>
           <tbody>
@@ -42,6 +43,7 @@ export function HeatReuseCard({ reuse }: { reuse: HeatReuseResults }) {
             ))}
           </tbody>
         </table>
+        )}
         <p className="text-xs text-ink-soft">
           This is heat available at the loop’s return, not a contract with a heat customer: how much a network takes, and when, is for that
           agreement to settle.
