@@ -78,4 +78,33 @@ describe('an engineer designing a hybrid hall', () => {
     expect(await page.getByText(/Liquid-cooled equipment sets its own coolant limits/).isVisible()).toBe(true);
     await h.shot('hybrid-report-si');
   });
+
+  it('sweeps the liquid share against the facility-water supply and colours the grid by the liquid loop’s mechanical hours', async () => {
+    const page = h.page;
+    const { scenarios } = await h.api<{ scenarios: { id: number; name: string }[] }>(engineer, 'GET', `/projects/${projectId}/scenarios`);
+    const hybridId = scenarios.find((s) => s.name === 'Hybrid hall, W17 facility water')!.id;
+    const files = await h.api<{ climateFiles: { id: number }[] }>(engineer, 'GET', `/projects/${projectId}/climate-files`);
+    const { sweep } = await h.api<{ sweep: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sweeps`,
+      JSON.stringify({
+        scenarioId: hybridId,
+        climateFileId: files.climateFiles[0].id,
+        axes: [
+          { input: 'system.liquidShare', from: 0.6, to: 0.9, step: 0.3 },
+          { input: 'system.liquid.chilledWaterSupplyC', from: 12, to: 27, step: 5 },
+        ],
+      }),
+    );
+    await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/${sweep.id}`);
+    await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 90_000 }).toContain('8 of 8 points done');
+    await page.getByTestId('heat-map-metric').selectOption('liquidMechanical');
+    await chartsDrawn(page, { atLeast: 2 });
+    await page.getByText('Table of the same figures').click();
+    const table = await page.getByTestId('heat-map-table').innerText();
+    // Each column's liquid-loop mechanical hours by the approach rule (T_db + 5 K > supply), counted from the file.
+    for (const supplyC of [12, 17, 22, 27]) expect(table).toContain(String(dryBulbs.filter((t) => t + 5 > supplyC).length));
+    await h.shot('hybrid-sweep-grid-si');
+  });
 });
