@@ -33,7 +33,7 @@ afterAll(() => h?.close());
 afterEach(() => expectNoPageErrors(pageErrors));
 
 describe('an engineer designing a hybrid hall', () => {
-  it('chooses the hybrid kind and a facility-water class, previews both loops, runs it and reads both loops and the heat reuse', async () => {
+  it('chooses the hybrid kind and a facility-water class, previews both loops, runs it and reads both loops and the heat reuse', { timeout: 180_000 }, async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/new`);
     await page.getByLabel('Name').fill('Hybrid hall, W17 facility water');
@@ -70,9 +70,13 @@ describe('an engineer designing a hybrid hall', () => {
     await expect.poll(() => page.getByTestId('liquid-temperatures').innerText()).toContain('62.6');
     await h.shot('hybrid-run-ip');
     await page.getByTestId('hybrid-loops').screenshot({ path: path.join(screenshotFolder, 'hybrid-loops-ip.png') });
+    const runUrl = page.url();
+    // The saved hybrid in the editor, in IP: the same 17 °C supply in °F (× 9/5 + 32, NIST SP 811) is 62.6 °F.
+    await page.getByRole('link', { name: 'Open scenario' }).click();
+    await expect.poll(() => page.getByLabel('Facility-water supply').inputValue(), { timeout: 15_000 }).toBe('62.6');
+    await page.getByTestId('hybrid-fields').screenshot({ path: path.join(screenshotFolder, 'hybrid-fields-ip.png') });
     await h.useUnits('SI');
 
-    const runUrl = page.url();
     await page.goto(`${runUrl}/report`);
     await expect.poll(() => page.getByTestId('report-loops').isVisible(), { timeout: 15_000 }).toBe(true);
     expect(await page.getByText(/Liquid-cooled equipment sets its own coolant limits/).isVisible()).toBe(true);
