@@ -1,5 +1,5 @@
 import { hourlyJson } from '../shared/report/hourly-json';
-import { hourlyCsvInput, migrateScenario, outdoorStates, parseScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
+import { hourlyCsvInput, hybridHourlyColumns, isHybrid, migrateScenario, outdoorStates, parseScenario, runScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
 
 export interface FormatHourlyInput {
   /** Scenario JSON as stored with the run; validated again because a worker must not trust its caller. */
@@ -33,7 +33,12 @@ export function formatHourly({ scenario, series, elevationM, utcOffsetMinutes, m
   const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
   const { states } = outdoorStates(series, elevationM ?? parsed.scenario.elevationM);
-  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } }, utcOffsetMinutes ?? 0);
+  // A hybrid run stores only the hall's modes; its loops' columns come from classifying the loops again (the same
+  // scenario, series and elevation give the same hours).
+  const loops = isHybrid(parsed.scenario)
+    ? hybridHourlyColumns(runScenario(parsed.scenario, series, { elevationM: elevationM ?? parsed.scenario.elevationM, utcOffsetMinutes }))
+    : null;
+  const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } }, utcOffsetMinutes ?? 0, loops);
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];
   let length = 0;

@@ -10,7 +10,7 @@ import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { importClimateText } from '../../shared/climate';
 import type { ColumnMappingOverride, ImportOptions, PressureUnit, QuantityColumn, TemperatureUnit } from '../../shared/climate/types';
-import { hourlyCsvInput, parseLoadProfileCsv, parseScenario, runScenario, writeHourlyCsv } from '../../shared/scenario';
+import { hourlyCsvInput, hybridHourlyColumns, parseLoadProfileCsv, parseScenario, runScenario, writeHourlyCsv } from '../../shared/scenario';
 
 const USAGE = `Usage: npm run --silent estimate -- --weather FILE.csv --scenario SCENARIO.json [options]
 
@@ -116,7 +116,7 @@ function main(argv: string[]): number {
   if (values.hourly) {
     const fd = openOutput(values.hourly);
     try {
-      writeHourlyCsv(hourlyCsvInput(series, run, utcOffsetMinutes ?? 0), (bytes) => writeAll(fd, bytes));
+      writeHourlyCsv(hourlyCsvInput(series, run, utcOffsetMinutes ?? 0, hybridHourlyColumns(run)), (bytes) => writeAll(fd, bytes));
     } finally {
       closeSync(fd);
     }

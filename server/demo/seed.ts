@@ -5,6 +5,7 @@ import { demoPeople, seedDemoPeople } from './people';
 import { seedDemoClimate } from './climate';
 import { seedDemoProjection } from './projections';
 import { seedDemoSweep } from './sweeps';
+import { seedDemoHybrid } from './hybrid';
 
 /** The demo project's name: how start-up finds the project the seed made (server/demo/rerun.ts). */
 export const DEMO_PROJECT_NAME = 'Larchfield campus study (demo)';
@@ -30,6 +31,7 @@ export function seedDemo(db: Db): { seeded: boolean } {
     const engineer = tx.select({ id: users.id }).from(users).where(eq(users.email, engineerEmail)).get();
     seedDemoClimate(tx, project.id, engineer?.id ?? null);
     seedDemoSweep(tx, project.id, engineer?.id ?? null);
+    seedDemoHybrid(tx, project.id, engineer?.id ?? null);
     return { projectId: project.id, engineerId: engineer?.id ?? null };
   });
   // Made from the stored series, so after the workspace above is in place.

@@ -9,7 +9,7 @@ import {
   RUN_ENVELOPE,
   type ChosenEnvelope,
 } from '../../shared/excursions/proposal-query';
-import { findEnvelopePreset, migrateScenario, parseScenario, type Scenario } from '../../shared/scenario';
+import { findEnvelopePreset, hallAirSystem, migrateScenario, parseScenario, type Scenario } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { loadClimateSeries } from '../climate/store';
@@ -51,7 +51,9 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
       const scenario = parsed.scenario;
       const climate = JSON.parse(run.climateJson) as { name: string; elevationM: number; utcOffsetMinutes: number; site: { name: string } };
 
-      const supplyAirC = query.supplyAirC ?? scenario.system.supplyAirC;
+      // A hybrid hall's inlet air is its air loop's: the excursions are the air loop's.
+      const hallAir = hallAirSystem(scenario.system);
+      const supplyAirC = query.supplyAirC ?? hallAir.supplyAirC;
       if (query.floatUpToC !== undefined && query.floatUpToC < supplyAirC) {
         throw new HttpError(400, 'invalid_request', `floatUpToC: must be at or above supplyAirC ${supplyAirC} °C (got ${query.floatUpToC})`, [
           { path: 'floatUpToC', message: `must be at or above supplyAirC ${supplyAirC} °C` },
@@ -76,10 +78,10 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
         run: {
           id: run.id,
           scenarioName: scenario.name,
-          systemKind: scenario.system.kind,
-          evaporativeEffectiveness: scenario.system.evaporativeEffectiveness,
-          heatRejection: scenario.system.kind === 'water-side' ? scenario.system.heatRejection : null,
-          supplyAirC: scenario.system.supplyAirC,
+          systemKind: hallAir.kind,
+          evaporativeEffectiveness: hallAir.evaporativeEffectiveness,
+          heatRejection: hallAir.kind === 'water-side' ? hallAir.heatRejection : null,
+          supplyAirC: hallAir.supplyAirC,
           climateName: climate.name,
           siteName: climate.site.name,
           elevationM: climate.elevationM,

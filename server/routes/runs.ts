@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
 import { MODE_NAMES } from '../../shared/scenario';
 import type { SweepPointValues } from '../../shared/sweep';
+import { comparableResults } from '../../shared/report/summary-table';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
@@ -92,7 +93,7 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         runs: rows.map((row) => {
           const run = present(row, row.sweepId === null ? null : (sweepNames.get(row.sweepId) ?? null));
           const r = run.results;
-          return { ...run, results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw, excursions: r.excursions } : null };
+          return { ...run, results: r ? comparableResults(r) : null };
         }),
       });
     }),

@@ -130,7 +130,15 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
         series,
         options: { elevationM: site.elevationM, utcOffsetMinutes: standardOffsetMinutes(site.timeZone) },
       }, { lane: 'interactive', signal: closedRequestSignal(res) });
-      res.json({ hours: out.results.hours, modes: MODE_NAMES, energy: out.results.energy, water: out.results.water });
+      const loops = out.results.loops;
+      res.json({
+        hours: out.results.hours,
+        modes: MODE_NAMES,
+        energy: out.results.energy,
+        water: out.results.water,
+        // A hybrid hall's preview shows each loop's hours beside the hall's.
+        ...(loops ? { loops: { liquid: { hours: loops.liquid.hours }, air: { hours: loops.air.hours } } } : {}),
+      });
     }),
   ];
 }

@@ -7,6 +7,7 @@ import { bulkStates, hourlyPressurePa } from '../psychrometrics';
 import { MODE } from '../scenario/classify';
 import { deratedDryBulbMaxC, type EnvelopeLimits } from '../scenario/envelopes';
 import { designFanHeatK } from '../scenario/fans';
+import { hallAirSystem } from '../scenario/hybrid';
 import type { ScenarioSeries } from '../scenario/run';
 import type { Scenario } from '../scenario/schema';
 import { countExcursions, type EnvelopeBounds, type ExcursionCounts } from './excursion-count';
@@ -69,11 +70,11 @@ export function analyseProposal(scenario: Scenario, series: ScenarioSeries, elev
   const hallDewPointC = (recommended.dewPointMinC + recommended.dewPointMaxC) / 2;
 
   const inlet = modelInletHours(
-    scenario.system,
+    hallAirSystem(scenario.system),
     control,
     { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa, flags: series.flags },
     { supplyAirC: proposal.supplyAirC, ceilingC, hallDewPointC },
-    { fanHeatK: designFanHeatK(scenario.energy.fanPowerFraction, scenario.system.itDeltaTK) },
+    { fanHeatK: designFanHeatK(scenario.energy.fanPowerFraction, hallAirSystem(scenario.system).itDeltaTK) },
   );
   const counts = countExcursions({
     timestampsMs: series.timestampsMs,
@@ -99,7 +100,7 @@ export function analyseProposal(scenario: Scenario, series: ScenarioSeries, elev
     applied: {
       supplyAirC: proposal.supplyAirC,
       ceilingC,
-      hallDewPointC: scenario.system.kind === 'direct-air' ? null : hallDewPointC,
+      hallDewPointC: hallAirSystem(scenario.system).kind === 'direct-air' ? null : hallDewPointC,
       recommended,
       allowable,
       control,

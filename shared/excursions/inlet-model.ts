@@ -28,7 +28,7 @@
 import { humidityRatioFromDewPoint, humidityRatioFromWetBulb } from '../psychrometrics';
 import { classifyHours, MODE, moistureTargets, type ClassifierPlant, type InletLimits, type OutdoorHours } from '../scenario/classify';
 import { hallSideEffectiveness } from '../scenario/exchanger';
-import type { ScenarioSystem } from '../scenario/schema';
+import type { SingleSystem } from '../scenario/schema';
 
 export interface InletProposal {
   /** Supply setpoint at the IT inlet, °C. */
@@ -55,7 +55,7 @@ export interface InletHours {
  * `plant.fanHeatK` is the design fan heat derived from the fan power (shared/scenario/fans.ts, designFanHeatK).
  * Throws RangeError for a bad proposal (a ceiling below the setpoint, a non-finite value).
  */
-export function modelInletHours(system: ScenarioSystem, limits: InletLimits, outdoor: OutdoorHours, proposal: InletProposal, plant: ClassifierPlant): InletHours {
+export function modelInletHours(system: SingleSystem, limits: InletLimits, outdoor: OutdoorHours, proposal: InletProposal, plant: ClassifierPlant): InletHours {
   const { supplyAirC: ts, ceilingC: tc, hallDewPointC } = proposal;
   if (!Number.isFinite(ts)) throw new RangeError(`supplyAirC must be a finite number, got ${ts}`);
   if (!Number.isFinite(tc) || tc < ts) throw new RangeError(`ceilingC must be a number at or above supplyAirC ${ts} °C, got ${tc}`);
@@ -135,7 +135,7 @@ export function modelInletHours(system: ScenarioSystem, limits: InletLimits, out
 }
 
 /** The system with its supply (and, water-side, its chilled-water setpoint) moved to the ceiling, for the classifier. */
-function atCeiling(system: ScenarioSystem, ceilingC: number): ScenarioSystem {
+function atCeiling(system: SingleSystem, ceilingC: number): SingleSystem {
   if (system.kind === 'water-side') {
     const coilApproachK = system.supplyAirC - system.chilledWaterSupplyC;
     return { ...system, supplyAirC: ceilingC, chilledWaterSupplyC: ceilingC - coilApproachK };

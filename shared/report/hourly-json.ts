@@ -3,17 +3,29 @@
  * (shared/scenario/hourly-csv.ts), so either download reads the same. A missing value is null.
  */
 import { MODE, MODE_NAMES } from '../scenario/classify';
-import { HOURLY_CSV_COLUMNS, type HourlyCsvInput } from '../scenario/hourly-csv';
+import { HOURLY_CSV_COLUMNS, HYBRID_HOURLY_CSV_COLUMNS, type HourlyCsvInput } from '../scenario/hourly-csv';
 import { standardTimeIso } from '../time-zone';
 
 export type HourlyColumn = (typeof HOURLY_CSV_COLUMNS)[number];
+export type HybridHourlyColumn = (typeof HYBRID_HOURLY_CSV_COLUMNS)[number];
 
 export interface HourlyJson {
-  columns: readonly HourlyColumn[];
-  units: Record<HourlyColumn, string>;
+  columns: readonly (HourlyColumn | HybridHourlyColumn)[];
+  units: Partial<Record<HourlyColumn | HybridHourlyColumn, string>>;
   /** One array per column, one entry per hour in series order (UTC). */
-  hours: { timestamp: string[]; mode: string[]; local_standard_time: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode' | 'local_standard_time'>, (number | null)[]>;
+  hours: { timestamp: string[]; mode: string[]; local_standard_time: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode' | 'local_standard_time'>, (number | null)[]> & {
+    /** Hybrid runs only. */
+    liquid_mode?: string[];
+    air_mode?: string[];
+    liquid_mechanical_fraction?: (number | null)[];
+  };
 }
+
+export const hybridHourlyUnits: Record<HybridHourlyColumn, string> = {
+  liquid_mode: 'the liquid loop: free | adiabatic | mechanical | no_data',
+  air_mode: 'the air loop: free | adiabatic | mechanical | no_data',
+  liquid_mechanical_fraction: "share of the liquid loop's load on compressors, 0–1",
+};
 
 export const hourlyUnits: Record<HourlyColumn, string> = {
   timestamp: 'ISO 8601, UTC',
@@ -39,9 +51,17 @@ export function hourlyJson(input: HourlyCsvInput): HourlyJson {
   const n = input.modes.length;
   const mechanical = column(input.mechanicalFraction, 3);
   for (let i = 0; i < n; i++) if (input.modes[i] === MODE.noData) mechanical[i] = null;
+  const loops = input.loops ?? null;
+  const loopHours = loops
+    ? {
+        liquid_mode: Array.from(loops.liquidModes, (m) => MODE_NAMES[m] ?? 'no_data'),
+        air_mode: Array.from(loops.airModes, (m) => MODE_NAMES[m] ?? 'no_data'),
+        liquid_mechanical_fraction: column(loops.liquidMechanicalFraction, 3).map((v, i) => (input.modes[i] === MODE.noData ? null : v)),
+      }
+    : {};
   return {
-    columns: HOURLY_CSV_COLUMNS,
-    units: hourlyUnits,
+    columns: loops ? [...HOURLY_CSV_COLUMNS, ...HYBRID_HOURLY_CSV_COLUMNS] : HOURLY_CSV_COLUMNS,
+    units: loops ? { ...hourlyUnits, ...hybridHourlyUnits } : hourlyUnits,
     hours: {
       timestamp: Array.from(input.timestampsMs, (ms) => new Date(ms).toISOString().slice(0, 16) + 'Z'),
       mode: Array.from(input.modes, (m) => MODE_NAMES[m] ?? 'no_data'),
@@ -54,6 +74,7 @@ export function hourlyJson(input: HourlyCsvInput): HourlyJson {
       mechanical_fraction: mechanical,
       humidified: Array.from(input.modes, (m, i) => (m === MODE.noData || input.humidified === null ? null : input.humidified[i] === 1 ? 1 : 0)),
       local_standard_time: Array.from(input.timestampsMs, (ms) => standardTimeIso(ms, input.utcOffsetMinutes)),
+      ...loopHours,
     },
   };
 }

@@ -9,7 +9,8 @@ import { MONTH_SHORT } from '../calendar';
 import { modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import { countsSubsets, hoursOfSpec, modeRowSpecs, notCountedNote, modeSubsets, subsetHours, waterPartL, waterParts, type ModeSubsetKey, type WaterPartKey } from './mode-subsets';
-import type { ScenarioResults } from '../scenario/run';
+import type { LoopResults, ScenarioResults } from '../scenario/run';
+import type { HeatReuseResults } from '../scenario/heat-reuse';
 import { humidityReadingWords } from './humidity-reading';
 import { PARTIAL_YEAR_MARK, yearStatistics } from '../scenario/year-statistics';
 import { standardPeriod, utcOffsetLabel } from '../time-zone';
@@ -83,6 +84,7 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'water', figure: 'Water total per 8,760 h', unit: 'L', value: rounded(w.annualL, 1) },
     { section: 'water', figure: 'WUE', unit: 'L/kWh', value: rounded(w.wueLPerKwh, 4) },
   ];
+  rows.push(...loopRows(r));
   for (const m of r.hoursByMonth) rows.push(...modeRows('by month', `${MONTH_SHORT[m.month - 1]}: `, m));
   // Years on the site's standard time (as the run page); a partial year is marked as the run page marks it.
   const partial = new Map(yearStatistics(r.hoursByYear).partialYears.map((p) => [p.year, p]));
@@ -95,6 +97,43 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
   }
   for (const input of flattenInputs(run.scenario)) {
     rows.push({ section: 'inputs', figure: input.path, unit: inputUnitSi[input.kind], value: typeof input.value === 'boolean' ? String(input.value) : input.value });
+  }
+  return rows;
+}
+
+/** A hybrid run's loops (hours, energy, water, facility-water temperatures) and heat reuse; none for a single system. */
+function loopRows(r: ScenarioResults): SummaryRow[] {
+  if (!r.loops) return [];
+  const rows: SummaryRow[] = [];
+  for (const [name, loop] of [
+    ['liquid loop', r.loops.liquid],
+    ['air loop', r.loops.air],
+  ] as const) {
+    rows.push({ section: name, figure: 'Share of IT heat', unit: '%', value: rounded(loop.share * 100, 2) });
+    rows.push(...modeRows(name, '', loop.hours));
+    rows.push({ section: name, figure: 'Cooling energy', unit: 'kWh', value: rounded(loop.energy.coolingKwh, 1) });
+    rows.push({ section: name, figure: 'Compressors', unit: 'kWh', value: rounded(loop.energy.compressorKwh, 1) });
+    rows.push({ section: name, figure: 'Water total', unit: 'L', value: rounded(loop.water.totalL, 1) });
+    rows.push({ section: name, figure: 'Peak mechanical load', unit: 'kW', value: rounded(loop.peakMechanicalLoadKw, 1) });
+  }
+  const t = r.loops.liquid.temperatures;
+  if (t) {
+    rows.push({ section: 'liquid loop', figure: 'Facility-water supply', unit: '°C', value: t.facilitySupplyC });
+    rows.push({ section: 'liquid loop', figure: 'Facility-water return', unit: '°C', value: t.facilityReturnC });
+    rows.push({ section: 'liquid loop', figure: 'Coolant supply after the CDU', unit: '°C', value: t.coolantSupplyC });
+  }
+  const reuse = r.heatReuse;
+  if (reuse) {
+    rows.push(
+      { section: 'heat reuse', figure: 'Threshold', unit: '°C', value: reuse.thresholdC },
+      { section: 'heat reuse', figure: 'Hours available', unit: 'h', value: reuse.availableHours },
+      { section: 'heat reuse', figure: 'Heat available', unit: 'kWh', value: rounded(reuse.availableKwh, 1) },
+      ...reuse.availableKwhByMonth.map((kwh, m) => ({ section: 'heat reuse', figure: `${MONTH_SHORT[m]}: heat available`, unit: 'kWh', value: rounded(kwh, 1) })),
+      { section: 'heat reuse', figure: 'Heat reused', unit: 'kWh', value: rounded(reuse.reusedKwh, 1) },
+      { section: 'heat reuse', figure: 'Heat-pump electricity', unit: 'kWh', value: rounded(reuse.heatPumpKwh, 1) },
+      { section: 'heat reuse', figure: 'ERF (ISO/IEC 30134-6)', unit: '', value: rounded(reuse.erf, 4) },
+      { section: 'heat reuse', figure: 'Note', unit: '', value: 'Heat available at the return, not a contract with a heat customer.' },
+    );
   }
   return rows;
 }
@@ -128,7 +167,24 @@ export function summaryCsv(rows: SummaryRow[]): string {
 }
 
 /** What a comparison reads of a run's results: the totals, not the per-month tables (the run list gives these). */
-export type ComparableResults = Pick<ScenarioResults, 'hours' | 'energy' | 'water' | 'peakMechanicalLoadKw' | 'excursions'>;
+export type ComparableResults = Pick<ScenarioResults, 'hours' | 'energy' | 'water' | 'peakMechanicalLoadKw' | 'excursions'> & {
+  /** A hybrid hall's loops, their hours only. */
+  loops?: { liquid: Pick<LoopResults, 'hours'>; air: Pick<LoopResults, 'hours'> };
+  heatReuse?: Pick<HeatReuseResults, 'availableKwh' | 'erf'>;
+};
+
+/** The part of a run's results a comparison reads (the run list sends only this). */
+export function comparableResults(r: ScenarioResults): ComparableResults {
+  return {
+    hours: r.hours,
+    energy: r.energy,
+    water: r.water,
+    peakMechanicalLoadKw: r.peakMechanicalLoadKw,
+    excursions: r.excursions,
+    ...(r.loops ? { loops: { liquid: { hours: r.loops.liquid.hours }, air: { hours: r.loops.air.hours } } } : {}),
+    ...(r.heatReuse ? { heatReuse: { availableKwh: r.heatReuse.availableKwh, erf: r.heatReuse.erf } } : {}),
+  };
+}
 
 export interface ComparedFigure {
   key: string;
@@ -141,6 +197,8 @@ export interface ComparedFigure {
   notInOldRuns?: boolean;
   /** Shown indented under the figure before it ("of which …"); `standalone` names it where rows stand alone (CSV). */
   part?: boolean;
+  /** A hybrid hall's figure: compared only when a run is a hybrid (– for the single systems beside it). */
+  hybridOnly?: boolean;
   standalone?: string;
   value: (r: ComparableResults) => number | null;
 }
@@ -178,6 +236,12 @@ export const comparedFigures: ComparedFigure[] = [
   waterPartFigure('humidificationL'),
   waterPartFigure('evaporativeCoolingL'),
   { key: 'wue', label: 'WUE', unit: 'L/kWh', better: 'lower', decimals: 4, value: (r) => r.water.wueLPerKwh },
+  { key: 'liquidFree', label: 'Liquid loop: free cooling', unit: 'h', better: 'higher', decimals: 0, hybridOnly: true, value: (r) => r.loops?.liquid.hours.free ?? null },
+  { key: 'liquidMechanical', label: 'Liquid loop: mechanical', unit: 'h', better: 'lower', decimals: 0, hybridOnly: true, value: (r) => r.loops?.liquid.hours.mechanical ?? null },
+  { key: 'airFree', label: 'Air loop: free cooling', unit: 'h', better: 'higher', decimals: 0, hybridOnly: true, value: (r) => r.loops?.air.hours.free ?? null },
+  { key: 'airMechanical', label: 'Air loop: mechanical', unit: 'h', better: 'lower', decimals: 0, hybridOnly: true, value: (r) => r.loops?.air.hours.mechanical ?? null },
+  { key: 'heatAvailable', label: 'Reusable heat available', unit: 'kWh', better: 'higher', decimals: 1, hybridOnly: true, value: (r) => r.heatReuse?.availableKwh ?? null },
+  { key: 'erf', label: 'ERF (ISO/IEC 30134-6)', unit: '', better: 'higher', decimals: 4, hybridOnly: true, value: (r) => r.heatReuse?.erf ?? null },
 ];
 
 export interface ComparisonCell {
@@ -203,7 +267,8 @@ export interface ComparisonRow {
 export function comparisonRows(runs: ReportRun[], baselineId: number, units: SummaryUnits = 'SI'): ComparisonRow[] {
   const baseline = runs.find((r) => r.id === baselineId) ?? runs[0];
   if (!baseline) return [];
-  return comparedFigures.map((f) => {
+  const anyHybrid = runs.some((r) => r.results.loops !== undefined);
+  return comparedFigures.filter((f) => anyHybrid || !f.hybridOnly).map((f) => {
     const base = f.value(baseline.results);
     // Differences of a linear unit convert by the same factor (water in L or US gal; no temperatures here).
     const shown = (v: number | null) => (inUnits(f.unit, v, units).unit === f.unit ? rounded(v, f.decimals) : inUnits(f.unit, v, units).value);

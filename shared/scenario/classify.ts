@@ -13,7 +13,7 @@ import {
 } from '../psychrometrics';
 import type { EnvelopeLimits } from './envelopes';
 import { hallSideEffectiveness } from './exchanger';
-import type { ScenarioSystem } from './schema';
+import type { SingleSystem } from './schema';
 
 export const MODE = { free: 0, adiabatic: 1, mechanical: 2, noData: 3 } as const;
 export type ModeCode = (typeof MODE)[keyof typeof MODE];
@@ -94,7 +94,7 @@ export function moistureTargets(limits: InletLimits, supplyAirC: number, pressur
  * Classifies every hour. Hours with a NaN input or a missing flag are MODE.noData with fraction 0.
  * Throws RangeError only for a bad argument (array lengths); never mid-series for bad data.
  */
-export function classifyHours(system: ScenarioSystem, limits: InletLimits, hours: OutdoorHours, plant: ClassifierPlant): HourClassification {
+export function classifyHours(system: SingleSystem, limits: InletLimits, hours: OutdoorHours, plant: ClassifierPlant): HourClassification {
   const n = hours.dryBulbC.length;
   for (const [name, array] of [['wetBulbC', hours.wetBulbC], ['humidityRatio', hours.humidityRatio]] as const) {
     if (array.length !== n) throw new RangeError(`${name} has ${array.length} hours, dryBulbC has ${n}`);
@@ -163,7 +163,7 @@ function wetBulbLineC(w: number, wetBulbC: number, pressurePa: number): number {
   return ((2501 - 2.326 * wetBulbC) * wsStar + 1.006 * wetBulbC - w * (2501 - 4.186 * wetBulbC)) / (1.006 + 1.86 * w);
 }
 
-function directAirHour(system: Extract<ScenarioSystem, { kind: 'direct-air' }>, fanHeatK: number, limits: InletLimits, out: HourClassification): HourRule {
+function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fanHeatK: number, limits: InletLimits, out: HourClassification): HourRule {
   const { supplyAirC, itDeltaTK, evaporativeEffectiveness: eps } = system;
   const offCoilC = supplyAirC - fanHeatK;
   const returnC = supplyAirC + itDeltaTK;
@@ -274,7 +274,7 @@ function directAirMechanicalFraction(
   return Math.min(1, Math.max(0, Math.min(outdoorLoad, recirculationLoad) / recirculationLoad));
 }
 
-function indirectAirHour(system: Extract<ScenarioSystem, { kind: 'indirect-air' }>, fanHeatK: number, out: HourClassification): HourRule {
+function indirectAirHour(system: Extract<SingleSystem, { kind: 'indirect-air' }>, fanHeatK: number, out: HourClassification): HourRule {
   const { supplyAirC, itDeltaTK, evaporativeEffectiveness: eps, scavengerAirRatio } = system;
   // The exchanger's hall-side effectiveness at this scavenger air ratio (ε-NTU, cross-flow both unmixed).
   const hx = hallSideEffectiveness(system.heatExchangerEffectiveness, scavengerAirRatio);
@@ -311,7 +311,7 @@ function indirectAirHour(system: Extract<ScenarioSystem, { kind: 'indirect-air' 
   };
 }
 
-function waterSideHour(system: Extract<ScenarioSystem, { kind: 'water-side' }>, out: HourClassification): HourRule {
+function waterSideHour(system: Extract<SingleSystem, { kind: 'water-side' }>, out: HourClassification): HourRule {
   const { chilledWaterSupplyC, chilledWaterDeltaTK, approachK, heatRejection, evaporativeEffectiveness: eps, freezeProtectionWetBulbC } = system;
   const tower = heatRejection === 'cooling-tower';
   // Water leaving the heat rejection at this temperature exactly meets the chilled-water setpoint.

@@ -8,7 +8,7 @@ import { MODE, type HourClassification } from './classify';
 import { CP_AIR_KJ_PER_KG_K, hallAirMassFlowKgPerS, LITRES_PER_KG } from './air';
 import { calibrateCompressor, compressorPowerKw, fullLoadCop, type CompressorModel } from './compressor';
 import { affinityPowerKw, designFanHeatK, speedFraction } from './fans';
-import type { ScenarioEnergy, ScenarioSystem } from './schema';
+import type { ScenarioEnergy, SingleSystem } from './schema';
 import { SaturatedExit, TOWER_AIR_ENTHALPY_RISE_KJ_PER_KG, TOWER_CIRCULATING_KG_PER_H_PER_KW } from './tower';
 
 export { CP_AIR_KJ_PER_KG_K, hallAirMassFlowKgPerS, LATENT_HEAT_TOWER_KJ_PER_KG } from './air';
@@ -50,7 +50,7 @@ export interface EnergyOutdoor {
 }
 
 /** The compressor model of a system: air-cooled for the air-side kinds, water-cooled behind a tower or dry cooler. */
-export function compressorModelFor(system: ScenarioSystem, energy: ScenarioEnergy): CompressorModel {
+export function compressorModelFor(system: SingleSystem, energy: ScenarioEnergy): CompressorModel {
   return calibrateCompressor(energy.mechanicalCop, system.kind === 'water-side' ? 'water-cooled' : 'air-cooled', {
     evaporatorApproachK: energy.evaporatorApproachK,
     condenserApproachK: energy.condenserApproachK,
@@ -64,7 +64,7 @@ export function compressorModelFor(system: ScenarioSystem, energy: ScenarioEnerg
  * `sitePressurePa` sets the tower's saturated-exit table.
  */
 export function hourlyEnergy(
-  system: ScenarioSystem,
+  system: SingleSystem,
   energy: ScenarioEnergy,
   outdoor: EnergyOutdoor,
   loadFraction: Float64Array,

@@ -23,6 +23,16 @@ export const HOURLY_CSV_COLUMNS = [
   'local_standard_time',
 ] as const;
 
+/** Columns a hybrid run's hourly file adds after HOURLY_CSV_COLUMNS: each loop's mode and the liquid loop's compressor share. */
+export const HYBRID_HOURLY_CSV_COLUMNS = ['liquid_mode', 'air_mode', 'liquid_mechanical_fraction'] as const;
+
+/** A hybrid run's per-loop hours, for the columns HYBRID_HOURLY_CSV_COLUMNS. */
+export interface HybridHourlyColumns {
+  liquidModes: Uint8Array;
+  airModes: Uint8Array;
+  liquidMechanicalFraction: Float64Array;
+}
+
 export interface HourlyCsvInput {
   timestampsMs: Float64Array;
   modes: Uint8Array;
@@ -38,6 +48,8 @@ export interface HourlyCsvInput {
   humidified: Uint8Array | null;
   /** The site's standard-time offset from UTC, minutes: local_standard_time is the hour's start on that clock. */
   utcOffsetMinutes: number;
+  /** A hybrid run's loops (their columns follow the others); absent or null for a single system. */
+  loops?: HybridHourlyColumns | null;
 }
 
 /** The hourly CSV's columns from the series a run was given and the run itself (its states and per-hour outcome). */
@@ -47,6 +59,7 @@ export function hourlyCsvInput(
     classification: Pick<ScenarioRun['classification'], 'modes' | 'mechanicalFraction'> & { humidified: Uint8Array | null };
   },
   utcOffsetMinutes = 0,
+  loops: HybridHourlyColumns | null = null,
 ): HourlyCsvInput {
   return {
     timestampsMs: series.timestampsMs,
@@ -60,12 +73,25 @@ export function hourlyCsvInput(
     mechanicalFraction: run.classification.mechanicalFraction,
     humidified: run.classification.humidified,
     utcOffsetMinutes,
+    loops,
+  };
+}
+
+/** A run's loop columns for the hourly file: from a hybrid run's loops; null for a single system. */
+export function hybridHourlyColumns(run: Pick<ScenarioRun, 'loops'>): HybridHourlyColumns | null {
+  if (!run.loops) return null;
+  return {
+    liquidModes: run.loops.liquid.classification.modes,
+    airModes: run.loops.air.classification.modes,
+    liquidMechanicalFraction: run.loops.liquid.classification.mechanicalFraction,
   };
 }
 
 const ROWS_PER_CHUNK = 8192;
 // Longest row: 17 (timestamp) + 10 (mode) + 7 numbers of at most 24 bytes + 1 flag + 16 (local standard time) + 11 separators.
 const MAX_ROW_BYTES = 17 + 10 + 7 * 24 + 1 + 16 + 11;
+// A hybrid row adds two modes, a number and three separators.
+const MAX_HYBRID_EXTRA_BYTES = 2 * 10 + 24 + 3;
 const COMMA = 44;
 const NEWLINE = 10;
 const MINUS = 45;
@@ -159,17 +185,25 @@ function writeTimestamp(buf: Uint8Array, pos: number, ms: number, prefix: DayPre
 export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Array) => void): void {
   const n = input.modes.length;
   for (const key of Object.keys(input) as (keyof HourlyCsvInput)[]) {
-    const column = input[key];
+    if (key === 'loops') continue;
+    const column = input[key] as ArrayLike<number> | number | null;
     if (column === null || typeof column === 'number') continue;
     if (column.length !== n) throw new RangeError(`${key} has ${column.length} hours, modes has ${n}`);
+  }
+  const loops = input.loops ?? null;
+  if (loops) {
+    for (const [key, column] of Object.entries(loops) as [string, ArrayLike<number>][]) {
+      if (column.length !== n) throw new RangeError(`loops.${key} has ${column.length} hours, modes has ${n}`);
+    }
   }
   const humidified = input.humidified;
   const offsetMs = input.utcOffsetMinutes * 60_000;
   if (!Number.isFinite(offsetMs) || Math.abs(input.utcOffsetMinutes) > 18 * 60) throw new RangeError(`utcOffsetMinutes must be within ±1080, got ${input.utcOffsetMinutes}`);
-  onChunk(encoder.encode(`${HOURLY_CSV_COLUMNS.join(',')}\n`));
+  const header = loops ? [...HOURLY_CSV_COLUMNS, ...HYBRID_HOURLY_CSV_COLUMNS] : HOURLY_CSV_COLUMNS;
+  onChunk(encoder.encode(`${header.join(',')}\n`));
   const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
   const localPrefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
-  const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * MAX_ROW_BYTES);
+  const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * (MAX_ROW_BYTES + (loops ? MAX_HYBRID_EXTRA_BYTES : 0)));
   // the columns as locals: the row loop reads them 262,800 times for 30 years
   const { timestampsMs, modes, dryBulbC, wetBulbC, dewPointC, rhPct, humidityRatio, enthalpyKJPerKg, mechanicalFraction } = input;
   for (let start = 0; start < n; start += ROWS_PER_CHUNK) {
@@ -202,6 +236,18 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
       buf[pos++] = COMMA;
       // the same stamp on the site's standard time, without the Z (overwritten by the newline)
       pos = writeTimestamp(buf, pos, ms + offsetMs, localPrefix) - 1;
+      if (loops) {
+        buf[pos++] = COMMA;
+        const liquidBytes = MODE_BYTES[loops.liquidModes[i]];
+        buf.set(liquidBytes, pos);
+        pos += liquidBytes.length;
+        buf[pos++] = COMMA;
+        const airBytes = MODE_BYTES[loops.airModes[i]];
+        buf.set(airBytes, pos);
+        pos += airBytes.length;
+        buf[pos++] = COMMA;
+        if (hasData) pos = writeFixed(buf, pos, loops.liquidMechanicalFraction[i], 3);
+      }
       buf[pos++] = NEWLINE;
     }
     onChunk(buf.subarray(0, pos));

@@ -23,8 +23,14 @@ export type { AggregatedResults, ModeHours, EnergyTotals, YearResults } from './
 export { designAtSite, outdoorStates, runScenario } from './run';
 export { REGION, REGION_KEYS, binHours, cellCentre, cellOf, gridStates, hoursPerGridRegion, operatingRegionGrid, regionOfHour } from './operating-regions';
 export type { CellHours, DesignForRegions, GridStates, HourColumns, OperatingRegionGrid, RegionCode, RegionKey, StateGrid } from './operating-regions';
-export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun } from './run';
+export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun, LoopResults } from './run';
+export { addLoopEnergy, combineLoopHours, hallAirSystem, isHybrid, liquidLoopSystem, loopScenarios, usesEvaporativeWater } from './hybrid';
+export type { HybridScenario, SingleScenario } from './hybrid';
+export { energyReuseFactor, heatPumpHeatingCop, heatReuseResults } from './heat-reuse';
+export type { HeatReuseResults } from './heat-reuse';
+export { FACILITY_WATER_CLASSES, findFacilityWaterClass, supplyFitsClass } from './facility-water';
+export type { FacilityWaterClass } from './facility-water';
 export { ENGINE_VERSION } from './version';
-export { HOURLY_CSV_COLUMNS, writeHourlyCsv, writeFixed, hourlyCsvInput } from './hourly-csv';
-export type { HourlyCsvInput } from './hourly-csv';
+export { HOURLY_CSV_COLUMNS, HYBRID_HOURLY_CSV_COLUMNS, hybridHourlyColumns, writeHourlyCsv, writeFixed, hourlyCsvInput } from './hourly-csv';
+export type { HourlyCsvInput, HybridHourlyColumns } from './hourly-csv';
 export { INPUT_LABELS, inputLabel } from './input-labels';

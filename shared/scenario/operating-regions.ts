@@ -6,7 +6,7 @@
  */
 import { bulkStates } from '../psychrometrics';
 import { classifyHours, MODE, type ClassifierPlant, type InletLimits } from './classify';
-import type { ScenarioSystem } from './schema';
+import type { SingleSystem } from './schema';
 
 /** Region codes, in the order tables list them; `none` for supersaturated states and cells outside the grid. */
 export const REGION = { free: 0, humidified: 1, adiabatic: 2, partialMechanical: 3, mechanical: 4, none: 255 } as const;
@@ -43,7 +43,7 @@ export interface OperatingRegionGrid extends StateGrid {
 }
 
 export interface DesignForRegions {
-  system: ScenarioSystem;
+  system: SingleSystem;
   /** Envelope limits with the dry-bulb maximum already derated for the site's altitude. */
   limits: InletLimits;
   plant: ClassifierPlant;

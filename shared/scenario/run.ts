@@ -4,11 +4,13 @@
  */
 import { bulkStates, hourlyPressurePa, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
 import { classifyHours, moistureTargets, type ClassifierPlant, type HourClassification, type InletLimits } from './classify';
-import { hourlyEnergy, type HourlyEnergy } from './energy';
+import { compressorModelFor, hourlyEnergy, type HourlyEnergy } from './energy';
 import { deratedDryBulbMaxC } from './envelopes';
 import { designFanHeatK } from './fans';
+import { heatReuseResults, type HeatReuseResults } from './heat-reuse';
+import { addLoopEnergy, combineLoopHours, isHybrid, loopScenarios, type HybridScenario, type SingleScenario } from './hybrid';
 import { hourlyLoadFractions } from './load-profile';
-import { aggregateResults, type AggregatedResults } from './results';
+import { aggregateResults, type AggregatedResults, type ModeHours } from './results';
 import type { Scenario } from './schema';
 import { ENGINE_VERSION } from './version';
 
@@ -50,6 +52,26 @@ export interface ScenarioResults extends AggregatedResults {
     highHumidityRatioGPerKg: number;
   };
   warnings: string[];
+  /** Hybrid runs only: each loop's hours, energy and water (the top-level figures are the hall's). */
+  loops?: { liquid: LoopResults; air: LoopResults };
+  /** Hybrid runs with heat reuse set only. */
+  heatReuse?: HeatReuseResults;
+}
+
+/** One loop of a hybrid hall: its share, its hours (shaped like the top-level hours), energy and water. */
+export interface LoopResults {
+  /** Share of the IT heat the loop carries, 0–1. */
+  share: number;
+  systemKind: 'direct-air' | 'indirect-air' | 'water-side';
+  hours: ModeHours;
+  hoursByMonth: (ModeHours & { month: number })[];
+  energy: AggregatedResults['energy'];
+  water: AggregatedResults['water'];
+  peakMechanicalLoadKw: number;
+  peakCompressorKw: number;
+  longestMechanicalRunHours: number;
+  /** Liquid loop only: facility-water supply and return, and the coolant supply after the CDU's approach, °C. */
+  temperatures?: { facilitySupplyC: number; facilityReturnC: number; coolantSupplyC: number; facilityWaterClassId: string | null };
 }
 
 export interface ScenarioRun {
@@ -57,14 +79,27 @@ export interface ScenarioRun {
   states: BulkState;
   classification: HourClassification;
   energy: HourlyEnergy;
+  /** Hybrid runs only: each loop's classification and energy. */
+  loops?: { liquid: { classification: HourClassification; energy: HourlyEnergy }; air: { classification: HourClassification; energy: HourlyEnergy } };
 }
 
+type Outdoor = ReturnType<typeof outdoorStates>;
+
+/** Runs a scenario of any kind; a hybrid runs its two loops over the same outdoor states and joins them. */
 export function runScenario(scenario: Scenario, series: ScenarioSeries, options: RunOptions = {}): ScenarioRun {
   const n = series.dryBulbC.length;
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
   const elevationM = options.elevationM ?? scenario.elevationM;
+  const outdoor = outdoorStates(series, elevationM);
+  if (isHybrid(scenario)) return runHybrid(scenario, series, options, outdoor);
+  return runSingle(scenario as SingleScenario, series, options, outdoor);
+}
+
+function runSingle(scenario: SingleScenario, series: ScenarioSeries, options: RunOptions, outdoor: Outdoor, withEnergy = true): ScenarioRun {
+  const n = series.dryBulbC.length;
+  const elevationM = options.elevationM ?? scenario.elevationM;
   const sitePressurePa = standardPressurePa(elevationM);
-  const { states, pressurePa, filledHours } = outdoorStates(series, elevationM);
+  const { states, pressurePa, filledHours } = outdoor;
   const { envelope, system } = scenario;
   const { limits, plant } = designAtSite(scenario, elevationM);
   const { fanHeatK } = plant;
@@ -74,22 +109,17 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
     { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa, flags: series.flags },
     plant,
   );
-  const loadFraction = hourlyLoadFractions(scenario.energy.itLoadProfile, series.timestampsMs, options.utcOffsetMinutes);
-  const energy = hourlyEnergy(
-    system,
-    scenario.energy,
-    { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio },
-    loadFraction,
-    classification,
-    sitePressurePa,
-  );
-  const aggregated = aggregateResults({
-    timestampsMs: series.timestampsMs,
-    classification,
-    energy,
-    cyclesOfConcentration: scenario.energy.cyclesOfConcentration,
-    utcOffsetMinutes: options.utcOffsetMinutes,
-  });
+  const energy = withEnergy
+    ? hourlyEnergy(
+        system,
+        scenario.energy,
+        { dryBulbC: series.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio },
+        hourlyLoadFractions(scenario.energy.itLoadProfile, series.timestampsMs, options.utcOffsetMinutes),
+        classification,
+        sitePressurePa,
+      )
+    : noEnergy(n);
+  const aggregated = aggregate(scenario, series, options, classification, energy);
   const targets = moistureTargets(limits, system.supplyAirC, sitePressurePa);
 
   const warnings: string[] = [];
@@ -130,10 +160,12 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
  * What the classifier needs of a scenario at a site: its system, the envelope with the dry-bulb maximum derated
  * for the site's elevation, and the design fan heat. The one derivation for runs and the operating-region chart.
  */
-export function designAtSite(scenario: Scenario, elevationM: number): { system: Scenario['system']; limits: InletLimits; plant: ClassifierPlant } {
-  const { envelope, system } = scenario;
+export function designAtSite(scenario: Scenario, elevationM: number): { system: SingleScenario['system']; limits: InletLimits; plant: ClassifierPlant } {
+  // A hybrid hall's air is its air loop, as the run classified it.
+  const single = isHybrid(scenario) ? loopScenarios(scenario).air : (scenario as SingleScenario);
+  const { envelope, system, energy } = single;
   const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
-  return { system, limits, plant: { fanHeatK: designFanHeatK(scenario.energy.fanPowerFraction, system.itDeltaTK) } };
+  return { system, limits, plant: { fanHeatK: designFanHeatK(energy.fanPowerFraction, system.itDeltaTK) } };
 }
 
 /**
@@ -147,3 +179,136 @@ export function outdoorStates(series: ScenarioSeries, elevationM: number): { sta
 }
 
 const round2 = (x: number): number => Math.round(x * 100) / 100;
+
+/** The run's hours, energy and water summed from its hourly classification and energy. */
+function aggregate(scenario: Pick<Scenario, 'energy'>, series: ScenarioSeries, options: RunOptions, classification: HourClassification, energy: HourlyEnergy): AggregatedResults {
+  return aggregateResults({
+    timestampsMs: series.timestampsMs,
+    classification,
+    energy,
+    cyclesOfConcentration: scenario.energy.cyclesOfConcentration,
+    utcOffsetMinutes: options.utcOffsetMinutes,
+  });
+}
+
+/** The hourly energy of a loop that carries no load: every column 0. */
+function noEnergy(n: number): HourlyEnergy {
+  const zeros = () => new Float64Array(n);
+  return {
+    itKw: zeros(),
+    mechanicalLoadKw: zeros(),
+    compressorKw: zeros(),
+    cop: zeros(),
+    fanKw: zeros(),
+    pumpKw: zeros(),
+    basinHeaterKw: zeros(),
+    rejectedKw: zeros(),
+    humidificationL: zeros(),
+    evaporativeCoolingL: zeros(),
+    driftL: zeros(),
+  };
+}
+
+/**
+ * A hybrid hall: each loop run as its single system with its share of the load (hybrid.ts), the overall hours from
+ * the joined classification, energy and water as the loops' sums, pPUE and WUE over the whole, heat reuse from the
+ * liquid loop. A loop with share 0 is classified (its hours are shown) but carries no energy.
+ */
+function runHybrid(scenario: HybridScenario, series: ScenarioSeries, options: RunOptions, outdoor: Outdoor): ScenarioRun {
+  const { system } = scenario;
+  const share = system.liquidShare;
+  const loops = loopScenarios(scenario);
+  const liquid = runSingle(loops.liquid, series, options, outdoor, share > 0);
+  const air = runSingle(loops.air, series, options, outdoor, share < 1);
+  const classification = combineLoopHours(share, liquid.classification, air.classification, scenario.energy.fanPowerFraction);
+  const energy = share === 0 ? air.energy : share === 1 ? liquid.energy : addLoopEnergy(liquid.energy, air.energy);
+  const aggregated = aggregate(scenario, series, options, classification, energy);
+  // Energy and water as the loops' sums, so the loops add up to the whole exactly (blowdown is clamped per hour
+  // and loop, so adding the loops' hourly water first could differ).
+  const l = liquid.results;
+  const a = air.results;
+  const energyTotals = addEnergyTotals(l.energy, a.energy);
+  const water = addWater(l.water, a.water, energyTotals.itKwh, aggregated.hours.total - aggregated.hours.noData);
+  const base = share === 1 ? liquid.results : air.results;
+  const results: ScenarioResults = {
+    ...base,
+    ...aggregated,
+    energy: energyTotals,
+    water,
+    scenarioName: scenario.name,
+    systemKind: 'hybrid',
+    warnings: [...new Set([...a.warnings, ...l.warnings])],
+    loops: {
+      liquid: {
+        ...loopResults(l, share),
+        temperatures: {
+          facilitySupplyC: system.liquid.chilledWaterSupplyC,
+          facilityReturnC: system.liquid.chilledWaterSupplyC + system.liquid.chilledWaterDeltaTK,
+          coolantSupplyC: system.liquid.chilledWaterSupplyC + system.liquid.cduApproachK,
+          facilityWaterClassId: system.liquid.facilityWaterClassId ?? null,
+        },
+      },
+      air: loopResults(a, 1 - share),
+    },
+  };
+  if (system.heatReuse) {
+    results.heatReuse = heatReuseResults({
+      reuse: system.heatReuse,
+      supplyC: system.liquid.chilledWaterSupplyC,
+      deltaTK: system.liquid.chilledWaterDeltaTK,
+      loopHeatKw: liquid.energy.itKw,
+      timestampsMs: series.timestampsMs,
+      utcOffsetMinutes: options.utcOffsetMinutes,
+      model: compressorModelFor(loops.liquid.system, scenario.energy),
+      facilityKwh: energyTotals.itKwh + energyTotals.coolingKwh,
+    });
+  }
+  return {
+    results,
+    states: outdoor.states,
+    classification,
+    energy,
+    loops: { liquid: { classification: liquid.classification, energy: liquid.energy }, air: { classification: air.classification, energy: air.energy } },
+  };
+}
+
+function loopResults(r: ScenarioResults, share: number): LoopResults {
+  return {
+    share,
+    systemKind: r.systemKind as LoopResults['systemKind'],
+    hours: r.hours,
+    hoursByMonth: r.hoursByMonth,
+    energy: r.energy,
+    water: r.water,
+    peakMechanicalLoadKw: r.peakMechanicalLoadKw,
+    peakCompressorKw: r.peakCompressorKw,
+    longestMechanicalRunHours: r.longestMechanicalRunHours,
+  };
+}
+
+type EnergyResults = AggregatedResults['energy'];
+type WaterResults = AggregatedResults['water'];
+const HOURS_PER_YEAR = 8760;
+
+/** Two loops' energy totals added; pPUE over the whole, (IT + cooling) / IT. */
+function addEnergyTotals(x: EnergyResults, y: EnergyResults): EnergyResults {
+  const keys = ['itKwh', 'fanKwh', 'compressorKwh', 'pumpKwh', 'basinHeaterKwh', 'coolingKwh'] as const;
+  const sum = Object.fromEntries(keys.map((k) => [k, x[k] + y[k]])) as Record<(typeof keys)[number], number>;
+  const annual = x.annual && y.annual ? (Object.fromEntries(keys.map((k) => [k, x.annual![k] + y.annual![k]])) as Record<(typeof keys)[number], number>) : null;
+  return { ...sum, partialPue: sum.itKwh > 0 ? (sum.itKwh + sum.coolingKwh) / sum.itKwh : null, annual };
+}
+
+/** Two loops' water added; WUE over the whole, total litres / IT kWh (ISO/IEC 30134-9). */
+function addWater(x: WaterResults, y: WaterResults, itKwh: number, dataHours: number): WaterResults {
+  const totalL = x.totalL + y.totalL;
+  return {
+    evaporatedL: x.evaporatedL + y.evaporatedL,
+    humidificationL: x.humidificationL + y.humidificationL,
+    evaporativeCoolingL: x.evaporativeCoolingL + y.evaporativeCoolingL,
+    driftL: x.driftL + y.driftL,
+    blowdownL: x.blowdownL + y.blowdownL,
+    totalL,
+    annualL: dataHours > 0 ? totalL * (HOURS_PER_YEAR / dataHours) : null,
+    wueLPerKwh: dataHours > 0 && itKwh > 0 ? totalL / itKwh : null,
+  };
+}

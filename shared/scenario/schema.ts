@@ -87,8 +87,55 @@ export const waterSideSchema = z.object({
   freezeProtectionWetBulbC: between(-20, 10, '°C').default(2),
 });
 
-export const systemSchema = z.discriminatedUnion('kind', [directAirSchema, indirectAirSchema, waterSideSchema], {
+/** The single systems: one of them cools the whole hall (or, in a hybrid, the hall air). */
+export const singleSystemSchema = z.discriminatedUnion('kind', [directAirSchema, indirectAirSchema, waterSideSchema], {
   error: "kind must be 'direct-air', 'indirect-air' or 'water-side'",
+});
+
+/**
+ * The liquid loop of a hybrid hall: a facility-water loop to the coolant distribution units (CDUs), cooled like a
+ * water-side system (dry cooler or tower, with or without wetting, a trim chiller for the rest). Its supply can be
+ * far warmer than a chilled-water plant's (the facility-water classes, shared/scenario/facility-water.ts).
+ */
+export const liquidLoopSchema = z.object({
+  kind: z.literal('water-side', { error: "must be 'water-side'" }),
+  /** Facility-water class the supply was taken from (facility-water.ts), or absent for a typed (custom) supply. */
+  facilityWaterClassId: z.string().max(40).optional(),
+  /** Facility-water supply to the CDUs, °C. */
+  chilledWaterSupplyC: between(2, 60, '°C'),
+  /** Facility-water rise across the CDUs, K: the return is supply + ΔT. */
+  chilledWaterDeltaTK: between(1, 30, 'K'),
+  approachK: between(0, 20, 'K'),
+  heatRejection: z.enum(['dry-cooler', 'cooling-tower'], { error: "must be 'dry-cooler' or 'cooling-tower'" }),
+  evaporativeEffectiveness: fraction(),
+  /** The CDU's approach: technology-coolant supply = facility-water supply + this, K. Shown; the hours do not depend on it. */
+  cduApproachK: between(0, 20, 'K'),
+  dryCoolerAirRiseK: between(2, 30, 'K').default(10),
+  freezeProtectionWetBulbC: between(-20, 10, '°C').default(2),
+});
+
+/**
+ * Heat reuse from the liquid loop's return water: worth reusing in an hour when the return (supply + ΔT) is at
+ * least thresholdC, or, with a heat pump, lifted to thresholdC. reusedShare is how much of the available heat
+ * a heating network takes.
+ */
+export const heatReuseSchema = z.object({
+  thresholdC: between(20, 95, '°C'),
+  reusedShare: fraction(),
+  heatPump: z.boolean({ error: 'must be true or false' }).default(false),
+});
+
+export const hybridSchema = z.object({
+  kind: z.literal('hybrid'),
+  /** Share of the IT heat taken by the liquid loop (cold plates, CDUs); the rest goes to the hall air. */
+  liquidShare: fraction(),
+  liquid: liquidLoopSchema,
+  air: singleSystemSchema,
+  heatReuse: heatReuseSchema.optional(),
+});
+
+export const systemSchema = z.discriminatedUnion('kind', [directAirSchema, indirectAirSchema, waterSideSchema, hybridSchema], {
+  error: "kind must be 'direct-air', 'indirect-air', 'water-side' or 'hybrid'",
 });
 
 const loadFraction = z.number({ error: 'must be a number from 0 to 1' }).min(0, { error: 'must be a number from 0 to 1' }).max(1, { error: 'must be a number from 0 to 1' });
@@ -176,11 +223,20 @@ export const scenarioSchema = z
   .refine((s) => s.system.kind !== 'water-side' || s.system.chilledWaterSupplyC < s.system.supplyAirC, {
     error: 'chilledWaterSupplyC must be below supplyAirC',
     path: ['system', 'chilledWaterSupplyC'],
+  })
+  .refine((s) => s.system.kind !== 'hybrid' || s.system.air.kind !== 'water-side' || s.system.air.chilledWaterSupplyC < s.system.air.supplyAirC, {
+    error: 'chilledWaterSupplyC must be below supplyAirC',
+    path: ['system', 'air', 'chilledWaterSupplyC'],
   });
 
 export type Scenario = z.infer<typeof scenarioSchema>;
 export type ScenarioInput = z.input<typeof scenarioSchema>;
 export type ScenarioSystem = Scenario['system'];
+/** A system that cools with one plant: every kind but hybrid. */
+export type SingleSystem = z.infer<typeof singleSystemSchema>;
+export type HybridSystem = z.infer<typeof hybridSchema>;
+export type LiquidLoop = z.infer<typeof liquidLoopSchema>;
+export type HeatReuseInput = z.infer<typeof heatReuseSchema>;
 export type ScenarioEnvelope = Scenario['envelope'];
 export type ScenarioEnergy = Scenario['energy'];
 export type ItLoadProfile = z.infer<typeof itLoadProfileSchema>;

@@ -66,6 +66,8 @@ export function applySweepPoint(base: Scenario, values: SweepPointValues): Scena
       scenario = { ...scenario, envelope: { presetId: preset.id, ...structuredClone(preset.limits) } };
     } else {
       scenario = withValueAt(scenario, path, value);
+      // A swept facility-water supply is a typed (custom) one: it no longer claims the class it started from.
+      if (path === 'system.liquid.chilledWaterSupplyC' && scenario.system.kind === 'hybrid') delete scenario.system.liquid.facilityWaterClassId;
     }
   }
   const suffix = sweepPointSuffix(values);

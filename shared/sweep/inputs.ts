@@ -13,6 +13,8 @@ export const SWEEP_INPUT_PATHS = [
   'system.approachK',
   'envelope.presetId',
   'energy.itLoadKw',
+  'system.liquidShare',
+  'system.liquid.chilledWaterSupplyC',
 ] as const;
 export type SweepInputPath = (typeof SWEEP_INPUT_PATHS)[number];
 
@@ -55,6 +57,15 @@ export const SWEEP_INPUTS: Record<SweepInputPath, SweepInputInfo> = {
   'system.approachK': { path: 'system.approachK', label: 'Approach', short: 'approach', quantity: 'temperatureDifference', suggested: { from: 2, to: 8, step: 1 } },
   'envelope.presetId': { path: 'envelope.presetId', label: 'Inlet envelope preset', short: 'envelope', quantity: 'preset', suggested: null },
   'energy.itLoadKw': { path: 'energy.itLoadKw', label: 'IT load', short: 'IT load', quantity: 'powerKw', suggested: { from: 500, to: 2000, step: 250 } },
+  'system.liquidShare': { path: 'system.liquidShare', label: 'Share of IT heat to liquid', short: 'liquid share', quantity: 'fraction', suggested: { from: 0.5, to: 0.9, step: 0.1 } },
+  'system.liquid.chilledWaterSupplyC': {
+    path: 'system.liquid.chilledWaterSupplyC',
+    label: 'Facility-water supply',
+    short: 'facility water',
+    quantity: 'temperature',
+    // W27 to W45 (facility-water classes, recalled from memory) in steps of about one class.
+    suggested: { from: 27, to: 45, step: 6 },
+  },
 };
 
 export const isSweepInputPath = (path: string): path is SweepInputPath => (SWEEP_INPUT_PATHS as readonly string[]).includes(path);
@@ -65,6 +76,14 @@ export const isSweepInputPath = (path: string): path is SweepInputPath => (SWEEP
  */
 export function sweepInputRefusal(path: SweepInputPath, system: ScenarioSystem): string | null {
   const kind = system.kind;
+  if (path === 'system.liquidShare' || path === 'system.liquid.chilledWaterSupplyC') {
+    return kind === 'hybrid' ? null : `${path} applies to hybrid halls only; this scenario is ${kind}.`;
+  }
+  if (kind === 'hybrid') {
+    if (path === 'energy.itLoadKw') return null;
+    if (path === 'envelope.presetId') return sweepInputRefusal(path, system.air);
+    return `${path} is not offered for a hybrid hall; sweep system.liquidShare or system.liquid.chilledWaterSupplyC (a grid of the two shows which class and share give zero mechanical hours).`;
+  }
   switch (path) {
     case 'system.supplyAirC':
       return kind === 'water-side'

@@ -21,6 +21,8 @@ export interface SweepPointResults {
   evaporativeCoolingL: number | null;
   wueLPerKwh: number | null;
   peakMechanicalLoadKw: number;
+  /** A hybrid hall's liquid-loop mechanical (trim-chiller) hours; absent for a single system. */
+  liquidMechanicalHours?: number;
 }
 
 export interface SweepPoint {
@@ -42,6 +44,7 @@ export function pointResults(results: ScenarioResults): SweepPointResults {
     evaporativeCoolingL: waterPartL(results.water, 'evaporativeCoolingL'),
     wueLPerKwh: results.water.wueLPerKwh,
     peakMechanicalLoadKw: results.peakMechanicalLoadKw,
+    ...(results.loops ? { liquidMechanicalHours: results.loops.liquid.hours.mechanical } : {}),
   };
 }
 
@@ -70,7 +73,7 @@ export function sweepProgress(points: readonly Pick<SweepPoint, 'status' | 'prog
   return p;
 }
 
-export const SWEEP_METRICS = ['free', 'humidified', 'adiabatic', 'mechanical', 'partialMechanical', 'partialPue', 'waterL', 'peakMechanicalLoadKw'] as const;
+export const SWEEP_METRICS = ['free', 'humidified', 'adiabatic', 'mechanical', 'partialMechanical', 'partialPue', 'waterL', 'peakMechanicalLoadKw', 'liquidMechanical'] as const;
 export type SweepMetric = (typeof SWEEP_METRICS)[number];
 
 export const sweepMetricLabels: Record<SweepMetric, string> = {
@@ -82,6 +85,7 @@ export const sweepMetricLabels: Record<SweepMetric, string> = {
   partialPue: 'Partial PUE (cooling)',
   waterL: 'Water use',
   peakMechanicalLoadKw: 'Peak mechanical load',
+  liquidMechanical: 'Liquid-loop mechanical hours',
 };
 
 /** One metric of a finished point (SI: hours, litres, kW); null while it is not done. */
@@ -101,6 +105,8 @@ export function metricOf(results: SweepPointResults | null, metric: SweepMetric)
       return results.waterL;
     case 'peakMechanicalLoadKw':
       return results.peakMechanicalLoadKw;
+    case 'liquidMechanical':
+      return results.liquidMechanicalHours ?? null;
   }
 }
 

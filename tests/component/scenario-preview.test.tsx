@@ -12,7 +12,7 @@ const base = scenarioSchema.parse(newScenarioValues);
 /** Waits for a condition inside act, so the query's state updates on the way are flushed as React expects. */
 const settle = (check: () => void) => act(async () => vi.waitFor(check));
 
-const withSupply = (supplyAirC: number): Scenario => ({ ...base, system: { ...base.system, supplyAirC } });
+const withSupply = (supplyAirC: number): Scenario => ({ ...base, system: { ...(base.system as Extract<Scenario['system'], { kind: 'direct-air' }>), supplyAirC } });
 
 describe('the quick preview while editing', () => {
   let host: HTMLDivElement;
@@ -63,7 +63,7 @@ describe('the quick preview while editing', () => {
     await settle(() => expect(calls).toHaveLength(1));
     render(withSupply(20));
     await settle(() => expect(calls).toHaveLength(2));
-    expect(calls[1].body.scenario.system.supplyAirC).toBe(20);
+    expect((calls[1].body.scenario.system as { supplyAirC: number }).supplyAirC).toBe(20);
     // The first request's signal fires once its query has no one watching it.
     await settle(() => expect(calls[0].signal.aborted).toBe(true));
     expect(calls[1].signal.aborted).toBe(false);

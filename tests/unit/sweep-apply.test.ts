@@ -24,10 +24,10 @@ describe('applying a sweep point to a scenario', () => {
 
   it('sets each swept input and names the run after the values', () => {
     const s = applySweepPoint(base, { 'system.supplyAirC': 26.5, 'energy.itLoadKw': 1500 });
-    expect(s.system.supplyAirC).toBe(26.5);
+    expect((s.system as { supplyAirC: number }).supplyAirC).toBe(26.5);
     expect(s.energy.itLoadKw).toBe(1500);
     expect(s.name).toBe(`${base.name} · supply air 26.5 °C, IT load 1,500 kW`);
-    expect(base.system.supplyAirC).toBe(24);
+    expect((base.system as { supplyAirC: number }).supplyAirC).toBe(24);
     // The base name comes back from the stored name, so a list can write the values again in the reader's units.
     expect(baseNameOfPoint(s.name, { 'system.supplyAirC': 26.5, 'energy.itLoadKw': 1500 })).toBe(base.name);
     expect(baseNameOfPoint('Renamed by hand', { 'system.supplyAirC': 26.5 })).toBe('Renamed by hand');
@@ -67,7 +67,7 @@ describe('applying a sweep point to a scenario', () => {
       'system.chilledWaterSupplyC = 26 is refused: system.chilledWaterSupplyC chilledWaterSupplyC must be below supplyAirC (got 26)',
     ]);
     const good = prepareSweep(base, [{ input: 'system.evaporativeEffectiveness', from: 0, to: 1, step: 0.25 }]);
-    expect(good.ok && good.points.map((p) => p.scenario.system.evaporativeEffectiveness)).toEqual([0, 0.25, 0.5, 0.75, 1]);
+    expect(good.ok && good.points.map((p) => (p.scenario.system as { evaporativeEffectiveness: number }).evaporativeEffectiveness)).toEqual([0, 0.25, 0.5, 0.75, 1]);
   });
 
   it('lists five bad points and counts the rest', () => {

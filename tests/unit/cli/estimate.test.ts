@@ -71,6 +71,37 @@ describe('estimate command line', { timeout: 30_000 }, () => {
     expect(Number(first[6])).toBeCloseTo(psy.GetHumRatioFromTDewPoint(10, psy.GetStandardAtmPressure(120)) * 1000, 3);
   });
 
+  it('runs the example hybrid hall: the loops and heat reuse in the summary, the loop columns after the others', () => {
+    const hourly = path.join(dir, 'hybrid.csv');
+    const scenario = path.join(root, 'sample-weather/scenarios/hybrid-w32-dry-cooler.json');
+    const r = estimate(['--weather', WEATHER, '--scenario', scenario, '--hourly', hourly, '--max-gap-hours', '0']);
+    expect(r.stderr).toBe('');
+    expect(r.code).toBe(0);
+    const summary = JSON.parse(r.stdout);
+    expect(summary.systemKind).toBe('hybrid');
+    expect(summary.engineVersion).toBe('scenario-engine 2.0.0');
+    // W32 facility water on dry coolers with a 5 K approach (the approach rule): free while T_db + 5 ≤ 32, so the
+    // 20 °C hour is free and the 31 °C and 35 °C hours need the trim chiller.
+    expect(summary.loops.liquid.hours).toMatchObject({ free: 1, adiabatic: 0, mechanical: 2, noData: 1, total: 4 });
+    expect(Object.keys(summary.loops.air)).toEqual(expect.arrayContaining(['hours', 'energy', 'water']));
+    // The hall is as demanding as its more demanding loop, hour by hour.
+    expect(summary.hours.mechanical).toBeGreaterThanOrEqual(summary.loops.liquid.hours.mechanical);
+    expect(summary.loops.liquid.energy.itKwh + summary.loops.air.energy.itKwh).toBeCloseTo(summary.energy.itKwh, 6);
+    // Return 32 + 10 = 42 °C over the 40 °C threshold: the liquid loop's heat, 0.8 × 2000 kW, in the three hours with data.
+    expect(summary.heatReuse).toMatchObject({ source: 'direct', returnWaterC: 42, availableHours: 3 });
+    expect(summary.heatReuse.availableKwh).toBeCloseTo(3 * 1600, 6);
+    const lines = readFileSync(hourly, 'utf8').trimEnd().split('\n');
+    expect(lines[0]).toBe(`${COLUMNS},liquid_mode,air_mode,liquid_mechanical_fraction`);
+    expect(lines.slice(1).map((line) => line.split(',').slice(11, 13))).toEqual([
+      ['free', expect.any(String)],
+      ['no_data', 'no_data'],
+      ['mechanical', expect.any(String)],
+      ['mechanical', expect.any(String)],
+    ]);
+    // 31 °C + 5 K = 36 °C water against 32 °C supply and a 10 K rise: the chiller carries (36 − 32) / 10 = 0.4.
+    expect(lines[3].split(',')[13]).toBe('0.400');
+  });
+
   it('counts a cold hour drier than the envelope as free cooling with humidification, its water apart', () => {
     const hourly = path.join(dir, 'winter-hourly.csv');
     const r = estimate(['--weather', WINTER, '--scenario', SCENARIO, '--hourly', hourly]);

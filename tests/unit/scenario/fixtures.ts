@@ -3,7 +3,7 @@
  * hours whose moisture and wet-bulb come from psychrolib (the reference library), so the engine's
  * psychrometrics are not used to make its own test inputs.
  */
-import { parseScenario, type Scenario, type ScenarioInput } from '../../../shared/scenario';
+import { parseScenario, type ScenarioInput, type SingleScenario } from '../../../shared/scenario';
 import type { OutdoorHours } from '../../../shared/scenario/classify';
 import { tightPsychrolib as psy } from '../psychrometrics/reference-psychrolib';
 import { hylandWexlerIcePa, hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
@@ -13,13 +13,13 @@ export const SEA_LEVEL_PA = 101_325;
 /** ASHRAE TC 9.9 2021 recommended range (recalled from memory), as in envelopes.ts. */
 export const RECOMMENDED = { dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9, dewPointMaxC: 15, rhMinPct: 0, rhMaxPct: 70 };
 
-type SystemInput = ScenarioInput['system'];
+type SystemInput = Exclude<ScenarioInput['system'], { kind: 'hybrid' }>;
 
 /** Fan power of the fixtures: 1 K of fan heat at their 12 K rise across the IT. */
 export const FIXTURE_FAN_POWER_FRACTION = 1 / 12;
 
 /** Design fan heat of a scenario, K (the classifier's plant input). */
-export const plantOf = (scenario: Scenario) => ({ fanHeatK: scenario.energy.fanPowerFraction * scenario.system.itDeltaTK });
+export const plantOf = (scenario: SingleScenario) => ({ fanHeatK: scenario.energy.fanPowerFraction * scenario.system.itDeltaTK });
 
 const SYSTEM_DEFAULTS: Record<SystemInput['kind'], SystemInput> = {
   'direct-air': { kind: 'direct-air', supplyAirC: 24, itDeltaTK: 12, evaporativeEffectiveness: 0.8 },
@@ -40,7 +40,7 @@ const SYSTEM_DEFAULTS: Record<SystemInput['kind'], SystemInput> = {
 export function makeScenario(
   kind: SystemInput['kind'],
   overrides: { system?: Record<string, unknown>; envelope?: Record<string, unknown>; energy?: Record<string, unknown>; elevationM?: number } = {},
-): Scenario {
+): SingleScenario {
   const parsed = parseScenario({
     name: `test ${kind}`,
     elevationM: overrides.elevationM ?? 0,
@@ -50,7 +50,7 @@ export function makeScenario(
     energy: { itLoadKw: 1000, mechanicalCop: 4, fanPowerFraction: FIXTURE_FAN_POWER_FRACTION, ...overrides.energy },
   });
   if (!parsed.ok) throw new Error(parsed.errors.join('; '));
-  return parsed.scenario;
+  return parsed.scenario as SingleScenario;
 }
 
 export interface ReferenceState {

@@ -5,6 +5,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { HOURLY_CSV_COLUMNS, MODE, writeFixed, writeHourlyCsv, type HourlyCsvInput } from '../../../shared/scenario';
+import { hourlyJson } from '../../../shared/report/hourly-json';
 
 const decoder = new TextDecoder();
 
@@ -74,6 +75,33 @@ describe('writeHourlyCsv', () => {
     const one = Float64Array.of(1);
     const lines = csvText({ timestampsMs: Float64Array.of(0), modes: Uint8Array.of(MODE.free), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: one, humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: Float64Array.of(0), humidified: null, utcOffsetMinutes: 0 }).split('\n');
     expect(lines[1]).toBe('1970-01-01T00:00Z,free,1.00,1.00,1.00,1.00,1000.000,1.00,0.000,,1970-01-01T00:00');
+  });
+
+  it('appends liquid_mode, air_mode and liquid_mechanical_fraction after the other columns for a hybrid run', () => {
+    const one = Float64Array.of(1, 1);
+    const input: HourlyCsvInput = {
+      timestampsMs: Float64Array.of(0, 3_600_000),
+      modes: Uint8Array.of(MODE.mechanical, MODE.noData),
+      dryBulbC: one,
+      wetBulbC: one,
+      dewPointC: one,
+      rhPct: one,
+      humidityRatio: one,
+      enthalpyKJPerKg: one,
+      mechanicalFraction: Float64Array.of(0.5, 0),
+      humidified: Uint8Array.of(0, 0),
+      utcOffsetMinutes: 0,
+      loops: { liquidModes: Uint8Array.of(MODE.free, MODE.noData), airModes: Uint8Array.of(MODE.mechanical, MODE.noData), liquidMechanicalFraction: Float64Array.of(0, 0) },
+    };
+    const lines = csvText(input).split('\n');
+    expect(lines[0]).toBe(`${HOURLY_CSV_COLUMNS.join(',')},liquid_mode,air_mode,liquid_mechanical_fraction`);
+    expect(lines[1]).toBe('1970-01-01T00:00Z,mechanical,1.00,1.00,1.00,1.00,1000.000,1.00,0.500,0,1970-01-01T00:00,free,mechanical,0.000');
+    expect(lines[2]).toBe('1970-01-01T01:00Z,no_data,1.00,1.00,1.00,1.00,1000.000,1.00,,,1970-01-01T01:00,no_data,no_data,');
+    // The JSON download carries the same columns.
+    const json = hourlyJson(input);
+    expect(json.columns.slice(-3)).toEqual(['liquid_mode', 'air_mode', 'liquid_mechanical_fraction']);
+    expect(json.hours.liquid_mode).toEqual(['free', 'no_data']);
+    expect(json.hours.liquid_mechanical_fraction).toEqual([0, null]);
   });
 
   it('refuses columns of different lengths, naming the column', () => {

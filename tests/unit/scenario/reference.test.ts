@@ -6,7 +6,7 @@
  * the libraries' tolerance (wet-bulb 0.005 K) of a threshold.
  */
 import { describe, expect, it } from 'vitest';
-import { MODE, runScenario, type Scenario } from '../../../shared/scenario';
+import { MODE, runScenario, type SingleScenario } from '../../../shared/scenario';
 import { makeScenario, psy, wetBulbOf, wFromDewPoint, wFromRh } from './fixtures';
 import { HOT_DRY_HIGH, HOT_HUMID, MILD_MARITIME, syntheticSeries } from './synthetic-climate';
 
@@ -54,7 +54,7 @@ const wbLine = (t: number, twb: number, p: number) => psy.GetHumRatioFromTWetBul
 const clamp01 = (x: number) => Math.min(1, Math.max(0, x));
 
 /** The issue's rules for one hour, on psychrolib states. */
-function referenceHour(scenario: Scenario, t: number, w: number, twb: number, p: number): ReferenceHour {
+function referenceHour(scenario: SingleScenario, t: number, w: number, twb: number, p: number): ReferenceHour {
   const s = scenario.system;
   const e = scenario.envelope;
   const Ts = s.supplyAirC;
@@ -114,7 +114,7 @@ function referenceHour(scenario: Scenario, t: number, w: number, twb: number, p:
   return { mode: MODE.mechanical, fraction: clamp01((wetWater - s.chilledWaterSupplyC) / s.chilledWaterDeltaTK) };
 }
 
-const SCENARIOS: Record<string, (elevationM: number) => Scenario> = {
+const SCENARIOS: Record<string, (elevationM: number) => SingleScenario> = {
   'direct-air': (elevationM) => makeScenario('direct-air', { elevationM, system: { supplyAirC: 24, evaporativeEffectiveness: 0.8 } }),
   'direct-air, no evaporative stage': (elevationM) => makeScenario('direct-air', { elevationM, system: { evaporativeEffectiveness: 0 } }),
   'indirect-air': (elevationM) => makeScenario('indirect-air', { elevationM, system: { evaporativeEffectiveness: 0.75, heatExchangerEffectiveness: 0.65 } }),

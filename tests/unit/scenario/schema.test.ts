@@ -92,7 +92,7 @@ describe('scenario schema', () => {
   it('refuses an unknown system kind and a chilled-water setpoint above the supply air', () => {
     const base = sample('water-side-tower.json');
     const unknown = parseScenario({ ...base, system: { ...base.system, kind: 'immersion' } });
-    expect(!unknown.ok && unknown.errors[0]).toMatch(/^system\.kind: kind must be 'direct-air', 'indirect-air' or 'water-side'/);
+    expect(!unknown.ok && unknown.errors[0]).toMatch(/^system\.kind: kind must be 'direct-air', 'indirect-air', 'water-side' or 'hybrid'/);
     const warmWater = parseScenario({ ...base, system: { ...base.system, chilledWaterSupplyC: 26 } });
     expect(!warmWater.ok && warmWater.errors).toEqual(['system.chilledWaterSupplyC: chilledWaterSupplyC must be below supplyAirC (got 26)']);
   });

@@ -33,7 +33,9 @@ export function compareRuns(runs: RunListing[], baselineId: number): ComparedRow
   const done = runs.filter((r) => r.results);
   const baseline = done.find((r) => r.id === baselineId) ?? done[0];
   if (!baseline) return [];
-  return metrics.map((metric) => {
+  // A hybrid hall's loop figures only when a hybrid is among the runs.
+  const anyHybrid = done.some((r) => r.results!.loops !== undefined);
+  return metrics.filter((m) => anyHybrid || !m.hybridOnly).map((metric) => {
     const base = metric.value(baseline.results! satisfies Results);
     return {
       metric,

@@ -12,6 +12,7 @@ import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
 import { dateTime, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
 import { standardPeriod } from '../../../../shared/time-zone';
+import { hallAirSystem } from '../../../../shared/scenario/hybrid';
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
 import { ModeShareBar } from '@/components/ui/mode-marks';
 import { runDisplayName } from '@/lib/sweep-value';
@@ -63,7 +64,7 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
   // Runs on the same file show its validation once.
   const files = runs.filter((run, i) => runs.findIndex((other) => other.climate.sha256 === run.climate.sha256 && other.site.name === run.site.name) === i);
   // Runs with the same envelope as applied (limits and site derating) show it once.
-  const envelopeKey = (run: ReportRun) => JSON.stringify([run.envelope.label, run.scenario.envelope, run.results.envelope, run.scenario.system.supplyAirC]);
+  const envelopeKey = (run: ReportRun) => JSON.stringify([run.envelope.label, run.scenario.envelope, run.results.envelope, hallAirSystem(run.scenario.system).supplyAirC]);
   const envelopes = runs
     .filter((run, i) => runs.findIndex((other) => envelopeKey(other) === envelopeKey(run)) === i)
     .map((run) => ({ run, runIds: runs.filter((other) => envelopeKey(other) === envelopeKey(run)).map((r) => r.id) }));
@@ -211,7 +212,11 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
       </ReportSection>
 
       <ReportSection id="cautions" title="8. Cautions">
-        <ResultCautions systemKind={runs.some((r) => r.scenario.system.kind === 'direct-air') ? 'direct-air' : runs[0].scenario.system.kind} evaporative={runs.some(usesWater)} />
+        <ResultCautions
+          systemKind={runs.some((r) => hallAirSystem(r.scenario.system).kind === 'direct-air') ? 'direct-air' : hallAirSystem(runs[0].scenario.system).kind}
+          evaporative={runs.some(usesWater)}
+          hybrid={runs.some((r) => r.scenario.system.kind === 'hybrid')}
+        />
         <ModelLimits />
       </ReportSection>
     </ReportSheet>

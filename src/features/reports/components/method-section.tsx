@@ -41,7 +41,27 @@ const classification: Record<ReportRun['scenario']['system']['kind'], ReactNode>
       <Equation>T_water = T_wb + approach (tower) · T + approach (dry) · T − ε·(T − T_wb) + approach (wetted)</Equation>
     </>
   ),
+  hybrid: (
+    <>
+      <p>
+        <strong>Hybrid hall</strong>: a share s of the IT heat goes to a liquid loop (cold plates, coolant distribution units, facility water at
+        T_fws), the rest to the hall air. The liquid loop is classified by the water-side rule with its facility-water supply as T_chws; the air
+        loop by the rule of its own kind; each carries its share of the IT load (the liquid loop has no hall fans). The hour's mode is the more
+        demanding of the loops that carry load (mechanical, then adiabatic assist, then free cooling); energy and water are the loops' sums, and
+        pPUE and WUE are over the whole hall. Coolant supply to the IT = T_fws + CDU approach.
+      </p>
+      <Equation>mode = max(mode_liquid, mode_air)        E = E_liquid + E_air        P_IT,liquid = s·P_IT,  P_IT,air = (1 − s)·P_IT</Equation>
+      <Equation>ERF = E_reused / E_data centre        (ISO/IEC 30134-6)        COP_heat pump = COP_cooling(lift) + 1</Equation>
+    </>
+  ),
 };
+
+type SystemKind = ReportRun['scenario']['system']['kind'];
+
+/** The classification rules a run uses: its own kind's, and for a hybrid also its loops'. */
+function kindsOf(system: ReportRun['scenario']['system']): SystemKind[] {
+  return system.kind === 'hybrid' ? ['hybrid', 'water-side', system.air.kind] : [system.kind];
+}
 
 /** The energy and water model of engine 2.0.0 (README "How it works", "Energy per hour" and "Water per hour"). */
 function EnergyAndWater() {
@@ -90,7 +110,7 @@ const ENGINE_1 = 'scenario-engine 1.0.0';
 
 /** How the figures were computed, with the equations and their sources (README "How it works"). */
 export function MethodSection({ runs }: { runs: ReportRun[] }) {
-  const kinds = [...new Set(runs.map((r) => r.scenario.system.kind))];
+  const kinds = [...new Set(runs.flatMap((r) => kindsOf(r.scenario.system)))];
   const engines = [...new Set(runs.map((r) => r.engineVersion))];
   return (
     <div className="space-y-3 text-sm leading-relaxed" data-testid="report-method">
@@ -137,7 +157,7 @@ export function MethodSection({ runs }: { runs: ReportRun[] }) {
         <ul className="list-disc space-y-0.5 pl-5">
           <li>ASHRAE Handbook—Fundamentals (2017), chapter 1, Psychrometrics.</li>
           <li>ASHRAE TC 9.9, Thermal Guidelines for Data Processing Environments, 5th edition (2021) and 4th edition (2015).</li>
-          <li>ISO/IEC 30134-2 (power usage effectiveness) and ISO/IEC 30134-9 (water usage effectiveness).</li>
+          <li>ISO/IEC 30134-2 (power usage effectiveness), ISO/IEC 30134-6 (energy reuse factor) and ISO/IEC 30134-9 (water usage effectiveness).</li>
           <li>WMO-No. 8, Guide to Instruments and Methods of Observation, part I ch. 4 (humidity over liquid water).</li>
           <li>Incropera, DeWitt, Bergman and Lavine, Fundamentals of Heat and Mass Transfer (ε-NTU); Çengel and Boles, Thermodynamics (Carnot COP).</li>
           <li>AHRI Standard 550/590 (rating conditions); ASHRAE Handbook—HVAC Systems and Equipment (fans, cooling towers).</li>

@@ -1,4 +1,5 @@
 import type { ReportRun } from '../../../../shared/report/report-data';
+import { usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
 
 const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
@@ -20,11 +21,18 @@ const systemWords: Record<ReportRun['scenario']['system']['kind'], string> = {
   'direct-air': 'direct outdoor air',
   'indirect-air': 'an indirect air-to-air heat exchanger',
   'water-side': 'a water-side economiser',
+  hybrid: 'a hybrid hall',
 };
 
 /** The cooling design in words: "direct outdoor air with an evaporative stage (ε 0.85)". */
 export function systemInWords(run: ReportRun): string {
-  const s = run.scenario.system;
+  const system = run.scenario.system;
+  if (system.kind === 'hybrid') {
+    const liquid = system.liquid;
+    const share = Math.round(system.liquidShare * 100);
+    return `a hybrid hall: ${share} % of the IT heat to facility water at ${liquid.chilledWaterSupplyC} °C on a ${liquid.heatRejection === 'cooling-tower' ? 'cooling tower' : 'dry cooler'}, ${100 - share} % to the hall air by ${systemInWords({ ...run, scenario: { ...run.scenario, system: system.air } })}`;
+  }
+  const s = system;
   let words = systemWords[s.kind];
   if (s.kind === 'water-side') words += s.heatRejection === 'cooling-tower' ? ' on a cooling tower' : ' on a dry cooler';
   if (s.evaporativeEffectiveness > 0) words += ` with an evaporative stage (effectiveness ${s.evaporativeEffectiveness})`;
@@ -33,8 +41,7 @@ export function systemInWords(run: ReportRun): string {
 
 /** Whether any water is evaporated: an evaporative stage or a cooling tower. */
 export function usesWater(run: ReportRun): boolean {
-  const s = run.scenario.system;
-  return s.evaporativeEffectiveness > 0 || (s.kind === 'water-side' && s.heatRejection === 'cooling-tower');
+  return usesEvaporativeWater(run.scenario.system);
 }
 
 export const humidityWords: Record<string, string> = {

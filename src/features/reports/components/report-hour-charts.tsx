@@ -22,10 +22,10 @@ export function ReportHourCharts({ run, downloadBase }: { run: ReportRun; downlo
   const envelopes = useMemo(() => [{ label: 'Envelope as run', limits: design.limits }], [design]);
   const markers = useMemo(
     () => [
-      { label: 'Supply, upper moisture limit', dryBulbC: run.scenario.system.supplyAirC, humidityRatio: r.envelope.highHumidityRatioGPerKg / 1000 },
-      { label: 'Supply, lower moisture limit', dryBulbC: run.scenario.system.supplyAirC, humidityRatio: r.envelope.lowHumidityRatioGPerKg / 1000 },
+      { label: 'Supply, upper moisture limit', dryBulbC: design.system.supplyAirC, humidityRatio: r.envelope.highHumidityRatioGPerKg / 1000 },
+      { label: 'Supply, lower moisture limit', dryBulbC: design.system.supplyAirC, humidityRatio: r.envelope.lowHumidityRatioGPerKg / 1000 },
     ],
-    [run.scenario.system.supplyAirC, r.envelope.highHumidityRatioGPerKg, r.envelope.lowHumidityRatioGPerKg],
+    [design.system.supplyAirC, r.envelope.highHumidityRatioGPerKg, r.envelope.lowHumidityRatioGPerKg],
   );
   const chartHours = useMemo(
     () =>

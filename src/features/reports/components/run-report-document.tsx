@@ -1,4 +1,5 @@
 import { standardDay, utcOffsetLabel } from '../../../../shared/time-zone';
+import { hallAirSystem } from '../../../../shared/scenario/hybrid';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { Notice } from '@/components/ui/notice';
 import { ResultCautions } from '@/components/ui/result-cautions';
@@ -8,6 +9,7 @@ import type { RunReportData } from '../../../../shared/report/report-data';
 import { ClimateFacts, SiteFacts } from './climate-facts';
 import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
+import { LoopsSection } from './loops-section';
 import { MethodSection, ModelLimits } from './method-section';
 import { dateTime, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
 import { ReportHourCharts } from './report-hour-charts';
@@ -120,6 +122,7 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
           <SubHeading>Water</SubHeading>
           <WaterTable results={r} unitSystem={unitSystem} engineVersion={run.engineVersion} />
         </div>
+        <LoopsSection results={r} unitSystem={unitSystem} />
       </ReportSection>
 
       {downloadBase && (
@@ -133,7 +136,7 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
       </ReportSection>
 
       <ReportSection id="cautions" title={`${downloadBase ? 8 : 7}. Cautions`}>
-        <ResultCautions systemKind={run.scenario.system.kind} evaporative={usesWater(run)} />
+        <ResultCautions systemKind={hallAirSystem(run.scenario.system).kind} evaporative={usesWater(run)} hybrid={run.scenario.system.kind === 'hybrid'} />
         <ModelLimits />
       </ReportSection>
     </ReportSheet>

@@ -1,4 +1,5 @@
 import { useEffect, useMemo, useState, type ReactNode } from 'react';
+import { hallAirSystem } from '../../../../shared/scenario/hybrid';
 import { CarpetPlot } from '@/components/charts/carpet-plot';
 import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Notice } from '@/components/ui/notice';
@@ -71,10 +72,10 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   );
   const markers = useMemo(
     () => [
-      { label: 'Supply setpoint at the upper moisture limit', dryBulbC: run.scenario.system.supplyAirC, humidityRatio: results.envelope.highHumidityRatioGPerKg / 1000 },
-      { label: 'Supply setpoint at the lower moisture limit', dryBulbC: run.scenario.system.supplyAirC, humidityRatio: results.envelope.lowHumidityRatioGPerKg / 1000 },
+      { label: 'Supply setpoint at the upper moisture limit', dryBulbC: hallAirSystem(run.scenario.system).supplyAirC, humidityRatio: results.envelope.highHumidityRatioGPerKg / 1000 },
+      { label: 'Supply setpoint at the lower moisture limit', dryBulbC: hallAirSystem(run.scenario.system).supplyAirC, humidityRatio: results.envelope.lowHumidityRatioGPerKg / 1000 },
     ],
-    [run.scenario.system.supplyAirC, results.envelope.highHumidityRatioGPerKg, results.envelope.lowHumidityRatioGPerKg],
+    [run.scenario.system, results.envelope.highHumidityRatioGPerKg, results.envelope.lowHumidityRatioGPerKg],
   );
 
   if (run.climateFileId === null || (columns.error instanceof ApiError && columns.error.code === 'climate_file_deleted')) {

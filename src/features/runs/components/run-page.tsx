@@ -1,5 +1,6 @@
 import { Link, useParams } from 'react-router-dom';
 import { utcOffsetLabel } from '../../../../shared/time-zone';
+import { hallAirSystem, usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRun, type RunRecord } from '../api/get-run';
@@ -8,6 +9,8 @@ import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { EnergyWaterCards } from './energy-water-cards';
+import { HeatReuseCard } from './heat-reuse-card';
+import { HybridLoopsPanel } from './hybrid-loops-panel';
 import { ModeHoursPanel } from './mode-hours-panel';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { RunHourViews } from './run-hour-views';
@@ -44,7 +47,7 @@ export function RunPage() {
   }
   const run = query.data.run;
   const results = run.status === 'done' ? run.results : null;
-  const evaporative = run.scenario.system.evaporativeEffectiveness > 0 || (run.scenario.system.kind === 'water-side' && run.scenario.system.heatRejection === 'cooling-tower');
+  const evaporative = usesEvaporativeWater(run.scenario.system);
   return (
     <div className="space-y-4">
       <header className="flex flex-wrap items-end justify-between gap-3">
@@ -120,6 +123,8 @@ export function RunPage() {
             </Panel>
           </div>
           <EnergyWaterCards results={results} engineVersion={run.engineVersion} />
+          <HybridLoopsPanel results={results} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} engineVersion={run.engineVersion} />
+          {results.heatReuse && <HeatReuseCard reuse={results.heatReuse} />}
           {results.hoursByYear.length > 1 && (
             <Panel title="By calendar year">
               <YearTable years={results.hoursByYear} engineVersion={run.engineVersion} />
@@ -129,7 +134,7 @@ export function RunPage() {
           <Panel title="Inputs as run">
             <RunInputs run={run} />
           </Panel>
-          <ResultCautions systemKind={run.scenario.system.kind} evaporative={evaporative} />
+          <ResultCautions systemKind={hallAirSystem(run.scenario.system).kind} evaporative={evaporative} hybrid={run.scenario.system.kind === 'hybrid'} />
         </>
       )}
     </div>

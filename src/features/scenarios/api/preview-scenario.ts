@@ -6,6 +6,8 @@ export interface ScenarioPreview {
   hours: { free: number; adiabatic: number; mechanical: number; noData: number; total: number };
   energy: { partialPue: number | null };
   water: { wueLPerKwh: number | null };
+  /** A hybrid hall's loops. */
+  loops?: { liquid: { hours: ScenarioPreview['hours'] }; air: { hours: ScenarioPreview['hours'] } };
 }
 
 /** Hours per mode for an unsaved scenario on one climate file; computed on the server, never stored. */

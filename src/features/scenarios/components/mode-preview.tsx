@@ -1,5 +1,6 @@
 import { useId } from 'react';
 import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
+import { LoopHoursTable } from '@/components/ui/loop-hours-table';
 import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
 import type { Scenario } from '../../../../shared/scenario/schema';
 import { useScenarioPreview } from '../api/preview-scenario';
@@ -65,6 +66,11 @@ export function ModePreview({
               ))}
             </tbody>
           </table>
+          {preview.data?.loops && scenario?.system.kind === 'hybrid' && (
+            <div className="mt-3">
+              <LoopHoursTable hall={hours} liquid={preview.data.loops.liquid.hours} air={preview.data.loops.air.hours} liquidShare={scenario.system.liquidShare} />
+            </div>
+          )}
           <p className="num mt-1 text-xs text-ink-soft">
             {total.toLocaleString('en')} h · pPUE {preview.data?.energy.partialPue?.toFixed(3) ?? '–'}
             {preview.isFetching && ' · updating…'}

@@ -14,6 +14,7 @@ import type { ScenarioFormValues } from '../utils/scenario-form';
 import { useDebouncedValue } from '../utils/use-debounced-value';
 import { useLeaveGuard } from '../utils/use-leave-guard';
 import { EnvelopePicker } from './envelope-picker';
+import { HybridFields } from './hybrid-fields';
 import { LoadProfileField } from './load-profile-field';
 import { DesignChartPreview } from './design-chart-preview';
 import { ModePreview } from './mode-preview';
@@ -22,6 +23,13 @@ import { RunPanel } from './run-panel';
 import { ScenarioRuns } from './scenario-runs';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { ChoiceCard } from '@/components/ui/choice-card';
+
+/** The energy inputs a system uses; a hybrid's are its liquid loop's (pumps, heat-rejection fans, tower) and the hall fans. */
+function energyFieldsFor(system: ScenarioFormValues['system']) {
+  if (system.kind !== 'hybrid') return fieldsFor(energyFields, system.kind, system.kind === 'water-side' ? system.heatRejection : undefined);
+  const tower = system.liquid.heatRejection === 'cooling-tower' || (system.air.kind === 'water-side' && system.air.heatRejection === 'cooling-tower');
+  return fieldsFor(energyFields, 'water-side', tower ? 'cooling-tower' : 'dry-cooler');
+}
 
 const resolver = zodResolver(scenarioSchema) as unknown as Resolver<ScenarioFormValues, unknown, Scenario>;
 
@@ -151,7 +159,7 @@ export function ScenarioForm({
             </div>
             <fieldset className="mt-3">
               <legend className="text-sm">System kind</legend>
-              <div className="mt-1 grid gap-2 md:grid-cols-3">
+              <div className="mt-1 grid gap-2 md:grid-cols-2 2xl:grid-cols-4">
                 {systemKinds.map((k) => (
                   <ChoiceCard key={k.kind} selected={kind === k.kind} label={k.label} help={k.help}>
                     <input type="radio" value={k.kind} {...register('system.kind')} className="mt-1 accent-harbour" />
@@ -181,9 +189,13 @@ export function ScenarioForm({
                 </div>
               </div>
             )}
-            {fieldsFor(systemFields, kind, values.system.kind === 'water-side' ? values.system.heatRejection : undefined).map((f) => (
-              <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
-            ))}
+            {kind === 'hybrid' ? (
+              <HybridFields control={control} register={register} setValue={setValue} system={values.system} disabled={readOnly} />
+            ) : (
+              fieldsFor(systemFields, kind, values.system.kind === 'water-side' ? values.system.heatRejection : undefined).map((f) => (
+                <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
+              ))
+            )}
           </Panel>
 
           <Panel title="Inlet envelope">
@@ -207,7 +219,7 @@ export function ScenarioForm({
               disabled={readOnly}
               onChange={(profile) => setValue('energy.itLoadProfile', profile, { shouldDirty: true, shouldValidate: true })}
             />
-            {fieldsFor(energyFields, kind, values.system.kind === 'water-side' ? values.system.heatRejection : undefined).map((f) => (
+            {energyFieldsFor(values.system).map((f) => (
               <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
             ))}
           </Panel>

@@ -3,7 +3,10 @@ import {
   directAirSchema,
   energySchema,
   envelopeSchema,
+  heatReuseSchema,
+  hybridSchema,
   indirectAirSchema,
+  liquidLoopSchema,
   scenarioSchema,
   waterSideSchema,
   type Scenario,
@@ -161,7 +164,34 @@ export const systemKinds: { kind: SystemKind; label: string; help: string }[] = 
   { kind: 'direct-air', label: 'Direct outdoor air', help: 'Outdoor air enters the hall; humidity follows the weather.' },
   { kind: 'indirect-air', label: 'Indirect air-to-air', help: 'Hall air recirculates through an exchanger; outdoor air never enters.' },
   { kind: 'water-side', label: 'Water-side economiser', help: 'Chilled water cooled by a dry cooler or tower when the weather allows.' },
+  { kind: 'hybrid', label: 'Hybrid hall (liquid + air)', help: 'Most heat to warm facility water through CDUs and cold plates; the rest to the hall air.' },
 ];
+
+const liq = liquidLoopSchema.shape as unknown as Record<string, AnyNumber>;
+
+/** A hybrid's share of IT heat to the liquid loop. */
+export const liquidShareField = field(hybridSchema.shape.liquidShare, 'system.liquidShare', 'shareAsPercent', 'Share of the IT heat the cold plates take to the facility water; the rest goes to the hall air.');
+
+/** The liquid loop of a hybrid: facility water to the CDUs, cooled like a water-side system. */
+export const liquidFields: NumericField[] = [
+  field(liq.chilledWaterSupplyC, 'system.liquid.chilledWaterSupplyC', 'temperature', 'Facility-water supply to the CDUs; a class sets its highest value, the equipment maker may set less.'),
+  field(liq.chilledWaterDeltaTK, 'system.liquid.chilledWaterDeltaTK', 'temperatureDifference', 'Facility-water rise across the CDUs; the return (supply + rise) is what heat reuse can take.'),
+  field(liq.approachK, 'system.liquid.approachK', 'temperatureDifference', 'Between the outdoor dry-bulb (wet-bulb for a tower) and the facility-water supply.'),
+  field(liq.cduApproachK, 'system.liquid.cduApproachK', 'temperatureDifference', 'The CDU’s approach: coolant to the cold plates is the facility supply plus this.'),
+  field(liq.evaporativeEffectiveness, 'system.liquid.evaporativeEffectiveness', 'ratio', 'Spray or pads on the dry cooler; 0 means a dry cooler without wetting.'),
+  { ...field(liq.dryCoolerAirRiseK, 'system.liquid.dryCoolerAirRiseK', 'temperatureDifference', 'Air temperature rise through the dry cooler at design; 10 K is common practice.'), heatRejection: 'dry-cooler' },
+  { ...field(liq.freezeProtectionWetBulbC, 'system.liquid.freezeProtectionWetBulbC', 'temperature', 'Below this outdoor wet-bulb the tower runs dry with its basin heaters on.'), heatRejection: 'cooling-tower' },
+];
+
+const reuse = heatReuseSchema.shape as unknown as Record<string, AnyNumber>;
+
+export const heatReuseFields: NumericField[] = [
+  field(reuse.thresholdC, 'system.heatReuse.thresholdC', 'temperature', 'Water temperature a heating network needs; 45 °C suits a low-temperature network.'),
+  field(reuse.reusedShare, 'system.heatReuse.reusedShare', 'shareAsPercent', 'How much of the available heat the network takes (your assumption, not a contract).'),
+];
+
+/** A field of the single systems moved under a hybrid's air loop ("system.supplyAirC" → "system.air.supplyAirC"). */
+export const asAirLoopField = (f: NumericField): NumericField => ({ ...f, path: f.path.replace(/^system\./, 'system.air.') });
 
 /** The fields that apply to a system kind (and, for water-side, to its heat rejection). */
 export function fieldsFor(fields: NumericField[], kind: SystemKind, heatRejection?: HeatRejection): NumericField[] {

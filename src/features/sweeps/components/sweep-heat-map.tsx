@@ -85,7 +85,7 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
       <label className="flex items-baseline gap-2 text-sm">
         <span className="text-ink-soft">Colour the cells by</span>
         <select className="rounded border border-rule bg-panel px-2 py-1" value={metric} onChange={(e) => setMetric(e.target.value as SweepMetric)} data-testid="heat-map-metric">
-          {SWEEP_METRICS.map((m) => (
+          {SWEEP_METRICS.filter((m) => m !== 'liquidMechanical' || points.some((p) => p.results?.liquidMechanicalHours !== undefined)).map((m) => (
             <option key={m} value={m}>
               {sweepMetricLabels[m]}
             </option>

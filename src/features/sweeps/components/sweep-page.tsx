@@ -5,6 +5,8 @@ import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { useProjectRole } from '@/lib/projects';
 import { useUnitSystem } from '@/lib/unit-system';
 import { SWEEP_INPUTS, zeroMechanical, zeroMechanicalText } from '../../../../shared/sweep';
+import { hallAirSystem, usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
+import { ResultCautions } from '@/components/ui/result-cautions';
 import { useCancelSweep } from '../api/cancel-sweep';
 import { useDeleteSweep } from '../api/delete-sweep';
 import { useSweep, type SweepRecord } from '../api/get-sweep';
@@ -32,18 +34,8 @@ function AxisSummary({ axis }: { axis: SweepRecord['axes'][number] }) {
 function SweepCautions({ sweep }: { sweep: SweepRecord }) {
   const system = sweep.baseScenario.system;
   const evaporative =
-    system.evaporativeEffectiveness > 0 ||
-    sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness') ||
-    (system.kind === 'water-side' && system.heatRejection === 'cooling-tower');
-  return (
-    <Notice tone="warn" title="Read these results as estimates">
-      <ul className="list-disc space-y-0.5 pl-5">
-        <li>They compare designs; they are not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering review.</li>
-        {system.kind === 'direct-air' && <li>Direct outside air brings particulate and gaseous contamination, smoke and condensation risk into the hall.</li>}
-        {evaporative && <li>Evaporative systems need water treatment and Legionella control under local rules.</li>}
-      </ul>
-    </Notice>
-  );
+    usesEvaporativeWater(system) || sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness');
+  return <ResultCautions systemKind={hallAirSystem(system).kind} evaporative={evaporative} hybrid={system.kind === 'hybrid'} />;
 }
 
 /** /projects/:projectId/sweeps/:sweepId — progress while the points run, then charts, a table and links to each run. */
