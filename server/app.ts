@@ -1,7 +1,7 @@
+import compression from 'compression';
 import express, { type Express } from 'express';
 import type { WorkerPool } from '../workers/pool';
 import { existsSync } from 'node:fs';
-import path from 'node:path';
 import type { Db } from './db/client';
 import type { RunQueue } from './runs/queue';
 import { loadSession, type Clock, type SessionPolicy } from './auth/session';
@@ -12,6 +12,7 @@ import type { Mailbox } from './mail/fake-smtp';
 import { mountRoutes, type RouteSpec } from './auth/access';
 import { refuseDeepJson } from './middleware/json-depth';
 import { securityHeaders } from './middleware/security-headers';
+import { clientFiles } from './middleware/client-files';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
@@ -92,6 +93,9 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders({ development: Boolean(deps.devMiddleware) }));
+  // brotli or gzip, as the request accepts, for every answer of 1 kB or more whose type is not compressed already
+  // (images, fonts and archives are left as they are); streamed answers are compressed as they go.
+  app.use(compression());
 
   const api = express.Router();
   api.use(express.json({ limit: '20mb', verify: (_req, _res, raw) => refuseDeepJson(raw) }));
@@ -104,9 +108,7 @@ export function createApp(deps: AppDeps): Express {
   if (deps.devMiddleware) {
     app.use(deps.devMiddleware);
   } else if (deps.clientDist && existsSync(deps.clientDist)) {
-    const indexHtml = path.join(deps.clientDist, 'index.html');
-    app.use(express.static(deps.clientDist, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => res.sendFile(indexHtml));
+    app.use(clientFiles(deps.clientDist));
   }
 
   app.use(errorHandler(deps.logError ?? ((error) => console.error(error))));
