@@ -1,4 +1,3 @@
-import compression from 'compression';
 import express, { type Express } from 'express';
 import type { WorkerPool } from '../workers/pool';
 import { existsSync } from 'node:fs';
@@ -13,6 +12,7 @@ import { mountRoutes, type RouteSpec } from './auth/access';
 import { refuseDeepJson } from './middleware/json-depth';
 import { securityHeaders } from './middleware/security-headers';
 import { clientFiles } from './middleware/client-files';
+import { compressAnswers } from './middleware/compress';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
@@ -93,9 +93,7 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders({ development: Boolean(deps.devMiddleware) }));
-  // brotli or gzip, as the request accepts, for every answer of 1 kB or more whose type is not compressed already
-  // (images, fonts and archives are left as they are); streamed answers are compressed as they go.
-  app.use(compression());
+  app.use(compressAnswers());
 
   const api = express.Router();
   api.use(express.json({ limit: '20mb', verify: (_req, _res, raw) => refuseDeepJson(raw) }));

@@ -4,9 +4,11 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
+import express, { type Express } from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runs } from '../../server/db/schema';
+import { compressAnswers } from '../../server/middleware/compress';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 import { createTestApp, type TestApp } from '../support/test-app';
 
@@ -36,28 +38,36 @@ afterAll(async () => {
   rmSync(clientDist, { recursive: true, force: true });
 });
 
+/** Serves `app` on a free loopback port for one call. */
+async function listening<T>(app: Express, use: (port: number) => Promise<T>): Promise<T> {
+  const server = app.listen(0, '127.0.0.1');
+  await new Promise<void>((resolve) => server.once('listening', () => resolve()));
+  try {
+    return await use((server.address() as AddressInfo).port);
+  } finally {
+    server.close();
+  }
+}
+
 /**
  * A GET with the answer's bytes as they came over the wire (supertest decodes gzip before a test sees it).
  * `person` signs it in; `encodings` is its Accept-Encoding.
  */
-async function raw(pathname: string, encodings: string, person?: TestPerson) {
-  const server = t.app.listen(0, '127.0.0.1');
-  await new Promise<void>((resolve) => server.once('listening', () => resolve()));
-  try {
-    const { port } = server.address() as AddressInfo;
-    return await new Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }>((resolve, reject) => {
-      const headers: Record<string, string> = { 'accept-encoding': encodings, ...(person ? { cookie: person.cookie } : {}) };
-      http
-        .get({ host: '127.0.0.1', port, path: pathname, headers }, (res) => {
-          const chunks: Buffer[] = [];
-          res.on('data', (chunk: Buffer) => chunks.push(chunk));
-          res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
-        })
-        .on('error', reject);
-    });
-  } finally {
-    server.close();
-  }
+async function raw(pathname: string, encodings: string, person?: TestPerson, app: Express = t.app) {
+  return listening(
+    app,
+    (port) =>
+      new Promise<{ status: number; headers: IncomingHttpHeaders; body: Buffer }>((resolve, reject) => {
+        const headers: Record<string, string> = { 'accept-encoding': encodings, ...(person ? { cookie: person.cookie } : {}) };
+        http
+          .get({ host: '127.0.0.1', port, path: pathname, headers }, (res) => {
+            const chunks: Buffer[] = [];
+            res.on('data', (chunk: Buffer) => chunks.push(chunk));
+            res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
+          })
+          .on('error', reject);
+      }),
+  );
 }
 const decoded = (encoding: string | undefined, body: Buffer) =>
   (encoding === 'br' ? brotliDecompressSync(body) : encoding === 'gzip' ? gunzipSync(body) : body).toString('utf8');
@@ -121,6 +131,42 @@ describe('compressed answers', () => {
     expect(page.status).toBe(200);
     expect(page.headers['content-encoding']).toBe('gzip');
     expect(decoded('gzip', page.body)).toBe(indexHtml);
+  });
+});
+
+describe('compression for routes with binary or streamed answers', () => {
+  // Float32 columns of a smooth hourly series: binary, and compressible.
+  const columns = Buffer.from(new Float32Array(Array.from({ length: 2000 }, (_, h) => Math.round(10 * Math.sin(h / 24)) / 2)).buffer);
+  const app = express();
+  app.use(compressAnswers());
+  app.get('/columns', (_req, res) => res.type('application/octet-stream').send(columns));
+  app.get('/archive', (_req, res) => res.type('application/zip').send(columns));
+  app.get('/columns-as-they-are', (_req, res) => res.set('cache-control', 'no-transform').type('application/octet-stream').send(columns));
+  app.get('/stream', (_req, res) => {
+    res.type('text/csv');
+    for (let i = 0; i < 500; i++) res.write(`${i},${(i * 0.37).toFixed(2)}\n`);
+    res.end();
+  });
+
+  it('compress binary columns, leave archives as they are, and leave alone a route that says no-transform', async () => {
+    const binary = await raw('/columns', 'gzip, br', undefined, app);
+    expect(binary.headers['content-encoding']).toBe('br');
+    expect(Buffer.compare(brotliDecompressSync(binary.body), columns)).toBe(0);
+    expect(binary.body.length).toBeLessThan(columns.length / 4);
+    for (const pathname of ['/archive', '/columns-as-they-are']) {
+      const plain = await raw(pathname, 'gzip, br', undefined, app);
+      expect(plain.headers['content-encoding']).toBeUndefined();
+      expect(Buffer.compare(plain.body, columns)).toBe(0);
+    }
+  });
+
+  it('compress a streamed answer as it goes, whole at the end', async () => {
+    const res = await raw('/stream', 'gzip', undefined, app);
+    expect(res.headers['content-encoding']).toBe('gzip');
+    expect(res.headers['transfer-encoding']).toBe('chunked');
+    const lines = decoded('gzip', res.body).trimEnd().split('\n');
+    expect(lines).toHaveLength(500);
+    expect(lines[499]).toBe('499,184.63');
   });
 });
 

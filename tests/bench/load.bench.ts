@@ -3,8 +3,9 @@
  * done) served by the app in this process, as a browser asks for it (a session cookie, gzip and brotli accepted).
  * - Per request, one keep-alive connection, the reads taken in turn: the project's run listing (what the project
  *   overview shows) and one run with its results, each as a ratio to /api/health in the same run, so the figures
- *   hold on a busy machine. "Cold" reads follow a write to the database, so nothing remembered from the previous
- *   read can answer them.
+ *   hold on a busy machine: of median wall times, and of mean CPU times (which waiting for a core does not
+ *   inflate). "Cold" reads follow a write to the database, so nothing remembered from the previous read can answer
+ *   them.
  * - Load: 100 connections for 20 s on the run listing from a worker thread; requests per second, latency
  *   percentiles, timeouts (no answer within 10 s) and errors (any status but 200); then the same on /api/health,
  *   for the listing's throughput as a share of it.
@@ -147,18 +148,36 @@ async function perRequest(s: DemoServer, targets: ReadTarget[]) {
   const headers = { cookie: s.cookie, 'accept-encoding': BROWSER_ENCODINGS };
   const bytes: Record<string, number> = {};
   const times: Record<string, number[]> = Object.fromEntries(targets.map((t) => [t.name, []]));
+  const cpuMs: Record<string, number[]> = Object.fromEntries(targets.map((t) => [t.name, []]));
   for (let turn = 0; turn < WARM_UP_TURNS + TIMED_TURNS; turn++) {
     for (const t of targets) {
       t.before?.();
+      const cpuBefore = process.cpuUsage();
       const answer = await timedGet(s.port, agent, t.path, headers);
+      const cpu = process.cpuUsage(cpuBefore);
       bytes[t.name] = answer.bytes;
       // The first turns warm up modules, the JIT and the connection.
-      if (turn >= WARM_UP_TURNS) times[t.name].push(answer.ms);
+      if (turn >= WARM_UP_TURNS) {
+        times[t.name].push(answer.ms);
+        cpuMs[t.name].push((cpu.user + cpu.system) / 1000);
+      }
     }
   }
   agent.destroy();
   const ms = (name: string) => median(times[name]);
-  return { ms, ratioTo: (name: string, reference: string) => ms(name) / ms(reference), bytes };
+  const meanCpuMs = (name: string) => cpuMs[name].reduce((sum, v) => sum + v, 0) / cpuMs[name].length;
+  return {
+    ms,
+    /** Median wall time per request, as a share of the reference's. */
+    ratioTo: (name: string, reference: string) => ms(name) / ms(reference),
+    meanCpuMs,
+    /**
+     * Mean CPU time of this process per request (server and client sides), as a share of the reference's: on a
+     * machine shared with other work, waiting for a core inflates long requests' wall time more than short ones'.
+     */
+    cpuRatioTo: (name: string, reference: string) => meanCpuMs(name) / meanCpuMs(reference),
+    bytes,
+  };
 }
 
 function loadFromWorker(options: LoadOptions): Promise<LoadOutcome> {
@@ -196,6 +215,10 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
         `(${warm.bytes.overview} B on the wire; ${cold.ms('overview').toFixed(2)} ms after a write, health then ${cold.ms('health').toFixed(2)} ms), ` +
         `run ${warm.ms('run').toFixed(2)} ms (${warm.bytes.run} B; ${cold.ms('run').toFixed(2)} ms after a write)`,
     );
+    log(
+      `load: CPU per request (mean): health ${warm.meanCpuMs('health').toFixed(2)} ms, run listing ${warm.meanCpuMs('overview').toFixed(2)} ms ` +
+        `(${cold.meanCpuMs('overview').toFixed(2)} ms after a write), run ${warm.meanCpuMs('run').toFixed(2)} ms (${cold.meanCpuMs('run').toFixed(2)} ms after a write)`,
+    );
 
     const underLoad = async (pathname: string) => {
       const outcome = await loadFromWorker({
@@ -226,10 +249,14 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
       loadOverviewMs: Number(warm.ms('overview').toFixed(2)),
       loadOverviewToHealth: Number(warm.ratioTo('overview', 'health').toFixed(2)),
       loadOverviewColdToHealth: Number(cold.ratioTo('overview', 'health').toFixed(2)),
+      loadOverviewCpuToHealth: Number(warm.cpuRatioTo('overview', 'health').toFixed(2)),
+      loadOverviewColdCpuToHealth: Number(cold.cpuRatioTo('overview', 'health').toFixed(2)),
       loadOverviewWireBytes: warm.bytes.overview,
       loadRunMs: Number(warm.ms('run').toFixed(2)),
       loadRunToHealth: Number(warm.ratioTo('run', 'health').toFixed(2)),
       loadRunColdToHealth: Number(cold.ratioTo('run', 'health').toFixed(2)),
+      loadRunCpuToHealth: Number(warm.cpuRatioTo('run', 'health').toFixed(2)),
+      loadRunColdCpuToHealth: Number(cold.cpuRatioTo('run', 'health').toFixed(2)),
       loadRunWireBytes: warm.bytes.run,
       loadOverviewRequestsPerSecond100: Math.round(overviewLoad.perSecond),
       loadOverviewP50Ms100: Number(overviewLoad.p50.toFixed(1)),
