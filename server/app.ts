@@ -1,7 +1,6 @@
 import express, { type Express } from 'express';
 import type { WorkerPool } from '../workers/pool';
 import { existsSync } from 'node:fs';
-import path from 'node:path';
 import type { Db } from './db/client';
 import type { RunQueue } from './runs/queue';
 import { loadSession, type Clock, type SessionPolicy } from './auth/session';
@@ -12,6 +11,8 @@ import type { Mailbox } from './mail/fake-smtp';
 import { mountRoutes, type RouteSpec } from './auth/access';
 import { refuseDeepJson } from './middleware/json-depth';
 import { securityHeaders } from './middleware/security-headers';
+import { clientFiles } from './middleware/client-files';
+import { compressAnswers } from './middleware/compress';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { healthRoutes } from './routes/health';
 import { projectRoutes } from './routes/projects';
@@ -94,6 +95,7 @@ export function createApp(deps: AppDeps): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders({ development: Boolean(deps.devMiddleware) }));
+  app.use(compressAnswers());
 
   const api = express.Router();
   api.use(express.json({ limit: '20mb', verify: (_req, _res, raw) => refuseDeepJson(raw) }));
@@ -106,9 +108,7 @@ export function createApp(deps: AppDeps): Express {
   if (deps.devMiddleware) {
     app.use(deps.devMiddleware);
   } else if (deps.clientDist && existsSync(deps.clientDist)) {
-    const indexHtml = path.join(deps.clientDist, 'index.html');
-    app.use(express.static(deps.clientDist, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => res.sendFile(indexHtml));
+    app.use(clientFiles(deps.clientDist));
   }
 
   app.use(errorHandler(deps.logError ?? ((error) => console.error(error))));

@@ -1,5 +1,5 @@
 import type { RequestHandler, Router } from 'express';
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { memberships, projectRoles, type ProjectRole } from '../db/schema';
 import { HttpError } from '../http-error';
@@ -53,7 +53,17 @@ export function route(method: HttpMethod, path: string, rule: AccessRule, ...han
   return { method, path, access: rule, handlers };
 }
 
-export function authorize(db: Db, rule: AccessRule): RequestHandler {
+/** The caller's role in a project, prepared once per database: every project route asks it. */
+function membershipLookup(db: Db) {
+  const query = db
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.projectId, sql.placeholder('projectId')), eq(memberships.userId, sql.placeholder('userId'))))
+    .prepare();
+  return (projectId: number, userId: number): ProjectRole | undefined => query.get({ projectId, userId })?.role;
+}
+
+export function authorize(db: Db, rule: AccessRule, roleIn = membershipLookup(db)): RequestHandler {
   return (req, _res, next) => {
     if (rule.level === 'public') return next();
     const user = req.user;
@@ -67,12 +77,7 @@ export function authorize(db: Db, rule: AccessRule): RequestHandler {
     if (!Number.isSafeInteger(projectId) || projectId <= 0) {
       throw new HttpError(400, 'invalid_request', `projectId must be a positive whole number, not "${req.params.projectId}".`);
     }
-    const membership = db
-      .select({ role: memberships.role })
-      .from(memberships)
-      .where(and(eq(memberships.projectId, projectId), eq(memberships.userId, user.id)))
-      .get();
-    const role: ProjectRole | undefined = user.isAdmin ? 'owner' : membership?.role;
+    const role: ProjectRole | undefined = user.isAdmin ? 'owner' : roleIn(projectId, user.id);
     // A non-member learns nothing about the project, not even that it exists.
     if (!role) throw new HttpError(404, 'not_found', `Project ${projectId} was not found.`);
     if (!roleAtLeast(role, rule.role)) {
@@ -85,7 +90,8 @@ export function authorize(db: Db, rule: AccessRule): RequestHandler {
 }
 
 export function mountRoutes(router: Router, db: Db, specs: RouteSpec[]): void {
-  for (const spec of specs) router[spec.method](spec.path, authorize(db, spec.access), ...spec.handlers);
+  const roleIn = membershipLookup(db);
+  for (const spec of specs) router[spec.method](spec.path, authorize(db, spec.access, roleIn), ...spec.handlers);
 }
 
 export { projectRoles };

@@ -1,14 +1,12 @@
-import { and, desc, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import { z } from 'zod';
 import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
 import { MODE_NAMES } from '../../shared/scenario';
-import type { SweepPointValues } from '../../shared/sweep';
-import { comparableResults } from '../../shared/report/summary-table';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
 import { findClimateFile } from '../climate/store';
-import { runHours, runs, scenarios, sites, sweeps } from '../db/schema';
+import { runHours, runs, scenarios, sites } from '../db/schema';
 import { HttpError } from '../http-error';
 import { requireStorage, runBytes, storageLimitOf } from '../storage/quota';
 import { validScenario } from './scenarios';
@@ -16,6 +14,8 @@ import { newRunValues } from '../runs/new-run';
 import { storedRunHours } from '../reports/hourly-results';
 import { closedRequestSignal } from '../request-signal';
 import { HOUR_COLUMN_NAMES, type HourColumnName } from '../../shared/report/hour-columns';
+import { createRunReads, runJsonText } from '../runs/run-json';
+import { createReadCache } from '../read-cache';
 
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
 const maxRunsPerRequest = 200;
@@ -47,55 +47,26 @@ const createRunsInput = z
     message: `at most ${maxRunsPerRequest} runs per request`,
   });
 
-/**
- * A run as the API gives it: the stored JSON parsed. A sweep's point also carries its sweep's name and the swept
- * inputs' values (sweepPoint, e.g. {"system.supplyAirC": 24}); a plain run has null for sweepId, sweepName and sweepPoint.
- */
-function present(row: typeof runs.$inferSelect, sweepName: string | null = null) {
-  const { scenarioJson, climateJson, resultsJson, sweepPointJson, ...rest } = row;
-  return {
-    ...rest,
-    sweepName: row.sweepId === null ? null : sweepName,
-    sweepPoint: sweepPointJson ? (JSON.parse(sweepPointJson) as SweepPointValues) : null,
-    scenario: JSON.parse(scenarioJson),
-    climate: JSON.parse(climateJson),
-    results: resultsJson ? JSON.parse(resultsJson) : null,
-  };
-}
-
 export function runRoutes(deps: AppDeps): RouteSpec[] {
   const { db, runQueue, pool } = deps;
 
-  function runOr404(projectId: number, params: unknown) {
-    const { runId } = runParams.parse(params);
-    const row = db
-      .select()
-      .from(runs)
-      .where(and(eq(runs.id, runId), eq(runs.projectId, projectId)))
-      .get();
-    if (!row) throw new HttpError(404, 'not_found', `Run ${runId} was not found in this project.`);
-    return row;
-  }
+  const readCache = createReadCache(db);
+  const reads = createRunReads(db);
 
-  const sweepNameOf = (sweepId: number | null) =>
-    sweepId === null ? null : (db.select({ name: sweeps.name }).from(sweeps).where(eq(sweeps.id, sweepId)).get()?.name ?? null);
-  const presentOne = (row: typeof runs.$inferSelect) => present(row, sweepNameOf(row.sweepId));
+  function runWithSweepOr404(projectId: number, params: unknown) {
+    const { runId } = runParams.parse(params);
+    const found = reads.one(projectId, runId);
+    if (!found) throw new HttpError(404, 'not_found', `Run ${runId} was not found in this project.`);
+    return found;
+  }
+  const runOr404 = (projectId: number, params: unknown) => runWithSweepOr404(projectId, params).run;
+  const runText = ({ run, sweepName }: { run: typeof runs.$inferSelect; sweepName: string | null }) => runJsonText(run, sweepName, run.resultsJson);
 
   return [
     route('get', '/projects/:projectId/runs', access.viewer, (req, res) => {
-      // The listing leaves out the per-month tables; the run page fetches the whole run.
-      const rows = db.select().from(runs).where(eq(runs.projectId, req.projectId!)).orderBy(desc(runs.id)).all();
-      // One read of the project's sweep names, so lists can fold a sweep's points into one named row.
-      const sweepNames = new Map(
-        db.select({ id: sweeps.id, name: sweeps.name }).from(sweeps).where(eq(sweeps.projectId, req.projectId!)).all().map((s) => [s.id, s.name]),
-      );
-      res.json({
-        runs: rows.map((row) => {
-          const run = present(row, row.sweepId === null ? null : (sweepNames.get(row.sweepId) ?? null));
-          const r = run.results;
-          return { ...run, results: r ? comparableResults(r) : null };
-        }),
-      });
+      // The listing leaves out the per-month tables; the run page fetches the whole run. Sweep points carry their
+      // sweep's name, so lists can fold a sweep's points into one named row.
+      readCache.sendJson(req, res, `runs:${req.projectId}`, () => reads.listingText(req.projectId!));
     }),
 
     route('post', '/projects/:projectId/runs', access.engineer, (req, res) => {
@@ -149,11 +120,12 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         return rows;
       });
       for (const run of created) runQueue.enqueue(run.id);
-      res.status(202).json({ runs: created.map((row) => present(row)) });
+      res.status(202).type('json').send(`{"runs":[${created.map((run) => runText({ run, sweepName: null })).join(',')}]}`);
     }),
 
     route('get', '/projects/:projectId/runs/:runId', access.viewer, (req, res) => {
-      res.json({ run: presentOne(runOr404(req.projectId!, req.params)) });
+      const { runId } = runParams.parse(req.params);
+      readCache.sendJson(req, res, `run:${req.projectId}:${runId}`, () => `{"run":${runText(runWithSweepOr404(req.projectId!, req.params))}}`);
     }),
 
     route('get', '/projects/:projectId/runs/:runId/hours', access.viewer, (req, res) => {
@@ -198,7 +170,8 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
       const run = runOr404(req.projectId!, req.params);
       if (!runQueue.cancel(run.id)) throw new HttpError(409, 'not_cancellable', `Run ${run.id} is ${run.status} and cannot be cancelled.`);
       recordRequestAudit(db, req, 'run.cancel', `run ${run.id}`, { runId: run.id });
-      res.json({ run: presentOne(runOr404(req.projectId!, req.params)) });
+      const { runId } = runParams.parse(req.params);
+      readCache.sendJson(req, res, `run:${req.projectId}:${runId}`, () => `{"run":${runText(runWithSweepOr404(req.projectId!, req.params))}}`);
     }),
 
     route('delete', '/projects/:projectId/runs/:runId', access.engineer, (req, res) => {
