@@ -97,7 +97,7 @@ describe('an engineer adding hourly weather to a project', () => {
     await expect.poll(() => page.getByRole('heading', { name: 'Monthly dry-bulb and dew point (°F)' }).isVisible()).toBe(true);
     // Hovering the chart shows the nearest hour's full state.
     await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent()).toContain('gr/lb');
-    const cell = page.getByTestId('moist-air-chart').locator('g[aria-label="rect"] rect').nth(40);
+    const cell = page.getByTestId('moist-air-chart').locator('g[data-mark="rect"] rect').nth(40);
     await cell.scrollIntoViewIfNeeded();
     const box = (await cell.boundingBox())!;
     await page.mouse.move(box.x + 1, box.y + 1);
