@@ -3,6 +3,7 @@ import type { AddressInfo } from 'node:net';
 import { createServer, type Server } from 'node:http';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import AxeBuilder from '@axe-core/playwright';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 import { inject } from 'vitest';
 import type { AppDeps } from '../../server/app';
@@ -22,9 +23,15 @@ export interface BrowserHarness {
   screenshot: (name: string) => Promise<string>;
   /**
    * A full-page screenshot from the top, so sticky side columns sit where a reader sees them;
-   * `settleMs` waits after the scroll for anything drawn on scroll.
+   * `settleMs` waits after the scroll for anything drawn on scroll. Every screen shot this way is also checked for
+   * accessibility first (`audit`), so a serious violation fails the test that visits it.
    */
   shot: (name: string, settleMs?: number) => Promise<string>;
+  /**
+   * Runs axe-core over the page as it stands (WCAG 2.1 A and AA rules) and throws, naming each rule, its impact and the
+   * first elements, when any violation is serious or critical.
+   */
+  audit: (where: string) => Promise<void>;
   /**
    * Signs the browser in as `person` with their session cookie, or signs it out (`null`). Leaves the page first:
    * requests still due from it (a debounced preview, a poll) must not go out as the next person.
@@ -79,13 +86,23 @@ export async function startBrowserHarness(overrides: Partial<AppDeps> = {}): Pro
     return (await res.json()) as T;
   };
 
+  const audit = async (where: string) => {
+    const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
+    const serious = result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+    if (serious.length === 0) return;
+    const lines = serious.map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join('; ')}${v.nodes.length > 3 ? ` and ${v.nodes.length - 3} more` : ''}`);
+    throw new Error(`Accessibility check of ${where} (${page.url()}) found ${serious.length} serious violation(s):\n${lines.join('\n')}`);
+  };
+
   return {
     baseUrl,
     page,
     context,
     testApp,
     screenshot,
+    audit,
     shot: async (name, settleMs = 0) => {
+      await audit(name);
       await page.evaluate(() => window.scrollTo(0, 0));
       if (settleMs > 0) await page.waitForTimeout(settleMs);
       return screenshot(name);

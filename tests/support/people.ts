@@ -17,6 +17,11 @@ export function personWithSession(db: Db, email: string, options: { isAdmin?: bo
     .values({ email, name: email.split('@')[0], isAdmin: options.isAdmin ?? false })
     .returning()
     .get();
+  return sessionFor(db, user);
+}
+
+/** A fresh session for someone already stored (a demo person, say), as if they had just signed in. */
+export function sessionFor(db: Db, user: { id: number; email: string }): TestPerson {
   const token = randomBytes(24).toString('base64url');
   const now = Date.now();
   db.insert(sessions)
@@ -28,7 +33,7 @@ export function personWithSession(db: Db, email: string, options: { isAdmin?: bo
       expiresAt: new Date(now + 3_600_000),
     })
     .run();
-  return { id: user.id, email, cookie: `${sessionCookieName}=${token}` };
+  return { id: user.id, email: user.email, cookie: `${sessionCookieName}=${token}` };
 }
 
 export function projectWithMembers(db: Db, name: string, members: Array<[TestPerson, ProjectRole]>): number {

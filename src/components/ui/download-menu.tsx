@@ -11,11 +11,22 @@ export interface DownloadLink {
  */
 export function DownloadMenu({ links, label = 'Download' }: { links: DownloadLink[]; label?: string }) {
   return (
-    <details className="relative print:hidden" data-testid="download-menu">
+    <details
+      className="relative print:hidden"
+      data-testid="download-menu"
+      // Escape closes the open menu and leaves the focus on its button, as a menu does.
+      onKeyDown={(event) => {
+        const menu = event.currentTarget;
+        if (event.key !== 'Escape' || !menu.open) return;
+        event.preventDefault();
+        menu.open = false;
+        menu.querySelector('summary')?.focus();
+      }}
+    >
       <summary className="cursor-pointer list-none rounded border border-rule bg-panel px-3 py-1.5 text-sm hover:bg-mist [&::-webkit-details-marker]:hidden">
         {label} <span aria-hidden>▾</span>
       </summary>
-      <ul className="absolute right-0 z-20 mt-1 w-72 rounded-md border border-rule bg-panel p-1 text-sm shadow-lg">
+      <ul className="absolute right-0 z-20 mt-1 w-72 max-w-[calc(100vw-2rem)] rounded-md border border-rule bg-panel p-1 text-sm shadow-lg">
         {links.map((link) => (
           <li key={link.href}>
             <a

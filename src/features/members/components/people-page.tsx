@@ -17,6 +17,7 @@ export function PeoplePage() {
           <Notice tone="bad" title="Not changed">{setAdmin.error.message}</Notice>
         </div>
       )}
+      <div className="overflow-x-auto">
       <table className="w-full text-sm">
         <thead className="text-left text-xs text-ink-faint">
           <tr>
@@ -39,6 +40,7 @@ export function PeoplePage() {
                     <input
                       type="checkbox"
                       className="accent-harbour"
+                      aria-label={`${p.name} is an organisation admin`}
                       checked={p.isAdmin}
                       disabled={lastAdmin || setAdmin.isPending}
                       onChange={(e) => setAdmin.mutate({ userId: p.id, isAdmin: e.target.checked })}
@@ -51,6 +53,7 @@ export function PeoplePage() {
           })}
         </tbody>
       </table>
+      </div>
     </Panel>
   );
 }

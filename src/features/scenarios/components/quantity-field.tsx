@@ -30,8 +30,8 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
   // The schema words its range in SI; show the person's own units instead.
   const message = error && (/^must be a number from/.test(error) ? `Enter a number from ${range}.` : inWords(error));
   return (
-    <div className="grid grid-cols-[minmax(11rem,15rem)_7.5rem_4.5rem_1fr] items-baseline gap-x-3 py-1.5">
-      <label htmlFor={id} className="text-sm text-ink">
+    <div className="grid grid-cols-[7.5rem_4.5rem_minmax(0,1fr)] items-baseline gap-x-3 py-1.5 sm:grid-cols-[minmax(11rem,15rem)_7.5rem_4.5rem_1fr]">
+      <label htmlFor={id} className="col-span-full text-sm text-ink sm:col-span-1">
         {field.label}
       </label>
       <input
@@ -58,11 +58,11 @@ export function QuantityField<T extends FieldValues, TOut extends FieldValues>({
       />
       <span className="text-xs text-ink-soft">{unit}</span>
       <span className="num text-xs text-ink-faint">{range}</span>
-      <p id={`${id}-help`} className="col-start-2 col-end-5 text-xs text-ink-soft">
+      <p id={`${id}-help`} className="col-span-full text-xs text-ink-soft sm:col-start-2 sm:col-end-5">
         {field.help}
       </p>
       {message && (
-        <p id={`${id}-error`} role="alert" className="col-start-2 col-end-5 text-xs font-medium text-signal-bad">
+        <p id={`${id}-error`} role="alert" className="col-span-full text-xs font-medium text-signal-bad sm:col-start-2 sm:col-end-5">
           {message}
         </p>
       )}

@@ -139,7 +139,7 @@ export function ScenarioForm({
       <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_26rem]">
         <fieldset disabled={readOnly} className="min-w-0 space-y-4">
           <Panel title="Design">
-            <div className="grid grid-cols-[minmax(11rem,15rem)_1fr] items-baseline gap-x-3 gap-y-2">
+            <div className="grid grid-cols-1 items-baseline sm:grid-cols-[minmax(11rem,15rem)_1fr] gap-x-3 gap-y-2">
               <label htmlFor="scenario-name" className="text-sm">
                 Name
               </label>
@@ -176,7 +176,7 @@ export function ScenarioForm({
 
           <Panel title="Setpoints, effectivenesses and approaches">
             {kind === 'water-side' && (
-              <div className="grid grid-cols-[minmax(11rem,15rem)_1fr] items-baseline gap-x-3 pb-1.5">
+              <div className="grid grid-cols-1 items-baseline sm:grid-cols-[minmax(11rem,15rem)_1fr] gap-x-3 pb-1.5">
                 <label htmlFor="heat-rejection" className="text-sm">
                   Heat rejection
                 </label>

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useId, useMemo, useState } from 'react';
+import { useEffect, useId, useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import type { SitePrefill } from '../../../../shared/climate/formats/site-check';
@@ -82,6 +82,9 @@ export function SiteForm({
         }
       : formValues(initial ?? {}, unitSystem),
   });
+  // The form opens because someone asked for it: the caret goes to its first field.
+  const { setFocus } = form;
+  useEffect(() => setFocus('name'), [setFocus]);
   const [fillNote, setFillNote] = useState<string | null>(null);
 
   /** Fills the form from what a weather file's header says (its first 64 kB are read here, nothing is sent). */

@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { standardPressurePa } from '../../../../shared/psychrometrics';
 import { standardOffsetMinutes, utcOffsetLabel } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
@@ -45,6 +45,16 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
   const { unitSystem } = useUnitSystem();
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
+  // When the form closes, the focus goes back to "Edit site", and a save is announced.
+  const editButton = useRef<HTMLButtonElement>(null);
+  const [closed, setClosed] = useState<{ saved: boolean } | null>(null);
+  useEffect(() => {
+    if (!editing && closed) editButton.current?.focus();
+  }, [editing, closed]);
+  const close = (saved: boolean) => {
+    setEditing(false);
+    setClosed({ saved });
+  };
   const remove = useDeleteSite(projectId);
   const facts: Array<[string, string, string?]> = [
     ['Elevation', formatQuantity('elevation', unitSystem, site.elevationM)],
@@ -61,7 +71,7 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
         </div>
         {canEdit && !editing && (
           <div className="flex flex-wrap gap-2 text-sm">
-            <button type="button" onClick={() => setEditing(true)} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+            <button ref={editButton} type="button" onClick={() => setEditing(true)} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
               Edit site
             </button>
             {!confirming && (
@@ -72,6 +82,9 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
           </div>
         )}
       </div>
+      <p role="status" className="text-sm text-signal-ok empty:hidden">
+        {closed?.saved ? 'Site saved.' : ''}
+      </p>
       {confirming && (
         <div role="alertdialog" aria-label="Delete site" className="flex flex-wrap items-center gap-2 rounded border border-signal-bad/40 bg-[#fbeceb] px-3 py-2 text-sm">
           <span>
@@ -92,7 +105,7 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
       )}
       {editing ? (
         <Panel title="Edit site">
-          <SiteForm projectId={projectId} site={site} onCreated={() => setEditing(false)} onCancel={() => setEditing(false)} />
+          <SiteForm projectId={projectId} site={site} onCreated={() => close(true)} onCancel={() => close(false)} />
           <p className="mt-2 text-xs text-ink-soft">
             Changing the elevation or time zone affects how files are read from now on; climate files already stored keep the hours they were read with.
           </p>

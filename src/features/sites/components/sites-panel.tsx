@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
@@ -12,17 +12,30 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
   const sites = useSites(projectId);
   const { unitSystem } = useUnitSystem();
   const [adding, setAdding] = useState(false);
+  // When the form closes, the focus goes back to the button that opened it, and a saved site is announced.
+  const addButton = useRef<HTMLButtonElement>(null);
+  const [closed, setClosed] = useState<{ saved: string | null } | null>(null);
+  useEffect(() => {
+    if (!adding && closed) addButton.current?.focus();
+  }, [adding, closed]);
+  const close = (saved: string | null) => {
+    setAdding(false);
+    setClosed({ saved });
+  };
   return (
     <Panel
       title="Sites"
       actions={
         canEdit && !adding ? (
-          <button type="button" onClick={() => setAdding(true)} className="rounded border border-rule px-2.5 py-1 text-xs hover:bg-mist">
+          <button ref={addButton} type="button" onClick={() => setAdding(true)} className="rounded border border-rule px-2.5 py-1 text-xs hover:bg-mist">
             Add site
           </button>
         ) : undefined
       }
     >
+      <p role="status" className="text-xs text-signal-ok empty:hidden">
+        {closed?.saved ? `Site “${closed.saved}” added.` : ''}
+      </p>
       {sites.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
       {sites.isError && <Notice tone="bad" title="Sites could not be loaded">{sites.error.message}</Notice>}
       {sites.data && sites.data.sites.length === 0 && !adding && (
@@ -31,6 +44,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
         </p>
       )}
       {sites.data && sites.data.sites.length > 0 && (
+        <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <thead>
             <tr className="border-b border-rule text-xs text-ink-soft">
@@ -57,10 +71,11 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
             ))}
           </tbody>
         </table>
+        </div>
       )}
       {adding && (
         <div className="mt-3 rounded border border-rule p-3">
-          <SiteForm projectId={projectId} onCreated={() => setAdding(false)} onCancel={() => setAdding(false)} />
+          <SiteForm projectId={projectId} onCreated={(site) => close(site.name)} onCancel={() => close(null)} />
         </div>
       )}
     </Panel>

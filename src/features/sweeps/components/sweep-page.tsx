@@ -79,7 +79,7 @@ export function SweepPage() {
           <h1 className="text-xl font-semibold">{sweep.name}</h1>
           <p className="text-sm text-ink-soft">
             {sweep.baseScenarioId !== null ? (
-              <Link to={`/projects/${projectId}/scenarios/${sweep.baseScenarioId}`} className="text-harbour underline-offset-2 hover:underline">
+              <Link to={`/projects/${projectId}/scenarios/${sweep.baseScenarioId}`} className="text-harbour underline underline-offset-2">
                 {sweep.baseScenario.name}
               </Link>
             ) : (
