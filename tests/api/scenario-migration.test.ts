@@ -134,13 +134,14 @@ describe('demo runs made by an older engine', () => {
     // As an engine-1.0.0 installation left it: every run finished by the old engine.
     demo.db.update(runs).set({ engineVersion: 'scenario-engine 1.0.0', status: 'done', resultsJson: '{}' }).run();
     const before = demo.db.select().from(runs).all();
-    expect(requeueOldDemoRuns(demo.db)).toBe(12);
+    // The demo's plain runs: 3 scenarios on 4 sites, and the hybrid hall on its warm site.
+    expect(requeueOldDemoRuns(demo.db)).toBe(13);
     const after = demo.db.select().from(runs).all();
     const added = after.filter((r) => !before.some((b) => b.id === r.id));
-    expect(added).toHaveLength(12);
+    expect(added).toHaveLength(13);
     for (const r of added) expect(r).toMatchObject({ engineVersion: ENGINE_VERSION, status: 'queued', sweepId: null });
     // Each pair of scenario and climate file that had a plain run gets one new run.
-    expect(new Set(added.map((r) => `${r.scenarioId}:${r.climateFileId}`)).size).toBe(12);
+    expect(new Set(added.map((r) => `${r.scenarioId}:${r.climateFileId}`)).size).toBe(13);
     for (const b of before) expect(after.find((r) => r.id === b.id)).toEqual(b);
     // A restart adds nothing more.
     expect(requeueOldDemoRuns(demo.db)).toBe(0);
