@@ -70,6 +70,12 @@ export default tseslint.config(
     },
   },
   {
+    // CommonJS files (a --require preload of the bench) load what they need with require().
+    files: ['**/*.cjs'],
+    languageOptions: { sourceType: 'commonjs' },
+    rules: { '@typescript-eslint/no-require-imports': 'off' },
+  },
+  {
     files: ['src/**/*.{ts,tsx}', 'tests/component/**/*.{ts,tsx}'],
     languageOptions: { globals: { ...globals.browser } },
     ...reactHooks.configs.flat['recommended-latest'],

@@ -89,7 +89,11 @@ function chartPressurePa(series: ScenarioSeries, elevationM: number): number {
   if (station) {
     let sum = 0;
     let count = 0;
-    for (let i = 0; i < station.length; i++) if (station[i] === station[i]) (sum += station[i]), count++;
+    for (let i = 0; i < station.length; i++) {
+      if (station[i] !== station[i]) continue; // NaN: no reading this hour
+      sum += station[i];
+      count++;
+    }
     if (count > 0) return sum / count;
   }
   return standardPressurePa(elevationM);

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useRef, useState } from 'react';
 import { NavLink, Outlet, useLocation } from 'react-router-dom';
 import { HealthIndicator } from '@/features/health/components/health-indicator';
 import { AccountMenu, useAdminNavItems } from '@/features/auth/components/account-menu';
@@ -16,7 +16,12 @@ export function AppShell() {
   const [menuOpen, setMenuOpen] = useState(false);
   const menuButton = useRef<HTMLButtonElement>(null);
   const { pathname } = useLocation();
-  useEffect(() => setMenuOpen(false), [pathname]);
+  // A new page closes the menu: adjusted while rendering, as React advises for state that follows a prop.
+  const [menuPath, setMenuPath] = useState(pathname);
+  if (menuPath !== pathname) {
+    setMenuPath(pathname);
+    setMenuOpen(false);
+  }
   useScrollableTablesFocusable();
   return (
     <div className="min-h-screen flex flex-col">

@@ -78,9 +78,9 @@ async function measure(stage: RunPageStage, context: BrowserContext, url: string
 
   // Times are on the page's clock (0 at navigation); the network's, seen here, are moved onto it.
   await page.goto(url, { waitUntil: 'commit' });
-  let settleMs = 0;
-  let longestTaskMs = 0;
-  let tilesMs: number | null = null;
+  let settleMs: number;
+  let longestTaskMs: number;
+  let tilesMs: number | null;
   const waitStarted = performance.now();
   for (;;) {
     const seen = await page.evaluate(() => {

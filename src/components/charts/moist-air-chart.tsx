@@ -78,7 +78,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
   const window = useMemo(() => fittedWindow, [windowKey]); // eslint-disable-line react-hooks/exhaustive-deps
   const regionGrid = useMemo(() => regionGridFor(window, compact), [window, compact]);
   // The cell states (wet-bulb solves) depend on the window only; a setpoint change re-runs the classifier alone.
-  const cellStates = useMemo(() => (design ? gridStates(regionGrid, pressurePa) : null), [design !== null, regionGrid, pressurePa]); // eslint-disable-line react-hooks/exhaustive-deps
+  const hasDesign = design !== null;
+  const cellStates = useMemo(() => (hasDesign ? gridStates(regionGrid, pressurePa) : null), [hasDesign, regionGrid, pressurePa]);
   const regions = useMemo(() => (design && cellStates ? operatingRegionGrid(design, cellStates) : null), [design, cellStates]);
   const densityGrid = useMemo(() => densityGridFor(window, unitSystem), [window, unitSystem]);
   const cells = useMemo(() => (hours.dryBulbC.length ? binHours(hours, densityGrid) : null), [hours, densityGrid]);

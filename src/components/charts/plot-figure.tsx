@@ -75,7 +75,7 @@ export function PlotFigure({ render, label, placeholderHeightPx = 320, className
       cancelled = true;
       figure?.remove();
     };
-  }, [render, widthPx]);
+  }, [render, widthPx, label]);
 
   return (
     <figure aria-label={label} className={className}>
