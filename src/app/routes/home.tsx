@@ -49,7 +49,7 @@ export function HomeRoute() {
                 {projects.data.projects.map((p) => (
                   <tr key={p.id}>
                     <td className="py-2 pr-4">
-                      <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                      <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
                         {p.name}
                       </Link>
                       {p.description && <p className="text-ink-soft">{p.description}</p>}

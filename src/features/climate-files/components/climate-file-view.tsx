@@ -86,7 +86,7 @@ function Loaded({
           {file.projection && (
             <p className="text-sm text-ink-soft">
               A future-climate projection of {file.projection.parentName}, not measured weather.{' '}
-              <Link to={`/projects/${projectId}/projections/${fileId}`} className="text-harbour underline-offset-2 hover:underline">
+              <Link to={`/projects/${projectId}/projections/${fileId}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                 Today and the projection side by side
               </Link>
             </p>

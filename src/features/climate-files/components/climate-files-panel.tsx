@@ -56,7 +56,7 @@ export function ClimateFilesPanel({
               return (
                 <tr key={f.id} className="border-b border-rule/60">
                   <td className="py-1">
-                    <Link to={`/projects/${projectId}/climate-files/${f.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                    <Link to={`/projects/${projectId}/climate-files/${f.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
                       {f.name}
                     </Link>
                     {f.projection && (

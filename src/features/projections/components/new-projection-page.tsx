@@ -37,7 +37,7 @@ export function NewProjectionPage() {
         </div>
         {parent && (
           <p className="text-sm text-ink-soft">
-            From <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">{parent.name}</Link> · {parent.siteName} ·{' '}
+            From <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 underline hover:decoration-2">{parent.name}</Link> · {parent.siteName} ·{' '}
             <span className="num">{parent.hours.toLocaleString('en')}</span> hours
           </p>
         )}

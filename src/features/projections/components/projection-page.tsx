@@ -48,7 +48,7 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
           <p className="text-sm text-ink-soft">
             Made from{' '}
             {parent ? (
-              <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">{parent.name}</Link>
+              <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 underline hover:decoration-2">{parent.name}</Link>
             ) : (
               <span>{d.parent.name} (since deleted)</span>
             )}

@@ -58,7 +58,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
             {sites.data.sites.map((s) => (
               <tr key={s.id} className="border-b border-rule/60">
                 <td className="py-1">
-                  <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                  <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
                     {s.name}
                   </Link>
                 </td>

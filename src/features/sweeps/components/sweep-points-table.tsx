@@ -112,7 +112,7 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
             {points.map((p, i) => (
               <tr key={p.runId} className="border-b border-rule/60">
                 <td className="num py-1 text-left">
-                  <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 hover:underline">
+                  <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                     {i + 1} · run #{p.runId}
                   </Link>
                 </td>
