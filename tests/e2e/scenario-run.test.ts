@@ -262,7 +262,7 @@ describe('a run over several years of weather', () => {
     await chartsDrawn(page);
     await h.shot('run-page-years-ip');
     await h.useUnits('SI');
-  });
+  }, 150_000);
 });
 
 describe('a viewer of the project', () => {

@@ -59,7 +59,7 @@ export function ComparePage() {
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">
-          {runsQuery.isPending && <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+          {runsQuery.isPending && <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading runs" />}
           {runsQuery.isError && <Notice tone="bad" title="Runs could not be loaded">{runsQuery.error.message}</Notice>}
           {runsQuery.data && done.length === 0 && (
             <p className="text-sm text-ink-soft">No finished runs yet. Open a scenario, run it on a climate file, then come back to compare.</p>
@@ -89,7 +89,7 @@ export function ComparePage() {
                 <ComparisonTable rows={rows} runs={selected} baselineId={baselineId} />
               </Panel>
               <Panel title="Hours per mode by month">
-                {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}
+                {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div className="h-80 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading monthly hours" />}
               </Panel>
               {anyMultiYear && (
                 <Panel title="Year to year: mechanical hours">
