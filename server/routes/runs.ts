@@ -32,7 +32,11 @@ const hourColumnsQuery = z.object({
     .transform((list) => (list === undefined ? [...HOUR_COLUMN_NAMES] : list.split(',').map((name) => name.trim())))
     .pipe(
       z
-        .array(z.enum(HOUR_COLUMN_NAMES as [HourColumnName, ...HourColumnName[]], { error: (issue) => `columns: unknown column "${String(issue.input)}"; known: ${HOUR_COLUMN_NAMES.join(', ')}` }))
+        .array(
+          z.enum(HOUR_COLUMN_NAMES as [HourColumnName, ...HourColumnName[]], {
+            error: (issue) => `columns: unknown column "${String(issue.input)}"; known: ${HOUR_COLUMN_NAMES.join(', ')}`,
+          }),
+        )
         .min(1, 'columns must name at least one column'),
     ),
 });
@@ -120,7 +124,10 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         return rows;
       });
       for (const run of created) runQueue.enqueue(run.id);
-      res.status(202).type('json').send(`{"runs":[${created.map((run) => runText({ run, sweepName: null })).join(',')}]}`);
+      res
+        .status(202)
+        .type('json')
+        .send(`{"runs":[${created.map((run) => runText({ run, sweepName: null })).join(',')}]}`);
     }),
 
     route('get', '/projects/:projectId/runs/:runId', access.viewer, (req, res) => {

@@ -108,12 +108,7 @@ function chosen(
 }
 
 /** Applies the overrides in place; errors go to the log. */
-export function applyMappingOverride(
-  recognition: Recognition,
-  override: Partial<ColumnMappingOverride>,
-  headers: string[],
-  log: IssueLog,
-): void {
+export function applyMappingOverride(recognition: Recognition, override: Partial<ColumnMappingOverride>, headers: string[], log: IssueLog): void {
   if (override.time) recognition.time = overrideTime(override.time, headers, log);
   if (override.dryBulb) {
     recognition.dryBulb = chosen({ ...override.dryBulb, quantity: 'dry-bulb' }, headers, log);

@@ -124,13 +124,15 @@ function runSingle(scenario: SingleScenario, series: ScenarioSeries, options: Ru
 
   const warnings: string[] = [];
   if (system.supplyAirC > limits.dryBulbMaxC) {
-    warnings.push(`supplyAirC ${system.supplyAirC} °C is above the envelope's maximum dry-bulb ${round2(limits.dryBulbMaxC)} °C${limits.dryBulbMaxC < envelope.dryBulbMaxC ? ` (derated for ${elevationM} m)` : ''}: every hour is an excursion.`);
+    warnings.push(
+      `supplyAirC ${system.supplyAirC} °C is above the envelope's maximum dry-bulb ${round2(limits.dryBulbMaxC)} °C${limits.dryBulbMaxC < envelope.dryBulbMaxC ? ` (derated for ${elevationM} m)` : ''}: every hour is an excursion.`,
+    );
   }
   if (system.supplyAirC < limits.dryBulbMinC) {
     warnings.push(`supplyAirC ${system.supplyAirC} °C is below the envelope's minimum dry-bulb ${limits.dryBulbMinC} °C: every hour is an excursion.`);
   }
   if (system.kind === 'direct-air' && targets.lowW > targets.highW) {
-    warnings.push('The envelope\'s lower moisture limit is above its upper limit at the supply temperature: no outdoor hour can meet both.');
+    warnings.push("The envelope's lower moisture limit is above its upper limit at the supply temperature: no outdoor hour can meet both.");
   }
   if (aggregated.hours.noData > 0) warnings.push(`${aggregated.hours.noData} hours have no usable data and are counted as no data.`);
 
@@ -181,7 +183,13 @@ export function outdoorStates(series: ScenarioSeries, elevationM: number): { sta
 const round2 = (x: number): number => Math.round(x * 100) / 100;
 
 /** The run's hours, energy and water summed from its hourly classification and energy. */
-function aggregate(scenario: Pick<Scenario, 'energy'>, series: ScenarioSeries, options: RunOptions, classification: HourClassification, energy: HourlyEnergy): AggregatedResults {
+function aggregate(
+  scenario: Pick<Scenario, 'energy'>,
+  series: ScenarioSeries,
+  options: RunOptions,
+  classification: HourClassification,
+  energy: HourlyEnergy,
+): AggregatedResults {
   return aggregateResults({
     timestampsMs: series.timestampsMs,
     classification,

@@ -73,7 +73,17 @@ export function sweepProgress(points: readonly Pick<SweepPoint, 'status' | 'prog
   return p;
 }
 
-export const SWEEP_METRICS = ['free', 'humidified', 'adiabatic', 'mechanical', 'partialMechanical', 'partialPue', 'waterL', 'peakMechanicalLoadKw', 'liquidMechanical'] as const;
+export const SWEEP_METRICS = [
+  'free',
+  'humidified',
+  'adiabatic',
+  'mechanical',
+  'partialMechanical',
+  'partialPue',
+  'waterL',
+  'peakMechanicalLoadKw',
+  'liquidMechanical',
+] as const;
 export type SweepMetric = (typeof SWEEP_METRICS)[number];
 
 export const sweepMetricLabels: Record<SweepMetric, string> = {

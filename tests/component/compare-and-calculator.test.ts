@@ -69,7 +69,14 @@ describe('comparing runs against a baseline', () => {
   });
 
   it('writes the comparison as CSV with units, values and differences', () => {
-    const csv = comparisonCsv(compareRuns(runs, 1), new Map([[1, '=run one'], [2, 'run two']]), 'SI').split('\n');
+    const csv = comparisonCsv(
+      compareRuns(runs, 1),
+      new Map([
+        [1, '=run one'],
+        [2, 'run two'],
+      ]),
+      'SI',
+    ).split('\n');
     // A label that a spreadsheet would read as a formula is defused (shared/csv.ts).
     expect(csv[0]).toBe("figure,unit,'=run one,'=run one difference,run two,run two difference");
     expect(csv[1]).toBe('Free cooling,h,80,,60,-20');

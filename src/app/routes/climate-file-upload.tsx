@@ -20,7 +20,11 @@ export function ClimateFileUploadRoute() {
         <h1 className="text-xl font-semibold">Upload a climate file</h1>
       </div>
       {sites.isPending && <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading sites" />}
-      {sites.isError && <Notice tone="bad" title="The project's sites could not be loaded">{sites.error.message}</Notice>}
+      {sites.isError && (
+        <Notice tone="bad" title="The project's sites could not be loaded">
+          {sites.error.message}
+        </Notice>
+      )}
       {sites.data && (
         <UploadWizard
           projectId={projectId}

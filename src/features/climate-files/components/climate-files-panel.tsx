@@ -25,14 +25,21 @@ export function ClimateFilesPanel({
       title={title}
       actions={
         canEdit ? (
-          <Link to={`/projects/${projectId}/climate-files/new${siteId === undefined ? '' : `?siteId=${siteId}`}`} className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft">
+          <Link
+            to={`/projects/${projectId}/climate-files/new${siteId === undefined ? '' : `?siteId=${siteId}`}`}
+            className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft"
+          >
             Upload climate file
           </Link>
         ) : undefined
       }
     >
       {files.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading climate files" />}
-      {files.isError && <Notice tone="bad" title="Climate files could not be loaded">{files.error.message}</Notice>}
+      {files.isError && (
+        <Notice tone="bad" title="Climate files could not be loaded">
+          {files.error.message}
+        </Notice>
+      )}
       {files.data && listed.length === 0 && (
         <p className="text-sm text-ink-soft">
           No climate files {siteId === undefined ? 'yet' : 'for this site yet'}.{' '}
@@ -43,11 +50,21 @@ export function ClimateFilesPanel({
         <table className="w-full text-left text-sm">
           <thead>
             <tr className="border-b border-rule text-xs text-ink-soft">
-              <th scope="col" className="py-1 font-medium">File</th>
-              <th scope="col" className="px-2 font-medium">Site</th>
-              <th scope="col" className="px-2 text-right font-medium">Years</th>
-              <th scope="col" className="px-2 text-right font-medium">Hours</th>
-              <th scope="col" className="px-2 text-right font-medium">Missing</th>
+              <th scope="col" className="py-1 font-medium">
+                File
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Site
+              </th>
+              <th scope="col" className="px-2 text-right font-medium">
+                Years
+              </th>
+              <th scope="col" className="px-2 text-right font-medium">
+                Hours
+              </th>
+              <th scope="col" className="px-2 text-right font-medium">
+                Missing
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -56,7 +73,10 @@ export function ClimateFilesPanel({
               return (
                 <tr key={f.id} className="border-b border-rule/60">
                   <td className="py-1">
-                    <Link to={`/projects/${projectId}/climate-files/${f.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
+                    <Link
+                      to={`/projects/${projectId}/climate-files/${f.id}`}
+                      className="font-medium text-harbour underline-offset-2 underline hover:decoration-2"
+                    >
                       {f.name}
                     </Link>
                     {f.projection && (

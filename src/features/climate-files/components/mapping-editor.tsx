@@ -30,7 +30,13 @@ function ColumnSelect({
   allowNone?: string;
 }) {
   return (
-    <select id={id} aria-label={name} className={selectClass} value={value ?? ''} onChange={(e) => onChange(e.target.value === '' ? null : Number(e.target.value))}>
+    <select
+      id={id}
+      aria-label={name}
+      className={selectClass}
+      value={value ?? ''}
+      onChange={(e) => onChange(e.target.value === '' ? null : Number(e.target.value))}
+    >
       {allowNone !== undefined && <option value="">{allowNone}</option>}
       {value === null && allowNone === undefined && <option value="">Choose a column…</option>}
       {headers.map((h, i) => (
@@ -43,11 +49,25 @@ function ColumnSelect({
 }
 
 /** confidence: the detector's 0…1; undefined once the person changed the part; null where no figure applies. */
-function Row({ label, htmlFor, confidence, reason, children }: { label: string; htmlFor: string; confidence?: number | null; reason?: string; children: ReactNode }) {
+function Row({
+  label,
+  htmlFor,
+  confidence,
+  reason,
+  children,
+}: {
+  label: string;
+  htmlFor: string;
+  confidence?: number | null;
+  reason?: string;
+  children: ReactNode;
+}) {
   const words = confidence === null ? null : confidenceWords(confidence);
   return (
     <div className="grid gap-2 border-b border-rule/60 py-2.5 md:grid-cols-[10rem_1fr_14rem] md:items-center">
-      <label htmlFor={htmlFor} className="text-sm font-medium">{label}</label>
+      <label htmlFor={htmlFor} className="text-sm font-medium">
+        {label}
+      </label>
       <div className="flex flex-wrap items-center gap-2">{children}</div>
       <p className="text-xs">
         {words && <span className={`num font-semibold ${words.tone}`}>{words.text}</span>}
@@ -95,12 +115,37 @@ export function MappingEditor({
           <option value="date-time">A date column and a time column</option>
           <option value="ymdh">Year, month, day and hour columns</option>
         </select>
-        {time?.layout === 'iso' && <ColumnSelect id="map-time-col" name="Timestamp column" headers={headers} value={time.column as number} onChange={(v) => setTime({ column: v ?? 0 })} />}
+        {time?.layout === 'iso' && (
+          <ColumnSelect
+            id="map-time-col"
+            name="Timestamp column"
+            headers={headers}
+            value={time.column as number}
+            onChange={(v) => setTime({ column: v ?? 0 })}
+          />
+        )}
         {time?.layout === 'date-time' && (
           <>
-            <ColumnSelect id="map-date-col" name="Date column" headers={headers} value={time.dateColumn as number} onChange={(v) => setTime({ dateColumn: v ?? 0 })} />
-            <ColumnSelect id="map-timeofday-col" name="Time-of-day column" headers={headers} value={time.timeColumn as number} onChange={(v) => setTime({ timeColumn: v ?? 0 })} />
-            <select aria-label="Date order" className={selectClass} value={time.dateOrder ?? 'YMD'} onChange={(e) => setTime({ dateOrder: e.target.value as 'YMD' })}>
+            <ColumnSelect
+              id="map-date-col"
+              name="Date column"
+              headers={headers}
+              value={time.dateColumn as number}
+              onChange={(v) => setTime({ dateColumn: v ?? 0 })}
+            />
+            <ColumnSelect
+              id="map-timeofday-col"
+              name="Time-of-day column"
+              headers={headers}
+              value={time.timeColumn as number}
+              onChange={(v) => setTime({ timeColumn: v ?? 0 })}
+            />
+            <select
+              aria-label="Date order"
+              className={selectClass}
+              value={time.dateOrder ?? 'YMD'}
+              onChange={(e) => setTime({ dateOrder: e.target.value as 'YMD' })}
+            >
               <option value="YMD">year-month-day</option>
               <option value="DMY">day/month/year</option>
               <option value="MDY">month/day/year</option>
@@ -112,7 +157,13 @@ export function MappingEditor({
             {(['year', 'month', 'day', 'hour'] as const).map((part) => (
               <span key={part} className="flex items-center gap-1 text-xs text-ink-soft">
                 {part}
-                <ColumnSelect id={`map-${part}-col`} name={`${part[0].toUpperCase()}${part.slice(1)} column`} headers={headers} value={time[part] as number} onChange={(v) => setTime({ [part]: v ?? 0 })} />
+                <ColumnSelect
+                  id={`map-${part}-col`}
+                  name={`${part[0].toUpperCase()}${part.slice(1)} column`}
+                  headers={headers}
+                  value={time[part] as number}
+                  onChange={(v) => setTime({ [part]: v ?? 0 })}
+                />
               </span>
             ))}
             <select
@@ -132,7 +183,7 @@ export function MappingEditor({
         <ColumnSelect
           id="map-drybulb-col"
           headers={headers}
-          value={draft.dryBulb?.column as number | null ?? null}
+          value={(draft.dryBulb?.column as number | null) ?? null}
           onChange={(v) => set({ dryBulb: v === null ? null : { column: v, unit: draft.dryBulb?.unit ?? 'C' } })}
         />
         <select
@@ -152,7 +203,7 @@ export function MappingEditor({
         <ColumnSelect
           id="map-humidity-col"
           headers={headers}
-          value={draft.humidity?.column as number | null ?? null}
+          value={(draft.humidity?.column as number | null) ?? null}
           onChange={(v) =>
             set({ humidity: v === null ? null : ({ ...(draft.humidity ?? { quantity: 'relative-humidity', unit: '%' }), column: v } as HumidityDraft) })
           }
@@ -180,7 +231,9 @@ export function MappingEditor({
           onChange={(e) => draft.humidity && set({ humidity: { ...draft.humidity, unit: e.target.value } as HumidityDraft })}
         >
           {humidityUnits(draft.humidity?.quantity ?? 'relative-humidity').map(([value, text]) => (
-            <option key={value} value={value}>{text}</option>
+            <option key={value} value={value}>
+              {text}
+            </option>
           ))}
         </select>
       </Row>
@@ -196,7 +249,7 @@ export function MappingEditor({
         <ColumnSelect
           id="map-pressure-col"
           headers={headers}
-          value={draft.pressure?.column as number | null ?? null}
+          value={(draft.pressure?.column as number | null) ?? null}
           allowNone="none — use the site's elevation"
           onChange={(v) => set({ pressure: v === null ? null : { column: v, unit: draft.pressure?.unit ?? 'kPa' } })}
         />
@@ -208,18 +261,30 @@ export function MappingEditor({
           onChange={(e) => draft.pressure && set({ pressure: { ...draft.pressure, unit: e.target.value as 'kPa' } })}
         >
           {['Pa', 'hPa', 'kPa', 'inHg', 'psi'].map((u) => (
-            <option key={u} value={u}>{u === 'hPa' ? 'hPa (mbar)' : u}</option>
+            <option key={u} value={u}>
+              {u === 'hPa' ? 'hPa (mbar)' : u}
+            </option>
           ))}
         </select>
       </Row>
 
-      <Row label="Text format" htmlFor="map-delimiter" confidence={null} reason={detected.headerLine ? `Header on line ${detected.headerLine}.` : 'No header row found.'}>
+      <Row
+        label="Text format"
+        htmlFor="map-delimiter"
+        confidence={null}
+        reason={detected.headerLine ? `Header on line ${detected.headerLine}.` : 'No header row found.'}
+      >
         <select id="map-delimiter" className={selectClass} value={draft.delimiter} onChange={(e) => set({ delimiter: e.target.value as ',' })}>
           <option value=",">comma separated</option>
           <option value=";">semicolon separated</option>
           <option value={'\t'}>tab separated</option>
         </select>
-        <select aria-label="Decimal separator" className={selectClass} value={draft.decimalSeparator} onChange={(e) => set({ decimalSeparator: e.target.value as '.' })}>
+        <select
+          aria-label="Decimal separator"
+          className={selectClass}
+          value={draft.decimalSeparator}
+          onChange={(e) => set({ decimalSeparator: e.target.value as '.' })}
+        >
           <option value=".">decimal point (1.5)</option>
           <option value=",">decimal comma (1,5)</option>
         </select>
@@ -229,9 +294,22 @@ export function MappingEditor({
 }
 
 function humidityUnits(quantity: HumidityDraft['quantity']): Array<[string, string]> {
-  if (quantity === 'relative-humidity') return [['%', '%'], ['fraction', 'fraction 0–1']];
-  if (quantity === 'humidity-ratio') return [['g/kg', 'g/kg'], ['kg/kg', 'kg/kg'], ['gr/lb', 'grains/lb']];
-  return [['C', '°C'], ['F', '°F'], ['K', 'K']];
+  if (quantity === 'relative-humidity')
+    return [
+      ['%', '%'],
+      ['fraction', 'fraction 0–1'],
+    ];
+  if (quantity === 'humidity-ratio')
+    return [
+      ['g/kg', 'g/kg'],
+      ['kg/kg', 'kg/kg'],
+      ['gr/lb', 'grains/lb'],
+    ];
+  return [
+    ['C', '°C'],
+    ['F', '°F'],
+    ['K', 'K'],
+  ];
 }
 
 const detectedDrafts = new WeakMap<DetectedMapping, MappingDraft>();

@@ -1,7 +1,13 @@
 import { useForm, type Resolver } from 'react-hook-form';
 import { fromDisplay, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
-import { proposalQuerySchema, ALLOWABLE_PRESET_IDS, RECOMMENDED_PRESET_IDS, RUN_ENVELOPE, type ProposalQuery } from '../../../../shared/excursions/proposal-query';
+import {
+  proposalQuerySchema,
+  ALLOWABLE_PRESET_IDS,
+  RECOMMENDED_PRESET_IDS,
+  RUN_ENVELOPE,
+  type ProposalQuery,
+} from '../../../../shared/excursions/proposal-query';
 import { ENVELOPE_PRESETS } from '../../../../shared/scenario/envelopes';
 
 interface FormValues {
@@ -33,7 +39,11 @@ function proposalResolver(system: UnitSystem): Resolver<FormValues, unknown, Pro
     const errors: Record<string, { type: string; message: string }> = {};
     for (const issue of parsed.error.issues) {
       const field = String(issue.path[0] ?? 'supplyAirC');
-      const message = issue.message.startsWith('must be a number from') ? `Enter a number from ${range}.` : issue.message.startsWith('must be at or above') ? 'Enter a ceiling at or above the setpoint.' : issue.message;
+      const message = issue.message.startsWith('must be a number from')
+        ? `Enter a number from ${range}.`
+        : issue.message.startsWith('must be at or above')
+          ? 'Enter a ceiling at or above the setpoint.'
+          : issue.message;
       errors[field] = { type: issue.code, message };
     }
     return { values: {}, errors };
@@ -44,7 +54,15 @@ function proposalResolver(system: UnitSystem): Resolver<FormValues, unknown, Pro
  * The operator's proposal: supply setpoint, an optional ceiling the supply may float up to, the envelope the
  * controls work to, and the recommended range and allowable class the hours are checked against.
  */
-export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQuery & { supplyAirC: number }; onSubmit: (q: ProposalQuery) => void; busy: boolean }) {
+export function ProposalForm({
+  current,
+  onSubmit,
+  busy,
+}: {
+  current: ProposalQuery & { supplyAirC: number };
+  onSubmit: (q: ProposalQuery) => void;
+  busy: boolean;
+}) {
   const { unitSystem } = useUnitSystem();
   const unit = unitOf('temperature', unitSystem);
   const { register, handleSubmit, watch, formState } = useForm<FormValues, unknown, ProposalQuery>({
@@ -60,10 +78,16 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
   });
   const floats = watch('floats');
   const { errors } = formState;
-  const box = 'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
+  const box =
+    'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
   const select = 'w-full rounded border border-rule bg-panel px-2 py-1 text-sm focus-visible:outline-2 focus-visible:outline-harbour';
   return (
-    <form onSubmit={handleSubmit(onSubmit)} className="grid gap-x-6 gap-y-3 text-sm md:grid-cols-2 xl:grid-cols-[1fr_1fr_1fr_auto]" aria-label="Proposal" noValidate>
+    <form
+      onSubmit={handleSubmit(onSubmit)}
+      className="grid gap-x-6 gap-y-3 text-sm md:grid-cols-2 xl:grid-cols-[1fr_1fr_1fr_auto]"
+      aria-label="Proposal"
+      noValidate
+    >
       <div className="space-y-2">
         <label className="flex items-center justify-between gap-3">
           <span>Supply setpoint at the IT inlet</span>
@@ -72,7 +96,11 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
             <span className="w-6 text-ink-soft">{unit}</span>
           </span>
         </label>
-        {errors.supplyAirC && <p className="text-xs text-signal-bad" role="alert">Setpoint: {errors.supplyAirC.message}</p>}
+        {errors.supplyAirC && (
+          <p className="text-xs text-signal-bad" role="alert">
+            Setpoint: {errors.supplyAirC.message}
+          </p>
+        )}
         <label className="flex items-center gap-2">
           <input type="checkbox" {...register('floats')} className="size-4 accent-harbour" />
           <span>Let the supply float up before evaporative cooling or compressors start</span>
@@ -84,13 +112,19 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
             <span className="w-6 text-ink-soft">{unit}</span>
           </span>
         </label>
-        {errors.floatUpToC && <p className="text-xs text-signal-bad" role="alert">Float ceiling: {errors.floatUpToC.message}</p>}
+        {errors.floatUpToC && (
+          <p className="text-xs text-signal-bad" role="alert">
+            Float ceiling: {errors.floatUpToC.message}
+          </p>
+        )}
       </div>
       <label className="block space-y-1">
         <span className="block">Envelope the controls work to</span>
         <select {...register('control')} className={select}>
           {[RUN_ENVELOPE, ...ENVELOPE_PRESETS.map((p) => p.id)].map((id) => (
-            <option key={id} value={id}>{presetLabel(id)}</option>
+            <option key={id} value={id}>
+              {presetLabel(id)}
+            </option>
           ))}
         </select>
         <span className="block text-xs text-ink-soft">Sets the moisture limits a direct-air system dehumidifies or humidifies to.</span>
@@ -100,7 +134,9 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
           <span className="block">Recommended range to check against</span>
           <select {...register('recommended')} className={select}>
             {[...RECOMMENDED_PRESET_IDS, RUN_ENVELOPE].map((id) => (
-              <option key={id} value={id}>{presetLabel(id)}</option>
+              <option key={id} value={id}>
+                {presetLabel(id)}
+              </option>
             ))}
           </select>
         </label>
@@ -108,13 +144,19 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
           <span className="block">Allowable class to check against</span>
           <select {...register('allowable')} className={select}>
             {[...ALLOWABLE_PRESET_IDS, RUN_ENVELOPE].map((id) => (
-              <option key={id} value={id}>{presetLabel(id)}</option>
+              <option key={id} value={id}>
+                {presetLabel(id)}
+              </option>
             ))}
           </select>
         </label>
       </div>
       <div className="flex items-end">
-        <button type="submit" disabled={busy} className="rounded bg-harbour px-4 py-1.5 text-paper hover:bg-harbour-soft focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-harbour disabled:opacity-60">
+        <button
+          type="submit"
+          disabled={busy}
+          className="rounded bg-harbour px-4 py-1.5 text-paper hover:bg-harbour-soft focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-harbour disabled:opacity-60"
+        >
           {busy ? 'Working out…' : 'Work it out'}
         </button>
       </div>

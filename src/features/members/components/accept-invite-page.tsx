@@ -10,9 +10,19 @@ export function AcceptInvitePage() {
   const token = params.get('token') ?? '';
   const preview = useInvitePreview(token, token.length > 0);
   const accept = useAcceptInvite();
-  if (!token) return <Notice tone="bad" title="This link has no invitation in it">Open the link from the e-mail again, whole.</Notice>;
+  if (!token)
+    return (
+      <Notice tone="bad" title="This link has no invitation in it">
+        Open the link from the e-mail again, whole.
+      </Notice>
+    );
   if (preview.isPending) return <div className="h-32 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading invitation" />;
-  if (preview.isError) return <Notice tone="bad" title="This invitation cannot be used">{preview.error.message}</Notice>;
+  if (preview.isError)
+    return (
+      <Notice tone="bad" title="This invitation cannot be used">
+        {preview.error.message}
+      </Notice>
+    );
   const invite = preview.data;
   return (
     <div className="mx-auto max-w-lg py-6">
@@ -29,8 +39,8 @@ export function AcceptInvitePage() {
         ) : (
           <div className="space-y-3 text-sm">
             <p>
-              {invite.invitedBy ?? 'A project owner'} invited <strong>{invite.email}</strong> to{' '}
-              <strong>{invite.projectName}</strong> as <strong>{invite.role}</strong>.
+              {invite.invitedBy ?? 'A project owner'} invited <strong>{invite.email}</strong> to <strong>{invite.projectName}</strong> as{' '}
+              <strong>{invite.role}</strong>.
             </p>
             <p className="num text-xs text-ink-faint">Valid until {invite.expiresAt.slice(0, 16).replace('T', ' ')} UTC, once.</p>
             {!invite.forYou && (
@@ -38,7 +48,11 @@ export function AcceptInvitePage() {
                 Sign out and sign in as {invite.email} to accept it.
               </Notice>
             )}
-            {accept.isError && <Notice tone="bad" title="Not accepted">{accept.error.message}</Notice>}
+            {accept.isError && (
+              <Notice tone="bad" title="Not accepted">
+                {accept.error.message}
+              </Notice>
+            )}
             <button
               type="button"
               disabled={!invite.forYou || accept.isPending}

@@ -3,7 +3,15 @@ import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
 import { countsSubsets, hoursOfSpec, hoursText as countText, modeRowSpecs, notCountedShort } from '../../../../shared/report/mode-subsets';
 import type { YearResults } from '../../../../shared/scenario/results';
-import { PARTIAL_YEAR_MARK, partialYearsSentence, WORST_YEAR_TIE_RULE, yearStatistics, type MetricStatistics, type YearMetric, type YearPoint } from '../../../../shared/scenario/year-statistics';
+import {
+  PARTIAL_YEAR_MARK,
+  partialYearsSentence,
+  WORST_YEAR_TIE_RULE,
+  yearStatistics,
+  type MetricStatistics,
+  type YearMetric,
+  type YearPoint,
+} from '../../../../shared/scenario/year-statistics';
 
 const hoursText = (h: number) => formatCount(Math.round(h));
 const mwhText = (kwh: number) => numberFormat(1).format(kwh / 1000);
@@ -39,12 +47,18 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
         <table className="num w-full text-right text-xs" data-testid="year-table">
           <thead>
             <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 text-left font-sans font-medium">Year</th>
+              <th scope="col" className="py-1 text-left font-sans font-medium">
+                Year
+              </th>
               {modeRowSpecs.map((spec) => (
                 <ModeColumnHead key={modeSpecKey(spec)} spec={spec} />
               ))}
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Cooling energy (MWh)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Water ({unitOf('water', unitSystem)})</th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Cooling energy (MWh)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Water ({unitOf('water', unitSystem)})
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -69,10 +83,19 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
             <tbody data-testid="year-statistics">
               {statRows.map((row) => (
                 <tr key={row.label} className="border-b border-rule/60 bg-mist/40">
-                  <th scope="row" className="py-0.5 text-left font-sans font-medium" title={row.title}>{row.label}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-medium" title={row.title}>
+                    {row.label}
+                  </th>
                   {modeRowSpecs.map((spec) => {
                     const column = spec.kind === 'mode' ? statColumns.find((c) => c.metric === spec.mode) : undefined;
-                    return <StatCell key={modeSpecKey(spec)} point={column ? row.cell(stats.metrics![column.metric]) : null} format={column?.format} system={unitSystem} />;
+                    return (
+                      <StatCell
+                        key={modeSpecKey(spec)}
+                        point={column ? row.cell(stats.metrics![column.metric]) : null}
+                        format={column?.format}
+                        system={unitSystem}
+                      />
+                    );
                   })}
                   {statColumns.slice(3).map((c) => (
                     <StatCell key={c.metric} point={row.cell(stats.metrics![c.metric])} format={c.format} system={unitSystem} />
@@ -89,7 +112,15 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
   );
 }
 
-function StatCell({ point, format, system }: { point: YearPoint | { value: number | null } | null; format?: (v: number, s: UnitSystem) => string; system: UnitSystem }) {
+function StatCell({
+  point,
+  format,
+  system,
+}: {
+  point: YearPoint | { value: number | null } | null;
+  format?: (v: number, s: UnitSystem) => string;
+  system: UnitSystem;
+}) {
   if (!point || !format || point.value === null) return <td className="px-2 py-0.5 text-ink-soft">–</td>;
   return (
     <td className="px-2 py-0.5">
@@ -106,14 +137,20 @@ function YearNotes({ stats }: { stats: ReturnType<typeof yearStatistics> }) {
       {stats.worst && (
         <p>
           <span className="font-medium text-ink">Worst year: {stats.worst.year}</span>, {hoursText(stats.worst.mechanical)} mechanical hours
-          {stats.worst.tiedWith.length > 0 && <> (tied with {stats.worst.tiedWith.join(', ')} on mechanical hours; rule: {WORST_YEAR_TIE_RULE})</>}.
+          {stats.worst.tiedWith.length > 0 && (
+            <>
+              {' '}
+              (tied with {stats.worst.tiedWith.join(', ')} on mechanical hours; rule: {WORST_YEAR_TIE_RULE})
+            </>
+          )}
+          .
         </p>
       )}
       <p>
-        Statistics over {n} full calendar year{n === 1 ? '' : 's'}. Percentiles by nearest rank: of N years ordered from the smallest value, the P-th
-        percentile is the year of rank ⌈P/100 · N⌉, so each one is a year that happened (the median of an even count is the lower middle year). Each
-        column is ordered on its own, so the median year for free cooling need not be the median year for water. Spread is the sample standard
-        deviation (divisor N − 1) and the range from the smallest to the largest year.
+        Statistics over {n} full calendar year{n === 1 ? '' : 's'}. Percentiles by nearest rank: of N years ordered from the smallest value, the P-th percentile
+        is the year of rank ⌈P/100 · N⌉, so each one is a year that happened (the median of an even count is the lower middle year). Each column is ordered on
+        its own, so the median year for free cooling need not be the median year for water. Spread is the sample standard deviation (divisor N − 1) and the
+        range from the smallest to the largest year.
       </p>
       {stats.partialYears.length > 0 && <p>{partialYearsSentence(stats.partialYears)}</p>}
       {!stats.metrics && <p>No full calendar year in this file, so no year statistics.</p>}

@@ -3,7 +3,15 @@ import { ModeLegend } from '@/components/charts/mode-legend';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { modeColours, modeLabels } from '../../../../shared/modes';
-import { metricRows, modeHoursRows, type SweepInputPath, type SweepMetric, type SweepPoint, type SweepValue, type ZeroMechanical } from '../../../../shared/sweep';
+import {
+  metricRows,
+  modeHoursRows,
+  type SweepInputPath,
+  type SweepMetric,
+  type SweepPoint,
+  type SweepValue,
+  type ZeroMechanical,
+} from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
 import { compactPresetLabel, displayNumber } from '../utils/sweep-format';
 import { metricDisplay, metricTitle } from '../utils/metric-format';
@@ -38,7 +46,14 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
           ? []
           : [
               Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3', strokeWidth: 1.5 }),
-              Plot.text([zeroX], { x: (d: SweepValue) => d, frameAnchor: 'top', dy: -14, text: () => (zero.kind === 'up-to' ? '◀ no mechanical hours' : 'no mechanical hours ▶'), textAnchor: zero.kind === 'up-to' ? 'end' : 'start', fill: '#1d2327' }),
+              Plot.text([zeroX], {
+                x: (d: SweepValue) => d,
+                frameAnchor: 'top',
+                dy: -14,
+                text: () => (zero.kind === 'up-to' ? '◀ no mechanical hours' : 'no mechanical hours ▶'),
+                textAnchor: zero.kind === 'up-to' ? 'end' : 'start',
+                fill: '#1d2327',
+              }),
             ];
       return Plot.plot({
         width: widthPx,
@@ -82,7 +97,13 @@ function flatDomain(values: number[], fromZero: boolean): { domain?: [number, nu
 }
 
 /** A count that is part of a mode is drawn in its mode's colour. */
-const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { free: 'free', humidified: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', partialMechanical: 'mechanical' };
+const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = {
+  free: 'free',
+  humidified: 'free',
+  adiabatic: 'adiabatic',
+  mechanical: 'mechanical',
+  partialMechanical: 'mechanical',
+};
 
 /**
  * One result against the swept value, as a line with a dot per finished point, on its own scale (a few
@@ -90,7 +111,10 @@ const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { f
  */
 function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; metric: SweepMetric; zero?: ZeroMechanical }) {
   const axis = useAxis(input, points);
-  const rows = useMemo(() => metricRows(points, input, metric).map((r) => ({ x: axis.x(r.value), y: metricDisplay(metric, axis.unitSystem, r.metric) })), [points, input, metric, axis]);
+  const rows = useMemo(
+    () => metricRows(points, input, metric).map((r) => ({ x: axis.x(r.value), y: metricDisplay(metric, axis.unitSystem, r.metric) })),
+    [points, input, metric, axis],
+  );
   const title = metricTitle(metric, axis.unitSystem);
   const mode = modeOfMetric[metric];
   const colour = mode ? modeColours[mode] : '#1f3a4a';
@@ -107,7 +131,17 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
         x: axis.preset
           ? { type: 'point', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, padding: 0.5 }
           : { label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, ticks: 6 },
-        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue', nice: true, ...flatDomain(rows.map((r) => r.y), metric !== 'partialPue') },
+        y: {
+          label: title,
+          grid: true,
+          labelArrow: 'up',
+          zero: metric !== 'partialPue',
+          nice: true,
+          ...flatDomain(
+            rows.map((r) => r.y),
+            metric !== 'partialPue',
+          ),
+        },
         marks: [
           zeroX === null ? null : Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3' }),
           Plot.lineY(rows, { x: 'x', y: 'y', stroke: colour, strokeWidth: 1.75 }),

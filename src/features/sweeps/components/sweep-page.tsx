@@ -33,8 +33,7 @@ function AxisSummary({ axis }: { axis: SweepRecord['axes'][number] }) {
 /** The cautions every set of results carries (product brief), for the sweep's system. */
 function SweepCautions({ sweep }: { sweep: SweepRecord }) {
   const system = sweep.baseScenario.system;
-  const evaporative =
-    usesEvaporativeWater(system) || sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness');
+  const evaporative = usesEvaporativeWater(system) || sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness');
   return <ResultCautions systemKind={hallAirSystem(system).kind} evaporative={evaporative} hybrid={system.kind === 'hybrid'} />;
 }
 
@@ -54,7 +53,11 @@ export function SweepPage() {
   if (query.isError) {
     return (
       <Notice tone="bad" title="This sweep could not be opened">
-        {query.error.message} It may have been deleted; <Link className="underline" to={`/projects/${projectId}`}>open the project</Link> to see its sweeps.
+        {query.error.message} It may have been deleted;{' '}
+        <Link className="underline" to={`/projects/${projectId}`}>
+          open the project
+        </Link>{' '}
+        to see its sweeps.
       </Notice>
     );
   }
@@ -63,7 +66,9 @@ export function SweepPage() {
   const doneIds = sweep.points.filter((p) => p.status === 'done').map((p) => p.runId);
   const anyDone = doneIds.length > 0;
   const zero =
-    inputs.length === 1 ? zeroMechanical(sweep.points.map((p) => ({ value: p.values[inputs[0]]!, mechanicalHours: p.results?.hours.mechanical ?? null }))) : null;
+    inputs.length === 1
+      ? zeroMechanical(sweep.points.map((p) => ({ value: p.values[inputs[0]]!, mechanicalHours: p.results?.hours.mechanical ?? null })))
+      : null;
 
   async function deleteSweep() {
     if (!window.confirm(`Delete the sweep "${sweep.name}" and its ${sweep.points.length} runs? Points still waiting are cancelled.`)) return;
@@ -115,14 +120,27 @@ export function SweepPage() {
             </button>
           )}
           {canEdit && (
-            <button type="button" onClick={deleteSweep} disabled={remove.isPending} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-50">
+            <button
+              type="button"
+              onClick={deleteSweep}
+              disabled={remove.isPending}
+              className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-50"
+            >
               {sweep.progress.finished ? 'Delete sweep' : 'Stop and delete'}
             </button>
           )}
         </div>
       </header>
-      {remove.isError && <Notice tone="bad" title="The sweep was not deleted">{remove.error.message}</Notice>}
-      {stop.isError && <Notice tone="bad" title="The sweep was not stopped">{stop.error.message}</Notice>}
+      {remove.isError && (
+        <Notice tone="bad" title="The sweep was not deleted">
+          {remove.error.message}
+        </Notice>
+      )}
+      {stop.isError && (
+        <Notice tone="bad" title="The sweep was not stopped">
+          {stop.error.message}
+        </Notice>
+      )}
 
       <SweepProgressBar progress={sweep.progress} />
       {sweep.progress.failed > 0 && (

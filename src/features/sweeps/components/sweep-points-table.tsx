@@ -22,11 +22,22 @@ const statusClass: Record<SweepRunStatus, string> = {
 const hourSpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
 
 /** Every point with its run and results: the table beside the charts, and its CSV download in the person's units. */
-export function SweepPointsTable({ projectId, name, inputs, points }: { projectId: number; name: string; inputs: SweepInputPath[]; points: readonly SweepPoint[] }) {
+export function SweepPointsTable({
+  projectId,
+  name,
+  inputs,
+  points,
+}: {
+  projectId: number;
+  name: string;
+  inputs: SweepInputPath[];
+  points: readonly SweepPoint[];
+}) {
   const { unitSystem } = useUnitSystem();
   const waterUnit = metricUnit('waterL', unitSystem);
   const waterSuffix = waterUnit === 'm³' ? 'm3' : 'us_gal';
-  const water = (litres: number | null | undefined) => (litres === null || litres === undefined ? null : Math.round(toDisplay('water', unitSystem, litres) * 1000) / 1000);
+  const water = (litres: number | null | undefined) =>
+    litres === null || litres === undefined ? null : Math.round(toDisplay('water', unitSystem, litres) * 1000) / 1000;
 
   function download() {
     const head = csvRow([
