@@ -220,7 +220,7 @@ describe('a run still computing', () => {
     await page.getByTestId('run-progress').waitFor();
     expect(await page.getByTestId('run-progress').getByRole('status').innerText()).toMatch(/^Classifying [\d,]+ hours…/);
     expect(await page.getByTestId('run-started').innerText()).toBe(`started ${new Date('2026-03-02T09:15:07Z').toLocaleTimeString('en-GB')}`);
-    expect(await page.getByRole('progressbar').count()).toBe(0);
+    expect(await page.getByTestId('run-progress').getByRole('progressbar').count()).toBe(0);
     await h.shot('run-page-running-si');
     await page.getByRole('button', { name: 'Cancel run' }).click();
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('cancelled');
