@@ -3,12 +3,20 @@ import { defineConfig } from 'vitest/config';
 
 // Four projects share one run: pure modules, the HTTP API through supertest,
 // client components in jsdom, and end-to-end journeys in Debian's Chromium.
+
+// A test process that dies of a fatal error (out of memory, a V8 check) leaves a Node report here, which
+// .ci/run prints with the files that never finished.
+const diagnostics = {
+  execArgv: ['--report-on-fatalerror', '--report-compact', `--report-directory=${fileURLToPath(new URL('./.tmp/node-reports', import.meta.url))}`],
+};
+
 export default defineConfig({
   test: {
     onConsoleLog: undefined,
     projects: [
       {
         test: {
+          ...diagnostics,
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
           environment: 'node',
@@ -16,6 +24,7 @@ export default defineConfig({
       },
       {
         test: {
+          ...diagnostics,
           name: 'api',
           include: ['tests/api/**/*.test.ts'],
           environment: 'node',
@@ -27,6 +36,7 @@ export default defineConfig({
         // The client's '@/…' imports, as in vite.config.ts, so component tests load src/ as the app does.
         resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
         test: {
+          ...diagnostics,
           name: 'component',
           include: ['tests/component/**/*.test.{ts,tsx}'],
           environment: 'jsdom',
@@ -35,6 +45,7 @@ export default defineConfig({
       },
       {
         test: {
+          ...diagnostics,
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           environment: 'node',
