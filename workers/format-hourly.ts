@@ -32,7 +32,7 @@ export function formatHourly({ scenario, series, elevationM, utcOffsetMinutes, m
   // (only its elevation is used here).
   const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
-  const { states } = outdoorStates(series, elevationM ?? parsed.scenario.elevationM);
+  const { states } = outdoorStates(series, elevationM ?? parsed.scenario.elevationM ?? 0);
   const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } }, utcOffsetMinutes ?? 0);
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];

@@ -4,3 +4,4 @@ export * from './summary-table';
 export * from './inputs';
 export * from './hourly-json';
 export * from './mode-subsets';
+export * from './fan-groups';

@@ -43,6 +43,14 @@ function listText(list: unknown[]): string {
   return `${list.length} values, ${r(min)} to ${r(max)}, mean ${r(sum / list.length)}`;
 }
 
+/**
+ * A run's scenario inputs as rows, without an elevation of the scenario's own: a run uses its site's elevation
+ * (stated apart), so an old scenario's field would only be a second, unused elevation.
+ */
+export function scenarioInputRows(scenario: unknown): InputRow[] {
+  return flattenInputs(scenario).filter((row) => row.path !== 'elevationM');
+}
+
 export function kindOfKey(key: string): InputKind {
   if (/ElevationM$|^elevationM$/.test(key)) return 'elevation';
   if (/C$/.test(key)) return 'temperature';

@@ -63,6 +63,7 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   const n = series.dryBulbC.length;
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
   const elevationM = options.elevationM ?? scenario.elevationM;
+  if (elevationM === undefined) throw new RangeError('elevationM: give the site\'s elevation (RunOptions.elevationM, or elevationM in a scenario run without a site)');
   const sitePressurePa = standardPressurePa(elevationM);
   const { states, pressurePa, filledHours } = outdoorStates(series, elevationM);
   const { envelope, system } = scenario;

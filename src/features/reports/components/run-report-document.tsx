@@ -113,7 +113,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
         </div>
         <div className="keep-together space-y-2">
           <SubHeading>Energy</SubHeading>
-          <EnergyTable results={r} />
+          <EnergyTable results={r} system={run.scenario.system} />
         </div>
         <div className="keep-together space-y-2">
           <SubHeading>Water</SubHeading>

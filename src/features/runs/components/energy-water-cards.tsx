@@ -3,6 +3,8 @@ import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { countsSubsets, NOT_COUNTED, notCountedShort, waterPartL, waterPartsShown } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
+import type { ScenarioSystem } from '../../../../shared/scenario/schema';
+import { fanGroups } from '../../../../shared/report/fan-groups';
 
 const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
 const kw = (v: number) => `${v.toLocaleString('en', { maximumFractionDigits: 0 })} kW`;
@@ -20,14 +22,14 @@ function Figure({ label, value, note, testId }: { label: string; value: string; 
 }
 
 /** Partial PUE, WUE, peak mechanical load and the energy and water behind them. */
-export function EnergyWaterCards({ results, engineVersion }: { results: ScenarioResults; engineVersion: string }) {
+export function EnergyWaterCards({ results, engineVersion, system }: { results: ScenarioResults; engineVersion: string; system: ScenarioSystem }) {
   const { unitSystem } = useUnitSystem();
   const e = results.energy;
   const w = results.water;
   const counted = countsSubsets(results);
   const parts = waterPartsShown(w, counted);
   const rows = [
-    { label: 'Hall fans', kwh: e.fanKwh },
+    ...fanGroups(e, system).map((g) => ({ label: g.label, kwh: g.kwh })),
     { label: 'Compressors', kwh: e.compressorKwh },
     { label: 'Pumps', kwh: e.pumpKwh },
     // Only towers in freeze protection use them; runs before engine 2.0.0 have no such figure.

@@ -119,7 +119,7 @@ export function RunPage() {
               <MonthlyModeChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} engineVersion={run.engineVersion} />
             </Panel>
           </div>
-          <EnergyWaterCards results={results} engineVersion={run.engineVersion} />
+          <EnergyWaterCards results={results} engineVersion={run.engineVersion} system={run.scenario.system} />
           {results.hoursByYear.length > 1 && (
             <Panel title="By calendar year">
               <YearTable years={results.hoursByYear} engineVersion={run.engineVersion} />
