@@ -2,7 +2,7 @@ import { useCallback, useMemo, useState } from 'react';
 import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
 import type { ChartProjection } from '../../../shared/psychrometrics';
 import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
-import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
+import { LocalUnitSystem, useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { densityRamp } from './colour-ramps';
 import { ModeLegend } from './mode-legend';
 import {
@@ -62,8 +62,17 @@ const unitOptions = [
  * One chart for moist air at a given pressure: saturation, RH, wet-bulb and enthalpy lines, envelope
  * polygons, hours as a density or as points coloured by mode, markers, and a table with the same figures.
  */
-export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, display, envelopes = [], markers = [] }: MoistAirChartProps) {
-  const { unitSystem, setUnitSystem } = useUnitSystem();
+export function MoistAirChart(props: MoistAirChartProps) {
+  // The chart's own unit switch changes this chart only, never the person's setting (issue 17).
+  return (
+    <LocalUnitSystem>
+      <MoistAirChartBody {...props} />
+    </LocalUnitSystem>
+  );
+}
+
+function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, display, envelopes = [], markers = [] }: MoistAirChartProps) {
+  const { unitSystem, setUnitSystem, local } = useUnitSystem();
   const [chosenProjection, setProjection] = useState<ChartProjection>('dry-bulb-humidity-ratio');
   const projection = fixedProjection ?? chosenProjection;
 
@@ -174,7 +183,8 @@ export function MoistAirChart({ pressurePa, projection: fixedProjection, hours, 
     <div className="space-y-2" data-testid="moist-air-chart">
       <div className="flex flex-wrap items-center gap-3">
         {!fixedProjection && <SegmentedSwitch label="Chart projection" options={projectionOptions} value={projection} onChange={setProjection} />}
-        <SegmentedSwitch<UnitSystem> label="Units" options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
+        <SegmentedSwitch<UnitSystem> label={local ? 'Units of this chart' : 'Units'} options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
+        {local && <span className="text-xs text-ink-soft">(this chart only)</span>}
         <p className="num text-xs text-ink-soft">at {formatQuantity('pressure', unitSystem, pressurePa)}</p>
         {display === 'points' && hours.modes && <ModeLegend />}
         {envelopes.length > 0 && (
