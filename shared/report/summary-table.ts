@@ -168,10 +168,26 @@ export interface ComparedFigure {
   decimals: number;
   /** A count older engines did not make: a run without it shows NOT_COUNTED, not a blank. */
   notInOldRuns?: boolean;
+  /**
+   * Below this baseline (in the figure's unit, by size) a difference is not given as a percentage: a percentage of a
+   * near-zero base says nothing ("0.0 MWh → 1.0 MWh, +2356.3 %"). Defaults by unit: PERCENT_FLOOR.
+   */
+  percentFloor?: number;
   /** Shown indented under the figure before it ("of which …"); `standalone` names it where rows stand alone (CSV). */
   part?: boolean;
   standalone?: string;
   value: (r: ComparableResults) => number | null;
+}
+
+/** Smallest baseline a percentage is given for, per unit: a day of hours, 1 MWh, 1 m³ of water, 10 kW; ratios always. */
+export const PERCENT_FLOOR: Record<string, number> = { h: 24, kWh: 1000, L: 1000, kW: 10, '': 0, 'L/kWh': 0.01 };
+
+/** A difference as a percentage of its baseline, or null where the baseline is missing or under the figure's floor. */
+export function differencePercent(figure: Pick<ComparedFigure, 'unit' | 'percentFloor'>, difference: number | null, base: number | null): number | null {
+  if (difference === null || base === null) return null;
+  const floor = figure.percentFloor ?? PERCENT_FLOOR[figure.unit] ?? 0;
+  if (base === 0 || Math.abs(base) < floor) return null;
+  return (100 * difference) / Math.abs(base);
 }
 
 /** Litres over the file scaled to 8,760 hours of data, as the run's own annual total is. */

@@ -76,6 +76,17 @@ export function fromDisplay(kind: QuantityKind, system: UnitSystem, shown: numbe
   return presentations[kind][system].toSi(shown);
 }
 
+/**
+ * An energy in kWh as read: MWh with one decimal from 1 MWh up, kWh below it, so a small energy never reads "0.0 MWh".
+ * `signed` writes + before a positive value (a difference).
+ */
+export function energyText(kwh: number | null | undefined, signed = false): string {
+  if (kwh === null || kwh === undefined || !Number.isFinite(kwh)) return '–';
+  const sign = signed && kwh > 0 ? '+' : '';
+  if (Math.abs(kwh) < 1000) return `${sign}${kwh.toLocaleString('en', { maximumFractionDigits: Math.abs(kwh) < 10 ? 1 : 0 })} kWh`;
+  return `${sign}${(kwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 })} MWh`;
+}
+
 /** "21.4 °C" or "70.5 °F"; an en dash for a missing value. */
 export function formatQuantity(kind: QuantityKind, system: UnitSystem, siValue: number | null | undefined, withUnit = true): string {
   if (siValue === null || siValue === undefined || !Number.isFinite(siValue)) return '–';

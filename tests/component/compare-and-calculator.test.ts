@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { RunListing } from '@/features/compare/api/get-runs';
 import { compareRuns } from '@/features/compare/utils/compare-runs';
 import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
+import { formatMetric } from '@/features/compare/components/metric-format';
 import { solveState } from '@/features/calculator/utils/state-request';
 import { stateRows } from '@/features/calculator/utils/state-rows';
 
@@ -74,6 +75,20 @@ describe('comparing runs against a baseline', () => {
     expect(csv[0]).toBe("figure,unit,'=run one,'=run one difference,run two,run two difference");
     expect(csv[1]).toBe('Free cooling,h,80,,60,-20');
     expect(csv).toContain('"Cooling energy per 8,760 h",MWh,400,,500,100');
+  });
+
+  it('gives no percentage on a near-zero base, and small energies in kWh (issue 17: "0.0 MWh → 1.0 MWh, +2356.3 %")', () => {
+    // 42.5 kWh of cooling per 8,760 h against 1,044 kWh: a percentage of so small a base says nothing.
+    const small = [run(1, 80, 0, 1.0, 42.5), run(2, 80, 3, 1.001, 1044)];
+    const cooling = compareRuns(small, 1).find((r) => r.metric.key === 'cooling')!;
+    expect(cooling.cells[1].difference).toBeCloseTo(1001.5, 9);
+    expect(cooling.cells[1].differencePct).toBeNull();
+    // Mechanical hours 0 → 3: no percentage either (floor: a day of hours).
+    expect(compareRuns(small, 1).find((r) => r.metric.key === 'mechanical')!.cells[1].differencePct).toBeNull();
+    expect(formatMetric('mwh', 'SI', 42.5)).toBe('43 kWh');
+    expect(formatMetric('mwh', 'SI', 1044)).toBe('1.0 MWh');
+    expect(formatMetric('mwh', 'SI', 1001.5, true)).toBe('+1.0 MWh');
+    expect(formatMetric('mwh', 'SI', 0.4)).toBe('0.4 kWh');
   });
 
   it('falls back to the first finished run when the baseline is not among them', () => {

@@ -1,12 +1,12 @@
 import { Panel } from '@/components/ui/panel';
-import { formatQuantity } from '@/lib/quantity';
+import { energyText, formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { countsSubsets, NOT_COUNTED, notCountedShort, waterPartL, waterPartsShown } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 import type { ScenarioSystem } from '../../../../shared/scenario/schema';
 import { fanGroups } from '../../../../shared/report/fan-groups';
 
-const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
+const mwh = (kwh: number) => energyText(kwh);
 const kw = (v: number) => `${v.toLocaleString('en', { maximumFractionDigits: 0 })} kW`;
 
 function Figure({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
