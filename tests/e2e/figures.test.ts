@@ -16,9 +16,12 @@ const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/sc
 let h: BrowserHarness;
 let engineer: TestPerson;
 let viewer: TestPerson;
+let owner: TestPerson;
+let admin: TestPerson;
 let projectId: number;
 let scenarioId: number;
 let climateFileId: number;
+let runId: number;
 let pageErrors: string[] = [];
 
 const manyCharts = { timeoutMs: 20_000 };
@@ -29,9 +32,12 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   engineer = personWithSession(h.testApp.db, 'ilse.marquand@example.test');
   viewer = personWithSession(h.testApp.db, 'client.reader@example.test');
+  owner = personWithSession(h.testApp.db, 'rua.okonjo@example.test');
+  admin = personWithSession(h.testApp.db, 'desk.admin@example.test', { isAdmin: true });
   projectId = projectWithMembers(h.testApp.db, 'High plateau study (synthetic)', [
     [engineer, 'engineer'],
     [viewer, 'viewer'],
+    [owner, 'owner'],
   ]);
   const { site } = await h.api<{ site: { id: number } }>(
     engineer,
@@ -44,6 +50,9 @@ beforeAll(async () => {
   const { scenario } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
   scenarioId = scenario.id;
   pageErrors = collectPageErrors(h.page);
+  // The run the later tests read: the sample scenario on the 1,400 m site.
+  const { runs } = await h.api<{ runs: { id: number }[] }>(engineer, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }));
+  runId = runs[0].id;
   await h.signInAs(engineer);
   await h.page.goto(h.baseUrl);
   await h.useUnits('SI');
@@ -90,5 +99,80 @@ describe('a supply sweep past the derated envelope (defect 1)', () => {
     expect(await page.getByTestId('zero-mechanical').innerText()).toContain('Left out: 87.8 °F and 89.6 °F');
     await h.shot('figures-sweep-ip');
     await h.useUnits('SI');
+  });
+});
+
+describe('one elevation, fan groups and local unit switches (defects 2, 4, 5)', () => {
+  it('shows the site\'s elevation read-only in the editor, states it in the summary CSV, and names the fan groups', async () => {
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/${scenarioId}`);
+    const elevations = page.getByTestId('site-elevations');
+    await expect.poll(() => elevations.innerText(), { timeout: 15_000 }).toContain('Plateau hall (synthetic): 1,400 m');
+    expect(await page.getByLabel('Site elevation').count()).toBe(0);
+    await h.shot('figures-editor-elevation-si');
+    await expect.poll(async () => (await h.api<{ run: { status: string } }>(engineer, 'GET', `/projects/${projectId}/runs/${runId}`)).run.status, { timeout: 60_000 }).toBe('done');
+    const summary = await page.evaluate(async (url) => (await fetch(url)).text(), `/api/projects/${projectId}/runs/${runId}/downloads/summary.csv`);
+    expect(summary).toContain('site,Site elevation used,m,1400');
+    expect(summary).toContain('site,Air pressure used,,station pressure from the climate file');
+    expect(summary).not.toMatch(/inputs,elevationM/);
+    expect(summary).toContain('year statistics,Median year: Mechanical,h,');
+    // A direct-air hall has hall fans only.
+    expect(summary).toContain('energy,Hall fans,kWh,');
+  });
+
+  // The run page draws 26,280 hours in several charts; on a busy machine it takes a while before it answers a click.
+  it('turns a report and the moist-air chart to IP without changing the person\'s setting', { timeout: 180_000 }, async () => {
+    const page = h.page;
+    await expect.poll(async () => (await h.api<{ run: { status: string } }>(engineer, 'GET', `/projects/${projectId}/runs/${runId}`)).run.status, { timeout: 60_000 }).toBe('done');
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runId}/report`);
+    const toolbar = page.getByTestId('report-toolbar');
+    await toolbar.getByRole('group', { name: 'Units of this report' }).getByRole('button', { name: 'IP' }).click({ timeout: 15_000 });
+    expect(await toolbar.innerText()).toContain('this report only');
+    await h.shot('figures-report-local-ip');
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runId}`);
+    await chartsDrawn(page, { atLeast: 2, timeoutMs: 60_000 });
+    expect(await page.getByTestId('run-inputs').innerText()).toContain('°C');
+    const chart = page.getByTestId('moist-air-chart');
+    await chart.getByRole('group', { name: 'Units of this chart' }).getByRole('button', { name: 'IP' }).click({ timeout: 90_000 });
+    await expect.poll(() => chart.locator('figure svg').last().textContent(), { timeout: 15_000 }).toContain('gr/lb');
+    expect(await page.getByTestId('run-inputs').innerText()).not.toContain('°F');
+    const me = await h.api<{ settings: { unitSystem: string } }>(engineer, 'GET', '/me');
+    expect(me.settings.unitSystem.toUpperCase()).toBe('SI');
+    expect(await h.page.evaluate(() => localStorage.getItem('tramontane.unitSystem'))).toBe('SI');
+    await h.shot('figures-run-chart-local-ip');
+  });
+});
+
+describe('role and sign-in edges (defect 11)', () => {
+  it('shows a viewer the upload wizard read-only up front', async () => {
+    await h.signInAs(viewer);
+    await h.page.goto(`${h.baseUrl}/projects/${projectId}/climate-files/new`);
+    await expect.poll(() => h.page.getByTestId('upload-read-only').isVisible(), { timeout: 15_000 }).toBe(true);
+    expect(await h.page.getByLabel(/file/i).count()).toBe(0);
+    await h.shot('figures-upload-viewer');
+  });
+
+  it('names the project and the inviter on an invitation opened signed out, and logs no 401 or 404 signed out', async () => {
+    await h.api(owner, 'POST', `/projects/${projectId}/invites`, JSON.stringify({ email: 'new.colleague@example.test', role: 'viewer' }));
+    const { messages } = await h.api<{ messages: { to: string[]; text: string }[] }>(admin, 'GET', '/mailbox');
+    const link = messages.filter((m) => m.to.join(' ').includes('new.colleague@example.test')).pop()!.text.match(/http\S+\/invites\/accept\?token=\S+/)![0];
+    await h.signInAs(null);
+    const failed: string[] = [];
+    h.page.on('response', (r) => {
+      if (r.status() >= 400) failed.push(`${r.status()} ${new URL(r.url()).pathname}`);
+    });
+    await h.page.goto(link.replace(/^https?:\/\/[^/]+/, h.baseUrl));
+    const signedOut = h.page.getByTestId('invite-signed-out');
+    await expect.poll(() => signedOut.isVisible(), { timeout: 15_000 }).toBe(true);
+    const panel = await h.page.locator('main').innerText();
+    expect(panel).toContain('High plateau study (synthetic)');
+    expect(panel).toContain('rua.okonjo');
+    expect(await h.page.getByRole('link', { name: 'Sign in to accept' }).getAttribute('href')).toContain('/api/auth/sign-in?returnTo=%2Finvites%2Faccept');
+    await h.shot('figures-invite-signed-out');
+    await h.page.goto(`${h.baseUrl}/sign-in`);
+    await h.page.getByRole('link', { name: 'Continue to sign-in' }).waitFor();
+    await h.page.goto(`${h.baseUrl}/`);
+    await h.page.waitForLoadState('networkidle');
+    expect(failed).toEqual([]);
   });
 });
