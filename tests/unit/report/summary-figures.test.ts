@@ -3,7 +3,7 @@
  * year-to-year statistics the run page shows, and names each fan group apart.
  */
 import { describe, expect, it } from 'vitest';
-import { runSummaryRows, shapeReportRun, type ReportRunSource } from '../../../shared/report';
+import { differingInputs, runSummaryRows, shapeReportRun, type ReportRunSource } from '../../../shared/report';
 import { runScenario, type Scenario } from '../../../shared/scenario';
 import { standardPressurePa } from '../../../shared/psychrometrics';
 import { makeScenario } from '../scenario/fixtures';
@@ -94,5 +94,16 @@ describe('the summary CSV of a run', () => {
     const old = shapeReportRun(source(scenario, 1690));
     delete old.results.energy.rejectionFanKwh;
     expect(value(runSummaryRows(old), 'Fans (hall and scavenger fans together)')).toBeCloseTo(old.results.energy.fanKwh, 0);
+  });
+});
+
+describe('the inputs that differ between compared runs', () => {
+  it('lists only the inputs whose values differ, never the name or an old scenario\'s own elevation', () => {
+    const a = makeScenario('direct-air', { system: { supplyAirC: 24 }, elevationM: 0 });
+    const b = { ...makeScenario('direct-air', { system: { supplyAirC: 27 }, elevationM: 120 }), name: 'Another name' };
+    const differing = differingInputs([a, b]);
+    expect(differing.map((d) => d.path)).toEqual(['system.supplyAirC']);
+    expect(differing[0].rows.map((r) => r?.value)).toEqual([24, 27]);
+    expect(differingInputs([a, a])).toEqual([]);
   });
 });
