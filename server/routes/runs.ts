@@ -1,4 +1,4 @@
-import { and, desc, eq, inArray } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull } from 'drizzle-orm';
 import { z } from 'zod';
 import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
 import { MODE_NAMES } from '../../shared/scenario';
@@ -20,10 +20,38 @@ const createRunsInput = z
   .object({
     scenarioIds: z.array(z.number().int().positive()).min(1, 'scenarioIds must name at least one scenario'),
     climateFileIds: z.array(z.number().int().positive()).min(1, 'climateFileIds must name at least one climate file'),
+    /**
+     * Reuse a run of the same scenario inputs on the same file, site snapshot and engine that is queued, running or done
+     * (not a sweep point) instead of queueing it again ("Run on today and on the projection").
+     */
+    reuse: z.boolean({ error: 'reuse must be true or false' }).default(false),
   })
   .refine((r) => r.scenarioIds.length * r.climateFileIds.length <= maxRunsPerRequest, {
     message: `at most ${maxRunsPerRequest} runs per request`,
   });
+
+/**
+ * A run of exactly these inputs (scenario JSON, climate and site snapshot, engine version) that is queued, running or
+ * done, and not a sweep point; the newest. Reusing it gives the same results without computing them again.
+ */
+function identicalRun(tx: Pick<AppDeps['db'], 'select'>, values: typeof runs.$inferInsert): typeof runs.$inferSelect | undefined {
+  return tx
+    .select()
+    .from(runs)
+    .where(
+      and(
+        eq(runs.projectId, values.projectId),
+        eq(runs.climateFileId, values.climateFileId!),
+        eq(runs.scenarioJson, values.scenarioJson),
+        eq(runs.climateJson, values.climateJson),
+        eq(runs.engineVersion, values.engineVersion!),
+        inArray(runs.status, ['queued', 'running', 'done']),
+        isNull(runs.sweepId),
+      ),
+    )
+    .orderBy(desc(runs.id))
+    .get();
+}
 
 /**
  * A run as the API gives it: the stored JSON parsed. A sweep's point also carries its sweep's name and the swept
@@ -95,25 +123,19 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         const site = db.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
         return { file, site };
       });
+      const reused = new Set<number>();
       const created = db.transaction((tx) => {
         const rows = chosen.flatMap((scenarioRow) => {
           const scenario = validScenario(JSON.parse(scenarioRow.scenarioJson));
-          return files.map(({ file, site }) =>
-            tx
-              .insert(runs)
-              .values(
-                newRunValues({
-                  projectId,
-                  scenarioId: scenarioRow.id,
-                  scenarioJson: JSON.stringify(scenario),
-                  file,
-                  site,
-                  createdBy: req.user!.id,
-                }),
-              )
-              .returning()
-              .get(),
-          );
+          return files.map(({ file, site }) => {
+            const values = newRunValues({ projectId, scenarioId: scenarioRow.id, scenarioJson: JSON.stringify(scenario), file, site, createdBy: req.user!.id });
+            const same = input.reuse ? identicalRun(tx, values) : undefined;
+            if (same) {
+              reused.add(same.id);
+              return same;
+            }
+            return tx.insert(runs).values(values).returning().get();
+          });
         });
         recordRequestAudit(tx, req, 'run.start', rows.length === 1 ? `run ${rows[0].id}` : `${rows.length} runs`, {
           runIds: rows.map((r) => r.id),
@@ -122,8 +144,8 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         });
         return rows;
       });
-      for (const run of created) runQueue.enqueue(run.id);
-      res.status(202).json({ runs: created.map((row) => present(row)) });
+      for (const run of created) if (!reused.has(run.id)) runQueue.enqueue(run.id);
+      res.status(202).json({ runs: created.map((row) => ({ ...present(row), reused: reused.has(row.id) })) });
     }),
 
     route('get', '/projects/:projectId/runs/:runId', access.viewer, (req, res) => {

@@ -176,3 +176,21 @@ describe('role and sign-in edges (defect 11)', () => {
     expect(failed).toEqual([]);
   });
 });
+
+describe('the excursions form (what people asked for)', () => {
+  it('warns when the float ceiling is above the derated allowable maximum', async () => {
+    await h.signInAs(engineer);
+    const page = h.page;
+    await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runId}/excursions`);
+    const form = page.getByRole('form', { name: 'Proposal' });
+    await form.waitFor({ timeout: 30_000 });
+    await form.getByLabel('Allowable class to check against').selectOption('ashrae-2021-a1');
+    await form.getByLabel(/Let the supply float up/).check();
+    // A1 at 1,400 m: 32 − 500/300 = 30.3 °C (ASHRAE TC 9.9 derating, recalled from memory); 31 °C is above it.
+    await form.getByLabel('Float up to').fill('31');
+    await expect.poll(() => page.getByTestId('float-ceiling-warning').innerText(), { timeout: 10_000 }).toContain('above the allowable maximum 30.3 °C');
+    await form.getByLabel('Float up to').fill('30');
+    await expect.poll(() => page.getByTestId('float-ceiling-warning').count()).toBe(0);
+    await h.shot('figures-excursions-warning-si');
+  });
+});
