@@ -4,6 +4,9 @@ import type { RunListing } from '@/features/compare/api/get-runs';
 import { compareRuns } from '@/features/compare/utils/compare-runs';
 import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
 import { formatMetric } from '@/features/compare/components/metric-format';
+import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
+import { dryBulbBins } from '@/features/runs/utils/bin-table';
+import { engineNoteText } from '@/lib/engine-notes';
 import { solveState } from '@/features/calculator/utils/state-request';
 import { stateRows } from '@/features/calculator/utils/state-rows';
 
@@ -148,5 +151,39 @@ describe('the air-state calculator', () => {
     expect(Object.fromEntries(stateRows(out.state, 'IP').map((r) => [r.label, r.value]))['Frost point (over ice)']).toMatch(/16\.0 °F/);
     const warm = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '30', rhPct: '50' }, saturated: false }, 'SI');
     if (warm.ok) expect(Object.fromEntries(stateRows(warm.state, 'SI').map((r) => [r.label, r.value]))['Frost point (over ice)']).toBe('— (only below 0 °C)');
+  });
+});
+
+describe('engine notes follow the unit switch (issue 17 defect 6)', () => {
+  it('writes the supply-above-envelope note with the plain input name, in °F in IP', () => {
+    const note = "supplyAirC 28 °C is above the envelope's maximum dry-bulb 27 °C (derated for 1400 m): every hour is an excursion.";
+    // 28 °C × 9/5 + 32 = 82.4 °F; 27 °C = 80.6 °F; 1,400 m / 0.3048 = 4,593 ft (exact factors).
+    expect(engineNoteText(note, 'IP')).toBe("The supply setpoint 82.4 °F is above the envelope's maximum dry-bulb 80.6 °F (derated for the site's 4,593 ft): every hour is an excursion.");
+    expect(engineNoteText(note, 'SI')).toBe("The supply setpoint 28.0 °C is above the envelope's maximum dry-bulb 27.0 °C (derated for the site's 1,400 m): every hour is an excursion.");
+    expect(engineNoteText('12 hours have no usable data and are counted as no data.', 'IP')).toBe('12 hours have no usable data and are counted as no data.');
+  });
+});
+
+describe('IP that is whole (issue 17 defect 6)', () => {
+  it('gives a cooling load in tons of refrigeration and kBtu/h in IP, kW alone in SI', () => {
+    // 1 ton of refrigeration = 12,000 Btu/h = 3.516 852 842 kW; 1 kW = 3.412 141 6 kBtu/h (NIST SP 811, 2008, App. B).
+    expect(coolingLoadText(1000, 'SI')).toBe('1,000 kW');
+    expect(coolingLoadText(1000, 'IP')).toBe('1,000 kW (284 tons of refrigeration, 3,412 kBtu/h)');
+  });
+
+  it('bins IP dry-bulb in 5 °F bins with whole-degree edges, not 3.6 °F bins', () => {
+    // 21.1 °C is 70 °F, 23.9 °C is 75 °F, 26.7 °C is 80 °F (°F = 1.8 °C + 32, exact).
+    const dryBulbC = Float64Array.from([21.2, 21.5, 23.8, 24.0]);
+    const { bins } = dryBulbBins([0, 0, 0, 2], dryBulbC, dryBulbC, 5 / 1.8, -32 / 1.8);
+    const edgesF = bins.map((b) => [Math.round(toDisplay('temperature', 'IP', b.fromC) * 1e6) / 1e6, Math.round(toDisplay('temperature', 'IP', b.toC) * 1e6) / 1e6]);
+    expect(edgesF).toEqual([
+      [75, 80],
+      [70, 75],
+    ]);
+    expect(bins.map((b) => b.total)).toEqual([1, 3]);
+  });
+
+  it('writes a temperature difference as Δ°F', () => {
+    expect(formatQuantity('temperatureDifference', 'IP', 12)).toBe('21.6 Δ°F');
   });
 });

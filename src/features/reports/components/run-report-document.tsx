@@ -1,3 +1,4 @@
+import { engineNoteText } from '@/lib/engine-notes';
 import { standardDay, utcOffsetLabel } from '../../../../shared/time-zone';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { Notice } from '@/components/ui/notice';
@@ -66,7 +67,7 @@ export function RunReportDocument({ report, linkTitle }: { report: RunReportData
           <Notice tone="warn" title="Notes from the engine">
             <ul className="list-disc pl-5">
               {r.warnings.map((w) => (
-                <li key={w}>{w}</li>
+                <li key={w}>{engineNoteText(w, unitSystem)}</li>
               ))}
             </ul>
           </Notice>

@@ -11,7 +11,11 @@ import { dryBulbBins, type DryBulbBin } from '../utils/bin-table';
 
 const column = createColumnHelper<DryBulbBin>();
 
-/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb; sortable by any column, downloadable as CSV. */
+const SI_BINS = { widthK: 2, originC: 0, label: '2 K' };
+// 5 °F bins from 0 °F: 5 °F = 5/1.8 K; 0 °F = (0 − 32)/1.8 °C (NIST SP 811, exact).
+const IP_BINS = { widthK: 5 / 1.8, originC: -32 / 1.8, label: '5 °F' };
+
+/** 2 K (SI) or 5 °F (IP) dry-bulb bins × hours per mode, with the mean coincident wet-bulb; sortable by any column, downloadable as CSV. */
 export function BinTablePanel({
   modes,
   dryBulbC,
@@ -24,7 +28,9 @@ export function BinTablePanel({
   fileStem: string;
 }) {
   const { unitSystem } = useUnitSystem();
-  const table = useMemo(() => dryBulbBins(modes, dryBulbC, wetBulbC, 2), [modes, dryBulbC, wetBulbC]);
+  // Bins are chosen for the unit, not converted: 2 K in SI, 5 °F on a 0 °F grid in IP (whole-degree edges).
+  const grid = unitSystem === 'IP' ? IP_BINS : SI_BINS;
+  const table = useMemo(() => dryBulbBins(modes, dryBulbC, wetBulbC, grid.widthK, grid.originC), [modes, dryBulbC, wetBulbC, grid]);
   const tUnit = unitOf('temperature', unitSystem);
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo(() => {
@@ -78,7 +84,7 @@ export function BinTablePanel({
     <div>
       <div className="mb-2 flex items-center justify-between">
         <p className="text-xs text-ink-soft">
-          Bins of 2 K ({unitSystem === 'IP' ? '3.6 °F' : '2 °C'}) of outdoor dry-bulb, warmest first; choose a heading to sort by it.
+          Bins of {grid.label} of outdoor dry-bulb, warmest first; choose a heading to sort by it.
           {table.hoursWithoutDryBulb > 0 && ` ${table.hoursWithoutDryBulb.toLocaleString('en')} hours without a dry-bulb are left out.`}
         </p>
         <button type="button" onClick={csv} className="rounded border border-rule px-3 py-1 text-xs hover:bg-mist">

@@ -1,5 +1,5 @@
 import { Panel } from '@/components/ui/panel';
-import { energyText, formatQuantity } from '@/lib/quantity';
+import { coolingLoadText, energyText, formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { countsSubsets, NOT_COUNTED, notCountedShort, waterPartL, waterPartsShown } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
@@ -40,7 +40,12 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
       <Panel title="Energy">
         <div className="grid grid-cols-2 gap-2 2xl:grid-cols-3">
           <Figure label="Partial PUE (cooling)" value={e.partialPue?.toFixed(3) ?? '–'} note="(IT + cooling) / IT energy" testId="ppue" />
-          <Figure label="Peak mechanical load" value={kw(results.peakMechanicalLoadKw)} note={`compressors peak ${kw(results.peakCompressorKw)} electric`} />
+          <Figure
+            label="Peak mechanical load"
+            value={kw(results.peakMechanicalLoadKw)}
+            note={`${unitSystem === 'IP' ? `${coolingLoadText(results.peakMechanicalLoadKw, 'IP').replace(/^[^(]*\(|\)$/g, '')}; ` : ''}compressors peak ${kw(results.peakCompressorKw)} electric`}
+            testId="peak-load"
+          />
           <Figure label="Cooling energy" value={mwh(e.coolingKwh)} note={e.annual ? `${mwh(e.annual.coolingKwh)} per 8,760 h` : undefined} />
         </div>
         <table className="mt-3 w-full text-sm">

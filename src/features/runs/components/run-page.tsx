@@ -6,6 +6,7 @@ import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
 import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
+import { engineNoteText } from '@/lib/engine-notes';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { EnergyWaterCards } from './energy-water-cards';
 import { ModeHoursPanel } from './mode-hours-panel';
@@ -108,7 +109,7 @@ export function RunPage() {
             <Notice tone="warn" title="Notes from the engine">
               <ul className="list-disc pl-5">
                 {results.warnings.map((w) => (
-                  <li key={w}>{w}</li>
+                  <li key={w}>{engineNoteText(w, unitSystem)}</li>
                 ))}
               </ul>
             </Notice>
