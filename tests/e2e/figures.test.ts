@@ -140,6 +140,11 @@ describe('one elevation, fan groups and local unit switches (defects 2, 4, 5)', 
     expect(me.settings.unitSystem.toUpperCase()).toBe('SI');
     expect(await h.page.evaluate(() => localStorage.getItem('tramontane.unitSystem'))).toBe('SI');
     await h.shot('figures-run-chart-local-ip');
+    // The setting in IP: peak load also in tons of refrigeration and kBtu/h (defect 6).
+    await h.useUnits('IP');
+    await expect.poll(() => page.getByText(/tons of refrigeration, [\d,]+ kBtu\/h/).count(), { timeout: 60_000 }).toBeGreaterThan(0);
+    await h.shot('figures-run-ip');
+    await h.useUnits('SI');
   });
 });
 
