@@ -187,3 +187,14 @@ describe('IP that is whole (issue 17 defect 6)', () => {
     expect(formatQuantity('temperatureDifference', 'IP', 12)).toBe('21.6 Δ°F');
   });
 });
+
+describe('calculator errors follow the unit switch (issue 17 defect 6)', () => {
+  it('names the inputs plainly and gives the values in °F in IP', () => {
+    // 86 °F = 30 °C and 77 °F = 25 °C (°F = 1.8 °C + 32, exact): a dew point above the dry-bulb is supersaturated.
+    const out = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '77', dewPointC: '86' }, saturated: false }, 'IP');
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.message).toContain('dew point = 86.0 °F is above dry-bulb = 77.0 °F');
+    expect(out.message).not.toMatch(/dewPointC|°C/);
+  });
+});
