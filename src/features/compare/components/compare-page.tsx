@@ -9,6 +9,7 @@ import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
 import { RunPicker } from './run-picker';
 import { YearSpreadTable } from './year-spread-table';
+import { DifferingInputs } from './differing-inputs';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { mixedEngineNote } from '../../../../shared/report/mode-subsets';
 
@@ -87,6 +88,9 @@ export function ComparePage() {
               )}
               <Panel title="Side by side">
                 <ComparisonTable rows={rows} runs={selected} baselineId={baselineId} />
+              </Panel>
+              <Panel title="Inputs that differ">
+                <DifferingInputs runs={selected} scenarios={selected.map((r) => tables.find((t) => t?.runId === r.id)?.scenario)} />
               </Panel>
               <Panel title="Hours per mode by month">
                 {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}

@@ -44,7 +44,18 @@ function proposalResolver(system: UnitSystem): Resolver<FormValues, unknown, Pro
  * The operator's proposal: supply setpoint, an optional ceiling the supply may float up to, the envelope the
  * controls work to, and the recommended range and allowable class the hours are checked against.
  */
-export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQuery & { supplyAirC: number }; onSubmit: (q: ProposalQuery) => void; busy: boolean }) {
+export function ProposalForm({
+  current,
+  onSubmit,
+  busy,
+  allowableMaxC,
+}: {
+  current: ProposalQuery & { supplyAirC: number };
+  onSubmit: (q: ProposalQuery) => void;
+  busy: boolean;
+  /** The chosen allowable class's maximum dry-bulb at the site, derated for its elevation, °C. */
+  allowableMaxC: (allowableId: string) => number | null;
+}) {
   const { unitSystem } = useUnitSystem();
   const unit = unitOf('temperature', unitSystem);
   const { register, handleSubmit, watch, formState } = useForm<FormValues, unknown, ProposalQuery>({
@@ -59,6 +70,12 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
     },
   });
   const floats = watch('floats');
+  const ceilingText = watch('floatUpToC');
+  const allowableId = watch('allowable');
+  const ceilingC = floats && ceilingText.trim() !== '' && Number.isFinite(Number(ceilingText)) ? fromDisplay('temperature', unitSystem, Number(ceilingText)) : null;
+  const allowedMaxC = allowableMaxC(allowableId);
+  // Compared at 0.05 K, so a ceiling typed in °F that rounds to the limit is not flagged.
+  const ceilingAbove = ceilingC !== null && allowedMaxC !== null && ceilingC > allowedMaxC + 0.05;
   const { errors } = formState;
   const box = 'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
   const select = 'w-full rounded border border-rule bg-panel px-2 py-1 text-sm focus-visible:outline-2 focus-visible:outline-harbour';
@@ -85,6 +102,12 @@ export function ProposalForm({ current, onSubmit, busy }: { current: ProposalQue
           </span>
         </label>
         {errors.floatUpToC && <p className="text-xs text-signal-bad" role="alert">Float ceiling: {errors.floatUpToC.message}</p>}
+        {ceilingAbove && (
+          <p className="rounded border border-signal-warn/50 bg-[#fdf3e1] px-2 py-1 text-xs" role="status" data-testid="float-ceiling-warning">
+            The float ceiling {shown(ceilingC!, unitSystem)} {unit} is above the allowable maximum {shown(allowedMaxC!, unitSystem)} {unit} of {presetLabel(allowableId)} at this
+            site (derated for its elevation): every hour the supply floats past it is an allowable excursion.
+          </p>
+        )}
       </div>
       <label className="block space-y-1">
         <span className="block">Envelope the controls work to</span>

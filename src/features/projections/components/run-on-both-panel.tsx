@@ -50,8 +50,12 @@ export function RunOnBothPanel({ projectId, parentFileId, projectionFileId, canE
       {!canEdit && <p className="text-xs text-ink-soft">Engineers and owners start runs; the comparison page shows the runs already made.</p>}
       {run.isError && <Notice tone="bad" title="The runs were not started">{run.error.message}</Notice>}
       {runs && baseline && (
-        <p>
-          Two runs queued.{' '}
+        <p data-testid="run-on-both-result">
+          {runs.every((r) => r.reused)
+            ? `Both runs already existed (runs #${runs.map((r) => r.id).join(' and #')}); they are reused, not run again.`
+            : runs.some((r) => r.reused)
+              ? `Run #${runs.find((r) => r.reused)!.id} already existed and is reused; run #${runs.find((r) => !r.reused)!.id} is queued.`
+              : 'Two runs queued.'}{' '}
           <Link to={`/projects/${projectId}/compare?runs=${runs.map((r) => r.id).join(',')}&baseline=${baseline.id}`} className="font-medium text-harbour underline">
             Compare today with the projection
           </Link>{' '}

@@ -118,7 +118,7 @@ export function RunHourViews({ run }: { run: RunRecord }) {
         )}
       </HourView>
       <HourView title="Dry-bulb bins" what="table" shown={turn('bins')} heightPx={420}>
-        {() => <BinTablePanel table={data!.bins} fileStem={stem} />}
+        {() => <BinTablePanel siTable={data!.bins} projectId={run.projectId} runId={run.id} fileStem={stem} />}
       </HourView>
     </div>
   );

@@ -39,6 +39,8 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
       'mechanical_h',
       'partial_mechanical_h',
       'no_data_h',
+      'outside_envelope_h',
+      'breaks_envelope',
       'partial_pue',
       `water_${waterSuffix}`,
       `water_humidification_${waterSuffix}`,
@@ -61,6 +63,8 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
         r?.hours.mechanical,
         r ? subsetHours(r.hours, 'partialMechanical') : null,
         r?.hours.noData,
+        r?.excursionHours,
+        r ? (r.breaksEnvelope ? 'yes' : 'no') : null,
         r?.partialPue === null || r === null ? null : Math.round(r.partialPue * 1e4) / 1e4,
         water(r?.waterL),
         water(r?.humidificationL),
@@ -97,6 +101,9 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
               {hourSpecs.map((spec) => (
                 <ModeColumnHead key={modeSpecKey(spec)} spec={spec} className="px-2" />
               ))}
+              <th scope="col" className="px-2 font-medium" title="Hours with data whose supply air lies outside the inlet envelope">
+                Outside envelope (h)
+              </th>
               <th scope="col" className="px-2 font-medium">
                 Partial PUE
               </th>
@@ -110,7 +117,7 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
           </thead>
           <tbody>
             {points.map((p, i) => (
-              <tr key={p.runId} className="border-b border-rule/60">
+              <tr key={p.runId} className={`border-b border-rule/60 ${p.results?.breaksEnvelope ? 'bg-[#fbeceb]/60' : ''}`} data-breaks-envelope={p.results?.breaksEnvelope ? 'yes' : undefined}>
                 <td className="num py-1 text-left">
                   <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 hover:underline">
                     {i + 1} · run #{p.runId}
@@ -125,12 +132,18 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
                   <span className={`num rounded px-1.5 py-0.5 text-xs ${statusClass[p.status]}`} title={p.error ?? undefined}>
                     {p.status}
                   </span>
+                  {p.results?.breaksEnvelope && (
+                    <span className="ml-1 rounded bg-[#fbeceb] px-1.5 py-0.5 text-xs text-signal-bad" title="The supply setpoint is outside the derated inlet envelope: every hour is an excursion">
+                      outside envelope
+                    </span>
+                  )}
                 </td>
                 {hourSpecs.map((spec) => (
                   <td key={modeSpecKey(spec)} className={`num px-2 ${spec.kind === 'subset' ? 'text-ink-soft' : ''}`}>
                     {p.results ? hoursText(hoursOfSpec(p.results.hours, spec)) : '–'}
                   </td>
                 ))}
+                <td className={`num px-2 ${p.results?.excursionHours ? 'text-signal-bad' : ''}`}>{formatMetric('excursionHours', unitSystem, p.results?.excursionHours ?? null)}</td>
                 <td className="num px-2">{formatMetric('partialPue', unitSystem, p.results?.partialPue ?? null)}</td>
                 <td className="num px-2">{formatMetric('waterL', unitSystem, p.results?.waterL ?? null)}</td>
                 <td className="num px-2">{formatMetric('peakMechanicalLoadKw', unitSystem, p.results?.peakMechanicalLoadKw ?? null)}</td>
