@@ -16,7 +16,7 @@ export function HomeRoute() {
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
       <div className="grid content-start gap-6">
         <Panel title="Projects">
-          {projects.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
+          {projects.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
           {projects.isError &&
             (signedOut ? (
               <Notice title="You are not signed in">
@@ -63,7 +63,7 @@ export function HomeRoute() {
         </Panel>
         {projects.data && (
           <Panel title="Start a project">
-            <Suspense fallback={<div className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the form" />}>
+            <Suspense fallback={<div role="status" className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the form" />}>
               <NewProjectForm />
             </Suspense>
           </Panel>

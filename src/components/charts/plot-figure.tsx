@@ -80,7 +80,7 @@ export function PlotFigure({ render, label, placeholderHeightPx = 320, className
   return (
     <figure aria-label={label} className={className}>
       {state === 'loading' && (
-        <div aria-label={`Loading chart: ${label}`} className="animate-pulse rounded bg-mist" style={{ height: placeholderHeightPx }} />
+        <div role="status" aria-label={`Loading chart: ${label}`} className="animate-pulse rounded bg-mist" style={{ height: placeholderHeightPx }} />
       )}
       {state === 'error' && (
         <p role="alert" className="rounded border border-signal-bad/40 bg-[#fbeceb] p-3 text-sm">

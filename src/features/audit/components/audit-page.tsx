@@ -95,7 +95,7 @@ export function AuditPage() {
       </Panel>
 
       {audit.isError && <Notice tone="bad" title="The audit trail could not be loaded">{audit.error.message}</Notice>}
-      {audit.isPending && <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading audit trail" />}
+      {audit.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading audit trail" />}
       {audit.isSuccess && (
         <Panel>
           {events.length === 0 ? (

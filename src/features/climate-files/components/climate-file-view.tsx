@@ -33,7 +33,7 @@ export function ClimateFileView({
   onDeleted?: () => void;
 }) {
   const detail = useClimateFile(projectId, fileId);
-  if (detail.isPending) return <div className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />;
+  if (detail.isPending) return <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />;
   if (detail.isError) {
     const notFound = detail.error instanceof ApiError && detail.error.status === 404;
     return (
@@ -136,7 +136,7 @@ function Loaded({
         ) : hours.isError ? (
           <Notice tone="bad" title="The hours could not be loaded">{hours.error.message} Reload the page to try again.</Notice>
         ) : (
-          <div className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the hours" />
+          <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the hours" />
         )}
       </Panel>
 
@@ -144,7 +144,7 @@ function Loaded({
         {chartHours ? (
           <MoistAirChart pressurePa={summary.meanPressurePa} hours={chartHours} />
         ) : (
-          <div className="h-96 animate-pulse rounded bg-mist" aria-label="Loading the chart" />
+          <div role="status" className="h-96 animate-pulse rounded bg-mist" aria-label="Loading the chart" />
         )}
       </Panel>
 

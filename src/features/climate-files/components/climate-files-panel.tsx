@@ -31,7 +31,7 @@ export function ClimateFilesPanel({
         ) : undefined
       }
     >
-      {files.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
+      {files.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
       {files.isError && <Notice tone="bad" title="Climate files could not be loaded">{files.error.message}</Notice>}
       {files.data && listed.length === 0 && (
         <p className="text-sm text-ink-soft">

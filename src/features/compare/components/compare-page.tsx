@@ -60,7 +60,7 @@ export function ComparePage() {
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">
-          {runsQuery.isPending && <div className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+          {runsQuery.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
           {runsQuery.isError && <Notice tone="bad" title="Runs could not be loaded">{runsQuery.error.message}</Notice>}
           {runsQuery.data && done.length === 0 && (
             <p className="text-sm text-ink-soft">No finished runs yet. Open a scenario, run it on a climate file, then come back to compare.</p>
@@ -93,7 +93,7 @@ export function ComparePage() {
                 <DifferingInputs runs={selected} scenarios={selected.map((r) => tables.find((t) => t?.runId === r.id)?.scenario)} />
               </Panel>
               <Panel title="Hours per mode by month">
-                {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}
+                {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div role="status" className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}
               </Panel>
               {anyMultiYear && (
                 <Panel title="Year to year: mechanical hours">

@@ -64,7 +64,7 @@ export function ExcursionsPage() {
         </div>
       </header>
 
-      {query.isPending && <div className="h-96 animate-pulse rounded-md bg-mist" aria-label="Working out excursions" />}
+      {query.isPending && <div role="status" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Working out excursions" />}
       {query.isError && (
         <Notice tone="bad" title="The excursions could not be worked out">
           {query.error.message} {query.error.message.includes('is queued') || query.error.message.includes('is running') ? 'Wait for the run to finish, then reload.' : 'Check the proposal, or open the run again from the project.'}

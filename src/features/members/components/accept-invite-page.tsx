@@ -13,7 +13,7 @@ export function AcceptInvitePage() {
   const accept = useAcceptInvite();
   const location = useLocation();
   if (!token) return <Notice tone="bad" title="This link has no invitation in it">Open the link from the e-mail again, whole.</Notice>;
-  if (preview.isPending) return <div className="h-32 animate-pulse rounded bg-mist" aria-label="Loading invitation" />;
+  if (preview.isPending) return <div role="status" className="h-32 animate-pulse rounded bg-mist" aria-label="Loading invitation" />;
   if (preview.isError) return <Notice tone="bad" title="This invitation cannot be used">{preview.error.message}</Notice>;
   const invite = preview.data;
   return (

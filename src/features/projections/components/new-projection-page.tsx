@@ -42,7 +42,7 @@ export function NewProjectionPage() {
           </p>
         )}
       </header>
-      {files.isPending && <div className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />}
+      {files.isPending && <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />}
       {files.isError && <Notice tone="bad" title="The climate files could not be loaded">{files.error.message}</Notice>}
       {files.data && !parent && (
         <Notice tone="warn" title="Choose the file to start from">

@@ -23,7 +23,7 @@ export function ProjectionPage() {
   return (
     <div className="space-y-4">
       <ProjectCrumb projectId={projectId} />
-      {projection.isPending && <div className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the projection" />}
+      {projection.isPending && <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the projection" />}
       {projection.isError && (
         <Notice tone="bad" title={projection.error instanceof ApiError && projection.error.status === 404 ? 'This projection does not exist' : 'The projection could not be loaded'}>
           {projection.error.message} Go back to the project to see its climate files.

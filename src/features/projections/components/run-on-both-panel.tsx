@@ -12,7 +12,7 @@ export function RunOnBothPanel({ projectId, parentFileId, projectionFileId, canE
   if (parentFileId === null) {
     return <p className="text-sm text-ink-soft">Today's file was deleted, so there is nothing to run beside the projection. The projection still runs on its own from any scenario.</p>;
   }
-  if (scenarios.isPending) return <div className="h-10 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />;
+  if (scenarios.isPending) return <div role="status" className="h-10 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />;
   if (scenarios.isError) return <Notice tone="bad" title="Scenarios could not be loaded">{scenarios.error.message}</Notice>;
   const list = scenarios.data.scenarios;
   if (list.length === 0) {

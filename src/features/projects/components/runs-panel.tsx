@@ -78,7 +78,7 @@ export function RunsPanel({ projectId }: { projectId: number }) {
         ) : undefined
       }
     >
-      {runs.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+      {runs.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
       {runs.isError && <Notice tone="bad" title="Runs could not be loaded">{runs.error.message}</Notice>}
       {runs.data && recent.length === 0 && (
         <p className="text-sm text-ink-soft">No runs yet. Open a scenario and run it on one or more climate files.</p>

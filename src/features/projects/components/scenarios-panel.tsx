@@ -22,7 +22,7 @@ export function ScenariosPanel({ projectId, canEdit }: { projectId: number; canE
         ) : undefined
       }
     >
-      {scenarios.isPending && <div className="h-16 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />}
+      {scenarios.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />}
       {scenarios.isError && <Notice tone="bad" title="Scenarios could not be loaded">{scenarios.error.message}</Notice>}
       {scenarios.data && scenarios.data.scenarios.length === 0 && (
         <p className="text-sm text-ink-soft">

@@ -133,7 +133,7 @@ export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { p
         )}
         <div className="mt-4">
           <h3 className="text-sm font-semibold">Links to this report</h3>
-          {links.isPending && <div className="mt-1 h-10 animate-pulse rounded bg-mist" aria-label="Loading links" />}
+          {links.isPending && <div role="status" className="mt-1 h-10 animate-pulse rounded bg-mist" aria-label="Loading links" />}
           {links.isError && <Notice tone="bad" title="Links could not be loaded">{links.error.message}</Notice>}
           {links.data && all.filter(sameReport).length === 0 && <p className="text-sm text-ink-soft">None yet. Create one above to hand this report to a reviewer.</p>}
           <ul>

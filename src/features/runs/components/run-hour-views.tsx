@@ -33,7 +33,7 @@ function useOneAfterAnother(ready: boolean, count: number): number {
 function HourView({ title, what, shown, heightPx, children }: { title: string; what: 'chart' | 'table'; shown: boolean; heightPx: number; children: () => ReactNode }) {
   return (
     <Panel title={title}>
-      {shown ? children() : <div className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />}
+      {shown ? children() : <div role="status" className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />}
     </Panel>
   );
 }

@@ -21,7 +21,7 @@ export function SiteElevations({ projectId, climateFiles }: { projectId: number;
           <ul className="space-y-0.5">
             {sites.map((f) => (
               <li key={f.siteId}>
-                <Link to={`/projects/${projectId}/sites/${f.siteId}`} className="text-harbour underline-offset-2 hover:underline">
+                <Link to={`/projects/${projectId}/sites/${f.siteId}`} className="text-harbour underline underline-offset-2">
                   {f.siteName}
                 </Link>
                 : <span className="num">{formatQuantity('elevation', unitSystem, f.siteElevationM)}</span>{' '}

@@ -109,7 +109,7 @@ export function NewSweepPage() {
       {role && !canEdit && (
         <Notice title="Viewers can read sweeps but not start them">Ask an engineer or owner of this project to start one.</Notice>
       )}
-      {loading && <div className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading scenarios and climate files" />}
+      {loading && <div role="status" className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading scenarios and climate files" />}
       {scenarios.isError && <Notice tone="bad" title="Scenarios could not be loaded">{scenarios.error.message}</Notice>}
       {!loading && list.length === 0 && (
         <Notice title="No scenario to sweep yet">
