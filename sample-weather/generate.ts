@@ -196,7 +196,9 @@ const sites: SiteFile[] = [
       }).filter((h) => inYears(h));
       const lines = [note(kelderwick, 'Times are UTC.'), 'timestamp,dry_bulb_c,relative_humidity_pct,pressure_kpa'];
       for (const h of hours) {
-        lines.push(`${new Date(h.utcMs).toISOString().slice(0, 16)}Z,${fixed(h.dryBulbC, 1)},${fixed(h.relativeHumidityPct, 1)},${fixed(h.pressurePa / 1000, 2)}`);
+        lines.push(
+          `${new Date(h.utcMs).toISOString().slice(0, 16)}Z,${fixed(h.dryBulbC, 1)},${fixed(h.relativeHumidityPct, 1)},${fixed(h.pressurePa / 1000, 2)}`,
+        );
       }
       return `${lines.join('\n')}\n`;
     },
@@ -218,14 +220,19 @@ const sites: SiteFile[] = [
         dewPoint: { meanC: -1.5, amplitudeK: 7.5, warmestDay: 215, sigmaK: 4 },
       });
       // local standard time, UTC−7 all year; hour h (1–24) ends at local midnight + h
-      const lines = [note(mesaAlta, 'Local standard time (UTC-07:00), hour 1-24 = hour ending.'), 'Year,Month,Day,Hour,Temp (F),Dew Point (F),Station Pressure (inHg)'];
+      const lines = [
+        note(mesaAlta, 'Local standard time (UTC-07:00), hour 1-24 = hour ending.'),
+        'Year,Month,Day,Hour,Temp (F),Dew Point (F),Station Pressure (inHg)',
+      ];
       for (const h of hours) {
         const ending = new Date(h.utcMs - 7 * HOUR_MS - HOUR_MS); // the hour this stamp ends, in local time
         const y = ending.getUTCFullYear();
         if (y < YEARS[0] || y > YEARS[YEARS.length - 1]) continue;
         const hourEnding = ending.getUTCHours() + 1;
         const dewCell = h.utcMs === Date.UTC(2022, 5, 14, 19) || h.utcMs === Date.UTC(2022, 5, 14, 20) ? 'M' : fixed(toF(h.dewPointC), 1);
-        lines.push(`${y},${ending.getUTCMonth() + 1},${ending.getUTCDate()},${hourEnding},${fixed(toF(h.dryBulbC), 1)},${dewCell},${fixed(toInHg(h.pressurePa), 2)}`);
+        lines.push(
+          `${y},${ending.getUTCMonth() + 1},${ending.getUTCDate()},${hourEnding},${fixed(toF(h.dryBulbC), 1)},${dewCell},${fixed(toInHg(h.pressurePa), 2)}`,
+        );
       }
       return `${lines.join('\n')}\n`;
     },
@@ -281,7 +288,9 @@ const sites: SiteFile[] = [
         if (w.year < YEARS[0] || w.year > YEARS[YEARS.length - 1]) continue;
         if (h.utcMs >= outage && h.utcMs < outage + 4 * HOUR_MS) continue;
         const comma = (v: number, digits: number) => fixed(v, digits).replace('.', ',');
-        lines.push(`${pad(w.day)}.${pad(w.month)}.${w.year};${pad(w.hour)}:${pad(w.minute)};${comma(h.dryBulbC, 1)};${comma(h.relativeHumidityPct, 1)};${comma(h.pressurePa / 100, 1)}`);
+        lines.push(
+          `${pad(w.day)}.${pad(w.month)}.${w.year};${pad(w.hour)}:${pad(w.minute)};${comma(h.dryBulbC, 1)};${comma(h.relativeHumidityPct, 1)};${comma(h.pressurePa / 100, 1)}`,
+        );
       }
       return `${lines.join('\r\n')}\r\n`;
     },

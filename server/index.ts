@@ -13,7 +13,8 @@ async function main(): Promise<void> {
   const env = loadEnv();
   const db = openDatabase(env.databaseFile);
   const { seeded, migratedScenarios, migratedSweeps, skipped, requeuedDemoRuns } = prepareStoredData(db, { demo: env.TRAMONTANE_DEMO });
-  if (migratedScenarios + migratedSweeps > 0) console.log(`Brought ${migratedScenarios} saved scenario(s) and ${migratedSweeps} sweep base(s) up to the current inputs`);
+  if (migratedScenarios + migratedSweeps > 0)
+    console.log(`Brought ${migratedScenarios} saved scenario(s) and ${migratedSweeps} sweep base(s) up to the current inputs`);
   if (skipped.length > 0) console.log(`Left unreadable scenario JSON as it was: ${skipped.join(', ')}`);
   if (requeuedDemoRuns > 0) console.log(`Queued ${requeuedDemoRuns} demo run(s) again for the current engine`);
   const pool = createWorkerPool({ threads: env.TRAMONTANE_WORKERS });
@@ -32,11 +33,22 @@ async function main(): Promise<void> {
   const resumed = runQueue.resume();
   if (resumed > 0) console.log(`Resuming ${resumed} run(s) left pending`);
 
-  const app = createApp({ db, pool, runQueue, clientDist: clientDistFolder, devMiddleware, adminEmails: env.TRAMONTANE_ADMIN_EMAILS, storageLimitBytes: env.TRAMONTANE_PROJECT_STORAGE_MB * BYTES_PER_MB, ...auth.deps });
+  const app = createApp({
+    db,
+    pool,
+    runQueue,
+    clientDist: clientDistFolder,
+    devMiddleware,
+    adminEmails: env.TRAMONTANE_ADMIN_EMAILS,
+    storageLimitBytes: env.TRAMONTANE_PROJECT_STORAGE_MB * BYTES_PER_MB,
+    ...auth.deps,
+  });
   const server: Server = app.listen(env.PORT, env.HOST, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : env.PORT;
-    console.log(`Tramontane (${env.NODE_ENV}${env.TRAMONTANE_DEMO ? ', demo mode' : ''}) on http://localhost:${port}  data: ${env.TRAMONTANE_DATA_DIR}${seeded ? '  (demo data loaded)' : ''}`);
+    console.log(
+      `Tramontane (${env.NODE_ENV}${env.TRAMONTANE_DEMO ? ', demo mode' : ''}) on http://localhost:${port}  data: ${env.TRAMONTANE_DATA_DIR}${seeded ? '  (demo data loaded)' : ''}`,
+    );
   });
 
   let stopping = false;

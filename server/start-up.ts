@@ -10,7 +10,10 @@ import { migrateSavedScenarios } from './scenarios/saved-migration';
  * the editor's one-time notice; and the demo's runs queued again by the current engine where the demo was run by an
  * older one. Runs themselves are never rewritten. The run queue's resume() then starts whatever is queued.
  */
-export function prepareStoredData(db: Db, { demo }: { demo: boolean }): { seeded: boolean; migratedScenarios: number; migratedSweeps: number; skipped: string[]; requeuedDemoRuns: number } {
+export function prepareStoredData(
+  db: Db,
+  { demo }: { demo: boolean },
+): { seeded: boolean; migratedScenarios: number; migratedSweeps: number; skipped: string[]; requeuedDemoRuns: number } {
   const { seeded } = demo ? seedDemo(db) : { seeded: false };
   const migrated = migrateSavedScenarios(db, migrateScenario);
   const requeuedDemoRuns = demo ? requeueOldDemoRuns(db) : 0;

@@ -31,7 +31,12 @@ export const modeInk: Record<ModeKey, string> = {
 };
 
 /** Where each mode's hours sit in a results table (ModeHours names the no-data hours `noData`). */
-const modeHoursField: Record<ModeKey, 'free' | 'adiabatic' | 'mechanical' | 'noData'> = { free: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', no_data: 'noData' };
+const modeHoursField: Record<ModeKey, 'free' | 'adiabatic' | 'mechanical' | 'noData'> = {
+  free: 'free',
+  adiabatic: 'adiabatic',
+  mechanical: 'mechanical',
+  no_data: 'noData',
+};
 
 /** The hours of one mode in a results table (a run's, a month's, a year's). */
 export function hoursOfMode(row: Pick<ModeHours, 'free' | 'adiabatic' | 'mechanical' | 'noData'>, mode: ModeKey): number {

@@ -1,5 +1,15 @@
 import { hourlyJson } from '../shared/report/hourly-json';
-import { hourlyCsvInput, hybridHourlyColumns, isHybrid, migrateScenario, outdoorStates, parseScenario, runScenario, writeHourlyCsv, type ScenarioSeries } from '../shared/scenario';
+import {
+  hourlyCsvInput,
+  hybridHourlyColumns,
+  isHybrid,
+  migrateScenario,
+  outdoorStates,
+  parseScenario,
+  runScenario,
+  writeHourlyCsv,
+  type ScenarioSeries,
+} from '../shared/scenario';
 
 export interface FormatHourlyInput {
   /** Scenario JSON as stored with the run; validated again because a worker must not trust its caller. */
@@ -27,7 +37,17 @@ const encoder = new TextEncoder();
  * climate series at the run's elevation, exactly as the run computed them (its first step, outdoorStates),
  * and written beside the stored modes — kept off the server's main thread.
  */
-export function formatHourly({ scenario, series, elevationM, utcOffsetMinutes, modes, mechanicalFraction, humidified, format, about }: FormatHourlyInput): Uint8Array {
+export function formatHourly({
+  scenario,
+  series,
+  elevationM,
+  utcOffsetMinutes,
+  modes,
+  mechanicalFraction,
+  humidified,
+  format,
+  about,
+}: FormatHourlyInput): Uint8Array {
   // A run's scenario is stored as it ran; one from engine 1.0.0 carries retired inputs, so it is migrated first
   // (only its elevation is used here).
   const parsed = parseScenario(migrateScenario(scenario).scenario);

@@ -43,7 +43,9 @@ export function bundleOptions({ entry, format }) {
     target: 'node20',
     logLevel: 'error',
     // papaparse is CommonJS; an ESM bundle needs a require to load it.
-    ...(format === 'esm' ? { banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" } } : {}),
+    ...(format === 'esm'
+      ? { banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" } }
+      : {}),
   };
 }
 

@@ -10,11 +10,7 @@ import { HttpError } from '../http-error';
  * - public: anyone; signed-in: any session; admin: organisation admins;
  * - project: a member of the route's `:projectId` holding at least `role` (admins pass as owners).
  */
-export type AccessRule =
-  | { level: 'public' }
-  | { level: 'signed-in' }
-  | { level: 'admin' }
-  | { level: 'project'; role: ProjectRole };
+export type AccessRule = { level: 'public' } | { level: 'signed-in' } | { level: 'admin' } | { level: 'project'; role: ProjectRole };
 
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
 

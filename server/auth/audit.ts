@@ -23,8 +23,7 @@ type DbOrTx = Pick<Db, 'select' | 'insert'>;
  */
 export function recordAudit(db: DbOrTx, entry: AuditEntry, now: Date = new Date()): void {
   const actor = entry.actorId == null ? undefined : db.select({ name: users.name }).from(users).where(eq(users.id, entry.actorId)).get();
-  const project =
-    entry.projectId == null ? undefined : db.select({ name: projects.name }).from(projects).where(eq(projects.id, entry.projectId)).get();
+  const project = entry.projectId == null ? undefined : db.select({ name: projects.name }).from(projects).where(eq(projects.id, entry.projectId)).get();
   db.insert(auditEvents)
     .values({
       at: now,

@@ -20,9 +20,7 @@ export async function signInviteToken(secret: Uint8Array, inviteId: number, expi
   return { token, tokenIdHash: hashToken(tokenId) };
 }
 
-export type InviteTokenCheck =
-  | { ok: true; inviteId: number; tokenIdHash: string }
-  | { ok: false; reason: 'expired' | 'invalid' };
+export type InviteTokenCheck = { ok: true; inviteId: number; tokenIdHash: string } | { ok: false; reason: 'expired' | 'invalid' };
 
 export async function readInviteToken(secret: Uint8Array, token: string, now: Date): Promise<InviteTokenCheck> {
   try {

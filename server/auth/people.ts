@@ -52,7 +52,11 @@ export function personForIdentity(
     const wasAdmin = tx.select({ isAdmin: users.isAdmin }).from(users).where(eq(users.id, person.id)).get()!.isAdmin;
     const madeAdmin = !wasAdmin && (listed || firstPerson);
     // Follow a changed address at the provider, unless someone else here already holds it.
-    const holder = tx.select({ id: users.id }).from(users).where(eq(sql`lower(${users.email})`, identity.email)).get();
+    const holder = tx
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(sql`lower(${users.email})`, identity.email))
+      .get();
     const email = !holder || holder.id === person.id ? { email: identity.email } : {};
     tx.update(users)
       .set({ name: identity.name, ...email, lastSignInAt: now, ...(madeAdmin ? { isAdmin: true } : {}) })
@@ -69,4 +73,3 @@ export class EmailTaken extends Error {
     super(`The e-mail ${email} already belongs to another sign-in identity.`);
   }
 }
-

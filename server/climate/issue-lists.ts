@@ -39,9 +39,23 @@ export function saveIssueList(
     .returning({ id: climateIssueLists.id })
     .get();
   const unlinked = and(eq(climateIssueLists.projectId, projectId), isNull(climateIssueLists.climateFileId));
-  const kept = tx.select({ id: climateIssueLists.id }).from(climateIssueLists).where(unlinked).orderBy(desc(climateIssueLists.id)).limit(UNLINKED_LISTS_KEPT).all();
+  const kept = tx
+    .select({ id: climateIssueLists.id })
+    .from(climateIssueLists)
+    .where(unlinked)
+    .orderBy(desc(climateIssueLists.id))
+    .limit(UNLINKED_LISTS_KEPT)
+    .all();
   tx.delete(climateIssueLists)
-    .where(and(unlinked, notInArray(climateIssueLists.id, kept.map((k) => k.id))))
+    .where(
+      and(
+        unlinked,
+        notInArray(
+          climateIssueLists.id,
+          kept.map((k) => k.id),
+        ),
+      ),
+    )
     .run();
   return { id: row.id, path: issueListPath(projectId, row.id), issues: list.issues };
 }

@@ -30,7 +30,8 @@ export function readMultipartFiles(body: Buffer, boundary: string): UploadedPart
   for (;;) {
     at += delimiter.length;
     if (body[at] === 45 && body[at + 1] === 45) break; // "--": the closing delimiter
-    if (!body.subarray(at, at + 2).equals(CRLF)) throw new HttpError(400, 'invalid_request', 'The multipart upload is malformed (no line end after a boundary).');
+    if (!body.subarray(at, at + 2).equals(CRLF))
+      throw new HttpError(400, 'invalid_request', 'The multipart upload is malformed (no line end after a boundary).');
     const headerEnd = body.indexOf(HEADER_END, at + 2);
     if (headerEnd === -1) throw new HttpError(400, 'invalid_request', 'The multipart upload is malformed (a part has no header end).');
     const headers = body.subarray(at + 2, headerEnd).toString('utf8');

@@ -11,7 +11,6 @@ import { newRunValues } from '../runs/new-run';
 
 const sampleFolder = path.join(appRoot, 'sample-weather');
 
-
 const demoScenarioFiles = ['direct-air-a1.json', 'indirect-air-recommended.json', 'water-side-tower.json'];
 
 /**
@@ -53,13 +52,10 @@ export function seedDemoClimate(tx: Tx, projectId: number, createdBy: number | n
     const parsed = parseScenario(JSON.parse(readFileSync(path.join(sampleFolder, 'scenarios', scenarioFile), 'utf8')));
     if (!parsed.ok) throw new Error(`Sample scenario ${scenarioFile} is not valid: ${parsed.errors.join('; ')}`);
     const scenarioJson = JSON.stringify(withoutOwnElevation(parsed.scenario));
-    const scenario = tx
-      .insert(scenarios)
-      .values({ projectId, name: parsed.scenario.name, scenarioJson, createdBy })
-      .returning()
-      .get();
+    const scenario = tx.insert(scenarios).values({ projectId, name: parsed.scenario.name, scenarioJson, createdBy }).returning().get();
     for (const { file, site } of files) {
-      tx.insert(runs).values(newRunValues({ projectId, scenarioId: scenario.id, scenarioJson, file, site, createdBy }))
+      tx.insert(runs)
+        .values(newRunValues({ projectId, scenarioId: scenario.id, scenarioJson, file, site, createdBy }))
         .run();
     }
   }

@@ -29,12 +29,18 @@ const HYBRID_AXES: SweepAxis[] = [
 export function seedDemoHybrid(tx: Tx, projectId: number, createdBy: number | null): number | null {
   const parsed = parseScenario(JSON.parse(readFileSync(path.join(appRoot, 'sample-weather', 'scenarios', 'hybrid-w32-dry-cooler.json'), 'utf8')));
   if (!parsed.ok) throw new Error(`Sample hybrid scenario is not valid: ${parsed.errors.join('; ')}`);
-  const site = tx.select().from(sites).where(and(eq(sites.projectId, projectId), eq(sites.name, WARM_SITE_NAME))).get();
+  const site = tx
+    .select()
+    .from(sites)
+    .where(and(eq(sites.projectId, projectId), eq(sites.name, WARM_SITE_NAME)))
+    .get();
   const file = site && tx.select().from(climateFiles).where(eq(climateFiles.siteId, site.id)).orderBy(asc(climateFiles.id)).get();
   if (!site || !file) return null;
   const scenarioJson = JSON.stringify(parsed.scenario);
   const scenario = tx.insert(scenarios).values({ projectId, name: parsed.scenario.name, scenarioJson, createdBy }).returning().get();
-  tx.insert(runs).values(newRunValues({ projectId, scenarioId: scenario.id, scenarioJson, file, site, createdBy })).run();
+  tx.insert(runs)
+    .values(newRunValues({ projectId, scenarioId: scenario.id, scenarioJson, file, site, createdBy }))
+    .run();
   const prepared = prepareSweep(parsed.scenario, HYBRID_AXES);
   if (!prepared.ok) throw new Error(`The demo hybrid sweep does not prepare: ${prepared.errors.join('; ')}`);
   const { sweep } = insertSweep(tx, {

@@ -42,7 +42,9 @@ export function requeueOldDemoRuns(db: Db, engineVersion: string = ENGINE_VERSIO
       const site = tx.select().from(sites).where(eq(sites.id, file.siteId)).get();
       if (!site) continue;
       tx.insert(runs)
-        .values(newRunValues({ projectId: demo.id, scenarioId: scenario.id, scenarioJson: JSON.stringify(parsed.scenario), file, site, createdBy: r.createdBy }))
+        .values(
+          newRunValues({ projectId: demo.id, scenarioId: scenario.id, scenarioJson: JSON.stringify(parsed.scenario), file, site, createdBy: r.createdBy }),
+        )
         .run();
       queued++;
     }

@@ -22,7 +22,12 @@ export function seedDemoSweep(tx: Tx, projectId: number, createdBy: number | nul
     .orderBy(asc(scenarios.id))
     .all()
     .find((s) => (JSON.parse(s.scenarioJson) as { system: { kind: string } }).system.kind === 'direct-air');
-  const file = tx.select().from(climateFiles).where(and(eq(climateFiles.projectId, projectId))).orderBy(asc(climateFiles.id)).get();
+  const file = tx
+    .select()
+    .from(climateFiles)
+    .where(and(eq(climateFiles.projectId, projectId)))
+    .orderBy(asc(climateFiles.id))
+    .get();
   if (!scenarioRow || !file) return null;
   const site = tx.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
   const parsed = parseScenario(JSON.parse(scenarioRow.scenarioJson));

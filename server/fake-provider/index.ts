@@ -152,7 +152,10 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     const checked = checkRequest(req.query);
     res.set('cache-control', 'no-store');
     if (!checked.params) {
-      res.status(400).type('html').send(pickerPage({}, { demo: [], typed: [] }, checked.problem));
+      res
+        .status(400)
+        .type('html')
+        .send(pickerPage({}, { demo: [], typed: [] }, checked.problem));
       return;
     }
     res.type('html').send(pickerPage(checked.params, people.all()));
@@ -162,7 +165,10 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     const body = (req.body ?? {}) as Record<string, string>;
     const checked = checkRequest(body);
     if (!checked.params) {
-      res.status(400).type('html').send(pickerPage({}, { demo: [], typed: [] }, checked.problem));
+      res
+        .status(400)
+        .type('html')
+        .send(pickerPage({}, { demo: [], typed: [] }, checked.problem));
       return;
     }
     let person: FakePerson | undefined;
@@ -171,13 +177,19 @@ export async function startFakeProvider(options: FakeProviderOptions): Promise<F
     } else {
       const typed = z.object({ name: z.string().trim().min(1).max(120), email: z.string().trim().email().max(200) }).safeParse(body);
       if (!typed.success) {
-        res.status(400).type('html').send(pickerPage(checked.params, people.all(), 'Type a name and a valid e-mail address.'));
+        res
+          .status(400)
+          .type('html')
+          .send(pickerPage(checked.params, people.all(), 'Type a name and a valid e-mail address.'));
         return;
       }
       person = people.addTyped(typed.data.name, typed.data.email);
     }
     if (!person) {
-      res.status(400).type('html').send(pickerPage(checked.params, people.all(), 'That person is not known here.'));
+      res
+        .status(400)
+        .type('html')
+        .send(pickerPage(checked.params, people.all(), 'That person is not known here.'));
       return;
     }
     const pickId = randomBytes(16).toString('base64url');

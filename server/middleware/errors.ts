@@ -30,7 +30,9 @@ export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler
     }
     if (error instanceof TaskTimeLimitError) {
       log(error);
-      res.status(503).json(body('too_slow', `This took longer than the server allows (${Math.round(error.timeLimitMs / 1000)} s) and was stopped; nothing was stored.`));
+      res
+        .status(503)
+        .json(body('too_slow', `This took longer than the server allows (${Math.round(error.timeLimitMs / 1000)} s) and was stopped; nothing was stored.`));
       return;
     }
     if (error?.code === 'SQLITE_FULL') {

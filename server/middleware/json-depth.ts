@@ -14,7 +14,8 @@ export function refuseDeepJson(raw: Buffer, maxDepth = MAX_JSON_DEPTH): void {
   for (let i = 0; i < raw.length; i++) {
     const byte = raw[i];
     if (inString) {
-      if (byte === 0x5c) i++; // backslash: skip the escaped byte
+      if (byte === 0x5c)
+        i++; // backslash: skip the escaped byte
       else if (byte === 0x22) inString = false;
     } else if (byte === 0x22) {
       inString = true;

@@ -26,7 +26,11 @@ export function storedRunHours(db: Db, run: typeof runs.$inferSelect): StoredRun
   if (!stored || run.status !== 'done') throw new HttpError(409, 'not_ready', `Run ${run.id} is ${run.status}; its hours exist once it is done.`);
   const series = run.climateFileId === null ? undefined : loadClimateSeries(db, run.climateFileId);
   if (!series) {
-    throw new HttpError(410, 'climate_file_deleted', `The climate file of run ${run.id} was deleted, so its hourly weather is gone; the summary can still be downloaded.`);
+    throw new HttpError(
+      410,
+      'climate_file_deleted',
+      `The climate file of run ${run.id} was deleted, so its hourly weather is gone; the summary can still be downloaded.`,
+    );
   }
   const modes = decodeUint8Column(stored.modes);
   if (modes.length !== series.timestampsMs.length) {
@@ -57,16 +61,20 @@ export async function hourlyFileOf(
   signal?: AbortSignal,
 ): Promise<Buffer> {
   const { series, modes, mechanicalFraction, humidified, climate } = storedRunHours(db, run);
-  const bytes = await pool.run('formatHourly', {
-    scenario: JSON.parse(run.scenarioJson),
-    series,
-    elevationM: climate.elevationM,
-    utcOffsetMinutes: climate.utcOffsetMinutes ?? 0,
-    modes,
-    mechanicalFraction,
-    humidified,
-    format,
-    about,
-  }, { lane: 'interactive', signal });
+  const bytes = await pool.run(
+    'formatHourly',
+    {
+      scenario: JSON.parse(run.scenarioJson),
+      series,
+      elevationM: climate.elevationM,
+      utcOffsetMinutes: climate.utcOffsetMinutes ?? 0,
+      modes,
+      mechanicalFraction,
+      humidified,
+      format,
+      about,
+    },
+    { lane: 'interactive', signal },
+  );
   return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 }

@@ -16,7 +16,12 @@ export const createShareInput = z
     target: z.enum(shareTargets, { error: "target must be 'run' or 'comparison'" }),
     /** One run for a run report; two or more for a comparison, the baseline first. */
     runIds: z.array(z.number().int().positive()).min(1, 'runIds must name at least one run').max(12, 'at most 12 runs'),
-    title: z.string().trim().min(1, 'title must not be empty').max(200, 'title must be at most 200 characters').refine(...withoutControlCharacters('title')),
+    title: z
+      .string()
+      .trim()
+      .min(1, 'title must not be empty')
+      .max(200, 'title must be at most 200 characters')
+      .refine(...withoutControlCharacters('title')),
     /** ISO 8601 date-time; absent or null keeps the link for signed-in members of the project only. */
     publicUntil: z.iso.datetime({ offset: true, error: 'publicUntil must be an ISO 8601 date-time, e.g. 2026-03-31T23:59:59Z' }).nullish(),
   })
@@ -34,7 +39,11 @@ export function checkPublicUntil(text: string | null | undefined, now: Date): Da
     throw new HttpError(400, 'invalid_request', `publicUntil ${text} is in the past; choose a date after today.`);
   }
   if (until.getTime() > now.getTime() + maxPublicDays * day) {
-    throw new HttpError(400, 'invalid_request', `publicUntil may be at most ${maxPublicDays} days ahead (until ${new Date(now.getTime() + maxPublicDays * day).toISOString().slice(0, 10)}).`);
+    throw new HttpError(
+      400,
+      'invalid_request',
+      `publicUntil may be at most ${maxPublicDays} days ahead (until ${new Date(now.getTime() + maxPublicDays * day).toISOString().slice(0, 10)}).`,
+    );
   }
   return until;
 }
@@ -86,8 +95,15 @@ const tokenShape = /^[A-Za-z0-9_-]{43}$/;
  * outside a public period only a signed-in member of the project (or an admin) gets through.
  */
 export function resolveShareToken(db: Db, req: Request, token: string, now: Date): typeof shareLinks.$inferSelect {
-  const link = tokenShape.test(token) ? db.select().from(shareLinks).where(eq(shareLinks.tokenHash, hashToken(token))).get() : undefined;
-  if (!link) throw new HttpError(404, 'not_found', 'This report link is not known. Check that it was copied whole, or ask the person who shared it for a new one.');
+  const link = tokenShape.test(token)
+    ? db
+        .select()
+        .from(shareLinks)
+        .where(eq(shareLinks.tokenHash, hashToken(token)))
+        .get()
+    : undefined;
+  if (!link)
+    throw new HttpError(404, 'not_found', 'This report link is not known. Check that it was copied whole, or ask the person who shared it for a new one.');
   const state = shareState(link, now);
   if (state === 'revoked') {
     throw new HttpError(410, 'link_revoked', 'This report link was revoked by the project owner and no longer opens the report. Ask them for a new link.');
@@ -104,6 +120,7 @@ export function resolveShareToken(db: Db, req: Request, token: string, now: Date
     .from(memberships)
     .where(and(eq(memberships.projectId, link.projectId), eq(memberships.userId, user.id)))
     .get();
-  if (!member) throw new HttpError(403, 'forbidden', `${ended}${ended ? 'only' : 'Only'} members of the project can open this report; ask its owner to add you.`);
+  if (!member)
+    throw new HttpError(403, 'forbidden', `${ended}${ended ? 'only' : 'Only'} members of the project can open this report; ask its owner to add you.`);
   return link;
 }

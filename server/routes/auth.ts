@@ -81,7 +81,11 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
       if (cookieState !== state) return fail(req, res, 'state_mismatch');
       const now = clock();
       // Taking the attempt out of the table makes the state, and so this callback, single-use.
-      const attempt = db.delete(signInAttempts).where(eq(signInAttempts.stateHash, hashToken(state))).returning().get();
+      const attempt = db
+        .delete(signInAttempts)
+        .where(eq(signInAttempts.stateHash, hashToken(state)))
+        .returning()
+        .get();
       if (!attempt || !attempt.codeVerifier) return fail(req, res, 'missing_verifier');
       if (attempt.expiresAt < now) return fail(req, res, 'sign_in_expired');
       let identity;
@@ -128,4 +132,3 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
     }),
   ];
 }
-

@@ -113,7 +113,12 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
    * century of hours takes seconds, which on the main thread would stall every other request), stopped if the
    * client leaves.
    */
-  async function formatOnPool(res: express.Response, fileId: number, format: 'csv' | 'hours-json', year?: { year: number; offsetMinutes: number }): Promise<Buffer> {
+  async function formatOnPool(
+    res: express.Response,
+    fileId: number,
+    format: 'csv' | 'hours-json',
+    year?: { year: number; offsetMinutes: number },
+  ): Promise<Buffer> {
     const encoded = loadEncodedSeries(db, fileId);
     if (!encoded) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
     const bytes = await pool.run('formatClimateSeries', { encoded, format, year }, { lane: 'interactive', signal: closedRequestSignal(res) });
@@ -240,7 +245,12 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
     route('get', '/projects/:projectId/climate-issue-lists/:listId', access.viewer, async (req, res) => {
       const { listId } = listParams.parse(req.params);
       const csv = await loadIssueListCsv(db, req.projectId!, listId);
-      if (!csv) throw new HttpError(404, 'not_found', `Issue list ${listId} was not found in this project; lists of previews and refused uploads are kept for the newest ${UNLINKED_LISTS_KEPT} only.`);
+      if (!csv)
+        throw new HttpError(
+          404,
+          'not_found',
+          `Issue list ${listId} was not found in this project; lists of previews and refused uploads are kept for the newest ${UNLINKED_LISTS_KEPT} only.`,
+        );
       res.attachment(`climate-file-issues-${listId}.csv`).type('text/csv').send(csv);
     }),
 

@@ -9,8 +9,17 @@ import { envelopes } from '../db/schema';
 import { HttpError } from '../http-error';
 
 const envelopeInput = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')),
-  note: z.string().max(2000).refine(...withoutControlCharacters('note', { multiLine: true })).default(''),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'name must not be empty')
+    .max(120)
+    .refine(...withoutControlCharacters('name')),
+  note: z
+    .string()
+    .max(2000)
+    .refine(...withoutControlCharacters('note', { multiLine: true }))
+    .default(''),
   limits: envelopeSchema,
 });
 const envelopeParams = z.object({ envelopeId: z.coerce.number().int().positive('envelopeId must be a positive whole number') });

@@ -72,7 +72,11 @@ export function excursionRoutes(deps: AppDeps): RouteSpec[] {
       };
       const transferList = [series.timestampsMs.buffer, series.dryBulbC.buffer, series.humidity.values.buffer, series.flags.buffer];
       if (series.pressurePa) transferList.push(series.pressurePa.buffer);
-      const analysis = await pool.run('analyseExcursions', { scenario, series, elevationM: climate.elevationM, proposal }, { transferList, lane: 'interactive', signal: closedRequestSignal(res) });
+      const analysis = await pool.run(
+        'analyseExcursions',
+        { scenario, series, elevationM: climate.elevationM, proposal },
+        { transferList, lane: 'interactive', signal: closedRequestSignal(res) },
+      );
 
       res.json({
         run: {

@@ -4,7 +4,6 @@ import { access, route, type RouteSpec } from '../auth/access';
 import { ENGINE_VERSION } from '../../shared/scenario/version';
 import packageJson from '../../package.json' with { type: 'json' };
 
-
 export function healthRoutes({ db }: AppDeps): RouteSpec[] {
   return [
     route('get', '/health', access.public, (_req, res) => {

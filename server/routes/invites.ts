@@ -40,7 +40,8 @@ export function inviteRoutes(deps: AppDeps): RouteSpec[] {
       throw new HttpError(400, 'invite_invalid', 'This invitation link is not valid; check that it was copied whole.');
     }
     const row = db.select().from(invites).where(eq(invites.id, check.inviteId)).get();
-    if (!row || row.tokenIdHash !== check.tokenIdHash) throw new HttpError(400, 'invite_invalid', 'This invitation link is not valid; check that it was copied whole.');
+    if (!row || row.tokenIdHash !== check.tokenIdHash)
+      throw new HttpError(400, 'invite_invalid', 'This invitation link is not valid; check that it was copied whole.');
     const status = inviteStatus(row, now);
     if (status === 'accepted') throw new HttpError(410, 'invite_used', 'This invitation has already been used.');
     if (status === 'revoked') throw new HttpError(410, 'invite_revoked', 'This invitation was withdrawn by the project owner.');
@@ -167,7 +168,11 @@ export function inviteRoutes(deps: AppDeps): RouteSpec[] {
           .values({ projectId: row.projectId, userId: user.id, role: finalRole })
           .onConflictDoUpdate({ target: [memberships.projectId, memberships.userId], set: { role: finalRole } })
           .run();
-        recordAudit(tx, { actorId: user.id, projectId: row.projectId, action: 'invite.accepted', target: user.email, detail: { role: finalRole, inviteId: row.id } }, now);
+        recordAudit(
+          tx,
+          { actorId: user.id, projectId: row.projectId, action: 'invite.accepted', target: user.email, detail: { role: finalRole, inviteId: row.id } },
+          now,
+        );
         return finalRole;
       });
       res.json({ projectId: row.projectId, role });

@@ -56,8 +56,15 @@ export function memberRoutes(deps: AppDeps): RouteSpec[] {
         throw new HttpError(409, 'last_owner', 'A project keeps at least one owner; make someone else owner first.');
       }
       db.transaction((tx) => {
-        tx.update(memberships).set({ role }).where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId))).run();
-        recordAudit(tx, { actorId: req.user!.id, projectId, action: 'member.role-changed', target: current.email, detail: { from: current.role, to: role } }, clock());
+        tx.update(memberships)
+          .set({ role })
+          .where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
+          .run();
+        recordAudit(
+          tx,
+          { actorId: req.user!.id, projectId, action: 'member.role-changed', target: current.email, detail: { from: current.role, to: role } },
+          clock(),
+        );
       });
       res.json({ userId, role });
     }),
@@ -71,7 +78,9 @@ export function memberRoutes(deps: AppDeps): RouteSpec[] {
         throw new HttpError(409, 'last_owner', 'A project keeps at least one owner; make someone else owner first.');
       }
       db.transaction((tx) => {
-        tx.delete(memberships).where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId))).run();
+        tx.delete(memberships)
+          .where(and(eq(memberships.projectId, projectId), eq(memberships.userId, userId)))
+          .run();
         recordAudit(tx, { actorId: req.user!.id, projectId, action: 'member.removed', target: current.email, detail: { role: current.role } }, clock());
       });
       res.status(204).end();
@@ -92,7 +101,11 @@ export function memberRoutes(deps: AppDeps): RouteSpec[] {
       const person = db.select({ email: users.email, isAdmin: users.isAdmin }).from(users).where(eq(users.id, userId)).get();
       if (!person) throw new HttpError(404, 'not_found', `Person ${userId} was not found.`);
       if (person.isAdmin && !isAdmin) {
-        const others = db.select({ n: count() }).from(users).where(and(eq(users.isAdmin, true), ne(users.id, userId))).get()!.n;
+        const others = db
+          .select({ n: count() })
+          .from(users)
+          .where(and(eq(users.isAdmin, true), ne(users.id, userId)))
+          .get()!.n;
         if (others === 0) throw new HttpError(409, 'last_admin', 'The installation keeps at least one admin.');
       }
       db.transaction((tx) => {

@@ -28,7 +28,6 @@ export const PROJECTION_METHOD = 'Belcher, Hacker and Powell (2005) morphing';
 export const PROJECTION_NOTE =
   'A projection: the parent file re-shaped by the stated monthly change factors. It is a what-if for design comparison, not a forecast of any year.';
 
-
 /** Future-climate files derived from an uploaded one by Belcher morphing. */
 export function projectionRoutes(deps: AppDeps): RouteSpec[] {
   const { db, pool } = deps;
@@ -52,13 +51,17 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
   /** Morphs on the pool (a preview in its interactive lane), stopped if the client leaves; refusals (a daily range turned upside down) come back as 422 naming the month. */
   async function morph(series: ClimateSeries, timeZone: string, elevationM: number, factors: ChangeFactors, keepSeries: boolean, signal: AbortSignal) {
     const utcOffsetMinutes = standardOffsetMinutes(timeZone);
-    const result: MorphClimateTaskResult = await pool.run('morphClimate', {
-      series,
-      factors,
-      utcOffsetMinutes,
-      elevationM,
-      keepSeries,
-    }, { lane: keepSeries ? 'long' : 'interactive', signal });
+    const result: MorphClimateTaskResult = await pool.run(
+      'morphClimate',
+      {
+        series,
+        factors,
+        utcOffsetMinutes,
+        elevationM,
+        keepSeries,
+      },
+      { lane: keepSeries ? 'long' : 'interactive', signal },
+    );
     if (!result.ok) {
       throw new HttpError(422, 'invalid_factors', `The change factors do not fit this file: ${result.problems.join('; ')}.`, { problems: result.problems });
     }
@@ -86,7 +89,13 @@ export function projectionRoutes(deps: AppDeps): RouteSpec[] {
       const { row, derivation } = db.transaction((tx) => {
         // The projection stores its series and, as its original, the series as CSV (its few head lines left out here).
         const hours = out.series?.timestampsMs.length ?? 0;
-        requireStorage(tx, req.projectId!, storageLimitOf(deps), climateFileBytes(out.seriesCsv?.byteLength ?? 0, hours, Boolean(out.series?.pressurePa)), 'the projection');
+        requireStorage(
+          tx,
+          req.projectId!,
+          storageLimitOf(deps),
+          climateFileBytes(out.seriesCsv?.byteLength ?? 0, hours, Boolean(out.series?.pressurePa)),
+          'the projection',
+        );
         const stored = storeProjection(tx, { projectId: req.projectId!, parent, request: body, morphed: out, createdBy: req.user?.id ?? null });
         recordRequestAudit(tx, req, 'climate.project', stored.row.name, {
           climateFileId: stored.row.id,
@@ -178,7 +187,13 @@ export function projectionName(name: string): string {
 
 /** A file name from a display name: letters, digits and dashes. */
 function fileNameOf(name: string): string {
-  return name.normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'projection';
+  return (
+    name
+      .normalize('NFKD')
+      .replace(/[^\w.-]+/g, '-')
+      .replace(/^-+|-+$/g, '')
+      .slice(0, 80) || 'projection'
+  );
 }
 
 /**

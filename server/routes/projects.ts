@@ -9,8 +9,18 @@ import { parsePatch } from '../patch-body';
 import { storageLimitOf, storageUse } from '../storage/quota';
 
 const projectInput = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120, 'name must be at most 120 characters').refine(...withoutControlCharacters('name')),
-  description: z.string().trim().max(2000, 'description must be at most 2000 characters').refine(...withoutControlCharacters('description', { multiLine: true })).default(''),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'name must not be empty')
+    .max(120, 'name must be at most 120 characters')
+    .refine(...withoutControlCharacters('name')),
+  description: z
+    .string()
+    .trim()
+    .max(2000, 'description must be at most 2000 characters')
+    .refine(...withoutControlCharacters('description', { multiLine: true }))
+    .default(''),
 });
 
 export function projectRoutes(deps: AppDeps): RouteSpec[] {

@@ -1,7 +1,16 @@
 import type { Response } from 'express';
 import { and, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { comparisonCsv, comparisonRows, runSummaryRows, summaryCsv, summaryRowsIn, type ReportData, type ReportRun, type SummaryUnits } from '../../shared/report';
+import {
+  comparisonCsv,
+  comparisonRows,
+  runSummaryRows,
+  summaryCsv,
+  summaryRowsIn,
+  type ReportData,
+  type ReportRun,
+  type SummaryUnits,
+} from '../../shared/report';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordRequestAudit } from '../auth/audit';
@@ -70,18 +79,27 @@ async function sendDownload(
     if (file === 'hourly.json') {
       const about = { id: run.id, scenario: run.scenario.name, site: run.site.name, climateFile: run.climate.name };
       const bytes = await hourlyFileOf(db, pool, row, 'json', about, closedRequestSignal(res));
-      res.attachment(runFileName(run, 'hourly', 'json')).type('application/json').send(bytes);
+      res
+        .attachment(runFileName(run, 'hourly', 'json'))
+        .type('application/json')
+        .send(bytes);
       return;
     }
     const bytes = await hourlyFileOf(db, pool, row, 'csv', undefined, closedRequestSignal(res));
-    res.attachment(runFileName(run, 'hourly', 'csv')).type('text/csv; charset=utf-8').send(bytes);
+    res
+      .attachment(runFileName(run, 'hourly', 'csv'))
+      .type('text/csv; charset=utf-8')
+      .send(bytes);
     return;
   }
   if (report.kind === 'run') {
     const run = report.run;
     const rows = summaryRowsIn(runSummaryRows(run), units);
     if (file === 'summary.csv') {
-      res.attachment(runFileName(run, `summary${suffix}`, 'csv')).type('text/csv; charset=utf-8').send(summaryCsv(rows));
+      res
+        .attachment(runFileName(run, `summary${suffix}`, 'csv'))
+        .type('text/csv; charset=utf-8')
+        .send(summaryCsv(rows));
     } else {
       res.attachment(runFileName(run, `summary${suffix}`, 'json')).type('application/json');
       // The report data itself stays in SI, as the engine computed it; the rows are in the units asked for.
@@ -91,7 +109,10 @@ async function sendDownload(
   }
   const name = `comparison-${report.runs.map((r) => r.id).join('-')}-summary${suffix}`;
   if (file === 'summary.csv') {
-    res.attachment(`${name}.csv`).type('text/csv; charset=utf-8').send(comparisonCsv(report.runs, report.baselineId, units));
+    res
+      .attachment(`${name}.csv`)
+      .type('text/csv; charset=utf-8')
+      .send(comparisonCsv(report.runs, report.baselineId, units));
   } else {
     res.attachment(`${name}.json`).type('application/json');
     res.send(JSON.stringify({ report, units, table: comparisonRows(report.runs, report.baselineId, units) }, null, 1));
@@ -103,14 +124,15 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
   const { db } = deps;
   const now = () => (deps.clock ?? systemClock)();
   // One limiter for both share-link routes, so a reader's report and downloads count together.
-  const sharedLimit = perAddressLimit(deps.sharedLinkRateLimit ?? { limit: 120, windowMs: 60_000 }, 'Too many report-link requests from this address; wait a minute and try again.');
+  const sharedLimit = perAddressLimit(
+    deps.sharedLinkRateLimit ?? { limit: 120, windowMs: 60_000 },
+    'Too many report-link requests from this address; wait a minute and try again.',
+  );
 
   /** The report a share link shows, built afresh from the runs it names. */
   function linkedReport(link: typeof shareLinks.$inferSelect): ReportData {
     const runIds = JSON.parse(link.runIdsJson) as number[];
-    return link.target === 'run'
-      ? runReport(db, link.projectId, runIds[0], now())
-      : comparisonReport(db, link.projectId, runIds, runIds[0], now());
+    return link.target === 'run' ? runReport(db, link.projectId, runIds[0], now()) : comparisonReport(db, link.projectId, runIds, runIds[0], now());
   }
 
   return [

@@ -34,7 +34,11 @@ const hourColumnsQuery = z.object({
     .transform((list) => (list === undefined ? [...HOUR_COLUMN_NAMES] : list.split(',').map((name) => name.trim())))
     .pipe(
       z
-        .array(z.enum(HOUR_COLUMN_NAMES as [HourColumnName, ...HourColumnName[]], { error: (issue) => `columns: unknown column "${String(issue.input)}"; known: ${HOUR_COLUMN_NAMES.join(', ')}` }))
+        .array(
+          z.enum(HOUR_COLUMN_NAMES as [HourColumnName, ...HourColumnName[]], {
+            error: (issue) => `columns: unknown column "${String(issue.input)}"; known: ${HOUR_COLUMN_NAMES.join(', ')}`,
+          }),
+        )
         .min(1, 'columns must name at least one column'),
     ),
 });
@@ -146,7 +150,10 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
       for (const run of created) if (!reused.has(run.id)) runQueue.enqueue(run.id);
       // Each run as GET gives it, plus whether it is an earlier identical run reused rather than a new one.
       const createdText = created.map((run) => `${runText({ run, sweepName: null }).slice(0, -1)},"reused":${reused.has(run.id)}}`);
-      res.status(202).type('json').send(`{"runs":[${createdText.join(',')}]}`);
+      res
+        .status(202)
+        .type('json')
+        .send(`{"runs":[${createdText.join(',')}]}`);
     }),
 
     route('get', '/projects/:projectId/runs/:runId', access.viewer, (req, res) => {

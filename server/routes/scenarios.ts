@@ -90,8 +90,17 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
       }
       const dismissed: ScenarioMigrationRecord = { ...record, dismissedAt: new Date().toISOString(), dismissedBy: req.user!.id };
       const row = db.transaction((tx) => {
-        const updated = tx.update(scenarios).set({ migrationJson: JSON.stringify(dismissed) }).where(eq(scenarios.id, existing.id)).returning().get();
-        recordRequestAudit(tx, req, 'scenario.update', existing.name, { scenarioId: existing.id, migrationNoticeDismissed: true, changes: record.changes.length });
+        const updated = tx
+          .update(scenarios)
+          .set({ migrationJson: JSON.stringify(dismissed) })
+          .where(eq(scenarios.id, existing.id))
+          .returning()
+          .get();
+        recordRequestAudit(tx, req, 'scenario.update', existing.name, {
+          scenarioId: existing.id,
+          migrationNoticeDismissed: true,
+          changes: record.changes.length,
+        });
         return updated;
       });
       res.json({ scenario: present(row) });
@@ -126,11 +135,15 @@ export function scenarioRoutes(deps: AppDeps): RouteSpec[] {
       if (!file) throw new HttpError(404, 'not_found', `Climate file ${input.climateFileId} was not found in this project.`);
       const site = db.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
       const series = loadClimateSeries(db, file.id)!;
-      const out = await pool.run('executeRun', {
-        scenario,
-        series,
-        options: { elevationM: site.elevationM, utcOffsetMinutes: standardOffsetMinutes(site.timeZone) },
-      }, { lane: 'interactive', signal: closedRequestSignal(res) });
+      const out = await pool.run(
+        'executeRun',
+        {
+          scenario,
+          series,
+          options: { elevationM: site.elevationM, utcOffsetMinutes: standardOffsetMinutes(site.timeZone) },
+        },
+        { lane: 'interactive', signal: closedRequestSignal(res) },
+      );
       const loops = out.results.loops;
       res.json({
         hours: out.results.hours,

@@ -51,7 +51,14 @@ export function sweepRoutes(deps: AppDeps): RouteSpec[] {
 
   const pointRuns = (sweepId: number): RunRow[] =>
     db
-      .select({ id: runs.id, status: runs.status, progress: runs.progress, error: runs.error, sweepPointJson: runs.sweepPointJson, resultsJson: runs.resultsJson })
+      .select({
+        id: runs.id,
+        status: runs.status,
+        progress: runs.progress,
+        error: runs.error,
+        sweepPointJson: runs.sweepPointJson,
+        resultsJson: runs.resultsJson,
+      })
       .from(runs)
       .where(eq(runs.sweepId, sweepId))
       .orderBy(asc(runs.id))

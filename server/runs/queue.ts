@@ -57,16 +57,23 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     const name = `${(JSON.parse(run.scenarioJson) as { name: string }).name} on ${(JSON.parse(run.climateJson) as { name: string }).name}`;
     recordAudit(db, { actorId: null, projectId: run.projectId, action: `run.${status}`, target: `run ${runId}: ${name}`, detail: { runId, error: run.error } });
     if (status === 'done') {
-      sendRunFinishedNotices({ db, mailer, publicUrl, logError }, { projectId: run.projectId, runName: name, path: `/projects/${run.projectId}/runs/${runId}` }).catch(
-        (error: unknown) => logError?.(error),
-      );
+      sendRunFinishedNotices(
+        { db, mailer, publicUrl, logError },
+        { projectId: run.projectId, runName: name, path: `/projects/${run.projectId}/runs/${runId}` },
+      ).catch((error: unknown) => logError?.(error));
     }
   }
 
   function settleSweepPoint(run: typeof runs.$inferSelect, status: 'done' | 'failed'): void {
     const sweepId = run.sweepId!;
     if (status === 'failed') {
-      recordAudit(db, { actorId: null, projectId: run.projectId, action: 'run.failed', target: `run ${run.id} (sweep ${sweepId})`, detail: { runId: run.id, sweepId, error: run.error } });
+      recordAudit(db, {
+        actorId: null,
+        projectId: run.projectId,
+        action: 'run.failed',
+        target: `run ${run.id} (sweep ${sweepId})`,
+        detail: { runId: run.id, sweepId, error: run.error },
+      });
     }
     const points = db.select({ status: runs.status }).from(runs).where(eq(runs.sweepId, sweepId)).all();
     if (points.some((p) => p.status === 'queued' || p.status === 'running')) return;
@@ -74,7 +81,13 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     if (!sweep) return;
     const tally = (s: string) => points.filter((p) => p.status === s).length;
     const counts = { done: tally('done'), failed: tally('failed'), cancelled: tally('cancelled') };
-    recordAudit(db, { actorId: null, projectId: run.projectId, action: 'sweep.done', target: `sweep ${sweepId}: ${sweep.name}`, detail: { sweepId, points: points.length, ...counts } });
+    recordAudit(db, {
+      actorId: null,
+      projectId: run.projectId,
+      action: 'sweep.done',
+      target: `sweep ${sweepId}: ${sweep.name}`,
+      detail: { sweepId, points: points.length, ...counts },
+    });
     if (counts.done === 0) return;
     const outcome = `${counts.done} of ${points.length} points done${counts.failed ? `, ${counts.failed} failed` : ''}`;
     sendRunFinishedNotices(

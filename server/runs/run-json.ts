@@ -59,8 +59,12 @@ export function createRunReads(db: Db) {
     .select({
       ...(Object.fromEntries(listedResultFields.map((field) => [field, sql<string | null>`${r} -> ${`$.${field}`}`])) as Record<string, SQL<string | null>>),
       // A hybrid hall's loops (their hours only) and its heat reuse, as comparableResults gives them; NULL otherwise.
-      loops: sql<string | null>`CASE WHEN ${r} -> '$.loops' IS NULL THEN NULL ELSE json_object('liquid', json_object('hours', json(${r} -> '$.loops.liquid.hours')), 'air', json_object('hours', json(${r} -> '$.loops.air.hours'))) END`,
-      heatReuse: sql<string | null>`CASE WHEN ${r} -> '$.heatReuse' IS NULL THEN NULL ELSE json_object('availableKwh', json(${r} -> '$.heatReuse.availableKwh'), 'erf', json(${r} -> '$.heatReuse.erf')) END`,
+      loops: sql<
+        string | null
+      >`CASE WHEN ${r} -> '$.loops' IS NULL THEN NULL ELSE json_object('liquid', json_object('hours', json(${r} -> '$.loops.liquid.hours')), 'air', json_object('hours', json(${r} -> '$.loops.air.hours'))) END`,
+      heatReuse: sql<
+        string | null
+      >`CASE WHEN ${r} -> '$.heatReuse' IS NULL THEN NULL ELSE json_object('availableKwh', json(${r} -> '$.heatReuse.availableKwh'), 'erf', json(${r} -> '$.heatReuse.erf')) END`,
     })
     .from(runs)
     .where(eq(runs.id, sql.placeholder('runId')))
@@ -85,9 +89,9 @@ export function createRunReads(db: Db) {
   return {
     one: (projectId: number, runId: number) => oneQuery.get({ projectId, runId }),
     listingText(projectId: number): string {
-      const listed = listQuery.all({ projectId }).map(({ sweepName, hasResults, ...run }) =>
-        runJsonText(run, sweepName, hasResults ? listedResultsText(run.id, run.finishedAt) : null),
-      );
+      const listed = listQuery
+        .all({ projectId })
+        .map(({ sweepName, hasResults, ...run }) => runJsonText(run, sweepName, hasResults ? listedResultsText(run.id, run.finishedAt) : null));
       return `{"runs":[${listed.join(',')}]}`;
     },
   };

@@ -13,7 +13,9 @@ export interface SeriesCache {
 
 /** A typed array's copy over a SharedArrayBuffer: posted to a pool thread, its memory is shared instead of copied. */
 function shared<T extends Float64Array | Uint8Array>(values: T): T {
-  const copy = (values instanceof Float64Array ? new Float64Array(new SharedArrayBuffer(values.byteLength)) : new Uint8Array(new SharedArrayBuffer(values.byteLength))) as T;
+  const copy = (
+    values instanceof Float64Array ? new Float64Array(new SharedArrayBuffer(values.byteLength)) : new Uint8Array(new SharedArrayBuffer(values.byteLength))
+  ) as T;
   copy.set(values);
   return copy;
 }

@@ -52,7 +52,16 @@ export function migrateSavedScenarios(db: Db, migrate: MigrateScenarioFn, now: D
   let migratedSweeps = 0;
   const at = now.toISOString();
 
-  for (const row of db.select({ id: scenarios.id, projectId: scenarios.projectId, name: scenarios.name, scenarioJson: scenarios.scenarioJson, migrationJson: scenarios.migrationJson }).from(scenarios).all()) {
+  for (const row of db
+    .select({
+      id: scenarios.id,
+      projectId: scenarios.projectId,
+      name: scenarios.name,
+      scenarioJson: scenarios.scenarioJson,
+      migrationJson: scenarios.migrationJson,
+    })
+    .from(scenarios)
+    .all()) {
     const result = migrateJson(row.scenarioJson, migrate);
     if (result === 'unreadable') {
       skipped.push(`scenario ${row.id}`);
@@ -61,10 +70,22 @@ export function migrateSavedScenarios(db: Db, migrate: MigrateScenarioFn, now: D
     if (result.changes.length === 0) continue;
     const previous = parseMigrationRecord(row.migrationJson);
     // A second migration adds to the first and shows the notice again.
-    const record: ScenarioMigrationRecord = { migratedAt: at, changes: [...(previous?.changes ?? []), ...result.changes], dismissedAt: null, dismissedBy: null };
+    const record: ScenarioMigrationRecord = {
+      migratedAt: at,
+      changes: [...(previous?.changes ?? []), ...result.changes],
+      dismissedAt: null,
+      dismissedBy: null,
+    };
     db.transaction((tx) => {
-      tx.update(scenarios).set({ scenarioJson: JSON.stringify(result.scenario), migrationJson: JSON.stringify(record) }).where(eq(scenarios.id, row.id)).run();
-      recordAudit(tx, { actorId: null, projectId: row.projectId, action: 'scenario.update', target: row.name, detail: { scenarioId: row.id, migrated: result.changes } }, now);
+      tx.update(scenarios)
+        .set({ scenarioJson: JSON.stringify(result.scenario), migrationJson: JSON.stringify(record) })
+        .where(eq(scenarios.id, row.id))
+        .run();
+      recordAudit(
+        tx,
+        { actorId: null, projectId: row.projectId, action: 'scenario.update', target: row.name, detail: { scenarioId: row.id, migrated: result.changes } },
+        now,
+      );
     });
     migratedScenarios++;
   }
@@ -84,8 +105,15 @@ export function migrateSavedScenarios(db: Db, migrate: MigrateScenarioFn, now: D
       continue;
     }
     if (result.changes.length === 0) continue;
-    const next = { ...spec, baseScenario: result.scenario, baseScenarioMigrations: [...(spec.baseScenarioMigrations ?? []), { migratedAt: at, changes: result.changes }] };
-    db.update(sweeps).set({ specJson: JSON.stringify(next) }).where(eq(sweeps.id, row.id)).run();
+    const next = {
+      ...spec,
+      baseScenario: result.scenario,
+      baseScenarioMigrations: [...(spec.baseScenarioMigrations ?? []), { migratedAt: at, changes: result.changes }],
+    };
+    db.update(sweeps)
+      .set({ specJson: JSON.stringify(next) })
+      .where(eq(sweeps.id, row.id))
+      .run();
     migratedSweeps++;
   }
   return { scenarios: migratedScenarios, sweeps: migratedSweeps, skipped };

@@ -52,9 +52,7 @@ export function summariseClimate(series: ClimateSeries, elevationM: number): Cli
       dryBulbC: monthlyStats(series.timestampsMs, series.dryBulbC),
       dewPointC: monthlyStats(series.timestampsMs, state.dewPointC),
     },
-    design: designConditions(series.dryBulbC, state.wetBulbC, state.dewPointC, (dp) =>
-      humidityRatioFromDewPoint(dp, meanPressurePa),
-    ),
+    design: designConditions(series.dryBulbC, state.wetBulbC, state.dewPointC, (dp) => humidityRatioFromDewPoint(dp, meanPressurePa)),
     meanPressurePa,
   };
 }

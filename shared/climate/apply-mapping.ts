@@ -123,12 +123,7 @@ function keepRecognised<T extends object>(recognised: T | null, overridden: T | 
 }
 
 /** Applies the overrides in place; errors go to the log. */
-export function applyMappingOverride(
-  recognition: Recognition,
-  override: Partial<ColumnMappingOverride>,
-  headers: string[],
-  log: IssueLog,
-): void {
+export function applyMappingOverride(recognition: Recognition, override: Partial<ColumnMappingOverride>, headers: string[], log: IssueLog): void {
   if (override.time) recognition.time = keepRecognised(recognition.time, overrideTime(override.time, headers, log));
   if (override.dryBulb) {
     recognition.dryBulb = keepRecognised(recognition.dryBulb, chosen({ ...override.dryBulb, quantity: 'dry-bulb' }, headers, log));

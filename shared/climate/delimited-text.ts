@@ -207,11 +207,15 @@ export function parseRows(body: Body, delimiter: Delimiter): ParsedRows {
   }
   const result = Papa.parse<string[]>(text, { delimiter, header: false, skipEmptyLines: false, dynamicTyping: false });
   const rows = result.data;
-  const errors = result.errors
-    .filter((e) => e.type === 'Quotes')
-    .map((e) => ({ row: e.row ?? 0, message: e.message }));
+  const errors = result.errors.filter((e) => e.type === 'Quotes').map((e) => ({ row: e.row ?? 0, message: e.message }));
   const starts = rowStartLines(text, body.firstLine);
-  return { count: rows.length, row: (i) => rows[i], rowCells: (i, cells) => boundsOfRow(rows[i], cells), lineOf: (i) => starts[i] ?? body.firstLine + i, errors };
+  return {
+    count: rows.length,
+    row: (i) => rows[i],
+    rowCells: (i, cells) => boundsOfRow(rows[i], cells),
+    lineOf: (i) => starts[i] ?? body.firstLine + i,
+    errors,
+  };
 }
 
 /** Offset where each LF-separated line starts, then one past the text's end: line i is text[starts[i], starts[i + 1] - 1). */

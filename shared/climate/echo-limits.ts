@@ -45,7 +45,7 @@ export function boundedMapping(mapping: DetectedMapping): DetectedMapping {
 /** The first lines of a text, for a preview: at most ECHO_LINES lines of at most ECHO_LINE_CHARS each (cut and marked). */
 export function firstLinesEchoed(text: string): string[] {
   const lines: string[] = [];
-  for (let at = 0; lines.length < ECHO_LINES; ) {
+  for (let at = 0; lines.length < ECHO_LINES;) {
     const lf = text.indexOf('\n', at);
     const end = lf === -1 ? text.length : lf;
     const length = end - at;

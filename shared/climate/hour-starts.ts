@@ -13,7 +13,9 @@ export function moveHourEndingToStart(timeMs: Float64Array, localMs: Float64Arra
     timeMs[i] -= MS_PER_HOUR;
     localMs[i] -= MS_PER_HOUR;
   }
-  const stamped = formatUtc(localMs[0] + MS_PER_HOUR).slice(0, 16).replace('T', ' ');
+  const stamped = formatUtc(localMs[0] + MS_PER_HOUR)
+    .slice(0, 16)
+    .replace('T', ' ');
   ctx.log.info(
     'hour-ending-stamps',
     `Stamps mark the end of their hour (hour 1–24): each hour is stored by its start, one hour earlier, so the row stamped ${stamped} is the hour from ${formatUtc(localMs[0]).slice(11, 16)} and a year of such rows stays in its year.`,

@@ -72,7 +72,10 @@ export function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx
     for (const [m, times] of minuteTally) if (times > commonCount) [commonMinute, commonCount] = [m, times];
     if (commonMinute !== 0) {
       shiftMs = commonMinute >= MS_PER_HOUR / 2 ? MS_PER_HOUR - commonMinute : -commonMinute;
-      log.info('timestamps-rounded', `Rows are stamped ${commonMinute / MS_PER_MINUTE} minutes past the hour; they are moved ${shiftMs / MS_PER_MINUTE} minutes to the nearest whole hour.`);
+      log.info(
+        'timestamps-rounded',
+        `Rows are stamped ${commonMinute / MS_PER_MINUTE} minutes past the hour; they are moved ${shiftMs / MS_PER_MINUTE} minutes to the nearest whole hour.`,
+      );
     }
   }
 
@@ -86,15 +89,23 @@ export function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx
       const offRhythm = hourly ? step % MS_PER_HOUR !== 0 : step % modalStep !== 0;
       if (offRhythm) {
         counts.nonHourlySteps++;
-        log.warning('non-hourly-step', `The step from ${formatUtc(t[previous])} to ${formatUtc(t[i])} (${round(step / MS_PER_MINUTE)} min) does not fit the file's ${round(modalStep / MS_PER_MINUTE)}-minute step.`, {
-          line: rows.line[i],
-        });
+        log.warning(
+          'non-hourly-step',
+          `The step from ${formatUtc(t[previous])} to ${formatUtc(t[i])} (${round(step / MS_PER_MINUTE)} min) does not fit the file's ${round(modalStep / MS_PER_MINUTE)}-minute step.`,
+          {
+            line: rows.line[i],
+          },
+        );
       }
       if (naiveLocal && hourly && modalStep === MS_PER_HOUR && step === 2 * MS_PER_HOUR && looksLikeClockChange(t[previous])) {
         counts.daylightSavingJumps++;
-        log.warning('daylight-saving-jump', `The clock skips from ${formatUtc(t[previous])} to ${formatUtc(t[i])}, as local time does when clocks go forward; if the file is in local time, give its time zone.`, {
-          line: rows.line[i],
-        });
+        log.warning(
+          'daylight-saving-jump',
+          `The clock skips from ${formatUtc(t[previous])} to ${formatUtc(t[i])}, as local time does when clocks go forward; if the file is in local time, give its time zone.`,
+          {
+            line: rows.line[i],
+          },
+        );
       }
     }
     previous = i;
@@ -103,22 +114,32 @@ export function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx
     for (let i = 1; i < rows.count; i++) {
       if (rows.dropped[i] && looksLikeClockChange(t[i])) {
         counts.daylightSavingJumps++;
-        log.warning('daylight-saving-jump', `${formatUtc(t[i])} repeats, as local time does when clocks go back; if the file is in local time, give its time zone.`, {
-          line: rows.line[i],
-        });
+        log.warning(
+          'daylight-saving-jump',
+          `${formatUtc(t[i])} repeats, as local time does when clocks go back; if the file is in local time, give its time zone.`,
+          {
+            line: rows.line[i],
+          },
+        );
       }
     }
   }
 
   const range = hourRange(rows, shiftMs);
   if (range.last - range.first + 1 > MAX_SERIES_HOURS) {
-    log.error('span-too-long', `The times span ${Math.round((range.last - range.first + 1) / 8766)} years (${formatUtc(range.first * MS_PER_HOUR)} to ${formatUtc(range.last * MS_PER_HOUR)}); a garbled date is likely.`);
+    log.error(
+      'span-too-long',
+      `The times span ${Math.round((range.last - range.first + 1) / 8766)} years (${formatUtc(range.first * MS_PER_HOUR)} to ${formatUtc(range.last * MS_PER_HOUR)}); a garbled date is likely.`,
+    );
     return null;
   }
   const averaged = averageToHours(rows, shiftMs, range);
   for (let h = 0; h < averaged.hours; h++) if (averaged.rowsInHour[h] > 1) counts.rowsAveraged += averaged.rowsInHour[h] - 1;
   if (counts.rowsAveraged > 0) {
-    log.info('sub-hourly-averaged', `${counts.rowsAveraged + countHoursWithSeveralRows(averaged.rowsInHour)} rows sharing an hour were averaged into ${countHoursWithSeveralRows(averaged.rowsInHour)} hourly values.`);
+    log.info(
+      'sub-hourly-averaged',
+      `${counts.rowsAveraged + countHoursWithSeveralRows(averaged.rowsInHour)} rows sharing an hour were averaged into ${countHoursWithSeveralRows(averaged.rowsInHour)} hourly values.`,
+    );
   }
   const grid = trimToCompleteHours(averaged);
   if (!grid) {
@@ -175,4 +196,3 @@ function looksLikeClockChange(wallMs: number): boolean {
   const hour = date.getUTCHours();
   return hour <= 4 && (month === 3 || month === 4 || month === 9 || month === 10 || month === 11);
 }
-

@@ -119,9 +119,13 @@ function checkOptions(options: ImportOptions, ctx: Context): boolean {
   }
   if (options.timeZone !== undefined) {
     if (typeof options.timeZone !== 'string' || !isKnownTimeZone(options.timeZone)) {
-      log.error('invalid-option', `Unknown time zone "${String(options.timeZone)}"; give an IANA name such as Europe/Paris, or a fixed offset such as UTC-07:00 for local standard time.`, {
-        value: String(options.timeZone),
-      });
+      log.error(
+        'invalid-option',
+        `Unknown time zone "${String(options.timeZone)}"; give an IANA name such as Europe/Paris, or a fixed offset such as UTC-07:00 for local standard time.`,
+        {
+          value: String(options.timeZone),
+        },
+      );
       return false;
     }
     ctx.timeZone = options.timeZone;
@@ -160,7 +164,11 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
   // A line of megabytes (a header of millions of columns) would hold a thread for a minute.
   const widest = scanned.longest;
   if (widest.length > MAX_LINE_CHARS) {
-    log.error('line-too-long', `Line ${widest.line} has ${widest.length.toLocaleString('en')} characters; a weather file's lines are far shorter, and Tramontane reads lines of at most ${MAX_LINE_CHARS.toLocaleString('en')}.`, { line: widest.line });
+    log.error(
+      'line-too-long',
+      `Line ${widest.line} has ${widest.length.toLocaleString('en')} characters; a weather file's lines are far shorter, and Tramontane reads lines of at most ${MAX_LINE_CHARS.toLocaleString('en')}.`,
+      { line: widest.line },
+    );
     return null;
   }
   const published = readPublishedFormat(text, options, ctx);
@@ -183,7 +191,11 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
     return null;
   }
   if (layout.headers.length > MAX_COLUMNS) {
-    log.error('too-many-columns', `The header on line ${parsed.lineOf(layout.headerIndex)} has ${layout.headers.length.toLocaleString('en')} columns; Tramontane reads files of at most ${MAX_COLUMNS}. Keep the time, dry-bulb, humidity and pressure columns.`, { line: parsed.lineOf(layout.headerIndex) });
+    log.error(
+      'too-many-columns',
+      `The header on line ${parsed.lineOf(layout.headerIndex)} has ${layout.headers.length.toLocaleString('en')} columns; Tramontane reads files of at most ${MAX_COLUMNS}. Keep the time, dry-bulb, humidity and pressure columns.`,
+      { line: parsed.lineOf(layout.headerIndex) },
+    );
     return null;
   }
   if (layout.headerIndex > 0) noteStationLine(ctx, readStationLine(parsed.row(0), parsed.lineOf(0)));
@@ -213,4 +225,3 @@ function runImport(rawText: string, options: ImportOptions, ctx: Context): Clima
   if (log.hasErrors() || !recognition.time || !recognition.dryBulb || !recognition.humidity) return null;
   return readRows(parsed, layout, recognition.time, recognition.dryBulb, recognition.humidity, recognition.pressure, ctx, dataRows);
 }
-

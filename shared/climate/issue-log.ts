@@ -111,6 +111,9 @@ export class IssueLog {
 /** The full issue list as CSV text: a header row, every written row, and a closing note when some were not written. */
 export function issueListCsv(rows: readonly string[], notWritten: number, ofSet: boolean): string {
   const header = csvRow(ofSet ? ['file', ...ISSUE_CSV_COLUMNS] : [...ISSUE_CSV_COLUMNS]);
-  const note = notWritten > 0 ? [`# ${notWritten.toLocaleString('en')} more issues were found but not written: the list stops at ${ISSUE_ROWS_CHARS.toLocaleString('en')} characters.`] : [];
+  const note =
+    notWritten > 0
+      ? [`# ${notWritten.toLocaleString('en')} more issues were found but not written: the list stops at ${ISSUE_ROWS_CHARS.toLocaleString('en')} characters.`]
+      : [];
   return `${[header, ...rows, ...note].join('\n')}\n`;
 }

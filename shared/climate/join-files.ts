@@ -68,7 +68,8 @@ export function joinClimateFiles(files: FileImport[], maxGapHours: number, siteT
   }
   for (const f of files) {
     for (const key of Object.keys(counts) as (keyof ImportCounts)[]) {
-      if (key === 'hours' || key === 'measuredHours' || key === 'filledHours' || key === 'missingHours' || key === 'gaps' || key === 'longestGapHours') continue;
+      if (key === 'hours' || key === 'measuredHours' || key === 'filledHours' || key === 'missingHours' || key === 'gaps' || key === 'longestGapHours')
+        continue;
       counts[key] += f.result.report.counts[key];
     }
   }
@@ -132,10 +133,14 @@ export function joinClimateFiles(files: FileImport[], maxGapHours: number, siteT
     const n = s.timestampsMs.length;
     const lastIndex = offset + n - 1;
     if (previous && lastIndex <= coveredUntil) {
-      log.error('files-overlap', `${f.fileName} holds only hours that ${previous.fileName} already holds (${utc(s.timestampsMs[0])} to ${utc(s.timestampsMs[n - 1])}); is it the same file twice?`, {
-        file: f.fileName,
-        line: lines?.[0] || undefined,
-      });
+      log.error(
+        'files-overlap',
+        `${f.fileName} holds only hours that ${previous.fileName} already holds (${utc(s.timestampsMs[0])} to ${utc(s.timestampsMs[n - 1])}); is it the same file twice?`,
+        {
+          file: f.fileName,
+          line: lines?.[0] || undefined,
+        },
+      );
       continue;
     }
     let from = 0;
@@ -215,7 +220,10 @@ function finishSet(
     }
     Object.assign(counts, { hours: n, filledHours: filled, missingHours: missing, measuredHours: n - filled - missing, gaps, longestGapHours: longest });
     if (counts.measuredHours < MIN_MEASURED_SHARE * n) {
-      log.error('too-little-data', `Only ${counts.measuredHours} of ${n} hours (${percent(counts.measuredHours / n)}) of the set hold measured values; at least half are needed.`);
+      log.error(
+        'too-little-data',
+        `Only ${counts.measuredHours} of ${n} hours (${percent(counts.measuredHours / n)}) of the set hold measured values; at least half are needed.`,
+      );
     }
   }
   const ok = series !== null && !log.hasErrors();

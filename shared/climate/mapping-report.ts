@@ -52,4 +52,3 @@ export function reportMapping(recognition: Recognition, layout: Layout, ctx: Con
     });
   }
 }
-

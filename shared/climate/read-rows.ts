@@ -9,17 +9,7 @@ import { createLocalToUtc, type LocalToUtc } from './local-time';
 import { classifyUnreadableCell, parseNumberAt } from './number-cells';
 import { describeYmdh, unitOf } from './recognise-columns';
 import { isBlankRow, isCommentRow, type Layout } from './table-layout';
-import {
-  civilDays,
-  formatUtc,
-  lastParse,
-  MS_PER_DAY,
-  MS_PER_MINUTE,
-  parseDateCell,
-  parseDateTimeAt,
-  parseIntegerCell,
-  parseTimeCell,
-} from './time-cells';
+import { civilDays, formatUtc, lastParse, MS_PER_DAY, MS_PER_MINUTE, parseDateCell, parseDateTimeAt, parseIntegerCell, parseTimeCell } from './time-cells';
 import type { ClimateSeries, HumidityQuantity, QuantityAssignment, TimeMapping } from './types';
 import { detectTypicalYear, intoYear, sourceYearByMonth } from './typical-year';
 import { conversionToSi, type AffineConversion } from './units';
@@ -87,11 +77,15 @@ export function readRows(
       r.bad++;
       counts.impossibleValues++;
       const text = cell(column)?.trim();
-      log.warning('impossible-value', `${r.assignment.quantity} ${text} ${r.assignment.unit} in column "${header}" is outside the possible range; treated as missing.`, {
-        line,
-        column: header,
-        value: text,
-      });
+      log.warning(
+        'impossible-value',
+        `${r.assignment.quantity} ${text} ${r.assignment.unit} in column "${header}" is outside the possible range; treated as missing.`,
+        {
+          line,
+          column: header,
+          value: text,
+        },
+      );
       return NaN;
     }
     return si;
@@ -162,10 +156,14 @@ export function readRows(
     } else if (zone) {
       utcMs = zone.toUtc(localMs);
       if (zone.lastEvent?.kind === 'nonexistent') {
-        log.warning('daylight-saving-jump', `Local time ${formatUtc(localMs).slice(0, 16).replace('T', ' ')} does not exist in ${ctx.timeZone} (clocks go forward); read with the offset before the change.`, {
-          line,
-          column: timeHeader,
-        });
+        log.warning(
+          'daylight-saving-jump',
+          `Local time ${formatUtc(localMs).slice(0, 16).replace('T', ' ')} does not exist in ${ctx.timeZone} (clocks go forward); read with the offset before the change.`,
+          {
+            line,
+            column: timeHeader,
+          },
+        );
       }
     } else {
       utcMs = localMs;
@@ -174,10 +172,14 @@ export function readRows(
     if (rows.count === 0) ctx.fileOffsetMs = offsetNow;
     if (previousOffset === previousOffset && offsetNow !== previousOffset) {
       counts.daylightSavingJumps++;
-      log.info('daylight-saving-jump', `The UTC offset changes from ${utcOffsetLabel(Math.round(previousOffset / MS_PER_MINUTE))} to ${utcOffsetLabel(Math.round(offsetNow / MS_PER_MINUTE))} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`, {
-        line,
-        column: timeHeader,
-      });
+      log.info(
+        'daylight-saving-jump',
+        `The UTC offset changes from ${utcOffsetLabel(Math.round(previousOffset / MS_PER_MINUTE))} to ${utcOffsetLabel(Math.round(offsetNow / MS_PER_MINUTE))} between lines ${previousLine} and ${line}; times are converted to UTC, so the series stays continuous.`,
+        {
+          line,
+          column: timeHeader,
+        },
+      );
     }
     previousOffset = offsetNow;
     previousLine = line;
@@ -200,11 +202,15 @@ export function readRows(
       } else if (humidityCheck.verdict === 'clamped') {
         counts.clampedValues++;
         const text = cell(humidity.column)!.trim();
-        log.info('clamped-value', `${humidity.quantity} ${text} in column "${humidity.header}" is just past saturation; set to ${round(humidityCheck.value)} ${humidityQuantity === 'relative-humidity' ? '%' : '°C'}.`, {
-          line,
-          column: humidity.header,
-          value: text,
-        });
+        log.info(
+          'clamped-value',
+          `${humidity.quantity} ${text} in column "${humidity.header}" is just past saturation; set to ${round(humidityCheck.value)} ${humidityQuantity === 'relative-humidity' ? '%' : '°C'}.`,
+          {
+            line,
+            column: humidity.header,
+            value: text,
+          },
+        );
         w = humidityCheck.value;
       }
     }
@@ -223,7 +229,10 @@ export function readRows(
       time.hourConvention = convention;
       time.description = describeYmdh(headers[time.hour], convention);
     }
-    if (hourZero && hour24) log.warning('non-hourly-step', 'Hours run both 0 and 24: check whether the hour column is hour ending (1–24) or hour beginning (0–23).', { column: headers[time.hour] });
+    if (hourZero && hour24)
+      log.warning('non-hourly-step', 'Hours run both 0 and 24: check whether the hour column is hour ending (1–24) or hour beginning (0–23).', {
+        column: headers[time.hour],
+      });
   } else if (time.layout === 'date-time' && hour24) {
     time.description += hourZero ? ' (times 00:00 and 24:00 both occur)' : ', 24:00 read as midnight at the end of the day';
   }

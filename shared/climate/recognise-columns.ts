@@ -53,7 +53,7 @@ export function dateOrderOf(cells: string[]): DateOrder {
     shortForm = true;
     if (lastParse.firstGroup > 12) firstAbove12 = true;
     if (lastParse.secondGroup > 12) secondAbove12 = true;
-    separator ||= (/\d([./-])/.exec(cell)?.[1] ?? '');
+    separator ||= /\d([./-])/.exec(cell)?.[1] ?? '';
   }
   if (!shortForm) return 'YMD';
   if (firstAbove12) return 'DMY';
@@ -72,9 +72,7 @@ function detectTime(sample: Sample, parts: (TimePart | null)[]): TimeMapping | n
   const n = sample.headers.length;
   const cells = Array.from({ length: n }, (_, c) => columnCells(sample, c));
   const orders = cells.map((cs) => dateOrderOf(cs));
-  const isDateTime = cells.map((cs, c) =>
-    share(cs, (cell) => !Number.isNaN(parseDateTimeCell(cell, orders[c])) && lastParse.hasTime),
-  );
+  const isDateTime = cells.map((cs, c) => share(cs, (cell) => !Number.isNaN(parseDateTimeCell(cell, orders[c])) && lastParse.hasTime));
 
   // one column holding date and time
   let iso = -1;

@@ -96,4 +96,3 @@ export function spreadSample(parsed: ParsedRows, dataStart: number): string[][] 
   }
   return sample;
 }
-

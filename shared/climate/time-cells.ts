@@ -79,7 +79,7 @@ function skipSpaces(s: string): void {
 }
 
 function isDateSeparator(c: number): boolean {
-  return c === 45 /* - */ || c === 47 /* / */ || c === 46 /* . */;
+  return c === 45 /* - */ || c === 47 /* / */ || c === 46; /* . */
 }
 
 /** Reads a date at `pos`; returns days since epoch or NaN. */

@@ -3,14 +3,7 @@
  * (°C, %, kg/kg, Pa). Every conversion used here is affine, so a bulk loop applies
  * `si = value * scale + offset` with no call per element.
  */
-import {
-  FAHRENHEIT_AT_0C,
-  FAHRENHEIT_PER_KELVIN,
-  GRAINS_PER_POUND,
-  KELVIN_AT_0C,
-  PASCALS_PER_IN_HG,
-  PASCALS_PER_PSI,
-} from '../units';
+import { FAHRENHEIT_AT_0C, FAHRENHEIT_PER_KELVIN, GRAINS_PER_POUND, KELVIN_AT_0C, PASCALS_PER_IN_HG, PASCALS_PER_PSI } from '../units';
 import type { HumidityKind, PressureUnit, QuantityColumn, TemperatureUnit } from './types';
 
 export interface AffineConversion {

@@ -34,7 +34,14 @@ export interface Proposal {
 
 export interface ExcursionAnalysis extends ExcursionCounts {
   /** The limits as applied: dry-bulb maxima derated for the site's elevation. */
-  applied: { supplyAirC: number; ceilingC: number; hallDewPointC: number | null; recommended: EnvelopeBounds; allowable: EnvelopeBounds; control: EnvelopeBounds };
+  applied: {
+    supplyAirC: number;
+    ceilingC: number;
+    hallDewPointC: number | null;
+    recommended: EnvelopeBounds;
+    allowable: EnvelopeBounds;
+    control: EnvelopeBounds;
+  };
   /** Hours per mode under the proposal. */
   modes: { free: number; adiabatic: number; mechanical: number; noData: number };
   /** Excursion events per year of data (events ÷ (hours with data ÷ 8760)); null without data. */

@@ -2,10 +2,7 @@ import { z } from 'zod';
 import { withoutControlCharacters } from '../schemas/plain-text';
 
 /** Month names for messages and tables, index 0 = January. */
-export const MONTH_NAMES = [
-  'January', 'February', 'March', 'April', 'May', 'June',
-  'July', 'August', 'September', 'October', 'November', 'December',
-] as const;
+export const MONTH_NAMES = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'] as const;
 
 /** How dry-bulb is morphed: shift (every hour moves by ΔTmean) or shift-and-stretch (the daily range changes too). */
 export const dryBulbMethods = ['shift-and-stretch', 'shift'] as const;
@@ -60,7 +57,13 @@ export type ChangeFactors = z.infer<typeof changeFactorsSchema>;
 
 /** Body of a request to make (or preview) a projection. */
 export const projectionRequestSchema = z.object({
-  name: z.string().trim().min(1, 'the name must not be empty').max(120, 'the name must be at most 120 characters').refine(...withoutControlCharacters('the name')).optional(),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'the name must not be empty')
+    .max(120, 'the name must be at most 120 characters')
+    .refine(...withoutControlCharacters('the name'))
+    .optional(),
   /** Where the factors come from, in the user's words (a scenario, a period, a model run). */
   source: z.string().trim().max(300, 'the source must be at most 300 characters').optional(),
   factors: changeFactorsSchema,

@@ -54,7 +54,12 @@ export function morphClimate(input: MorphClimateInput): MorphOutcome {
   const dryBulbC = new Float64Array(n);
   let alpha: Float64Array = new Float64Array(12);
   if (factors.dryBulbMethod === 'shift-and-stretch') {
-    alpha = stretchFactors(pick((m) => m.deltaMaxK), pick((m) => m.deltaMinK), stats.meanDailyMax, stats.meanDailyMin);
+    alpha = stretchFactors(
+      pick((m) => m.deltaMaxK),
+      pick((m) => m.deltaMinK),
+      stats.meanDailyMax,
+      stats.meanDailyMin,
+    );
     const problems: string[] = [];
     for (let m = 0; m < 12; m++) {
       // The daily range scales by (1 + α); at or below zero the days would turn upside down.
@@ -66,15 +71,39 @@ export function morphClimate(input: MorphClimateInput): MorphOutcome {
       }
     }
     if (problems.length) return { ok: false, problems };
-    shiftAndStretchByMonth(series.dryBulbC, calendar.monthOfHour, pick((m) => m.deltaMeanK), alpha, stats.mean, dryBulbC);
+    shiftAndStretchByMonth(
+      series.dryBulbC,
+      calendar.monthOfHour,
+      pick((m) => m.deltaMeanK),
+      alpha,
+      stats.mean,
+      dryBulbC,
+    );
   } else {
-    shiftByMonth(series.dryBulbC, calendar.monthOfHour, pick((m) => m.deltaMeanK), dryBulbC);
+    shiftByMonth(
+      series.dryBulbC,
+      calendar.monthOfHour,
+      pick((m) => m.deltaMeanK),
+      dryBulbC,
+    );
   }
 
   const { pressurePa } = hourlyPressurePa(series, elevationM);
   const q = specificHumidityOfHours({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
-  if (factors.humidityMethod === 'stretch') stretchByMonth(q, calendar.monthOfHour, pick((m) => 1 + m.humidityChangePct / 100), q);
-  else shiftByMonth(q, calendar.monthOfHour, pick((m) => m.humidityShiftGPerKg / 1000), q);
+  if (factors.humidityMethod === 'stretch')
+    stretchByMonth(
+      q,
+      calendar.monthOfHour,
+      pick((m) => 1 + m.humidityChangePct / 100),
+      q,
+    );
+  else
+    shiftByMonth(
+      q,
+      calendar.monthOfHour,
+      pick((m) => m.humidityShiftGPerKg / 1000),
+      q,
+    );
   const rhPct = new Float64Array(n);
   const clamped = rhPctFromSpecificHumidity(dryBulbC, q, pressurePa, rhPct);
 

@@ -52,7 +52,8 @@ function validateWindow(window: ChartWindow): void {
   requirePressurePa('pressurePa', window.pressurePa);
   requireTemperatureC('dryBulbMinC', window.dryBulbMinC);
   requireTemperatureC('dryBulbMaxC', window.dryBulbMaxC);
-  if (window.dryBulbMaxC <= window.dryBulbMinC) throw new RangeError(`dryBulbMaxC must exceed dryBulbMinC (got ${window.dryBulbMinC}…${window.dryBulbMaxC} °C)`);
+  if (window.dryBulbMaxC <= window.dryBulbMinC)
+    throw new RangeError(`dryBulbMaxC must exceed dryBulbMinC (got ${window.dryBulbMinC}…${window.dryBulbMaxC} °C)`);
   requireInRange('humidityRatioMax', window.humidityRatioMax, Number.MIN_VALUE, 1, 'kg/kg');
 }
 

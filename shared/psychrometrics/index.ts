@@ -5,13 +5,7 @@
  * equation's ice branch and the frost point (saturation.ts). The equations and their sources:
  * README.md, "How it works".
  */
-export {
-  saturationPressurePa,
-  saturationPressureOverIcePa,
-  dewPointFromVapourPressure,
-  frostPointFromVapourPressure,
-  boilingPointC,
-} from './saturation';
+export { saturationPressurePa, saturationPressureOverIcePa, dewPointFromVapourPressure, frostPointFromVapourPressure, boilingPointC } from './saturation';
 export { rhOverWaterFromRhOverIce, dewPointFromFrostPoint } from './over-ice';
 export { standardPressurePa, standardElevationM } from './atmosphere';
 export { hourlyPressurePa } from './site-pressure';
@@ -46,13 +40,5 @@ export {
   maxHumidityRatioForLimits,
 } from './processes';
 export type { AirPoint, AirStream, MixedAir, SensibleResult, EvaporativeResult, CoilResult, MoistureLimits } from './processes';
-export {
-  projectPoint,
-  saturationCurve,
-  constantRhLine,
-  constantWetBulbLine,
-  constantEnthalpyLine,
-  constantVolumeLine,
-  chartGeometry,
-} from './chart';
+export { projectPoint, saturationCurve, constantRhLine, constantWetBulbLine, constantEnthalpyLine, constantVolumeLine, chartGeometry } from './chart';
 export type { ChartProjection, ChartPoint, ChartLine, ChartLineKind, ChartWindow, ChartGeometryRequest } from './chart';

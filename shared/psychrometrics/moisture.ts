@@ -7,14 +7,7 @@
  */
 import { MOLAR_MASS_RATIO } from './constants';
 import { dewPointAtLnPressure, frostPointFromVapourPressure, lnSaturationPressure } from './saturation';
-import {
-  requireHumidityRatio,
-  requirePressurePa,
-  requireRhPct,
-  requireTemperatureC,
-  SATURATION_SLACK,
-  supersaturatedError,
-} from './validate';
+import { requireHumidityRatio, requirePressurePa, requireRhPct, requireTemperatureC, SATURATION_SLACK, supersaturatedError } from './validate';
 
 /** W = 0.621945 · pw / (p − pw). No checks: kernel for loops. */
 export function humidityRatioFromVapourPressureUnchecked(vapourPressurePa: number, pressurePa: number): number {

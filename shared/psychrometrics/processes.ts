@@ -15,15 +15,7 @@ import {
 } from './moisture';
 import { dewPointAtLnPressure } from './saturation';
 import { humidityRatioFromWetBulb, wetBulbFromHumidityRatio } from './wet-bulb';
-import {
-  requireHumidityRatio,
-  requireInRange,
-  requireNonNegative,
-  requirePressurePa,
-  requireRhPct,
-  requireTemperatureC,
-  SATURATION_SLACK,
-} from './validate';
+import { requireHumidityRatio, requireInRange, requireNonNegative, requirePressurePa, requireRhPct, requireTemperatureC, SATURATION_SLACK } from './validate';
 
 /** A moist-air point on a chart or in a process: dry-bulb °C and humidity ratio kg/kg. */
 export interface AirPoint {
@@ -129,7 +121,8 @@ export function coolAndDehumidify(entering: AirPoint, leavingDryBulbC: number, p
   const t1 = requireTemperatureC('entering.dryBulbC', entering.dryBulbC);
   const w1 = requireHumidityRatio('entering.humidityRatio', entering.humidityRatio);
   requireTemperatureC('leavingDryBulbC', leavingDryBulbC);
-  if (leavingDryBulbC > t1) throw new RangeError(`leavingDryBulbC = ${leavingDryBulbC} °C is above entering.dryBulbC = ${t1} °C: a coil that heats is not cooling`);
+  if (leavingDryBulbC > t1)
+    throw new RangeError(`leavingDryBulbC = ${leavingDryBulbC} °C is above entering.dryBulbC = ${t1} °C: a coil that heats is not cooling`);
   requireRhPct('leavingRhPct', leavingRhPct);
   const wCap = humidityRatioFromRh(leavingDryBulbC, leavingRhPct, pressurePa);
   const w2 = Math.min(w1, wCap);

@@ -21,14 +21,7 @@ import {
 import { saturationTemperatureFromEnthalpy } from './saturated-enthalpy';
 import { moistAirDensityKgPerM3, specificVolumeM3PerKg } from './volume';
 import { humidityRatioFromWetBulb, wetBulbFromHumidityRatio } from './wet-bulb';
-import {
-  requireFinite,
-  requireHumidityRatio,
-  requirePressurePa,
-  requireRhPct,
-  requireTemperatureC,
-  SATURATION_SLACK,
-} from './validate';
+import { requireFinite, requireHumidityRatio, requirePressurePa, requireRhPct, requireTemperatureC, SATURATION_SLACK } from './validate';
 
 /** Named properties of a request; give pressure (or elevation) plus two properties, or one with `saturated: true`. */
 export interface MoistAirRequest {
@@ -90,8 +83,7 @@ export class StateRequestError extends RangeError {
 const PROPERTY_NAMES = ['dryBulbC', 'rhPct', 'dewPointC', 'wetBulbC', 'humidityRatio', 'enthalpyKJPerKg'] as const;
 type PropertyName = (typeof PROPERTY_NAMES)[number];
 
-const SUPPORTED_PAIRS =
-  'dryBulbC with one of rhPct, dewPointC, wetBulbC, humidityRatio, enthalpyKJPerKg; or enthalpyKJPerKg with humidityRatio';
+const SUPPORTED_PAIRS = 'dryBulbC with one of rhPct, dewPointC, wetBulbC, humidityRatio, enthalpyKJPerKg; or enthalpyKJPerKg with humidityRatio';
 
 function resolvePressurePa(request: MoistAirRequest): number {
   const hasPressure = request.pressurePa !== undefined;

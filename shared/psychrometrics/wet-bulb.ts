@@ -18,13 +18,7 @@ import {
   lnSaturationPressure,
 } from './saturation';
 import { vapourPressureFromHumidityRatioUnchecked } from './moisture';
-import {
-  requireHumidityRatio,
-  requirePressurePa,
-  requireTemperatureC,
-  SATURATION_SLACK,
-  supersaturatedError,
-} from './validate';
+import { requireHumidityRatio, requirePressurePa, requireTemperatureC, SATURATION_SLACK, supersaturatedError } from './validate';
 
 // Coefficients (a − b·t*)·Ws* − 1.006·(t − t*) over (a + 1.86·t − c·t*), eq. 33 (water) and eq. 35 (ice).
 const A_WATER = 2501;

@@ -21,7 +21,10 @@ export function rejectionFanLabel(system: Pick<ScenarioSystem, 'kind'> & { heatR
   return null;
 }
 
-export function fanGroups(energy: EnergyTotals & { annual: EnergyTotals | null }, system: Pick<ScenarioSystem, 'kind'> & { heatRejection?: string }): FanGroup[] {
+export function fanGroups(
+  energy: EnergyTotals & { annual: EnergyTotals | null },
+  system: Pick<ScenarioSystem, 'kind'> & { heatRejection?: string },
+): FanGroup[] {
   const rejectionLabel = rejectionFanLabel(system);
   const annual = energy.annual;
   if (rejectionLabel === null) return [{ key: 'hallFans', label: 'Hall fans', kwh: energy.fanKwh, annualKwh: annual?.fanKwh ?? null }];
@@ -31,7 +34,12 @@ export function fanGroups(energy: EnergyTotals & { annual: EnergyTotals | null }
   }
   const annualRejection = annual?.rejectionFanKwh;
   return [
-    { key: 'hallFans', label: 'Hall fans', kwh: energy.fanKwh - energy.rejectionFanKwh, annualKwh: annual && typeof annualRejection === 'number' ? annual.fanKwh - annualRejection : null },
+    {
+      key: 'hallFans',
+      label: 'Hall fans',
+      kwh: energy.fanKwh - energy.rejectionFanKwh,
+      annualKwh: annual && typeof annualRejection === 'number' ? annual.fanKwh - annualRejection : null,
+    },
     { key: 'rejectionFans', label: rejectionLabel, kwh: energy.rejectionFanKwh, annualKwh: typeof annualRejection === 'number' ? annualRejection : null },
   ];
 }

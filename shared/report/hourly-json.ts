@@ -13,12 +13,15 @@ export interface HourlyJson {
   columns: readonly (HourlyColumn | HybridHourlyColumn)[];
   units: Partial<Record<HourlyColumn | HybridHourlyColumn, string>>;
   /** One array per column, one entry per hour in series order (UTC). */
-  hours: { timestamp: string[]; mode: string[]; local_standard_time: string[] } & Record<Exclude<HourlyColumn, 'timestamp' | 'mode' | 'local_standard_time'>, (number | null)[]> & {
-    /** Hybrid runs only. */
-    liquid_mode?: string[];
-    air_mode?: string[];
-    liquid_mechanical_fraction?: (number | null)[];
-  };
+  hours: { timestamp: string[]; mode: string[]; local_standard_time: string[] } & Record<
+    Exclude<HourlyColumn, 'timestamp' | 'mode' | 'local_standard_time'>,
+    (number | null)[]
+  > & {
+      /** Hybrid runs only. */
+      liquid_mode?: string[];
+      air_mode?: string[];
+      liquid_mechanical_fraction?: (number | null)[];
+    };
 }
 
 export const hybridHourlyUnits: Record<HybridHourlyColumn, string> = {

@@ -111,7 +111,13 @@ export function engineVersionsOf(runs: readonly { engineVersion: string }[]): st
 export function mixedEngineNote(runs: readonly { id: number; engineVersion: string }[]): string | null {
   const versions = engineVersionsOf(runs);
   if (versions.length < 2) return null;
-  const groups = versions.map((v) => `${v}: run${runs.filter((r) => r.engineVersion === v).length > 1 ? 's' : ''} ${runs.filter((r) => r.engineVersion === v).map((r) => r.id).join(', ')}`);
+  const groups = versions.map(
+    (v) =>
+      `${v}: run${runs.filter((r) => r.engineVersion === v).length > 1 ? 's' : ''} ${runs
+        .filter((r) => r.engineVersion === v)
+        .map((r) => r.id)
+        .join(', ')}`,
+  );
   return `These runs were made by different engine versions (${groups.join('; ')}). The rules changed between versions, so part of a difference may come from the engine rather than the design. Run the older scenarios again to compare like with like.`;
 }
 

@@ -76,7 +76,9 @@ export function runHourColumns(input: RunHourInput, names: readonly HourColumnNa
       stepMs,
       sitePressurePa: chartPressurePa(series, elevationM),
       modeNames: MODE_NAMES,
-      ...(binWidthK === undefined ? {} : { dryBulbBins: { widthK: binWidthK, originC: binOriginC, ...dryBulbBins(modes, series.dryBulbC, outdoor!.states.wetBulbC, binWidthK, binOriginC) } }),
+      ...(binWidthK === undefined
+        ? {}
+        : { dryBulbBins: { widthK: binWidthK, originC: binOriginC, ...dryBulbBins(modes, series.dryBulbC, outdoor!.states.wetBulbC, binWidthK, binOriginC) } }),
     },
     // timestamps first: float64 wants the 8-byte alignment every column starts at anyway
     stepMs === null ? { timestampsMs: series.timestampsMs, ...columns } : columns,

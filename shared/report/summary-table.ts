@@ -8,7 +8,18 @@ import { celsiusToFahrenheit, kelvinDifferenceToFahrenheit, metreToFoot } from '
 import { MONTH_SHORT } from '../calendar';
 import { modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
-import { countsSubsets, hoursOfSpec, modeRowSpecs, notCountedNote, modeSubsets, subsetHours, waterPartL, waterParts, type ModeSubsetKey, type WaterPartKey } from './mode-subsets';
+import {
+  countsSubsets,
+  hoursOfSpec,
+  modeRowSpecs,
+  notCountedNote,
+  modeSubsets,
+  subsetHours,
+  waterPartL,
+  waterParts,
+  type ModeSubsetKey,
+  type WaterPartKey,
+} from './mode-subsets';
 import type { LoopResults, ScenarioResults } from '../scenario/run';
 import type { HeatReuseResults } from '../scenario/heat-reuse';
 import { humidityReadingWords } from './humidity-reading';
@@ -25,7 +36,6 @@ export interface SummaryRow {
   unit: string;
   value: number | string | null;
 }
-
 
 /** Fixed decimals as a number (not text), so a spreadsheet still reads it as a number. */
 export function rounded(value: number | null | undefined, decimals: number): number | null {
@@ -59,11 +69,21 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'run', figure: 'Humidity in the file', unit: '', value: humidityReadingWords(run.climate.humidityOverIce) },
     { section: 'run', figure: 'Envelope', unit: '', value: run.envelope.label },
     { section: 'run', figure: 'Engine version', unit: '', value: run.engineVersion },
-    { section: 'run', figure: 'Period (site standard time)', unit: '', value: standardPeriod(run.climate.firstHourMs, run.climate.lastHourMs, run.site.utcOffsetMinutes) },
+    {
+      section: 'run',
+      figure: 'Period (site standard time)',
+      unit: '',
+      value: standardPeriod(run.climate.firstHourMs, run.climate.lastHourMs, run.site.utcOffsetMinutes),
+    },
     { section: 'run', figure: 'Site standard time', unit: '', value: utcOffsetLabel(run.site.utcOffsetMinutes) },
     { section: 'site', figure: 'Site elevation used', unit: 'm', value: r.site.elevationM },
     { section: 'site', figure: 'Air pressure used', unit: '', value: pressureSourceWords(r.site) },
-    { section: 'site', figure: 'Hours with pressure from the standard atmosphere', unit: 'h', value: r.site.pressureSource === 'weather' ? r.site.pressureFilledHours : r.hours.total - r.hours.noData },
+    {
+      section: 'site',
+      figure: 'Hours with pressure from the standard atmosphere',
+      unit: 'h',
+      value: r.site.pressureSource === 'weather' ? r.site.pressureFilledHours : r.hours.total - r.hours.noData,
+    },
     { section: 'site', figure: 'Envelope maximum dry-bulb after altitude derating', unit: '°C', value: rounded(r.envelope.dryBulbMaxC, 2) },
     ...(countsSubsets(r) ? [] : [{ section: 'run', figure: 'Not counted', unit: '', value: notCountedNote(run.engineVersion) }]),
     ...modeRows('hours', '', r.hours),
@@ -84,7 +104,12 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'energy', figure: 'Peak mechanical load', unit: 'kW', value: rounded(r.peakMechanicalLoadKw, 1) },
     { section: 'energy', figure: 'Peak compressor power', unit: 'kW', value: rounded(r.peakCompressorKw, 1) },
     { section: 'water', figure: 'Evaporated', unit: 'L', value: rounded(w.evaporatedL, 1) },
-    ...waterParts.map((p) => ({ section: 'water', figure: p.ofEvaporated ? `Evaporated: ${p.rowLabel}` : p.figure, unit: 'L', value: rounded(waterPartL(w, p.key), 1) })),
+    ...waterParts.map((p) => ({
+      section: 'water',
+      figure: p.ofEvaporated ? `Evaporated: ${p.rowLabel}` : p.figure,
+      unit: 'L',
+      value: rounded(waterPartL(w, p.key), 1),
+    })),
     { section: 'water', figure: 'Blowdown', unit: 'L', value: rounded(w.blowdownL, 1) },
     { section: 'water', figure: 'Water total', unit: 'L', value: rounded(w.totalL, 1) },
     { section: 'water', figure: 'Water total per 8,760 h', unit: 'L', value: rounded(w.annualL, 1) },
@@ -96,14 +121,24 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
   const partial = new Map(yearStatistics(r.hoursByYear).partialYears.map((p) => [p.year, p]));
   for (const y of r.hoursByYear) {
     const p = partial.get(y.year);
-    rows.push({ section: 'by year', figure: `${y.year}: calendar year`, unit: '', value: p ? `${PARTIAL_YEAR_MARK} (${p.hours} of ${p.calendarHours} h)` : 'full' });
+    rows.push({
+      section: 'by year',
+      figure: `${y.year}: calendar year`,
+      unit: '',
+      value: p ? `${PARTIAL_YEAR_MARK} (${p.hours} of ${p.calendarHours} h)` : 'full',
+    });
     rows.push(...modeRows('by year', `${y.year}: `, y));
     rows.push({ section: 'by year', figure: `${y.year}: cooling energy`, unit: 'kWh', value: rounded(y.coolingKwh, 1) });
     rows.push({ section: 'by year', figure: `${y.year}: water`, unit: 'L', value: rounded(y.waterL, 1) });
   }
   rows.push(...yearStatisticRows(r));
   for (const input of scenarioInputRows(run.scenario)) {
-    rows.push({ section: 'inputs', figure: input.path, unit: inputUnitSi[input.kind], value: typeof input.value === 'boolean' ? String(input.value) : input.value });
+    rows.push({
+      section: 'inputs',
+      figure: input.path,
+      unit: inputUnitSi[input.kind],
+      value: typeof input.value === 'boolean' ? String(input.value) : input.value,
+    });
   }
   return rows;
 }
@@ -135,7 +170,12 @@ function loopRows(r: ScenarioResults): SummaryRow[] {
       { section: 'heat reuse', figure: 'Threshold', unit: '°C', value: reuse.thresholdC },
       { section: 'heat reuse', figure: 'Hours available', unit: 'h', value: reuse.availableHours },
       { section: 'heat reuse', figure: 'Heat available', unit: 'kWh', value: rounded(reuse.availableKwh, 1) },
-      ...reuse.availableKwhByMonth.map((kwh, m) => ({ section: 'heat reuse', figure: `${MONTH_SHORT[m]}: heat available`, unit: 'kWh', value: rounded(kwh, 1) })),
+      ...reuse.availableKwhByMonth.map((kwh, m) => ({
+        section: 'heat reuse',
+        figure: `${MONTH_SHORT[m]}: heat available`,
+        unit: 'kWh',
+        value: rounded(kwh, 1),
+      })),
       { section: 'heat reuse', figure: 'Heat reused', unit: 'kWh', value: rounded(reuse.reusedKwh, 1) },
       { section: 'heat reuse', figure: 'Heat-pump electricity', unit: 'kWh', value: rounded(reuse.heatPumpKwh, 1) },
       { section: 'heat reuse', figure: 'ERF (ISO/IEC 30134-6)', unit: '', value: rounded(reuse.erf, 4) },
@@ -162,7 +202,8 @@ function yearStatisticRows(r: ScenarioResults): SummaryRow[] {
   if (stats.worst) {
     rows.push({ section, figure: 'Worst year', unit: '', value: stats.worst.year });
     rows.push({ section, figure: 'Worst year: mechanical', unit: 'h', value: stats.worst.mechanical });
-    if (stats.worst.tiedWith.length) rows.push({ section, figure: 'Worst year: tied with', unit: '', value: `${stats.worst.tiedWith.join(' ')} (${WORST_YEAR_TIE_RULE})` });
+    if (stats.worst.tiedWith.length)
+      rows.push({ section, figure: 'Worst year: tied with', unit: '', value: `${stats.worst.tiedWith.join(' ')} (${WORST_YEAR_TIE_RULE})` });
   }
   return rows;
 }
@@ -188,7 +229,9 @@ export function inUnits(unit: string, value: number | null, units: SummaryUnits)
 
 export function summaryRowsIn(rows: SummaryRow[], units: SummaryUnits): SummaryRow[] {
   if (units === 'SI') return rows;
-  return rows.map((row) => (typeof row.value === 'string' ? { ...row, unit: inUnits(row.unit, null, units).unit } : { ...row, ...inUnits(row.unit, row.value, units) }));
+  return rows.map((row) =>
+    typeof row.value === 'string' ? { ...row, unit: inUnits(row.unit, null, units).unit } : { ...row, ...inUnits(row.unit, row.value, units) },
+  );
 }
 
 export function summaryCsv(rows: SummaryRow[]): string {
@@ -256,12 +299,32 @@ function perYearL(r: ComparableResults, litres: number | null): number | null {
 
 const subsetFigure = (key: ModeSubsetKey, better: ComparedFigure['better']): ComparedFigure => {
   const subset = modeSubsets.find((s) => s.key === key)!;
-  return { key, label: subset.rowLabel, standalone: `${subset.figure} (part of ${modeLabels[subset.parent].toLowerCase()})`, unit: 'h', better, decimals: 0, notInOldRuns: true, part: true, value: (r) => subsetHours(r.hours, key) };
+  return {
+    key,
+    label: subset.rowLabel,
+    standalone: `${subset.figure} (part of ${modeLabels[subset.parent].toLowerCase()})`,
+    unit: 'h',
+    better,
+    decimals: 0,
+    notInOldRuns: true,
+    part: true,
+    value: (r) => subsetHours(r.hours, key),
+  };
 };
 
 const waterPartFigure = (key: WaterPartKey): ComparedFigure => {
   const part = waterParts.find((p) => p.key === key)!;
-  return { key, label: part.rowLabel, standalone: `${part.figure} per 8,760 h`, unit: 'L', better: 'lower', decimals: 1, notInOldRuns: true, part: true, value: (r) => perYearL(r, waterPartL(r.water, key)) };
+  return {
+    key,
+    label: part.rowLabel,
+    standalone: `${part.figure} per 8,760 h`,
+    unit: 'L',
+    better: 'lower',
+    decimals: 1,
+    notInOldRuns: true,
+    part: true,
+    value: (r) => perYearL(r, waterPartL(r.water, key)),
+  };
 };
 
 /** The figures runs are compared on (the compare page, its CSV and the comparison report); energy and water per 8,760 h so files of different lengths compare. */
@@ -275,17 +338,64 @@ export const comparedFigures: ComparedFigure[] = [
   { key: 'excursions', label: 'Hours outside the envelope', unit: 'h', better: 'lower', decimals: 0, value: (r) => r.excursions.hours },
   { key: 'ppue', label: 'Partial PUE (cooling)', unit: '', better: 'lower', decimals: 4, value: (r) => r.energy.partialPue },
   { key: 'cooling', label: 'Cooling energy per 8,760 h', unit: 'kWh', better: 'lower', decimals: 1, value: (r) => r.energy.annual?.coolingKwh ?? null },
-  { key: 'compressor', label: 'Compressor energy per 8,760 h', unit: 'kWh', better: 'lower', decimals: 1, value: (r) => r.energy.annual?.compressorKwh ?? null },
+  {
+    key: 'compressor',
+    label: 'Compressor energy per 8,760 h',
+    unit: 'kWh',
+    better: 'lower',
+    decimals: 1,
+    value: (r) => r.energy.annual?.compressorKwh ?? null,
+  },
   { key: 'peak', label: 'Peak mechanical load', unit: 'kW', better: 'lower', decimals: 1, value: (r) => r.peakMechanicalLoadKw },
   { key: 'water', label: 'Water per 8,760 h', unit: 'L', better: 'lower', decimals: 1, value: (r) => r.water.annualL },
   waterPartFigure('humidificationL'),
   waterPartFigure('evaporativeCoolingL'),
   { key: 'wue', label: 'WUE', unit: 'L/kWh', better: 'lower', decimals: 4, value: (r) => r.water.wueLPerKwh },
-  { key: 'liquidFree', label: 'Liquid loop: free cooling', unit: 'h', better: 'higher', decimals: 0, hybridOnly: true, value: (r) => r.loops?.liquid.hours.free ?? null },
-  { key: 'liquidMechanical', label: 'Liquid loop: mechanical', unit: 'h', better: 'lower', decimals: 0, hybridOnly: true, value: (r) => r.loops?.liquid.hours.mechanical ?? null },
-  { key: 'airFree', label: 'Air loop: free cooling', unit: 'h', better: 'higher', decimals: 0, hybridOnly: true, value: (r) => r.loops?.air.hours.free ?? null },
-  { key: 'airMechanical', label: 'Air loop: mechanical', unit: 'h', better: 'lower', decimals: 0, hybridOnly: true, value: (r) => r.loops?.air.hours.mechanical ?? null },
-  { key: 'heatAvailable', label: 'Reusable heat available', unit: 'kWh', better: 'higher', decimals: 1, hybridOnly: true, value: (r) => r.heatReuse?.availableKwh ?? null },
+  {
+    key: 'liquidFree',
+    label: 'Liquid loop: free cooling',
+    unit: 'h',
+    better: 'higher',
+    decimals: 0,
+    hybridOnly: true,
+    value: (r) => r.loops?.liquid.hours.free ?? null,
+  },
+  {
+    key: 'liquidMechanical',
+    label: 'Liquid loop: mechanical',
+    unit: 'h',
+    better: 'lower',
+    decimals: 0,
+    hybridOnly: true,
+    value: (r) => r.loops?.liquid.hours.mechanical ?? null,
+  },
+  {
+    key: 'airFree',
+    label: 'Air loop: free cooling',
+    unit: 'h',
+    better: 'higher',
+    decimals: 0,
+    hybridOnly: true,
+    value: (r) => r.loops?.air.hours.free ?? null,
+  },
+  {
+    key: 'airMechanical',
+    label: 'Air loop: mechanical',
+    unit: 'h',
+    better: 'lower',
+    decimals: 0,
+    hybridOnly: true,
+    value: (r) => r.loops?.air.hours.mechanical ?? null,
+  },
+  {
+    key: 'heatAvailable',
+    label: 'Reusable heat available',
+    unit: 'kWh',
+    better: 'higher',
+    decimals: 1,
+    hybridOnly: true,
+    value: (r) => r.heatReuse?.availableKwh ?? null,
+  },
   { key: 'erf', label: 'ERF (ISO/IEC 30134-6)', unit: '', better: 'higher', decimals: 4, hybridOnly: true, value: (r) => r.heatReuse?.erf ?? null },
 ];
 
@@ -313,25 +423,27 @@ export function comparisonRows(runs: ReportRun[], baselineId: number, units: Sum
   const baseline = runs.find((r) => r.id === baselineId) ?? runs[0];
   if (!baseline) return [];
   const anyHybrid = runs.some((r) => r.results.loops !== undefined);
-  return comparedFigures.filter((f) => anyHybrid || !f.hybridOnly).map((f) => {
-    const base = f.value(baseline.results);
-    // Differences of a linear unit convert by the same factor (water in L or US gal; no temperatures here).
-    const shown = (v: number | null) => (inUnits(f.unit, v, units).unit === f.unit ? rounded(v, f.decimals) : inUnits(f.unit, v, units).value);
-    return {
-      key: f.key,
-      figure: f.label,
-      unit: inUnits(f.unit, null, units).unit,
-      better: f.better,
-      notInOldRuns: f.notInOldRuns ?? false,
-      part: f.part ?? false,
-      standaloneFigure: f.standalone ?? f.label,
-      cells: runs.map((run) => {
-        const value = f.value(run.results);
-        const difference = run.id !== baseline.id && value !== null && base !== null ? value - base : null;
-        return { runId: run.id, value: shown(value), difference: shown(difference) };
-      }),
-    };
-  });
+  return comparedFigures
+    .filter((f) => anyHybrid || !f.hybridOnly)
+    .map((f) => {
+      const base = f.value(baseline.results);
+      // Differences of a linear unit convert by the same factor (water in L or US gal; no temperatures here).
+      const shown = (v: number | null) => (inUnits(f.unit, v, units).unit === f.unit ? rounded(v, f.decimals) : inUnits(f.unit, v, units).value);
+      return {
+        key: f.key,
+        figure: f.label,
+        unit: inUnits(f.unit, null, units).unit,
+        better: f.better,
+        notInOldRuns: f.notInOldRuns ?? false,
+        part: f.part ?? false,
+        standaloneFigure: f.standalone ?? f.label,
+        cells: runs.map((run) => {
+          const value = f.value(run.results);
+          const difference = run.id !== baseline.id && value !== null && base !== null ? value - base : null;
+          return { runId: run.id, value: shown(value), difference: shown(difference) };
+        }),
+      };
+    });
 }
 
 /** The comparison as CSV: one line per figure; each run's value, then its difference from the baseline. */

@@ -96,7 +96,10 @@ export function moistureTargets(limits: InletLimits, supplyAirC: number, pressur
  */
 export function classifyHours(system: SingleSystem, limits: InletLimits, hours: OutdoorHours, plant: ClassifierPlant): HourClassification {
   const n = hours.dryBulbC.length;
-  for (const [name, array] of [['wetBulbC', hours.wetBulbC], ['humidityRatio', hours.humidityRatio]] as const) {
+  for (const [name, array] of [
+    ['wetBulbC', hours.wetBulbC],
+    ['humidityRatio', hours.humidityRatio],
+  ] as const) {
     if (array.length !== n) throw new RangeError(`${name} has ${array.length} hours, dryBulbC has ${n}`);
   }
   if (typeof hours.pressurePa !== 'number' && hours.pressurePa.length !== n) {

@@ -116,9 +116,7 @@ export function hourlyEnergy(
   const approachK = waterSide ? system.approachK : 0;
   const freezeWetBulbC = tower ? system.freezeProtectionWetBulbC : Number.NEGATIVE_INFINITY;
   // A wetted dry cooler's water follows its design air flow: the design heat rejected over cp·(air rise).
-  const dryCoolerAirKgPerH = waterSide
-    ? (designCoolingKw * (1 + 1 / energy.mechanicalCop) * 3600) / (CP_AIR_KJ_PER_KG_K * system.dryCoolerAirRiseK)
-    : 0;
+  const dryCoolerAirKgPerH = waterSide ? (designCoolingKw * (1 + 1 / energy.mechanicalCop) * 3600) / (CP_AIR_KJ_PER_KG_K * system.dryCoolerAirRiseK) : 0;
   // Air-cooled condenser air per kW rejected, kg/h, for the water a wetted condenser takes up.
   const condenserAirKgPerHPerKw = 3600 / (CP_AIR_KJ_PER_KG_K * CONDENSER_AIR_RISE_K);
   const basinHeaterKw = tower ? energy.basinHeaterFraction * designItKw : 0;
@@ -129,7 +127,19 @@ export function hourlyEnergy(
   const { modes, mechanicalFraction, evaporationKgPerKgAir, humidified } = hours;
 
   // The output columns as locals: the loop writes them without going through the out object each time.
-  const { itKw: outItKw, mechanicalLoadKw: outMechanicalLoadKw, compressorKw: outCompressorKw, cop: outCop, fanKw: outFanKw, pumpKw: outPumpKw, basinHeaterKw: outBasinHeaterKw, rejectedKw: outRejectedKw, humidificationL: outHumidificationL, evaporativeCoolingL: outEvaporativeCoolingL, driftL: outDriftL } = out;
+  const {
+    itKw: outItKw,
+    mechanicalLoadKw: outMechanicalLoadKw,
+    compressorKw: outCompressorKw,
+    cop: outCop,
+    fanKw: outFanKw,
+    pumpKw: outPumpKw,
+    basinHeaterKw: outBasinHeaterKw,
+    rejectedKw: outRejectedKw,
+    humidificationL: outHumidificationL,
+    evaporativeCoolingL: outEvaporativeCoolingL,
+    driftL: outDriftL,
+  } = out;
   for (let i = 0; i < n; i++) {
     if (modes[i] === MODE.noData) continue;
     const load = loadFraction[i];

@@ -198,7 +198,8 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
   }
   const humidified = input.humidified;
   const offsetMs = input.utcOffsetMinutes * 60_000;
-  if (!Number.isFinite(offsetMs) || Math.abs(input.utcOffsetMinutes) > 18 * 60) throw new RangeError(`utcOffsetMinutes must be within ±1080, got ${input.utcOffsetMinutes}`);
+  if (!Number.isFinite(offsetMs) || Math.abs(input.utcOffsetMinutes) > 18 * 60)
+    throw new RangeError(`utcOffsetMinutes must be within ±1080, got ${input.utcOffsetMinutes}`);
   const header = loops ? [...HOURLY_CSV_COLUMNS, ...HYBRID_HOURLY_CSV_COLUMNS] : HOURLY_CSV_COLUMNS;
   onChunk(encoder.encode(`${header.join(',')}\n`));
   const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };

@@ -73,12 +73,7 @@ export function loopScenarios(scenario: HybridScenario): { liquid: SingleScenari
  * design cooling load, each loop's fraction weighted by its design cooling load (IT share, plus hall fan heat for
  * the air loop, `airFanPowerFraction` of its IT).
  */
-export function combineLoopHours(
-  liquidShare: number,
-  liquid: HourClassification,
-  air: HourClassification,
-  airFanPowerFraction: number,
-): HourClassification {
+export function combineLoopHours(liquidShare: number, liquid: HourClassification, air: HourClassification, airFanPowerFraction: number): HourClassification {
   if (liquidShare === 0) return air;
   if (liquidShare === 1) return liquid;
   const n = air.modes.length;

@@ -9,7 +9,16 @@ export type { HourClassification, InletLimits, OutdoorHours, ModeCode, Classifie
 export { hourlyEnergy, compressorModelFor, CONDENSER_AIR_RISE_K } from './energy';
 export type { HourlyEnergy, EnergyOutdoor } from './energy';
 export { CP_AIR_KJ_PER_KG_K, CP_WATER_KJ_PER_KG_K, LATENT_HEAT_TOWER_KJ_PER_KG, hallAirMassFlowKgPerS } from './air';
-export { calibrateCompressor, carnotCop, compressorPowerKw, fullLoadCop, partLoadInputRatio, RATING_CONDITIONS, MIN_LIFT_K, PART_LOAD_CURVE } from './compressor';
+export {
+  calibrateCompressor,
+  carnotCop,
+  compressorPowerKw,
+  fullLoadCop,
+  partLoadInputRatio,
+  RATING_CONDITIONS,
+  MIN_LIFT_K,
+  PART_LOAD_CURVE,
+} from './compressor';
 export type { CompressorModel, CondenserKind } from './compressor';
 export { crossFlowUnmixedEffectiveness, crossFlowUnmixedNtu, hallSideEffectiveness } from './exchanger';
 export { affinityPowerKw, designFanHeatK, fanHeatK, speedFraction } from './fans';

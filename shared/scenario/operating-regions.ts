@@ -64,7 +64,8 @@ export function cellOf(grid: StateGrid, dryBulbC: number, humidityRatio: number)
 
 function checkGrid(grid: StateGrid): void {
   for (const key of ['nx', 'ny'] as const) {
-    if (!(Number.isInteger(grid[key]) && grid[key] > 0 && grid[key] <= 4096)) throw new RangeError(`${key} must be a whole number from 1 to 4096 (got ${grid[key]})`);
+    if (!(Number.isInteger(grid[key]) && grid[key] > 0 && grid[key] <= 4096))
+      throw new RangeError(`${key} must be a whole number from 1 to 4096 (got ${grid[key]})`);
   }
   if (!(grid.dryBulbStepC > 0)) throw new RangeError(`dryBulbStepC must be above 0 (got ${grid.dryBulbStepC})`);
   if (!(grid.humidityRatioStep > 0)) throw new RangeError(`humidityRatioStep must be above 0 (got ${grid.humidityRatioStep})`);
@@ -96,7 +97,18 @@ export function gridStates(grid: StateGrid, pressurePa: number): GridStates {
     }
   }
   const states = bulkStates({ dryBulbC, humidity: { kind: 'humidity-ratio-kgkg', values: humidityRatio }, pressurePa });
-  return { dryBulbMinC: grid.dryBulbMinC, dryBulbStepC: grid.dryBulbStepC, nx, humidityRatioMin: grid.humidityRatioMin, humidityRatioStep: grid.humidityRatioStep, ny, pressurePa, dryBulbC, humidityRatio, wetBulbC: states.wetBulbC };
+  return {
+    dryBulbMinC: grid.dryBulbMinC,
+    dryBulbStepC: grid.dryBulbStepC,
+    nx,
+    humidityRatioMin: grid.humidityRatioMin,
+    humidityRatioStep: grid.humidityRatioStep,
+    ny,
+    pressurePa,
+    dryBulbC,
+    humidityRatio,
+    wetBulbC: states.wetBulbC,
+  };
 }
 
 /**
@@ -107,7 +119,12 @@ export function gridStates(grid: StateGrid, pressurePa: number): GridStates {
 export function operatingRegionGrid(design: DesignForRegions, grid: StateGrid | GridStates, pressurePa?: number): OperatingRegionGrid {
   const states = 'wetBulbC' in grid && (pressurePa === undefined || pressurePa === grid.pressurePa) ? grid : gridStates(grid, requirePressure(pressurePa));
   const n = states.nx * states.ny;
-  const c = classifyHours(design.system, design.limits, { dryBulbC: states.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa: states.pressurePa }, design.plant);
+  const c = classifyHours(
+    design.system,
+    design.limits,
+    { dryBulbC: states.dryBulbC, wetBulbC: states.wetBulbC, humidityRatio: states.humidityRatio, pressurePa: states.pressurePa },
+    design.plant,
+  );
   const regions = new Uint8Array(n);
   for (let k = 0; k < n; k++) regions[k] = regionOfHour(c.modes[k], c.humidified[k], c.mechanicalFraction[k]);
   const { dryBulbMinC, dryBulbStepC, nx, humidityRatioMin, humidityRatioStep, ny } = states;

@@ -153,7 +153,18 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
   let year: YearTotals = { counts: new Float64Array(SLOTS), coolingKwh: 0, waterL: 0 };
   let previousMs = Number.NaN;
   // The hourly columns as locals: the loop reads them without going through the energy object each time.
-  const { itKw, fanKw, rejectionFanKw, compressorKw, pumpKw, basinHeaterKw, humidificationL: humidifyingL, evaporativeCoolingL: coolingL, driftL: driftHourL, mechanicalLoadKw } = energy;
+  const {
+    itKw,
+    fanKw,
+    rejectionFanKw,
+    compressorKw,
+    pumpKw,
+    basinHeaterKw,
+    humidificationL: humidifyingL,
+    evaporativeCoolingL: coolingL,
+    driftL: driftHourL,
+    mechanicalLoadKw,
+  } = energy;
   let yearCounts = year.counts;
 
   for (let i = 0; i < n; i++) {

@@ -93,7 +93,8 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   const n = series.dryBulbC.length;
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
   const elevationM = options.elevationM ?? scenario.elevationM;
-  if (elevationM === undefined) throw new RangeError('elevationM: give the site\'s elevation (RunOptions.elevationM, or elevationM in a scenario run without a site)');
+  if (elevationM === undefined)
+    throw new RangeError("elevationM: give the site's elevation (RunOptions.elevationM, or elevationM in a scenario run without a site)");
   const outdoor = outdoorStates(series, elevationM);
   const atSite: SiteRunOptions = { ...options, elevationM };
   if (isHybrid(scenario)) return runHybrid(scenario, series, atSite, outdoor);
@@ -129,13 +130,15 @@ function runSingle(scenario: SingleScenario, series: ScenarioSeries, options: Si
 
   const warnings: string[] = [];
   if (system.supplyAirC > limits.dryBulbMaxC) {
-    warnings.push(`supplyAirC ${system.supplyAirC} °C is above the envelope's maximum dry-bulb ${round2(limits.dryBulbMaxC)} °C${limits.dryBulbMaxC < envelope.dryBulbMaxC ? ` (derated for ${elevationM} m)` : ''}: every hour is an excursion.`);
+    warnings.push(
+      `supplyAirC ${system.supplyAirC} °C is above the envelope's maximum dry-bulb ${round2(limits.dryBulbMaxC)} °C${limits.dryBulbMaxC < envelope.dryBulbMaxC ? ` (derated for ${elevationM} m)` : ''}: every hour is an excursion.`,
+    );
   }
   if (system.supplyAirC < limits.dryBulbMinC) {
     warnings.push(`supplyAirC ${system.supplyAirC} °C is below the envelope's minimum dry-bulb ${limits.dryBulbMinC} °C: every hour is an excursion.`);
   }
   if (system.kind === 'direct-air' && targets.lowW > targets.highW) {
-    warnings.push('The envelope\'s lower moisture limit is above its upper limit at the supply temperature: no outdoor hour can meet both.');
+    warnings.push("The envelope's lower moisture limit is above its upper limit at the supply temperature: no outdoor hour can meet both.");
   }
   if (aggregated.hours.noData > 0) warnings.push(`${aggregated.hours.noData} hours have no usable data and are counted as no data.`);
 
@@ -186,7 +189,13 @@ export function outdoorStates(series: ScenarioSeries, elevationM: number): { sta
 const round2 = (x: number): number => Math.round(x * 100) / 100;
 
 /** The run's hours, energy and water summed from its hourly classification and energy. */
-function aggregate(scenario: Pick<Scenario, 'energy'>, series: ScenarioSeries, options: RunOptions, classification: HourClassification, energy: HourlyEnergy): AggregatedResults {
+function aggregate(
+  scenario: Pick<Scenario, 'energy'>,
+  series: ScenarioSeries,
+  options: RunOptions,
+  classification: HourClassification,
+  energy: HourlyEnergy,
+): AggregatedResults {
   return aggregateResults({
     timestampsMs: series.timestampsMs,
     classification,
@@ -302,9 +311,13 @@ function addEnergyTotals(x: EnergyResults, y: EnergyResults): EnergyResults {
   const sum = Object.fromEntries(keys.map((k) => [k, x[k] + y[k]])) as Record<(typeof keys)[number], number>;
   // The heat-rejection fans' part of fanKwh (absent only in results stored before the split).
   const rejectionFanKwh = (x.rejectionFanKwh ?? 0) + (y.rejectionFanKwh ?? 0);
-  const annual = x.annual && y.annual
-    ? { ...(Object.fromEntries(keys.map((k) => [k, x.annual![k] + y.annual![k]])) as Record<(typeof keys)[number], number>), rejectionFanKwh: (x.annual.rejectionFanKwh ?? 0) + (y.annual.rejectionFanKwh ?? 0) }
-    : null;
+  const annual =
+    x.annual && y.annual
+      ? {
+          ...(Object.fromEntries(keys.map((k) => [k, x.annual![k] + y.annual![k]])) as Record<(typeof keys)[number], number>),
+          rejectionFanKwh: (x.annual.rejectionFanKwh ?? 0) + (y.annual.rejectionFanKwh ?? 0),
+        }
+      : null;
   return { ...sum, rejectionFanKwh, partialPue: sum.itKwh > 0 ? (sum.itKwh + sum.coolingKwh) / sum.itKwh : null, annual };
 }
 

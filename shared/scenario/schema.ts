@@ -138,7 +138,10 @@ export const systemSchema = z.discriminatedUnion('kind', [directAirSchema, indir
   error: "kind must be 'direct-air', 'indirect-air', 'water-side' or 'hybrid'",
 });
 
-const loadFraction = z.number({ error: 'must be a number from 0 to 1' }).min(0, { error: 'must be a number from 0 to 1' }).max(1, { error: 'must be a number from 0 to 1' });
+const loadFraction = z
+  .number({ error: 'must be a number from 0 to 1' })
+  .min(0, { error: 'must be a number from 0 to 1' })
+  .max(1, { error: 'must be a number from 0 to 1' });
 
 /** Hours in the profile of an hourly IT load: a 365-day year (29 February repeats 28 February). */
 export const LOAD_PROFILE_HOURS = 8760;
@@ -160,7 +163,10 @@ export const itLoadProfileSchema = z.discriminatedUnion(
   'kind',
   [
     z.object({ kind: z.literal('constant') }),
-    z.object({ kind: z.literal('yearly-ramp'), fractions: z.array(loadFraction).min(1, { error: 'must list at least one year' }).max(100, { error: 'must list at most 100 years' }) }),
+    z.object({
+      kind: z.literal('yearly-ramp'),
+      fractions: z.array(loadFraction).min(1, { error: 'must list at least one year' }).max(100, { error: 'must list at most 100 years' }),
+    }),
     z.object({
       kind: z.literal('hourly-profile'),
       name: plainName,

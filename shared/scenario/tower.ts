@@ -26,7 +26,12 @@ export const TOWER_CIRCULATING_KG_PER_H_PER_KW = 3600 / (CP_WATER_KJ_PER_KG_K * 
  * enthalpyRiseKJPerKg, leaving saturated: W_s(t_s(h_in + Δh)) − W_in, never below 0. Exact (Newton on the
  * saturation curve); the run uses SaturatedExit's table of the same relation.
  */
-export function towerEvaporationPerKgAir(tC: number, humidityRatio: number, pressurePa: number, enthalpyRiseKJPerKg = TOWER_AIR_ENTHALPY_RISE_KJ_PER_KG): number {
+export function towerEvaporationPerKgAir(
+  tC: number,
+  humidityRatio: number,
+  pressurePa: number,
+  enthalpyRiseKJPerKg = TOWER_AIR_ENTHALPY_RISE_KJ_PER_KG,
+): number {
   const hOut = enthalpyKJPerKg(tC, humidityRatio) + enthalpyRiseKJPerKg;
   const tOut = saturationTemperatureFromEnthalpy(hOut, pressurePa);
   const gain = saturationHumidityRatio(tOut, pressurePa) - humidityRatio;

@@ -74,7 +74,12 @@ export const YEAR_STATISTIC_ROWS: { key: string; label: string; title: string; c
   { key: 'p10', label: 'P10 year', title: '10th percentile, nearest rank', cell: (s) => s.p10 },
   { key: 'p90', label: 'P90 year', title: '90th percentile, nearest rank', cell: (s) => s.p90 },
   { key: 'range', label: 'Spread (max − min)', title: 'largest minus smallest full year', cell: (s) => ({ value: s.range }) },
-  { key: 'standardDeviation', label: 'Standard deviation', title: 'sample standard deviation over the full years (divisor N − 1)', cell: (s) => ({ value: s.standardDeviation }) },
+  {
+    key: 'standardDeviation',
+    label: 'Standard deviation',
+    title: 'sample standard deviation over the full years (divisor N − 1)',
+    cell: (s) => ({ value: s.standardDeviation }),
+  },
 ];
 
 /** The note under a year table on how the statistics are taken (page and report). */
@@ -95,7 +100,8 @@ export function partialYearsSentence(partialYears: readonly PartialYear[]): stri
 /** A year may lack this many of its hours and still count as a full year. */
 export const FULL_YEAR_SHORTFALL_HOURS = 24;
 
-export const PERCENTILE_METHOD = 'nearest rank: the P-th percentile of N years is the year of rank ⌈P/100 · N⌉ counted from the smallest value (ties ordered by year)';
+export const PERCENTILE_METHOD =
+  'nearest rank: the P-th percentile of N years is the year of rank ⌈P/100 · N⌉ counted from the smallest value (ties ordered by year)';
 export const WORST_YEAR_TIE_RULE = 'most mechanical hours; a tie goes to the year with more cooling energy, then to the earlier year';
 
 /** Hours in calendar year `year` of the proleptic Gregorian calendar. */
@@ -159,6 +165,10 @@ function metricStatistics(years: readonly YearResults[], metric: YearMetric): Me
 function worstYear(years: readonly YearResults[]): WorstYear {
   const ordered = [...years].sort((a, b) => b.mechanical - a.mechanical || b.coolingKwh - a.coolingKwh || a.year - b.year);
   const worst = ordered[0];
-  const tiedWith = ordered.slice(1).filter((y) => y.mechanical === worst.mechanical).map((y) => y.year).sort((a, b) => a - b);
+  const tiedWith = ordered
+    .slice(1)
+    .filter((y) => y.mechanical === worst.mechanical)
+    .map((y) => y.year)
+    .sort((a, b) => a - b);
   return { year: worst.year, mechanical: worst.mechanical, tiedWith };
 }

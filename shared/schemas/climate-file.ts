@@ -48,7 +48,13 @@ export type TimeBasis = (typeof timeBases)[number];
 
 /** Query of the upload and preview routes (the file itself is the request body). */
 export const climateUploadQuerySchema = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')).optional(),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'name must not be empty')
+    .max(120)
+    .refine(...withoutControlCharacters('name'))
+    .optional(),
   fileName: z.string().trim().min(1).max(255).default('upload.csv'),
   /**
    * How local timestamps without an offset are read: the site's civil time (with daylight saving),
@@ -96,14 +102,16 @@ export const uploadedFilesSchema = z
   .refine((files) => new Set(files.map((f) => f.fileName)).size === files.length, 'two files of the set have the same name');
 
 export const siteInputSchema = z.object({
-  name: z.string().trim().min(1, 'name must not be empty').max(120).refine(...withoutControlCharacters('name')),
+  name: z
+    .string()
+    .trim()
+    .min(1, 'name must not be empty')
+    .max(120)
+    .refine(...withoutControlCharacters('name')),
   latitude: z.number().min(-90).max(90).nullable().default(null),
   longitude: z.number().min(-180).max(180).nullable().default(null),
   elevationM: z.number().min(-450, 'elevationM must be at least −450 m').max(6000, 'elevationM must be at most 6000 m').default(0),
-  timeZone: z
-    .string()
-    .default('UTC')
-    .refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo or a fixed offset such as UTC-07:00'),
+  timeZone: z.string().default('UTC').refine(isKnownTimeZone, 'timeZone must be an IANA time zone such as Europe/Oslo or a fixed offset such as UTC-07:00'),
 });
 
 export type SiteInput = z.infer<typeof siteInputSchema>;

@@ -23,7 +23,8 @@ export function withValueAt<T extends object>(source: T, path: string, value: un
       break;
     }
     const next = node[key];
-    if (next === null || typeof next !== 'object') throw new RangeError(`path "${path}" runs through "${keys.slice(0, i + 1).join('.')}", which is not an object`);
+    if (next === null || typeof next !== 'object')
+      throw new RangeError(`path "${path}" runs through "${keys.slice(0, i + 1).join('.')}", which is not an object`);
     node = next as Record<string, unknown>;
   }
   return copy;

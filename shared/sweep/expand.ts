@@ -42,7 +42,8 @@ const tidy = (v: number) => Math.round(v * 1e9) / 1e9;
 export function axisValues(axis: SweepAxis, limit = MAX_SWEEP_POINTS): SweepValue[] {
   if (axis.input === 'envelope.presetId') return [...axis.presetIds];
   const count = rangeCount(axis.from, axis.to, axis.step);
-  if (count === 0) throw new RangeError(`${axis.input}: from ${axis.from} to ${axis.to} by ${axis.step} is not a range (step must be above 0 and to at least from)`);
+  if (count === 0)
+    throw new RangeError(`${axis.input}: from ${axis.from} to ${axis.to} by ${axis.step} is not a range (step must be above 0 and to at least from)`);
   if (count > limit) throw new RangeError(`${axis.input}: from ${axis.from} to ${axis.to} by ${axis.step} gives ${count} values, more than ${limit}`);
   const values = new Array<number>(count);
   for (let i = 0; i < count; i++) values[i] = tidy(axis.from + i * axis.step);

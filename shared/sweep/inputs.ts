@@ -32,7 +32,13 @@ export interface SweepInputInfo {
 }
 
 export const SWEEP_INPUTS: Record<SweepInputPath, SweepInputInfo> = {
-  'system.supplyAirC': { path: 'system.supplyAirC', label: 'Supply air setpoint', short: 'supply air', quantity: 'temperature', suggested: { from: 18, to: 30, step: 1 } },
+  'system.supplyAirC': {
+    path: 'system.supplyAirC',
+    label: 'Supply air setpoint',
+    short: 'supply air',
+    quantity: 'temperature',
+    suggested: { from: 18, to: 30, step: 1 },
+  },
   'system.chilledWaterSupplyC': {
     path: 'system.chilledWaterSupplyC',
     label: 'Chilled-water supply',
@@ -54,10 +60,22 @@ export const SWEEP_INPUTS: Record<SweepInputPath, SweepInputInfo> = {
     quantity: 'fraction',
     suggested: { from: 0.5, to: 0.8, step: 0.05 },
   },
-  'system.approachK': { path: 'system.approachK', label: 'Approach', short: 'approach', quantity: 'temperatureDifference', suggested: { from: 2, to: 8, step: 1 } },
+  'system.approachK': {
+    path: 'system.approachK',
+    label: 'Approach',
+    short: 'approach',
+    quantity: 'temperatureDifference',
+    suggested: { from: 2, to: 8, step: 1 },
+  },
   'envelope.presetId': { path: 'envelope.presetId', label: 'Inlet envelope preset', short: 'envelope', quantity: 'preset', suggested: null },
   'energy.itLoadKw': { path: 'energy.itLoadKw', label: 'IT load', short: 'IT load', quantity: 'powerKw', suggested: { from: 500, to: 2000, step: 250 } },
-  'system.liquidShare': { path: 'system.liquidShare', label: 'Share of IT heat to liquid', short: 'liquid share', quantity: 'fraction', suggested: { from: 0.5, to: 0.9, step: 0.1 } },
+  'system.liquidShare': {
+    path: 'system.liquidShare',
+    label: 'Share of IT heat to liquid',
+    short: 'liquid share',
+    quantity: 'fraction',
+    suggested: { from: 0.5, to: 0.9, step: 0.1 },
+  },
   'system.liquid.chilledWaterSupplyC': {
     path: 'system.liquid.chilledWaterSupplyC',
     label: 'Facility-water supply',

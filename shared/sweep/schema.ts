@@ -23,7 +23,8 @@ export const sweepAxisSchema = z
         return;
       }
       for (const [i, id] of axis.presetIds.entries()) {
-        if (!presetIds.includes(id)) ctx.addIssue({ code: 'custom', path: ['presetIds', i], message: `"${id}" is not an envelope preset (${presetIds.join(', ')})` });
+        if (!presetIds.includes(id))
+          ctx.addIssue({ code: 'custom', path: ['presetIds', i], message: `"${id}" is not an envelope preset (${presetIds.join(', ')})` });
         else if (axis.presetIds.indexOf(id) !== i) ctx.addIssue({ code: 'custom', path: ['presetIds', i], message: `"${id}" is listed twice` });
       }
       return;
@@ -36,7 +37,11 @@ export const sweepAxisSchema = z
     if (!(step > 0)) ctx.addIssue({ code: 'custom', path: ['step'], message: `step must be above 0, got ${step}` });
     else if (to < from) ctx.addIssue({ code: 'custom', path: ['to'], message: `to (${to}) must not be below from (${from})` });
     else if (rangeCount(from, to, step) > MAX_SWEEP_POINTS) {
-      ctx.addIssue({ code: 'custom', path: ['step'], message: `from ${from} to ${to} by ${step} gives ${rangeCount(from, to, step)} values; at most ${MAX_SWEEP_POINTS}` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['step'],
+        message: `from ${from} to ${to} by ${step} gives ${rangeCount(from, to, step)} values; at most ${MAX_SWEEP_POINTS}`,
+      });
     }
   })
   .transform((axis): SweepAxis =>
@@ -47,10 +52,18 @@ export const sweepAxisSchema = z
 
 export const sweepSpecSchema = z
   .object({
-    name: z.string().trim().max(200, { error: 'name must be at most 200 characters' }).refine(...withoutControlCharacters('name')).optional(),
+    name: z
+      .string()
+      .trim()
+      .max(200, { error: 'name must be at most 200 characters' })
+      .refine(...withoutControlCharacters('name'))
+      .optional(),
     scenarioId: z.number({ error: 'scenarioId must be a scenario id' }).int().positive(),
     climateFileId: z.number({ error: 'climateFileId must be a climate file id' }).int().positive(),
-    axes: z.array(sweepAxisSchema).min(1, { error: 'axes must hold one input (a line) or two (a grid)' }).max(2, { error: 'axes must hold one input (a line) or two (a grid)' }),
+    axes: z
+      .array(sweepAxisSchema)
+      .min(1, { error: 'axes must hold one input (a line) or two (a grid)' })
+      .max(2, { error: 'axes must hold one input (a line) or two (a grid)' }),
   })
   .superRefine((spec, ctx) => {
     if (spec.axes.length === 2 && spec.axes[0].input === spec.axes[1].input) {

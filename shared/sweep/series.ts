@@ -82,7 +82,18 @@ export function sweepProgress(points: readonly Pick<SweepPoint, 'status' | 'prog
   return p;
 }
 
-export const SWEEP_METRICS = ['free', 'humidified', 'adiabatic', 'mechanical', 'partialMechanical', 'partialPue', 'waterL', 'peakMechanicalLoadKw', 'liquidMechanical', 'excursionHours'] as const;
+export const SWEEP_METRICS = [
+  'free',
+  'humidified',
+  'adiabatic',
+  'mechanical',
+  'partialMechanical',
+  'partialPue',
+  'waterL',
+  'peakMechanicalLoadKw',
+  'liquidMechanical',
+  'excursionHours',
+] as const;
 export type SweepMetric = (typeof SWEEP_METRICS)[number];
 
 export const sweepMetricLabels: Record<SweepMetric, string> = {
@@ -183,7 +194,17 @@ export function gridCells(points: readonly SweepPoint[], rowInput: string, colum
     const row = p.values[rowInput as keyof SweepPointValues];
     const column = p.values[columnInput as keyof SweepPointValues];
     if (row === undefined || column === undefined) return [];
-    return [{ row, column, runId: p.runId, metric: metricOf(p.results, metric), done: p.results !== null, noMechanical: p.results?.hours.mechanical === 0 && !p.results.breaksEnvelope, breaksEnvelope: p.results?.breaksEnvelope ?? false }];
+    return [
+      {
+        row,
+        column,
+        runId: p.runId,
+        metric: metricOf(p.results, metric),
+        done: p.results !== null,
+        noMechanical: p.results?.hours.mechanical === 0 && !p.results.breaksEnvelope,
+        breaksEnvelope: p.results?.breaksEnvelope ?? false,
+      },
+    ];
   });
 }
 

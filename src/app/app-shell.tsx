@@ -67,9 +67,7 @@ export function AppShell() {
                   key={item.to}
                   to={item.to}
                   end={item.end}
-                  className={({ isActive }) =>
-                    `rounded px-3 py-1.5 ${isActive ? 'bg-harbour-soft text-paper' : 'text-mist/90 hover:bg-harbour-soft/60'}`
-                  }
+                  className={({ isActive }) => `rounded px-3 py-1.5 ${isActive ? 'bg-harbour-soft text-paper' : 'text-mist/90 hover:bg-harbour-soft/60'}`}
                 >
                   {item.label}
                 </NavLink>
@@ -82,13 +80,17 @@ export function AppShell() {
           </div>
         </div>
       </header>
-      <main id="main" tabIndex={-1} className="mx-auto w-full min-w-0 max-w-screen-2xl flex-1 px-4 py-6 focus:outline-none sm:px-6 print:max-w-none print:px-0 print:py-2">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="mx-auto w-full min-w-0 max-w-screen-2xl flex-1 px-4 py-6 focus:outline-none sm:px-6 print:max-w-none print:px-0 print:py-2"
+      >
         <Outlet />
       </main>
       <footer className="border-t border-rule bg-panel">
         <p className="mx-auto max-w-screen-2xl px-4 py-3 text-xs text-ink-soft sm:px-6">
-          Results are estimates for comparing designs, not a design. Final design follows local codes, the IT
-          manufacturers' limits and licensed engineering review.
+          Results are estimates for comparing designs, not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering
+          review.
         </p>
       </footer>
     </div>

@@ -42,7 +42,10 @@ export function toFloat64(values: ArrayLike<number | null>): Float64Array {
 export function chartSeries(hours: ClimateHoursJson, elevationM: number): ChartSeries {
   const dryBulbC = toFloat64(hours.dryBulbC);
   const humidity = { kind: hours.humidityKind, values: toFloat64(hours.humidity) };
-  const { pressurePa, sitePressurePa } = hourlyPressurePa({ dryBulbC, humidity, pressurePa: hours.pressurePa ? toFloat64(hours.pressurePa) : null }, elevationM);
+  const { pressurePa, sitePressurePa } = hourlyPressurePa(
+    { dryBulbC, humidity, pressurePa: hours.pressurePa ? toFloat64(hours.pressurePa) : null },
+    elevationM,
+  );
   const state = bulkStates({ dryBulbC, humidity, pressurePa });
   let chartPressurePa = sitePressurePa;
   if (typeof pressurePa !== 'number' && pressurePa.length) {
@@ -50,5 +53,14 @@ export function chartSeries(hours: ClimateHoursJson, elevationM: number): ChartS
     for (let i = 0; i < pressurePa.length; i++) sum += pressurePa[i];
     chartPressurePa = sum / pressurePa.length;
   }
-  return { timestampsMs: Float64Array.from(hours.timestampsMs), dryBulbC, humidityRatio: state.humidityRatio, dewPointC: state.dewPointC, wetBulbC: state.wetBulbC, pressurePa, flags: hours.flags ? Uint8Array.from(hours.flags) : null, chartPressurePa };
+  return {
+    timestampsMs: Float64Array.from(hours.timestampsMs),
+    dryBulbC,
+    humidityRatio: state.humidityRatio,
+    dewPointC: state.dewPointC,
+    wetBulbC: state.wetBulbC,
+    pressurePa,
+    flags: hours.flags ? Uint8Array.from(hours.flags) : null,
+    chartPressurePa,
+  };
 }

@@ -8,7 +8,10 @@ import type { UnitSystem } from '@/lib/unit-system';
  */
 export function engineNoteText(note: string, system: UnitSystem): string {
   const t = (c: string) => formatQuantity('temperature', system, Number(c));
-  const above = /^supplyAirC (-?[\d.]+) °C is above the envelope's maximum dry-bulb (-?[\d.]+) °C(?: \(derated for (-?[\d.]+) m\))?: every hour is an excursion\.$/.exec(note);
+  const above =
+    /^supplyAirC (-?[\d.]+) °C is above the envelope's maximum dry-bulb (-?[\d.]+) °C(?: \(derated for (-?[\d.]+) m\))?: every hour is an excursion\.$/.exec(
+      note,
+    );
   if (above) {
     const derated = above[3] ? ` (derated for the site's ${formatQuantity('elevation', system, Number(above[3]))})` : '';
     return `The supply setpoint ${t(above[1])} is above the envelope's maximum dry-bulb ${t(above[2])}${derated}: every hour is an excursion.`;
@@ -36,7 +39,10 @@ const PLAIN_NAMES: Record<string, string> = {
  * person's units: "dewPointC = 30 °C is above dryBulbC = 25 °C" reads "dew point = 86.0 °F is above dry-bulb = 77.0 °F".
  */
 export function plainEngineMessage(message: string, system: UnitSystem): string {
-  const named = message.replace(/\b(dryBulbC|rhPct|dewPointC|wetBulbC|humidityRatio|enthalpyKJPerKg|pressurePa|elevationM|supplyAirC)\b/g, (key) => PLAIN_NAMES[key]);
+  const named = message.replace(
+    /\b(dryBulbC|rhPct|dewPointC|wetBulbC|humidityRatio|enthalpyKJPerKg|pressurePa|elevationM|supplyAirC)\b/g,
+    (key) => PLAIN_NAMES[key],
+  );
   if (system === 'SI') return named;
   return named
     .replace(/(-?\d+(?:\.\d+)?(?:e[-+]?\d+)?) °C/g, (_, v: string) => formatQuantity('temperature', system, Number(v)))

@@ -41,7 +41,17 @@ export function foldSweepPoints<R extends FoldableRun>(runs: readonly R[], limit
     if (run.sweepId === null) continue;
     let row = rows.get(run.sweepId);
     if (!row) {
-      row = { sweepId: run.sweepId, name: run.sweepName ?? `Sweep ${run.sweepId}`, points: 0, done: 0, failed: 0, cancelled: 0, active: 0, freeShare: null, lead: run };
+      row = {
+        sweepId: run.sweepId,
+        name: run.sweepName ?? `Sweep ${run.sweepId}`,
+        points: 0,
+        done: 0,
+        failed: 0,
+        cancelled: 0,
+        active: 0,
+        freeShare: null,
+        lead: run,
+      };
       rows.set(run.sweepId, row);
     }
     row.points++;

@@ -1,6 +1,15 @@
 import { formatQuantity, unitOf, type QuantityKind } from './quantity';
 import type { UnitSystem } from './unit-system';
-import { baseNameOfPoint, isSweepInputPath, presetLabel, SWEEP_INPUTS, type SweepInputPath, type SweepPointValues, type SweepQuantity, type SweepValue } from '../../shared/sweep';
+import {
+  baseNameOfPoint,
+  isSweepInputPath,
+  presetLabel,
+  SWEEP_INPUTS,
+  type SweepInputPath,
+  type SweepPointValues,
+  type SweepQuantity,
+  type SweepValue,
+} from '../../shared/sweep';
 
 /** The quantity kind a swept value's number follows on the SI/IP switch; null for plain numbers and presets. */
 export const sweepQuantityKind: Record<SweepQuantity, QuantityKind | null> = {

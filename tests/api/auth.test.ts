@@ -18,14 +18,15 @@ const clock = () => new Date(now);
 
 let t: SignInStack;
 beforeAll(async () => {
-  t = await startSignInStack({ overrides: { clock, sessionPolicy: { idleMs: 2 * hour, absoluteMs: 10 * hour }, signInRateLimit: { limit: 100, windowMs: 60_000 } } });
+  t = await startSignInStack({
+    overrides: { clock, sessionPolicy: { idleMs: 2 * hour, absoluteMs: 10 * hour }, signInRateLimit: { limit: 100, windowMs: 60_000 } },
+  });
 });
 afterAll(() => t.close());
 
 const agent = () => request.agent(t.app).set('x-tramontane-request', '1');
 const problemOf = (res: request.Response) => new URL(res.headers.location, 'http://x').searchParams.get('problem');
-const sessionCookie = (res: request.Response) =>
-  ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${sessionCookieName}=`));
+const sessionCookie = (res: request.Response) => ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith(`${sessionCookieName}=`));
 
 describe('the first person to sign in on a new installation', () => {
   it('goes through the provider page, comes back signed in, and is made admin', async () => {
@@ -91,7 +92,12 @@ describe('a provider whose discovery document names another issuer', () => {
     const logged: unknown[] = [];
     const s = await startSignInStack({ overrides: { logError: (e) => logged.push(e) } });
     try {
-      const wrong = new OidcClient({ issuer: s.provider.issuer.replace('127.0.0.1', 'localhost'), clientId: 'tramontane-test', clientSecret: null, redirectUri: s.redirectUri });
+      const wrong = new OidcClient({
+        issuer: s.provider.issuer.replace('127.0.0.1', 'localhost'),
+        clientId: 'tramontane-test',
+        clientSecret: null,
+        redirectUri: s.redirectUri,
+      });
       const app = createTestApp({ oidc: wrong, logError: (e) => logged.push(e) });
       try {
         const res = await request(app.app).get('/api/auth/sign-in').expect(503);
@@ -183,13 +189,12 @@ describe('no open redirect', () => {
     '/a/..//evil.example/x?y=1',
     '/%2e%2e//evil.example',
     '/./%2e//evil.example',
-  ])(
-    'refuses returnTo=%s',
-    async (returnTo) => {
-      const res = await request(t.app).get(`/api/auth/sign-in?returnTo=${encodeURIComponent(returnTo)}`).expect(400);
-      expect(res.body.error.code).toBe('invalid_request');
-    },
-  );
+  ])('refuses returnTo=%s', async (returnTo) => {
+    const res = await request(t.app)
+      .get(`/api/auth/sign-in?returnTo=${encodeURIComponent(returnTo)}`)
+      .expect(400);
+    expect(res.body.error.code).toBe('invalid_request');
+  });
 
   it('returns to a path with its query after sign-in', async () => {
     const a = agent();
@@ -349,13 +354,22 @@ describe('the fake provider', () => {
   });
 
   it('refuses an authorize request for an unregistered return address', async () => {
-    const res = await fetch(`${t.provider.issuer}/authorize?response_type=code&client_id=tramontane-test&redirect_uri=${encodeURIComponent('https://evil.example/cb')}&state=s&code_challenge=${'a'.repeat(43)}&code_challenge_method=S256`);
+    const res = await fetch(
+      `${t.provider.issuer}/authorize?response_type=code&client_id=tramontane-test&redirect_uri=${encodeURIComponent('https://evil.example/cb')}&state=s&code_challenge=${'a'.repeat(43)}&code_challenge_method=S256`,
+    );
     expect(res.status).toBe(400);
     expect(await res.text()).toContain('is not registered');
   });
 
   it('does not mint a code for a request that skipped the picker', async () => {
-    const params = new URLSearchParams({ response_type: 'code', client_id: 'tramontane-test', redirect_uri: t.redirectUri, state: 's', code_challenge: 'a'.repeat(43), code_challenge_method: 'S256' });
+    const params = new URLSearchParams({
+      response_type: 'code',
+      client_id: 'tramontane-test',
+      redirect_uri: t.redirectUri,
+      state: 's',
+      code_challenge: 'a'.repeat(43),
+      code_challenge_method: 'S256',
+    });
     const res = await fetch(`${t.provider.issuer}/_provider/authorize?${params}`, { redirect: 'manual' });
     const back = new URL(res.headers.get('location')!);
     expect(back.searchParams.get('code')).toBeNull();

@@ -55,54 +55,62 @@ afterAll(() => t.close());
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 describe("a long climate file's hours and hourly CSV are built off the main thread", () => {
-  it.each(['hourly.csv', 'hours'] as const)('answers /api/health while %s of a 99-year file is being built, then sends the same bytes as before', async (path) => {
-    watched.hold('formatClimateSeries');
-    let settled = false;
-    const download = request(app)
-      .get(`${base}/${path}`)
-      .set(asPerson(viewer))
-      .buffer(true)
-      .parse(rawBody)
-      .then((res) => {
-        settled = true;
-        return res;
-      });
-    // Wait until the work is on the pool (or, in the main-thread code, until the download has already finished).
-    const call = await Promise.race([watched.started('formatClimateSeries'), download]);
-    expect(settled).toBe(false);
-    await request(app).get('/api/health').expect(200);
-    expect(settled).toBe(false);
-    expect((call as { options: { lane?: string } }).options.lane).toBe('interactive');
-    watched.release('formatClimateSeries');
+  it.each(['hourly.csv', 'hours'] as const)(
+    'answers /api/health while %s of a 99-year file is being built, then sends the same bytes as before',
+    async (path) => {
+      watched.hold('formatClimateSeries');
+      let settled = false;
+      const download = request(app)
+        .get(`${base}/${path}`)
+        .set(asPerson(viewer))
+        .buffer(true)
+        .parse(rawBody)
+        .then((res) => {
+          settled = true;
+          return res;
+        });
+      // Wait until the work is on the pool (or, in the main-thread code, until the download has already finished).
+      const call = await Promise.race([watched.started('formatClimateSeries'), download]);
+      expect(settled).toBe(false);
+      await request(app).get('/api/health').expect(200);
+      expect(settled).toBe(false);
+      expect((call as { options: { lane?: string } }).options.lane).toBe('interactive');
+      watched.release('formatClimateSeries');
 
-    const res = await download;
-    expect(res.status).toBe(200);
-    expect(sha256(res.body)).toBe(before[path]);
-    if (path === 'hourly.csv') {
-      expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
-      expect(res.headers['content-disposition']).toBe('attachment; filename="Synthetic long record-hourly.csv"');
-      // Hour 1 by hand from the generator: 11 + 13·sin(2π/8760) + 4.5·sin(2π/24) + 919/1234 = 12.919 °C;
-      // 65 − 20·sin(2π/24) + 29/7 = 63.966 %; 101,300 + 800·sin(2π/131) + 1 = 101,339.35 Pa = 101.339 kPa.
-      expect(res.body.toString('utf8', 0, 160).split('\n').slice(0, 3)).toEqual([
-        'timestamp,dry_bulb_c,relative_humidity_pct,pressure_kpa,flag',
-        '1926-01-01T00:00:00Z,11,65,101.3,measured',
-        '1926-01-01T01:00:00Z,12.919,63.966,101.339,measured',
-      ]);
-      expect(res.body.toString().trimEnd().split('\n')).toHaveLength(HOURS + 1);
-    } else {
-      expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
-    }
-  }, 180_000);
+      const res = await download;
+      expect(res.status).toBe(200);
+      expect(sha256(res.body)).toBe(before[path]);
+      if (path === 'hourly.csv') {
+        expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
+        expect(res.headers['content-disposition']).toBe('attachment; filename="Synthetic long record-hourly.csv"');
+        // Hour 1 by hand from the generator: 11 + 13·sin(2π/8760) + 4.5·sin(2π/24) + 919/1234 = 12.919 °C;
+        // 65 − 20·sin(2π/24) + 29/7 = 63.966 %; 101,300 + 800·sin(2π/131) + 1 = 101,339.35 Pa = 101.339 kPa.
+        expect(res.body.toString('utf8', 0, 160).split('\n').slice(0, 3)).toEqual([
+          'timestamp,dry_bulb_c,relative_humidity_pct,pressure_kpa,flag',
+          '1926-01-01T00:00:00Z,11,65,101.3,measured',
+          '1926-01-01T01:00:00Z,12.919,63.966,101.339,measured',
+        ]);
+        expect(res.body.toString().trimEnd().split('\n')).toHaveLength(HOURS + 1);
+      } else {
+        expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
+      }
+    },
+    180_000,
+  );
 
-  it.each(['hours?year=1950', 'hours?year=2024'] as const)('sends %s (a year on the site’s standard time) byte for byte as before', async (path) => {
-    const res = await request(app).get(`${base}/${path}`).set(asPerson(viewer)).buffer(true).parse(rawBody).expect(200);
-    expect(sha256(res.body)).toBe(before[path]);
-    const hours = JSON.parse(res.body.toString()) as { timestampsMs: number[] };
-    // Denver's standard time is UTC−07:00, so the year starts at 07:00Z on 1 January.
-    const year = Number(path.slice(-4));
-    expect(hours.timestampsMs[0]).toBe(Date.UTC(year, 0, 1, 7));
-    expect(hours.timestampsMs).toHaveLength(year % 4 === 0 ? 8784 : 8760);
-  }, 60_000);
+  it.each(['hours?year=1950', 'hours?year=2024'] as const)(
+    'sends %s (a year on the site’s standard time) byte for byte as before',
+    async (path) => {
+      const res = await request(app).get(`${base}/${path}`).set(asPerson(viewer)).buffer(true).parse(rawBody).expect(200);
+      expect(sha256(res.body)).toBe(before[path]);
+      const hours = JSON.parse(res.body.toString()) as { timestampsMs: number[] };
+      // Denver's standard time is UTC−07:00, so the year starts at 07:00Z on 1 January.
+      const year = Number(path.slice(-4));
+      expect(hours.timestampsMs[0]).toBe(Date.UTC(year, 0, 1, 7));
+      expect(hours.timestampsMs).toHaveLength(year % 4 === 0 ? 8784 : 8760);
+    },
+    60_000,
+  );
 
   it('stops building when the client goes away', async () => {
     const server = app.listen(0, '127.0.0.1');

@@ -34,11 +34,7 @@ afterAll(() => t.close());
 const storedCounts = () => storedClimateRows(t.db);
 
 const upload = (body: Buffer | string, query = '') =>
-  request(t.app)
-    .post(`/api/projects/${projectId}/sites/${siteId}/climate-files${query}`)
-    .set(asPerson(engineer))
-    .set('content-type', 'text/csv')
-    .send(body);
+  request(t.app).post(`/api/projects/${projectId}/sites/${siteId}/climate-files${query}`).set(asPerson(engineer)).set('content-type', 'text/csv').send(body);
 
 describe('an engineer uploading hourly weather', () => {
   it('previews the detected mapping and the first hours without storing anything', async () => {
@@ -59,16 +55,24 @@ describe('an engineer uploading hourly weather', () => {
     const res = await upload(threeDays, '?fileName=three-days.csv&name=July%20check').expect(201);
     expect(res.body.climateFile).toMatchObject({ name: 'July check', hours: 72, measuredHours: 72, missingHours: 0, siteName: 'Quarry Hill' });
     expect(storedCounts()).toEqual({ files: 1, originals: 1, series: 1 });
-    const imported = t.db.select().from(auditEvents).all().filter((e) => e.action === 'climate.import');
+    const imported = t.db
+      .select()
+      .from(auditEvents)
+      .all()
+      .filter((e) => e.action === 'climate.import');
     expect(imported).toHaveLength(1);
     expect(imported[0]).toMatchObject({ actorId: engineer.id, projectId, target: 'July check' });
 
     const id = res.body.climateFile.id;
-    const original = await request(t.app).get(`/api/projects/${projectId}/climate-files/${id}/original`).set(asPerson(viewer)).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const original = await request(t.app)
+      .get(`/api/projects/${projectId}/climate-files/${id}/original`)
+      .set(asPerson(viewer))
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(Buffer.compare(original.body, threeDays)).toBe(0);
 
     const csv = await request(t.app).get(`/api/projects/${projectId}/climate-files/${id}/hourly.csv`).set(asPerson(viewer)).expect(200);
@@ -164,10 +168,6 @@ describe('an engineer uploading hourly weather', () => {
   });
 
   it('lets a viewer read but not upload', async () => {
-    await request(t.app)
-      .post(`/api/projects/${projectId}/sites/${siteId}/climate-files`)
-      .set(asPerson(viewer))
-      .send(threeDays)
-      .expect(403);
+    await request(t.app).post(`/api/projects/${projectId}/sites/${siteId}/climate-files`).set(asPerson(viewer)).send(threeDays).expect(403);
   });
 });

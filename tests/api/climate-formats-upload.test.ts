@@ -61,7 +61,13 @@ describe('published formats through the API, without flags', () => {
 
   it('returns the EPW header and typical year with the result, and no mismatch for a site that agrees', async () => {
     const res = await post(siteId, 'typical.epw', fixture('synthetic-typical-year.epw'), true).expect(200);
-    expect(res.body.report.fileHeader).toMatchObject({ name: 'Quellmoor Synthetic Station', latitude: 51.25, longitude: 7.125, elevationM: 250, utcOffsetHours: 1 });
+    expect(res.body.report.fileHeader).toMatchObject({
+      name: 'Quellmoor Synthetic Station',
+      latitude: 51.25,
+      longitude: 7.125,
+      elevationM: 250,
+      utcOffsetHours: 1,
+    });
     expect(res.body.report.typicalYear).toEqual({ year: 2001, sourceYearByMonth: [2004, 1999, null, null, null, null, null, null, null, null, null, null] });
     expect(res.body.report.issues.filter((i: { kind: string }) => i.kind === 'header-site-mismatch')).toEqual([]);
   });

@@ -77,15 +77,19 @@ const damagedHourly = fc
   )
   .map((rows) => {
     const start = Date.UTC(2022, 5, 1);
-    const lines = rows.map(
-      (r, i) => `${new Date(start + i * 3_600_000).toISOString()},${r.junk ?? r.dryBulbC.toFixed(1)},${r.rhPct.toFixed(0)}`,
-    );
+    const lines = rows.map((r, i) => `${new Date(start + i * 3_600_000).toISOString()},${r.junk ?? r.dryBulbC.toFixed(1)},${r.rhPct.toFixed(0)}`);
     return Buffer.from(['timestamp,dry_bulb_c,relative_humidity_pct', ...lines].join('\n'));
   });
 
 describe('the upload API under arbitrary input', () => {
   it('answers random bytes with a stored file or a 4xx that says why, never a 500', async () => {
-    await fc.assert(fc.asyncProperty(fc.uint8Array({ maxLength: 4096 }).map((b) => Buffer.from(b)), uploadAnswersSensibly), { numRuns: 60 });
+    await fc.assert(
+      fc.asyncProperty(
+        fc.uint8Array({ maxLength: 4096 }).map((b) => Buffer.from(b)),
+        uploadAnswersSensibly,
+      ),
+      { numRuns: 60 },
+    );
   });
 
   it('answers random CSV-like text the same way, storing nothing on refusal', async () => {

@@ -99,7 +99,12 @@ describe('compressed answers', () => {
     for (let i = 0; i < 6; i++) {
       t.db
         .insert(runs)
-        .values({ projectId, scenarioJson: JSON.stringify({ name: `Stand-in scenario ${i}`, note: 'x'.repeat(200) }), climateJson: '{"name":"stand-in"}', engineVersion: 'scenario-engine 2.0.0' })
+        .values({
+          projectId,
+          scenarioJson: JSON.stringify({ name: `Stand-in scenario ${i}`, note: 'x'.repeat(200) }),
+          climateJson: '{"name":"stand-in"}',
+          engineVersion: 'scenario-engine 2.0.0',
+        })
         .run();
     }
     const plain = await request(t.app).get(listPath).set(asPerson(viewer)).set('accept-encoding', 'identity').expect(200);

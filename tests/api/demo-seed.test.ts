@@ -10,7 +10,8 @@ beforeAll(() => {
 });
 afterAll(() => t.close());
 
-const n = (table: typeof projects | typeof sites | typeof climateFiles | typeof scenarios | typeof runs | typeof sweeps) => t.db.select({ n: count() }).from(table).get()!.n;
+const n = (table: typeof projects | typeof sites | typeof climateFiles | typeof scenarios | typeof runs | typeof sweeps) =>
+  t.db.select({ n: count() }).from(table).get()!.n;
 
 // Runs every demo run (34 runs over three-year files) on the pool: a busy machine needs the time.
 describe('the demo workspace on a fresh installation', { timeout: 240_000 }, () => {

@@ -22,7 +22,10 @@ describe('a full disk', () => {
     let stored = 0;
     let refused: request.Response | undefined;
     for (let i = 0; i < 40 && !refused; i++) {
-      const res = await request(t.app).post('/api/projects').set(asPerson(engineer)).send({ name: `Overflow ${i}`, description: 'x'.repeat(2000) });
+      const res = await request(t.app)
+        .post('/api/projects')
+        .set(asPerson(engineer))
+        .send({ name: `Overflow ${i}`, description: 'x'.repeat(2000) });
       if (res.status === 201) stored++;
       else refused = res;
     }

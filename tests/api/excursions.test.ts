@@ -4,7 +4,6 @@ import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 import { directAirSample, siteFileAndScenario } from '../support/study-setup';
 
-
 let t: TestApp;
 let engineer: TestPerson;
 let viewer: TestPerson;
@@ -35,7 +34,7 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 describe('an operator checking a proposal against a run', () => {
-  it('a viewer gets the run\'s own setpoint by default, with the run\'s hours per mode', async () => {
+  it("a viewer gets the run's own setpoint by default, with the run's hours per mode", async () => {
     const res = await request(t.app).get(url()).set(asPerson(viewer)).expect(200);
     const { run, proposal, analysis, reference } = res.body;
     expect(proposal.supplyAirC).toBe(directAirSample.system.supplyAirC);

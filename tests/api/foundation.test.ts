@@ -47,7 +47,10 @@ describe('a visitor checking the server', () => {
 
 describe('routes that are not there', () => {
   it('has no public column summary: nothing in the client used it, and anyone signed out could stall the server with it', async () => {
-    await request(t.app).post('/api/series/summary').send({ values: [1, 2, 3] }).expect(404);
+    await request(t.app)
+      .post('/api/series/summary')
+      .send({ values: [1, 2, 3] })
+      .expect(404);
   });
 });
 

@@ -18,7 +18,11 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Fen', elevationM: 5, timeZone: 'UTC' }).expect(201);
+  const site = await request(t.app)
+    .post(`/api/projects/${projectId}/sites`)
+    .set(asPerson(engineer))
+    .send({ name: 'Fen', elevationM: 5, timeZone: 'UTC' })
+    .expect(201);
   siteId = site.body.site.id;
 });
 afterAll(() => t.close());
@@ -82,6 +86,8 @@ describe('what the server echoes of a hostile upload is bounded', () => {
     const unreadable = lines.filter((l: string) => l.startsWith('warning,unparsable-value,'));
     expect(unreadable).toHaveLength(334);
     // row 999 is on line 1,001 (the header is line 1)
-    expect(unreadable[333]).toBe('warning,unparsable-value,1001,dry_bulb_c,warm999,"""warm999"" in column ""dry_bulb_c"" is not a number; the value is treated as missing."');
+    expect(unreadable[333]).toBe(
+      'warning,unparsable-value,1001,dry_bulb_c,warm999,"""warm999"" in column ""dry_bulb_c"" is not a number; the value is treated as missing."',
+    );
   });
 });

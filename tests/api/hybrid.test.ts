@@ -55,7 +55,11 @@ describe('a hybrid hall through the API', () => {
   });
 
   it('runs, keeps the loops and heat reuse in the results, and writes the loop columns hour by hour', async () => {
-    const created = await request(t.app).post(`/api/projects/${projectId}/runs`).set(asPerson(engineer)).send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }).expect(202);
+    const created = await request(t.app)
+      .post(`/api/projects/${projectId}/runs`)
+      .set(asPerson(engineer))
+      .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+      .expect(202);
     const runId = created.body.runs[0].id;
     await t.runQueue.idle();
     const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}`).set(asPerson(viewer)).expect(200);

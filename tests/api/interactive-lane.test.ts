@@ -30,7 +30,11 @@ beforeAll(async () => {
   app = createApp({ db: t.db, pool: watched.pool, runQueue: t.runQueue, uploadLimits: { bytes: 16 * 1024 * 1024, rows: 200_000 } });
   engineer = personWithSession(t.db, 'lane.engineer@example.test');
   projectId = projectWithMembers(t.db, 'Busy pool', [[engineer, 'engineer']]);
-  const site = await request(app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: 'Ridge', elevationM: 300, timeZone: 'UTC' }).expect(201);
+  const site = await request(app)
+    .post(`/api/projects/${projectId}/sites`)
+    .set(asPerson(engineer))
+    .send({ name: 'Ridge', elevationM: 300, timeZone: 'UTC' })
+    .expect(201);
   siteId = site.body.site.id;
 });
 afterAll(() => t.close());

@@ -117,7 +117,9 @@ describe('an owner invites a colleague by e-mail', () => {
   });
 
   it('answers 502 and keeps nothing when the mail server cannot be reached', async () => {
-    const s = await startSignInStack({ overrides: { mailer: createSmtpMailer({ host: '127.0.0.1', port: 9, secure: false, from: 'x@test.invalid' }), logError: () => {} } });
+    const s = await startSignInStack({
+      overrides: { mailer: createSmtpMailer({ host: '127.0.0.1', port: 9, secure: false, from: 'x@test.invalid' }), logError: () => {} },
+    });
     try {
       const o = personWithSession(s.db, 'o@example.test');
       const p = projectWithMembers(s.db, 'P', [[o, 'owner']]);

@@ -27,13 +27,21 @@ describe('a PATCH changes only what it carries', () => {
       .set(asPerson(owner))
       .send({ name: 'Col de Vasse', latitude: 46.5, longitude: 9.8, elevationM: 1800, timeZone: 'Europe/Zurich' })
       .expect(201);
-    const res = await request(t.app).patch(`/api/projects/${projectId}/sites/${created.body.site.id}`).set(asPerson(owner)).send({ name: 'Col de Vasse north' }).expect(200);
+    const res = await request(t.app)
+      .patch(`/api/projects/${projectId}/sites/${created.body.site.id}`)
+      .set(asPerson(owner))
+      .send({ name: 'Col de Vasse north' })
+      .expect(200);
     expect(res.body.site).toMatchObject({ name: 'Col de Vasse north', latitude: 46.5, longitude: 9.8, elevationM: 1800, timeZone: 'Europe/Zurich' });
   });
 
   it('a site field sent as null is cleared, since null was sent', async () => {
     const created = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(owner)).send({ name: 'Plaine', latitude: 45 }).expect(201);
-    const res = await request(t.app).patch(`/api/projects/${projectId}/sites/${created.body.site.id}`).set(asPerson(owner)).send({ latitude: null }).expect(200);
+    const res = await request(t.app)
+      .patch(`/api/projects/${projectId}/sites/${created.body.site.id}`)
+      .set(asPerson(owner))
+      .send({ latitude: null })
+      .expect(200);
     expect(res.body.site.latitude).toBeNull();
   });
 

@@ -27,7 +27,12 @@ function julyWarmer(): ChangeFactors {
 }
 
 const fileCount = () => t.db.select().from(climateFiles).all().length;
-const projectionAudits = () => t.db.select().from(auditEvents).all().filter((e) => e.action === 'climate.project');
+const projectionAudits = () =>
+  t.db
+    .select()
+    .from(auditEvents)
+    .all()
+    .filter((e) => e.action === 'climate.project');
 
 beforeAll(async () => {
   t = createTestApp();
@@ -94,12 +99,20 @@ describe('making a future-climate projection', () => {
       .expect(400);
     expect(res.body.error.message).toContain('March, ΔTmax (deltaMaxK): ΔTmax must be at most 15 K');
     const short = { ...julyWarmer(), months: julyWarmer().months.slice(0, 11) };
-    const res2 = await request(t.app).post(`/api/projects/${projectId}/climate-files/${parentId}/projections`).set(asPerson(engineer)).send({ factors: short }).expect(400);
+    const res2 = await request(t.app)
+      .post(`/api/projects/${projectId}/climate-files/${parentId}/projections`)
+      .set(asPerson(engineer))
+      .send({ factors: short })
+      .expect(400);
     expect(res2.body.error.message).toContain('all 12 months');
     // July's parent mean daily range is 22 − 6 = 16 K on the site's days; ΔTmax − ΔTmin = −16 K would flatten it (1 + α = 0).
     const inverted = julyWarmer();
     inverted.months[6] = { ...inverted.months[6], deltaMaxK: -8, deltaMinK: 8 };
-    const res3 = await request(t.app).post(`/api/projects/${projectId}/climate-files/${parentId}/projections`).set(asPerson(engineer)).send({ factors: inverted }).expect(422);
+    const res3 = await request(t.app)
+      .post(`/api/projects/${projectId}/climate-files/${parentId}/projections`)
+      .set(asPerson(engineer))
+      .send({ factors: inverted })
+      .expect(422);
     expect(res3.body.error.message).toMatch(/July: ΔTmax − ΔTmin = -16\.00 K/);
     expect(fileCount()).toBe(before);
     expect(projectionAudits()).toHaveLength(0);
@@ -122,7 +135,12 @@ describe('a stored projection', () => {
     const list = await request(t.app).get(`/api/projects/${projectId}/climate-files`).set(asPerson(viewer)).expect(200);
     const file = list.body.climateFiles.find((f: { id: number }) => f.id === projectionId);
     // The name is made to say it is a projection, so pickers that show only names say so too.
-    expect(file).toMatchObject({ parentId, hours: 72, name: 'Veldhaven warmer July (projection)', projection: { parentName: 'three-days', method: 'Belcher, Hacker and Powell (2005) morphing' } });
+    expect(file).toMatchObject({
+      parentId,
+      hours: 72,
+      name: 'Veldhaven warmer July (projection)',
+      projection: { parentName: 'three-days', method: 'Belcher, Hacker and Powell (2005) morphing' },
+    });
     expect(list.body.climateFiles.find((f: { id: number }) => f.id === parentId).projection).toBeNull();
     const res = await request(t.app).get(`/api/projects/${projectId}/projections/${projectionId}`).set(asPerson(viewer)).expect(200);
     const d = res.body.derivation;
@@ -147,7 +165,7 @@ describe('a stored projection', () => {
     const text = Buffer.from(res.body).toString('utf8');
     expect(text.split('\n')[0]).toContain('future-climate projection, not measured weather');
     const again = await request(t.app)
-      .post(`/api/projects/${projectId}/sites/${(await siteIdOf(projectionId))}/climate-files/preview?fileName=again.csv`)
+      .post(`/api/projects/${projectId}/sites/${await siteIdOf(projectionId)}/climate-files/preview?fileName=again.csv`)
       .set(asPerson(engineer))
       .set('content-type', 'text/csv')
       .send(text)
@@ -211,5 +229,9 @@ describe('the demo projection', () => {
 });
 
 async function siteIdOf(fileId: number): Promise<number> {
-  return t.db.select().from(climateFiles).all().find((f) => f.id === fileId)!.siteId;
+  return t.db
+    .select()
+    .from(climateFiles)
+    .all()
+    .find((f) => f.id === fileId)!.siteId;
 }

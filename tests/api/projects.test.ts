@@ -24,7 +24,11 @@ describe('projects', () => {
     expect(res.body.project).toMatchObject({ name: 'Harbourside retrofit', description: '', role: 'owner' });
     const list = await request(t.app).get('/api/projects').set(asPerson(engineer)).expect(200);
     expect(list.body.projects.map((p: { name: string }) => p.name)).toEqual(['Harbourside retrofit']);
-    const events = t.db.select().from(auditEvents).all().filter((e) => e.action === 'project.create');
+    const events = t.db
+      .select()
+      .from(auditEvents)
+      .all()
+      .filter((e) => e.action === 'project.create');
     expect(events).toHaveLength(1);
     expect(events[0].target).toBe('Harbourside retrofit');
   });
@@ -47,6 +51,12 @@ describe('projects', () => {
     await request(t.app).delete(`/api/projects/${id}`).set(asPerson(engineer)).expect(204);
     const list = await request(t.app).get('/api/projects').set(asPerson(engineer)).expect(200);
     expect(list.body.projects.map((p: { name: string }) => p.name)).not.toContain('Renamed');
-    expect(t.db.select().from(auditEvents).all().some((e) => e.action === 'project.delete' && e.target === 'Renamed')).toBe(true);
+    expect(
+      t.db
+        .select()
+        .from(auditEvents)
+        .all()
+        .some((e) => e.action === 'project.delete' && e.target === 'Renamed'),
+    ).toBe(true);
   });
 });

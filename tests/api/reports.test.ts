@@ -26,7 +26,10 @@ let secondRunId: number;
 
 /** Text cells as a spreadsheet would get them, split on commas outside quotes. */
 function cells(line: string): string[] {
-  return line.match(/("([^"]|"")*"|[^,]*)(,|$)/g)!.slice(0, -1).map((cell) => cell.replace(/,$/, ''));
+  return line
+    .match(/("([^"]|"")*"|[^,]*)(,|$)/g)!
+    .slice(0, -1)
+    .map((cell) => cell.replace(/,$/, ''));
 }
 
 beforeAll(async () => {
@@ -43,7 +46,11 @@ beforeAll(async () => {
   ]);
   projectWithMembers(t.db, 'Unrelated study', [[outsider, 'owner']]);
   // Names typed by people may look like spreadsheet formulas; every download must defuse them.
-  const site = await request(t.app).post(`/api/projects/${projectId}/sites`).set(asPerson(engineer)).send({ name: '+Harbour wall', elevationM: 120 }).expect(201);
+  const site = await request(t.app)
+    .post(`/api/projects/${projectId}/sites`)
+    .set(asPerson(engineer))
+    .send({ name: '+Harbour wall', elevationM: 120 })
+    .expect(201);
   const file = await request(t.app)
     .post(`/api/projects/${projectId}/sites/${site.body.site.id}/climate-files?fileName=${encodeURIComponent('@SUM(A1).csv')}`)
     .set(asPerson(engineer))
@@ -89,7 +96,8 @@ describe('downloads of a run', () => {
     expect(Number(first.humidity_ratio_gkg)).toBeCloseTo(w * 1000, 3);
     expect(Number(first.enthalpy_kjkg)).toBeCloseTo(tightPsychrolib.GetMoistAirEnthalpy(8.3, w) / 1000, 2);
     // Nothing a spreadsheet could run: every cell is a number, a fixed mode word or a timestamp.
-    for (const line of lines.slice(1)) expect(line).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\dZ,(free|adiabatic|mechanical|no_data)(,-?\d+(\.\d+)?|,)+,\d{4}-\d\d-\d\dT\d\d:\d\d$/);
+    for (const line of lines.slice(1))
+      expect(line).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\dZ,(free|adiabatic|mechanical|no_data)(,-?\d+(\.\d+)?|,)+,\d{4}-\d\d-\d\dT\d\d:\d\d$/);
     // the site's standard time beside the UTC stamp (this site keeps UTC)
     expect(first.local_standard_time).toBe('2023-07-01T00:00');
   });
@@ -165,7 +173,10 @@ describe('downloads of a run', () => {
   it('refuses a comparison of one run, or with a baseline outside it', async () => {
     const same = await request(t.app).get(`/api/projects/${projectId}/compare/report?runs=${runId},${runId}`).set(asPerson(viewer)).expect(400);
     expect(same.body.error.message).toContain('at least two different runs');
-    const outside = await request(t.app).get(`/api/projects/${projectId}/compare/report?runs=${runId},${secondRunId}&baseline=999`).set(asPerson(viewer)).expect(400);
+    const outside = await request(t.app)
+      .get(`/api/projects/${projectId}/compare/report?runs=${runId},${secondRunId}&baseline=999`)
+      .set(asPerson(viewer))
+      .expect(400);
     expect(outside.body.error.message).toContain('baseline must be one of the compared runs');
   });
 
@@ -222,7 +233,11 @@ describe('share links', () => {
       .send({ ...base, publicUntil: new Date(nowMs + 91 * day).toISOString() })
       .expect(400);
     expect(far.body.error.message).toContain('at most 90 days');
-    const oneRun = await request(t.app).post(`/api/projects/${projectId}/share-links`).set(asPerson(owner)).send({ ...base, runIds: [runId] }).expect(400);
+    const oneRun = await request(t.app)
+      .post(`/api/projects/${projectId}/share-links`)
+      .set(asPerson(owner))
+      .send({ ...base, runIds: [runId] })
+      .expect(400);
     expect(oneRun.body.error.message).toContain('a comparison two or more');
   });
 

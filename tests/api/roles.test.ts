@@ -158,17 +158,30 @@ describe('members and roles inside a project', () => {
       { from: 'engineer', to: 'viewer' },
       { from: 'viewer', to: 'engineer' },
     ]);
-    expect(trail.body.events[0]).toMatchObject({ action: 'member.role-changed', actorName: 'owner', target: 'viewer@example.test', projectName: 'Matrix study' });
+    expect(trail.body.events[0]).toMatchObject({
+      action: 'member.role-changed',
+      actorName: 'owner',
+      target: 'viewer@example.test',
+      projectName: 'Matrix study',
+    });
   });
 
   it('a project keeps its last owner', async () => {
-    const res = await request(t.app).patch(`/api/projects/${projectId}/members/${people.owner.id}`).set(asPerson(people.owner)).send({ role: 'viewer' }).expect(409);
+    const res = await request(t.app)
+      .patch(`/api/projects/${projectId}/members/${people.owner.id}`)
+      .set(asPerson(people.owner))
+      .send({ role: 'viewer' })
+      .expect(409);
     expect(res.body.error.code).toBe('last_owner');
     await request(t.app).delete(`/api/projects/${projectId}/members/${people.owner.id}`).set(asPerson(people.owner)).expect(409);
   });
 
   it('an engineer cannot change roles, and is told which role it takes', async () => {
-    const res = await request(t.app).patch(`/api/projects/${projectId}/members/${people.viewer.id}`).set(asPerson(people.engineer)).send({ role: 'owner' }).expect(403);
+    const res = await request(t.app)
+      .patch(`/api/projects/${projectId}/members/${people.viewer.id}`)
+      .set(asPerson(people.engineer))
+      .send({ role: 'owner' })
+      .expect(403);
     expect(res.body.error.message).toBe('This needs the owner role or higher in this project; you are engineer.');
   });
 });

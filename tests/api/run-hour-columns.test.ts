@@ -20,7 +20,11 @@ beforeAll(async () => {
     [viewer, 'viewer'],
   ]);
   const { climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer);
-  const created = await request(t.app).post(`/api/projects/${projectId}/runs`).set(asPerson(engineer)).send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }).expect(202);
+  const created = await request(t.app)
+    .post(`/api/projects/${projectId}/runs`)
+    .set(asPerson(engineer))
+    .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+    .expect(202);
   runId = created.body.runs[0].id;
   await t.runQueue.idle();
 });
@@ -37,7 +41,9 @@ const arrayBufferOf = (body: Buffer) => body.buffer.slice(body.byteOffset, body.
 
 describe("a run's hour columns", () => {
   it('carry the outdoor states the run computed, checked against psychrolib, beside the stored modes', async () => {
-    const res = await binary(request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hour-columns`).set(asPerson(viewer)).set('accept-encoding', 'identity')).expect(200);
+    const res = await binary(
+      request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hour-columns`).set(asPerson(viewer)).set('accept-encoding', 'identity'),
+    ).expect(200);
     expect(res.headers['content-type']).toBe('application/octet-stream');
     expect(res.headers['content-encoding']).toBeUndefined();
     const message = decodeHourColumns(arrayBufferOf(res.body));

@@ -24,7 +24,11 @@ beforeAll(async () => {
     [viewer, 'viewer'],
   ]);
   const { climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer, { siteName: 'Cressing Moor', elevationM: 60 });
-  const plain = await request(t.app).post(`/api/projects/${projectId}/runs`).set(asPerson(engineer)).send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }).expect(202);
+  const plain = await request(t.app)
+    .post(`/api/projects/${projectId}/runs`)
+    .set(asPerson(engineer))
+    .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+    .expect(202);
   plainRunId = plain.body.runs[0].id;
   const sweep = await request(t.app)
     .post(`/api/projects/${projectId}/sweeps`)
@@ -49,13 +53,27 @@ function parsedRun(row: typeof runs.$inferSelect, sweepName: string | null) {
   };
 }
 function parsedListing() {
-  const names = new Map(t.db.select().from(sweeps).all().map((s) => [s.id, s.name]));
-  const rows = t.db.select().from(runs).where(eq(runs.projectId, projectId)).all().sort((a, b) => b.id - a.id);
+  const names = new Map(
+    t.db
+      .select()
+      .from(sweeps)
+      .all()
+      .map((s) => [s.id, s.name]),
+  );
+  const rows = t.db
+    .select()
+    .from(runs)
+    .where(eq(runs.projectId, projectId))
+    .all()
+    .sort((a, b) => b.id - a.id);
   return {
     runs: rows.map((row) => {
       const run = parsedRun(row, row.sweepId === null ? null : (names.get(row.sweepId) ?? null));
       const r = run.results;
-      return { ...run, results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw, excursions: r.excursions } : null };
+      return {
+        ...run,
+        results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw, excursions: r.excursions } : null,
+      };
     }),
   };
 }
@@ -90,7 +108,11 @@ describe('the run list and a run, read from the stored JSON text', () => {
       .run();
     t.db.update(runs).set({ resultsJson: null, status: 'failed', error: 'stopped by a test' }).where(eq(runs.sweepId, sweepId)).run();
     // A run's results never change once written; remembering them is keyed by finish time, so the edit above is read as new.
-    t.db.update(runs).set({ finishedAt: new Date(Date.UTC(2026, 0, 2)) }).where(eq(runs.id, plainRunId)).run();
+    t.db
+      .update(runs)
+      .set({ finishedAt: new Date(Date.UTC(2026, 0, 2)) })
+      .where(eq(runs.id, plainRunId))
+      .run();
     const list = await listing();
     expect(list.text).toBe(JSON.stringify(parsedListing()));
     const plain = list.body.runs.find((r: { id: number }) => r.id === plainRunId);
@@ -122,7 +144,10 @@ describe('remembered answers', () => {
     const { id: _id, ...copy } = runRow(plainRunId);
     const unusedId = 900_000;
     await oneRun(unusedId).expect(404);
-    t.db.insert(runs).values({ ...copy, id: unusedId }).run();
+    t.db
+      .insert(runs)
+      .values({ ...copy, id: unusedId })
+      .run();
     expect((await oneRun(unusedId).expect(200)).body.run.id).toBe(unusedId);
   });
 

@@ -4,7 +4,6 @@ import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 import { siteFileAndScenario } from '../support/study-setup';
 
-
 let t: TestApp;
 let engineer: TestPerson;
 let viewer: TestPerson;
@@ -22,7 +21,11 @@ beforeAll(async () => {
     [viewer, 'viewer'],
   ]);
   const { climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer, { siteName: 'Harrowgate Fen', elevationM: 40 });
-  const plain = await request(t.app).post(`/api/projects/${projectId}/runs`).set(asPerson(engineer)).send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }).expect(202);
+  const plain = await request(t.app)
+    .post(`/api/projects/${projectId}/runs`)
+    .set(asPerson(engineer))
+    .send({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] })
+    .expect(202);
   plainRunId = plain.body.runs[0].id;
   // A 2 × 2 grid: supply air outer, IT load inner, so each point names two inputs in that order.
   const sweep = await request(t.app)

@@ -117,7 +117,11 @@ describe('an engineer running a scenario', () => {
     const releaseAll = setInterval(() => held.splice(0).forEach((go) => go()), 5);
     await queue.idle();
     clearInterval(releaseAll);
-    const statuses = t.db.select({ id: runs.id, status: runs.status }).from(runs).all().filter((r) => ids.includes(r.id));
+    const statuses = t.db
+      .select({ id: runs.id, status: runs.status })
+      .from(runs)
+      .all()
+      .filter((r) => ids.includes(r.id));
     expect(statuses.find((r) => r.id === last)!.status).toBe('cancelled');
     expect(statuses.filter((r) => r.id !== last).map((r) => r.status)).toEqual(['done', 'done', 'done']);
   });
@@ -143,15 +147,14 @@ describe('an engineer running a scenario', () => {
     const queued = () =>
       t.db
         .insert(runs)
-        .values({ ...(t.db.select().from(runs).get()!), id: undefined, status: 'queued', resultsJson: null, error: null, startedAt: null, finishedAt: null })
+        .values({ ...t.db.select().from(runs).get()!, id: undefined, status: 'queued', resultsJson: null, error: null, startedAt: null, finishedAt: null })
         .returning()
         .get();
     const slow = queued();
     // A task that never answers, as a stuck worker would: only the queue's timeout can end it.
     const stuckPool: WorkerPool = {
       ...t.pool,
-      run: (_task, _input, options) =>
-        new Promise((_resolve, reject) => options?.signal?.addEventListener('abort', () => reject(options.signal!.reason))),
+      run: (_task, _input, options) => new Promise((_resolve, reject) => options?.signal?.addEventListener('abort', () => reject(options.signal!.reason))),
     };
     const impatient = createRunQueue({ db: t.db, pool: stuckPool, timeoutMs: 50 });
     impatient.enqueue(slow.id);
@@ -167,7 +170,13 @@ describe('an engineer running a scenario', () => {
     const failed = t.db.select().from(runs).where(eq(runs.id, orphan.id)).get()!;
     expect(failed.status).toBe('failed');
     expect(failed.error).toBe('The climate file of this run was deleted before the run started.');
-    expect(t.db.select().from(auditEvents).all().filter((e) => e.action === 'run.failed')).toHaveLength(2);
+    expect(
+      t.db
+        .select()
+        .from(auditEvents)
+        .all()
+        .filter((e) => e.action === 'run.failed'),
+    ).toHaveLength(2);
   });
 
   it('refuses runs to a viewer', async () => {

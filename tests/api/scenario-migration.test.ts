@@ -11,7 +11,22 @@ import { asPerson, personWithSession, projectWithMembers, type TestPerson } from
 import { createTestApp, type TestApp } from '../support/test-app';
 
 /** The synthetic demo scenario as engine 1.0.0 saved it (fan heat 1 K over a 12 K IT rise, blowdown ratio 0.33). */
-const OLD_SCENARIO_JSON = JSON.stringify({"name": "Direct outdoor air, A1 allowable, 25 \u00b0C supply (synthetic demo)", "elevationM": 120, "envelope": {"presetId": "ashrae-2021-a1", "dryBulbMinC": 15, "dryBulbMaxC": 32, "dewPointMinC": -12, "dewPointMaxC": 17, "rhMinPct": 8, "rhMaxPct": 80, "altitudeDerating": {"aboveElevationM": 900, "metresPerKelvin": 300}}, "system": {"kind": "direct-air", "supplyAirC": 25, "itDeltaTK": 12, "fanHeatK": 1, "evaporativeEffectiveness": 0.85}, "energy": {"itLoadKw": 1000, "mechanicalCop": 4.5, "copSlopePerK": -0.08, "copReferenceC": 35, "fanPowerFraction": 0.04, "pumpPowerFraction": 0.005, "blowdownRatio": 0.33}});
+const OLD_SCENARIO_JSON = JSON.stringify({
+  name: 'Direct outdoor air, A1 allowable, 25 \u00b0C supply (synthetic demo)',
+  elevationM: 120,
+  envelope: {
+    presetId: 'ashrae-2021-a1',
+    dryBulbMinC: 15,
+    dryBulbMaxC: 32,
+    dewPointMinC: -12,
+    dewPointMaxC: 17,
+    rhMinPct: 8,
+    rhMaxPct: 80,
+    altitudeDerating: { aboveElevationM: 900, metresPerKelvin: 300 },
+  },
+  system: { kind: 'direct-air', supplyAirC: 25, itDeltaTK: 12, fanHeatK: 1, evaporativeEffectiveness: 0.85 },
+  energy: { itLoadKw: 1000, mechanicalCop: 4.5, copSlopePerK: -0.08, copReferenceC: 35, fanPowerFraction: 0.04, pumpPowerFraction: 0.005, blowdownRatio: 0.33 },
+});
 /** A scenario in today's inputs: the synthetic demo file as shipped. */
 const CURRENT_SCENARIO_JSON = readFileSync('sample-weather/scenarios/direct-air-a1.json', 'utf8');
 
@@ -35,17 +50,35 @@ beforeAll(() => {
   scenarioId = t.db.insert(scenarios).values({ projectId, name: 'Old direct air', scenarioJson: OLD_SCENARIO_JSON }).returning().get().id;
   runId = t.db
     .insert(runs)
-    .values({ projectId, scenarioId, scenarioJson: OLD_SCENARIO_JSON, climateJson: '{}', engineVersion: 'scenario-engine 1.0.0', status: 'done', resultsJson: '{}' })
+    .values({
+      projectId,
+      scenarioId,
+      scenarioJson: OLD_SCENARIO_JSON,
+      climateJson: '{}',
+      engineVersion: 'scenario-engine 1.0.0',
+      status: 'done',
+      resultsJson: '{}',
+    })
     .returning()
     .get().id;
   const spec = { baseScenario: JSON.parse(OLD_SCENARIO_JSON), axes: [], climate: { name: 'x', siteName: 'y' } };
-  sweepId = t.db.insert(sweeps).values({ projectId, name: 'Old sweep', baseScenarioId: scenarioId, specJson: JSON.stringify(spec) }).returning().get().id;
+  sweepId = t.db
+    .insert(sweeps)
+    .values({ projectId, name: 'Old sweep', baseScenarioId: scenarioId, specJson: JSON.stringify(spec) })
+    .returning()
+    .get().id;
 });
 afterAll(() => t.close());
 
 const getScenario = (person: TestPerson) => request(t.app).get(`/api/projects/${projectId}/scenarios/${scenarioId}`).set(asPerson(person));
-const dismiss = (person: TestPerson) => request(t.app).post(`/api/projects/${projectId}/scenarios/${scenarioId}/migration-notice/dismiss`).set(asPerson(person));
-const auditOf = (action: string) => t.db.select().from(auditEvents).where(and(eq(auditEvents.action, action), eq(auditEvents.projectId, projectId))).all();
+const dismiss = (person: TestPerson) =>
+  request(t.app).post(`/api/projects/${projectId}/scenarios/${scenarioId}/migration-notice/dismiss`).set(asPerson(person));
+const auditOf = (action: string) =>
+  t.db
+    .select()
+    .from(auditEvents)
+    .where(and(eq(auditEvents.action, action), eq(auditEvents.projectId, projectId)))
+    .all();
 
 describe('saved scenarios at start-up', () => {
   it('the old scenario is refused by the current schema before the migration', () => {
@@ -70,7 +103,9 @@ describe('saved scenarios at start-up', () => {
     expect(scenario.energy.cyclesOfConcentration).toBeCloseTo(1 + 1 / 0.33, 2);
     expect(migration.dismissedAt).toBeNull();
     const paths = migration.changes.map((c: { path: string }) => c.path);
-    expect(paths).toEqual(expect.arrayContaining(['system.fanHeatK', 'energy.fanPowerFraction', 'energy.copSlopePerK', 'energy.blowdownRatio', 'energy.cyclesOfConcentration']));
+    expect(paths).toEqual(
+      expect.arrayContaining(['system.fanHeatK', 'energy.fanPowerFraction', 'energy.copSlopePerK', 'energy.blowdownRatio', 'energy.cyclesOfConcentration']),
+    );
     expect(migration.changes.find((c: { path: string }) => c.path === 'system.fanHeatK')).toMatchObject({ before: 1 });
     expect(migration.changes.find((c: { path: string }) => c.path === 'energy.fanPowerFraction')).toMatchObject({ before: 0.04, after: 0.0833 });
     for (const c of migration.changes) expect(c.note.length).toBeGreaterThan(10);

@@ -37,8 +37,13 @@ describe('share links are rate-limited per address', () => {
   it('answers 429 in the one error shape past the limit, for the report and its downloads together', async () => {
     const limited = createTestApp({ sharedLinkRateLimit: { limit: 3, windowMs: 60_000 } });
     try {
-      for (let i = 0; i < 2; i++) await request(limited.app).get('/api/shared/not-a-token').expect((res) => expect(res.status).not.toBe(429));
-      await request(limited.app).get('/api/shared/not-a-token/downloads/summary.csv').expect((res) => expect(res.status).not.toBe(429));
+      for (let i = 0; i < 2; i++)
+        await request(limited.app)
+          .get('/api/shared/not-a-token')
+          .expect((res) => expect(res.status).not.toBe(429));
+      await request(limited.app)
+        .get('/api/shared/not-a-token/downloads/summary.csv')
+        .expect((res) => expect(res.status).not.toBe(429));
       const res = await request(limited.app).get('/api/shared/not-a-token').expect(429);
       expect(res.body.error).toEqual({ code: 'too_many_requests', message: 'Too many report-link requests from this address; wait a minute and try again.' });
     } finally {

@@ -34,7 +34,11 @@ describe('the series the queued runs of one file read', () => {
     const cache = createSeriesCache(t.db);
     const before = cache.get(climateFileId)!;
     const sha256 = t.db.select({ sha256: climateFiles.sha256 }).from(climateFiles).where(eq(climateFiles.id, climateFileId)).get()!.sha256;
-    t.db.update(climateFiles).set({ sha256: '0'.repeat(64) }).where(eq(climateFiles.id, climateFileId)).run();
+    t.db
+      .update(climateFiles)
+      .set({ sha256: '0'.repeat(64) })
+      .where(eq(climateFiles.id, climateFileId))
+      .run();
     try {
       expect(cache.get(climateFileId)).not.toBe(before);
     } finally {

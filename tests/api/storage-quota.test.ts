@@ -42,7 +42,8 @@ const runCount = () => t.db.select({ n: count() }).from(runs).where(eq(runs.proj
 function hoursCsv(hours: number): string {
   const start = Date.UTC(2022, 0, 1);
   const lines = ['timestamp,dry_bulb_c,relative_humidity_pct'];
-  for (let i = 0; i < hours; i++) lines.push(`${new Date(start + i * 3_600_000).toISOString().slice(0, 16)}Z,${(8 + (i % 13) / 2).toFixed(1)},${50 + (i % 30)}`);
+  for (let i = 0; i < hours; i++)
+    lines.push(`${new Date(start + i * 3_600_000).toISOString().slice(0, 16)}Z,${(8 + (i % 13) / 2).toFixed(1)},${50 + (i % 30)}`);
   return `${lines.join('\n')}\n`;
 }
 

@@ -71,7 +71,13 @@ describe('stopping the rest of a sweep', () => {
     const statuses = points().map((r) => r.status);
     expect(statuses.filter((s) => s === 'done')).toHaveLength(1);
     expect(statuses.filter((s) => s === 'cancelled')).toHaveLength(8);
-    expect(t.db.select().from(auditEvents).all().filter((e) => e.action === 'sweep.cancel')).toHaveLength(1);
+    expect(
+      t.db
+        .select()
+        .from(auditEvents)
+        .all()
+        .filter((e) => e.action === 'sweep.cancel'),
+    ).toHaveLength(1);
 
     const again = await request(app).post(`/api/projects/${projectId}/sweeps/${sweepId}/cancel`).set(asPerson(engineer)).expect(409);
     expect(again.body.error.message).toMatch(/nothing to stop/);

@@ -6,7 +6,6 @@ import { asPerson, personWithSession, projectWithMembers, type TestPerson } from
 import { siteFileAndScenario } from '../support/study-setup';
 import { createTestApp, type TestApp } from '../support/test-app';
 
-
 const sent: OutgoingMail[] = [];
 const mailer: Mailer = { send: async (mail) => void sent.push(mail), close: () => {} };
 let t: TestApp;
@@ -37,7 +36,11 @@ describe('notices for a sweep', () => {
     expect(sent[0].to).toBe('noor.valdes@example.test');
     expect(sent[0].subject).toMatch(/^Sweep finished: .*\(4 of 4 points done\) \(Notice study\)$/);
     expect(sent[0].text).toContain(`https://tramontane.test/projects/${projectId}/sweeps/${sweepId}`);
-    const actions = t.db.select().from(auditEvents).all().map((e) => e.action);
+    const actions = t.db
+      .select()
+      .from(auditEvents)
+      .all()
+      .map((e) => e.action);
     expect(actions.filter((a) => a === 'sweep.done')).toHaveLength(1);
     expect(actions.filter((a) => a === 'run.done')).toHaveLength(0);
   });

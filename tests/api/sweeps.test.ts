@@ -54,7 +54,11 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  ({ climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer, { siteName: 'Quillmoor', elevationM: SITE_ELEVATION_M, scenario: directAir }));
+  ({ climateFileId, scenarioId } = await siteFileAndScenario(t, projectId, engineer, {
+    siteName: 'Quillmoor',
+    elevationM: SITE_ELEVATION_M,
+    scenario: directAir,
+  }));
 });
 afterAll(() => t.close());
 
@@ -76,7 +80,12 @@ describe('an engineer sweeping the supply setpoint', () => {
     const after = counts();
     expect(after.runs - before.runs).toBe(7);
     // The points' own run.done entries may already follow as they finish; the start is one entry, not one per run.
-    const trail = t.db.select().from(auditEvents).all().slice(before.audit).filter((e) => e.action !== 'run.done');
+    const trail = t.db
+      .select()
+      .from(auditEvents)
+      .all()
+      .slice(before.audit)
+      .filter((e) => e.action !== 'run.done');
     expect(trail.map((e) => e.action)).toEqual(['sweep.start']);
     expect(trail[0]).toMatchObject({ actorId: engineer.id, projectId, target: `sweep ${sweepId}: Direct air, dry · supply air` });
   });
@@ -127,7 +136,8 @@ describe('an engineer sweeping the supply setpoint', () => {
     expect(plainRun.status).toBe('done');
     expect(plainRun.sweepId).toBeNull();
     expect(plainRun.results).toEqual(pointRun.results);
-    const hoursOf = async (runId: number) => (await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hours`).set(asPerson(viewer)).expect(200)).body;
+    const hoursOf = async (runId: number) =>
+      (await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hours`).set(asPerson(viewer)).expect(200)).body;
     expect(await hoursOf(plainRun.id)).toEqual(await hoursOf(pointRun.id));
   });
 
@@ -159,7 +169,11 @@ describe('an engineer sweeping the supply setpoint', () => {
 });
 
 describe('a sweep that cannot be run', () => {
-  const post = (person: TestPerson, body: unknown) => request(t.app).post(`/api/projects/${projectId}/sweeps`).set(asPerson(person)).send(body as object);
+  const post = (person: TestPerson, body: unknown) =>
+    request(t.app)
+      .post(`/api/projects/${projectId}/sweeps`)
+      .set(asPerson(person))
+      .send(body as object);
 
   it('names the input and the value of a point the scenario schema refuses, and stores nothing', async () => {
     const before = counts();
@@ -222,7 +236,13 @@ describe('deleting a sweep', () => {
     await stuckQueue.idle();
     expect(t.db.select().from(sweeps).where(eq(sweeps.id, sweepId)).all()).toEqual([]);
     expect(t.db.select().from(runs).where(eq(runs.sweepId, sweepId)).all()).toEqual([]);
-    expect(t.db.select({ runId: runHours.runId }).from(runHours).all().filter((h) => runIds.includes(h.runId))).toEqual([]);
+    expect(
+      t.db
+        .select({ runId: runHours.runId })
+        .from(runHours)
+        .all()
+        .filter((h) => runIds.includes(h.runId)),
+    ).toEqual([]);
     const trail = t.db.select().from(auditEvents).all().slice(auditBefore);
     expect(trail.map((e) => e.action)).toEqual(['sweep.delete']);
     expect(JSON.parse(trail[0].detailJson)).toMatchObject({ sweepId, runs: 30, cancelled: 30 });
@@ -234,10 +254,21 @@ describe('deleting a sweep', () => {
   it('removes a finished sweep with its runs and their hours', async () => {
     const list = await request(t.app).get(`/api/projects/${projectId}/sweeps`).set(asPerson(viewer)).expect(200);
     const grid = list.body.sweeps.find((s: { name: string }) => s.name === 'Setpoint × envelope');
-    const runIds = t.db.select({ id: runs.id }).from(runs).where(eq(runs.sweepId, grid.id)).all().map((r) => r.id);
+    const runIds = t.db
+      .select({ id: runs.id })
+      .from(runs)
+      .where(eq(runs.sweepId, grid.id))
+      .all()
+      .map((r) => r.id);
     expect(runIds).toHaveLength(4);
     await request(t.app).delete(`/api/projects/${projectId}/sweeps/${grid.id}`).set(asPerson(engineer)).expect(204);
     expect(t.db.select().from(runs).where(isNotNull(runs.sweepId)).all()).toHaveLength(7);
-    expect(t.db.select({ runId: runHours.runId }).from(runHours).all().filter((h) => runIds.includes(h.runId))).toEqual([]);
+    expect(
+      t.db
+        .select({ runId: runHours.runId })
+        .from(runHours)
+        .all()
+        .filter((h) => runIds.includes(h.runId)),
+    ).toEqual([]);
   });
 });

@@ -87,7 +87,9 @@ async function run(context: { log: (line: string) => void }): Promise<Record<str
   const canonicalYears = years.map((y) => `${[canonicalHeader, ...y.map(canonicalLine)].join('\n')}\n`);
   const stationYears = years.map((y) => `${y.map(stationLine).join('\n')}\n`);
   const pool = createWorkerPool({ threads: availableParallelism() });
-  context.log(`climate-file-sets: ${hours} hours; one canonical CSV (${(canonical.length / 1e6).toFixed(1)} MB) against 30 yearly files, on ${pool.threads} pool threads`);
+  context.log(
+    `climate-file-sets: ${hours} hours; one canonical CSV (${(canonical.length / 1e6).toFixed(1)} MB) against 30 yearly files, on ${pool.threads} pool threads`,
+  );
   try {
     const one = async () => {
       const result: ImportResult = await pool.run('importClimate', { text: canonical, options: {} });

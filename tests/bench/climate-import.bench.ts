@@ -32,7 +32,9 @@ function localText(canonical: string): string {
   for (const line of canonical.split('\n')) {
     if (!line.startsWith('1') && !line.startsWith('2')) continue;
     const [ts, db, rh, p] = line.split(',');
-    out.push(`${ts.slice(8, 10)}.${ts.slice(5, 7)}.${ts.slice(0, 4)};${ts.slice(11, 16)};${db.replace('.', ',')};${rh.replace('.', ',')};${(Number(p) * 10).toFixed(1).replace('.', ',')}`);
+    out.push(
+      `${ts.slice(8, 10)}.${ts.slice(5, 7)}.${ts.slice(0, 4)};${ts.slice(11, 16)};${db.replace('.', ',')};${rh.replace('.', ',')};${(Number(p) * 10).toFixed(1).replace('.', ',')}`,
+    );
   }
   return `${out.join('\r\n')}\r\n`;
 }

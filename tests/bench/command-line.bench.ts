@@ -30,7 +30,11 @@ interface Timing {
 /** Wall and CPU time of one command, as whole processes; throws with its stderr when it fails. */
 function timed(command: string, args: string[], cpuFile: string): Timing {
   writeFileSync(cpuFile, '');
-  const env = { ...process.env, TRAMONTANE_BENCH_CPU_FILE: cpuFile, NODE_OPTIONS: `--require ${JSON.stringify(path.join(here, 'command-line/report-cpu.cjs'))}` };
+  const env = {
+    ...process.env,
+    TRAMONTANE_BENCH_CPU_FILE: cpuFile,
+    NODE_OPTIONS: `--require ${JSON.stringify(path.join(here, 'command-line/report-cpu.cjs'))}`,
+  };
   const start = performance.now();
   const result = spawnSync(command, args, { cwd: root, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024, env });
   const wallMs = performance.now() - start;
@@ -112,12 +116,17 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
     const passes: Record<keyof typeof commands, Timing[]> = { ours: [], psychrolib: [], floor: [], npm: [] };
     for (let pass = 0; pass < PASSES; pass++) {
       for (const name of Object.keys(commands) as (keyof typeof commands)[]) passes[name].push(commands[name]());
-      log(`command line pass ${pass + 1}: ${Object.entries(passes).map(([name, t]) => `${name} ${t[pass].wallMs.toFixed(0)} ms wall, ${t[pass].cpuMs.toFixed(0)} ms CPU`).join('; ')}`);
+      log(
+        `command line pass ${pass + 1}: ${Object.entries(passes)
+          .map(([name, t]) => `${name} ${t[pass].wallMs.toFixed(0)} ms wall, ${t[pass].cpuMs.toFixed(0)} ms CPU`)
+          .join('; ')}`,
+      );
     }
     const times = Object.fromEntries(Object.entries(passes).map(([name, t]) => [name, t.map((x) => x.wallMs)])) as Record<keyof typeof commands, number[]>;
     const cpu = Object.fromEntries(Object.entries(passes).map(([name, t]) => [name, t.map((x) => x.cpuMs)])) as Record<keyof typeof commands, number[]>;
     const oursText = readFileSync(out('ours'), 'utf8');
-    if (readFileSync(out('npm'), 'utf8') !== oursText || readFileSync(out('floor'), 'utf8') !== oursText) throw new Error('the npm call or the floor wrote other bytes');
+    if (readFileSync(out('npm'), 'utf8') !== oursText || readFileSync(out('floor'), 'utf8') !== oursText)
+      throw new Error('the npm call or the floor wrote other bytes');
     const checked = compareHourByHour(oursText, readFileSync(out('psychrolib'), 'utf8'));
     const ratio = (ours: number[], other: number[]) => median(ours.map((t, k) => t / other[k]));
     const vsPsychrolib = ratio(times.ours, times.psychrolib);

@@ -36,8 +36,17 @@ export const suite: BenchSuite = {
     if (!parsed.ok) throw new Error(parsed.errors.join('; '));
     const series = syntheticSeries(TEMPERATE, { hours: 30 * 8760, seed: 7 });
     const run = runScenario(parsed.scenario, series, { elevationM: 100 });
-    const hours30 = { dryBulbC: series.dryBulbC, humidityRatio: run.states.humidityRatio, modes: run.classification.modes, mechanicalFraction: run.classification.mechanicalFraction };
-    const hours1 = { dryBulbC: series.dryBulbC.subarray(0, 8760), humidityRatio: run.states.humidityRatio.subarray(0, 8760), modes: run.classification.modes.subarray(0, 8760) };
+    const hours30 = {
+      dryBulbC: series.dryBulbC,
+      humidityRatio: run.states.humidityRatio,
+      modes: run.classification.modes,
+      mechanicalFraction: run.classification.mechanicalFraction,
+    };
+    const hours1 = {
+      dryBulbC: series.dryBulbC.subarray(0, 8760),
+      humidityRatio: run.states.humidityRatio.subarray(0, 8760),
+      modes: run.classification.modes.subarray(0, 8760),
+    };
     const pressurePa = 101_325 * Math.pow(1 - 2.25577e-5 * 100, 5.2559);
     const window = chartWindowFor(pressurePa, hours30);
     const regionGrid = regionGridFor(window);

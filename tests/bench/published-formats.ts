@@ -42,7 +42,9 @@ export function stationRecordsText(fromYear: number, toYear: number): string {
     const d = new Date(t);
     const temp = Math.round(10 * (10 + 9 * Math.sin((2 * Math.PI * k) / 8766) + 4 * Math.sin((2 * Math.PI * k) / 24)));
     const dew = temp - 40 - (k % 30);
-    out.push(`${d.getUTCFullYear()} ${two(d.getUTCMonth() + 1)} ${two(d.getUTCDate())} ${two(d.getUTCHours())}${pad(temp, 6)}${pad(dew, 6)}${pad(10150 + (k % 80), 6)}${pad(200, 6)}${pad(31, 6)}${pad(4, 6)}${pad(0, 6)}${pad(-9999, 6)}`);
+    out.push(
+      `${d.getUTCFullYear()} ${two(d.getUTCMonth() + 1)} ${two(d.getUTCDate())} ${two(d.getUTCHours())}${pad(temp, 6)}${pad(dew, 6)}${pad(10150 + (k % 80), 6)}${pad(200, 6)}${pad(31, 6)}${pad(4, 6)}${pad(0, 6)}${pad(-9999, 6)}`,
+    );
   }
   return `${out.join('\n')}\n`;
 }

@@ -60,13 +60,21 @@ export async function startRunPageStage(log: (line: string) => void = () => {}):
   const owner = personWithSession(t.db, 'bench-owner@example.test');
   const projectId = projectWithMembers(t.db, 'Run page bench (synthetic)', [[owner, 'owner']]);
   const api = async <T>(method: string, apiPath: string, body?: string, contentType = 'application/json'): Promise<T> => {
-    const res = await fetch(`${baseUrl}/api${apiPath}`, { method, headers: { cookie: owner.cookie, 'x-tramontane-request': '1', 'content-type': contentType }, body });
+    const res = await fetch(`${baseUrl}/api${apiPath}`, {
+      method,
+      headers: { cookie: owner.cookie, 'x-tramontane-request': '1', 'content-type': contentType },
+      body,
+    });
     if (!res.ok) throw new Error(`${method} ${apiPath} answered ${res.status}: ${await res.text()}`);
     return (await res.json()) as T;
   };
 
   log('run-page: importing 1 and 30 synthetic years and running the sample scenario on both');
-  const { site } = await api<{ site: { id: number } }>('POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Harrowmere (synthetic)', elevationM: 100, timeZone: 'UTC' }));
+  const { site } = await api<{ site: { id: number } }>(
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Harrowmere (synthetic)', elevationM: 100, timeZone: 'UTC' }),
+  );
   const upload = async (years: number) =>
     (
       await api<{ climateFile: { id: number } }>(
@@ -94,7 +102,15 @@ export async function startRunPageStage(log: (line: string) => void = () => {}):
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const [cookieName, cookieValue] = owner.cookie.split('=');
   return {

@@ -97,7 +97,10 @@ const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floo
 async function run({ log }: BenchContext): Promise<Record<string, number | string>> {
   const study = await prepareStudy();
   try {
-    const times = { 1: { first: [] as number[], warm: [] as number[], cpu: [] as number[] }, 2: { first: [] as number[], warm: [] as number[], cpu: [] as number[] } };
+    const times = {
+      1: { first: [] as number[], warm: [] as number[], cpu: [] as number[] },
+      2: { first: [] as number[], warm: [] as number[], cpu: [] as number[] },
+    };
     let reference: number[] | null = null;
     for (let round = 0; round < ROUNDS; round++) {
       for (const threads of round % 2 === 0 ? [1, 2] : [2, 1]) {
@@ -115,7 +118,9 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
     const twoWarm = median(times[2].warm);
     const oneFirst = median(times[1].first);
     const twoFirst = median(times[2].first);
-    log(`sweep 50 × 10 years through the queue: two threads ${(oneWarm / twoWarm).toFixed(2)}× one thread warm, ${(oneFirst / twoFirst).toFixed(2)}× right after a start (target ≥ 1.8)`);
+    log(
+      `sweep 50 × 10 years through the queue: two threads ${(oneWarm / twoWarm).toFixed(2)}× one thread warm, ${(oneFirst / twoFirst).toFixed(2)}× right after a start (target ≥ 1.8)`,
+    );
     return {
       'sweep.oneThreadMs': Math.round(oneWarm),
       'sweep.twoThreadsMs': Math.round(twoWarm),

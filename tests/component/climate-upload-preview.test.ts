@@ -82,7 +82,14 @@ describe('the mapping a person edits', () => {
 describe('stored hours for the charts', () => {
   it('turns JSON nulls back into NaN and derives the humidity ratio at the file’s pressure or the site’s', () => {
     expect(Array.from(toFloat64([1, null]))).toEqual([1, Number.NaN]);
-    const hours = { humidityKind: 'relative-humidity-pct' as const, timestampsMs: [0, 3_600_000], dryBulbC: [25, null], humidity: [50, 50], pressurePa: null, flags: [0, 2] };
+    const hours = {
+      humidityKind: 'relative-humidity-pct' as const,
+      timestampsMs: [0, 3_600_000],
+      dryBulbC: [25, null],
+      humidity: [50, 50],
+      pressurePa: null,
+      flags: [0, 2],
+    };
     const atSite = chartSeries(hours, 1000);
     // psychrolib GetStandardAtmPressure(1000 m) and GetHumRatioFromRelHum(25 °C, 0.5).
     const p = psychrolib.GetStandardAtmPressure(1000);

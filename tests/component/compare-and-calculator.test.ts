@@ -73,7 +73,14 @@ describe('comparing runs against a baseline', () => {
   });
 
   it('writes the comparison as CSV with units, values and differences', () => {
-    const csv = comparisonCsv(compareRuns(runs, 1), new Map([[1, '=run one'], [2, 'run two']]), 'SI').split('\n');
+    const csv = comparisonCsv(
+      compareRuns(runs, 1),
+      new Map([
+        [1, '=run one'],
+        [2, 'run two'],
+      ]),
+      'SI',
+    ).split('\n');
     // A label that a spreadsheet would read as a formula is defused (shared/csv.ts).
     expect(csv[0]).toBe("figure,unit,'=run one,'=run one difference,run two,run two difference");
     expect(csv[1]).toBe('Free cooling,h,80,,60,-20');
@@ -158,8 +165,12 @@ describe('engine notes follow the unit switch (issue 17 defect 6)', () => {
   it('writes the supply-above-envelope note with the plain input name, in °F in IP', () => {
     const note = "supplyAirC 28 °C is above the envelope's maximum dry-bulb 27 °C (derated for 1400 m): every hour is an excursion.";
     // 28 °C × 9/5 + 32 = 82.4 °F; 27 °C = 80.6 °F; 1,400 m / 0.3048 = 4,593 ft (exact factors).
-    expect(engineNoteText(note, 'IP')).toBe("The supply setpoint 82.4 °F is above the envelope's maximum dry-bulb 80.6 °F (derated for the site's 4,593 ft): every hour is an excursion.");
-    expect(engineNoteText(note, 'SI')).toBe("The supply setpoint 28.0 °C is above the envelope's maximum dry-bulb 27.0 °C (derated for the site's 1,400 m): every hour is an excursion.");
+    expect(engineNoteText(note, 'IP')).toBe(
+      "The supply setpoint 82.4 °F is above the envelope's maximum dry-bulb 80.6 °F (derated for the site's 4,593 ft): every hour is an excursion.",
+    );
+    expect(engineNoteText(note, 'SI')).toBe(
+      "The supply setpoint 28.0 °C is above the envelope's maximum dry-bulb 27.0 °C (derated for the site's 1,400 m): every hour is an excursion.",
+    );
     expect(engineNoteText('12 hours have no usable data and are counted as no data.', 'IP')).toBe('12 hours have no usable data and are counted as no data.');
   });
 });
@@ -175,7 +186,10 @@ describe('IP that is whole (issue 17 defect 6)', () => {
     // 21.1 °C is 70 °F, 23.9 °C is 75 °F, 26.7 °C is 80 °F (°F = 1.8 °C + 32, exact).
     const dryBulbC = Float64Array.from([21.2, 21.5, 23.8, 24.0]);
     const { bins } = dryBulbBins([0, 0, 0, 2], dryBulbC, dryBulbC, DRY_BULB_BIN_GRIDS.IP.widthK, DRY_BULB_BIN_GRIDS.IP.originC);
-    const edgesF = bins.map((b) => [Math.round(toDisplay('temperature', 'IP', b.fromC) * 1e6) / 1e6, Math.round(toDisplay('temperature', 'IP', b.toC) * 1e6) / 1e6]);
+    const edgesF = bins.map((b) => [
+      Math.round(toDisplay('temperature', 'IP', b.fromC) * 1e6) / 1e6,
+      Math.round(toDisplay('temperature', 'IP', b.toC) * 1e6) / 1e6,
+    ]);
     expect(edgesF).toEqual([
       [75, 80],
       [70, 75],

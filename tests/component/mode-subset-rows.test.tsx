@@ -103,15 +103,26 @@ describe('"of which" rows on the run page', () => {
     expect(text('subset-partialMechanical')).toContain(h.partialMechanical.toLocaleString('en'));
     // The rows sit right after their mode's row.
     const rows = [...host.querySelectorAll('[data-testid="mode-hours"] tbody tr')].map((r) => r.querySelector('th')!.textContent);
-    expect(rows.slice(0, 6)).toEqual(['Free cooling', 'of which with humidification', 'Adiabatic assist', 'Mechanical', 'of which partly economised', 'No data']);
+    expect(rows.slice(0, 6)).toEqual([
+      'Free cooling',
+      'of which with humidification',
+      'Adiabatic assist',
+      'Mechanical',
+      'of which partly economised',
+      'No data',
+    ]);
     expect(host.querySelector('[data-testid="not-counted-note"]')).toBeNull();
   });
 
   it('give the water for humidification and for evaporative cooling in m³ (SI) and US gallons (IP)', () => {
     const w = results.water;
     render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'SI');
-    expect(text('water-humidificationL')).toBe(`of which for humidification${(w.humidificationL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`);
-    expect(text('water-evaporativeCoolingL')).toContain(`${(w.evaporativeCoolingL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`);
+    expect(text('water-humidificationL')).toBe(
+      `of which for humidification${(w.humidificationL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`,
+    );
+    expect(text('water-evaporativeCoolingL')).toContain(
+      `${(w.evaporativeCoolingL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`,
+    );
     act(() => root.unmount());
     root = createRoot(host);
     render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'IP');
@@ -190,7 +201,16 @@ function shapeReportRunLike(source: Pick<ReportRunSource, 'id' | 'engineVersion'
     finishedAt: null,
     scenario,
     sweepPoint: null,
-    climate: { name: 'Synthetic ten days', sha256: '0'.repeat(64), hours: 240, firstHourMs: 0, lastHourMs: 0, site: { name: 'Invented site', elevationM: 0, timeZone: 'UTC' }, elevationM: 0, utcOffsetMinutes: 0 },
+    climate: {
+      name: 'Synthetic ten days',
+      sha256: '0'.repeat(64),
+      hours: 240,
+      firstHourMs: 0,
+      lastHourMs: 0,
+      site: { name: 'Invented site', elevationM: 0, timeZone: 'UTC' },
+      elevationM: 0,
+      utcOffsetMinutes: 0,
+    },
     results,
     file: null,
     siteNow: null,

@@ -53,7 +53,13 @@ describe('RegionTable', () => {
     });
     const c = run.classification;
     const cells = binHours(
-      { dryBulbC: STATES.map((s) => s[0]), humidityRatio: STATES.map((s) => s[1]), modes: c.modes, mechanicalFraction: c.mechanicalFraction, humidified: c.humidified },
+      {
+        dryBulbC: STATES.map((s) => s[0]),
+        humidityRatio: STATES.map((s) => s[1]),
+        modes: c.modes,
+        mechanicalFraction: c.mechanicalFraction,
+        humidified: c.humidified,
+      },
       { dryBulbMinC: -10, dryBulbStepC: 1, nx: 60, humidityRatioMin: 0, humidityRatioStep: 0.0005, ny: 60 },
     );
     const rules = regionRules(designAtSite(scenario, 0), 101_325, 'SI');

@@ -52,7 +52,12 @@ describe('monthly rows and inputs as run', () => {
   });
 
   it('reads each input’s unit from its field name', () => {
-    const rows = flattenInputs({ elevationM: 120, system: { supplyAirC: 24, itDeltaTK: 12 }, energy: { copSlopePerK: -0.08, itLoadKw: 1000 }, envelope: { rhMaxPct: 80 } });
+    const rows = flattenInputs({
+      elevationM: 120,
+      system: { supplyAirC: 24, itDeltaTK: 12 },
+      energy: { copSlopePerK: -0.08, itLoadKw: 1000 },
+      envelope: { rhMaxPct: 80 },
+    });
     expect(Object.fromEntries(rows.map((r) => [r.path, r.kind]))).toEqual({
       elevationM: 'elevation',
       'system.supplyAirC': 'temperature',

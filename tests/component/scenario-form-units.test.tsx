@@ -53,12 +53,21 @@ describe('scenario inputs in SI and IP', () => {
     // Engine 2.0.0: the tower's evaporation share is retired; drift and basin heaters only matter to a tower.
     expect(fieldsFor(energyFields, 'direct-air').map((f) => f.path)).not.toContain('energy.towerDriftFraction');
     expect(fieldsFor(energyFields, 'water-side', 'dry-cooler').map((f) => f.path)).not.toContain('energy.towerDriftFraction');
-    expect(fieldsFor(energyFields, 'water-side', 'cooling-tower').map((f) => f.path)).toEqual(expect.arrayContaining(['energy.towerDriftFraction', 'energy.basinHeaterFraction']));
+    expect(fieldsFor(energyFields, 'water-side', 'cooling-tower').map((f) => f.path)).toEqual(
+      expect.arrayContaining(['energy.towerDriftFraction', 'energy.basinHeaterFraction']),
+    );
     expect(fieldsFor(systemFields, 'water-side', 'cooling-tower').map((f) => f.path)).toContain('system.freezeProtectionWetBulbC');
     expect(fieldsFor(systemFields, 'water-side', 'dry-cooler').map((f) => f.path)).not.toContain('system.freezeProtectionWetBulbC');
     // Retired inputs are no longer offered.
     const all = [...systemFields, ...energyFields].map((f) => f.path);
-    for (const retired of ['system.fanHeatK', 'energy.copSlopePerK', 'energy.copReferenceC', 'energy.copMin', 'energy.blowdownRatio', 'energy.towerEvaporationShare']) {
+    for (const retired of [
+      'system.fanHeatK',
+      'energy.copSlopePerK',
+      'energy.copReferenceC',
+      'energy.copMin',
+      'energy.blowdownRatio',
+      'energy.towerEvaporationShare',
+    ]) {
       expect(all).not.toContain(retired);
     }
   });

@@ -12,7 +12,10 @@ const base = scenarioSchema.parse(newScenarioValues);
 /** Waits for a condition inside act, so the query's state updates on the way are flushed as React expects. */
 const settle = (check: () => void) => act(async () => vi.waitFor(check));
 
-const withSupply = (supplyAirC: number): Scenario => ({ ...base, system: { ...(base.system as Extract<Scenario['system'], { kind: 'direct-air' }>), supplyAirC } });
+const withSupply = (supplyAirC: number): Scenario => ({
+  ...base,
+  system: { ...(base.system as Extract<Scenario['system'], { kind: 'direct-air' }>), supplyAirC },
+});
 
 describe('the quick preview while editing', () => {
   let host: HTMLDivElement;
@@ -36,7 +39,8 @@ describe('the quick preview while editing', () => {
           calls.push({
             body: JSON.parse(String(init.body)),
             signal: init.signal!,
-            resolve: (free) => resolve(new Response(JSON.stringify({ hours: { free, adiabatic: 0, mechanical: 0, noData: 0, total: free }, energy: {}, water: {} }))),
+            resolve: (free) =>
+              resolve(new Response(JSON.stringify({ hours: { free, adiabatic: 0, mechanical: 0, noData: 0, total: free }, energy: {}, water: {} }))),
           });
         });
       }),

@@ -43,7 +43,7 @@ describe('folding sweep points in a run list', () => {
     expect([hiddenRuns, hiddenSweeps]).toEqual([0, 0]);
   });
 
-  it('counts a sweep\'s points by status and spans its free-cooling share over the finished ones', () => {
+  it("counts a sweep's points by status and spans its free-cooling share over the finished ones", () => {
     const row = foldSweepPoints(list, { runs: 10, sweeps: 5 }).entries.find((e) => e.kind === 'sweep')!;
     if (row.kind !== 'sweep') throw new Error('expected a sweep row');
     expect(row.sweep).toMatchObject({ name: 'Supply setpoint 18–30 °C', points: 13, done: 10, failed: 1, cancelled: 0, active: 2 });
@@ -55,7 +55,7 @@ describe('folding sweep points in a run list', () => {
     expect(freeShareText(row.sweep.freeShare!)).toBe('25–70 % free');
   });
 
-  it('never lets sweep rows take the plain runs\' places, and hides sweeps older than the last run shown', () => {
+  it("never lets sweep rows take the plain runs' places, and hides sweeps older than the last run shown", () => {
     const { entries, hiddenRuns, hiddenSweeps } = foldSweepPoints(list, { runs: 2, sweeps: 5 });
     // Two plain runs (30, 16) and the sweep between them; sweep 8 and runs 15, 11 are older than run 16.
     expect(entries.map((e) => (e.kind === 'run' ? e.run.id : `sweep ${e.sweep.sweepId}`))).toEqual([30, 'sweep 7', 16]);
@@ -74,7 +74,7 @@ describe('folding sweep points in a run list', () => {
   });
 });
 
-describe('the compare picker\'s choice of runs', () => {
+describe("the compare picker's choice of runs", () => {
   const runs = [run(9, null), run(8, setpoints), run(7, setpoints), run(6, loads), run(5, null)];
 
   it('offers plain, all, then each sweep, with counts; nothing to choose without sweep points', () => {
@@ -120,8 +120,8 @@ describe('a sweep point in words', () => {
   });
 });
 
-describe('a sweep point\'s run name as shown', () => {
-  it('writes the point\'s values again in the reader\'s units; other names stay as they are', () => {
+describe("a sweep point's run name as shown", () => {
+  it("writes the point's values again in the reader's units; other names stay as they are", () => {
     const point = { 'system.supplyAirC': 24 };
     // 24 °C × 9/5 + 32 = 75.2 °F (exact).
     expect(runDisplayName('Direct air, A1 · supply air 24 °C', point, 'IP')).toBe('Direct air, A1 · supply air 75.2 °F');

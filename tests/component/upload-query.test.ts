@@ -22,7 +22,9 @@ describe('the upload query the wizard sends', () => {
       humidityOverIce: true,
     });
     // Left out, the option is false: humidity over liquid water (WMO-No. 8).
-    expect(climateUploadQuerySchema.parse(Object.fromEntries(new URLSearchParams(uploadQuery({ fileName: 'a.csv', maxGapHours: 6, timeBasis: 'utc' }))))).toMatchObject({
+    expect(
+      climateUploadQuerySchema.parse(Object.fromEntries(new URLSearchParams(uploadQuery({ fileName: 'a.csv', maxGapHours: 6, timeBasis: 'utc' })))),
+    ).toMatchObject({
       humidityOverIce: false,
     });
   });

@@ -82,10 +82,13 @@ describe('an engineer adding hourly weather to a project', () => {
 
     await page.getByRole('button', { name: 'Store climate file' }).click();
     await page.waitForURL(/\/climate-files\/\d+$/);
-    await page.getByRole('heading', { name: 'zimna-dolina' }).waitFor().catch(async (e) => {
-      await h.screenshot('climate-file-page-failed');
-      throw e;
-    });
+    await page
+      .getByRole('heading', { name: 'zimna-dolina' })
+      .waitFor()
+      .catch(async (e) => {
+        await h.screenshot('climate-file-page-failed');
+        throw e;
+      });
     expect(await page.getByTestId('climate-file-facts').innerText()).toContain('2021–2023');
     expect(await page.getByTestId('design-label').innerText()).toContain('Computed from this file, not published station values');
     // Both charts drawn: the carpet and the moist-air chart each render an SVG.
@@ -127,7 +130,9 @@ describe('an engineer adding hourly weather to a project', () => {
     await page.getByRole('button', { name: 'Read the file' }).click();
     await page.getByTestId('mapping-editor').waitFor();
     // 8.3 °C = 46.9 °F; 101.3 kPa = 29.91 inHg (NIST SP 811: 1 inHg = 3386.389 Pa).
-    expect(await page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(/2023-07-01 00:00\s+2023-07-01 02:00\s+8\.3\s+46\.9\s+88\.0\s+88\.0\s+101\.30\s+29\.91/);
+    expect(await page.getByTestId('preview-table').locator('tbody tr').first().innerText()).toMatch(
+      /2023-07-01 00:00\s+2023-07-01 02:00\s+8\.3\s+46\.9\s+88\.0\s+88\.0\s+101\.30\s+29\.91/,
+    );
     await h.screenshot('climate-upload-mapping-ip');
     // Override the detected unit: read as °F, 8.3 °F is (8.3 − 32)/1.8 = −13.2 °C.
     await page.getByLabel('Dry-bulb unit').selectOption('F');
@@ -212,18 +217,47 @@ describe('an engineer adding hourly weather to a project', () => {
       years: [],
       maxGapHours: 6,
       timeZone: 'Europe/Warsaw',
-      counts: { lines: 3, rows: 1, rowsRejected: 1, cellsUnreadable: 0, impossibleValues: 0, clampedValues: 0, duplicateTimestamps: 0, rowsAveraged: 0, nonHourlySteps: 0, daylightSavingJumps: 0, hours: 0, measuredHours: 0, filledHours: 0, missingHours: 0, gaps: 0, longestGapHours: 0, issuesNotListed: 0 },
-      issues: [{ kind: 'unparsable-time', severity: 'error', line: 2, column: 'timestamp', value: '2023-13-45', message: 'The time "2023-13-45" cannot be read.' }],
+      counts: {
+        lines: 3,
+        rows: 1,
+        rowsRejected: 1,
+        cellsUnreadable: 0,
+        impossibleValues: 0,
+        clampedValues: 0,
+        duplicateTimestamps: 0,
+        rowsAveraged: 0,
+        nonHourlySteps: 0,
+        daylightSavingJumps: 0,
+        hours: 0,
+        measuredHours: 0,
+        filledHours: 0,
+        missingHours: 0,
+        gaps: 0,
+        longestGapHours: 0,
+        issuesNotListed: 0,
+      },
+      issues: [
+        { kind: 'unparsable-time', severity: 'error', line: 2, column: 'timestamp', value: '2023-13-45', message: 'The time "2023-13-45" cannot be read.' },
+      ],
     };
     await page.route(/\/climate-files\?/, (route) =>
-      route.fulfill({ status: 422, contentType: 'application/json', body: JSON.stringify({ error: { code: 'import_rejected', message: refusedReport.summary, details: { report: refusedReport } } }) }),
+      route.fulfill({
+        status: 422,
+        contentType: 'application/json',
+        body: JSON.stringify({ error: { code: 'import_rejected', message: refusedReport.summary, details: { report: refusedReport } } }),
+      }),
     );
     await page.getByRole('button', { name: 'Store climate file' }).click();
     await expect.poll(() => page.getByText('The server refused the file; nothing was stored.').isVisible()).toBe(true);
     expect(await report.innerText()).toMatch(/2\s+timestamp\s+2023-13-45/);
     await page.unroute(/\/climate-files\?/);
 
-    const noHumidity = Buffer.from(`timestamp,dry_bulb_c\n${rows.slice(0, 24).map((r) => r.split(',').slice(0, 2).join(',')).join('\n')}\n`);
+    const noHumidity = Buffer.from(
+      `timestamp,dry_bulb_c\n${rows
+        .slice(0, 24)
+        .map((r) => r.split(',').slice(0, 2).join(','))
+        .join('\n')}\n`,
+    );
     await page.getByRole('button', { name: 'Back to the mapping' }).click();
     await page.getByRole('button', { name: 'Back' }).click();
     await page.getByLabel('File', { exact: true }).setInputFiles({ name: 'no-humidity.csv', mimeType: 'text/csv', buffer: noHumidity });

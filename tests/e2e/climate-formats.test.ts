@@ -37,47 +37,51 @@ afterEach(() => expectNoPageErrors(pageErrors));
 afterAll(() => h?.close());
 
 describe('an engineer uploading an EPW file', () => {
-  it('sees the format recognised, the header against the site, a new site filled from it, and the typical year on the file page', { timeout: 120_000 }, async () => {
-    const page = h.page;
-    await page.goto(`${h.baseUrl}/projects/${projectId}/climate-files/new?siteId=${siteId}`);
-    await page.getByRole('button', { name: 'Continue with Ridge hall' }).click();
-    await page.getByLabel('File', { exact: true }).setInputFiles(epwFile);
-    await page.getByRole('button', { name: 'Read the file' }).click();
+  it(
+    'sees the format recognised, the header against the site, a new site filled from it, and the typical year on the file page',
+    { timeout: 120_000 },
+    async () => {
+      const page = h.page;
+      await page.goto(`${h.baseUrl}/projects/${projectId}/climate-files/new?siteId=${siteId}`);
+      await page.getByRole('button', { name: 'Continue with Ridge hall' }).click();
+      await page.getByLabel('File', { exact: true }).setInputFiles(epwFile);
+      await page.getByRole('button', { name: 'Read the file' }).click();
 
-    const format = page.getByTestId('recognised-format');
-    await format.waitFor();
-    expect(await format.innerText()).toContain('Recognised as EPW');
-    const origin = page.getByTestId('file-origin');
-    expect(await origin.innerText()).toContain('Quellmoor Synthetic Station, Nordmark, Invented Land');
-    // The site is 650 m higher and on UTC+0 standard time: both disagreements are named.
-    expect(await origin.innerText()).toContain('650 m apart, more than 50 m');
-    expect(await origin.innerText()).toContain('Europe/London has standard time UTC+00:00');
-    expect(await page.getByTestId('typical-year').innerText()).toContain('Jan 2004 · Feb 1999');
-    await h.shot('climate-upload-epw-mapping-si');
+      const format = page.getByTestId('recognised-format');
+      await format.waitFor();
+      expect(await format.innerText()).toContain('Recognised as EPW');
+      const origin = page.getByTestId('file-origin');
+      expect(await origin.innerText()).toContain('Quellmoor Synthetic Station, Nordmark, Invented Land');
+      // The site is 650 m higher and on UTC+0 standard time: both disagreements are named.
+      expect(await origin.innerText()).toContain('650 m apart, more than 50 m');
+      expect(await origin.innerText()).toContain('Europe/London has standard time UTC+00:00');
+      expect(await page.getByTestId('typical-year').innerText()).toContain('Jan 2004 · Feb 1999');
+      await h.shot('climate-upload-epw-mapping-si');
 
-    // The header fills a new site's form.
-    await origin.getByRole('button', { name: 'New site from this header' }).click();
-    const form = page.getByRole('form', { name: 'New site' });
-    expect(await form.getByLabel('Site name').inputValue()).toBe('Quellmoor Synthetic Station, Nordmark');
-    expect(await form.getByLabel('Elevation (m)').inputValue()).toBe('250');
-    expect(await form.getByLabel('Latitude (°, optional)').inputValue()).toBe('51.25');
-    expect(await form.getByLabel('Time zone').inputValue()).toBe('UTC+01:00');
-    await h.shot('climate-upload-epw-new-site');
+      // The header fills a new site's form.
+      await origin.getByRole('button', { name: 'New site from this header' }).click();
+      const form = page.getByRole('form', { name: 'New site' });
+      expect(await form.getByLabel('Site name').inputValue()).toBe('Quellmoor Synthetic Station, Nordmark');
+      expect(await form.getByLabel('Elevation (m)').inputValue()).toBe('250');
+      expect(await form.getByLabel('Latitude (°, optional)').inputValue()).toBe('51.25');
+      expect(await form.getByLabel('Time zone').inputValue()).toBe('UTC+01:00');
+      await h.shot('climate-upload-epw-new-site');
 
-    // Stored against the chosen site, warnings and all.
-    await page.getByRole('button', { name: 'Continue to the report' }).click();
-    await page.getByTestId('validation-report').waitFor();
-    await page.getByRole('button', { name: 'Store climate file' }).click();
-    await page.waitForURL(/\/climate-files\/\d+$/);
-    await page.getByRole('heading', { name: 'synthetic-typical-year' }).waitFor();
-    expect(await page.getByTestId('recognised-format').innerText()).toContain('EPW');
-    expect(await page.getByTestId('typical-year').innerText()).toContain('placed in 2001');
-    await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(2);
-    await h.shot('climate-file-epw-si', 300);
-    await h.useUnits('IP');
-    await expect.poll(() => page.getByTestId('file-origin').innerText()).toContain('ft');
-    await h.shot('climate-file-epw-ip', 300);
-  });
+      // Stored against the chosen site, warnings and all.
+      await page.getByRole('button', { name: 'Continue to the report' }).click();
+      await page.getByTestId('validation-report').waitFor();
+      await page.getByRole('button', { name: 'Store climate file' }).click();
+      await page.waitForURL(/\/climate-files\/\d+$/);
+      await page.getByRole('heading', { name: 'synthetic-typical-year' }).waitFor();
+      expect(await page.getByTestId('recognised-format').innerText()).toContain('EPW');
+      expect(await page.getByTestId('typical-year').innerText()).toContain('placed in 2001');
+      await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(2);
+      await h.shot('climate-file-epw-si', 300);
+      await h.useUnits('IP');
+      await expect.poll(() => page.getByTestId('file-origin').innerText()).toContain('ft');
+      await h.shot('climate-file-epw-ip', 300);
+    },
+  );
 
   it('fills a new site from a weather file header in the site form', { timeout: 60_000 }, async () => {
     const page = h.page;

@@ -124,7 +124,15 @@ describe('a newcomer touring the demo workspace', () => {
     const atDefaultSupply = await preview.innerText();
     await page.getByLabel('Supply air setpoint').fill('18');
     // A cooler supply leaves fewer free-cooling hours; wait for the preview to follow the edit.
-    await expect.poll(async () => { const now = await settledPreview(); return now !== '' && now !== atDefaultSupply && !now.includes('updating'); }, { timeout: 20_000 }).toBe(true);
+    await expect
+      .poll(
+        async () => {
+          const now = await settledPreview();
+          return now !== '' && now !== atDefaultSupply && !now.includes('updating');
+        },
+        { timeout: 20_000 },
+      )
+      .toBe(true);
     const previewFree = Number(/Free cooling\s+([\d,]+) h/.exec(await preview.innerText())?.[1].replaceAll(',', ''));
     for (const box of await page.getByRole('group', { name: 'On climate files' }).getByRole('checkbox').all()) {
       const label = (await box.locator('xpath=..').innerText()).trim();
@@ -226,10 +234,16 @@ describe('a newcomer touring the demo workspace', () => {
     await expect.poll(() => page.getByText('Your role: viewer').isVisible()).toBe(true);
     expect(await page.getByRole('link', { name: 'Upload climate file' }).count()).toBe(0);
     expect(await page.getByRole('link', { name: 'New scenario' }).count()).toBe(0);
-    await page.getByTestId('runs-table').getByRole('link', { name: `#${ourRunId}` }).waitFor();
+    await page
+      .getByTestId('runs-table')
+      .getByRole('link', { name: `#${ourRunId}` })
+      .waitFor();
     await h.shot('demo-13-viewer-overview');
 
-    await page.getByTestId('runs-table').getByRole('link', { name: `#${ourRunId}` }).click();
+    await page
+      .getByTestId('runs-table')
+      .getByRole('link', { name: `#${ourRunId}` })
+      .click();
     await page.waitForURL(`**/projects/${projectId}/runs/${ourRunId}`);
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('done');
     expect((await modeHours(page)).total).toBe(26_280);

@@ -35,10 +35,26 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   owner = personWithSession(h.testApp.db, 'ilse.marrow@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Zimna Dolina hall study', [[owner, 'owner']]);
-  const { site } = await h.api<{ site: { id: number } }>(owner, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Zimna Dolina', elevationM: 158, timeZone: 'Europe/Warsaw' }));
-  const { climateFile } = await h.api<{ climateFile: { id: number } }>(owner, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=zimna-dolina.csv`, coldSite, 'text/csv');
+  const { site } = await h.api<{ site: { id: number } }>(
+    owner,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Zimna Dolina', elevationM: 158, timeZone: 'Europe/Warsaw' }),
+  );
+  const { climateFile } = await h.api<{ climateFile: { id: number } }>(
+    owner,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=zimna-dolina.csv`,
+    coldSite,
+    'text/csv',
+  );
   const { scenario } = await h.api<{ scenario: { id: number } }>(owner, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }));
-  const created = await h.api<{ runs: { id: number }[] }>(owner, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }));
+  const created = await h.api<{ runs: { id: number }[] }>(
+    owner,
+    'POST',
+    `/projects/${projectId}/runs`,
+    JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }),
+  );
   newRun = created.runs[0].id;
   await h.testApp.runQueue.idle();
   const db = h.testApp.db;
@@ -48,13 +64,30 @@ beforeAll(async () => {
   // A run as engine 1.0.0 stored it: the same hours without the counts it did not make.
   const strip = ({ humidified: _h, partialMechanical: _p, ...rest }: Record<string, unknown>) => rest;
   const { humidificationL: _a, evaporativeCoolingL: _b, driftL: _c, ...water } = results.water;
-  const oldResults = { ...results, engineVersion: 'scenario-engine 1.0.0', hours: strip({ ...results.hours }), hoursByMonth: results.hoursByMonth.map((m) => strip({ ...m })), hoursByYear: results.hoursByYear.map((y) => strip({ ...y })), water };
+  const oldResults = {
+    ...results,
+    engineVersion: 'scenario-engine 1.0.0',
+    hours: strip({ ...results.hours }),
+    hoursByMonth: results.hoursByMonth.map((m) => strip({ ...m })),
+    hoursByYear: results.hoursByYear.map((y) => strip({ ...y })),
+    water,
+  };
   const { id: _id, ...copy } = row;
-  oldRun = db.insert(runs).values({ ...copy, engineVersion: 'scenario-engine 1.0.0', resultsJson: JSON.stringify(oldResults) }).returning().get().id;
+  oldRun = db
+    .insert(runs)
+    .values({ ...copy, engineVersion: 'scenario-engine 1.0.0', resultsJson: JSON.stringify(oldResults) })
+    .returning()
+    .get().id;
   const hours = db.select().from(runHours).where(eq(runHours.runId, newRun)).get()!;
-  db.insert(runHours).values({ ...hours, runId: oldRun }).run();
+  db.insert(runHours)
+    .values({ ...hours, runId: oldRun })
+    .run();
   // A scenario saved by engine 1.0.0, migrated as the server does at start-up.
-  oldScenarioId = db.insert(scenarios).values({ projectId, name: OLD_SCENARIO.name, scenarioJson: JSON.stringify(OLD_SCENARIO) }).returning().get().id;
+  oldScenarioId = db
+    .insert(scenarios)
+    .values({ projectId, name: OLD_SCENARIO.name, scenarioJson: JSON.stringify(OLD_SCENARIO) })
+    .returning()
+    .get().id;
   expect(prepareStoredData(db, { demo: true })).toMatchObject({ migratedScenarios: 1 });
 
   pageErrors = collectPageErrors(h.page, { ignoreConsole: failedResourceLoad });
@@ -80,7 +113,9 @@ describe('the new counts on screen', () => {
     const yearText = await page.getByTestId('year-table').innerText();
     for (const y of results.hoursByYear) expect(yearText).toContain(fmt(y.humidified));
     expect(results.hoursByYear.reduce((sum, y) => sum + y.humidified, 0)).toBe(results.hours.humidified);
-    expect(await page.getByTestId('water-humidificationL').innerText()).toContain(`${(results.water.humidificationL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`);
+    expect(await page.getByTestId('water-humidificationL').innerText()).toContain(
+      `${(results.water.humidificationL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`,
+    );
     await h.shot('engine-counts-run-si');
     await h.useUnits('IP');
     await page.getByTestId('mode-hours').waitFor();

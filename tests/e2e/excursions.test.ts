@@ -26,8 +26,19 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   operator = personWithSession(h.testApp.db, 'wren.okafor@example.test');
   projectId = projectWithMembers(h.testApp.db, 'North hall setpoint review', [[operator, 'engineer']]);
-  const { site } = await h.api<{ site: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 20, timeZone: 'UTC' }));
-  const { climateFile } = await h.api<{ climateFile: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const { site } = await h.api<{ site: { id: number } }>(
+    operator,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Kelderwick Point', elevationM: 20, timeZone: 'UTC' }),
+  );
+  const { climateFile } = await h.api<{ climateFile: { id: number } }>(
+    operator,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
+    threeYears,
+    'text/csv',
+  );
   for (const supplyAirC of [25, 20]) {
     const { scenario } = await h.api<{ scenario: { id: number } }>(
       operator,
@@ -35,13 +46,39 @@ beforeAll(async () => {
       `/projects/${projectId}/scenarios`,
       JSON.stringify({ scenario: { ...directAirSample, name: `Direct air, ${supplyAirC} °C supply`, system: { ...directAirSample.system, supplyAirC } } }),
     );
-    const { runs } = await h.api<{ runs: { id: number }[] }>(operator, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }));
+    const { runs } = await h.api<{ runs: { id: number }[] }>(
+      operator,
+      'POST',
+      `/projects/${projectId}/runs`,
+      JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [climateFile.id] }),
+    );
     runIds.push(runs[0].id);
   }
-  const east = await h.api<{ site: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick East', elevationM: 20, timeZone: 'Europe/Oslo' }));
-  const eastFile = await h.api<{ climateFile: { id: number } }>(operator, 'POST', `/projects/${projectId}/sites/${east.site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
-  const { scenario } = await h.api<{ scenario: { id: number } }>(operator, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
-  const shifted = await h.api<{ runs: { id: number }[] }>(operator, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [eastFile.climateFile.id] }));
+  const east = await h.api<{ site: { id: number } }>(
+    operator,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Kelderwick East', elevationM: 20, timeZone: 'Europe/Oslo' }),
+  );
+  const eastFile = await h.api<{ climateFile: { id: number } }>(
+    operator,
+    'POST',
+    `/projects/${projectId}/sites/${east.site.id}/climate-files?fileName=kelderwick-point.csv`,
+    threeYears,
+    'text/csv',
+  );
+  const { scenario } = await h.api<{ scenario: { id: number } }>(
+    operator,
+    'POST',
+    `/projects/${projectId}/scenarios`,
+    JSON.stringify({ scenario: directAirSample }),
+  );
+  const shifted = await h.api<{ runs: { id: number }[] }>(
+    operator,
+    'POST',
+    `/projects/${projectId}/runs`,
+    JSON.stringify({ scenarioIds: [scenario.id], climateFileIds: [eastFile.climateFile.id] }),
+  );
   shiftedRunId = shifted.runs[0].id;
   await h.testApp.runQueue.idle();
   pageErrors = collectPageErrors(h.page);
@@ -75,7 +112,7 @@ describe('year-to-year statistics of a three-year file', () => {
     await h.useUnits('SI');
   });
 
-  it('counts a year an hour short on the site\'s clock as whole, and leaves out the hour that spills into the next', async () => {
+  it("counts a year an hour short on the site's clock as whole, and leaves out the hour that spills into the next", async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${shiftedRunId}`);
     await page.getByTestId('year-table').waitFor({ timeout: 20_000 });
@@ -90,7 +127,7 @@ describe('year-to-year statistics of a three-year file', () => {
     await panelShot('year-table', 'run-year-statistics-partial-si');
   });
 
-  it('shows each run\'s mechanical-hour spread on the compare page', async () => {
+  it("shows each run's mechanical-hour spread on the compare page", async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/compare?runs=${runIds.join(',')}`);
     const table = page.getByTestId('year-spread-table');

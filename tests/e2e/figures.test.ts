@@ -45,13 +45,29 @@ beforeAll(async () => {
     `/projects/${projectId}/sites`,
     JSON.stringify({ name: 'Plateau hall (synthetic)', elevationM: SITE_ELEVATION_M, timeZone: 'Europe/London' }),
   );
-  const upload = await h.api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const upload = await h.api<{ climateFile: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
+    threeYears,
+    'text/csv',
+  );
   climateFileId = upload.climateFile.id;
-  const { scenario } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+  const { scenario } = await h.api<{ scenario: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/scenarios`,
+    JSON.stringify({ scenario: directAirSample }),
+  );
   scenarioId = scenario.id;
   pageErrors = collectPageErrors(h.page);
   // The run the later tests read: the sample scenario on the 1,400 m site.
-  const { runs } = await h.api<{ runs: { id: number }[] }>(engineer, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }));
+  const { runs } = await h.api<{ runs: { id: number }[] }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/runs`,
+    JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFileId] }),
+  );
   runId = runs[0].id;
   await h.signInAs(engineer);
   await h.page.goto(h.baseUrl);
@@ -71,14 +87,16 @@ describe('a supply sweep past the derated envelope (defect 1)', () => {
     // A1 allowable: 32 °C, lowered 1 K per 300 m above 900 m (ASHRAE TC 9.9 2021 footnote, recalled from memory):
     // at 1,400 m 32 − 500/300 = 30.33 °C, so 31 and 32 °C break it.
     const warning = await page.getByTestId('sweep-envelope-warning').innerText();
-    expect(warning).toContain('maximum 30.3 °C, derated for the site\'s 1,400 m');
+    expect(warning).toContain("maximum 30.3 °C, derated for the site's 1,400 m");
     expect(warning).toContain('31.0 °C; 32.0 °C');
     await h.shot('figures-sweep-warning-si');
     await page.getByRole('button', { name: 'Start sweep of 6 runs' }).click();
     await page.waitForURL(/\/sweeps\/\d+$/, { timeout: 15_000 });
     await expect.poll(() => page.getByTestId('sweep-progress').innerText(), { timeout: 90_000 }).toContain('6 of 6 points done');
     await chartsDrawn(page, manyCharts);
-    expect(await page.getByTestId('zero-mechanical').innerText()).toContain('Left out: 31.0 °C and 32.0 °C, where the supply setpoint is outside the inlet envelope');
+    expect(await page.getByTestId('zero-mechanical').innerText()).toContain(
+      'Left out: 31.0 °C and 32.0 °C, where the supply setpoint is outside the inlet envelope',
+    );
     expect(await page.getByTestId('envelope-breaking-notice').isVisible()).toBe(true);
     const table = page.getByTestId('sweep-table');
     expect(await table.locator('tr[data-breaks-envelope="yes"]').count()).toBe(2);
@@ -103,14 +121,16 @@ describe('a supply sweep past the derated envelope (defect 1)', () => {
 });
 
 describe('one elevation, fan groups and local unit switches (defects 2, 4, 5)', () => {
-  it('shows the site\'s elevation read-only in the editor, states it in the summary CSV, and names the fan groups', async () => {
+  it("shows the site's elevation read-only in the editor, states it in the summary CSV, and names the fan groups", async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/${scenarioId}`);
     const elevations = page.getByTestId('site-elevations');
     await expect.poll(() => elevations.innerText(), { timeout: 15_000 }).toContain('Plateau hall (synthetic): 1,400 m');
     expect(await page.getByLabel('Site elevation').count()).toBe(0);
     await h.shot('figures-editor-elevation-si');
-    await expect.poll(async () => (await h.api<{ run: { status: string } }>(engineer, 'GET', `/projects/${projectId}/runs/${runId}`)).run.status, { timeout: 60_000 }).toBe('done');
+    await expect
+      .poll(async () => (await h.api<{ run: { status: string } }>(engineer, 'GET', `/projects/${projectId}/runs/${runId}`)).run.status, { timeout: 60_000 })
+      .toBe('done');
     const summary = await page.evaluate(async (url) => (await fetch(url)).text(), `/api/projects/${projectId}/runs/${runId}/downloads/summary.csv`);
     expect(summary).toContain('site,Site elevation used,m,1400');
     expect(summary).toContain('site,Air pressure used,,station pressure from the climate file');
@@ -121,9 +141,11 @@ describe('one elevation, fan groups and local unit switches (defects 2, 4, 5)', 
   });
 
   // The run page draws 26,280 hours in several charts; on a busy machine it takes a while before it answers a click.
-  it('turns a report and the moist-air chart to IP without changing the person\'s setting', { timeout: 180_000 }, async () => {
+  it("turns a report and the moist-air chart to IP without changing the person's setting", { timeout: 180_000 }, async () => {
     const page = h.page;
-    await expect.poll(async () => (await h.api<{ run: { status: string } }>(engineer, 'GET', `/projects/${projectId}/runs/${runId}`)).run.status, { timeout: 60_000 }).toBe('done');
+    await expect
+      .poll(async () => (await h.api<{ run: { status: string } }>(engineer, 'GET', `/projects/${projectId}/runs/${runId}`)).run.status, { timeout: 60_000 })
+      .toBe('done');
     await page.goto(`${h.baseUrl}/projects/${projectId}/runs/${runId}/report`);
     const toolbar = page.getByTestId('report-toolbar');
     await toolbar.getByRole('group', { name: 'Units of this report' }).getByRole('button', { name: 'IP' }).click({ timeout: 15_000 });
@@ -160,7 +182,10 @@ describe('role and sign-in edges (defect 11)', () => {
   it('names the project and the inviter on an invitation opened signed out, and logs no 401 or 404 signed out', async () => {
     await h.api(owner, 'POST', `/projects/${projectId}/invites`, JSON.stringify({ email: 'new.colleague@example.test', role: 'viewer' }));
     const { messages } = await h.api<{ messages: { to: string[]; text: string }[] }>(admin, 'GET', '/mailbox');
-    const link = messages.filter((m) => m.to.join(' ').includes('new.colleague@example.test')).pop()!.text.match(/http\S+\/invites\/accept\?token=\S+/)![0];
+    const link = messages
+      .filter((m) => m.to.join(' ').includes('new.colleague@example.test'))
+      .pop()!
+      .text.match(/http\S+\/invites\/accept\?token=\S+/)![0];
     await h.signInAs(null);
     const failed: string[] = [];
     h.page.on('response', (r) => {

@@ -43,12 +43,7 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   engineer = personWithSession(h.testApp.db, 'amara.velde@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Mesa hall study', [[engineer, 'engineer']]);
-  await h.api(
-    engineer,
-    'POST',
-    `/projects/${projectId}/sites`,
-    JSON.stringify({ name: 'Red Mesa', elevationM: 250, timeZone: 'UTC-07:00' }),
-  );
+  await h.api(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Red Mesa', elevationM: 250, timeZone: 'UTC-07:00' }));
 
   await h.signInAs(engineer);
   pageErrors = collectPageErrors(h.page, { ignoreConsole: failedResourceLoad });
@@ -86,9 +81,13 @@ describe('weather files for a site on a fixed UTC offset', () => {
   it('uploads three yearly files as one climate file, then runs a scenario on it and reads the run page', { timeout: 180_000 }, async () => {
     const page = h.page;
     await openWizard();
-    await page.getByLabel('File', { exact: true }).setInputFiles([2023, 2021, 2022].map((y) => ({ name: `red-mesa-${y}.csv`, mimeType: 'text/csv', buffer: yearFile(y) })));
+    await page
+      .getByLabel('File', { exact: true })
+      .setInputFiles([2023, 2021, 2022].map((y) => ({ name: `red-mesa-${y}.csv`, mimeType: 'text/csv', buffer: yearFile(y) })));
     await page.getByLabel('Times written without a UTC offset are').selectOption('site-standard');
-    expect(await page.getByTestId('chosen-files').innerText()).toMatch(/3 files, .* in all[\s\S]*red-mesa-2021\.csv[\s\S]*red-mesa-2022\.csv[\s\S]*red-mesa-2023\.csv/);
+    expect(await page.getByTestId('chosen-files').innerText()).toMatch(
+      /3 files, .* in all[\s\S]*red-mesa-2021\.csv[\s\S]*red-mesa-2022\.csv[\s\S]*red-mesa-2023\.csv/,
+    );
     expect(await page.getByLabel('Name in the project').inputValue()).toBe('red-mesa-2021–red-mesa-2023 (3 files)');
     await h.shot('file-sets-chosen-si');
 
@@ -112,7 +111,9 @@ describe('weather files for a site on a fixed UTC offset', () => {
     expect(rows.map((r) => r.split('\t')[0])).toEqual(['red-mesa-2021.csv', 'red-mesa-2022.csv', 'red-mesa-2023.csv']);
     // each file: 8,760 hours on lines 2–8761
     for (const row of rows) expect(row).toMatch(/8,760\s+2–8761/);
-    expect(await page.getByTestId('validation-report').innerText()).toContain('Imported 26280 hours from 3 files, 2021-01-01 00:00 to 2023-12-31 23:00 site standard time (UTC−07:00)');
+    expect(await page.getByTestId('validation-report').innerText()).toContain(
+      'Imported 26280 hours from 3 files, 2021-01-01 00:00 to 2023-12-31 23:00 site standard time (UTC−07:00)',
+    );
     await h.shot('file-sets-report-si');
     await page.getByRole('button', { name: 'Store 3 files as one climate file' }).click();
     await page.waitForURL(/\/climate-files\/\d+$/);
@@ -121,7 +122,12 @@ describe('weather files for a site on a fixed UTC offset', () => {
     await expect.poll(() => page.getByTestId('climate-file-facts').innerText()).toContain('2021–2023');
     await h.shot('file-sets-file-page-si');
 
-    const { scenario } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+    const { scenario } = await h.api<{ scenario: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/scenarios`,
+      JSON.stringify({ scenario: directAirSample }),
+    );
     await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/${scenario.id}`);
     const setChoice = page.getByLabel(/Red Mesa · red-mesa-2021–red-mesa-2023 \(3 files\)/);
     const epwChoice = page.getByLabel(/Red Mesa · quellmoor-typical/);
@@ -149,7 +155,9 @@ describe('weather files for a site on a fixed UTC offset', () => {
     await expect.poll(() => page.getByTestId('run-status').innerText()).toBe('done');
     await h.shot('file-sets-run-page-ip');
     await openWizard();
-    await page.getByLabel('File', { exact: true }).setInputFiles([2021, 2022].map((y) => ({ name: `red-mesa-${y}.csv`, mimeType: 'text/csv', buffer: yearFile(y) })));
+    await page
+      .getByLabel('File', { exact: true })
+      .setInputFiles([2021, 2022].map((y) => ({ name: `red-mesa-${y}.csv`, mimeType: 'text/csv', buffer: yearFile(y) })));
     await page.getByRole('button', { name: 'Read the 2 files' }).click();
     await page.getByRole('button', { name: 'Continue to the report' }).click();
     await page.getByTestId('files-of-set').waitFor();

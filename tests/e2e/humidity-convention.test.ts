@@ -18,7 +18,13 @@ let pageErrors: string[] = [];
 
 /** Synthetic winter hours at an invented site: RH 80 % at −10 °C, then −12 °C and −20 °C. */
 const winter = Buffer.from(
-  ['timestamp,dry_bulb_c,relative_humidity_pct', '2024-01-15T00:00Z,-10,80', '2024-01-15T01:00Z,-12,85', '2024-01-15T02:00Z,-20,90', '2024-01-15T03:00Z,-11,82'].join('\n'),
+  [
+    'timestamp,dry_bulb_c,relative_humidity_pct',
+    '2024-01-15T00:00Z,-10,80',
+    '2024-01-15T01:00Z,-12,85',
+    '2024-01-15T02:00Z,-20,90',
+    '2024-01-15T03:00Z,-11,82',
+  ].join('\n'),
 );
 
 beforeAll(async () => {
@@ -79,7 +85,12 @@ describe('humidity below 0 °C', () => {
     const fileId = Number(page.url().split('/').pop());
 
     // A run made from the file keeps the choice with its inputs; the run page and its report say how the humidity was read.
-    const { scenario } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+    const { scenario } = await h.api<{ scenario: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/scenarios`,
+      JSON.stringify({ scenario: directAirSample }),
+    );
     const { runs } = await h.api<{ runs: Array<{ id: number }> }>(
       engineer,
       'POST',

@@ -26,7 +26,12 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   engineer = personWithSession(h.testApp.db, 'marit.oyelaran@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Kelderwick chart study', [[engineer, 'engineer']]);
-  const { site } = await h.api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 40 }));
+  const { site } = await h.api<{ site: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Kelderwick Point', elevationM: 40 }),
+  );
   const upload = await h.api<{ climateFile: { id: number; hours: number } }>(
     engineer,
     'POST',
@@ -130,7 +135,9 @@ describe('the moist-air chart of a design', () => {
     await page.getByLabel('Supply air setpoint').fill('18');
     await expect.poll(async () => (await regionHours(preview)).free, { timeout: 15_000 }).toBeLessThan(before.free);
     const after = await regionHours(preview);
-    expect(after.adiabatic + after.partialMechanical + (after.mechanical ?? 0)).toBeGreaterThan(before.adiabatic + before.partialMechanical + (before.mechanical ?? 0));
+    expect(after.adiabatic + after.partialMechanical + (after.mechanical ?? 0)).toBeGreaterThan(
+      before.adiabatic + before.partialMechanical + (before.mechanical ?? 0),
+    );
     expect(await preview.getByTestId('region-table').innerText()).toContain('at most 17.0 °C');
     await h.shot('moist-air-editor-moved-si');
   }, 120_000);

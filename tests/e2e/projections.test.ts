@@ -27,8 +27,19 @@ beforeAll(async () => {
   h = await startBrowserHarness();
   engineer = personWithSession(h.testApp.db, 'ines.varga@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Valley campus futures', [[engineer, 'engineer']]);
-  const { site } = await h.api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Zimna Dolina', elevationM: 412, timeZone: 'Europe/Warsaw' }));
-  const file = await h.api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=zimna-dolina.csv`, weather, 'text/csv');
+  const { site } = await h.api<{ site: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Zimna Dolina', elevationM: 412, timeZone: 'Europe/Warsaw' }),
+  );
+  const file = await h.api<{ climateFile: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=zimna-dolina.csv`,
+    weather,
+    'text/csv',
+  );
   parentId = file.climateFile.id;
   await h.api(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }));
   await h.signInAs(engineer);

@@ -42,7 +42,12 @@ beforeAll(async () => {
     [owner, 'owner'],
     [viewer, 'viewer'],
   ]);
-  const { site } = await h.api<{ site: { id: number } }>(owner, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }));
+  const { site } = await h.api<{ site: { id: number } }>(
+    owner,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
+  );
   const { climateFile } = await h.api<{ climateFile: { id: number } }>(
     owner,
     'POST',
@@ -57,7 +62,12 @@ beforeAll(async () => {
     const { scenario: stored } = await h.api<{ scenario: { id: number } }>(owner, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario }));
     ids.push(stored.id);
   }
-  const { runs } = await h.api<{ runs: { id: number }[] }>(owner, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: ids, climateFileIds: [climateFile.id] }));
+  const { runs } = await h.api<{ runs: { id: number }[] }>(
+    owner,
+    'POST',
+    `/projects/${projectId}/runs`,
+    JSON.stringify({ scenarioIds: ids, climateFileIds: [climateFile.id] }),
+  );
   [runA, runB] = runs.map((r) => r.id);
   await h.testApp.runQueue.idle();
   pageErrors = collectPageErrors(h.page, { ignoreConsole: (text) => expectedRefusals?.test(text) ?? false });
@@ -85,7 +95,11 @@ describe('the report of a run', () => {
     expect(await page.getByTestId('report-method').innerText()).toContain('ISO/IEC 30134-9');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
     // The figures are the run's own.
-    const { run } = await h.api<{ run: { results: { hours: { free: number; mechanical: number }; energy: { partialPue: number } } } }>(owner, 'GET', `/projects/${projectId}/runs/${runA}`);
+    const { run } = await h.api<{ run: { results: { hours: { free: number; mechanical: number }; energy: { partialPue: number } } } }>(
+      owner,
+      'GET',
+      `/projects/${projectId}/runs/${runA}`,
+    );
     expect(await page.getByTestId('report-ppue').innerText()).toBe(run.results.energy.partialPue.toFixed(3));
     expect(await page.getByTestId('report-headline').innerText()).toContain(`${run.results.hours.free.toLocaleString('en')} h`);
     // Up to 13 mechanical hours in 26,280 (under 0.05 %) are not rounded away to 0.0 % (nor free cooling up to 100.0 %).

@@ -29,7 +29,12 @@ beforeAll(async () => {
     [engineer, 'engineer'],
     [viewer, 'viewer'],
   ]);
-  const { site } = await h.api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Saltmarsh Point', elevationM: 120 }));
+  const { site } = await h.api<{ site: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites`,
+    JSON.stringify({ name: 'Saltmarsh Point', elevationM: 120 }),
+  );
   await h.api(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
   pageErrors = collectPageErrors(h.page);
   await h.signInAs(engineer);
@@ -104,7 +109,11 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await page.getByRole('button', { name: 'Save changes' }).click();
     await expect.poll(() => page.getByText('Unsaved changes').isVisible()).toBe(false);
     await expect.poll(() => page.getByTestId('scenario-runs').innerText()).toContain('Saltmarsh Point');
-    const stored = await h.api<{ scenario: { scenario: { system: { supplyAirC: number } } } }>(engineer, 'GET', `/projects/${projectId}/scenarios/${scenarioId}`);
+    const stored = await h.api<{ scenario: { scenario: { system: { supplyAirC: number } } } }>(
+      engineer,
+      'GET',
+      `/projects/${projectId}/scenarios/${scenarioId}`,
+    );
     expect(stored.scenario.scenario.system.supplyAirC).toBeCloseTo(15, 9);
 
     await page.getByRole('button', { name: 'Run', exact: true }).click();
@@ -131,9 +140,7 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await page.getByLabel('Water-side economiser').check();
     await page.getByLabel('Heat rejection').selectOption('dry-cooler');
     await page.getByLabel('Chilled-water supply').fill('30');
-    await expect
-      .poll(() => page.getByText('“Chilled-water supply” must be below “supply air setpoint”.').isVisible())
-      .toBe(true);
+    await expect.poll(() => page.getByText('“Chilled-water supply” must be below “supply air setpoint”.').isVisible()).toBe(true);
     expect(await page.getByLabel('Approach', { exact: true }).isVisible()).toBe(true);
     await h.shot('scenario-editor-water-side-si');
     // A cooling tower brings its own inputs: freeze protection, drift and basin heaters (engine 2.0.0).
@@ -198,7 +205,15 @@ describe('a run still computing', () => {
   it('says it is running and since when, with no made-up progress bar, and can be cancelled', async () => {
     // The pool finishes a 72-hour run in milliseconds, so the server's answers for one run are held at "running" here.
     const { run } = await h.api<{ run: Record<string, unknown> }>(engineer, 'GET', `/projects/${projectId}/runs/${firstRunId}`);
-    let state: Record<string, unknown> = { ...run, id: 9001, status: 'running', progress: 0, startedAt: '2026-03-02T09:15:07Z', results: null, finishedAt: null };
+    let state: Record<string, unknown> = {
+      ...run,
+      id: 9001,
+      status: 'running',
+      progress: 0,
+      startedAt: '2026-03-02T09:15:07Z',
+      results: null,
+      finishedAt: null,
+    };
     const page = h.page;
     await page.route(`**/api/projects/${projectId}/runs/9001`, (route) => route.fulfill({ json: { run: state } }));
     await page.route(`**/api/projects/${projectId}/runs/9001/cancel`, (route) => {

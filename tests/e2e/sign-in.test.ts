@@ -48,7 +48,9 @@ describe('signing in through the local provider', () => {
 
     await h.page.getByRole('link', { name: 'Mailbox' }).click();
     await h.page.getByTestId('message-body').waitFor();
-    expect(await h.page.getByTestId('message-body').innerText()).toContain('invited you to the Tramontane project "Larchfield campus study (demo)" as engineer');
+    expect(await h.page.getByTestId('message-body').innerText()).toContain(
+      'invited you to the Tramontane project "Larchfield campus study (demo)" as engineer',
+    );
     await h.screenshot('mailbox');
 
     await h.page.getByRole('link', { name: 'Audit trail' }).click();
@@ -100,7 +102,15 @@ describe('signing in through the local provider', () => {
     await h.page.getByRole('radio', { name: 'IP' }).click();
     await expect.poll(() => h.page.getByRole('radio', { name: 'IP' }).getAttribute('aria-checked')).toBe('true');
     // Remembered for the person, not only in this browser.
-    await expect.poll(() => h.page.evaluate(() => fetch('/api/me').then((r) => r.json()).then((b) => b.settings.unitSystem))).toBe('ip');
+    await expect
+      .poll(() =>
+        h.page.evaluate(() =>
+          fetch('/api/me')
+            .then((r) => r.json())
+            .then((b) => b.settings.unitSystem),
+        ),
+      )
+      .toBe('ip');
     await h.screenshot('settings');
   });
 

@@ -26,10 +26,34 @@ afterAll(() => h?.close());
 
 describe('storage against the limit, and a long issue list', () => {
   it('shows on the project page what the project stores against its limit', { timeout: 120_000 }, async () => {
-    const site = await h.api<{ site: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Quay 4', elevationM: 8 }), 'application/json');
-    const file = await h.api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.site.id}/climate-files?fileName=three-days.csv`, threeDaysCsv, 'text/csv');
-    const scenario = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }), 'application/json');
-    await h.api(engineer, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenario.scenario.id, scenario.scenario.id], climateFileIds: [file.climateFile.id] }), 'application/json');
+    const site = await h.api<{ site: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sites`,
+      JSON.stringify({ name: 'Quay 4', elevationM: 8 }),
+      'application/json',
+    );
+    const file = await h.api<{ climateFile: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/sites/${site.site.id}/climate-files?fileName=three-days.csv`,
+      threeDaysCsv,
+      'text/csv',
+    );
+    const scenario = await h.api<{ scenario: { id: number } }>(
+      engineer,
+      'POST',
+      `/projects/${projectId}/scenarios`,
+      JSON.stringify({ scenario: directAirSample }),
+      'application/json',
+    );
+    await h.api(
+      engineer,
+      'POST',
+      `/projects/${projectId}/runs`,
+      JSON.stringify({ scenarioIds: [scenario.scenario.id, scenario.scenario.id], climateFileIds: [file.climateFile.id] }),
+      'application/json',
+    );
     await h.testApp.runQueue.idle();
 
     const page = h.page;
@@ -43,7 +67,10 @@ describe('storage against the limit, and a long issue list', () => {
 
   it('says the report lists the first 200 of the issues and links the full list', { timeout: 120_000 }, async () => {
     const start = Date.UTC(2020, 0, 1);
-    const rows = Array.from({ length: 1_000 }, (_, i) => `${new Date(start + i * 3_600_000).toISOString().slice(0, 16)}Z,${i % 3 === 0 ? `warm${i}` : '12.5'},55`);
+    const rows = Array.from(
+      { length: 1_000 },
+      (_, i) => `${new Date(start + i * 3_600_000).toISOString().slice(0, 16)}Z,${i % 3 === 0 ? `warm${i}` : '12.5'},55`,
+    );
     const folder = mkdtempSync(path.join(tmpdir(), 'tramontane-broken-'));
     const broken = path.join(folder, 'broken-thermometer.csv');
     writeFileSync(broken, ['timestamp,dry_bulb_c,relative_humidity_pct', ...rows].join('\n'));

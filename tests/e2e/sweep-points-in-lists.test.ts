@@ -23,13 +23,45 @@ beforeAll(async () => {
   analyst = personWithSession(h.testApp.db, 'wren.okafor@example.test');
   projectId = projectWithMembers(h.testApp.db, 'Fenmouth hall study', [[analyst, 'engineer']]);
   const { site } = await h.api<{ site: { id: number } }>(analyst, 'POST', `/projects/${projectId}/sites`, JSON.stringify({ name: 'Fenmouth', elevationM: 40 }));
-  const { climateFile } = await h.api<{ climateFile: { id: number } }>(analyst, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`, threeDays, 'text/csv');
-  scenarioId = (await h.api<{ scenario: { id: number } }>(analyst, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir }))).scenario.id;
+  const { climateFile } = await h.api<{ climateFile: { id: number } }>(
+    analyst,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=three-days.csv`,
+    threeDays,
+    'text/csv',
+  );
+  scenarioId = (await h.api<{ scenario: { id: number } }>(analyst, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAir })))
+    .scenario.id;
   const body = (name: string, axes: unknown[]) => JSON.stringify({ name, scenarioId, climateFileId: climateFile.id, axes });
-  const first = await h.api<{ runs: { id: number }[] }>(analyst, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }));
-  lineSweep = (await h.api<{ sweep: typeof lineSweep }>(analyst, 'POST', `/projects/${projectId}/sweeps`, body(lineName, [{ input: 'system.supplyAirC', from: 18, to: 30, step: 1 }]))).sweep;
-  const second = await h.api<{ runs: { id: number }[] }>(analyst, 'POST', `/projects/${projectId}/runs`, JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }));
-  await h.api(analyst, 'POST', `/projects/${projectId}/sweeps`, body(gridName, [{ input: 'system.supplyAirC', from: 20, to: 22, step: 2 }, { input: 'energy.itLoadKw', from: 500, to: 1000, step: 500 }]));
+  const first = await h.api<{ runs: { id: number }[] }>(
+    analyst,
+    'POST',
+    `/projects/${projectId}/runs`,
+    JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }),
+  );
+  lineSweep = (
+    await h.api<{ sweep: typeof lineSweep }>(
+      analyst,
+      'POST',
+      `/projects/${projectId}/sweeps`,
+      body(lineName, [{ input: 'system.supplyAirC', from: 18, to: 30, step: 1 }]),
+    )
+  ).sweep;
+  const second = await h.api<{ runs: { id: number }[] }>(
+    analyst,
+    'POST',
+    `/projects/${projectId}/runs`,
+    JSON.stringify({ scenarioIds: [scenarioId], climateFileIds: [climateFile.id] }),
+  );
+  await h.api(
+    analyst,
+    'POST',
+    `/projects/${projectId}/sweeps`,
+    body(gridName, [
+      { input: 'system.supplyAirC', from: 20, to: 22, step: 2 },
+      { input: 'energy.itLoadKw', from: 500, to: 1000, step: 500 },
+    ]),
+  );
   plainRunIds = [second.runs[0].id, first.runs[0].id];
   // 2 plain runs and 13 + 4 points, all on 72 hours.
   await h.testApp.runQueue.idle();
@@ -62,7 +94,7 @@ describe('an analyst with two sweeps beside plain runs', () => {
     await page.waitForURL(`**/projects/${projectId}/sweeps/${lineSweep.id}`);
   });
 
-  it('sees the same folding in the scenario editor\'s run list', async () => {
+  it("sees the same folding in the scenario editor's run list", async () => {
     const page = h.page;
     await page.goto(`${h.baseUrl}/projects/${projectId}/scenarios/${scenarioId}`);
     const list = page.getByTestId('scenario-runs');
@@ -73,7 +105,9 @@ describe('an analyst with two sweeps beside plain runs', () => {
       expect.stringContaining('13 points, 13 done'),
     ]);
     // The compare link takes the plain runs only.
-    expect(await page.getByRole('link', { name: 'Compare these runs' }).getAttribute('href')).toBe(`/projects/${projectId}/compare?runs=${plainRunIds.join(',')}`);
+    expect(await page.getByRole('link', { name: 'Compare these runs' }).getAttribute('href')).toBe(
+      `/projects/${projectId}/compare?runs=${plainRunIds.join(',')}`,
+    );
     await h.shot('sweep-points-scenario-si');
   });
 
@@ -106,7 +140,13 @@ describe('an analyst with two sweeps beside plain runs', () => {
     await page.getByLabel('Runs listed').selectOption('all');
     await expect.poll(() => picker.locator('tbody tr').count()).toBe(19);
     // 24 °C × 9/5 + 32 = 75.2 °F (exact, by the definition of the Fahrenheit scale).
-    expect(await picker.getByRole('row').filter({ hasText: `#${p24} ` }).getByTestId('sweep-point-value').innerText()).toBe('supply air 75.2 °F');
+    expect(
+      await picker
+        .getByRole('row')
+        .filter({ hasText: `#${p24} ` })
+        .getByTestId('sweep-point-value')
+        .innerText(),
+    ).toBe('supply air 75.2 °F');
     const gridRow = picker.getByRole('row').filter({ hasText: `Point of sweep ${gridName}` });
     expect(await gridRow.getByTestId('sweep-point-value').allInnerTexts()).toEqual([
       // Newest first: 22 °C = 71.6 °F and 20 °C = 68.0 °F (°C × 9/5 + 32, exact), each at 1,000 kW then 500 kW.
@@ -119,7 +159,7 @@ describe('an analyst with two sweeps beside plain runs', () => {
     await h.useUnits('SI');
   });
 
-  it('reads on a point\'s run page which sweep it belongs to and its value, with a link to the sweep', async () => {
+  it("reads on a point's run page which sweep it belongs to and its value, with a link to the sweep", async () => {
     const page = h.page;
     const point = lineSweep.points[6];
     expect(point.values['system.supplyAirC']).toBe(24);

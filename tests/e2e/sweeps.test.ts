@@ -35,18 +35,39 @@ beforeAll(async () => {
     `/projects/${projectId}/sites`,
     JSON.stringify({ name: 'Kelderwick Point', elevationM: 14, timeZone: 'Europe/London' }),
   );
-  const upload = await h.api<{ climateFile: { id: number } }>(engineer, 'POST', `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`, threeYears, 'text/csv');
+  const upload = await h.api<{ climateFile: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/sites/${site.id}/climate-files?fileName=kelderwick-point.csv`,
+    threeYears,
+    'text/csv',
+  );
   climateFileId = upload.climateFile.id;
-  const { scenario } = await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: directAirSample }));
+  const { scenario } = await h.api<{ scenario: { id: number } }>(
+    engineer,
+    'POST',
+    `/projects/${projectId}/scenarios`,
+    JSON.stringify({ scenario: directAirSample }),
+  );
   scenarioId = scenario.id;
   // The same design held to the A2 allowable class (ASHRAE TC 9.9 2021 as in shared/scenario/envelopes.ts, recalled from memory):
   // its 21 °C dew-point limit leaves this maritime file no hour that needs compressors for moisture.
   const a2 = {
     ...directAirSample,
     name: 'Direct outdoor air, A2 allowable (synthetic demo)',
-    envelope: { presetId: 'ashrae-2021-a2', dryBulbMinC: 10, dryBulbMaxC: 35, dewPointMinC: -12, dewPointMaxC: 21, rhMinPct: 8, rhMaxPct: 80, altitudeDerating: { aboveElevationM: 900, metresPerKelvin: 300 } },
+    envelope: {
+      presetId: 'ashrae-2021-a2',
+      dryBulbMinC: 10,
+      dryBulbMaxC: 35,
+      dewPointMinC: -12,
+      dewPointMaxC: 21,
+      rhMinPct: 8,
+      rhMaxPct: 80,
+      altitudeDerating: { aboveElevationM: 900, metresPerKelvin: 300 },
+    },
   };
-  a2ScenarioId = (await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: a2 }))).scenario.id;
+  a2ScenarioId = (await h.api<{ scenario: { id: number } }>(engineer, 'POST', `/projects/${projectId}/scenarios`, JSON.stringify({ scenario: a2 }))).scenario
+    .id;
   pageErrors = collectPageErrors(h.page);
   await h.signInAs(engineer);
   await h.page.goto(h.baseUrl);

@@ -16,7 +16,26 @@ let h: BrowserHarness;
 let admin: TestPerson;
 let pageErrors: string[] = [];
 /** Every page of the workspace, by a short name; their addresses in the demo data are found once it is seeded. */
-const pageNames = ['home', 'project', 'site', 'climate-file', 'upload', 'scenario', 'run', 'excursions', 'report', 'compare', 'sweep', 'new-sweep', 'envelopes', 'members', 'calculator', 'settings', 'audit', 'people'] as const;
+const pageNames = [
+  'home',
+  'project',
+  'site',
+  'climate-file',
+  'upload',
+  'scenario',
+  'run',
+  'excursions',
+  'report',
+  'compare',
+  'sweep',
+  'new-sweep',
+  'envelopes',
+  'members',
+  'calculator',
+  'settings',
+  'audit',
+  'people',
+] as const;
 let pathOf: Record<(typeof pageNames)[number], string>;
 
 beforeAll(async () => {
@@ -32,9 +51,17 @@ beforeAll(async () => {
   const site = db.select({ id: sites.id }).from(sites).where(eq(sites.projectId, project.id)).get()!;
   const file = db.select({ id: climateFiles.id }).from(climateFiles).where(eq(climateFiles.projectId, project.id)).get()!;
   const scenario = db.select({ id: scenarios.id }).from(scenarios).where(eq(scenarios.projectId, project.id)).get()!;
-  const run = db.select({ id: runs.id }).from(runs).where(and(eq(runs.projectId, project.id), eq(runs.status, 'done'))).get()!;
+  const run = db
+    .select({ id: runs.id })
+    .from(runs)
+    .where(and(eq(runs.projectId, project.id), eq(runs.status, 'done')))
+    .get()!;
   const sweep = db.select({ id: sweeps.id }).from(sweeps).where(eq(sweeps.projectId, project.id)).get()!;
-  const doneRuns = db.select({ id: runs.id }).from(runs).where(and(eq(runs.projectId, project.id), isNotNull(runs.resultsJson))).all();
+  const doneRuns = db
+    .select({ id: runs.id })
+    .from(runs)
+    .where(and(eq(runs.projectId, project.id), isNotNull(runs.resultsJson)))
+    .all();
   pathOf = {
     home: '/',
     project: p,
@@ -45,7 +72,10 @@ beforeAll(async () => {
     run: `${p}/runs/${run.id}`,
     excursions: `${p}/runs/${run.id}/excursions`,
     report: `${p}/runs/${run.id}/report`,
-    compare: `${p}/compare?runs=${doneRuns.slice(0, 2).map((r) => r.id).join(',')}`,
+    compare: `${p}/compare?runs=${doneRuns
+      .slice(0, 2)
+      .map((r) => r.id)
+      .join(',')}`,
     sweep: `${p}/sweeps/${sweep.id}`,
     'new-sweep': `${p}/sweeps/new`,
     envelopes: `${p}/envelopes`,
@@ -82,12 +112,16 @@ const overflowPx = () => h.page.evaluate(() => document.scrollingElement!.scroll
 describe('on a phone, 390 px wide', () => {
   beforeAll(() => h.page.setViewportSize({ width: 390, height: 844 }));
 
-  it.each(pageNames)('the %s page fits the width and passes the accessibility check', async (name) => {
-    await open(pathOf[name]);
-    const problems: string[] = [];
-    await checked(`phone-${name}`, problems);
-    expect({ overflowPx: await overflowPx(), problems }).toEqual({ overflowPx: 0, problems: [] });
-  }, 180_000);
+  it.each(pageNames)(
+    'the %s page fits the width and passes the accessibility check',
+    async (name) => {
+      await open(pathOf[name]);
+      const problems: string[] = [];
+      await checked(`phone-${name}`, problems);
+      expect({ overflowPx: await overflowPx(), problems }).toEqual({ overflowPx: 0, problems: [] });
+    },
+    180_000,
+  );
 
   it('folds the header into a menu that opens on the page, with the account inside the window, and closes with Escape', async () => {
     await open(pathOf.project);
@@ -108,12 +142,16 @@ describe('on a phone, 390 px wide', () => {
 describe('at a desk, 1440 px wide', () => {
   beforeAll(() => h.page.setViewportSize({ width: 1440, height: 900 }));
 
-  it.each(pageNames)('the %s page passes the accessibility check', async (name) => {
-    await open(pathOf[name]);
-    const problems: string[] = [];
-    await checked(`desk-${name}`, problems);
-    expect(problems).toEqual([]);
-  }, 180_000);
+  it.each(pageNames)(
+    'the %s page passes the accessibility check',
+    async (name) => {
+      await open(pathOf[name]);
+      const problems: string[] = [];
+      await checked(`desk-${name}`, problems);
+      expect(problems).toEqual([]);
+    },
+    180_000,
+  );
 });
 
 describe('with the keyboard alone', () => {

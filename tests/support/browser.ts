@@ -90,7 +90,13 @@ export async function startBrowserHarness(overrides: Partial<AppDeps> = {}): Pro
     const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
     const serious = result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
     if (serious.length === 0) return;
-    const lines = serious.map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join('; ')}${v.nodes.length > 3 ? ` and ${v.nodes.length - 3} more` : ''}`);
+    const lines = serious.map(
+      (v) =>
+        `${v.id} (${v.impact}): ${v.help} — ${v.nodes
+          .slice(0, 3)
+          .map((n) => n.target.join(' '))
+          .join('; ')}${v.nodes.length > 3 ? ` and ${v.nodes.length - 3} more` : ''}`,
+    );
     throw new Error(`Accessibility check of ${where} (${page.url()}) found ${serious.length} serious violation(s):\n${lines.join('\n')}`);
   };
 

@@ -31,9 +31,12 @@ if (isRoot && hasCommand('apt-get')) {
   console.log("The browser tests need Chromium and /usr/bin/chromium is missing: installing Debian's chromium package (about a minute)…");
   try {
     execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit' });
-    execFileSync('apt-get', ['install', '-y', '-qq', 'chromium'], { stdio: ['ignore', 'ignore', 'inherit'], env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+    execFileSync('apt-get', ['install', '-y', '-qq', 'chromium'], {
+      stdio: ['ignore', 'ignore', 'inherit'],
+      env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
+    });
   } catch {
-    console.error("Installing chromium with apt-get failed; see the lines above. Install it by hand: apt-get install -y chromium");
+    console.error('Installing chromium with apt-get failed; see the lines above. Install it by hand: apt-get install -y chromium');
     process.exit(1);
   }
   if (executable(wanted)) {

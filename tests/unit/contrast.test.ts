@@ -48,7 +48,13 @@ function contrastRatio(a: string, b: string): number {
 function over(fg: string, alpha: number, bg: string): string {
   const f = parseHex(fg);
   const b = parseHex(bg);
-  return `#${f.map((c, i) => Math.round(alpha * c + (1 - alpha) * b[i]).toString(16).padStart(2, '0')).join('')}`;
+  return `#${f
+    .map((c, i) =>
+      Math.round(alpha * c + (1 - alpha) * b[i])
+        .toString(16)
+        .padStart(2, '0'),
+    )
+    .join('')}`;
 }
 
 const root = path.resolve(import.meta.dirname, '../..');
@@ -141,7 +147,12 @@ const pairs: Pair[] = [
   // Pale tints written inline (warn and bad notices, the overview's status chips, hover fills of delete buttons):
   // every text colour that sits on them, all at text-sm or text-xs.
   ...tintedBackgrounds().flatMap((tint) =>
-    (['ink', 'ink-soft', 'signal-ok', 'signal-warn', 'signal-bad'] as const).map((text) => ({ text: t[text], on: tint, min: normalText, use: `text-${text} on bg-[${tint}]` })),
+    (['ink', 'ink-soft', 'signal-ok', 'signal-warn', 'signal-bad'] as const).map((text) => ({
+      text: t[text],
+      on: tint,
+      min: normalText,
+      use: `text-${text} on bg-[${tint}]`,
+    })),
   ),
   // Labels drawn on a mode's colour (shared/modes.ts modeInk): small chart and legend text, so normal text.
   ...modeKeys.map((k) => ({ text: modeInk[k], on: modeColours[k], min: normalText, use: `modeInk.${k} on modeColours.${k}` })),

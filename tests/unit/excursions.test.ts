@@ -86,7 +86,10 @@ describe('excursion events on a constructed series with known runs', () => {
 
   it('tells humid and dry hours apart by the dew-point and RH limits', () => {
     // 25 °C at 16 °C dew point: above the recommended 15 °C dew point, inside A1 (17 °C, 80 % RH).
-    expect(countExcursions(inletSeries([25], 16)).causes).toEqual({ recommended: { warm: 0, cold: 0, humid: 1, dry: 0 }, allowable: { warm: 0, cold: 0, humid: 0, dry: 0 } });
+    expect(countExcursions(inletSeries([25], 16)).causes).toEqual({
+      recommended: { warm: 0, cold: 0, humid: 1, dry: 0 },
+      allowable: { warm: 0, cold: 0, humid: 0, dry: 0 },
+    });
     // 20 °C at −10 °C dew point: below the recommended −9 °C, inside A1 (−12 °C and 8 % RH; about 12 % RH over water here).
     const dry = countExcursions(inletSeries([20], -10));
     expect(dry.causes.recommended.dry).toBe(1);
@@ -156,7 +159,9 @@ describe('the inlet model, one worked hour per system kind', () => {
 
   it('refuses a ceiling below the setpoint, naming it', () => {
     const scenario = makeScenario('direct-air');
-    expect(() => modelInletHours(scenario.system, RECOMMENDED, outdoorHours([stateFromDewPoint(10, 5)]), { ...hold, ceilingC: 19 }, plantOf(scenario))).toThrow(/ceilingC/);
+    expect(() => modelInletHours(scenario.system, RECOMMENDED, outdoorHours([stateFromDewPoint(10, 5)]), { ...hold, ceilingC: 19 }, plantOf(scenario))).toThrow(
+      /ceilingC/,
+    );
   });
 });
 
@@ -164,18 +169,24 @@ describe('a proposal over a year of (synthetic) weather', () => {
   const a1 = findEnvelopePreset('ashrae-2021-a1')!.limits;
   const recommended = findEnvelopePreset('ashrae-2021-recommended')!.limits;
 
-  it('holding the run\'s own setpoint and envelope gives the run\'s own hours per mode', () => {
+  it("holding the run's own setpoint and envelope gives the run's own hours per mode", () => {
     for (const kind of ['direct-air', 'indirect-air', 'water-side'] as const) {
       const scenario = makeScenario(kind);
       const series = syntheticSeries(HOT_HUMID, { hours: 8760 });
       const run = runScenario(scenario, series, { elevationM: 10 });
-      const analysis = analyseProposal(scenario, series, 10, { supplyAirC: scenario.system.supplyAirC, floatUpToC: null, control: scenario.envelope, recommended, allowable: a1 });
+      const analysis = analyseProposal(scenario, series, 10, {
+        supplyAirC: scenario.system.supplyAirC,
+        floatUpToC: null,
+        control: scenario.envelope,
+        recommended,
+        allowable: a1,
+      });
       const { free, adiabatic, mechanical, noData } = run.results.hours;
       expect(analysis.modes, kind).toEqual({ free, adiabatic, mechanical, noData });
     }
   });
 
-  it('letting the supply float to A1\'s maximum trades mechanical hours for excursion hours', () => {
+  it("letting the supply float to A1's maximum trades mechanical hours for excursion hours", () => {
     const scenario = makeScenario('direct-air', { system: { supplyAirC: 22, evaporativeEffectiveness: 0 } });
     const series = syntheticSeries(MILD_MARITIME, { hours: 8760 });
     const base = { supplyAirC: 22, control: a1, recommended, allowable: a1 };

@@ -24,15 +24,50 @@ const slow = { timeout: 60_000 };
 describe('import boundaries (DEVELOPERS.md, Layout)', () => {
   it.each([
     ['shared/ importing the client', 'shared/boundary-fixture.ts', "import { toDisplay } from '../src/lib/quantity';", /shared\/ imports nothing of ours/],
-    ['shared/ importing the server', 'shared/psychrometrics/boundary-fixture.ts', "import { createApp } from '../../server/app';", /shared\/ imports nothing of ours/],
+    [
+      'shared/ importing the server',
+      'shared/psychrometrics/boundary-fixture.ts',
+      "import { createApp } from '../../server/app';",
+      /shared\/ imports nothing of ours/,
+    ],
     ['shared/ importing the pool', 'shared/boundary-fixture.ts', "import { createWorkerPool } from '../workers/pool';", /shared\/ imports nothing of ours/],
     ['the client importing the server', 'src/lib/boundary-fixture.ts', "import { createApp } from '../../server/app';", /never server\/ or workers\//],
-    ['the client importing the pool', 'src/features/runs/api/boundary-fixture.ts', "import { createWorkerPool } from '../../../../workers/pool';", /never server\/ or workers\//],
-    ['a feature importing another through the alias', 'src/features/runs/api/boundary-fixture.ts', "import { getSweep } from '@/features/sweeps/api/get-sweep';", /Features never import each other/],
-    ['a feature importing another by a relative path', 'src/features/runs/components/boundary-fixture.tsx', "import { getSweep } from '../../sweeps/api/get-sweep';", /Features never import each other/],
-    ['a shared component importing a feature', 'src/components/ui/boundary-fixture.tsx', "import { getRun } from '@/features/runs/api/get-run';", /import no feature and not src\/app/],
-    ['a shared component importing the app', 'src/components/ui/boundary-fixture.tsx', "import { AppShell } from '@/app/app-shell';", /import no feature and not src\/app/],
-    ['a feature importing the app', 'src/features/runs/components/boundary-fixture.tsx', "import { AppShell } from '@/app/app-shell';", /never import src\/app/],
+    [
+      'the client importing the pool',
+      'src/features/runs/api/boundary-fixture.ts',
+      "import { createWorkerPool } from '../../../../workers/pool';",
+      /never server\/ or workers\//,
+    ],
+    [
+      'a feature importing another through the alias',
+      'src/features/runs/api/boundary-fixture.ts',
+      "import { getSweep } from '@/features/sweeps/api/get-sweep';",
+      /Features never import each other/,
+    ],
+    [
+      'a feature importing another by a relative path',
+      'src/features/runs/components/boundary-fixture.tsx',
+      "import { getSweep } from '../../sweeps/api/get-sweep';",
+      /Features never import each other/,
+    ],
+    [
+      'a shared component importing a feature',
+      'src/components/ui/boundary-fixture.tsx',
+      "import { getRun } from '@/features/runs/api/get-run';",
+      /import no feature and not src\/app/,
+    ],
+    [
+      'a shared component importing the app',
+      'src/components/ui/boundary-fixture.tsx',
+      "import { AppShell } from '@/app/app-shell';",
+      /import no feature and not src\/app/,
+    ],
+    [
+      'a feature importing the app',
+      'src/features/runs/components/boundary-fixture.tsx',
+      "import { AppShell } from '@/app/app-shell';",
+      /never import src\/app/,
+    ],
     ['the server importing the client', 'server/routes/boundary-fixture.ts', "import { toDisplay } from '../../src/lib/quantity';", /never import the client/],
   ])('refuses %s', slow, async (_case, file, code, message) => {
     const errors = await boundaryErrors(file, code);
@@ -41,11 +76,22 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
   });
 
   it.each([
-    ['a feature importing its own modules, src/lib, src/components and shared/', 'src/features/runs/components/boundary-fixture.tsx',
-      "import { getRun } from '../api/get-run';\nimport { toDisplay } from '@/lib/quantity';\nimport { Panel } from '@/components/ui/panel';\nimport { withoutControlCharacters } from '../../../../shared/schemas/plain-text';"],
-    ['the app composing features', 'src/app/boundary-fixture.tsx', "import { getRun } from '@/features/runs/api/get-run';\nimport { getSweep } from '@/features/sweeps/api/get-sweep';"],
+    [
+      'a feature importing its own modules, src/lib, src/components and shared/',
+      'src/features/runs/components/boundary-fixture.tsx',
+      "import { getRun } from '../api/get-run';\nimport { toDisplay } from '@/lib/quantity';\nimport { Panel } from '@/components/ui/panel';\nimport { withoutControlCharacters } from '../../../../shared/schemas/plain-text';",
+    ],
+    [
+      'the app composing features',
+      'src/app/boundary-fixture.tsx',
+      "import { getRun } from '@/features/runs/api/get-run';\nimport { getSweep } from '@/features/sweeps/api/get-sweep';",
+    ],
     ['the server and a test importing shared/', 'server/boundary-fixture.ts', "import { withoutControlCharacters } from '../shared/schemas/plain-text';"],
-    ['a test importing anything', 'tests/unit/boundary-fixture.test.ts', "import { createApp } from '../../server/app';\nimport { toDisplay } from '../../src/lib/quantity';"],
+    [
+      'a test importing anything',
+      'tests/unit/boundary-fixture.test.ts',
+      "import { createApp } from '../../server/app';\nimport { toDisplay } from '../../src/lib/quantity';",
+    ],
   ])('allows %s', slow, async (_case, file, code) => {
     expect(await boundaryErrors(file, code)).toEqual([]);
   });

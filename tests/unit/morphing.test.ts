@@ -131,7 +131,12 @@ describe('humidity through specific humidity', () => {
     const [ts, tC] = twoJanuaryDays();
     // Humidity ratio 4 g/kg every hour (below saturation at 2 °C, Ws ≈ 4.4 g/kg).
     const parent = series(ts, tC, { kind: 'humidity-ratio-kgkg', values: new Float64Array(48).fill(0.004) });
-    const out = morphClimate({ series: parent, factors: factors({ deltaMeanK: 2, deltaMaxK: 3, deltaMinK: 1, humidityChangePct: 10 }), utcOffsetMinutes: 60, elevationM: 0 });
+    const out = morphClimate({
+      series: parent,
+      factors: factors({ deltaMeanK: 2, deltaMaxK: 3, deltaMinK: 1, humidityChangePct: 10 }),
+      utcOffsetMinutes: 60,
+      elevationM: 0,
+    });
     if (!out.ok) throw new Error(out.problems.join('; '));
     expect(out.alphaByMonth[0]).toBeCloseTo(0.4, 12);
     expect(out.series.dryBulbC[12]).toBeCloseTo(8.2, 12);
@@ -148,7 +153,12 @@ describe('humidity through specific humidity', () => {
     const [ts, tC] = twoJanuaryDays();
     const rh = Float64Array.from({ length: 48 }, (_, i) => 30 + i);
     const pressure = Float64Array.from({ length: 48 }, (_, i) => 95_000 + 100 * i);
-    const out = morphClimate({ series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }, pressure), factors: factors({}), utcOffsetMinutes: 60, elevationM: 0 });
+    const out = morphClimate({
+      series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }, pressure),
+      factors: factors({}),
+      utcOffsetMinutes: 60,
+      elevationM: 0,
+    });
     if (!out.ok) throw new Error('refused');
     for (let i = 0; i < 48; i++) {
       expect(out.series.dryBulbC[i]).toBeCloseTo(tC[i], 12);
@@ -209,7 +219,12 @@ describe('humidity through specific humidity', () => {
     tC[5] = Number.NaN;
     const rh = new Float64Array(48).fill(60);
     rh[7] = Number.NaN;
-    const out = morphClimate({ series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }), factors: factors({ deltaMeanK: 1, deltaMaxK: 1, deltaMinK: 1 }), utcOffsetMinutes: 60, elevationM: 0 });
+    const out = morphClimate({
+      series: series(ts, tC, { kind: 'relative-humidity-pct', values: rh }),
+      factors: factors({ deltaMeanK: 1, deltaMaxK: 1, deltaMinK: 1 }),
+      utcOffsetMinutes: 60,
+      elevationM: 0,
+    });
     if (!out.ok) throw new Error('refused');
     expect(out.series.dryBulbC[5]).toBeNaN();
     expect(out.series.humidity.values[5]).toBeNaN();

@@ -45,7 +45,9 @@ describe('applying a sweep point to a scenario', () => {
     expect(sweepInputRefusal('system.approachK', base.system)).toBe('system.approachK applies to water-side systems only; this scenario is direct-air.');
     expect(sweepInputRefusal('system.heatExchangerEffectiveness', makeScenario('indirect-air').system)).toBeNull();
     expect(sweepInputRefusal('system.supplyAirC', makeScenario('water-side').system)).toMatch(/sweep system.chilledWaterSupplyC instead/);
-    expect(sweepInputRefusal('system.evaporativeEffectiveness', makeScenario('water-side', { system: { heatRejection: 'cooling-tower' } }).system)).toMatch(/cooling tower/);
+    expect(sweepInputRefusal('system.evaporativeEffectiveness', makeScenario('water-side', { system: { heatRejection: 'cooling-tower' } }).system)).toMatch(
+      /cooling tower/,
+    );
     expect(sweepInputRefusal('envelope.presetId', makeScenario('indirect-air').system)).toMatch(/direct-air systems only/);
     expect(sweepInputRefusal('energy.itLoadKw', makeScenario('water-side').system)).toBeNull();
   });
@@ -67,7 +69,9 @@ describe('applying a sweep point to a scenario', () => {
       'system.chilledWaterSupplyC = 26 is refused: system.chilledWaterSupplyC chilledWaterSupplyC must be below supplyAirC (got 26)',
     ]);
     const good = prepareSweep(base, [{ input: 'system.evaporativeEffectiveness', from: 0, to: 1, step: 0.25 }]);
-    expect(good.ok && good.points.map((p) => (p.scenario.system as { evaporativeEffectiveness: number }).evaporativeEffectiveness)).toEqual([0, 0.25, 0.5, 0.75, 1]);
+    expect(good.ok && good.points.map((p) => (p.scenario.system as { evaporativeEffectiveness: number }).evaporativeEffectiveness)).toEqual([
+      0, 0.25, 0.5, 0.75, 1,
+    ]);
   });
 
   it('lists five bad points and counts the rest', () => {

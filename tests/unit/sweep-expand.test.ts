@@ -77,9 +77,15 @@ describe('the sweep request schema', () => {
     const issues = (body: unknown) => sweepSpecSchema.safeParse(body).error?.issues.map((i) => `${i.path.join('.')}: ${i.message}`) ?? [];
     expect(issues({ ...base, axes: [{ input: 'system.supplyAirC', from: 18, to: 27, step: 0 }] })).toEqual(['axes.0.step: step must be above 0, got 0']);
     expect(issues({ ...base, axes: [{ input: 'system.supplyAirC', from: 27, to: 18, step: 1 }] })).toEqual(['axes.0.to: to (18) must not be below from (27)']);
-    expect(issues({ ...base, axes: [{ input: 'system.fanHeatK', from: 1, to: 2, step: 1 }] })[0]).toMatch(/^axes.0.input: input must be one of system.supplyAirC/);
-    expect(issues({ ...base, axes: [{ input: 'envelope.presetId', presetIds: ['class-z'] }] })[0]).toMatch(/^axes.0.presetIds.0: "class-z" is not an envelope preset/);
-    expect(issues({ ...base, axes: [{ input: 'energy.itLoadKw', from: 1, to: 1000, step: 1 }] })[0]).toBe('axes.0.step: from 1 to 1000 by 1 gives 1000 values; at most 200');
+    expect(issues({ ...base, axes: [{ input: 'system.fanHeatK', from: 1, to: 2, step: 1 }] })[0]).toMatch(
+      /^axes.0.input: input must be one of system.supplyAirC/,
+    );
+    expect(issues({ ...base, axes: [{ input: 'envelope.presetId', presetIds: ['class-z'] }] })[0]).toMatch(
+      /^axes.0.presetIds.0: "class-z" is not an envelope preset/,
+    );
+    expect(issues({ ...base, axes: [{ input: 'energy.itLoadKw', from: 1, to: 1000, step: 1 }] })[0]).toBe(
+      'axes.0.step: from 1 to 1000 by 1 gives 1000 values; at most 200',
+    );
     expect(
       issues({
         ...base,

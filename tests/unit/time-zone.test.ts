@@ -29,7 +29,12 @@ describe('one time-zone helper for IANA names and fixed offsets', () => {
     // Half-hour offsets have no Etc/GMT zone.
     expect(intlTimeZoneName('UTC+05:30')).toBeNull();
     // The mapped name really is seven hours behind UTC: 12:00 UTC is 05:00 on its clock.
-    const phoenixStandard = new Intl.DateTimeFormat('en-GB', { timeZone: intlTimeZoneName('UTC-07:00')!, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
+    const phoenixStandard = new Intl.DateTimeFormat('en-GB', {
+      timeZone: intlTimeZoneName('UTC-07:00')!,
+      hour: '2-digit',
+      minute: '2-digit',
+      hourCycle: 'h23',
+    });
     expect(phoenixStandard.format(Date.UTC(2021, 0, 1, 12))).toBe('05:00');
   });
 

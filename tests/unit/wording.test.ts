@@ -6,7 +6,13 @@ import { yearStatisticsNote } from '../../shared/scenario/year-statistics';
 import { rhBoundedNote } from '../../src/features/projections/utils/rh-bounded';
 
 // Synthetic rows (not a station): slashed day-first dates, a day above 12 so the order is certain.
-const slashed = ['Date,Time,Temp C,RH %', ...Array.from({ length: 30 }, (_, i) => `${String(13 + Math.floor(i / 24)).padStart(2, '0')}/01/2023,${String(i % 24).padStart(2, '0')}:00,${5 + (i % 7)},${60 + (i % 5)}`)].join('\n');
+const slashed = [
+  'Date,Time,Temp C,RH %',
+  ...Array.from(
+    { length: 30 },
+    (_, i) => `${String(13 + Math.floor(i / 24)).padStart(2, '0')}/01/2023,${String(i % 24).padStart(2, '0')}:00,${5 + (i % 7)},${60 + (i % 5)}`,
+  ),
+].join('\n');
 
 describe('the wording', () => {
   it('writes a date order with the separator the file uses: 13/01/2023 is day/month/year, not day.month.year', () => {
@@ -22,10 +28,14 @@ describe('the wording', () => {
     expect(detected.ok).toBe(true);
     const time = detected.mapping.time!;
     if (time.layout !== 'date-time') throw new Error('expected a date and a time column');
-    const same = importClimateText(slashed, { mapping: { time: { layout: 'date-time', dateColumn: time.dateColumn, timeColumn: time.timeColumn, dateOrder: time.dateOrder } } });
+    const same = importClimateText(slashed, {
+      mapping: { time: { layout: 'date-time', dateColumn: time.dateColumn, timeColumn: time.timeColumn, dateOrder: time.dateOrder } },
+    });
     expect(same.report.timeLayout).not.toContain('chosen by the user');
     expect(same.report.timeLayout).toBe(detected.report.timeLayout);
-    const changed = importClimateText(slashed, { mapping: { time: { layout: 'date-time', dateColumn: time.dateColumn, timeColumn: time.timeColumn, dateOrder: 'MDY' } } });
+    const changed = importClimateText(slashed, {
+      mapping: { time: { layout: 'date-time', dateColumn: time.dateColumn, timeColumn: time.timeColumn, dateOrder: 'MDY' } },
+    });
     expect(changed.report.timeLayout).toContain('chosen by the user');
   });
 

@@ -6,7 +6,19 @@ import { calendarYearHours, nearestRank, yearStatistics } from '../../shared/sce
 function year(y: number, mechanical: number, extra: Partial<YearResults> = {}): YearResults {
   const total = extra.total ?? calendarYearHours(y);
   const adiabatic = extra.adiabatic ?? 100;
-  return { year: y, free: total - adiabatic - mechanical, adiabatic, mechanical, noData: 0, total, humidified: 0, partialMechanical: 0, coolingKwh: 1000 + mechanical, waterL: 50, ...extra };
+  return {
+    year: y,
+    free: total - adiabatic - mechanical,
+    adiabatic,
+    mechanical,
+    noData: 0,
+    total,
+    humidified: 0,
+    partialMechanical: 0,
+    coolingKwh: 1000 + mechanical,
+    waterL: 50,
+    ...extra,
+  };
 }
 
 describe('calendar years', () => {

@@ -16,7 +16,9 @@ export const sites = sqliteTable(
     /** Sets barometric pressure by the standard atmosphere when a file has none. */
     elevationM: real().notNull().default(0),
     timeZone: text().notNull().default('UTC'),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
   },
   (table) => [index('sites_project_idx').on(table.projectId)],
 );
@@ -53,7 +55,9 @@ export const climateFiles = sqliteTable(
     /** For a derived file: how it was made (JSON: method, change factors, note); null for uploads. */
     derivationJson: text(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
   },
   (table) => [index('climate_files_project_idx').on(table.projectId), index('climate_files_site_idx').on(table.siteId)],
 );
@@ -94,7 +98,9 @@ export const climateIssueLists = sqliteTable(
     issues: integer().notNull(),
     csvGzip: blob({ mode: 'buffer' }).notNull(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
   },
   (t) => [index('climate_issue_lists_project_idx').on(t.projectId)],
 );

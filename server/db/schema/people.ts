@@ -11,7 +11,9 @@ export const users = sqliteTable(
     email: text().notNull(),
     name: text().notNull(),
     isAdmin: integer({ mode: 'boolean' }).notNull().default(false),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
     /** The OpenID issuer and subject this person signs in as; null until their first sign-in. */
     oidcIssuer: text(),
     oidcSubject: text(),
@@ -20,10 +22,7 @@ export const users = sqliteTable(
     unitSystem: text({ enum: unitSystems }).notNull().default('si'),
     runNotices: integer({ mode: 'boolean' }).notNull().default(false),
   },
-  (table) => [
-    uniqueIndex('users_email_unique').on(table.email),
-    uniqueIndex('users_oidc_identity_unique').on(table.oidcIssuer, table.oidcSubject),
-  ],
+  (table) => [uniqueIndex('users_email_unique').on(table.email), uniqueIndex('users_oidc_identity_unique').on(table.oidcIssuer, table.oidcSubject)],
 );
 
 export const sessions = sqliteTable(

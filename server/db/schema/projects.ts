@@ -6,7 +6,9 @@ export const projects = sqliteTable('projects', {
   id: integer().primaryKey({ autoIncrement: true }),
   name: text().notNull(),
   description: text().notNull().default(''),
-  createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+  createdAt: integer({ mode: 'timestamp_ms' })
+    .notNull()
+    .default(sql`(unixepoch('subsec') * 1000)`),
 });
 
 export const projectRoles = ['owner', 'engineer', 'viewer'] as const;

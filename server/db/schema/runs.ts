@@ -16,7 +16,9 @@ export const envelopes = sqliteTable(
     note: text().notNull().default(''),
     /** JSON of shared/scenario envelopeSchema. */
     limitsJson: text().notNull(),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
   },
   (table) => [index('envelopes_project_idx').on(table.projectId)],
 );
@@ -37,8 +39,12 @@ export const scenarios = sqliteTable(
      */
     migrationJson: text(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
-    updatedAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
+    updatedAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
   },
   (table) => [index('scenarios_project_idx').on(table.projectId)],
 );
@@ -60,7 +66,9 @@ export const sweeps = sqliteTable(
     /** JSON: the base scenario as swept and the swept inputs with their values. */
     specJson: text().notNull(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
   },
   (table) => [index('sweeps_project_idx').on(table.projectId)],
 );
@@ -92,7 +100,9 @@ export const runs = sqliteTable(
     error: text(),
     resultsJson: text(),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
     startedAt: integer({ mode: 'timestamp_ms' }),
     finishedAt: integer({ mode: 'timestamp_ms' }),
   },
@@ -133,7 +143,9 @@ export const shareLinks = sqliteTable(
     title: text().notNull(),
     publicUntil: integer({ mode: 'timestamp_ms' }),
     createdBy: integer().references(() => users.id, { onDelete: 'set null' }),
-    createdAt: integer({ mode: 'timestamp_ms' }).notNull().default(sql`(unixepoch('subsec') * 1000)`),
+    createdAt: integer({ mode: 'timestamp_ms' })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
     revokedAt: integer({ mode: 'timestamp_ms' }),
   },
   (table) => [index('share_links_project_idx').on(table.projectId)],

@@ -25,7 +25,16 @@ export const EPW_FORMAT: RecognisedFormat = {
   ],
 };
 
-const HEADER_RECORDS = ['LOCATION', 'DESIGN CONDITIONS', 'TYPICAL/EXTREME PERIODS', 'GROUND TEMPERATURES', 'HOLIDAYS/DAYLIGHT SAVINGS', 'COMMENTS 1', 'COMMENTS 2', 'DATA PERIODS'];
+const HEADER_RECORDS = [
+  'LOCATION',
+  'DESIGN CONDITIONS',
+  'TYPICAL/EXTREME PERIODS',
+  'GROUND TEMPERATURES',
+  'HOLIDAYS/DAYLIGHT SAVINGS',
+  'COMMENTS 1',
+  'COMMENTS 2',
+  'DATA PERIODS',
+];
 /** Fields a record needs: year … station pressure. */
 const NEEDED_FIELDS = 10;
 const TEMPERATURE_MISSING = [99.9];
@@ -89,7 +98,11 @@ function readHeader(text: string, ctx: Context): EpwHeader | null {
     if (line.trim() === '') return true;
     const name = recordName(fields[0]);
     if (name === null) {
-      log.warning('format-header', `EPW record ${lineNumber}: "${fields[0].trim().slice(0, 40)}" is not one of the eight header records (${HEADER_RECORDS.join(', ')}); it is skipped.`, { line: lineNumber });
+      log.warning(
+        'format-header',
+        `EPW record ${lineNumber}: "${fields[0].trim().slice(0, 40)}" is not one of the eight header records (${HEADER_RECORDS.join(', ')}); it is skipped.`,
+        { line: lineNumber },
+      );
       return true;
     }
     seen.add(name);
@@ -97,13 +110,21 @@ function readHeader(text: string, ctx: Context): EpwHeader | null {
     if (name === 'DATA PERIODS') {
       const perHour = integerIn(fields[2], 1, 60);
       if (perHour === perHour) recordsPerHour = perHour;
-      else log.warning('format-header', `EPW record ${lineNumber} (DATA PERIODS): records per hour "${(fields[2] ?? '').trim()}" is not a whole number from 1 to 60; hourly records are assumed.`, { line: lineNumber });
+      else
+        log.warning(
+          'format-header',
+          `EPW record ${lineNumber} (DATA PERIODS): records per hour "${(fields[2] ?? '').trim()}" is not a whole number from 1 to 60; hourly records are assumed.`,
+          { line: lineNumber },
+        );
     }
     return true;
   });
   const missing = HEADER_RECORDS.filter((r) => !seen.has(r));
   if (missing.length > 0) {
-    log.warning('format-header', `The EPW header lacks the record${missing.length > 1 ? 's' : ''} ${missing.join(', ')}; the hourly records are read all the same.`);
+    log.warning(
+      'format-header',
+      `The EPW header lacks the record${missing.length > 1 ? 's' : ''} ${missing.join(', ')}; the hourly records are read all the same.`,
+    );
   }
   if (recordsPerHour !== 1) {
     log.error('format-header', `The EPW DATA PERIODS record gives ${recordsPerHour} records per hour; only hourly EPW files (1 record per hour) are read.`);
@@ -124,17 +145,24 @@ function readHeader(text: string, ctx: Context): EpwHeader | null {
   const checked = (i: number, what: string, min: number, max: number, unit: string): number | null => {
     const n = numberField(f, i, min, max);
     if (n !== n) {
-      log.warning('format-header', `${at}: ${what} "${(f[i] ?? '').trim()}" is not a number from ${min} to ${max} ${unit}; it is not used.`, { line: loc.line, value: (f[i] ?? '').trim() });
+      log.warning('format-header', `${at}: ${what} "${(f[i] ?? '').trim()}" is not a number from ${min} to ${max} ${unit}; it is not used.`, {
+        line: loc.line,
+        value: (f[i] ?? '').trim(),
+      });
       return null;
     }
     return n;
   };
   const offsetHours = numberField(f, 8, -12, 14);
   if (offsetHours === null || offsetHours !== offsetHours) {
-    log.error('format-header', `${at}: the time zone field "${(f[8] ?? '').trim()}" is not a UTC offset in hours from −12 to +14, so the local standard times cannot be placed.`, {
-      line: loc.line,
-      value: (f[8] ?? '').trim(),
-    });
+    log.error(
+      'format-header',
+      `${at}: the time zone field "${(f[8] ?? '').trim()}" is not a UTC offset in hours from −12 to +14, so the local standard times cannot be placed.`,
+      {
+        line: loc.line,
+        value: (f[8] ?? '').trim(),
+      },
+    );
     return null;
   }
   const header: FileHeader = {
@@ -200,9 +228,14 @@ export function readEpw(text: string, override: Partial<ColumnMappingOverride>, 
     const line = lineNumbers[i];
     const fields = lines[i].split(',');
     if (fields.length < needed) {
-      rejectRow(ctx, line, `EPW record ${line}: ${fields.length} field${fields.length === 1 ? '' : 's'}, expected at least ${needed} (year, month, day, hour, minute, flags, dry-bulb, dew point, RH, station pressure); the record is left out.`, {
-        value: lines[i].slice(0, 80),
-      });
+      rejectRow(
+        ctx,
+        line,
+        `EPW record ${line}: ${fields.length} field${fields.length === 1 ? '' : 's'}, expected at least ${needed} (year, month, day, hour, minute, flags, dry-bulb, dew point, RH, station pressure); the record is left out.`,
+        {
+          value: lines[i].slice(0, 80),
+        },
+      );
       continue;
     }
     const year = integerIn(fields[0], 1000, 9999);
@@ -218,14 +251,22 @@ export function readEpw(text: string, override: Partial<ColumnMappingOverride>, 
     }
     const day = integerIn(fields[2], 1, daysInMonth(year, month));
     if (day !== day) {
-      rejectRow(ctx, line, `day ${fields[2].trim()} on line ${line}: ${year}-${String(month).padStart(2, '0')} has ${daysInMonth(year, month)} days; the record is left out.`, {
-        column: 'Day',
-        value: fields[2].trim(),
-      });
+      rejectRow(
+        ctx,
+        line,
+        `day ${fields[2].trim()} on line ${line}: ${year}-${String(month).padStart(2, '0')} has ${daysInMonth(year, month)} days; the record is left out.`,
+        {
+          column: 'Day',
+          value: fields[2].trim(),
+        },
+      );
       continue;
     }
     if (hour !== hour) {
-      rejectRow(ctx, line, `hour ${fields[3].trim()} on line ${line}: EPW hours run 1–24 (hour ending); the record is left out.`, { column: 'Hour', value: fields[3].trim() });
+      rejectRow(ctx, line, `hour ${fields[3].trim()} on line ${line}: EPW hours run 1–24 (hour ending); the record is left out.`, {
+        column: 'Hour',
+        value: fields[3].trim(),
+      });
       continue;
     }
     const localMs = daysFromCivil(year, month, day) * MS_PER_DAY + hour * MS_PER_HOUR;

@@ -89,15 +89,23 @@ export function formatRecognition(
   };
   const { time: timeOverride, delimiter, decimalSeparator, ...values } = override;
   if (timeOverride && !sameTime(timeOverride, time, headers)) {
-    ctx.log.info('mapping-override-invalid', `The time of a ${format.name} file is fixed by the format (${time.description}); the time columns chosen are not used.`);
+    ctx.log.info(
+      'mapping-override-invalid',
+      `The time of a ${format.name} file is fixed by the format (${time.description}); the time columns chosen are not used.`,
+    );
   }
   if ((delimiter && delimiter !== ctx.mapping.delimiter) || (decimalSeparator && decimalSeparator !== '.')) {
-    ctx.log.info('mapping-override-invalid', `A ${format.name} file is read with the format's own separators; the delimiter and decimal separator chosen are not used.`);
+    ctx.log.info(
+      'mapping-override-invalid',
+      `A ${format.name} file is read with the format's own separators; the delimiter and decimal separator chosen are not used.`,
+    );
   }
   applyMappingOverride(recognition, values, headers, ctx.log);
   const p = recognition.pressure;
   if (p && columns[p.column].notStationPressure) {
-    ctx.log.error('mapping-override-invalid', `Column "${p.header}" cannot be used as station pressure: ${columns[p.column].notStationPressure}`, { column: p.header });
+    ctx.log.error('mapping-override-invalid', `Column "${p.header}" cannot be used as station pressure: ${columns[p.column].notStationPressure}`, {
+      column: p.header,
+    });
   }
   m.time = recognition.time;
   m.dryBulb = recognition.dryBulb;
@@ -193,13 +201,21 @@ export class FormatRows {
         log.info('missing-value-marker', `Column "${header}" marks a missing value with ${text}.`, { line, column: header, value: text });
       } else {
         r.bad++;
-        log.warning('unparsable-value', `"${text}" in column "${header}" is not a number; the value is treated as missing.`, { line, column: header, value: text });
+        log.warning('unparsable-value', `"${text}" in column "${header}" is not a number; the value is treated as missing.`, {
+          line,
+          column: header,
+          value: text,
+        });
       }
       return NaN;
     }
     r.bad++;
     counts.impossibleValues++;
-    log.warning('impossible-value', `${r.assignment.quantity} ${text} in column "${header}" is outside the possible range; treated as missing.`, { line, column: header, value: text });
+    log.warning('impossible-value', `${r.assignment.quantity} ${text} in column "${header}" is outside the possible range; treated as missing.`, {
+      line,
+      column: header,
+      value: text,
+    });
     return NaN;
   }
 
@@ -216,15 +232,23 @@ export class FormatRows {
       if (humidityCheck.verdict === 'impossible') {
         this.hum.bad++;
         counts.impossibleValues++;
-        log.warning('impossible-value', `${a.quantity} ${text} in column "${a.header}" is outside the possible range${d === d ? ` or above the dry-bulb of ${round(d)} °C` : ''}; treated as missing.`, {
+        log.warning(
+          'impossible-value',
+          `${a.quantity} ${text} in column "${a.header}" is outside the possible range${d === d ? ` or above the dry-bulb of ${round(d)} °C` : ''}; treated as missing.`,
+          {
+            line,
+            column: a.header,
+            value: text,
+          },
+        );
+        w = NaN;
+      } else if (humidityCheck.verdict === 'clamped') {
+        counts.clampedValues++;
+        log.info('clamped-value', `${a.quantity} ${text} in column "${a.header}" is just past saturation; set to ${round(humidityCheck.value)}.`, {
           line,
           column: a.header,
           value: text,
         });
-        w = NaN;
-      } else if (humidityCheck.verdict === 'clamped') {
-        counts.clampedValues++;
-        log.info('clamped-value', `${a.quantity} ${text} in column "${a.header}" is just past saturation; set to ${round(humidityCheck.value)}.`, { line, column: a.header, value: text });
         w = humidityCheck.value;
       }
     }
@@ -245,7 +269,10 @@ export class FormatRows {
     const { log, counts } = this.ctx;
     const rows = this.rows;
     if (counts.rows + counts.rowsRejected > 0 && counts.rowsRejected / (counts.rows + counts.rowsRejected) > REJECT_SHARE) {
-      log.error('too-many-rejected', `${counts.rowsRejected} of ${counts.rows + counts.rowsRejected} rows (${percent(counts.rowsRejected / (counts.rows + counts.rowsRejected))}) could not be read: the file is not in the layout its format expects (see the rows listed).`);
+      log.error(
+        'too-many-rejected',
+        `${counts.rowsRejected} of ${counts.rows + counts.rowsRejected} rows (${percent(counts.rowsRejected / (counts.rows + counts.rowsRejected))}) could not be read: the file is not in the layout its format expects (see the rows listed).`,
+      );
     }
     if (rows.count === 0) {
       if (!log.hasErrors()) log.error('too-little-data', 'No data row could be read.');
@@ -253,15 +280,23 @@ export class FormatRows {
     }
     for (const r of [this.dry, this.hum]) {
       if (r.bad / rows.count > REJECT_SHARE) {
-        log.error('too-many-rejected', `${r.bad} of ${rows.count} cells (${percent(r.bad / rows.count)}) in column "${r.assignment.header}" are unreadable or impossible as ${r.assignment.quantity}.`, {
-          column: r.assignment.header,
-        });
+        log.error(
+          'too-many-rejected',
+          `${r.bad} of ${rows.count} cells (${percent(r.bad / rows.count)}) in column "${r.assignment.header}" are unreadable or impossible as ${r.assignment.quantity}.`,
+          {
+            column: r.assignment.header,
+          },
+        );
       }
     }
     if (this.pres && this.pres.bad / rows.count > REJECT_SHARE) {
-      log.warning('pressure-ignored', `${percent(this.pres.bad / rows.count)} of the pressure cells in column "${this.pres.assignment.header}" are unreadable or impossible; the column is ignored and pressure will come from the site elevation.`, {
-        column: this.pres.assignment.header,
-      });
+      log.warning(
+        'pressure-ignored',
+        `${percent(this.pres.bad / rows.count)} of the pressure cells in column "${this.pres.assignment.header}" are unreadable or impossible; the column is ignored and pressure will come from the site elevation.`,
+        {
+          column: this.pres.assignment.header,
+        },
+      );
       this.ctx.mapping.pressure = null;
       rows.pressurePa = null;
     }

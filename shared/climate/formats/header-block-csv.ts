@@ -78,7 +78,10 @@ export function readHeaderBlockCsv(text: string, override: Partial<ColumnMapping
     const [min, max, unit] = limits[key];
     const value = Number(block[2]);
     if (block[2] === '' || !Number.isFinite(value) || value < min || value > max) {
-      log.warning('format-header', `${block[1]} "${block[2]}" on line ${n} is not a number from ${min} to ${max} ${unit}; it is not used.`, { line: n, value: block[2] });
+      log.warning('format-header', `${block[1]} "${block[2]}" on line ${n} is not a number from ${min} to ${max} ${unit}; it is not used.`, {
+        line: n,
+        value: block[2],
+      });
       return true;
     }
     if (header.line === 0) header.line = n;
@@ -88,7 +91,10 @@ export function readHeaderBlockCsv(text: string, override: Partial<ColumnMapping
   });
   if (header.line !== 0) ctx.fileHeader = header;
   if (headerLine === 0) {
-    log.error('missing-time', 'The file starts with a header block (latitude, longitude, elevation) but has no column header starting "time(UTC)", so its hours cannot be found.');
+    log.error(
+      'missing-time',
+      'The file starts with a header block (latitude, longitude, elevation) but has no column header starting "time(UTC)", so its hours cannot be found.',
+    );
     return null;
   }
 
@@ -99,11 +105,22 @@ export function readHeaderBlockCsv(text: string, override: Partial<ColumnMapping
   const sp = find('sp');
   const missing = [dry === -1 ? 'T2m (dry-bulb °C)' : '', rh === -1 ? 'RH (relative humidity %)' : ''].filter(Boolean);
   if (missing.length > 0) {
-    log.error(dry === -1 ? 'missing-dry-bulb' : 'missing-humidity', `The column header on line ${headerLine} has no ${missing.join(' and no ')} column (columns: ${headerCells.join(', ')}).`, { line: headerLine });
+    log.error(
+      dry === -1 ? 'missing-dry-bulb' : 'missing-humidity',
+      `The column header on line ${headerLine} has no ${missing.join(' and no ')} column (columns: ${headerCells.join(', ')}).`,
+      { line: headerLine },
+    );
     return null;
   }
   const time: TimeMapping = { layout: 'iso', column: 0, confidence: 1, description: 'time(UTC) written yyyymmdd:hhmm, in UTC' };
-  const recognition = formatRecognition(HEADER_BLOCK_CSV_FORMAT, columns, { delimiter, headerLine, time }, { dryBulb: dry, humidity: rh, pressure: sp === -1 ? null : sp }, override, ctx);
+  const recognition = formatRecognition(
+    HEADER_BLOCK_CSV_FORMAT,
+    columns,
+    { delimiter, headerLine, time },
+    { dryBulb: dry, humidity: rh, pressure: sp === -1 ? null : sp },
+    override,
+    ctx,
+  );
   ctx.timeZone = 'UTC';
   if (log.hasErrors()) return null;
 
@@ -126,10 +143,14 @@ export function readHeaderBlockCsv(text: string, override: Partial<ColumnMapping
     if (line.trim() === '') return;
     legendLines++;
     if (LOOKS_LIKE_DATA.test(line) && dataAfterLegend++ < 3) {
-      log.warning('legend-skipped', `Line ${n} looks like data but comes after the data ended on line ${legendFrom}; it is not read.`, { line: n, value: line.slice(0, 60) });
+      log.warning('legend-skipped', `Line ${n} looks like data but comes after the data ended on line ${legendFrom}; it is not read.`, {
+        line: n,
+        value: line.slice(0, 60),
+      });
     }
   });
-  if (legendLines > 0) log.info('legend-skipped', `The ${legendLines} lines from line ${legendFrom} on are the legend after the data; they are not read.`, { line: legendFrom });
+  if (legendLines > 0)
+    log.info('legend-skipped', `The ${legendLines} lines from line ${legendFrom} on are the legend after the data; they are not read.`, { line: legendFrom });
   if (lines.length === 0) {
     log.error('header-only', `The file has its column header on line ${headerLine} but no data rows after it.`, { line: headerLine });
     return null;
@@ -141,21 +162,32 @@ export function readHeaderBlockCsv(text: string, override: Partial<ColumnMapping
     const line = numbers[i];
     const cells = lines[i].split(delimiter);
     if (cells.length < needed) {
-      rejectRow(ctx, line, `Line ${line}: ${cells.length} fields, expected ${headerCells.length} as in the column header; the row is left out.`, { value: lines[i].slice(0, 80) });
+      rejectRow(ctx, line, `Line ${line}: ${cells.length} fields, expected ${headerCells.length} as in the column header; the row is left out.`, {
+        value: lines[i].slice(0, 80),
+      });
       continue;
     }
     const t = TIME_CELL.exec(cells[0]);
     if (!t) {
-      rejectRow(ctx, line, `time "${cells[0].trim()}" on line ${line} is not written yyyymmdd:hhmm; the row is left out.`, { column: headerCells[0], value: cells[0].trim() });
+      rejectRow(ctx, line, `time "${cells[0].trim()}" on line ${line} is not written yyyymmdd:hhmm; the row is left out.`, {
+        column: headerCells[0],
+        value: cells[0].trim(),
+      });
       continue;
     }
     const [year, month, day, hour, minute] = [Number(t[1]), Number(t[2]), Number(t[3]), Number(t[4]), Number(t[5])];
     if (month < 1 || month > 12 || day < 1 || year < 1000 || day > daysInMonth(year, month)) {
-      rejectRow(ctx, line, `date ${t[1]}-${t[2]}-${t[3]} on line ${line} does not exist; the row is left out.`, { column: headerCells[0], value: cells[0].trim() });
+      rejectRow(ctx, line, `date ${t[1]}-${t[2]}-${t[3]} on line ${line} does not exist; the row is left out.`, {
+        column: headerCells[0],
+        value: cells[0].trim(),
+      });
       continue;
     }
     if (hour > 23 || minute > 59) {
-      rejectRow(ctx, line, `${hour > 23 ? `hour ${hour}` : `minute ${minute}`} on line ${line}: times run 00:00–23:59 (UTC); the row is left out.`, { column: headerCells[0], value: cells[0].trim() });
+      rejectRow(ctx, line, `${hour > 23 ? `hour ${hour}` : `minute ${minute}`} on line ${line}: times run 00:00–23:59 (UTC); the row is left out.`, {
+        column: headerCells[0],
+        value: cells[0].trim(),
+      });
       continue;
     }
     const ms = daysFromCivil(year, month, day) * MS_PER_DAY + hour * MS_PER_HOUR + minute * MS_PER_MINUTE;

@@ -30,7 +30,10 @@ export function readPublishedFormat(text: string, options: ImportOptions, ctx: C
   ctx.log.info('format-recognised', `Recognised as ${reader.format.name}: ${reader.format.conventions.join('; ')}.`);
   const series = reader.read(text, options, ctx);
   if (options.timeZone !== undefined && options.timeZone !== ctx.timeZone && ctx.mapping.time) {
-    ctx.log.info('format-recognised', `${reader.format.name} times are read as the format states (${ctx.mapping.time.description}); the time zone asked for (${options.timeZone}) is not used for this file.`);
+    ctx.log.info(
+      'format-recognised',
+      `${reader.format.name} times are read as the format states (${ctx.mapping.time.description}); the time zone asked for (${options.timeZone}) is not used for this file.`,
+    );
   }
   return series;
 }

@@ -20,7 +20,11 @@ export function readStationLine(cells: string[], line: number): FileHeader | nul
   const longitude = number(5, -180, 180);
   const elevationM = number(6, -450, 9000);
   if ([offset, latitude, longitude, elevationM].some((n) => n !== n)) return null;
-  const text = (i: number) => cells[i].trim().replace(/^"(.*)"$/, '$1').trim() || null;
+  const text = (i: number) =>
+    cells[i]
+      .trim()
+      .replace(/^"(.*)"$/, '$1')
+      .trim() || null;
   return { line, name: text(1), region: text(2), country: null, source: null, stationId: text(0), latitude, longitude, elevationM, utcOffsetHours: offset };
 }
 
@@ -31,6 +35,10 @@ export function noteStationLine(ctx: Context, header: FileHeader | null): void {
   const zone = fixedOffsetZone(Math.round(header.utcOffsetHours * 60));
   const asked = ctx.timeZone === 'UTC' ? 0 : fixedOffsetMs(ctx.timeZone);
   if (asked !== fixedOffsetMs(zone)) {
-    ctx.log.warning('format-header', `The station line (line ${header.line}) gives the file's times as ${zone}; they are read in ${ctx.timeZone} as asked. Typical-year files are usually in local standard time: if so, read the file in the site's standard time.`, { line: header.line });
+    ctx.log.warning(
+      'format-header',
+      `The station line (line ${header.line}) gives the file's times as ${zone}; they are read in ${ctx.timeZone} as asked. Typical-year files are usually in local standard time: if so, read the file in the site's standard time.`,
+      { line: header.line },
+    );
   }
 }

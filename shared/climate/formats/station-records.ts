@@ -34,7 +34,13 @@ const COLUMNS: FormatColumn[] = [
   { header: 'hour (UTC)' },
   { header: 'air temperature (0.1 °C)', holds: { quantity: 'dry-bulb', unit: 'C' }, cellScale: 0.1, missingCodes: MISSING },
   { header: 'dew point (0.1 °C)', holds: { quantity: 'dew-point', unit: 'C' }, cellScale: 0.1, missingCodes: MISSING },
-  { header: 'sea-level pressure (0.1 hPa)', holds: { quantity: 'pressure', unit: 'hPa' }, cellScale: 0.1, missingCodes: MISSING, notStationPressure: NOT_STATION },
+  {
+    header: 'sea-level pressure (0.1 hPa)',
+    holds: { quantity: 'pressure', unit: 'hPa' },
+    cellScale: 0.1,
+    missingCodes: MISSING,
+    notStationPressure: NOT_STATION,
+  },
   { header: 'wind direction (°)' },
   { header: 'wind speed (0.1 m/s)' },
   { header: 'sky cover' },
@@ -46,7 +52,11 @@ const RECORD = /^\s*\d{4}(?:[ \t]+-?\d+){7,13}\s*$/;
 
 /** Whether the text is fixed-width station records: most of its first 20 lines are 8–14 whitespace-separated integers starting with a year. */
 export function looksLikeStationRecords(text: string): boolean {
-  const lines = text.slice(0, 4000).split('\n', 21).filter((l) => l.trim() !== '' && !l.trimStart().startsWith('#')).slice(0, 20);
+  const lines = text
+    .slice(0, 4000)
+    .split('\n', 21)
+    .filter((l) => l.trim() !== '' && !l.trimStart().startsWith('#'))
+    .slice(0, 20);
   if (lines.length === 0) return false;
   return lines.filter((l) => RECORD.test(l)).length * 2 > lines.length && RECORD.test(lines[0]);
 }
@@ -82,9 +92,13 @@ export function readStationRecords(text: string, override: Partial<ColumnMapping
   ctx.timeZone = 'UTC';
   if (log.hasErrors()) return null;
   if (!recognition.pressure) {
-    log.info('pressure-from-elevation', 'The records give sea-level pressure, which is not station pressure: it is not used, and every hour takes the standard-atmosphere pressure at the site’s elevation.', {
-      column: COLUMNS[6].header,
-    });
+    log.info(
+      'pressure-from-elevation',
+      'The records give sea-level pressure, which is not station pressure: it is not used, and every hour takes the standard-atmosphere pressure at the site’s elevation.',
+      {
+        column: COLUMNS[6].header,
+      },
+    );
   }
 
   let capacity = 1;
@@ -96,21 +110,34 @@ export function readStationRecords(text: string, override: Partial<ColumnMapping
     const count = splitWhitespace(line, cells, keep);
     if (count === 0 || cells[0].startsWith('#')) return;
     if (count !== FIELDS) {
-      rejectRow(ctx, n, `Line ${n}: ${count} field${count === 1 ? '' : 's'}, expected ${FIELDS} (year month day hour temperature dew-point sea-level-pressure wind-direction wind-speed sky-cover precipitation-1h precipitation-6h); the line is left out.`, {
-        value: line.slice(0, 80),
-      });
+      rejectRow(
+        ctx,
+        n,
+        `Line ${n}: ${count} field${count === 1 ? '' : 's'}, expected ${FIELDS} (year month day hour temperature dew-point sea-level-pressure wind-direction wind-speed sky-cover precipitation-1h precipitation-6h); the line is left out.`,
+        {
+          value: line.slice(0, 80),
+        },
+      );
       return;
     }
     const year = integerIn(cells[0], 1000, 9999);
     const month = integerIn(cells[1], 1, 12);
     const hour = integerIn(cells[3], 0, 23);
     if (year !== year || month !== month) {
-      rejectRow(ctx, n, `${year !== year ? `year "${cells[0]}"` : `month ${cells[1]}`} on line ${n} is not a ${year !== year ? 'year' : 'month (1–12)'}; the line is left out.`, { value: line.slice(0, 40) });
+      rejectRow(
+        ctx,
+        n,
+        `${year !== year ? `year "${cells[0]}"` : `month ${cells[1]}`} on line ${n} is not a ${year !== year ? 'year' : 'month (1–12)'}; the line is left out.`,
+        { value: line.slice(0, 40) },
+      );
       return;
     }
     const day = integerIn(cells[2], 1, daysInMonth(year, month));
     if (day !== day) {
-      rejectRow(ctx, n, `day ${cells[2]} on line ${n}: ${year}-${String(month).padStart(2, '0')} has ${daysInMonth(year, month)} days; the line is left out.`, { column: 'day', value: cells[2] });
+      rejectRow(ctx, n, `day ${cells[2]} on line ${n}: ${year}-${String(month).padStart(2, '0')} has ${daysInMonth(year, month)} days; the line is left out.`, {
+        column: 'day',
+        value: cells[2],
+      });
       return;
     }
     if (hour !== hour) {

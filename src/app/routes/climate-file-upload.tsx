@@ -22,7 +22,11 @@ export function ClimateFileUploadRoute() {
         <h1 className="text-xl font-semibold">Upload a climate file</h1>
       </div>
       {sites.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
-      {sites.isError && <Notice tone="bad" title="The project's sites could not be loaded">{sites.error.message}</Notice>}
+      {sites.isError && (
+        <Notice tone="bad" title="The project's sites could not be loaded">
+          {sites.error.message}
+        </Notice>
+      )}
       {role && !canEdit && (
         <Notice title="Viewers can read climate files but not upload them">
           <span data-testid="upload-read-only">

@@ -71,9 +71,8 @@ export function HomeRoute() {
       </div>
       <Panel title="What Tramontane answers">
         <p className="text-sm leading-relaxed text-ink-soft">
-          For a site and a cooling design: how many hours a year the IT halls run on outside air or water alone
-          (free cooling), with evaporative help (adiabatic assist), or on compressors (mechanical), checked hour by
-          hour against the IT inlet envelope, with the energy, water and back-up capacity that follows.
+          For a site and a cooling design: how many hours a year the IT halls run on outside air or water alone (free cooling), with evaporative help (adiabatic
+          assist), or on compressors (mechanical), checked hour by hour against the IT inlet envelope, with the energy, water and back-up capacity that follows.
         </p>
       </Panel>
     </div>

@@ -13,11 +13,7 @@ export function RouteError() {
       <h1 className="text-lg font-semibold text-signal-bad">Something went wrong on this page</h1>
       <p className="num mt-2 rounded border border-rule bg-panel p-3 text-sm">{message}</p>
       <p className="mt-3 text-sm text-ink-soft">Reload the page; if it happens again, note what you did and tell the team.</p>
-      <button
-        type="button"
-        onClick={() => window.location.reload()}
-        className="mt-4 rounded bg-harbour px-4 py-2 text-sm text-paper hover:bg-harbour-soft"
-      >
+      <button type="button" onClick={() => window.location.reload()} className="mt-4 rounded bg-harbour px-4 py-2 text-sm text-paper hover:bg-harbour-soft">
         Reload
       </button>
     </div>

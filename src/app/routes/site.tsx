@@ -22,9 +22,7 @@ export function SiteRoute() {
         siteId={siteId}
         canEdit={canEdit}
         onDeleted={() => navigate(`/projects/${projectId}`)}
-        climateFiles={
-          <ClimateFilesPanel projectId={projectId} canEdit={canEdit} siteId={siteId} title="Climate files of this site" />
-        }
+        climateFiles={<ClimateFilesPanel projectId={projectId} canEdit={canEdit} siteId={siteId} title="Climate files of this site" />}
       />
     </div>
   );

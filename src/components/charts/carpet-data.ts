@@ -47,12 +47,7 @@ export function carpetCell(timestampMs: number, offsetMs: number, civil: { year:
  * Modes: the most frequent of the codes 0–2 per cell, or 3 (no data) when a cell has only 3 or NaN.
  * One pass over the hours, no object per hour.
  */
-export function carpetBins(
-  timestampsMs: ArrayLike<number>,
-  values: ArrayLike<number>,
-  kind: 'temperature' | 'mode',
-  utcOffsetMinutes = 0,
-): CarpetGrid {
+export function carpetBins(timestampsMs: ArrayLike<number>, values: ArrayLike<number>, kind: 'temperature' | 'mode', utcOffsetMinutes = 0): CarpetGrid {
   if (timestampsMs.length !== values.length) {
     throw new RangeError(`values has ${values.length} hours but timestampsMs has ${timestampsMs.length}`);
   }

@@ -26,9 +26,7 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
   const summary = useMemo(() => carpetSummary(timestampsMs, values, kind, utcOffsetMinutes), [timestampsMs, values, kind, utcOffsetMinutes]);
   const zone = utcOffsetLabel(utcOffsetMinutes);
   const label =
-    kind === 'temperature'
-      ? `Dry-bulb temperature by day of year and hour of day (${zone})`
-      : `Cooling mode by day of year and hour of day (${zone})`;
+    kind === 'temperature' ? `Dry-bulb temperature by day of year and hour of day (${zone})` : `Cooling mode by day of year and hour of day (${zone})`;
 
   const render = useCallback(
     (Plot: PlotModule, widthPx: number) => {
@@ -66,8 +64,20 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
         marginLeft: 48,
         marginBottom: 36,
         style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
-        x: { domain: [1, 367 - shift], ticks: monthTicks, tickFormat: (d: number) => monthNames[monthTicks.indexOf(d)] ?? '', label: 'Day of year →', labelAnchor: 'right' },
-        y: { domain: [24, 0], ticks: [0, 6, 12, 18, 24], tickFormat: (h: number) => `${String(h).padStart(2, '0')}:00`, label: `↓ Hour of day (${zone})`, labelAnchor: 'top' },
+        x: {
+          domain: [1, 367 - shift],
+          ticks: monthTicks,
+          tickFormat: (d: number) => monthNames[monthTicks.indexOf(d)] ?? '',
+          label: 'Day of year →',
+          labelAnchor: 'right',
+        },
+        y: {
+          domain: [24, 0],
+          ticks: [0, 6, 12, 18, 24],
+          tickFormat: (h: number) => `${String(h).padStart(2, '0')}:00`,
+          label: `↓ Hour of day (${zone})`,
+          labelAnchor: 'top',
+        },
         color:
           kind === 'temperature'
             ? { type: 'linear', interpolate: temperatureRamp, legend: true, label: `Dry-bulb (${unitOf('temperature', unitSystem)})` }
@@ -98,16 +108,22 @@ export function CarpetPlot({ timestampsMs, values, kind, utcOffsetMinutes = 0 }:
             </caption>
             <thead>
               <tr className="border-b border-rule text-ink-soft">
-                <th scope="col" className="py-1 text-left font-sans font-medium">Month</th>
+                <th scope="col" className="py-1 text-left font-sans font-medium">
+                  Month
+                </th>
                 {(kind === 'mode' ? modeKeys.map((k) => modeLabels[k]) : bandLabels).map((h) => (
-                  <th key={h} scope="col" className="px-2 py-1 font-sans font-medium">{h}</th>
+                  <th key={h} scope="col" className="px-2 py-1 font-sans font-medium">
+                    {h}
+                  </th>
                 ))}
               </tr>
             </thead>
             <tbody>
               {summary.map((row) => (
                 <tr key={row.month} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthNames[row.month - 1]}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                    {monthNames[row.month - 1]}
+                  </th>
                   {row.values.map((v, i) => (
                     <td key={i} className="px-2 py-0.5">
                       {kind === 'mode' ? formatCount(v) : formatQuantity('temperature', unitSystem, v, false)}

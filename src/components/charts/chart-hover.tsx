@@ -113,7 +113,11 @@ export function ChartHover({ hover, rules, units }: { hover: HoverPoint; rules: 
       role="status"
       data-testid="chart-hover"
       className="pointer-events-none absolute z-10 w-72 rounded border border-rule bg-panel p-2 text-xs shadow-md"
-      style={{ left: Math.max(0, hover.leftPx + 14), top: Math.max(0, hover.topPx + 14), transform: hover.leftPx > 420 ? 'translateX(calc(-100% - 28px))' : undefined }}
+      style={{
+        left: Math.max(0, hover.leftPx + 14),
+        top: Math.max(0, hover.topPx + 14),
+        transform: hover.leftPx > 420 ? 'translateX(calc(-100% - 28px))' : undefined,
+      }}
     >
       <p className="num text-ink-soft">
         {formatQuantity('temperature', units, hover.dryBulbC)} · {formatQuantity('humidityRatio', units, hover.humidityRatio)}
@@ -135,7 +139,8 @@ export function ChartHover({ hover, rules, units }: { hover: HoverPoint; rules: 
         <div className="mt-1.5 border-t border-rule pt-1.5" data-testid="hover-cell">
           <p>
             <span className="num">
-              {t(cell.dryBulbFromC)}–{formatQuantity('temperature', units, cell.dryBulbToC)}, {w(cell.humidityRatioFrom)}–{formatQuantity('humidityRatio', units, cell.humidityRatioTo)}
+              {t(cell.dryBulbFromC)}–{formatQuantity('temperature', units, cell.dryBulbToC)}, {w(cell.humidityRatioFrom)}–
+              {formatQuantity('humidityRatio', units, cell.humidityRatioTo)}
             </span>
             : <span className="num font-medium">{cell.hours.toLocaleString('en')} h</span>
           </p>

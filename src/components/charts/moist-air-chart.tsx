@@ -1,6 +1,15 @@
 import { useCallback, useMemo, useRef, useState, type PointerEvent } from 'react';
 import type { ChartProjection } from '../../../shared/psychrometrics';
-import { binHours, cellOf, gridStates, hoursPerGridRegion, operatingRegionGrid, type CellHours, type DesignForRegions, type OperatingRegionGrid } from '../../../shared/scenario/operating-regions';
+import {
+  binHours,
+  cellOf,
+  gridStates,
+  hoursPerGridRegion,
+  operatingRegionGrid,
+  type CellHours,
+  type DesignForRegions,
+  type OperatingRegionGrid,
+} from '../../../shared/scenario/operating-regions';
 import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
 import { LocalUnitSystem, useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ChartHover, hoverAt, type HoverPoint } from './chart-hover';
@@ -72,14 +81,28 @@ export function MoistAirChart(props: MoistAirChartProps) {
   );
 }
 
-function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, design = null, envelopes = [], markers = [], compact = false }: MoistAirChartProps) {
+function MoistAirChartBody({
+  pressurePa,
+  projection: fixedProjection,
+  hours,
+  design = null,
+  envelopes = [],
+  markers = [],
+  compact = false,
+}: MoistAirChartProps) {
   const { unitSystem, setUnitSystem, local } = useUnitSystem();
   const [chosenProjection, setProjection] = useState<ChartProjection>('dry-bulb-humidity-ratio');
   const projection = fixedProjection ?? chosenProjection;
 
   const { dryBulbC, humidityRatio } = hours;
   const fittedWindow = useMemo(
-    () => chartWindowFor(pressurePa, { dryBulbC, humidityRatio }, envelopes.map((e) => e.limits), markers),
+    () =>
+      chartWindowFor(
+        pressurePa,
+        { dryBulbC, humidityRatio },
+        envelopes.map((e) => e.limits),
+        markers,
+      ),
     [pressurePa, dryBulbC, humidityRatio, envelopes, markers],
   );
   // Kept by value: a new design with the same window must not redo the grid's wet-bulbs.
@@ -140,14 +163,38 @@ function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, des
       markerRows.forEach((r) => {
         const { px, py } = toPx(r.x, r.y);
         const w = textWidthPx(r.label, 12);
-        requests.push({ item: { text: r.label, fill: '#1d2327', weight: 600, size: 12 }, x: px, y: py, widthPx: w, heightPx: 14, priority: 3, candidates: sideCandidates(w, 14) });
+        requests.push({
+          item: { text: r.label, fill: '#1d2327', weight: 600, size: 12 },
+          x: px,
+          y: py,
+          widthPx: w,
+          heightPx: 14,
+          priority: 3,
+          candidates: sideCandidates(w, 14),
+        });
       });
       if (envelopes.length === 1 && envelopeRows.length) {
         // At the envelope's upper-left corner, or along its top edge.
-        const corner = envelopeRows.reduce((a, b) => (toPx(b.x, b.y).py < toPx(a.x, a.y).py - 20 || (Math.abs(toPx(b.x, b.y).py - toPx(a.x, a.y).py) <= 20 && b.x < a.x) ? b : a));
+        const corner = envelopeRows.reduce((a, b) =>
+          toPx(b.x, b.y).py < toPx(a.x, a.y).py - 20 || (Math.abs(toPx(b.x, b.y).py - toPx(a.x, a.y).py) <= 20 && b.x < a.x) ? b : a,
+        );
         const { px, py } = toPx(corner.x, corner.y);
         const w = textWidthPx(envelopes[0].label, 12);
-        requests.push({ item: { text: envelopes[0].label, fill: envelopeInks[0], weight: 600, size: 12 }, x: px, y: py, widthPx: w, heightPx: 14, priority: 2, candidates: [[0, -18], [-w / 2, -18], [-w, -18], [4, 4], [-w - 4, 4]] });
+        requests.push({
+          item: { text: envelopes[0].label, fill: envelopeInks[0], weight: 600, size: 12 },
+          x: px,
+          y: py,
+          widthPx: w,
+          heightPx: 14,
+          priority: 2,
+          candidates: [
+            [0, -18],
+            [-w / 2, -18],
+            [-w, -18],
+            [4, 4],
+            [-w - 4, 4],
+          ],
+        });
       }
       for (const line of lines) {
         if (!line.points.length) continue;
@@ -159,12 +206,37 @@ function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, des
         const candidates: Array<[number, number]> =
           line.kind === 'wet-bulb'
             ? projection === 'h-x'
-              ? [[3, -6], [3, -14], [3, 2]]
-              : [[-w - 4, -14], [-w - 4, -4], [-w - 10, -20]]
+              ? [
+                  [3, -6],
+                  [3, -14],
+                  [3, 2],
+                ]
+              : [
+                  [-w - 4, -14],
+                  [-w - 4, -4],
+                  [-w - 10, -20],
+                ]
             : line.kind === 'relative-humidity'
-              ? [[-w - 2, -12], [-w - 2, 1], [-w - 2, -24], [2, -12]]
-              : [[-w - 3, -12], [-w - 3, 1], [2, -12]];
-        requests.push({ item: { text: item, fill: labelInk[line.kind] ?? '#4a545b', weight: 400, size: 10 }, x: px, y: py, widthPx: w, heightPx: 12, priority: line.kind === 'wet-bulb' ? 1 : line.kind === 'relative-humidity' ? 0.5 : 0, candidates });
+              ? [
+                  [-w - 2, -12],
+                  [-w - 2, 1],
+                  [-w - 2, -24],
+                  [2, -12],
+                ]
+              : [
+                  [-w - 3, -12],
+                  [-w - 3, 1],
+                  [2, -12],
+                ];
+        requests.push({
+          item: { text: item, fill: labelInk[line.kind] ?? '#4a545b', weight: 400, size: 10 },
+          x: px,
+          y: py,
+          widthPx: w,
+          heightPx: 12,
+          priority: line.kind === 'wet-bulb' ? 1 : line.kind === 'relative-humidity' ? 0.5 : 0,
+          candidates,
+        });
       }
       const placed = placeLabels(requests, area, markerBoxes, (box) => hoursUnder(box));
       const labelRows = placed.map((l) => ({ ...l.item, left: l.box.left, top: l.box.top }));
@@ -228,8 +300,27 @@ function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, des
       const scale = s.svg.width.baseVal.value / rect.width || 1;
       const px = (event.clientX - rect.left) * scale;
       const py = (event.clientY - rect.top) * scale;
-      const next = hoverAt({ px, py, xDisplay: s.x.invert(px), yDisplay: s.y.invert(py), domains: chartDomains(window, projection, unitSystem), projection, units: unitSystem, regions, cells, pressurePa });
-      setHover(next ? { ...next, leftPx: event.clientX - (event.currentTarget.getBoundingClientRect().left ?? 0), topPx: event.clientY - event.currentTarget.getBoundingClientRect().top } : null);
+      const next = hoverAt({
+        px,
+        py,
+        xDisplay: s.x.invert(px),
+        yDisplay: s.y.invert(py),
+        domains: chartDomains(window, projection, unitSystem),
+        projection,
+        units: unitSystem,
+        regions,
+        cells,
+        pressurePa,
+      });
+      setHover(
+        next
+          ? {
+              ...next,
+              leftPx: event.clientX - (event.currentTarget.getBoundingClientRect().left ?? 0),
+              topPx: event.clientY - event.currentTarget.getBoundingClientRect().top,
+            }
+          : null,
+      );
     },
     [cells, pressurePa, projection, regions, unitSystem, window],
   );
@@ -249,7 +340,9 @@ function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, des
     <div className="space-y-2" data-testid="moist-air-chart">
       <div className="flex flex-wrap items-center gap-3">
         {!fixedProjection && !compact && <SegmentedSwitch label="Chart projection" options={projectionOptions} value={projection} onChange={setProjection} />}
-        {!compact && <SegmentedSwitch<UnitSystem> label={local ? 'Units of this chart' : 'Units'} options={unitOptions} value={unitSystem} onChange={setUnitSystem} />}
+        {!compact && (
+          <SegmentedSwitch<UnitSystem> label={local ? 'Units of this chart' : 'Units'} options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
+        )}
         {!compact && local && <span className="text-xs text-ink-soft">(this chart only)</span>}
         <p className="num text-xs text-ink-soft">at {formatQuantity('pressure', unitSystem, pressurePa)}</p>
         {cells && <DensityKey maxHours={cells.maxHours} units={unitSystem} />}
@@ -277,7 +370,10 @@ function MoistAirChartBody({ pressurePa, projection: fixedProjection, hours, des
         {hours.dryBulbC.length ? 'Hours: ink by how many fall in each cell. ' : ''}
         Lines: saturation (bold), relative humidity every 10 %, wet-bulb (dashed), enthalpy (dotted)
         {projection === 'h-x' ? ', isotherms (grey, nearly level; 0 °C is exactly level)' : ''}.
-        <span className="print:hidden"> Point at the chart for {design ? 'a region’s rule, ' : ''}the state there{hours.dryBulbC.length ? ' and its cell’s hours' : ''}.</span>
+        <span className="print:hidden">
+          {' '}
+          Point at the chart for {design ? 'a region’s rule, ' : ''}the state there{hours.dryBulbC.length ? ' and its cell’s hours' : ''}.
+        </span>
       </p>
       {design && rules && compact && <RegionTable rules={rules} hours={regionHours} totalHours={hoursWithData} countedBy={cells?.totals ? 'modes' : 'grid'} />}
       {!compact && <MoistAirTable hours={hours} envelopes={envelopes} markers={markers} pressurePa={pressurePa} system={unitSystem} />}
@@ -293,7 +389,11 @@ function DensityKey({ maxHours, units }: { maxHours: number; units: UnitSystem }
     <p className="flex items-center gap-1.5 text-xs text-ink-soft" data-testid="density-key">
       Hours per {cell} cell:
       <span className="num">1</span>
-      <span aria-hidden className="inline-block h-2.5 w-16 rounded-sm" style={{ background: `linear-gradient(to right, rgba(${r},${g},${b},0.12), rgba(${r},${g},${b},0.88))` }} />
+      <span
+        aria-hidden
+        className="inline-block h-2.5 w-16 rounded-sm"
+        style={{ background: `linear-gradient(to right, rgba(${r},${g},${b},0.12), rgba(${r},${g},${b},0.88))` }}
+      />
       <span className="num">{maxHours.toLocaleString('en')}</span>
     </p>
   );
@@ -323,7 +423,16 @@ function lineLabel(line: DisplayLine, system: UnitSystem): string | null {
 
 /** Label positions around a point mark: right, left, above, below, and the diagonals. */
 function sideCandidates(w: number, h: number): Array<[number, number]> {
-  return [[9, -h / 2], [-w - 9, -h / 2], [-w / 2, -h - 8], [-w / 2, 8], [9, -h - 6], [-w - 9, -h - 6], [9, 6], [-w - 9, 6]];
+  return [
+    [9, -h / 2],
+    [-w - 9, -h / 2],
+    [-w / 2, -h - 8],
+    [-w / 2, 8],
+    [9, -h - 6],
+    [-w - 9, -h - 6],
+    [9, 6],
+    [-w - 9, 6],
+  ];
 }
 
 /** The moist-air state at a pixel of the figure, from the axis domains and margins (for placing labels). */

@@ -47,12 +47,7 @@ export interface ChartMarker {
  * The window: at least −10…40 °C and 0…20 g/kg, widened in 5 K steps to hold every hour, envelope and
  * marker, and never beyond −50…60 °C or 60 g/kg.
  */
-export function chartWindowFor(
-  pressurePa: number,
-  hours: ChartHours,
-  envelopes: EnvelopeLimitsInput[] = [],
-  markers: ChartMarker[] = [],
-): ChartWindow {
+export function chartWindowFor(pressurePa: number, hours: ChartHours, envelopes: EnvelopeLimitsInput[] = [], markers: ChartMarker[] = []): ChartWindow {
   let tMin = -10;
   let tMax = 40;
   let wMax = 0;
@@ -68,7 +63,11 @@ export function chartWindowFor(
   for (const e of envelopes) {
     take(e.dryBulbMinC, Number.NaN);
     take(e.dryBulbMaxC, Number.NaN);
-    if (Number.isFinite(e.dewPointMaxC)) take(Number.NaN, safeW(() => humidityRatioFromDewPoint(e.dewPointMaxC, pressurePa)));
+    if (Number.isFinite(e.dewPointMaxC))
+      take(
+        Number.NaN,
+        safeW(() => humidityRatioFromDewPoint(e.dewPointMaxC, pressurePa)),
+      );
   }
   tMin = Math.max(-50, Math.floor(tMin / 5) * 5);
   tMax = Math.min(60, Math.ceil(tMax / 5) * 5);
@@ -167,7 +166,10 @@ export function backgroundLines(window: ChartWindow, projection: ChartProjection
     const last = toDisplay('temperature', system, window.dryBulbMaxC);
     for (let shown = first; shown <= last + 1e-9; shown += step) {
       const t = system === 'IP' ? fahrenheitToCelsius(shown) : shown;
-      const wEnd = Math.min(window.humidityRatioMax, safeW(() => saturationHumidityRatio(t, window.pressurePa)));
+      const wEnd = Math.min(
+        window.humidityRatioMax,
+        safeW(() => saturationHumidityRatio(t, window.pressurePa)),
+      );
       if (!(wEnd > 0)) continue;
       lines.push({
         kind: 'isotherm',
@@ -196,7 +198,11 @@ export function envelopePolygon(limits: EnvelopeLimitsInput, window: ChartWindow
   const n = Math.max(2, Math.ceil((tTo - tFrom) / 0.25) + 1);
   for (let i = 0; i < n; i++) {
     const t = tFrom + ((tTo - tFrom) * i) / (n - 1);
-    const hi = Math.min(wDpMax, safeW(() => humidityRatioFromRh(t, Math.min(100, limits.rhMaxPct), p)), window.humidityRatioMax);
+    const hi = Math.min(
+      wDpMax,
+      safeW(() => humidityRatioFromRh(t, Math.min(100, limits.rhMaxPct), p)),
+      window.humidityRatioMax,
+    );
     const lo = Math.max(wDpMin || 0, safeW(() => humidityRatioFromRh(t, Math.max(0, limits.rhMinPct), p)) || 0);
     if (hi >= lo) {
       upper.push({ dryBulbC: t, humidityRatio: hi });

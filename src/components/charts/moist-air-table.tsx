@@ -77,16 +77,26 @@ export function MoistAirTable({
           </caption>
           <thead>
             <tr className="border-b border-rule font-sans text-ink-soft">
-              <th scope="col" className="py-1 text-left font-medium">Quantity</th>
-              <th scope="col" className={cell}>Min</th>
-              <th scope="col" className={cell}>Mean</th>
-              <th scope="col" className={cell}>Max</th>
+              <th scope="col" className="py-1 text-left font-medium">
+                Quantity
+              </th>
+              <th scope="col" className={cell}>
+                Min
+              </th>
+              <th scope="col" className={cell}>
+                Mean
+              </th>
+              <th scope="col" className={cell}>
+                Max
+              </th>
             </tr>
           </thead>
           <tbody>
             {rows.map(([name, kind, s]) => (
               <tr key={name} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 text-left font-sans font-normal">{name} ({unitOf(kind, system)})</th>
+                <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                  {name} ({unitOf(kind, system)})
+                </th>
                 <td className={cell}>{formatQuantity(kind, system, s.min, false)}</td>
                 <td className={cell}>{formatQuantity(kind, system, s.mean, false)}</td>
                 <td className={cell}>{formatQuantity(kind, system, s.max, false)}</td>
@@ -97,12 +107,16 @@ export function MoistAirTable({
         {(envelopes.length > 0 || hours.modes || markers.length > 0) && (
           <table className="num w-full text-xs">
             <caption className="pb-1 text-left font-sans text-ink-soft">
-              {[envelopes.length ? 'Hours inside each envelope' : '', hours.modes ? 'Hours per mode' : '', markers.length ? 'Marked states' : ''].filter(Boolean).join(' · ')}
+              {[envelopes.length ? 'Hours inside each envelope' : '', hours.modes ? 'Hours per mode' : '', markers.length ? 'Marked states' : '']
+                .filter(Boolean)
+                .join(' · ')}
             </caption>
             <tbody>
               {envelopes.map((e, k) => (
                 <tr key={`e${k}`} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">Inside {e.label}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                    Inside {e.label}
+                  </th>
                   <td className={cell}>{formatCount(stats.inside[k].inside)} h</td>
                   <td className={cell}>{stats.inside[k].withData ? ((100 * stats.inside[k].inside) / stats.inside[k].withData).toFixed(1) : '–'} %</td>
                 </tr>
@@ -110,14 +124,18 @@ export function MoistAirTable({
               {hours.modes &&
                 modeKeys.map((key, code) => (
                   <tr key={key} className="border-b border-rule/60">
-                    <th scope="row" className="py-0.5 text-left font-sans font-normal">{modeLabels[key]}</th>
+                    <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                      {modeLabels[key]}
+                    </th>
                     <td className={cell}>{formatCount(stats.modeHours[code])} h</td>
                     <td className={cell}>{total ? ((100 * stats.modeHours[code]) / total).toFixed(1) : '–'} %</td>
                   </tr>
                 ))}
               {markers.map((m) => (
                 <tr key={m.label} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{m.label}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                    {m.label}
+                  </th>
                   <td className={cell}>{formatQuantity('temperature', system, m.dryBulbC)}</td>
                   <td className={cell}>{formatQuantity('humidityRatio', system, m.humidityRatio)}</td>
                 </tr>

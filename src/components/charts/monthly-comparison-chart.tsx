@@ -63,16 +63,22 @@ export function MonthlyComparisonChart({ series, withTable = true }: { series: {
             <caption className="pb-1 text-left font-sans text-ink-soft">Hours free / adiabatic / mechanical per month</caption>
             <thead>
               <tr className="border-b border-rule text-ink-soft">
-                <th scope="col" className="py-1 text-left font-sans font-medium">Month</th>
+                <th scope="col" className="py-1 text-left font-sans font-medium">
+                  Month
+                </th>
                 {series.map((s) => (
-                  <th key={s.runId} scope="col" className="px-2 py-1 font-sans font-medium">Run {s.runId}</th>
+                  <th key={s.runId} scope="col" className="px-2 py-1 font-sans font-medium">
+                    Run {s.runId}
+                  </th>
                 ))}
               </tr>
             </thead>
             <tbody>
               {months.map((name, i) => (
                 <tr key={name} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{name}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                    {name}
+                  </th>
                   {series.map((s) => {
                     const m = s.hoursByMonth.find((r) => r.month === i + 1);
                     return (

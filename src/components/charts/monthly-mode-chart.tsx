@@ -13,7 +13,17 @@ import { modeColourScale, modeLabelOrder } from './mode-scale';
  * Stacked hours per mode for each calendar month (site standard time), with the table beside it
  * (`withTable={false}` where the page prints the table itself, as the report does).
  */
-export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true, engineVersion }: { byMonth: (ModeHours & { month: number })[]; zoneLabel: string; withTable?: boolean; engineVersion?: string }) {
+export function MonthlyModeChart({
+  byMonth,
+  zoneLabel,
+  withTable = true,
+  engineVersion,
+}: {
+  byMonth: (ModeHours & { month: number })[];
+  zoneLabel: string;
+  withTable?: boolean;
+  engineVersion?: string;
+}) {
   const rows = useMemo(() => monthlyModeRows(byMonth), [byMonth]);
   const render = useCallback(
     (Plot: PlotModule, widthPx: number) =>
@@ -50,7 +60,9 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true, engineV
           <table className="num mt-2 w-full text-right text-xs">
             <thead>
               <tr className="border-b border-rule text-ink-soft">
-                <th scope="col" className="py-1 text-left font-sans font-medium">Month</th>
+                <th scope="col" className="py-1 text-left font-sans font-medium">
+                  Month
+                </th>
                 {modeRowSpecs.map((spec) => (
                   <ModeColumnHead key={modeSpecKey(spec)} spec={spec} />
                 ))}
@@ -59,7 +71,9 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true, engineV
             <tbody>
               {byMonth.map((m) => (
                 <tr key={m.month} className="border-b border-rule/60">
-                  <th scope="row" className="py-0.5 text-left font-sans font-normal">{monthShort[m.month - 1]}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                    {monthShort[m.month - 1]}
+                  </th>
                   {modeRowSpecs.map((spec) => (
                     <td key={modeSpecKey(spec)} className={`px-2 py-0.5 ${spec.kind === 'subset' ? 'text-ink-soft' : ''}`}>
                       {hoursText(hoursOfSpec(m, spec))}
@@ -69,7 +83,9 @@ export function MonthlyModeChart({ byMonth, zoneLabel, withTable = true, engineV
               ))}
             </tbody>
           </table>
-          {engineVersion && byMonth.length > 0 && !countsSubsets({ hours: byMonth[0] }) && <p className="mt-1 text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
+          {engineVersion && byMonth.length > 0 && !countsSubsets({ hours: byMonth[0] }) && (
+            <p className="mt-1 text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>
+          )}
         </details>
       )}
     </div>

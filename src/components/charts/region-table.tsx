@@ -23,9 +23,15 @@ export function RegionTable({ rules, hours, totalHours, countedBy }: RegionTable
       </caption>
       <thead>
         <tr className="border-b border-rule text-xs text-ink-soft">
-          <th scope="col" className="py-1 text-left font-medium">Region</th>
-          <th scope="col" className="px-1 py-1 text-right font-medium">Hours</th>
-          <th scope="col" className="py-1 pl-1 text-right font-medium">Share</th>
+          <th scope="col" className="py-1 text-left font-medium">
+            Region
+          </th>
+          <th scope="col" className="px-1 py-1 text-right font-medium">
+            Hours
+          </th>
+          <th scope="col" className="py-1 pl-1 text-right font-medium">
+            Share
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -41,7 +47,9 @@ export function RegionTable({ rules, hours, totalHours, countedBy }: RegionTable
                 {rules[key] && <span className="mt-0.5 block text-xs text-ink-soft">{rules[key]}</span>}
               </th>
               <td className="num whitespace-nowrap px-1 py-1 text-right">{n === null ? '…' : `${n.toLocaleString('en')} h`}</td>
-              <td className="num whitespace-nowrap py-1 pl-1 text-right text-ink-soft">{n === null ? '' : totalHours ? `${((100 * n) / totalHours).toFixed(1)} %` : '–'}</td>
+              <td className="num whitespace-nowrap py-1 pl-1 text-right text-ink-soft">
+                {n === null ? '' : totalHours ? `${((100 * n) / totalHours).toFixed(1)} %` : '–'}
+              </td>
             </tr>
           );
         })}

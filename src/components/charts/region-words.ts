@@ -61,8 +61,12 @@ export function regionRules(design: DesignForRegions, pressurePa: number, units:
     const { highW, lowW } = moistureTargets(limits, system.supplyAirC, pressurePa);
     return {
       free: `Outdoor air at most ${t(offCoilC)} (the ${t(system.supplyAirC)} supply less ${dt(plant.fanHeatK)} of fan heat), humidity ratio ${eps > 0 ? `from ${w(lowW)} ` : ''}up to ${w(highW)}: outdoor air mixed with return air, no compressor.`,
-      humidified: eps > 0 ? `Outdoor air at most ${t(offCoilC)} but drier than ${w(lowW)}: free cooling, with the evaporative media only adding moisture.` : null,
-      adiabatic: eps > 0 ? `Outdoor air above ${t(offCoilC)} that the evaporative stage (${epsText}) cools to ${t(offCoilC)} along its wet-bulb line, leaving at most ${w(highW)}.` : null,
+      humidified:
+        eps > 0 ? `Outdoor air at most ${t(offCoilC)} but drier than ${w(lowW)}: free cooling, with the evaporative media only adding moisture.` : null,
+      adiabatic:
+        eps > 0
+          ? `Outdoor air above ${t(offCoilC)} that the evaporative stage (${epsText}) cools to ${t(offCoilC)} along its wet-bulb line, leaving at most ${w(highW)}.`
+          : null,
       partialMechanical: `Outdoor air too warm${eps > 0 ? ' for the evaporative stage' : ''} or more humid than ${w(highW)}, but cheaper to cool than return air at ${t(returnC)}: the coil tops up outdoor air.`,
       mechanical: `Outdoor air that costs as much to cool as the return air at ${t(returnC)} or more: the hall recirculates and compressors carry the whole load.`,
     };

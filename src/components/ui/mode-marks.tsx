@@ -11,7 +11,15 @@ export function ModeSwatch({ mode, className = 'mr-2 size-3 align-middle' }: { m
  * The modes' shares of the hours as one bar in the mode palette. Decorative unless `label` is given (then it is an
  * image with that text): a table or figure beside it carries the numbers.
  */
-export function ModeShareBar({ hours, className = 'h-4', label }: { hours: Pick<ModeHours, 'free' | 'adiabatic' | 'mechanical' | 'noData' | 'total'>; className?: string; label?: string }) {
+export function ModeShareBar({
+  hours,
+  className = 'h-4',
+  label,
+}: {
+  hours: Pick<ModeHours, 'free' | 'adiabatic' | 'mechanical' | 'noData' | 'total'>;
+  className?: string;
+  label?: string;
+}) {
   const total = hours.total || 1;
   return (
     <div className={`flex overflow-hidden rounded-sm ${className}`} {...(label ? { role: 'img', 'aria-label': label, title: label } : { 'aria-hidden': true })}>

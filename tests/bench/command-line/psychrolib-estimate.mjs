@@ -89,7 +89,9 @@ function classify(t, w, twb) {
 }
 
 const rows = Papa.parse(readFileSync(weatherFile, 'utf8').trimEnd(), { delimiter: ',', fastMode: true }).data;
-const out = ['timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time'];
+const out = [
+  'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time',
+];
 for (let r = 1; r < rows.length; r++) {
   const [stamp, tText, rhText] = rows[r];
   const iso = new Date(Date.parse(stamp)).toISOString();

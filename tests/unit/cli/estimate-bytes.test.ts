@@ -20,15 +20,43 @@ const sha256 = (bytes: string | Buffer) => createHash('sha256').update(bytes).di
 
 describe('the command line’s output, byte for byte', { timeout: 120_000 }, () => {
   it.each([
-    ['kelderwick-point.csv', 'direct-air-a1', '658d52a0191dec52d64903fa5cd4d749618998cca741fe7986b550d2d3de4364', 'f3f0f119cb7128ab5dd9f7be11acc640330b0cb074f39b57b3c428d15d26ae00'],
-    ['kelderwick-point.csv', 'water-side-tower', '9170adc236aa96207c10c50aa80e15fe624a1e78f36613a728f38a0e0e4c2e41', 'e5e6a917577a71ae7362d15319c4094bde995ffd3881f82bb89901c03493dfc5'],
-    ['teluk-hijau.tsv', 'direct-air-a1', '885e525c79aa943a630e656db2a0f28c1c716970f2098fc5b0c4d2107ce47c24', 'c86f83ede72aae40dd850c2498e7be6f5cb009bc52040b5fe1cc627df78566d9'],
-    ['mesa-alta-ridge.csv', 'water-side-tower', '96749803a6f9102a875df275feeb7ca08ece7df38ffe75a18ec10e0d24678513', 'd716e63947de89f49f478578f5c1b12d6435564424acc6138a5d944944fbc983'],
+    [
+      'kelderwick-point.csv',
+      'direct-air-a1',
+      '658d52a0191dec52d64903fa5cd4d749618998cca741fe7986b550d2d3de4364',
+      'f3f0f119cb7128ab5dd9f7be11acc640330b0cb074f39b57b3c428d15d26ae00',
+    ],
+    [
+      'kelderwick-point.csv',
+      'water-side-tower',
+      '9170adc236aa96207c10c50aa80e15fe624a1e78f36613a728f38a0e0e4c2e41',
+      'e5e6a917577a71ae7362d15319c4094bde995ffd3881f82bb89901c03493dfc5',
+    ],
+    [
+      'teluk-hijau.tsv',
+      'direct-air-a1',
+      '885e525c79aa943a630e656db2a0f28c1c716970f2098fc5b0c4d2107ce47c24',
+      'c86f83ede72aae40dd850c2498e7be6f5cb009bc52040b5fe1cc627df78566d9',
+    ],
+    [
+      'mesa-alta-ridge.csv',
+      'water-side-tower',
+      '96749803a6f9102a875df275feeb7ca08ece7df38ffe75a18ec10e0d24678513',
+      'd716e63947de89f49f478578f5c1b12d6435564424acc6138a5d944944fbc983',
+    ],
   ])('%s with %s', (weather, scenario, hourlyDigest, summaryDigest) => {
     const hourly = path.join(dir, `${weather}-${scenario}.csv`);
     const result = spawnSync(
       process.execPath,
-      ['server/cli/estimate-launcher.mjs', '--weather', `sample-weather/${weather}`, '--scenario', `sample-weather/scenarios/${scenario}.json`, '--hourly', hourly],
+      [
+        'server/cli/estimate-launcher.mjs',
+        '--weather',
+        `sample-weather/${weather}`,
+        '--scenario',
+        `sample-weather/scenarios/${scenario}.json`,
+        '--hourly',
+        hourly,
+      ],
       { cwd: root, encoding: 'utf8' },
     );
     expect(result.stderr).toBe('');

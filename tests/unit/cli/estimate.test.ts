@@ -32,7 +32,8 @@ const WEATHER = file(
   'weather.csv',
   'timestamp,dry_bulb_c,dew_point_c\n2021-07-01T00:00Z,20,10\n2021-07-01T01:00Z,,10\n2021-07-01T02:00Z,31,12\n2021-07-01T03:00Z,35,22\n',
 );
-const COLUMNS = 'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time';
+const COLUMNS =
+  'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time';
 // Synthetic winter weather: a cold hour drier than the A1 lower limit (−12 °C dew point), and a mild one.
 const WINTER = file('winter.csv', 'timestamp,dry_bulb_c,dew_point_c\n2021-01-04T00:00Z,-5,-25\n2021-01-04T01:00Z,8,2\n');
 
@@ -145,7 +146,22 @@ describe('estimate command line', { timeout: 30_000 }, () => {
 
   it('takes a column mapping from flags for a layout it would not guess', () => {
     const odd = file('odd.csv', 'when;temp;moist\n2021-07-01 00:00;20,5;10\n2021-07-01 01:00;21;10\n');
-    const r = estimate(['--weather', odd, '--scenario', SCENARIO, '--time', 'when', '--dry-bulb', 'temp:C', '--humidity', 'dew-point:moist:C', '--delimiter', 'semicolon', '--decimal', 'comma']);
+    const r = estimate([
+      '--weather',
+      odd,
+      '--scenario',
+      SCENARIO,
+      '--time',
+      'when',
+      '--dry-bulb',
+      'temp:C',
+      '--humidity',
+      'dew-point:moist:C',
+      '--delimiter',
+      'semicolon',
+      '--decimal',
+      'comma',
+    ]);
     expect(r.stderr).toBe('');
     expect(JSON.parse(r.stdout).hours).toMatchObject({ free: 2, total: 2 });
   });

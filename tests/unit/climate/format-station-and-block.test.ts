@@ -105,7 +105,9 @@ describe('fixed-width hourly station records', () => {
     const lines = STATION.split('\n');
     lines[9] = '2019 12 31 25    40    10 10182   202    33     4     0 -9999';
     lines[12] = '2019 12 31 12    40    10 10182   202    33     4     0';
-    const messages = importClimateText(lines.join('\n')).report.issues.filter((i) => i.kind === 'unparsable-time').map((i) => i.message);
+    const messages = importClimateText(lines.join('\n'))
+      .report.issues.filter((i) => i.kind === 'unparsable-time')
+      .map((i) => i.message);
     expect(messages[0]).toBe('hour 25 on line 10: hours run 0–23 (UTC); the line is left out.');
     expect(messages[1]).toMatch(/^Line 13: 11 fields, expected 12 \(year month day hour/);
   });
@@ -123,7 +125,15 @@ describe('typical-year CSVs with a station line above the header (read as before
     const { ok, series, report, mapping } = importClimateText(STATION_LINE, { timeZone: 'UTC-07:00' });
     expect(ok).toBe(true);
     expect(mapping.format ?? null).toBeNull();
-    expect(report.fileHeader).toMatchObject({ line: 2, stationId: '999002', name: 'QUELLMOOR SYNTHETIC (INVENTED)', latitude: 39.25, longitude: -104.5, elevationM: 1650, utcOffsetHours: -7 });
+    expect(report.fileHeader).toMatchObject({
+      line: 2,
+      stationId: '999002',
+      name: 'QUELLMOOR SYNTHETIC (INVENTED)',
+      latitude: 39.25,
+      longitude: -104.5,
+      elevationM: 1650,
+      utcOffsetHours: -7,
+    });
     const s = series!;
     expect(s.timestampsMs.length).toBe(72);
     // 01/31/2002 01:00 at UTC−7 is the hour ending 08:00 UTC, stored by its start, 07:00 UTC

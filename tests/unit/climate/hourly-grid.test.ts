@@ -26,7 +26,13 @@ const grid = (r: RowColumns) => averageToHours(r, 0, hourRange(r, 0));
 
 describe('averageToHours', () => {
   it('averages rows falling in the same hour, ignoring NaN cells', () => {
-    const g = grid(rows([[0, 10, 50], [0.5, 12, NaN], [1, 20, 60]]));
+    const g = grid(
+      rows([
+        [0, 10, 50],
+        [0.5, 12, NaN],
+        [1, 20, 60],
+      ]),
+    );
     expect(Array.from(g.dryBulbC)).toEqual([11, 20]);
     expect(Array.from(g.humidity)).toEqual([50, 60]);
     expect(Array.from(g.rowsInHour)).toEqual([2, 1]);
@@ -36,7 +42,16 @@ describe('averageToHours', () => {
 
 describe('fillGaps', () => {
   // complete at hours 0 and 8 with a gap of 7 hours between; then 9 complete
-  const withGap = () => trimToCompleteHours(grid(rows([[0, 0, 50], [8, 8, 58], [9, 9, 59]])))!;
+  const withGap = () =>
+    trimToCompleteHours(
+      grid(
+        rows([
+          [0, 0, 50],
+          [8, 8, 58],
+          [9, 9, 59],
+        ]),
+      ),
+    )!;
 
   it('fills a gap exactly maxGapHours long', () => {
     const g = withGap();
@@ -55,7 +70,16 @@ describe('fillGaps', () => {
   });
 
   it('trims incomplete hours at both ends', () => {
-    const g = trimToCompleteHours(grid(rows([[0, 1, NaN], [1, 2, 50], [2, 3, 51], [3, NaN, 52]])))!;
+    const g = trimToCompleteHours(
+      grid(
+        rows([
+          [0, 1, NaN],
+          [1, 2, 50],
+          [2, 3, 51],
+          [3, NaN, 52],
+        ]),
+      ),
+    )!;
     expect(g.startHour).toBe(1);
     expect(g.hours).toBe(2);
   });

@@ -15,8 +15,24 @@ const cell = fc.oneof(
   fc.string({ maxLength: 12 }),
 );
 const headerCell = fc.constantFrom(
-  'timestamp', 'dry_bulb_c', 'relative_humidity_pct', 'dew_point_c', 'wet_bulb_c', 'humidity_ratio_gkg', 'pressure_kpa',
-  'Year', 'Month', 'Day', 'Hour', 'Date', 'Time', 'Temp (F)', 'RH %', 'Station Pressure (inHg)', 'x', '',
+  'timestamp',
+  'dry_bulb_c',
+  'relative_humidity_pct',
+  'dew_point_c',
+  'wet_bulb_c',
+  'humidity_ratio_gkg',
+  'pressure_kpa',
+  'Year',
+  'Month',
+  'Day',
+  'Hour',
+  'Date',
+  'Time',
+  'Temp (F)',
+  'RH %',
+  'Station Pressure (inHg)',
+  'x',
+  '',
 );
 const csvLike = fc
   .record({
@@ -27,8 +43,9 @@ const csvLike = fc
     comment: fc.boolean(),
     bom: fc.boolean(),
   })
-  .map(({ delimiter, newline, header, rows, comment, bom }) =>
-    (bom ? '\ufeff' : '') + (comment ? `# synthetic${newline}` : '') + [header, ...rows].map((r) => r.join(delimiter)).join(newline),
+  .map(
+    ({ delimiter, newline, header, rows, comment, bom }) =>
+      (bom ? '\ufeff' : '') + (comment ? `# synthetic${newline}` : '') + [header, ...rows].map((r) => r.join(delimiter)).join(newline),
   );
 
 /** A plausible hourly file with random damage: the path where most of the importer runs. */
@@ -88,7 +105,12 @@ describe('importClimateText never throws', () => {
       checkResult(importClimateText(value as string));
       checkResult(importClimateText('timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:00Z,1,50\n', value as never));
       checkResult(
-        importClimateText('timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:00Z,1,50\n', { mapping: value as never, maxGapHours: value as never, timeZone: value as never, site: value as never }),
+        importClimateText('timestamp,dry_bulb_c,relative_humidity_pct\n2021-01-01T00:00Z,1,50\n', {
+          mapping: value as never,
+          maxGapHours: value as never,
+          timeZone: value as never,
+          site: value as never,
+        }),
       );
     }
   });

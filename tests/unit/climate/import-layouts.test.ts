@@ -161,11 +161,7 @@ describe('month/day/year dates, grains per pound, mbar', () => {
   const { series, mapping } = load('us-dates-grains-mbar.csv');
   it('tells month/day/year from a day above 12 and crosses the new year', () => {
     expect(mapping.time).toMatchObject({ layout: 'date-time', dateOrder: 'MDY' });
-    expect(values(series?.timestampsMs).map(iso)).toEqual([
-      '2021-12-31T22:00:00.000Z',
-      '2021-12-31T23:00:00.000Z',
-      '2022-01-01T00:00:00.000Z',
-    ]);
+    expect(values(series?.timestampsMs).map(iso)).toEqual(['2021-12-31T22:00:00.000Z', '2021-12-31T23:00:00.000Z', '2022-01-01T00:00:00.000Z']);
   });
   it('converts 70 gr/lb to 0.01 kg/kg (7000 gr = 1 lb) and 1013.25 mbar to 101 325 Pa', () => {
     expect(mapping.humidity).toMatchObject({ quantity: 'humidity-ratio', unit: 'gr/lb' });

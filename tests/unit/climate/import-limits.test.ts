@@ -16,7 +16,9 @@ describe('lines and columns the importer refuses before parsing', () => {
     expect(result.ok).toBe(false);
     const issue = result.report.issues.find((i) => i.kind === 'line-too-long');
     expect(issue?.line).toBe(2);
-    expect(issue?.message).toBe(`Line 2 has ${header.length.toLocaleString('en')} characters; a weather file's lines are far shorter, and Tramontane reads lines of at most ${MAX_LINE_CHARS.toLocaleString('en')}.`);
+    expect(issue?.message).toBe(
+      `Line 2 has ${header.length.toLocaleString('en')} characters; a weather file's lines are far shorter, and Tramontane reads lines of at most ${MAX_LINE_CHARS.toLocaleString('en')}.`,
+    );
   });
 
   it(`refuses more than ${MAX_COLUMNS} columns, naming the header's line`, () => {

@@ -9,7 +9,9 @@ describe('the period an import summary names', () => {
   it('is on the site standard time when the file is imported for a site, so a full year shows no next year', () => {
     expect(importPeriodWords(first, last, 'UTC-07:00')).toBe('2021-01-01 00:00 to 2023-12-31 23:00 site standard time (UTC−07:00)');
     // Europe/Paris: standard time UTC+01:00 all year in this wording (daylight saving is not standard time; IANA tz database).
-    expect(importPeriodWords(Date.UTC(2021, 6, 1, 0), Date.UTC(2021, 6, 1, 5), 'Europe/Paris')).toBe('2021-07-01 01:00 to 2021-07-01 06:00 site standard time (UTC+01:00)');
+    expect(importPeriodWords(Date.UTC(2021, 6, 1, 0), Date.UTC(2021, 6, 1, 5), 'Europe/Paris')).toBe(
+      '2021-07-01 01:00 to 2021-07-01 06:00 site standard time (UTC+01:00)',
+    );
   });
 
   it('stays in UTC without a site (the command line)', () => {

@@ -22,9 +22,7 @@ describe('a file with one row problem of each kind (tests/fixtures/climate/bad-r
   });
 
   it('names the line, column and cell of each bad row', () => {
-    expect(ofKind(result, 'unparsable-time')).toEqual([
-      expect.objectContaining({ line: 6, column: 'timestamp', value: 'not a time', severity: 'warning' }),
-    ]);
+    expect(ofKind(result, 'unparsable-time')).toEqual([expect.objectContaining({ line: 6, column: 'timestamp', value: 'not a time', severity: 'warning' })]);
     expect(ofKind(result, 'unparsable-value')).toEqual([expect.objectContaining({ line: 7, column: 'dry_bulb_c', value: 'eleven' })]);
     expect(ofKind(result, 'impossible-value').map((i) => [i.line, i.column, i.value])).toEqual([
       [8, 'dry_bulb_c', '75.0'], // above 60 °C
@@ -199,7 +197,13 @@ describe('line ends', () => {
     ['CRLF', '\r\n'],
     ['CR', '\r'],
   ])('%s with a leading comment', (_, newline) => {
-    const text = ['# synthetic', 'timestamp,dry_bulb_c,relative_humidity_pct', '2021-01-01T00:00Z,10,80', '2021-01-01T01:00Z,11,101', '2021-01-01T02:00Z,12,80'].join(newline);
+    const text = [
+      '# synthetic',
+      'timestamp,dry_bulb_c,relative_humidity_pct',
+      '2021-01-01T00:00Z,10,80',
+      '2021-01-01T01:00Z,11,101',
+      '2021-01-01T02:00Z,12,80',
+    ].join(newline);
     const result = importClimateText(text);
     expect(result.ok).toBe(true);
     expect(result.mapping.headerLine).toBe(2);

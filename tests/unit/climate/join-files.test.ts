@@ -4,7 +4,13 @@ import { importClimateText, joinClimateFiles, type FileImport } from '../../../s
 const H = 3_600_000;
 
 /** Synthetic hourly CSV text (demo data, not a station) from `startMs` for `hours` hours. */
-function csv(startMs: number, hours: number, header = 'timestamp,dry_bulb_c,relative_humidity_pct', value = (h: number) => 10 + (h % 24) / 2, humidity = 70): string {
+function csv(
+  startMs: number,
+  hours: number,
+  header = 'timestamp,dry_bulb_c,relative_humidity_pct',
+  value = (h: number) => 10 + (h % 24) / 2,
+  humidity = 70,
+): string {
   const lines = [header];
   for (let h = 0; h < hours; h++) lines.push(`${new Date(startMs + h * H).toISOString().slice(0, 16)}Z,${value(h)},${humidity}`);
   return `${lines.join('\n')}\n`;
@@ -31,8 +37,14 @@ describe('several files joined into one series', () => {
   });
 
   it('fills a short gap between files and names both files and lines', () => {
-    const a = file('jan.csv', csv(Date.UTC(2021, 0, 1), 24, undefined, () => 10));
-    const b = file('feb.csv', csv(Date.UTC(2021, 0, 1, 27), 24, undefined, () => 13));
+    const a = file(
+      'jan.csv',
+      csv(Date.UTC(2021, 0, 1), 24, undefined, () => 10),
+    );
+    const b = file(
+      'feb.csv',
+      csv(Date.UTC(2021, 0, 1, 27), 24, undefined, () => 13),
+    );
     const joined = joinClimateFiles([a, b], 6);
     expect(joined.ok).toBe(true);
     const gap = joined.report.issues.find((i) => i.kind === 'files-gap')!;
@@ -51,7 +63,10 @@ describe('several files joined into one series', () => {
 
   it('keeps the earlier file where two overlap, and refuses a file that repeats another whole', () => {
     const a = file('a.csv', csv(Date.UTC(2021, 0, 1), 48));
-    const b = file('b.csv', csv(Date.UTC(2021, 0, 2, 22), 24, undefined, () => 29));
+    const b = file(
+      'b.csv',
+      csv(Date.UTC(2021, 0, 2, 22), 24, undefined, () => 29),
+    );
     const joined = joinClimateFiles([a, b], 6);
     expect(joined.ok).toBe(true);
     const overlap = joined.report.issues.find((i) => i.kind === 'files-overlap')!;

@@ -1,14 +1,6 @@
 /** Date and time cells read by character codes, checked against Date.UTC (ECMAScript's proleptic Gregorian calendar). */
 import { describe, expect, it } from 'vitest';
-import {
-  daysFromCivil,
-  lastParse,
-  MS_PER_DAY,
-  parseDateCell,
-  parseDateTimeCell,
-  parseIntegerCell,
-  parseTimeCell,
-} from '../../../shared/climate/time-cells';
+import { daysFromCivil, lastParse, MS_PER_DAY, parseDateCell, parseDateTimeCell, parseIntegerCell, parseTimeCell } from '../../../shared/climate/time-cells';
 import { createLocalToUtc } from '../../../shared/climate/local-time';
 import { fixedOffsetMs } from '../../../shared/time-zone';
 

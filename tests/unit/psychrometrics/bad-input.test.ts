@@ -90,7 +90,9 @@ describe('bulk form: NaN for a bad hour, never an exception mid-series', () => {
 
   it('structural mistakes are caught before the loop, naming the field', () => {
     const one = Float64Array.from([20]);
-    expect(() => bulkStates({ dryBulbC: one, humidity: { kind: 'relative-humidity-pct', values: new Float64Array(2) }, pressurePa: p })).toThrow(/humidity.values/);
+    expect(() => bulkStates({ dryBulbC: one, humidity: { kind: 'relative-humidity-pct', values: new Float64Array(2) }, pressurePa: p })).toThrow(
+      /humidity.values/,
+    );
     expect(() => bulkStates({ dryBulbC: one, humidity: { kind: 'relative-humidity-pct', values: one }, pressurePa: 500 })).toThrow(/pressurePa/);
     expect(() => bulkStates({ dryBulbC: one, humidity: { kind: 'grains' as never, values: one }, pressurePa: p })).toThrow(/humidity.kind/);
   });

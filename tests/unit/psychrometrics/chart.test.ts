@@ -52,7 +52,14 @@ describe('h–x diagram with oblique enthalpy axis', () => {
     for (const { x, y } of points) expect(y + 2501 * x).toBeCloseTo(40, 9);
   });
   it('gives every family at any pressure', () => {
-    const lines = chartGeometry({ ...window(standardPressurePa(1800)), projection: 'h-x', rhPcts: [20, 60], wetBulbsC: [10], enthalpiesKJPerKg: [30], volumesM3PerKg: [0.95] });
+    const lines = chartGeometry({
+      ...window(standardPressurePa(1800)),
+      projection: 'h-x',
+      rhPcts: [20, 60],
+      wetBulbsC: [10],
+      enthalpiesKJPerKg: [30],
+      volumesM3PerKg: [0.95],
+    });
     expect(lines.map((l) => l.kind)).toEqual(['saturation', 'relative-humidity', 'relative-humidity', 'wet-bulb', 'enthalpy', 'specific-volume']);
     for (const line of lines) expect(line.points.length).toBeGreaterThan(5);
   });

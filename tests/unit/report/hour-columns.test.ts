@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { decodeHourColumns, encodeHourColumns, evenStepMs, hourTimestampsMs } from '../../../shared/report/hour-columns';
 import { runHourColumns } from '../../../shared/report/run-hour-columns';
 
-const header = { hours: 3, startMs: Date.UTC(2024, 0, 1), stepMs: 3_600_000, sitePressurePa: 101_325, modeNames: ['free', 'adiabatic', 'mechanical', 'no_data'] };
+const header = {
+  hours: 3,
+  startMs: Date.UTC(2024, 0, 1),
+  stepMs: 3_600_000,
+  sitePressurePa: 101_325,
+  modeNames: ['free', 'adiabatic', 'mechanical', 'no_data'],
+};
 const copy = (bytes: Uint8Array) => bytes.slice().buffer as ArrayBuffer;
 
 describe('the hour-columns message', () => {
@@ -32,7 +38,12 @@ describe('the hour-columns message', () => {
     expect(evenStepMs([0, 3_600_000, 7_200_000])).toBe(3_600_000);
     expect(evenStepMs([0, 3_600_000, 10_800_000])).toBeNull();
     const timestampsMs = Float64Array.of(0, 3_600_000, 10_800_000);
-    const series = { timestampsMs, dryBulbC: Float64Array.of(20, 21, 22), humidity: { kind: 'relative-humidity-pct' as const, values: Float64Array.of(50, 50, 50) }, pressurePa: null };
+    const series = {
+      timestampsMs,
+      dryBulbC: Float64Array.of(20, 21, 22),
+      humidity: { kind: 'relative-humidity-pct' as const, values: Float64Array.of(50, 50, 50) },
+      pressurePa: null,
+    };
     const message = decodeHourColumns(
       copy(runHourColumns({ series, elevationM: 0, modes: Uint8Array.of(0, 0, 0), mechanicalFraction: new Float64Array(3), humidified: null }, ['modes'])),
     );

@@ -1,6 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import type { ImportReport } from '../../../shared/climate';
-import { comparisonCsv, comparisonRows, hourlyJson, inUnits, runSummaryRows, shapeReportRun, summaryCsv, summaryRowsIn, type ReportRunSource } from '../../../shared/report';
+import {
+  comparisonCsv,
+  comparisonRows,
+  hourlyJson,
+  inUnits,
+  runSummaryRows,
+  shapeReportRun,
+  summaryCsv,
+  summaryRowsIn,
+  type ReportRunSource,
+} from '../../../shared/report';
 import { importClimateText } from '../../../shared/climate';
 import { MODE, runScenario, type HourlyCsvInput } from '../../../shared/scenario';
 import { makeScenario } from '../scenario/fixtures';
@@ -28,7 +38,25 @@ const importReport = {
   years: [2024],
   maxGapHours: 6,
   timeZone: 'UTC',
-  counts: { lines: 50, rows: 48, rowsRejected: 0, cellsUnreadable: 1, impossibleValues: 0, clampedValues: 0, duplicateTimestamps: 0, rowsAveraged: 0, nonHourlySteps: 0, daylightSavingJumps: 0, hours: 48, measuredHours: 44, filledHours: 2, missingHours: 2, gaps: 2, longestGapHours: 2, issuesNotListed: 0 },
+  counts: {
+    lines: 50,
+    rows: 48,
+    rowsRejected: 0,
+    cellsUnreadable: 1,
+    impossibleValues: 0,
+    clampedValues: 0,
+    duplicateTimestamps: 0,
+    rowsAveraged: 0,
+    nonHourlySteps: 0,
+    daylightSavingJumps: 0,
+    hours: 48,
+    measuredHours: 44,
+    filledHours: 2,
+    missingHours: 2,
+    gaps: 2,
+    longestGapHours: 2,
+    issuesNotListed: 0,
+  },
   issues: [{ kind: 'gap-filled', severity: 'warning', message: 'gap filled' }],
 } as unknown as ImportReport;
 
@@ -75,7 +103,10 @@ describe('the report of a run', () => {
     expect(shapeReportRun(source(7, 24, { file: null })).climate).toMatchObject({ fileName: null, validation: null, projection: null });
     const derived = shapeReportRun(source(7, 24, { file: { ...source(7, 24).file!, derivationJson: '{"method":"shift","note":"2050s"}' } }));
     expect(derived.climate.projection).toEqual({ method: 'shift', note: '2050s' });
-    expect(shapeReportRun(source(7, 24, { scenario: { ...source(7, 24).scenario, envelope: { ...source(7, 24).scenario.envelope, presetId: undefined } } })).envelope).toEqual({
+    expect(
+      shapeReportRun(source(7, 24, { scenario: { ...source(7, 24).scenario, envelope: { ...source(7, 24).scenario.envelope, presetId: undefined } } }))
+        .envelope,
+    ).toEqual({
       label: 'Custom envelope',
       edition: null,
       recalledFromMemory: false,
@@ -115,7 +146,9 @@ describe('the report of a run', () => {
       { runId: 2, value: 0, difference: -24 },
     ]);
     const csv = comparisonCsv([a, b], 1).split('\n');
-    expect(csv[0]).toBe('figure,unit,run 1 (baseline): Supply 24 °C / Synthetic two days,run 1 difference,run 2: Supply 10 °C / Synthetic two days,run 2 difference');
+    expect(csv[0]).toBe(
+      'figure,unit,run 1 (baseline): Supply 24 °C / Synthetic two days,run 1 difference,run 2: Supply 10 °C / Synthetic two days,run 2 difference',
+    );
     expect(csv[1]).toBe('Engine version,,test,,test,');
     expect(csv[2]).toBe('Free cooling,h,24,,0,-24');
   });

@@ -54,7 +54,7 @@ describe('the summary CSV of a run', () => {
   const scenario = { ...makeScenario('indirect-air', { elevationM: 120 }), name: 'Indirect, old scenario' };
   const rows = runSummaryRows(shapeReportRun(source(scenario, 1690)));
 
-  it('states the elevation used (the site\'s) and the pressure source, and not the scenario\'s own elevation', () => {
+  it("states the elevation used (the site's) and the pressure source, and not the scenario's own elevation", () => {
     expect(value(rows, 'Site elevation used')).toBe(1690);
     expect(value(rows, 'Air pressure used')).toBe('standard atmosphere at the site elevation (the climate file has no station pressure)');
     expect(value(rows, 'Hours with pressure from the standard atmosphere')).toBe(2 * 8760);
@@ -64,7 +64,7 @@ describe('the summary CSV of a run', () => {
   });
 
   it('carries the year-to-year statistics the page shows: median, P10, P90, spread, standard deviation and the worst year', () => {
-    const mechanical = (rows.filter((r) => r.section === 'by year' && / Mechanical$/.test(r.figure)).map((r) => r.value) as number[]);
+    const mechanical = rows.filter((r) => r.section === 'by year' && / Mechanical$/.test(r.figure)).map((r) => r.value) as number[];
     expect(mechanical).toHaveLength(2);
     // Two full years: nearest rank gives the lower year as median and P10, the higher as P90 (Hyndman & Fan 1996, definition 1).
     const [lo, hi] = [...mechanical].sort((a, b) => a - b);
@@ -98,7 +98,7 @@ describe('the summary CSV of a run', () => {
 });
 
 describe('the inputs that differ between compared runs', () => {
-  it('lists only the inputs whose values differ, never the name or an old scenario\'s own elevation', () => {
+  it("lists only the inputs whose values differ, never the name or an old scenario's own elevation", () => {
     const a = makeScenario('direct-air', { system: { supplyAirC: 24 }, elevationM: 0 });
     const b = { ...makeScenario('direct-air', { system: { supplyAirC: 27 }, elevationM: 120 }), name: 'Another name' };
     const differing = differingInputs([a, b]);

@@ -6,14 +6,31 @@
  */
 import { describe, expect, it } from 'vitest';
 import { classifyHours, EXCURSION, MODE, moistureTargets, type InletLimits } from '../../../shared/scenario/classify';
-import { makeScenario, outdoorHours, plantOf, psy, RECOMMENDED, SEA_LEVEL_PA, stateFromDewPoint, stateFromWetBulb, wFromDewPoint, type ReferenceState } from './fixtures';
+import {
+  makeScenario,
+  outdoorHours,
+  plantOf,
+  psy,
+  RECOMMENDED,
+  SEA_LEVEL_PA,
+  stateFromDewPoint,
+  stateFromWetBulb,
+  wFromDewPoint,
+  type ReferenceState,
+} from './fixtures';
 
 const p = SEA_LEVEL_PA;
 const limits: InletLimits = RECOMMENDED;
 
 function classifyOne(scenario: ReturnType<typeof makeScenario>, state: ReferenceState, envelope: InletLimits = limits) {
   const out = classifyHours(scenario.system, envelope, outdoorHours([state]), plantOf(scenario));
-  return { mode: out.modes[0], fraction: out.mechanicalFraction[0], excursion: out.excursions[0], evaporation: out.evaporationKgPerKgAir[0], humidified: out.humidified[0] };
+  return {
+    mode: out.modes[0],
+    fraction: out.mechanicalFraction[0],
+    excursion: out.excursions[0],
+    evaporation: out.evaporationKgPerKgAir[0],
+    humidified: out.humidified[0],
+  };
 }
 
 describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelope at sea level)', () => {
@@ -50,7 +67,7 @@ describe('direct-air (Ts 24 °C, fan heat 1 K, ΔT 12 K, 2021 recommended envelo
     const tDew = psy.GetTDewPointFromHumRatio(20, wHi, p);
     const offCoil = Ts - f;
     const share = (Tr - offCoil) / (Tr - tDew);
-    const outdoorLoad = share * (psy.GetMoistAirEnthalpy(hour.t, hour.w) - psy.GetMoistAirEnthalpy(tDew, wHi)) / 1000;
+    const outdoorLoad = (share * (psy.GetMoistAirEnthalpy(hour.t, hour.w) - psy.GetMoistAirEnthalpy(tDew, wHi))) / 1000;
     const recirculationLoad = (psy.GetMoistAirEnthalpy(Tr, wHi) - psy.GetMoistAirEnthalpy(offCoil, wHi)) / 1000;
     expect(classifyOne(withEvap, hour).fraction).toBeCloseTo(Math.min(1, outdoorLoad / recirculationLoad), 3);
   });
@@ -249,6 +266,8 @@ describe('no data', () => {
 
   it('refuses arrays of different lengths with a RangeError naming the array', () => {
     const hours = outdoorHours([stateFromDewPoint(10, 5)]);
-    expect(() => classifyHours(makeScenario('direct-air').system, limits, { ...hours, wetBulbC: new Float64Array(2) }, { fanHeatK: 1 })).toThrow(/wetBulbC has 2 hours/);
+    expect(() => classifyHours(makeScenario('direct-air').system, limits, { ...hours, wetBulbC: new Float64Array(2) }, { fanHeatK: 1 })).toThrow(
+      /wetBulbC has 2 hours/,
+    );
   });
 });

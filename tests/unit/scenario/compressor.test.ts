@@ -4,7 +4,15 @@
  * rating conditions (recalled from memory), and the part-load curve.
  */
 import { describe, expect, it } from 'vitest';
-import { calibrateCompressor, carnotCop, compressorPowerKw, fullLoadCop, MIN_LIFT_K, partLoadInputRatio, RATING_CONDITIONS } from '../../../shared/scenario/compressor';
+import {
+  calibrateCompressor,
+  carnotCop,
+  compressorPowerKw,
+  fullLoadCop,
+  MIN_LIFT_K,
+  partLoadInputRatio,
+  RATING_CONDITIONS,
+} from '../../../shared/scenario/compressor';
 
 describe('Carnot COP', () => {
   it('is T_L / (T_H − T_L) in kelvin: −5 °C to 35 °C gives 268.15 / 40 = 6.70 (reversed Carnot cycle, Çengel & Boles ch. 6)', () => {

@@ -43,7 +43,10 @@ describe('every hour', () => {
   it('rejects the cooling load (IT + hall fans) plus the compressors’ work, and uses no negative energy or water', () => {
     fc.assert(
       fc.property(systemArb, fc.array(hourArb, { minLength: 1, maxLength: 48 }), (system, hours) => {
-        const scenario = scenarioFor(system, hours.map((h) => h.load));
+        const scenario = scenarioFor(
+          system,
+          hours.map((h) => h.load),
+        );
         const run = runScenario(scenario, seriesOf(hours));
         const e = run.energy;
         const hallFanDesignKw = scenario.energy.fanPowerFraction * scenario.energy.itLoadKw;
@@ -94,7 +97,14 @@ describe('a tower chiller', () => {
     });
     fc.assert(
       fc.property(
-        fc.array(fc.record({ t: fc.double({ min: 5, max: 45, noNaN: true }), depression: fc.double({ min: 0, max: 30, noNaN: true }), drier: fc.double({ min: 0, max: 15, noNaN: true }) }), { minLength: 1, maxLength: 24 }),
+        fc.array(
+          fc.record({
+            t: fc.double({ min: 5, max: 45, noNaN: true }),
+            depression: fc.double({ min: 0, max: 30, noNaN: true }),
+            drier: fc.double({ min: 0, max: 15, noNaN: true }),
+          }),
+          { minLength: 1, maxLength: 24 },
+        ),
         (hours) => {
           const humid = runScenario(scenario, seriesOf(hours));
           const dry = runScenario(scenario, seriesOf(hours.map((h) => ({ t: h.t, depression: h.depression + h.drier }))));

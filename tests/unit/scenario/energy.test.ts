@@ -104,13 +104,20 @@ describe('hourly energy worked examples (IT 1000 kW, fans 5 %, pumps 1 %, heat-r
 
   it('hall fans follow the load by the affinity law (power ∝ speed³) down to their minimum speed', () => {
     const scenario = makeScenario('direct-air', { system: { evaporativeEffectiveness: 0 }, energy: { ...ENERGY, fanMinSpeedFraction: 0.3 } });
-    const e = hourlyEnergy(scenario.system, scenario.energy, { ...outdoor(10, 5), dryBulbC: Float64Array.of(10, 10), wetBulbC: Float64Array.of(5, 5), humidityRatio: Float64Array.of(0.004, 0.004) }, Float64Array.of(0.5, 0.2), {
-      modes: Uint8Array.of(MODE.free, MODE.free),
-      humidified: new Uint8Array(2),
-      mechanicalFraction: new Float64Array(2),
-      excursions: new Uint8Array(2),
-      evaporationKgPerKgAir: new Float64Array(2),
-    }, SEA_LEVEL_PA);
+    const e = hourlyEnergy(
+      scenario.system,
+      scenario.energy,
+      { ...outdoor(10, 5), dryBulbC: Float64Array.of(10, 10), wetBulbC: Float64Array.of(5, 5), humidityRatio: Float64Array.of(0.004, 0.004) },
+      Float64Array.of(0.5, 0.2),
+      {
+        modes: Uint8Array.of(MODE.free, MODE.free),
+        humidified: new Uint8Array(2),
+        mechanicalFraction: new Float64Array(2),
+        excursions: new Uint8Array(2),
+        evaporationKgPerKgAir: new Float64Array(2),
+      },
+      SEA_LEVEL_PA,
+    );
     expect(e.itKw[0]).toBe(500);
     expect(e.fanKw[0]).toBeCloseTo(50 * 0.5 ** 3, 12); // 6.25 kW
     expect(e.fanKw[1]).toBeCloseTo(50 * 0.3 ** 3, 12); // minimum speed: 1.35 kW
@@ -127,7 +134,14 @@ describe('hourly energy worked examples (IT 1000 kW, fans 5 %, pumps 1 %, heat-r
   it('a no-data hour uses no energy and no water', () => {
     const scenario = makeScenario('water-side', { system: { heatRejection: 'cooling-tower' } });
     const nan = Float64Array.of(Number.NaN);
-    const e = hourlyEnergy(scenario.system, scenario.energy, { dryBulbC: nan, wetBulbC: nan, humidityRatio: nan }, Float64Array.of(1), oneHour(MODE.noData, 0), SEA_LEVEL_PA);
+    const e = hourlyEnergy(
+      scenario.system,
+      scenario.energy,
+      { dryBulbC: nan, wetBulbC: nan, humidityRatio: nan },
+      Float64Array.of(1),
+      oneHour(MODE.noData, 0),
+      SEA_LEVEL_PA,
+    );
     expect([e.itKw[0], e.fanKw[0], e.compressorKw[0], e.pumpKw[0], e.evaporativeCoolingL[0], e.driftL[0]]).toEqual([0, 0, 0, 0, 0, 0]);
   });
 });

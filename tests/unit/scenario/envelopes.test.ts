@@ -15,7 +15,13 @@ describe('envelope presets', () => {
   });
 
   it('hold the recommended range and allowable classes (ASHRAE TC 9.9, 5th edition 2021, recalled from memory)', () => {
-    expect(findEnvelopePreset('ashrae-2021-recommended')?.limits).toMatchObject({ dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9, dewPointMaxC: 15, rhMaxPct: 70 });
+    expect(findEnvelopePreset('ashrae-2021-recommended')?.limits).toMatchObject({
+      dryBulbMinC: 18,
+      dryBulbMaxC: 27,
+      dewPointMinC: -9,
+      dewPointMaxC: 15,
+      rhMaxPct: 70,
+    });
     expect(findEnvelopePreset('ashrae-2021-recommended-50rh')?.limits.rhMaxPct).toBe(50);
     expect(findEnvelopePreset('ashrae-2015-recommended-60rh')?.limits.rhMaxPct).toBe(60);
     const classes = ['a1', 'a2', 'a3', 'a4', 'h1'].map((c) => findEnvelopePreset(`ashrae-2021-${c}`)!.limits);

@@ -25,7 +25,16 @@ function hall(heatReuse: unknown, liquid: Record<string, unknown> = {}) {
     system: {
       kind: 'hybrid',
       liquidShare: 0.8,
-      liquid: { kind: 'water-side', chilledWaterSupplyC: 32, chilledWaterDeltaTK: 10, approachK: 5, heatRejection: 'dry-cooler', evaporativeEffectiveness: 0, cduApproachK: 2, ...liquid },
+      liquid: {
+        kind: 'water-side',
+        chilledWaterSupplyC: 32,
+        chilledWaterDeltaTK: 10,
+        approachK: 5,
+        heatRejection: 'dry-cooler',
+        evaporativeEffectiveness: 0,
+        cduApproachK: 2,
+        ...liquid,
+      },
       air: { kind: 'indirect-air', supplyAirC: 24, itDeltaTK: 12, heatExchangerEffectiveness: 0.7, evaporativeEffectiveness: 0.85 },
       heatReuse,
     },

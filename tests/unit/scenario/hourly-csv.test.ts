@@ -60,7 +60,9 @@ describe('writeHourlyCsv', () => {
     };
     const lines = csvText(input).split('\n');
     expect(lines[0]).toBe(HOURLY_CSV_COLUMNS.join(','));
-    expect(lines[0]).toBe('timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time');
+    expect(lines[0]).toBe(
+      'timestamp,mode,dry_bulb_c,wet_bulb_c,dew_point_c,relative_humidity_pct,humidity_ratio_gkg,enthalpy_kjkg,mechanical_fraction,humidified,local_standard_time',
+    );
     expect(lines).toHaveLength(n + 2); // header, n rows, final empty string after the last newline
     expect(lines[1]).toBe('1999-12-31T22:00Z,free,-5.50,-1.23,-3.00,55.56,12.346,42.10,0.000,1,1999-12-31T15:00');
     expect(lines[3]).toBe('2000-01-01T00:00Z,mechanical,-3.50,-1.23,-3.00,55.56,12.346,42.10,0.250,0,1999-12-31T17:00');
@@ -73,7 +75,19 @@ describe('writeHourlyCsv', () => {
 
   it('leaves the humidified column empty for a run made before engine 2.0.0 (no stored flags)', () => {
     const one = Float64Array.of(1);
-    const lines = csvText({ timestampsMs: Float64Array.of(0), modes: Uint8Array.of(MODE.free), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: one, humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: Float64Array.of(0), humidified: null, utcOffsetMinutes: 0 }).split('\n');
+    const lines = csvText({
+      timestampsMs: Float64Array.of(0),
+      modes: Uint8Array.of(MODE.free),
+      dryBulbC: one,
+      wetBulbC: one,
+      dewPointC: one,
+      rhPct: one,
+      humidityRatio: one,
+      enthalpyKJPerKg: one,
+      mechanicalFraction: Float64Array.of(0),
+      humidified: null,
+      utcOffsetMinutes: 0,
+    }).split('\n');
     expect(lines[1]).toBe('1970-01-01T00:00Z,free,1.00,1.00,1.00,1.00,1000.000,1.00,0.000,,1970-01-01T00:00');
   });
 
@@ -91,7 +105,11 @@ describe('writeHourlyCsv', () => {
       mechanicalFraction: Float64Array.of(0.5, 0),
       humidified: Uint8Array.of(0, 0),
       utcOffsetMinutes: 0,
-      loops: { liquidModes: Uint8Array.of(MODE.free, MODE.noData), airModes: Uint8Array.of(MODE.mechanical, MODE.noData), liquidMechanicalFraction: Float64Array.of(0, 0) },
+      loops: {
+        liquidModes: Uint8Array.of(MODE.free, MODE.noData),
+        airModes: Uint8Array.of(MODE.mechanical, MODE.noData),
+        liquidMechanicalFraction: Float64Array.of(0, 0),
+      },
     };
     const lines = csvText(input).split('\n');
     expect(lines[0]).toBe(`${HOURLY_CSV_COLUMNS.join(',')},liquid_mode,air_mode,liquid_mechanical_fraction`);
@@ -108,7 +126,19 @@ describe('writeHourlyCsv', () => {
     const one = Float64Array.of(1);
     expect(() =>
       writeHourlyCsv(
-        { timestampsMs: one, modes: Uint8Array.of(0), dryBulbC: one, wetBulbC: one, dewPointC: one, rhPct: new Float64Array(2), humidityRatio: one, enthalpyKJPerKg: one, mechanicalFraction: one, humidified: null, utcOffsetMinutes: 0 },
+        {
+          timestampsMs: one,
+          modes: Uint8Array.of(0),
+          dryBulbC: one,
+          wetBulbC: one,
+          dewPointC: one,
+          rhPct: new Float64Array(2),
+          humidityRatio: one,
+          enthalpyKJPerKg: one,
+          mechanicalFraction: one,
+          humidified: null,
+          utcOffsetMinutes: 0,
+        },
         () => {},
       ),
     ).toThrow(/rhPct has 2 hours/);

@@ -19,7 +19,15 @@ import { HOT_DRY_HIGH, HOT_HUMID, MILD_MARITIME, syntheticSeries } from './synth
 const HOUR = 3_600_000;
 
 /** The issue's example hybrid, with overrides. */
-function hybrid(overrides: { liquidShare?: number; liquid?: Record<string, unknown>; air?: Record<string, unknown>; heatReuse?: unknown; energy?: Record<string, unknown> } = {}): Scenario {
+function hybrid(
+  overrides: {
+    liquidShare?: number;
+    liquid?: Record<string, unknown>;
+    air?: Record<string, unknown>;
+    heatReuse?: unknown;
+    energy?: Record<string, unknown>;
+  } = {},
+): Scenario {
   const parsed = parseScenario({
     name: 'test hybrid',
     elevationM: 0,
@@ -116,7 +124,11 @@ describe('a hybrid at its limits equals the single systems hour by hour', { time
     });
   }
   it('share 0 with a wetted dry cooler on the liquid side and a direct-air hall', () => {
-    const h = hybrid({ liquidShare: 0, liquid: { evaporativeEffectiveness: 0.7 }, air: { kind: 'direct-air', evaporativeEffectiveness: 0.8, heatExchangerEffectiveness: undefined } });
+    const h = hybrid({
+      liquidShare: 0,
+      liquid: { evaporativeEffectiveness: 0.7 },
+      air: { kind: 'direct-air', evaporativeEffectiveness: 0.8, heatExchangerEffectiveness: undefined },
+    });
     const series = YEAR(HOT_DRY_HIGH);
     expectSameHours(runScenario(h, series), runScenario(airAlone(h), series));
   });

@@ -124,18 +124,20 @@ describe('classification invariants', () => {
 });
 
 describe('bad data', () => {
-  const cell = fc.oneof(
-    fc.double({ min: -120, max: 220 }),
-    fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -0, 0, 100, 1e9),
-  );
-  const kinds = fc.constantFrom('relative-humidity-pct', 'dew-point-c', 'wet-bulb-c', 'humidity-ratio-kgkg') as fc.Arbitrary<ScenarioSeries['humidity']['kind']>;
+  const cell = fc.oneof(fc.double({ min: -120, max: 220 }), fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY, -0, 0, 100, 1e9));
+  const kinds = fc.constantFrom('relative-humidity-pct', 'dew-point-c', 'wet-bulb-c', 'humidity-ratio-kgkg') as fc.Arbitrary<
+    ScenarioSeries['humidity']['kind']
+  >;
 
   it('never throws mid-series: impossible hours become no data and the hours still add up', () => {
     fc.assert(
       fc.property(
         systemArb,
         kinds,
-        fc.array(fc.record({ t: cell, h: cell, p: fc.oneof(fc.double({ min: 1_000, max: 200_000 }), fc.constant(Number.NaN)) }), { minLength: 1, maxLength: 40 }),
+        fc.array(fc.record({ t: cell, h: cell, p: fc.oneof(fc.double({ min: 1_000, max: 200_000 }), fc.constant(Number.NaN)) }), {
+          minLength: 1,
+          maxLength: 40,
+        }),
         fc.boolean(),
         (system, kind, rows, withPressure) => {
           const series: ScenarioSeries = {

@@ -20,7 +20,16 @@ const OLD = {
     approachK: 5,
     heatRejection: 'cooling-tower',
   },
-  energy: { itLoadKw: 1000, mechanicalCop: 5.5, copSlopePerK: -0.1, copReferenceC: 35, copMin: 1, fanPowerFraction: 0.03, blowdownRatio: 0.25, towerEvaporationShare: 0.85 },
+  energy: {
+    itLoadKw: 1000,
+    mechanicalCop: 5.5,
+    copSlopePerK: -0.1,
+    copReferenceC: 35,
+    copMin: 1,
+    fanPowerFraction: 0.03,
+    blowdownRatio: 0.25,
+    towerEvaporationShare: 0.85,
+  },
 };
 
 describe('migrateScenario', () => {

@@ -121,7 +121,8 @@ const SCENARIOS: Record<string, (elevationM: number) => SingleScenario> = {
   'indirect-air, half the scavenger air': (elevationM) =>
     makeScenario('indirect-air', { elevationM, system: { evaporativeEffectiveness: 0.75, heatExchangerEffectiveness: 0.65, scavengerAirRatio: 0.5 } }),
   'water-side dry cooler': (elevationM) => makeScenario('water-side', { elevationM, system: { heatRejection: 'dry-cooler', evaporativeEffectiveness: 0.7 } }),
-  'water-side cooling tower': (elevationM) => makeScenario('water-side', { elevationM, system: { heatRejection: 'cooling-tower', evaporativeEffectiveness: 0 } }),
+  'water-side cooling tower': (elevationM) =>
+    makeScenario('water-side', { elevationM, system: { heatRejection: 'cooling-tower', evaporativeEffectiveness: 0 } }),
 };
 
 describe.each(CLIMATES.map((c, i) => [c.name, c, i] as const))('%s', (_name, climate, index) => {

@@ -106,7 +106,13 @@ describe('aggregateResults', () => {
     const modes = new Uint8Array(3).fill(MODE.noData);
     const empty = aggregateResults({
       timestampsMs: Float64Array.of(0, HOUR, 2 * HOUR),
-      classification: { modes, humidified: new Uint8Array(3), mechanicalFraction: new Float64Array(3), excursions: new Uint8Array(3), evaporationKgPerKgAir: new Float64Array(3) },
+      classification: {
+        modes,
+        humidified: new Uint8Array(3),
+        mechanicalFraction: new Float64Array(3),
+        excursions: new Uint8Array(3),
+        evaporationKgPerKgAir: new Float64Array(3),
+      },
       energy: {
         itKw: new Float64Array(3),
         mechanicalLoadKw: new Float64Array(3),

@@ -53,6 +53,22 @@ export function syntheticSeries(climate: SyntheticClimate, { hours, step = 1, se
   return series;
 }
 
-export const MILD_MARITIME: SyntheticClimate = { name: 'mild maritime (synthetic)', elevationM: 20, meanC: 11, seasonalK: 7, dailyK: 4, rhMean: 78, rhSpread: 15 };
+export const MILD_MARITIME: SyntheticClimate = {
+  name: 'mild maritime (synthetic)',
+  elevationM: 20,
+  meanC: 11,
+  seasonalK: 7,
+  dailyK: 4,
+  rhMean: 78,
+  rhSpread: 15,
+};
 export const HOT_HUMID: SyntheticClimate = { name: 'hot humid (synthetic)', elevationM: 10, meanC: 22, seasonalK: 7, dailyK: 5, rhMean: 65, rhSpread: 30 };
-export const HOT_DRY_HIGH: SyntheticClimate = { name: 'hot dry at altitude (synthetic)', elevationM: 1600, meanC: 20, seasonalK: 10, dailyK: 8, rhMean: 25, rhSpread: 15 };
+export const HOT_DRY_HIGH: SyntheticClimate = {
+  name: 'hot dry at altitude (synthetic)',
+  elevationM: 1600,
+  meanC: 20,
+  seasonalK: 10,
+  dailyK: 8,
+  rhMean: 25,
+  rhSpread: 15,
+};

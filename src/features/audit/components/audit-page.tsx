@@ -56,7 +56,11 @@ export function AuditPage() {
           </label>
           <label className="text-xs text-ink-soft">
             Who
-            <select className={inputClass} value={filters.actorId ?? ''} onChange={(e) => set({ actorId: e.target.value ? Number(e.target.value) : undefined })}>
+            <select
+              className={inputClass}
+              value={filters.actorId ?? ''}
+              onChange={(e) => set({ actorId: e.target.value ? Number(e.target.value) : undefined })}
+            >
               <option value="">Anyone</option>
               {[...seenActors].map(([id, name]) => (
                 <option key={id} value={id}>
@@ -68,7 +72,11 @@ export function AuditPage() {
           {!scope.projectId && (
             <label className="text-xs text-ink-soft">
               Project
-              <select className={inputClass} value={filters.projectId ?? ''} onChange={(e) => set({ projectId: e.target.value ? Number(e.target.value) : undefined })}>
+              <select
+                className={inputClass}
+                value={filters.projectId ?? ''}
+                onChange={(e) => set({ projectId: e.target.value ? Number(e.target.value) : undefined })}
+              >
                 <option value="">Any</option>
                 {[...seenProjects].map(([id, name]) => (
                   <option key={id} value={id}>
@@ -94,7 +102,11 @@ export function AuditPage() {
         </form>
       </Panel>
 
-      {audit.isError && <Notice tone="bad" title="The audit trail could not be loaded">{audit.error.message}</Notice>}
+      {audit.isError && (
+        <Notice tone="bad" title="The audit trail could not be loaded">
+          {audit.error.message}
+        </Notice>
+      )}
       {audit.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading audit trail" />}
       {audit.isSuccess && (
         <Panel>

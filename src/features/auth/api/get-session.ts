@@ -8,9 +8,7 @@ export interface SessionUser {
   isAdmin: boolean;
 }
 
-export type Session =
-  | { signedIn: false; signInAvailable: boolean }
-  | { signedIn: true; signInAvailable: boolean; user: SessionUser; mailbox: boolean };
+export type Session = { signedIn: false; signInAvailable: boolean } | { signedIn: true; signInAvailable: boolean; user: SessionUser; mailbox: boolean };
 
 export const getSession = () => apiFetch<Session>('/auth/session');
 

@@ -10,14 +10,18 @@ export function MailboxPage() {
   const mailbox = useMailbox();
   const [openId, setOpenId] = useState<string | null>(null);
   if (mailbox.isPending) return <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading mailbox" />;
-  if (mailbox.isError) return <Notice tone="bad" title="The mailbox could not be opened">{mailbox.error.message}</Notice>;
+  if (mailbox.isError)
+    return (
+      <Notice tone="bad" title="The mailbox could not be opened">
+        {mailbox.error.message}
+      </Notice>
+    );
   const messages = mailbox.data.messages;
   const open = messages.find((m) => m.id === openId) ?? messages[0];
   return (
     <div className="space-y-4">
       <Notice title="Local mailbox">
-        Every message Tramontane sent through the local stand-in mail server. With real SMTP settings, mail goes out
-        instead and this page is not there.
+        Every message Tramontane sent through the local stand-in mail server. With real SMTP settings, mail goes out instead and this page is not there.
       </Notice>
       {messages.length === 0 ? (
         <Panel title="Mailbox">

@@ -17,7 +17,12 @@ export function SettingsPage() {
   // The whole app follows the unit system at once; UnitSystemSync saves it to these settings.
   const { unitSystem, setUnitSystem } = useUnitSystem();
   if (me.isPending) return <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading settings" />;
-  if (me.isError) return <Notice tone="bad" title="Settings could not be loaded">{me.error.message}</Notice>;
+  if (me.isError)
+    return (
+      <Notice tone="bad" title="Settings could not be loaded">
+        {me.error.message}
+      </Notice>
+    );
   const { user, settings, projects } = me.data;
   return (
     <div className="grid gap-6 lg:grid-cols-2">
@@ -62,7 +67,9 @@ export function SettingsPage() {
         </label>
         {update.isError && (
           <div className="mt-3">
-            <Notice tone="bad" title="Not saved">{update.error.message}</Notice>
+            <Notice tone="bad" title="Not saved">
+              {update.error.message}
+            </Notice>
           </div>
         )}
       </Panel>
@@ -103,8 +110,8 @@ export function SettingsPage() {
 
       <Panel title="Sessions">
         <p className="mb-3 text-sm text-ink-soft">
-          A session ends after three days without use, and after thirty days in any case. Signing out everywhere ends
-          every session you have, on every device, including this one.
+          A session ends after three days without use, and after thirty days in any case. Signing out everywhere ends every session you have, on every device,
+          including this one.
         </p>
         <button
           type="button"

@@ -31,12 +31,13 @@ export function SignInPage() {
         {session.data?.signedIn ? (
           <p className="text-sm text-ink-soft">You are signed in as {session.data.user.name}.</p>
         ) : session.data && !session.data.signInAvailable ? (
-          <Notice tone="warn" title="Sign-in is not set up on this server">An admin needs to set the OIDC settings described in the README.</Notice>
+          <Notice tone="warn" title="Sign-in is not set up on this server">
+            An admin needs to set the OIDC settings described in the README.
+          </Notice>
         ) : (
           <div className="space-y-3 text-sm">
             <p className="text-ink-soft">
-              Tramontane signs you in through your organisation's identity provider. Your projects, roles and settings
-              follow you from there.
+              Tramontane signs you in through your organisation's identity provider. Your projects, roles and settings follow you from there.
             </p>
             <a href={signInHref(returnTo)} className="inline-block rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft">
               Continue to sign-in

@@ -45,9 +45,9 @@ export function CalculatorPage() {
       <header>
         <h1 className="text-xl font-semibold">Air-state calculator</h1>
         <p className="text-sm text-ink-soft">
-          Fill any two properties at a pressure or elevation — or one, for saturated air — and read the rest. Same engine as the runs (ASHRAE Handbook—Fundamentals
-          2017, ch. 1). Relative humidity and dew point are over liquid water at every temperature, as weather data give them (WMO-No. 8); the frost point is
-          over ice.
+          Fill any two properties at a pressure or elevation — or one, for saturated air — and read the rest. Same engine as the runs (ASHRAE
+          Handbook—Fundamentals 2017, ch. 1). Relative humidity and dew point are over liquid water at every temperature, as weather data give them (WMO-No. 8);
+          the frost point is over ice.
         </p>
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
@@ -93,14 +93,23 @@ export function CalculatorPage() {
                 </label>
               ))}
               <label className="mt-2 flex items-center gap-2 text-sm">
-                <input type="checkbox" className="accent-harbour" checked={input.saturated} onChange={(e) => setInput((i) => ({ ...i, saturated: e.target.checked }))} />
+                <input
+                  type="checkbox"
+                  className="accent-harbour"
+                  checked={input.saturated}
+                  onChange={(e) => setInput((i) => ({ ...i, saturated: e.target.checked }))}
+                />
                 Saturated air (on the saturation curve over liquid water: one property is enough)
               </label>
               <div className="mt-3 flex items-center justify-between text-xs text-ink-soft">
                 <span>
                   {filled} of {input.saturated ? 1 : 2} properties filled
                 </span>
-                <button type="button" className="rounded border border-rule px-2 py-0.5 hover:bg-mist" onClick={() => setInput((i) => ({ ...i, properties: {}, saturated: false }))}>
+                <button
+                  type="button"
+                  className="rounded border border-rule px-2 py-0.5 hover:bg-mist"
+                  onClick={() => setInput((i) => ({ ...i, properties: {}, saturated: false }))}
+                >
                   Clear properties
                 </button>
               </div>
@@ -112,7 +121,9 @@ export function CalculatorPage() {
                 <tbody>
                   {stateRows(outcome.state, unitSystem).map((r) => (
                     <tr key={r.label} className="border-b border-rule/60 last:border-0">
-                      <th scope="row" className="py-1 text-left font-normal text-ink-soft">{r.label}</th>
+                      <th scope="row" className="py-1 text-left font-normal text-ink-soft">
+                        {r.label}
+                      </th>
                       <td className="num py-1 text-right">{r.value}</td>
                     </tr>
                   ))}

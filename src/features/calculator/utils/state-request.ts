@@ -23,9 +23,7 @@ export interface CalculatorInput {
   saturated: boolean;
 }
 
-export type CalculatorOutcome =
-  | { ok: true; state: MoistAirState }
-  | { ok: false; message: string; problem: string | null; field?: string };
+export type CalculatorOutcome = { ok: true; state: MoistAirState } | { ok: false; message: string; problem: string | null; field?: string };
 
 function parse(text: string | undefined): number | undefined | null {
   if (text === undefined || text.trim() === '') return undefined;
@@ -40,7 +38,8 @@ function parse(text: string | undefined): number | undefined | null {
 export function solveState(input: CalculatorInput, system: UnitSystem): CalculatorOutcome {
   const request: MoistAirRequest = {};
   const basis = parse(input.basisText);
-  if (basis === null) return { ok: false, message: `${input.basis === 'pressure' ? 'Pressure' : 'Elevation'} is not a number.`, problem: null, field: input.basis };
+  if (basis === null)
+    return { ok: false, message: `${input.basis === 'pressure' ? 'Pressure' : 'Elevation'} is not a number.`, problem: null, field: input.basis };
   if (basis !== undefined) {
     if (input.basis === 'pressure') request.pressurePa = fromDisplay('pressure', system, basis);
     else request.elevationM = fromDisplay('elevation', system, basis);

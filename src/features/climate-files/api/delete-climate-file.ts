@@ -2,8 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import { climateFilesQueryKey } from './get-climate-files';
 
-export const deleteClimateFile = (projectId: number, fileId: number) =>
-  apiFetch<void>(`/projects/${projectId}/climate-files/${fileId}`, { method: 'DELETE' });
+export const deleteClimateFile = (projectId: number, fileId: number) => apiFetch<void>(`/projects/${projectId}/climate-files/${fileId}`, { method: 'DELETE' });
 
 export function useDeleteClimateFile(projectId: number) {
   const queryClient = useQueryClient();

@@ -9,8 +9,7 @@ export interface ClimateFileHours extends ClimateHoursJson {
   flags: number[];
 }
 
-export const getClimateFileHours = (projectId: number, fileId: number) =>
-  apiFetch<ClimateFileHours>(`/projects/${projectId}/climate-files/${fileId}/hours`);
+export const getClimateFileHours = (projectId: number, fileId: number) => apiFetch<ClimateFileHours>(`/projects/${projectId}/climate-files/${fileId}/hours`);
 
 export const climateFileHoursQueryOptions = (projectId: number, fileId: number) =>
   queryOptions({

@@ -21,8 +21,7 @@ export interface ClimateFileDetail {
   summary: ClimateSummary;
 }
 
-export const getClimateFile = (projectId: number, fileId: number) =>
-  apiFetch<ClimateFileDetail>(`/projects/${projectId}/climate-files/${fileId}`);
+export const getClimateFile = (projectId: number, fileId: number) => apiFetch<ClimateFileDetail>(`/projects/${projectId}/climate-files/${fileId}`);
 
 export const climateFileQueryOptions = (projectId: number, fileId: number) =>
   queryOptions({

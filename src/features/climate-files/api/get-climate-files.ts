@@ -30,8 +30,7 @@ export interface ClimateFileListing {
 
 export const climateFilesQueryKey = (projectId: number) => ['projects', projectId, 'climate-files'] as const;
 
-export const getClimateFiles = (projectId: number) =>
-  apiFetch<{ climateFiles: ClimateFileListing[] }>(`/projects/${projectId}/climate-files`);
+export const getClimateFiles = (projectId: number) => apiFetch<{ climateFiles: ClimateFileListing[] }>(`/projects/${projectId}/climate-files`);
 
 export const climateFilesQueryOptions = (projectId: number) =>
   queryOptions({ queryKey: climateFilesQueryKey(projectId), queryFn: () => getClimateFiles(projectId), retry: false });

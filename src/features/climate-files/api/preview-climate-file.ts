@@ -21,10 +21,5 @@ export interface ClimatePreview {
 }
 
 /** Imports the file on the server without storing it: the detected mapping, the report and the first hours. */
-export const previewClimateFile = (
-  projectId: number,
-  siteId: number,
-  file: UploadBody,
-  params: UploadParams,
-  onProgress?: (p: UploadProgress) => void,
-) => sendFile<ClimatePreview>(`/projects/${projectId}/sites/${siteId}/climate-files/preview?${uploadQuery(params)}`, file, onProgress);
+export const previewClimateFile = (projectId: number, siteId: number, file: UploadBody, params: UploadParams, onProgress?: (p: UploadProgress) => void) =>
+  sendFile<ClimatePreview>(`/projects/${projectId}/sites/${siteId}/climate-files/preview?${uploadQuery(params)}`, file, onProgress);

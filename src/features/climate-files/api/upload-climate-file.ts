@@ -9,13 +9,7 @@ export interface RejectedImportDetails {
 }
 
 /** Stores the file whole with its report, or rejects with a 422 whose details hold the report. */
-export const uploadClimateFile = (
-  projectId: number,
-  siteId: number,
-  file: UploadBody,
-  params: UploadParams,
-  onProgress?: (p: UploadProgress) => void,
-) =>
+export const uploadClimateFile = (projectId: number, siteId: number, file: UploadBody, params: UploadParams, onProgress?: (p: UploadProgress) => void) =>
   sendFile<{ climateFile: ClimateFileListing; report: ImportReport }>(
     `/projects/${projectId}/sites/${siteId}/climate-files?${uploadQuery(params)}`,
     file,

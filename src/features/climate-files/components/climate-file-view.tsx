@@ -78,7 +78,9 @@ function Loaded({
         <div>
           <p className="text-sm text-ink-soft">
             {file.projection && (
-              <span className="mr-2 rounded-sm border border-harbour/40 bg-mist px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wide text-harbour">Projection</span>
+              <span className="mr-2 rounded-sm border border-harbour/40 bg-mist px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wide text-harbour">
+                Projection
+              </span>
             )}
             Climate file · {site.name}
           </p>
@@ -109,10 +111,22 @@ function Loaded({
       </div>
 
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5" data-testid="climate-file-facts">
-        <Fact label="Years covered" value={firstYear === lastYear ? String(firstYear) : `${firstYear}–${lastYear}`} note={`${day(localFirst)} to ${day(localLast)}, site standard time`} />
-        <Fact label="Hours" value={file.hours.toLocaleString('en')} note={`${file.measuredHours.toLocaleString('en')} measured · ${file.filledHours.toLocaleString('en')} filled · ${file.missingHours.toLocaleString('en')} missing`} />
+        <Fact
+          label="Years covered"
+          value={firstYear === lastYear ? String(firstYear) : `${firstYear}–${lastYear}`}
+          note={`${day(localFirst)} to ${day(localLast)}, site standard time`}
+        />
+        <Fact
+          label="Hours"
+          value={file.hours.toLocaleString('en')}
+          note={`${file.measuredHours.toLocaleString('en')} measured · ${file.filledHours.toLocaleString('en')} filled · ${file.missingHours.toLocaleString('en')} missing`}
+        />
         <Fact label="Completeness" value={`${summary.completenessPct.toFixed(1)} %`} note="hours with a usable state" />
-        <Fact label="Mean pressure" value={formatQuantity('pressure', unitSystem, summary.meanPressurePa)} note={file.hasPressure ? 'from the file' : `standard atmosphere at ${formatQuantity('elevation', unitSystem, site.elevationM)}`} />
+        <Fact
+          label="Mean pressure"
+          value={formatQuantity('pressure', unitSystem, summary.meanPressurePa)}
+          note={file.hasPressure ? 'from the file' : `standard atmosphere at ${formatQuantity('elevation', unitSystem, site.elevationM)}`}
+        />
         <Fact label="Site time" value={site.timeZone} note={`charts in the site's standard time (${utcOffsetLabel(offsetMinutes)})`} />
       </dl>
 
@@ -134,7 +148,9 @@ function Loaded({
         {series ? (
           <CarpetPlot timestampsMs={series.timestampsMs} values={series.dryBulbC} kind="temperature" utcOffsetMinutes={offsetMinutes} />
         ) : hours.isError ? (
-          <Notice tone="bad" title="The hours could not be loaded">{hours.error.message} Reload the page to try again.</Notice>
+          <Notice tone="bad" title="The hours could not be loaded">
+            {hours.error.message} Reload the page to try again.
+          </Notice>
         ) : (
           <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the hours" />
         )}

@@ -25,14 +25,21 @@ export function ClimateFilesPanel({
       title={title}
       actions={
         canEdit ? (
-          <Link to={`/projects/${projectId}/climate-files/new${siteId === undefined ? '' : `?siteId=${siteId}`}`} className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft">
+          <Link
+            to={`/projects/${projectId}/climate-files/new${siteId === undefined ? '' : `?siteId=${siteId}`}`}
+            className="rounded bg-harbour px-2.5 py-1 text-xs text-paper hover:bg-harbour-soft"
+          >
             Upload climate file
           </Link>
         ) : undefined
       }
     >
       {files.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
-      {files.isError && <Notice tone="bad" title="Climate files could not be loaded">{files.error.message}</Notice>}
+      {files.isError && (
+        <Notice tone="bad" title="Climate files could not be loaded">
+          {files.error.message}
+        </Notice>
+      )}
       {files.data && listed.length === 0 && (
         <p className="text-sm text-ink-soft">
           No climate files {siteId === undefined ? 'yet' : 'for this site yet'}.{' '}
@@ -43,11 +50,21 @@ export function ClimateFilesPanel({
         <table className="w-full text-left text-sm">
           <thead>
             <tr className="border-b border-rule text-xs text-ink-soft">
-              <th scope="col" className="py-1 font-medium">File</th>
-              <th scope="col" className="px-2 font-medium">Site</th>
-              <th scope="col" className="px-2 text-right font-medium">Years</th>
-              <th scope="col" className="px-2 text-right font-medium">Hours</th>
-              <th scope="col" className="px-2 text-right font-medium">Missing</th>
+              <th scope="col" className="py-1 font-medium">
+                File
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Site
+              </th>
+              <th scope="col" className="px-2 text-right font-medium">
+                Years
+              </th>
+              <th scope="col" className="px-2 text-right font-medium">
+                Hours
+              </th>
+              <th scope="col" className="px-2 text-right font-medium">
+                Missing
+              </th>
             </tr>
           </thead>
           <tbody>

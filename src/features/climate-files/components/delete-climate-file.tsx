@@ -14,7 +14,11 @@ export function DeleteClimateFile({ projectId, fileId, name, onDeleted }: { proj
     );
   }
   return (
-    <div role="alertdialog" aria-label="Delete climate file" className="flex flex-wrap items-center gap-2 rounded border border-signal-bad/40 bg-[#fbeceb] px-3 py-1.5">
+    <div
+      role="alertdialog"
+      aria-label="Delete climate file"
+      className="flex flex-wrap items-center gap-2 rounded border border-signal-bad/40 bg-[#fbeceb] px-3 py-1.5"
+    >
       <span>
         Delete <strong>{name}</strong> and its hours? Runs already made keep their results.
       </span>

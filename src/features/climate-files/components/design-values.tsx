@@ -17,11 +17,21 @@ export function DesignValues({ design }: { design: DesignConditions }) {
       <table className="num w-full text-right text-xs">
         <thead>
           <tr className="border-b border-rule font-sans text-ink-soft">
-            <th scope="col" className="text-left font-medium">Exceeded</th>
-            <th scope="col" className={cell}>Dry-bulb</th>
-            <th scope="col" className={cell}>mean coinc. wet-bulb</th>
-            <th scope="col" className={cell}>Wet-bulb</th>
-            <th scope="col" className={cell}>mean coinc. dry-bulb</th>
+            <th scope="col" className="text-left font-medium">
+              Exceeded
+            </th>
+            <th scope="col" className={cell}>
+              Dry-bulb
+            </th>
+            <th scope="col" className={cell}>
+              mean coinc. wet-bulb
+            </th>
+            <th scope="col" className={cell}>
+              Wet-bulb
+            </th>
+            <th scope="col" className={cell}>
+              mean coinc. dry-bulb
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -29,7 +39,9 @@ export function DesignValues({ design }: { design: DesignConditions }) {
             const wb = design.wetBulb[k];
             return (
               <tr key={db.exceedPct} className="border-b border-rule/60">
-                <th scope="row" className="py-0.5 text-left font-sans font-normal">{db.exceedPct} % of hours</th>
+                <th scope="row" className="py-0.5 text-left font-sans font-normal">
+                  {db.exceedPct} % of hours
+                </th>
                 <td className={`${cell} font-semibold`}>{t(db.valueC)}</td>
                 <td className={cell}>{t(db.meanCoincidentC)}</td>
                 <td className={`${cell} font-semibold`}>{wb ? t(wb.valueC) : '–'}</td>
@@ -43,8 +55,8 @@ export function DesignValues({ design }: { design: DesignConditions }) {
         <p className="mt-3 text-sm">
           Dew point exceeded {design.dewPoint.exceedPct} % of hours:{' '}
           <span className="num font-semibold">{formatQuantity('temperature', unitSystem, design.dewPoint.valueC)}</span>, humidity ratio{' '}
-          <span className="num font-semibold">{formatQuantity('humidityRatio', unitSystem, design.dewPoint.humidityRatioKgPerKg)}</span>, mean coincident dry-bulb{' '}
-          <span className="num">{formatQuantity('temperature', unitSystem, design.dewPoint.meanCoincidentDryBulbC)}</span>.
+          <span className="num font-semibold">{formatQuantity('humidityRatio', unitSystem, design.dewPoint.humidityRatioKgPerKg)}</span>, mean coincident
+          dry-bulb <span className="num">{formatQuantity('temperature', unitSystem, design.dewPoint.meanCoincidentDryBulbC)}</span>.
         </p>
       )}
     </Panel>

@@ -56,8 +56,18 @@ export function FileOrigin({
         ['Station number · source', [header.stationId, header.source].filter(Boolean).join(' · ') || '—', null, false],
         ['Latitude', degrees(header.latitude), site ? degrees(site.latitude) : null, false],
         ['Longitude', degrees(header.longitude), site ? degrees(site.longitude) : null, false],
-        ['Elevation', header.elevationM === null ? '—' : formatQuantity('elevation', unitSystem, header.elevationM), site ? formatQuantity('elevation', unitSystem, site.elevationM) : null, flagged.has('elevationM')],
-        ['Local standard time', header.utcOffsetHours === null ? '—' : fixedOffsetZone(Math.round(header.utcOffsetHours * 60)), site ? site.timeZone : null, flagged.has('utcOffsetHours')],
+        [
+          'Elevation',
+          header.elevationM === null ? '—' : formatQuantity('elevation', unitSystem, header.elevationM),
+          site ? formatQuantity('elevation', unitSystem, site.elevationM) : null,
+          flagged.has('elevationM'),
+        ],
+        [
+          'Local standard time',
+          header.utcOffsetHours === null ? '—' : fixedOffsetZone(Math.round(header.utcOffsetHours * 60)),
+          site ? site.timeZone : null,
+          flagged.has('utcOffsetHours'),
+        ],
       ]
     : [];
   return (

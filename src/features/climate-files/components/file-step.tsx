@@ -48,7 +48,9 @@ export function FileStep({
         }}
       >
         <div className="space-y-1">
-          <label htmlFor={`${ids}-file`} className="block text-sm font-medium">File</label>
+          <label htmlFor={`${ids}-file`} className="block text-sm font-medium">
+            File
+          </label>
           <input
             id={`${ids}-file`}
             type="file"
@@ -62,18 +64,28 @@ export function FileStep({
             }}
           />
           <p className="text-xs text-ink-soft">
-            Comma, semicolon or tab separated text, EPW, or fixed-width station records; one time column, date and time columns, or year/month/day/hour
-            columns. Choose several files (thirty yearly files, twelve monthly ones) to read them as one climate file: they must share one layout and are
-            joined in time order. Up to 64 MB in all.
+            Comma, semicolon or tab separated text, EPW, or fixed-width station records; one time column, date and time columns, or year/month/day/hour columns.
+            Choose several files (thirty yearly files, twelve monthly ones) to read them as one climate file: they must share one layout and are joined in time
+            order. Up to 64 MB in all.
           </p>
         </div>
         <div className="grid gap-4 sm:grid-cols-2">
           <div className="space-y-1">
-            <label htmlFor={`${ids}-name`} className="block text-sm font-medium">Name in the project</label>
-            <input id={`${ids}-name`} className="w-full rounded border border-rule bg-panel px-2 py-1.5 text-sm" maxLength={120} value={name} onChange={(e) => setName(e.target.value)} />
+            <label htmlFor={`${ids}-name`} className="block text-sm font-medium">
+              Name in the project
+            </label>
+            <input
+              id={`${ids}-name`}
+              className="w-full rounded border border-rule bg-panel px-2 py-1.5 text-sm"
+              maxLength={120}
+              value={name}
+              onChange={(e) => setName(e.target.value)}
+            />
           </div>
           <div className="space-y-1">
-            <label htmlFor={`${ids}-gap`} className="block text-sm font-medium">Fill gaps up to (hours)</label>
+            <label htmlFor={`${ids}-gap`} className="block text-sm font-medium">
+              Fill gaps up to (hours)
+            </label>
             <input
               id={`${ids}-gap`}
               type="number"
@@ -87,12 +99,16 @@ export function FileStep({
               aria-invalid={!gapValid}
             />
             <p id={`${ids}-gap-help`} className={`text-xs ${gapValid ? 'text-ink-soft' : 'text-signal-bad'}`}>
-              {gapValid ? 'Shorter gaps are filled by linear interpolation and marked; longer ones stay missing.' : 'Enter a whole number of hours from 0 to 168.'}
+              {gapValid
+                ? 'Shorter gaps are filled by linear interpolation and marked; longer ones stay missing.'
+                : 'Enter a whole number of hours from 0 to 168.'}
             </p>
           </div>
         </div>
         <div className="space-y-1">
-          <label htmlFor={`${ids}-basis`} className="block text-sm font-medium">Times written without a UTC offset are</label>
+          <label htmlFor={`${ids}-basis`} className="block text-sm font-medium">
+            Times written without a UTC offset are
+          </label>
           <select
             id={`${ids}-basis`}
             className="rounded border border-rule bg-panel px-2 py-1.5 text-sm"
@@ -103,13 +119,24 @@ export function FileStep({
             <option value="site-standard">the site's standard time all year, no daylight saving</option>
             <option value="utc">UTC</option>
           </select>
-          <p className="text-xs text-ink-soft">Many weather files are written in local standard time all year; loggers often follow the wall clock. Times that carry an offset or Z are read as written.</p>
+          <p className="text-xs text-ink-soft">
+            Many weather files are written in local standard time all year; loggers often follow the wall clock. Times that carry an offset or Z are read as
+            written.
+          </p>
         </div>
-        {files.length === 1 && <p className="num text-xs text-ink-soft">{files[0].name} · {formatBytes(files[0].size)}</p>}
+        {files.length === 1 && (
+          <p className="num text-xs text-ink-soft">
+            {files[0].name} · {formatBytes(files[0].size)}
+          </p>
+        )}
         {files.length > 1 && <ChosenFiles files={files} />}
-        {progress && <UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? `Reading ${files.length} files` : 'Reading the file'} />}
+        {progress && (
+          <UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? `Reading ${files.length} files` : 'Reading the file'} />
+        )}
         <div className="flex gap-2">
-          <button type="button" className={quietButton} onClick={onBack} disabled={busy}>Back</button>
+          <button type="button" className={quietButton} onClick={onBack} disabled={busy}>
+            Back
+          </button>
           <button type="submit" className={button} disabled={files.length === 0 || busy || !gapValid}>
             {files.length > 1 ? `Read the ${files.length} files` : 'Read the file'}
           </button>

@@ -13,7 +13,19 @@ function confidenceWords(c: number | undefined): { text: string; tone: string } 
   return { text: `${pct} · a guess, check`, tone: 'text-signal-bad' };
 }
 
-function ColumnSelect({ id, headers, value, onChange, allowNone }: { id: string; headers: string[]; value: number | null; onChange: (v: number | null) => void; allowNone?: string }) {
+function ColumnSelect({
+  id,
+  headers,
+  value,
+  onChange,
+  allowNone,
+}: {
+  id: string;
+  headers: string[];
+  value: number | null;
+  onChange: (v: number | null) => void;
+  allowNone?: string;
+}) {
   return (
     <select id={id} className={selectClass} value={value ?? ''} onChange={(e) => onChange(e.target.value === '' ? null : Number(e.target.value))}>
       {allowNone !== undefined && <option value="">{allowNone}</option>}
@@ -28,11 +40,25 @@ function ColumnSelect({ id, headers, value, onChange, allowNone }: { id: string;
 }
 
 /** confidence: the detector's 0…1; undefined once the person changed the part; null where no figure applies. */
-function Row({ label, htmlFor, confidence, reason, children }: { label: string; htmlFor: string; confidence?: number | null; reason?: string; children: ReactNode }) {
+function Row({
+  label,
+  htmlFor,
+  confidence,
+  reason,
+  children,
+}: {
+  label: string;
+  htmlFor: string;
+  confidence?: number | null;
+  reason?: string;
+  children: ReactNode;
+}) {
   const words = confidence === null ? null : confidenceWords(confidence);
   return (
     <div className="grid gap-2 border-b border-rule/60 py-2.5 md:grid-cols-[10rem_1fr_14rem] md:items-center">
-      <label htmlFor={htmlFor} className="text-sm font-medium">{label}</label>
+      <label htmlFor={htmlFor} className="text-sm font-medium">
+        {label}
+      </label>
       <div className="flex flex-wrap items-center gap-2">{children}</div>
       <p className="text-xs">
         {words && <span className={`num font-semibold ${words.tone}`}>{words.text}</span>}
@@ -80,12 +106,19 @@ export function MappingEditor({
           <option value="date-time">A date column and a time column</option>
           <option value="ymdh">Year, month, day and hour columns</option>
         </select>
-        {time?.layout === 'iso' && <ColumnSelect id="map-time-col" headers={headers} value={time.column as number} onChange={(v) => setTime({ column: v ?? 0 })} />}
+        {time?.layout === 'iso' && (
+          <ColumnSelect id="map-time-col" headers={headers} value={time.column as number} onChange={(v) => setTime({ column: v ?? 0 })} />
+        )}
         {time?.layout === 'date-time' && (
           <>
             <ColumnSelect id="map-date-col" headers={headers} value={time.dateColumn as number} onChange={(v) => setTime({ dateColumn: v ?? 0 })} />
             <ColumnSelect id="map-timeofday-col" headers={headers} value={time.timeColumn as number} onChange={(v) => setTime({ timeColumn: v ?? 0 })} />
-            <select aria-label="Date order" className={selectClass} value={time.dateOrder ?? 'YMD'} onChange={(e) => setTime({ dateOrder: e.target.value as 'YMD' })}>
+            <select
+              aria-label="Date order"
+              className={selectClass}
+              value={time.dateOrder ?? 'YMD'}
+              onChange={(e) => setTime({ dateOrder: e.target.value as 'YMD' })}
+            >
               <option value="YMD">year-month-day</option>
               <option value="DMY">day/month/year</option>
               <option value="MDY">month/day/year</option>
@@ -117,7 +150,7 @@ export function MappingEditor({
         <ColumnSelect
           id="map-drybulb-col"
           headers={headers}
-          value={draft.dryBulb?.column as number | null ?? null}
+          value={(draft.dryBulb?.column as number | null) ?? null}
           onChange={(v) => set({ dryBulb: v === null ? null : { column: v, unit: draft.dryBulb?.unit ?? 'C' } })}
         />
         <select
@@ -137,7 +170,7 @@ export function MappingEditor({
         <ColumnSelect
           id="map-humidity-col"
           headers={headers}
-          value={draft.humidity?.column as number | null ?? null}
+          value={(draft.humidity?.column as number | null) ?? null}
           onChange={(v) =>
             set({ humidity: v === null ? null : ({ ...(draft.humidity ?? { quantity: 'relative-humidity', unit: '%' }), column: v } as HumidityDraft) })
           }
@@ -165,7 +198,9 @@ export function MappingEditor({
           onChange={(e) => draft.humidity && set({ humidity: { ...draft.humidity, unit: e.target.value } as HumidityDraft })}
         >
           {humidityUnits(draft.humidity?.quantity ?? 'relative-humidity').map(([value, text]) => (
-            <option key={value} value={value}>{text}</option>
+            <option key={value} value={value}>
+              {text}
+            </option>
           ))}
         </select>
       </Row>
@@ -182,7 +217,7 @@ export function MappingEditor({
         <ColumnSelect
           id="map-pressure-col"
           headers={headers}
-          value={draft.pressure?.column as number | null ?? null}
+          value={(draft.pressure?.column as number | null) ?? null}
           allowNone="none — use the site's elevation"
           onChange={(v) => set({ pressure: v === null ? null : { column: v, unit: draft.pressure?.unit ?? 'kPa' } })}
         />
@@ -194,18 +229,30 @@ export function MappingEditor({
           onChange={(e) => draft.pressure && set({ pressure: { ...draft.pressure, unit: e.target.value as 'kPa' } })}
         >
           {['Pa', 'hPa', 'kPa', 'inHg', 'psi'].map((u) => (
-            <option key={u} value={u}>{u === 'hPa' ? 'hPa (mbar)' : u}</option>
+            <option key={u} value={u}>
+              {u === 'hPa' ? 'hPa (mbar)' : u}
+            </option>
           ))}
         </select>
       </Row>
 
-      <Row label="Text format" htmlFor="map-delimiter" confidence={null} reason={detected.headerLine ? `Header on line ${detected.headerLine}.` : 'No header row found.'}>
+      <Row
+        label="Text format"
+        htmlFor="map-delimiter"
+        confidence={null}
+        reason={detected.headerLine ? `Header on line ${detected.headerLine}.` : 'No header row found.'}
+      >
         <select id="map-delimiter" className={selectClass} value={draft.delimiter} onChange={(e) => set({ delimiter: e.target.value as ',' })}>
           <option value=",">comma separated</option>
           <option value=";">semicolon separated</option>
           <option value={'\t'}>tab separated</option>
         </select>
-        <select aria-label="Decimal separator" className={selectClass} value={draft.decimalSeparator} onChange={(e) => set({ decimalSeparator: e.target.value as '.' })}>
+        <select
+          aria-label="Decimal separator"
+          className={selectClass}
+          value={draft.decimalSeparator}
+          onChange={(e) => set({ decimalSeparator: e.target.value as '.' })}
+        >
           <option value=".">decimal point (1.5)</option>
           <option value=",">decimal comma (1,5)</option>
         </select>
@@ -215,9 +262,22 @@ export function MappingEditor({
 }
 
 function humidityUnits(quantity: HumidityDraft['quantity']): Array<[string, string]> {
-  if (quantity === 'relative-humidity') return [['%', '%'], ['fraction', 'fraction 0–1']];
-  if (quantity === 'humidity-ratio') return [['g/kg', 'g/kg'], ['kg/kg', 'kg/kg'], ['gr/lb', 'grains/lb']];
-  return [['C', '°C'], ['F', '°F'], ['K', 'K']];
+  if (quantity === 'relative-humidity')
+    return [
+      ['%', '%'],
+      ['fraction', 'fraction 0–1'],
+    ];
+  if (quantity === 'humidity-ratio')
+    return [
+      ['g/kg', 'g/kg'],
+      ['kg/kg', 'kg/kg'],
+      ['gr/lb', 'grains/lb'],
+    ];
+  return [
+    ['C', '°C'],
+    ['F', '°F'],
+    ['K', 'K'],
+  ];
 }
 
 const detectedDrafts = new WeakMap<DetectedMapping, MappingDraft>();

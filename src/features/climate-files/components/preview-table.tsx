@@ -31,20 +31,39 @@ export function PreviewTable({
           </caption>
           <thead>
             <tr className="border-b border-rule font-sans text-ink-soft">
-              <th scope="col" className="py-1 text-left font-medium">Hour (UTC)</th>
-              <th scope="col" className="px-2 text-left font-medium">Site time</th>
+              <th scope="col" className="py-1 text-left font-medium">
+                Hour (UTC)
+              </th>
+              <th scope="col" className="px-2 text-left font-medium">
+                Site time
+              </th>
               {columns.map((c) => (
                 <th key={c.key} scope="col" colSpan={both ? 2 : 1} className="px-2 font-medium">
                   {c.label}
                 </th>
               ))}
-              <th scope="col" className="px-2 text-left font-medium">Flag</th>
+              <th scope="col" className="px-2 text-left font-medium">
+                Flag
+              </th>
             </tr>
             <tr className="border-b border-rule font-sans text-ink-faint">
               <th />
               <th />
               {columns.map((c) =>
-                both ? [<th key={`${c.key}-si`} className="px-2 font-normal">{c.siUnit}</th>, <th key={`${c.key}-ip`} className="px-2 font-normal">{c.shownUnit}</th>] : <th key={c.key} className="px-2 font-normal">{c.siUnit}</th>,
+                both ? (
+                  [
+                    <th key={`${c.key}-si`} className="px-2 font-normal">
+                      {c.siUnit}
+                    </th>,
+                    <th key={`${c.key}-ip`} className="px-2 font-normal">
+                      {c.shownUnit}
+                    </th>,
+                  ]
+                ) : (
+                  <th key={c.key} className="px-2 font-normal">
+                    {c.siUnit}
+                  </th>
+                ),
               )}
               <th />
             </tr>
@@ -55,9 +74,20 @@ export function PreviewTable({
                 <td className="py-0.5 text-left">{row.timeUtc}</td>
                 <td className="px-2 text-left text-ink-soft">{row.timeLocal}</td>
                 {columns.map((c) =>
-                  both
-                    ? [<td key={`${c.key}-si`} className="px-2">{row.values[c.key].si}</td>, <td key={`${c.key}-ip`} className="px-2 text-harbour">{row.values[c.key].shown}</td>]
-                    : <td key={c.key} className="px-2">{row.values[c.key].si}</td>,
+                  both ? (
+                    [
+                      <td key={`${c.key}-si`} className="px-2">
+                        {row.values[c.key].si}
+                      </td>,
+                      <td key={`${c.key}-ip`} className="px-2 text-harbour">
+                        {row.values[c.key].shown}
+                      </td>,
+                    ]
+                  ) : (
+                    <td key={c.key} className="px-2">
+                      {row.values[c.key].si}
+                    </td>
+                  ),
                 )}
                 <td className={`px-2 text-left font-sans ${row.flag === 'measured' ? 'text-ink-soft' : 'text-signal-warn'}`}>{row.flag}</td>
               </tr>

@@ -41,14 +41,15 @@ export function SiteStep({
   return (
     <Panel title="Which site is this weather for?">
       <div className="space-y-4">
-        <p className="text-sm text-ink-soft">
-          The site's elevation sets the pressure when the file has none, and its time zone reads local timestamps.
-        </p>
+        <p className="text-sm text-ink-soft">The site's elevation sets the pressure when the file has none, and its time zone reads local timestamps.</p>
         {sites.length > 0 && (
           <fieldset className="space-y-1">
             <legend className="sr-only">Site</legend>
             {sites.map((s) => (
-              <label key={s.id} className="flex cursor-pointer items-center gap-3 rounded border border-rule px-3 py-2 hover:bg-mist has-[:checked]:border-harbour has-[:checked]:bg-mist">
+              <label
+                key={s.id}
+                className="flex cursor-pointer items-center gap-3 rounded border border-rule px-3 py-2 hover:bg-mist has-[:checked]:border-harbour has-[:checked]:bg-mist"
+              >
                 <input type="radio" name={`${ids}-site`} value={s.id} checked={siteId === s.id} onChange={() => setSiteId(s.id)} />
                 <span className="font-medium">{s.name}</span>
                 <span className="num text-xs text-ink-soft">

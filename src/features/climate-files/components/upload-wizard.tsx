@@ -30,7 +30,6 @@ const steps: Array<[Step, string]> = [
   ['report', 'Report and confirm'],
 ];
 
-
 /**
  * Upload of an hourly weather file in four steps: the site, the file (sent with a progress bar and
  * read on the server without storing), the mapping with the first hours as read, then the
@@ -53,9 +52,7 @@ export function UploadWizard({
 }) {
   const queryClient = useQueryClient();
   const [step, setStep] = useState<Step>('site');
-  const [siteId, setSiteId] = useState<number | null>(
-    sites.some((s) => s.id === initialSiteId) ? initialSiteId! : sites.length === 1 ? sites[0].id : null,
-  );
+  const [siteId, setSiteId] = useState<number | null>(sites.some((s) => s.id === initialSiteId) ? initialSiteId! : sites.length === 1 ? sites[0].id : null);
   const [creatingSite, setCreatingSite] = useState(sites.length === 0);
   const [files, setFiles] = useState<File[]>([]);
   const [name, setName] = useState('');
@@ -187,7 +184,12 @@ export function UploadWizard({
             <Panel title="What the file says about itself">
               <div className="space-y-3">
                 <FileFormatNote mapping={preview.mapping} />
-                <FileOrigin report={preview.report} site={site ?? undefined} onNewSite={() => setSiteFromHeader(!siteFromHeader)} newSiteOpen={siteFromHeader} />
+                <FileOrigin
+                  report={preview.report}
+                  site={site ?? undefined}
+                  onNewSite={() => setSiteFromHeader(!siteFromHeader)}
+                  newSiteOpen={siteFromHeader}
+                />
                 {siteFromHeader && preview.report.fileHeader && (
                   <div className="rounded border border-rule p-3">
                     <h3 className="mb-2 text-sm font-semibold">New site from the file's header</h3>
@@ -212,7 +214,11 @@ export function UploadWizard({
               </button>
               {stale && <span className="text-xs text-signal-warn">Changed: the hours below still show the previous reading.</span>}
             </div>
-            {progress && <div className="mt-3"><UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? 'Reading the files again' : 'Reading the file again'} /></div>}
+            {progress && (
+              <div className="mt-3">
+                <UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? 'Reading the files again' : 'Reading the file again'} />
+              </div>
+            )}
           </Panel>
           <Panel title="The first hours as interpreted">
             {preview.humidityKind ? (
@@ -230,7 +236,9 @@ export function UploadWizard({
             )}
           </Panel>
           <div className="flex gap-2">
-            <button type="button" className={quietButton} onClick={() => setStep('file')} disabled={busy}>Back</button>
+            <button type="button" className={quietButton} onClick={() => setStep('file')} disabled={busy}>
+              Back
+            </button>
             <button type="button" className={button} onClick={() => setStep('report')} disabled={busy || stale}>
               Continue to the report
             </button>
@@ -243,9 +251,17 @@ export function UploadWizard({
           <Panel title="Validation report">
             <ValidationReport report={rejected ?? preview.report} />
           </Panel>
-          {progress && <UploadProgressBar progress={progress} files={files.length} label={files.length > 1 ? `Storing the ${files.length} files as one climate file` : 'Storing the file'} />}
+          {progress && (
+            <UploadProgressBar
+              progress={progress}
+              files={files.length}
+              label={files.length > 1 ? `Storing the ${files.length} files as one climate file` : 'Storing the file'}
+            />
+          )}
           <div className="flex flex-wrap items-center gap-2">
-            <button type="button" className={quietButton} onClick={() => setStep('mapping')} disabled={busy}>Back to the mapping</button>
+            <button type="button" className={quietButton} onClick={() => setStep('mapping')} disabled={busy}>
+              Back to the mapping
+            </button>
             <button type="button" className={button} onClick={() => void store()} disabled={busy || !preview.ok}>
               {files.length > 1 ? `Store ${files.length} files as one climate file` : 'Store climate file'}
             </button>

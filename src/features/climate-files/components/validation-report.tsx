@@ -39,7 +39,18 @@ export function ValidationReport({ report }: { report: ImportReport }) {
   )}`;
   return (
     <div className="space-y-3" data-testid="validation-report">
-      <Notice tone={report.ok ? (report.counts.missingHours || report.issues.some((i) => i.severity === 'warning') ? 'warn' : 'info') : 'bad'} title={report.files ? (report.ok ? `The ${report.files.length} files can be stored as one climate file` : 'The files cannot be stored as they are') : report.ok ? 'The file can be stored' : 'The file cannot be stored as it is'}>
+      <Notice
+        tone={report.ok ? (report.counts.missingHours || report.issues.some((i) => i.severity === 'warning') ? 'warn' : 'info') : 'bad'}
+        title={
+          report.files
+            ? report.ok
+              ? `The ${report.files.length} files can be stored as one climate file`
+              : 'The files cannot be stored as they are'
+            : report.ok
+              ? 'The file can be stored'
+              : 'The file cannot be stored as it is'
+        }
+      >
         {report.summary}
         {report.timeLayout && <span className="block">Time: {report.timeLayout}.</span>}
         <span className="block" data-testid="report-humidity-reading">
@@ -64,7 +75,8 @@ export function ValidationReport({ report }: { report: ImportReport }) {
             <caption className="pb-1 text-left text-sm text-ink-soft" data-testid="issue-count">
               {report.fullIssueList ? (
                 <>
-                  Listed: the first {Math.min(ISSUES_LISTED, report.issues.length).toLocaleString('en')} of {report.fullIssueList.issues.toLocaleString('en')} issues
+                  Listed: the first {Math.min(ISSUES_LISTED, report.issues.length).toLocaleString('en')} of {report.fullIssueList.issues.toLocaleString('en')}{' '}
+                  issues
                   {report.issues.length > ISSUES_LISTED && ', and the errors after them'}.{' '}
                   <a className="text-harbour underline" href={report.fullIssueList.path} download>
                     Download all {report.fullIssueList.issues.toLocaleString('en')} as CSV
@@ -82,12 +94,26 @@ export function ValidationReport({ report }: { report: ImportReport }) {
             </caption>
             <thead>
               <tr className="border-b border-rule text-ink-soft">
-                <th scope="col" className="py-1 pr-2 font-medium">Severity</th>
-                {report.files && <th scope="col" className="pr-2 font-medium">File</th>}
-                <th scope="col" className="pr-2 font-medium">Line</th>
-                <th scope="col" className="pr-2 font-medium">Column</th>
-                <th scope="col" className="pr-2 font-medium">Value</th>
-                <th scope="col" className="font-medium">What was found</th>
+                <th scope="col" className="py-1 pr-2 font-medium">
+                  Severity
+                </th>
+                {report.files && (
+                  <th scope="col" className="pr-2 font-medium">
+                    File
+                  </th>
+                )}
+                <th scope="col" className="pr-2 font-medium">
+                  Line
+                </th>
+                <th scope="col" className="pr-2 font-medium">
+                  Column
+                </th>
+                <th scope="col" className="pr-2 font-medium">
+                  Value
+                </th>
+                <th scope="col" className="font-medium">
+                  What was found
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -97,7 +123,9 @@ export function ValidationReport({ report }: { report: ImportReport }) {
                   {report.files && <td className="num pr-2 whitespace-nowrap">{issue.file ?? 'the set'}</td>}
                   <td className="num pr-2">{issue.line ?? ''}</td>
                   <td className="pr-2">{issue.column ?? ''}</td>
-                  <td className="num max-w-40 truncate pr-2" title={issue.value}>{issue.value ?? ''}</td>
+                  <td className="num max-w-40 truncate pr-2" title={issue.value}>
+                    {issue.value ?? ''}
+                  </td>
                   <td>{issue.message}</td>
                 </tr>
               ))}
@@ -125,13 +153,27 @@ function FilesOfSet({ files, timeZone }: { files: FileInSet[]; timeZone: string 
         </caption>
         <thead>
           <tr className="border-b border-rule text-ink-soft">
-            <th scope="col" className="py-1 pr-2 font-medium">File</th>
-            <th scope="col" className="pr-2 font-medium">Size</th>
-            <th scope="col" className="pr-2 font-medium">First hour</th>
-            <th scope="col" className="pr-2 font-medium">Last hour</th>
-            <th scope="col" className="pr-2 text-right font-medium">Hours</th>
-            <th scope="col" className="pr-2 font-medium">Lines</th>
-            <th scope="col" className="font-medium">Found</th>
+            <th scope="col" className="py-1 pr-2 font-medium">
+              File
+            </th>
+            <th scope="col" className="pr-2 font-medium">
+              Size
+            </th>
+            <th scope="col" className="pr-2 font-medium">
+              First hour
+            </th>
+            <th scope="col" className="pr-2 font-medium">
+              Last hour
+            </th>
+            <th scope="col" className="pr-2 text-right font-medium">
+              Hours
+            </th>
+            <th scope="col" className="pr-2 font-medium">
+              Lines
+            </th>
+            <th scope="col" className="font-medium">
+              Found
+            </th>
           </tr>
         </thead>
         <tbody>

@@ -48,7 +48,15 @@ export function draftFromDetected(m: DetectedMapping): MappingDraft {
 export function timeDraftFor(layout: TimeDraft['layout'], fallbackColumn = 0): TimeDraft {
   if (layout === 'iso') return { layout, column: fallbackColumn };
   if (layout === 'date-time') return { layout, dateColumn: fallbackColumn, timeColumn: fallbackColumn + 1, dateOrder: 'YMD' };
-  return { layout, year: fallbackColumn, month: fallbackColumn + 1, day: fallbackColumn + 2, hour: fallbackColumn + 3, minute: null, hourConvention: 'ending-1-24' };
+  return {
+    layout,
+    year: fallbackColumn,
+    month: fallbackColumn + 1,
+    day: fallbackColumn + 2,
+    hour: fallbackColumn + 3,
+    minute: null,
+    hourConvention: 'ending-1-24',
+  };
 }
 
 /** First unit offered for each humidity measure. */

@@ -13,7 +13,13 @@ import { DifferingInputs } from './differing-inputs';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { mixedEngineNote } from '../../../../shared/report/mode-subsets';
 
-const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
+const idList = (text: string | null) =>
+  text
+    ? text
+        .split(',')
+        .map(Number)
+        .filter((n) => Number.isInteger(n) && n > 0)
+    : [];
 
 /** /projects/:projectId/compare?runs=1,2,3&baseline=1 — the choice lives in the address, so a comparison can be shared. */
 export function ComparePage() {
@@ -28,7 +34,10 @@ export function ComparePage() {
   const baselineParam = Number(search.get('baseline'));
   const baselineId = selected.some((r) => r.id === baselineParam) ? baselineParam : (selected[0]?.id ?? 0);
   const rows = useMemo(() => compareRuns(selected, baselineId), [selected, baselineId]);
-  const tables = useRunTables(projectId, selected.map((r) => r.id));
+  const tables = useRunTables(
+    projectId,
+    selected.map((r) => r.id),
+  );
   // `tables` keeps its identity until a run's tables arrive, so the chart is not redrawn on every render.
   const monthlySeries = useMemo(() => (tables.every((t) => t) ? tables.map((t) => t!) : null), [tables]);
   const yearlyByRun = useMemo(() => new Map(tables.flatMap((t) => (t ? [[t.runId, t.hoursByYear] as const] : []))), [tables]);
@@ -61,19 +70,16 @@ export function ComparePage() {
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">
           {runsQuery.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
-          {runsQuery.isError && <Notice tone="bad" title="Runs could not be loaded">{runsQuery.error.message}</Notice>}
+          {runsQuery.isError && (
+            <Notice tone="bad" title="Runs could not be loaded">
+              {runsQuery.error.message}
+            </Notice>
+          )}
           {runsQuery.data && done.length === 0 && (
             <p className="text-sm text-ink-soft">No finished runs yet. Open a scenario, run it on a climate file, then come back to compare.</p>
           )}
           {done.length > 0 && (
-            <RunPicker
-              projectId={projectId}
-              runs={done}
-              chosen={chosen}
-              baselineId={baselineId}
-              onToggle={toggle}
-              onBaseline={(id) => update(chosen, id)}
-            />
+            <RunPicker projectId={projectId} runs={done} chosen={chosen} baselineId={baselineId} onToggle={toggle} onBaseline={(id) => update(chosen, id)} />
           )}
         </Panel>
         <div className="min-w-0 space-y-4">
@@ -93,7 +99,11 @@ export function ComparePage() {
                 <DifferingInputs runs={selected} scenarios={selected.map((r) => tables.find((t) => t?.runId === r.id)?.scenario)} />
               </Panel>
               <Panel title="Hours per mode by month">
-                {monthlySeries ? <MonthlyComparisonChart series={monthlySeries} /> : <div role="status" className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />}
+                {monthlySeries ? (
+                  <MonthlyComparisonChart series={monthlySeries} />
+                ) : (
+                  <div role="status" className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />
+                )}
               </Panel>
               {anyMultiYear && (
                 <Panel title="Year to year: mechanical hours">
@@ -101,8 +111,9 @@ export function ComparePage() {
                 </Panel>
               )}
               <Notice tone="warn" title="Read these results as estimates">
-                They compare designs; they are not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering review. Direct
-                outside air brings contamination, smoke and condensation risk; evaporative systems need water treatment and Legionella control under local rules.
+                They compare designs; they are not a design. Final design follows local codes, the IT manufacturers' limits and licensed engineering review.
+                Direct outside air brings contamination, smoke and condensation risk; evaporative systems need water treatment and Legionella control under
+                local rules.
               </Notice>
             </>
           )}

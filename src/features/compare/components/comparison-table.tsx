@@ -15,7 +15,10 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
   const byId = new Map(runs.map((r) => [r.id, r]));
   function download() {
     const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${runDisplayName(r.scenario.name, r.sweepPoint, unitSystem)} / ${r.climate.name}`]));
-    downloadCsv(`comparison-${runs.map((r) => r.id).join('-')}.csv`, comparisonCsv(rows, labels, unitSystem, new Map(runs.map((r) => [r.id, r.engineVersion]))));
+    downloadCsv(
+      `comparison-${runs.map((r) => r.id).join('-')}.csv`,
+      comparisonCsv(rows, labels, unitSystem, new Map(runs.map((r) => [r.id, r.engineVersion]))),
+    );
   }
   return (
     <div className="overflow-x-auto">
@@ -27,7 +30,9 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
       <table className="w-full text-sm" data-testid="comparison-table">
         <thead>
           <tr className="border-b border-rule align-bottom text-xs text-ink-soft">
-            <th scope="col" className="py-1 pr-4 text-left font-medium">Figure</th>
+            <th scope="col" className="py-1 pr-4 text-left font-medium">
+              Figure
+            </th>
             {rows[0]?.cells.map((c) => {
               const run = byId.get(c.runId)!;
               return (
@@ -48,7 +53,9 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
         <tbody>
           {rows.map(({ metric, cells }) => (
             <tr key={metric.key} className={`border-b border-rule/60 ${metric.part ? 'text-ink-soft' : ''}`} data-testid={`compare-row-${metric.key}`}>
-              <th scope="row" className={metric.part ? 'py-0.5 pl-5 pr-4 text-left text-xs font-normal' : 'py-1 pr-4 text-left font-normal'}>{metric.label}</th>
+              <th scope="row" className={metric.part ? 'py-0.5 pl-5 pr-4 text-left text-xs font-normal' : 'py-1 pr-4 text-left font-normal'}>
+                {metric.label}
+              </th>
               {cells.map((c) => (
                 <td key={c.runId} className={`num px-2 text-right ${metric.part ? 'py-0.5 text-xs' : 'py-1'}`}>
                   <span className="block">{c.value === null && metric.notInOldRuns ? NOT_COUNTED : formatMetric(metric.format, unitSystem, c.value)}</span>
@@ -64,14 +71,16 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
           ))}
         </tbody>
       </table>
-      {runs.filter((r) => r.results && !countsSubsets(r.results)).map((r) => (
-        <p key={r.id} className="mt-2 text-xs text-ink-soft">
-          Run {r.id}: {notCountedShort(r.engineVersion)}
-        </p>
-      ))}
+      {runs
+        .filter((r) => r.results && !countsSubsets(r.results))
+        .map((r) => (
+          <p key={r.id} className="mt-2 text-xs text-ink-soft">
+            Run {r.id}: {notCountedShort(r.engineVersion)}
+          </p>
+        ))}
       <p className="mt-2 text-xs text-ink-soft">
-        Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours so files of different
-        lengths compare.
+        Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours so files of
+        different lengths compare.
       </p>
     </div>
   );

@@ -14,13 +14,20 @@ export function DifferingInputs({ runs, scenarios }: { runs: RunListing[]; scena
   const inputs = differingInputs(scenarios);
   const files = runs.map((r) => `${r.climate.site.name} · ${r.climate.name}`);
   const fileDiffers = new Set(files).size > 1;
-  if (inputs.length === 0 && !fileDiffers) return <p className="text-sm text-ink-soft" data-testid="differing-inputs">The runs have the same inputs and climate file.</p>;
+  if (inputs.length === 0 && !fileDiffers)
+    return (
+      <p className="text-sm text-ink-soft" data-testid="differing-inputs">
+        The runs have the same inputs and climate file.
+      </p>
+    );
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-sm" data-testid="differing-inputs">
         <thead>
           <tr className="border-b border-rule text-left text-xs text-ink-soft">
-            <th scope="col" className="py-1 font-medium">Input</th>
+            <th scope="col" className="py-1 font-medium">
+              Input
+            </th>
             {runs.map((r) => (
               <th key={r.id} scope="col" className="px-2 py-1 font-medium">
                 Run {r.id}
@@ -31,9 +38,13 @@ export function DifferingInputs({ runs, scenarios }: { runs: RunListing[]; scena
         <tbody>
           {fileDiffers && (
             <tr className="border-b border-rule/60">
-              <th scope="row" className="py-1 text-left font-normal">Climate file</th>
+              <th scope="row" className="py-1 text-left font-normal">
+                Climate file
+              </th>
               {files.map((f, i) => (
-                <td key={runs[i].id} className="px-2 py-1">{f}</td>
+                <td key={runs[i].id} className="px-2 py-1">
+                  {f}
+                </td>
               ))}
             </tr>
           )}

@@ -36,7 +36,8 @@ export function RunPicker({
   const options = useMemo(() => pickerViewOptions(runs), [runs]);
   const [viewChoice, setView] = useState<PickerView | null>(null);
   // A sweep deleted meanwhile, or no choice made yet: the default view.
-  const view = viewChoice && (viewChoice === 'plain' || viewChoice === 'all' || options.some((o) => o.value === viewChoice)) ? viewChoice : defaultPickerView(runs);
+  const view =
+    viewChoice && (viewChoice === 'plain' || viewChoice === 'all' || options.some((o) => o.value === viewChoice)) ? viewChoice : defaultPickerView(runs);
   const listed = useMemo(() => runsInView(runs, view, chosen), [runs, view, chosen]);
   const columns = useMemo(
     () => [
@@ -61,14 +62,20 @@ export function RunPicker({
             <span className="block text-xs text-ink-soft">
               {r.climate.site.name} · {r.climate.name}
               {/* A run by an older engine is marked, so like can be compared with like. */}
-              {r.engineVersion !== ENGINE_VERSION && <span className="text-signal-warn" data-testid="older-engine"> · by {r.engineVersion}</span>}
+              {r.engineVersion !== ENGINE_VERSION && (
+                <span className="text-signal-warn" data-testid="older-engine">
+                  {' '}
+                  · by {r.engineVersion}
+                </span>
+              )}
             </span>
           );
           // A sweep point is named by its swept value in the reader's units; its scenario name repeats the base and gives the value in SI.
           if (r.sweepId !== null && r.sweepPoint) {
             return (
               <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline" title={r.scenario.name}>
-                <span className="num text-xs text-ink-faint">#{r.id}</span> <span data-testid="sweep-point-value">
+                <span className="num text-xs text-ink-faint">#{r.id}</span>{' '}
+                <span data-testid="sweep-point-value">
                   {sweepPointParts(r.sweepPoint, unitSystem).map((part, i) => (
                     <span key={part.path}>
                       {i > 0 && ' · '}
@@ -119,7 +126,14 @@ export function RunPicker({
     ],
     [projectId, chosen, baselineId, onToggle, onBaseline, unitSystem],
   );
-  const table = useReactTable({ data: listed, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
+  const table = useReactTable({
+    data: listed,
+    columns,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
 
   return (
     <div className="space-y-2">

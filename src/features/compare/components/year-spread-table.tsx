@@ -20,14 +20,30 @@ export function YearSpreadTable({ runs, byRun }: { runs: RunListing[]; byRun: Ma
         <table className="num w-full text-right text-xs" data-testid="year-spread-table">
           <thead>
             <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 pr-4 text-left font-sans font-medium">Run</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Full years</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">P10 year (h)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Median year (h)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">P90 year (h)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Worst year (h)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Min–max (h)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Std dev (h)</th>
+              <th scope="col" className="py-1 pr-4 text-left font-sans font-medium">
+                Run
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Full years
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                P10 year (h)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Median year (h)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                P90 year (h)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Worst year (h)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Min–max (h)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Std dev (h)
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -38,9 +54,16 @@ export function YearSpreadTable({ runs, byRun }: { runs: RunListing[]; byRun: Ma
               return (
                 <tr key={run.id} className="border-b border-rule/60">
                   <th scope="row" className="py-0.5 pr-4 text-left font-sans font-normal">
-                    Run {run.id} <span className="text-ink-soft">· {run.scenario.name} · {run.climate.name}</span>
+                    Run {run.id}{' '}
+                    <span className="text-ink-soft">
+                      · {run.scenario.name} · {run.climate.name}
+                    </span>
                   </th>
-                  {!years && <td colSpan={7} className="px-2 py-0.5 text-ink-soft">loading…</td>}
+                  {!years && (
+                    <td colSpan={7} className="px-2 py-0.5 text-ink-soft">
+                      loading…
+                    </td>
+                  )}
                   {stats && !m && (
                     <td colSpan={7} className="px-2 py-0.5 font-sans text-ink-soft">
                       no full calendar year{stats.partialYears.length > 0 ? ` (${stats.partialYears.length} partial left out)` : ''}
@@ -72,10 +95,10 @@ export function YearSpreadTable({ runs, byRun }: { runs: RunListing[]; byRun: Ma
         </table>
       </div>
       <p className="text-xs text-ink-soft">
-        Mechanical hours per calendar year of each run's climate file. Percentiles by nearest rank (the year of rank ⌈P/100 · N⌉ among N full years
-        ordered by mechanical hours), so each is a real year; the worst year has the most mechanical hours (a tie goes to more cooling energy, then
-        the earlier year). Partial years, more than a day short of the calendar year's hours, are left out. The run page gives the same for free cooling,
-        adiabatic assist, energy and water.
+        Mechanical hours per calendar year of each run's climate file. Percentiles by nearest rank (the year of rank ⌈P/100 · N⌉ among N full years ordered by
+        mechanical hours), so each is a real year; the worst year has the most mechanical hours (a tie goes to more cooling energy, then the earlier year).
+        Partial years, more than a day short of the calendar year's hours, are left out. The run page gives the same for free cooling, adiabatic assist, energy
+        and water.
       </p>
     </div>
   );

@@ -35,22 +35,24 @@ export function compareRuns(runs: RunListing[], baselineId: number): ComparedRow
   if (!baseline) return [];
   // A hybrid hall's loop figures only when a hybrid is among the runs.
   const anyHybrid = done.some((r) => r.results!.loops !== undefined);
-  return metrics.filter((m) => anyHybrid || !m.hybridOnly).map((metric) => {
-    const base = metric.value(baseline.results! satisfies Results);
-    return {
-      metric,
-      cells: done.map((run) => {
-        const value = metric.value(run.results!);
-        const isBase = run.id === baseline.id;
-        const difference = !isBase && value !== null && base !== null ? value - base : null;
-        const differencePct = differencePercent(metric, difference, base);
-        let verdict: ComparedCell['verdict'] = 'none';
-        if (difference !== null && metric.better !== 'none') {
-          const tolerance = Math.abs(base ?? 0) * 1e-9;
-          verdict = Math.abs(difference) <= tolerance ? 'same' : (difference > 0) === (metric.better === 'higher') ? 'better' : 'worse';
-        }
-        return { runId: run.id, value, difference, differencePct, verdict };
-      }),
-    };
-  });
+  return metrics
+    .filter((m) => anyHybrid || !m.hybridOnly)
+    .map((metric) => {
+      const base = metric.value(baseline.results! satisfies Results);
+      return {
+        metric,
+        cells: done.map((run) => {
+          const value = metric.value(run.results!);
+          const isBase = run.id === baseline.id;
+          const difference = !isBase && value !== null && base !== null ? value - base : null;
+          const differencePct = differencePercent(metric, difference, base);
+          let verdict: ComparedCell['verdict'] = 'none';
+          if (difference !== null && metric.better !== 'none') {
+            const tolerance = Math.abs(base ?? 0) * 1e-9;
+            verdict = Math.abs(difference) <= tolerance ? 'same' : difference > 0 === (metric.better === 'higher') ? 'better' : 'worse';
+          }
+          return { runId: run.id, value, difference, differencePct, verdict };
+        }),
+      };
+    });
 }

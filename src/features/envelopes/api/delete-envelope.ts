@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 
-export const deleteEnvelope = (projectId: number, envelopeId: number) =>
-  apiFetch<void>(`/projects/${projectId}/envelopes/${envelopeId}`, { method: 'DELETE' });
+export const deleteEnvelope = (projectId: number, envelopeId: number) => apiFetch<void>(`/projects/${projectId}/envelopes/${envelopeId}`, { method: 'DELETE' });
 
 export function useDeleteEnvelope(projectId: number) {
   const queryClient = useQueryClient();

@@ -14,8 +14,7 @@ export interface ProjectEnvelope {
 export const getEnvelopePresets = () => apiFetch<{ presets: EnvelopePreset[] }>('/envelope-presets');
 export const getProjectEnvelopes = (projectId: number) => apiFetch<{ envelopes: ProjectEnvelope[] }>(`/projects/${projectId}/envelopes`);
 
-export const envelopePresetsQueryOptions = () =>
-  queryOptions({ queryKey: ['envelope-presets'], queryFn: getEnvelopePresets, staleTime: Infinity });
+export const envelopePresetsQueryOptions = () => queryOptions({ queryKey: ['envelope-presets'], queryFn: getEnvelopePresets, staleTime: Infinity });
 
 export const projectEnvelopesQueryOptions = (projectId: number) =>
   queryOptions({ queryKey: ['projects', projectId, 'envelopes'], queryFn: () => getProjectEnvelopes(projectId) });

@@ -50,7 +50,13 @@ export function EnvelopeForm({ projectId, onCreated }: { projectId: number; onCr
               />
               {error && (
                 <span role="alert" className="text-xs text-signal-bad">
-                  {/^must be a number from/.test(error) ? `Enter a number from ${range}.` : error.replace(/(\w+)(Min|Max)(C|Pct)/g, (_m, q: string, end: string) => `${end === 'Min' ? 'lowest' : 'highest'} ${q === 'rh' ? 'RH' : q === 'dewPoint' ? 'dew point' : 'dry-bulb'}`)}
+                  {/^must be a number from/.test(error)
+                    ? `Enter a number from ${range}.`
+                    : error.replace(
+                        /(\w+)(Min|Max)(C|Pct)/g,
+                        (_m, q: string, end: string) =>
+                          `${end === 'Min' ? 'lowest' : 'highest'} ${q === 'rh' ? 'RH' : q === 'dewPoint' ? 'dew point' : 'dry-bulb'}`,
+                      )}
                 </span>
               )}
             </label>

@@ -60,10 +60,7 @@ export function EnvelopesPage() {
     ],
     [presets.data, own.data],
   );
-  const chartEnvelopes = useMemo(
-    () => entries.filter((e) => drawn.includes(e.key)).map((e) => ({ label: e.label, limits: e.limits })),
-    [entries, drawn],
-  );
+  const chartEnvelopes = useMemo(() => entries.filter((e) => drawn.includes(e.key)).map((e) => ({ label: e.label, limits: e.limits })), [entries, drawn]);
   const toggle = (key: string) => setDrawn((d) => (d.includes(key) ? d.filter((k) => k !== key) : [...d, key].slice(-maxDrawn)));
   const t = unitOf('temperature', unitSystem);
 
@@ -75,14 +72,22 @@ export function EnvelopesPage() {
         <ul className="divide-y divide-rule">
           {list.map((e) => (
             <li key={e.key} className="flex gap-3 py-2" data-testid="envelope-entry">
-              <input type="checkbox" className="mt-1 accent-harbour" aria-label={`Draw ${e.label}`} checked={drawn.includes(e.key)} onChange={() => toggle(e.key)} />
+              <input
+                type="checkbox"
+                className="mt-1 accent-harbour"
+                aria-label={`Draw ${e.label}`}
+                checked={drawn.includes(e.key)}
+                onChange={() => toggle(e.key)}
+              />
               <div className="min-w-0 flex-1">
                 <div className="flex items-baseline justify-between gap-2">
                   <p className="font-medium">{e.label}</p>
                   {e.projectEnvelopeId !== undefined && canEdit && (
                     <button
                       type="button"
-                      onClick={() => window.confirm(`Delete the envelope “${e.label}”? Scenarios keep the limits they copied.`) && remove.mutate(e.projectEnvelopeId!)}
+                      onClick={() =>
+                        window.confirm(`Delete the envelope “${e.label}”? Scenarios keep the limits they copied.`) && remove.mutate(e.projectEnvelopeId!)
+                      }
                       className="rounded px-2 text-xs text-signal-bad hover:bg-[#fbeceb]"
                     >
                       Delete
@@ -91,8 +96,8 @@ export function EnvelopesPage() {
                 </div>
                 <p className="num text-xs">
                   {formatLimit('temperature', unitSystem, e.limits.dryBulbMinC)}–{formatLimit('temperature', unitSystem, e.limits.dryBulbMaxC)} {t} dry-bulb ·
-                  dew point {formatLimit('temperature', unitSystem, e.limits.dewPointMinC)} to {formatLimit('temperature', unitSystem, e.limits.dewPointMaxC)} {t} ·
-                  RH {e.limits.rhMinPct}–{e.limits.rhMaxPct} %
+                  dew point {formatLimit('temperature', unitSystem, e.limits.dewPointMinC)} to {formatLimit('temperature', unitSystem, e.limits.dewPointMaxC)}{' '}
+                  {t} · RH {e.limits.rhMinPct}–{e.limits.rhMaxPct} %
                 </p>
                 <p className="text-xs text-ink-soft">{e.source}</p>
                 {e.note && <p className="text-xs text-ink-faint">{e.note}</p>}

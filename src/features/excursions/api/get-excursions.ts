@@ -5,7 +5,6 @@ import type { ChosenEnvelope, ProposalQuery } from '../../../../shared/excursion
 
 import type { ModeHours } from '../../../../shared/scenario/results';
 
-
 export interface ExcursionsResponse {
   run: {
     id: number;

@@ -6,7 +6,19 @@ import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
 import type { ExcursionsResponse } from '../api/get-excursions';
 import { hoursText, percentText, siteTime } from './excursion-format';
 
-function Figure({ label, value, detail, tone, testId }: { label: string; value: ReactNode; detail?: ReactNode; tone?: 'ok' | 'warn' | 'bad'; testId?: string }) {
+function Figure({
+  label,
+  value,
+  detail,
+  tone,
+  testId,
+}: {
+  label: string;
+  value: ReactNode;
+  detail?: ReactNode;
+  tone?: 'ok' | 'warn' | 'bad';
+  testId?: string;
+}) {
   const ink = tone === 'bad' ? 'text-signal-bad' : tone === 'warn' ? 'text-signal-warn' : 'text-ink';
   return (
     <div className="rounded-md border border-rule bg-panel px-4 py-3 break-inside-avoid" data-testid={testId}>
@@ -91,10 +103,18 @@ export function ModeChangeTable({ data }: { data: ExcursionsResponse }) {
     <table className="num w-full text-right text-xs" data-testid="mode-change-table">
       <thead>
         <tr className="border-b border-rule text-ink-soft">
-          <th scope="col" className="py-1 text-left font-sans font-medium">Mode</th>
-          <th scope="col" className="px-2 py-1 font-sans font-medium">As run (h)</th>
-          <th scope="col" className="px-2 py-1 font-sans font-medium">Proposal (h)</th>
-          <th scope="col" className="px-2 py-1 font-sans font-medium">Change (h)</th>
+          <th scope="col" className="py-1 text-left font-sans font-medium">
+            Mode
+          </th>
+          <th scope="col" className="px-2 py-1 font-sans font-medium">
+            As run (h)
+          </th>
+          <th scope="col" className="px-2 py-1 font-sans font-medium">
+            Proposal (h)
+          </th>
+          <th scope="col" className="px-2 py-1 font-sans font-medium">
+            Change (h)
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -132,15 +152,23 @@ export function CauseTable({ data }: { data: ExcursionsResponse }) {
     <table className="num w-full text-right text-xs" data-testid="cause-table">
       <thead>
         <tr className="border-b border-rule text-ink-soft">
-          <th scope="col" className="py-1 text-left font-sans font-medium">Cause</th>
-          <th scope="col" className="px-2 py-1 font-sans font-medium">Outside recommended (h)</th>
-          <th scope="col" className="px-2 py-1 font-sans font-medium">Outside allowable (h)</th>
+          <th scope="col" className="py-1 text-left font-sans font-medium">
+            Cause
+          </th>
+          <th scope="col" className="px-2 py-1 font-sans font-medium">
+            Outside recommended (h)
+          </th>
+          <th scope="col" className="px-2 py-1 font-sans font-medium">
+            Outside allowable (h)
+          </th>
         </tr>
       </thead>
       <tbody>
         {rows.map(([key, label]) => (
           <tr key={key} className="border-b border-rule/60">
-            <th scope="row" className="py-0.5 text-left font-sans font-normal">{label}</th>
+            <th scope="row" className="py-0.5 text-left font-sans font-normal">
+              {label}
+            </th>
             <td className="px-2 py-0.5">{hoursText(recommended[key])}</td>
             <td className="px-2 py-0.5">{hoursText(allowable[key])}</td>
           </tr>

@@ -11,14 +11,19 @@ const binLabel = (b: { fromHours: number; toHours: number | null }) =>
 export function EventHistogram({ data }: { data: ExcursionsResponse }) {
   const counts = data.analysis.events.histogram;
   const most = Math.max(1, ...counts);
-  if (data.analysis.events.count === 0) return <p className="text-sm text-ink-soft">No excursion events: every hour with data is inside the recommended range.</p>;
+  if (data.analysis.events.count === 0)
+    return <p className="text-sm text-ink-soft">No excursion events: every hour with data is inside the recommended range.</p>;
   return (
     <table className="w-full text-xs" data-testid="event-histogram">
       <caption className="sr-only">Number of excursion events by how long they lasted</caption>
       <thead>
         <tr className="border-b border-rule text-ink-soft">
-          <th scope="col" className="w-36 py-1 text-left font-medium">Event lasted</th>
-          <th scope="col" className="w-16 px-2 py-1 text-right font-medium">Events</th>
+          <th scope="col" className="w-36 py-1 text-left font-medium">
+            Event lasted
+          </th>
+          <th scope="col" className="w-16 px-2 py-1 text-right font-medium">
+            Events
+          </th>
           <th scope="col" className="px-2 py-1 text-left font-medium">
             <span className="sr-only">Bar</span>
           </th>
@@ -27,10 +32,14 @@ export function EventHistogram({ data }: { data: ExcursionsResponse }) {
       <tbody>
         {data.reference.durationBins.map((bin, i) => (
           <tr key={bin.fromHours} className="border-b border-rule/60">
-            <th scope="row" className="py-0.5 text-left font-normal">{binLabel(bin)}</th>
+            <th scope="row" className="py-0.5 text-left font-normal">
+              {binLabel(bin)}
+            </th>
             <td className="num px-2 py-0.5 text-right">{hoursText(counts[i])}</td>
             <td className="px-2 py-0.5">
-              {counts[i] > 0 && <div className="h-3 rounded-sm bg-harbour print:border print:border-ink" style={{ width: `${(100 * counts[i]) / most}%` }} aria-hidden />}
+              {counts[i] > 0 && (
+                <div className="h-3 rounded-sm bg-harbour print:border print:border-ink" style={{ width: `${(100 * counts[i]) / most}%` }} aria-hidden />
+              )}
             </td>
           </tr>
         ))}
@@ -54,22 +63,38 @@ export function EnvelopesApplied({ data }: { data: ExcursionsResponse }) {
       <table className="w-full text-xs" data-testid="envelopes-applied">
         <thead>
           <tr className="border-b border-rule text-left text-ink-soft">
-            <th scope="col" className="py-1 font-medium">Role</th>
-            <th scope="col" className="px-2 py-1 font-medium">Envelope</th>
-            <th scope="col" className="px-2 py-1 text-right font-medium">Dry-bulb ({unitOf('temperature', unitSystem)})</th>
-            <th scope="col" className="px-2 py-1 text-right font-medium">Dew point ({unitOf('temperature', unitSystem)})</th>
-            <th scope="col" className="px-2 py-1 text-right font-medium">RH (%)</th>
-            <th scope="col" className="px-2 py-1 font-medium">Source</th>
+            <th scope="col" className="py-1 font-medium">
+              Role
+            </th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Envelope
+            </th>
+            <th scope="col" className="px-2 py-1 text-right font-medium">
+              Dry-bulb ({unitOf('temperature', unitSystem)})
+            </th>
+            <th scope="col" className="px-2 py-1 text-right font-medium">
+              Dew point ({unitOf('temperature', unitSystem)})
+            </th>
+            <th scope="col" className="px-2 py-1 text-right font-medium">
+              RH (%)
+            </th>
+            <th scope="col" className="px-2 py-1 font-medium">
+              Source
+            </th>
           </tr>
         </thead>
         <tbody>
           {rows.map(([role, chosen, b]) => (
             <tr key={role} className="border-b border-rule/60 align-top">
-              <th scope="row" className="py-0.5 text-left font-normal">{role}</th>
+              <th scope="row" className="py-0.5 text-left font-normal">
+                {role}
+              </th>
               <td className="px-2 py-0.5">{chosen.label}</td>
               <td className="num px-2 py-0.5 text-right">
                 {t(b.dryBulbMinC)}–{t(b.dryBulbMaxC)}
-                {b.dryBulbMaxC < chosen.limits.dryBulbMaxC && <span className="block text-[11px] text-ink-soft">max derated from {t(chosen.limits.dryBulbMaxC)}</span>}
+                {b.dryBulbMaxC < chosen.limits.dryBulbMaxC && (
+                  <span className="block text-[11px] text-ink-soft">max derated from {t(chosen.limits.dryBulbMaxC)}</span>
+                )}
               </td>
               <td className="num px-2 py-0.5 text-right">
                 {t(b.dewPointMinC)}–{t(b.dewPointMaxC)}
@@ -99,24 +124,32 @@ export function XFactorTable({ data }: { data: ExcursionsResponse }) {
         <table className="num w-full text-right text-xs" data-testid="x-factor-table">
           <tbody>
             <tr className="border-b border-rule">
-              <th scope="row" className="py-1 pr-3 text-left font-sans font-medium text-ink-soft">Inlet dry-bulb</th>
+              <th scope="row" className="py-1 pr-3 text-left font-sans font-medium text-ink-soft">
+                Inlet dry-bulb
+              </th>
               {table.map((p) => (
-                <td key={p.dryBulbC} className="px-1.5 py-1">{formatQuantity('temperature', unitSystem, p.dryBulbC)}</td>
+                <td key={p.dryBulbC} className="px-1.5 py-1">
+                  {formatQuantity('temperature', unitSystem, p.dryBulbC)}
+                </td>
               ))}
             </tr>
             <tr>
-              <th scope="row" className="py-1 pr-3 text-left font-sans font-medium text-ink-soft">X-factor</th>
+              <th scope="row" className="py-1 pr-3 text-left font-sans font-medium text-ink-soft">
+                X-factor
+              </th>
               {table.map((p) => (
-                <td key={p.dryBulbC} className={`px-1.5 py-1 ${p.xFactor === 1 ? 'font-semibold' : ''}`}>{p.xFactor.toFixed(2)}</td>
+                <td key={p.dryBulbC} className={`px-1.5 py-1 ${p.xFactor === 1 ? 'font-semibold' : ''}`}>
+                  {p.xFactor.toFixed(2)}
+                </td>
               ))}
             </tr>
           </tbody>
         </table>
       </div>
       <p className="text-xs text-ink-soft">
-        Source: ASHRAE TC 9.9 (2011), "Thermal Guidelines for Data Processing Environments – Expanded Data Center Classes and Usage Guidance" (white
-        paper), relative failure rate of volume servers against inlet dry-bulb, average values. <strong className="text-ink">Recalled from memory</strong>, not
-        checked against the paper. Linear between the points; held at the end values below {formatQuantity('temperature', unitSystem, table[0].dryBulbC)} and above{' '}
+        Source: ASHRAE TC 9.9 (2011), "Thermal Guidelines for Data Processing Environments – Expanded Data Center Classes and Usage Guidance" (white paper),
+        relative failure rate of volume servers against inlet dry-bulb, average values. <strong className="text-ink">Recalled from memory</strong>, not checked
+        against the paper. Linear between the points; held at the end values below {formatQuantity('temperature', unitSystem, table[0].dryBulbC)} and above{' '}
         {formatQuantity('temperature', unitSystem, table[table.length - 1].dryBulbC)}. The time-weighted X-factor is the mean of the hourly values over the
         hours with data; below 1.00 means fewer failures than a hall held at 20 °C all year.
       </p>

@@ -58,7 +58,12 @@ export function ExcursionsPage() {
           <Link to={`/projects/${projectId}/runs/${runId}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
             Back to the run
           </Link>
-          <button type="button" onClick={() => window.print()} disabled={!data} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-60">
+          <button
+            type="button"
+            onClick={() => window.print()}
+            disabled={!data}
+            className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-60"
+          >
             Print for a change review
           </button>
         </div>
@@ -67,7 +72,10 @@ export function ExcursionsPage() {
       {query.isPending && <div role="status" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Working out excursions" />}
       {query.isError && (
         <Notice tone="bad" title="The excursions could not be worked out">
-          {query.error.message} {query.error.message.includes('is queued') || query.error.message.includes('is running') ? 'Wait for the run to finish, then reload.' : 'Check the proposal, or open the run again from the project.'}
+          {query.error.message}{' '}
+          {query.error.message.includes('is queued') || query.error.message.includes('is running')
+            ? 'Wait for the run to finish, then reload.'
+            : 'Check the proposal, or open the run again from the project.'}
         </Notice>
       )}
       {data && <Results data={data} proposal={proposal} busy={query.isFetching} onSubmit={submit} />}
@@ -75,7 +83,17 @@ export function ExcursionsPage() {
   );
 }
 
-function Results({ data, proposal, busy, onSubmit }: { data: ExcursionsResponse; proposal: ProposalQuery; busy: boolean; onSubmit: (q: ProposalQuery) => void }) {
+function Results({
+  data,
+  proposal,
+  busy,
+  onSubmit,
+}: {
+  data: ExcursionsResponse;
+  proposal: ProposalQuery;
+  busy: boolean;
+  onSubmit: (q: ProposalQuery) => void;
+}) {
   const { unitSystem } = useUnitSystem();
   const t = (c: number) => formatQuantity('temperature', unitSystem, c);
   const p = data.proposal;
@@ -91,7 +109,8 @@ function Results({ data, proposal, busy, onSubmit }: { data: ExcursionsResponse;
             busy={busy}
             allowableMaxC={(id) => {
               // The run's own envelope is known here only when it is the one the answer was worked out for.
-              const limits = id === data.proposal.allowable.id ? data.proposal.allowable.limits : id === RUN_ENVELOPE ? null : (findEnvelopePreset(id)?.limits ?? null);
+              const limits =
+                id === data.proposal.allowable.id ? data.proposal.allowable.limits : id === RUN_ENVELOPE ? null : (findEnvelopePreset(id)?.limits ?? null);
               return limits ? deratedDryBulbMaxC(limits.dryBulbMaxC, data.run.elevationM, limits.altitudeDerating) : null;
             }}
           />
@@ -100,8 +119,8 @@ function Results({ data, proposal, busy, onSubmit }: { data: ExcursionsResponse;
       <p className="text-sm" data-testid="proposal-summary">
         <strong>Proposal:</strong> supply setpoint {t(p.supplyAirC)}
         {p.supplyAirC !== data.run.supplyAirC && <> (the run has {t(data.run.supplyAirC)})</>}
-        {p.floatUpToC !== null ? <>, floating up to {t(data.analysis.applied.ceilingC)} before evaporative cooling or compressors start</> : <>, held</>}; controls
-        work to {p.control.id === 'run' ? "the run's envelope" : p.control.label}; checked against {p.recommended.label} and {p.allowable.label}.
+        {p.floatUpToC !== null ? <>, floating up to {t(data.analysis.applied.ceilingC)} before evaporative cooling or compressors start</> : <>, held</>};
+        controls work to {p.control.id === 'run' ? "the run's envelope" : p.control.label}; checked against {p.recommended.label} and {p.allowable.label}.
       </p>
       <ExcursionFigures data={data} />
       <div className="grid gap-4 xl:grid-cols-3">

@@ -1,7 +1,13 @@
 import { useForm, type Resolver } from 'react-hook-form';
 import { fromDisplay, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
-import { proposalQuerySchema, ALLOWABLE_PRESET_IDS, RECOMMENDED_PRESET_IDS, RUN_ENVELOPE, type ProposalQuery } from '../../../../shared/excursions/proposal-query';
+import {
+  proposalQuerySchema,
+  ALLOWABLE_PRESET_IDS,
+  RECOMMENDED_PRESET_IDS,
+  RUN_ENVELOPE,
+  type ProposalQuery,
+} from '../../../../shared/excursions/proposal-query';
 import { ENVELOPE_PRESETS } from '../../../../shared/scenario/envelopes';
 
 interface FormValues {
@@ -33,7 +39,11 @@ function proposalResolver(system: UnitSystem): Resolver<FormValues, unknown, Pro
     const errors: Record<string, { type: string; message: string }> = {};
     for (const issue of parsed.error.issues) {
       const field = String(issue.path[0] ?? 'supplyAirC');
-      const message = issue.message.startsWith('must be a number from') ? `Enter a number from ${range}.` : issue.message.startsWith('must be at or above') ? 'Enter a ceiling at or above the setpoint.' : issue.message;
+      const message = issue.message.startsWith('must be a number from')
+        ? `Enter a number from ${range}.`
+        : issue.message.startsWith('must be at or above')
+          ? 'Enter a ceiling at or above the setpoint.'
+          : issue.message;
       errors[field] = { type: issue.code, message };
     }
     return { values: {}, errors };
@@ -72,15 +82,22 @@ export function ProposalForm({
   const floats = watch('floats');
   const ceilingText = watch('floatUpToC');
   const allowableId = watch('allowable');
-  const ceilingC = floats && ceilingText.trim() !== '' && Number.isFinite(Number(ceilingText)) ? fromDisplay('temperature', unitSystem, Number(ceilingText)) : null;
+  const ceilingC =
+    floats && ceilingText.trim() !== '' && Number.isFinite(Number(ceilingText)) ? fromDisplay('temperature', unitSystem, Number(ceilingText)) : null;
   const allowedMaxC = allowableMaxC(allowableId);
   // Compared at 0.05 K, so a ceiling typed in °F that rounds to the limit is not flagged.
   const ceilingAbove = ceilingC !== null && allowedMaxC !== null && ceilingC > allowedMaxC + 0.05;
   const { errors } = formState;
-  const box = 'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
+  const box =
+    'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
   const select = 'w-full rounded border border-rule bg-panel px-2 py-1 text-sm focus-visible:outline-2 focus-visible:outline-harbour';
   return (
-    <form onSubmit={handleSubmit(onSubmit)} className="grid gap-x-6 gap-y-3 text-sm md:grid-cols-2 xl:grid-cols-[1fr_1fr_1fr_auto]" aria-label="Proposal" noValidate>
+    <form
+      onSubmit={handleSubmit(onSubmit)}
+      className="grid gap-x-6 gap-y-3 text-sm md:grid-cols-2 xl:grid-cols-[1fr_1fr_1fr_auto]"
+      aria-label="Proposal"
+      noValidate
+    >
       <div className="space-y-2">
         <label className="flex items-center justify-between gap-3">
           <span>Supply setpoint at the IT inlet</span>
@@ -89,7 +106,11 @@ export function ProposalForm({
             <span className="w-6 text-ink-soft">{unit}</span>
           </span>
         </label>
-        {errors.supplyAirC && <p className="text-xs text-signal-bad" role="alert">Setpoint: {errors.supplyAirC.message}</p>}
+        {errors.supplyAirC && (
+          <p className="text-xs text-signal-bad" role="alert">
+            Setpoint: {errors.supplyAirC.message}
+          </p>
+        )}
         <label className="flex items-center gap-2">
           <input type="checkbox" {...register('floats')} className="size-4 accent-harbour" />
           <span>Let the supply float up before evaporative cooling or compressors start</span>
@@ -101,11 +122,15 @@ export function ProposalForm({
             <span className="w-6 text-ink-soft">{unit}</span>
           </span>
         </label>
-        {errors.floatUpToC && <p className="text-xs text-signal-bad" role="alert">Float ceiling: {errors.floatUpToC.message}</p>}
+        {errors.floatUpToC && (
+          <p className="text-xs text-signal-bad" role="alert">
+            Float ceiling: {errors.floatUpToC.message}
+          </p>
+        )}
         {ceilingAbove && (
           <p className="rounded border border-signal-warn/50 bg-[#fdf3e1] px-2 py-1 text-xs" role="status" data-testid="float-ceiling-warning">
-            The float ceiling {shown(ceilingC!, unitSystem)} {unit} is above the allowable maximum {shown(allowedMaxC!, unitSystem)} {unit} of {presetLabel(allowableId)} at this
-            site (derated for its elevation): every hour the supply floats past it is an allowable excursion.
+            The float ceiling {shown(ceilingC!, unitSystem)} {unit} is above the allowable maximum {shown(allowedMaxC!, unitSystem)} {unit} of{' '}
+            {presetLabel(allowableId)} at this site (derated for its elevation): every hour the supply floats past it is an allowable excursion.
           </p>
         )}
       </div>
@@ -113,7 +138,9 @@ export function ProposalForm({
         <span className="block">Envelope the controls work to</span>
         <select {...register('control')} className={select}>
           {[RUN_ENVELOPE, ...ENVELOPE_PRESETS.map((p) => p.id)].map((id) => (
-            <option key={id} value={id}>{presetLabel(id)}</option>
+            <option key={id} value={id}>
+              {presetLabel(id)}
+            </option>
           ))}
         </select>
         <span className="block text-xs text-ink-soft">Sets the moisture limits a direct-air system dehumidifies or humidifies to.</span>
@@ -123,7 +150,9 @@ export function ProposalForm({
           <span className="block">Recommended range to check against</span>
           <select {...register('recommended')} className={select}>
             {[...RECOMMENDED_PRESET_IDS, RUN_ENVELOPE].map((id) => (
-              <option key={id} value={id}>{presetLabel(id)}</option>
+              <option key={id} value={id}>
+                {presetLabel(id)}
+              </option>
             ))}
           </select>
         </label>
@@ -131,13 +160,19 @@ export function ProposalForm({
           <span className="block">Allowable class to check against</span>
           <select {...register('allowable')} className={select}>
             {[...ALLOWABLE_PRESET_IDS, RUN_ENVELOPE].map((id) => (
-              <option key={id} value={id}>{presetLabel(id)}</option>
+              <option key={id} value={id}>
+                {presetLabel(id)}
+              </option>
             ))}
           </select>
         </label>
       </div>
       <div className="flex items-end">
-        <button type="submit" disabled={busy} className="rounded bg-harbour px-4 py-1.5 text-paper hover:bg-harbour-soft focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-harbour disabled:opacity-60">
+        <button
+          type="submit"
+          disabled={busy}
+          className="rounded bg-harbour px-4 py-1.5 text-paper hover:bg-harbour-soft focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-harbour disabled:opacity-60"
+        >
           {busy ? 'Working out…' : 'Work it out'}
         </button>
       </div>

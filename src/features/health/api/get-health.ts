@@ -13,7 +13,6 @@ export interface Health {
 
 export const getHealth = () => apiFetch<Health>('/health');
 
-export const healthQueryOptions = () =>
-  queryOptions({ queryKey: ['health'], queryFn: getHealth, refetchInterval: 15_000, retry: false });
+export const healthQueryOptions = () => queryOptions({ queryKey: ['health'], queryFn: getHealth, refetchInterval: 15_000, retry: false });
 
 export const useHealth = () => useQuery(healthQueryOptions());

@@ -12,9 +12,19 @@ export function AcceptInvitePage() {
   const preview = useInvitePreview(token, token.length > 0);
   const accept = useAcceptInvite();
   const location = useLocation();
-  if (!token) return <Notice tone="bad" title="This link has no invitation in it">Open the link from the e-mail again, whole.</Notice>;
+  if (!token)
+    return (
+      <Notice tone="bad" title="This link has no invitation in it">
+        Open the link from the e-mail again, whole.
+      </Notice>
+    );
   if (preview.isPending) return <div role="status" className="h-32 animate-pulse rounded bg-mist" aria-label="Loading invitation" />;
-  if (preview.isError) return <Notice tone="bad" title="This invitation cannot be used">{preview.error.message}</Notice>;
+  if (preview.isError)
+    return (
+      <Notice tone="bad" title="This invitation cannot be used">
+        {preview.error.message}
+      </Notice>
+    );
   const invite = preview.data;
   return (
     <div className="mx-auto max-w-lg py-6">
@@ -31,14 +41,17 @@ export function AcceptInvitePage() {
         ) : (
           <div className="space-y-3 text-sm">
             <p>
-              {invite.invitedBy ?? 'A project owner'} invited <strong>{invite.email}</strong> to{' '}
-              <strong>{invite.projectName}</strong> as <strong>{invite.role}</strong>.
+              {invite.invitedBy ?? 'A project owner'} invited <strong>{invite.email}</strong> to <strong>{invite.projectName}</strong> as{' '}
+              <strong>{invite.role}</strong>.
             </p>
             <p className="num text-xs text-ink-faint">Valid until {invite.expiresAt.slice(0, 16).replace('T', ' ')} UTC, once.</p>
             {!invite.signedIn && (
               <div className="space-y-2" data-testid="invite-signed-out">
                 <p>Sign in as {invite.email} to accept it; you come back here after signing in.</p>
-                <a href={signInHref(`${location.pathname}${location.search}`)} className="inline-block rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft">
+                <a
+                  href={signInHref(`${location.pathname}${location.search}`)}
+                  className="inline-block rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft"
+                >
                   Sign in to accept
                 </a>
               </div>
@@ -48,7 +61,11 @@ export function AcceptInvitePage() {
                 Sign out and sign in as {invite.email} to accept it.
               </Notice>
             )}
-            {accept.isError && <Notice tone="bad" title="Not accepted">{accept.error.message}</Notice>}
+            {accept.isError && (
+              <Notice tone="bad" title="Not accepted">
+                {accept.error.message}
+              </Notice>
+            )}
             {invite.signedIn && (
               <button
                 type="button"

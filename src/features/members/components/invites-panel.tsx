@@ -25,7 +25,15 @@ export function InvitesPanel({ projectId, canManage }: { projectId: number; canM
   function submit(event: FormEvent) {
     event.preventDefault();
     setSentTo(null);
-    send.mutate({ email, role }, { onSuccess: ({ invite }) => { setSentTo(invite.email); setEmail(''); } });
+    send.mutate(
+      { email, role },
+      {
+        onSuccess: ({ invite }) => {
+          setSentTo(invite.email);
+          setEmail('');
+        },
+      },
+    );
   }
 
   return (
@@ -71,7 +79,9 @@ export function InvitesPanel({ projectId, canManage }: { projectId: number; canM
       )}
       {send.isError && (
         <div className="mt-3">
-          <Notice tone="bad" title="Not sent">{send.error.message}</Notice>
+          <Notice tone="bad" title="Not sent">
+            {send.error.message}
+          </Notice>
         </div>
       )}
       {canManage && invites.data && invites.data.invites.length > 0 && (

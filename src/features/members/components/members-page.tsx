@@ -16,7 +16,12 @@ export function MembersPage() {
   const projectId = Number(useParams().projectId);
   const members = useMembers(projectId);
   if (members.isPending) return <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading members" />;
-  if (members.isError) return <Notice tone="bad" title="Members could not be loaded">{members.error.message}</Notice>;
+  if (members.isError)
+    return (
+      <Notice tone="bad" title="Members could not be loaded">
+        {members.error.message}
+      </Notice>
+    );
   const answer = members.data;
   return (
     <div className="space-y-6">
@@ -57,7 +62,9 @@ function MembersTable({ projectId, answer }: { projectId: number; answer: Member
     <Panel title={`Members · ${answer.members.length}`}>
       {error && (
         <div className="mb-3">
-          <Notice tone="bad" title="Not changed">{error.message}</Notice>
+          <Notice tone="bad" title="Not changed">
+            {error.message}
+          </Notice>
         </div>
       )}
       <table className="w-full text-sm">

@@ -15,7 +15,6 @@ export interface ProjectionFileListing {
   projection: { method: string; parentName: string } | null;
 }
 
-
 export interface ProjectionDetail {
   climateFile: ProjectionFileListing;
   /** null once the parent file has been deleted. */

@@ -12,7 +12,8 @@ export const runOnBoth = (projectId: number, scenarioId: number, parentFileId: n
 export function useRunOnBoth(projectId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (v: { scenarioId: number; parentFileId: number; projectionFileId: number }) => runOnBoth(projectId, v.scenarioId, v.parentFileId, v.projectionFileId),
+    mutationFn: (v: { scenarioId: number; parentFileId: number; projectionFileId: number }) =>
+      runOnBoth(projectId, v.scenarioId, v.parentFileId, v.projectionFileId),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'runs'] }),
   });
 }

@@ -32,7 +32,9 @@ export function FactorTableEditor({
     <table className="w-full max-w-3xl text-sm" data-testid="factor-table">
       <thead>
         <tr className="border-b border-rule text-xs text-ink-soft">
-          <th scope="col" className="py-1 text-left font-medium">Month</th>
+          <th scope="col" className="py-1 text-left font-medium">
+            Month
+          </th>
           {columns.map((c) => (
             <th key={c.key} scope="col" className={`px-2 text-right font-medium ${c.used ? '' : 'text-ink-faint'}`}>
               {c.label} <span className="font-normal">({c.unit})</span>
@@ -43,7 +45,9 @@ export function FactorTableEditor({
       <tbody>
         {MONTH_NAMES.map((month, m) => (
           <tr key={month} className="border-b border-rule/60">
-            <th scope="row" className="py-0.5 text-left font-normal">{month}</th>
+            <th scope="row" className="py-0.5 text-left font-normal">
+              {month}
+            </th>
             {columns.map((c) => {
               const error = (rowErrors as unknown as Record<number, Partial<Record<FactorKey, { message?: string }>>> | undefined)?.[m]?.[c.key]?.message;
               return (

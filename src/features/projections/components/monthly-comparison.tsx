@@ -61,12 +61,24 @@ export function MonthlyComparison({ today, projection }: { today: MonthlyClimate
       <div className="flex flex-wrap items-center justify-between gap-3">
         <SegmentedSwitch label="Quantity" options={views} value={view} onChange={setView} />
         <p className="flex gap-4 text-xs text-ink-soft" aria-hidden="true">
-          <span><span className="mr-1 inline-block w-5 border-t-2 border-dashed align-middle" style={{ borderColor: TODAY }} />Today</span>
-          <span><span className="mr-1 inline-block w-5 border-t-2 align-middle" style={{ borderColor: PROJECTION }} />Projection</span>
-          <span>band: {lowWord.toLowerCase()} to {highWord.toLowerCase()}</span>
+          <span>
+            <span className="mr-1 inline-block w-5 border-t-2 border-dashed align-middle" style={{ borderColor: TODAY }} />
+            Today
+          </span>
+          <span>
+            <span className="mr-1 inline-block w-5 border-t-2 align-middle" style={{ borderColor: PROJECTION }} />
+            Projection
+          </span>
+          <span>
+            band: {lowWord.toLowerCase()} to {highWord.toLowerCase()}
+          </span>
         </p>
       </div>
-      <PlotFigure render={render} label={`Monthly ${views.find((v) => v.value === view)!.label.toLowerCase()}, today and projection`} placeholderHeightPx={300} />
+      <PlotFigure
+        render={render}
+        label={`Monthly ${views.find((v) => v.value === view)!.label.toLowerCase()}, today and projection`}
+        placeholderHeightPx={300}
+      />
       <div className="overflow-x-auto">
         <table className="w-full table-fixed text-right text-sm" data-testid="projection-monthly-table">
           <colgroup>
@@ -78,23 +90,39 @@ export function MonthlyComparison({ today, projection }: { today: MonthlyClimate
           </caption>
           <thead>
             <tr className="text-xs text-ink-soft">
-              <th scope="col" rowSpan={2} className="py-1 text-left font-medium">Month</th>
-              <th scope="colgroup" colSpan={3} className="border-b border-rule px-2 text-center font-medium">Today</th>
-              <th scope="colgroup" colSpan={3} className="border-b border-rule px-2 text-center font-medium">Projection</th>
-              <th scope="col" rowSpan={2} className="px-2 font-medium">Change of mean</th>
+              <th scope="col" rowSpan={2} className="py-1 text-left font-medium">
+                Month
+              </th>
+              <th scope="colgroup" colSpan={3} className="border-b border-rule px-2 text-center font-medium">
+                Today
+              </th>
+              <th scope="colgroup" colSpan={3} className="border-b border-rule px-2 text-center font-medium">
+                Projection
+              </th>
+              <th scope="col" rowSpan={2} className="px-2 font-medium">
+                Change of mean
+              </th>
             </tr>
             <tr className="border-b border-rule text-xs text-ink-soft">
               {[0, 1].flatMap((i) => [
-                <th key={`${i}l`} scope="col" className="px-2 font-medium">{lowWord}</th>,
-                <th key={`${i}m`} scope="col" className="px-2 font-medium">Mean</th>,
-                <th key={`${i}h`} scope="col" className="px-2 font-medium">{highWord}</th>,
+                <th key={`${i}l`} scope="col" className="px-2 font-medium">
+                  {lowWord}
+                </th>,
+                <th key={`${i}m`} scope="col" className="px-2 font-medium">
+                  Mean
+                </th>,
+                <th key={`${i}h`} scope="col" className="px-2 font-medium">
+                  {highWord}
+                </th>,
               ])}
             </tr>
           </thead>
           <tbody>
             {a.map((r, m) => (
               <tr key={r.month} className={`border-b border-rule/60 ${r.mean === null ? 'text-ink-faint' : ''}`}>
-                <th scope="row" className="py-1 text-left font-normal">{monthNames[m]}</th>
+                <th scope="row" className="py-1 text-left font-normal">
+                  {monthNames[m]}
+                </th>
                 <td className="num px-2">{f(r.low)}</td>
                 <td className="num px-2">{f(r.mean)}</td>
                 <td className="num px-2">{f(r.high)}</td>
@@ -132,7 +160,15 @@ function chart(Plot: PlotModule, widthPx: number, a: Row[], b: Row[], view: View
     marginLeft: 52,
     marginBottom: 44,
     style: { fontSize: '12px', fontFamily: 'inherit' },
-    x: { domain: [1, 12], inset: 14, ticks: 12, tickFormat: (m: number) => monthNames[m - 1], label: 'Month (site standard time)', labelAnchor: 'center', labelOffset: 38 },
+    x: {
+      domain: [1, 12],
+      inset: 14,
+      ticks: 12,
+      tickFormat: (m: number) => monthNames[m - 1],
+      label: 'Month (site standard time)',
+      labelAnchor: 'center',
+      labelOffset: 38,
+    },
     y: { label: `${label} (${unitOf(kind, system)})`, grid: true },
     marks: [
       Plot.areaY(today, { x: 'month', y1: 'low', y2: 'high', fill: TODAY, fillOpacity: 0.12 }),
@@ -141,7 +177,14 @@ function chart(Plot: PlotModule, widthPx: number, a: Row[], b: Row[], view: View
       Plot.line(projected, { x: 'month', y: 'mean', stroke: PROJECTION, strokeWidth: 2.5 }),
       Plot.dot(today, { x: 'month', y: 'mean', fill: TODAY, r: 3 }),
       Plot.dot(projected, { x: 'month', y: 'mean', fill: PROJECTION, r: 3.5 }),
-      Plot.tip([...today, ...projected], Plot.pointerX({ x: 'month', y: 'mean', title: (d: { series: string; month: number; mean: number }) => `${d.series}, ${monthNames[d.month - 1]}: ${d.mean.toFixed(1)}` })),
+      Plot.tip(
+        [...today, ...projected],
+        Plot.pointerX({
+          x: 'month',
+          y: 'mean',
+          title: (d: { series: string; month: number; mean: number }) => `${d.series}, ${monthNames[d.month - 1]}: ${d.mean.toFixed(1)}`,
+        }),
+      ),
     ],
   });
 }

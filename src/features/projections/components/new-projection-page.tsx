@@ -37,20 +37,33 @@ export function NewProjectionPage() {
         </div>
         {parent && (
           <p className="text-sm text-ink-soft">
-            From <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">{parent.name}</Link> · {parent.siteName} ·{' '}
-            <span className="num">{parent.hours.toLocaleString('en')}</span> hours
+            From{' '}
+            <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">
+              {parent.name}
+            </Link>{' '}
+            · {parent.siteName} · <span className="num">{parent.hours.toLocaleString('en')}</span> hours
           </p>
         )}
       </header>
       {files.isPending && <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />}
-      {files.isError && <Notice tone="bad" title="The climate files could not be loaded">{files.error.message}</Notice>}
+      {files.isError && (
+        <Notice tone="bad" title="The climate files could not be loaded">
+          {files.error.message}
+        </Notice>
+      )}
       {files.data && !parent && (
         <Notice tone="warn" title="Choose the file to start from">
           Open a climate file of this project and press <em>Make a future-climate projection</em> there.{' '}
-          <Link to={`/projects/${projectId}`} className="text-harbour underline">Back to the project</Link>
+          <Link to={`/projects/${projectId}`} className="text-harbour underline">
+            Back to the project
+          </Link>
         </Notice>
       )}
-      {parent && !canEdit && <Notice tone="info" title="Only engineers and owners make projections">Ask an engineer of the project to make one.</Notice>}
+      {parent && !canEdit && (
+        <Notice tone="info" title="Only engineers and owners make projections">
+          Ask an engineer of the project to make one.
+        </Notice>
+      )}
       {parent && canEdit && <ProjectionForm projectId={projectId} parentId={parent.id} parentName={parent.name} />}
     </div>
   );
@@ -85,7 +98,10 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
     const months = getValues('factors.months').map((row) =>
       Object.fromEntries((Object.keys(row) as FactorKey[]).map((k) => [k, typedToSi(k, before, row[k])])),
     ) as unknown as Parameters<typeof siToTyped>[0];
-    setValue('factors.months', siToTyped(months, unitSystem).map((row, m) => keepUnreadable(row, getValues(`factors.months.${m}`), months[m])));
+    setValue(
+      'factors.months',
+      siToTyped(months, unitSystem).map((row, m) => keepUnreadable(row, getValues(`factors.months.${m}`), months[m])),
+    );
   }, [unitSystem, getValues, setValue]);
 
   async function loadCsv(file: File | undefined) {
@@ -122,14 +138,24 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
           actions={
             <label className="cursor-pointer rounded border border-rule bg-panel px-2.5 py-1 text-xs hover:bg-mist focus-within:outline-2 focus-within:outline-harbour">
               Load factors from CSV
-              <input type="file" accept=".csv,text/csv,text/plain" className="sr-only" onChange={(e) => void loadCsv(e.target.files?.[0])} data-testid="factors-csv" />
+              <input
+                type="file"
+                accept=".csv,text/csv,text/plain"
+                className="sr-only"
+                onChange={(e) => void loadCsv(e.target.files?.[0])}
+                data-testid="factors-csv"
+              />
             </label>
           }
         >
           {csvErrors && (
             <div className="mb-3">
               <Notice tone="bad" title="The factor table was not loaded">
-                <ul className="list-disc pl-5">{csvErrors.map((e) => <li key={e}>{e}</li>)}</ul>
+                <ul className="list-disc pl-5">
+                  {csvErrors.map((e) => (
+                    <li key={e}>{e}</li>
+                  ))}
+                </ul>
               </Notice>
             </div>
           )}
@@ -146,13 +172,22 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
           <Panel title="Method">
             <fieldset className="space-y-1 text-sm">
               <legend className="mb-1 text-xs font-medium text-ink-soft">Dry-bulb</legend>
-              <label className="flex gap-2"><input type="radio" value="shift-and-stretch" {...register('factors.dryBulbMethod')} /> Shift and stretch: the mean moves by ΔT mean, the daily range by ΔT max − ΔT min</label>
-              <label className="flex gap-2"><input type="radio" value="shift" {...register('factors.dryBulbMethod')} /> Shift: every hour moves by ΔT mean</label>
+              <label className="flex gap-2">
+                <input type="radio" value="shift-and-stretch" {...register('factors.dryBulbMethod')} /> Shift and stretch: the mean moves by ΔT mean, the daily
+                range by ΔT max − ΔT min
+              </label>
+              <label className="flex gap-2">
+                <input type="radio" value="shift" {...register('factors.dryBulbMethod')} /> Shift: every hour moves by ΔT mean
+              </label>
             </fieldset>
             <fieldset className="mt-3 space-y-1 text-sm">
               <legend className="mb-1 text-xs font-medium text-ink-soft">Humidity, through specific humidity q</legend>
-              <label className="flex gap-2"><input type="radio" value="stretch" {...register('factors.humidityMethod')} /> Stretch: q × (1 + change / 100)</label>
-              <label className="flex gap-2"><input type="radio" value="shift" {...register('factors.humidityMethod')} /> Shift: q + change</label>
+              <label className="flex gap-2">
+                <input type="radio" value="stretch" {...register('factors.humidityMethod')} /> Stretch: q × (1 + change / 100)
+              </label>
+              <label className="flex gap-2">
+                <input type="radio" value="shift" {...register('factors.humidityMethod')} /> Shift: q + change
+              </label>
             </fieldset>
             <p className="mt-3 text-xs text-ink-soft">Then back to relative humidity at the new dry-bulb and the hour's pressure, bounded to 0–100 %.</p>
           </Panel>
@@ -163,7 +198,11 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
             </label>
             <label className="mt-3 block text-sm">
               Where the factors come from <span className="text-ink-soft">(optional)</span>
-              <input {...register('source')} placeholder="e.g. a regional projection, period and scenario" className="mt-1 w-full rounded border border-rule bg-panel px-2 py-1" />
+              <input
+                {...register('source')}
+                placeholder="e.g. a regional projection, period and scenario"
+                className="mt-1 w-full rounded border border-rule bg-panel px-2 py-1"
+              />
             </label>
           </Panel>
         </div>
@@ -171,12 +210,24 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
 
       {problems.length > 0 && (
         <Notice tone="bad" title="Some factors need a look">
-          <ul className="list-disc pl-5">{problems.map((p) => <li key={p}>{p}</li>)}</ul>
+          <ul className="list-disc pl-5">
+            {problems.map((p) => (
+              <li key={p}>{p}</li>
+            ))}
+          </ul>
         </Notice>
       )}
       {serverError && (
         <Notice tone="bad" title={create.error ? 'The projection was not saved' : 'The preview could not be made'}>
-          {serverProblems ? <ul className="list-disc pl-5">{serverProblems.map((p) => <li key={p}>{inDisplayUnits(p, unitSystem)}</li>)}</ul> : serverError.message}
+          {serverProblems ? (
+            <ul className="list-disc pl-5">
+              {serverProblems.map((p) => (
+                <li key={p}>{inDisplayUnits(p, unitSystem)}</li>
+              ))}
+            </ul>
+          ) : (
+            serverError.message
+          )}
         </Notice>
       )}
 
@@ -189,7 +240,11 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
         >
           {preview.isPending ? 'Previewing…' : 'Preview monthly means'}
         </button>
-        <button type="submit" className="rounded bg-harbour px-3 py-1.5 text-sm text-paper hover:bg-harbour-soft disabled:opacity-60" disabled={create.isPending}>
+        <button
+          type="submit"
+          className="rounded bg-harbour px-3 py-1.5 text-sm text-paper hover:bg-harbour-soft disabled:opacity-60"
+          disabled={create.isPending}
+        >
           {create.isPending ? 'Saving…' : 'Save projection'}
         </button>
       </div>
@@ -210,7 +265,10 @@ function ProjectionForm({ projectId, parentId, parentName }: { projectId: number
 
 /** Keeps what the person typed when it could not be read, rather than replacing it with "NaN". */
 function keepUnreadable(converted: Record<FactorKey, string>, typed: Record<FactorKey, string>, si: Record<FactorKey, number>) {
-  return Object.fromEntries((Object.keys(converted) as FactorKey[]).map((k) => [k, Number.isNaN(si[k]) ? typed[k] : converted[k]])) as Record<FactorKey, string>;
+  return Object.fromEntries((Object.keys(converted) as FactorKey[]).map((k) => [k, Number.isNaN(si[k]) ? typed[k] : converted[k]])) as Record<
+    FactorKey,
+    string
+  >;
 }
 
 /** Every refused field in words naming its month, from the form's nested errors. */

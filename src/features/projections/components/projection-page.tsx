@@ -25,7 +25,12 @@ export function ProjectionPage() {
       <ProjectCrumb projectId={projectId} />
       {projection.isPending && <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the projection" />}
       {projection.isError && (
-        <Notice tone="bad" title={projection.error instanceof ApiError && projection.error.status === 404 ? 'This projection does not exist' : 'The projection could not be loaded'}>
+        <Notice
+          tone="bad"
+          title={
+            projection.error instanceof ApiError && projection.error.status === 404 ? 'This projection does not exist' : 'The projection could not be loaded'
+          }
+        >
           {projection.error.message} Go back to the project to see its climate files.
         </Notice>
       )}
@@ -42,14 +47,18 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
       <header className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <p className="text-sm text-ink-soft">
-            <span className="mr-2 rounded-sm border border-harbour/40 bg-mist px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wide text-harbour">Projection</span>
+            <span className="mr-2 rounded-sm border border-harbour/40 bg-mist px-1.5 py-0.5 text-xs font-semibold uppercase tracking-wide text-harbour">
+              Projection
+            </span>
             Future-climate file · {file.siteName}
           </p>
           <h1 className="mt-1 text-xl font-semibold">{file.name}</h1>
           <p className="text-sm text-ink-soft">
             Made from{' '}
             {parent ? (
-              <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">{parent.name}</Link>
+              <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">
+                {parent.name}
+              </Link>
             ) : (
               <span>{d.parent.name} (since deleted)</span>
             )}
@@ -58,8 +67,14 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
         </div>
         <div className="flex flex-wrap items-center gap-2 text-sm">
           <UnitsSwitch />
-          <Link to={`/projects/${projectId}/climate-files/${file.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">Open as a climate file</Link>
-          <a className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist" href={`/api/projects/${projectId}/climate-files/${file.id}/original`} download>
+          <Link to={`/projects/${projectId}/climate-files/${file.id}`} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">
+            Open as a climate file
+          </Link>
+          <a
+            className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist"
+            href={`/api/projects/${projectId}/climate-files/${file.id}/original`}
+            download
+          >
             Download CSV
           </a>
         </div>
@@ -68,10 +83,18 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
       <ProjectionCaution />
 
       <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-        <Fact label="Method" value="Morphing" note={`${d.method}: dry-bulb by ${d.factors.dryBulbMethod === 'shift' ? 'shift' : 'shift and stretch'}, humidity through ${d.humidityQuantity}`} />
+        <Fact
+          label="Method"
+          value="Morphing"
+          note={`${d.method}: dry-bulb by ${d.factors.dryBulbMethod === 'shift' ? 'shift' : 'shift and stretch'}, humidity through ${d.humidityQuantity}`}
+        />
         <Fact label="Hours" value={file.hours.toLocaleString('en')} note={`${file.missingHours.toLocaleString('en')} without data, as in today's file`} />
         <Fact label="Hours with RH held in 0–100 %" value={`${bounded.toLocaleString('en')} h`} note={rhBoundedNote(d.clampedHighHours, d.clampedLowHours)} />
-        <Fact label="Years" value={file.years.length > 1 ? `${file.years[0]}–${file.years[file.years.length - 1]}` : String(file.years[0] ?? '–')} note="today's calendar; the projection keeps its hours" />
+        <Fact
+          label="Years"
+          value={file.years.length > 1 ? `${file.years[0]}–${file.years[file.years.length - 1]}` : String(file.years[0] ?? '–')}
+          note="today's calendar; the projection keeps its hours"
+        />
       </dl>
 
       <Panel title="Today and the projection, month by month">

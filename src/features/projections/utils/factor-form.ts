@@ -39,8 +39,8 @@ export function typedToSi(key: FactorKey, system: UnitSystem, text: string): num
 
 /** SI factors to the text shown in the table (rounded to what a person would type). */
 export function siToTyped(months: MonthFactor[], system: UnitSystem): Record<FactorKey, string>[] {
-  return months.map((m) =>
-    Object.fromEntries(factorKeys.map((k) => [k, String(Math.round(convert[k].fromSi(m[k], system) * 1000) / 1000)])) as Record<FactorKey, string>,
+  return months.map(
+    (m) => Object.fromEntries(factorKeys.map((k) => [k, String(Math.round(convert[k].fromSi(m[k], system) * 1000) / 1000)])) as Record<FactorKey, string>,
   );
 }
 
@@ -71,8 +71,12 @@ export function factorFormSchema(system: UnitSystem) {
 export function inDisplayUnits(message: string, system: UnitSystem): string {
   if (system === 'SI') return message;
   return message
-    .replace(/(−?\d+(?:\.\d+)?) K\b/g, (_, v: string) => `${Math.round(toDisplay('temperatureDifference', 'IP', Number(v.replace('−', '-'))) * 10) / 10} °F`.replace('-', '−'))
-    .replace(/(−?\d+(?:\.\d+)?) g\/kg/g, (_, v: string) => `${Math.round(toDisplay('humidityRatio', 'IP', Number(v.replace('−', '-')) / 1000))} gr/lb`.replace('-', '−'))
+    .replace(/(−?\d+(?:\.\d+)?) K\b/g, (_, v: string) =>
+      `${Math.round(toDisplay('temperatureDifference', 'IP', Number(v.replace('−', '-'))) * 10) / 10} °F`.replace('-', '−'),
+    )
+    .replace(/(−?\d+(?:\.\d+)?) g\/kg/g, (_, v: string) =>
+      `${Math.round(toDisplay('humidityRatio', 'IP', Number(v.replace('−', '-')) / 1000))} gr/lb`.replace('-', '−'),
+    )
     .replace('(K)', '(°F)')
     .replace('(g/kg)', '(gr/lb)');
 }

@@ -7,8 +7,7 @@ export interface NewProject {
   description: string;
 }
 
-export const createProject = (input: NewProject) =>
-  apiFetch<{ project: ProjectSummary }>('/projects', { method: 'POST', body: JSON.stringify(input) });
+export const createProject = (input: NewProject) => apiFetch<{ project: ProjectSummary }>('/projects', { method: 'POST', body: JSON.stringify(input) });
 
 export function useCreateProject() {
   const queryClient = useQueryClient();

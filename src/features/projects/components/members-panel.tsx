@@ -17,7 +17,11 @@ export function MembersPanel({ projectId, members, error }: { projectId: number;
         ) : undefined
       }
     >
-      {error && <Notice tone="bad" title="Members could not be loaded">{error.message}</Notice>}
+      {error && (
+        <Notice tone="bad" title="Members could not be loaded">
+          {error.message}
+        </Notice>
+      )}
       {!members && !error && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading members" />}
       {members && (
         <ul className="divide-y divide-rule/60 text-sm">

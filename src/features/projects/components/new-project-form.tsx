@@ -45,13 +45,13 @@ export function NewProjectForm() {
         </span>
         <textarea {...form.register('description')} rows={2} className="rounded border border-rule bg-panel px-2 py-1.5" />
       </label>
-      {create.isError && <Notice tone="bad" title="The project was not created">{create.error.message}</Notice>}
+      {create.isError && (
+        <Notice tone="bad" title="The project was not created">
+          {create.error.message}
+        </Notice>
+      )}
       <div>
-        <button
-          type="submit"
-          disabled={create.isPending}
-          className="rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft disabled:opacity-60"
-        >
+        <button type="submit" disabled={create.isPending} className="rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft disabled:opacity-60">
           {create.isPending ? 'Starting…' : 'Start project'}
         </button>
         <span className="ml-3 text-xs text-ink-soft">You become its owner and can invite others.</span>

@@ -33,7 +33,11 @@ export function ProjectOverview({
   if (members.isError && members.error instanceof ApiError && (members.error.status === 403 || members.error.status === 404)) {
     return (
       <Notice tone="bad" title="This project is not open to you">
-        It does not exist, or you are not a member. <Link to="/" className="underline">Back to your projects</Link>.
+        It does not exist, or you are not a member.{' '}
+        <Link to="/" className="underline">
+          Back to your projects
+        </Link>
+        .
       </Notice>
     );
   }
@@ -46,7 +50,10 @@ export function ProjectOverview({
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <p className="text-sm text-ink-soft">
-            <Link to="/" className="hover:underline">Projects</Link> /
+            <Link to="/" className="hover:underline">
+              Projects
+            </Link>{' '}
+            /
           </p>
           <h1 className="text-xl font-semibold">{name ?? <span className="inline-block h-6 w-48 animate-pulse rounded bg-mist align-middle" />}</h1>
           {listed?.description && <p className="mt-1 max-w-3xl text-sm text-ink-soft">{listed.description}</p>}

@@ -79,19 +79,31 @@ export function RunsPanel({ projectId }: { projectId: number }) {
       }
     >
       {runs.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
-      {runs.isError && <Notice tone="bad" title="Runs could not be loaded">{runs.error.message}</Notice>}
-      {runs.data && recent.length === 0 && (
-        <p className="text-sm text-ink-soft">No runs yet. Open a scenario and run it on one or more climate files.</p>
+      {runs.isError && (
+        <Notice tone="bad" title="Runs could not be loaded">
+          {runs.error.message}
+        </Notice>
       )}
+      {runs.data && recent.length === 0 && <p className="text-sm text-ink-soft">No runs yet. Open a scenario and run it on one or more climate files.</p>}
       {recent.length > 0 && (
         <table className="w-full text-left text-sm" data-testid="runs-table">
           <thead>
             <tr className="border-b border-rule text-xs text-ink-soft">
-              <th scope="col" className="py-1 font-medium">Run</th>
-              <th scope="col" className="px-2 font-medium">Scenario</th>
-              <th scope="col" className="px-2 font-medium">Climate file</th>
-              <th scope="col" className="px-2 font-medium">Status</th>
-              <th scope="col" className="px-2 font-medium">Hours by mode</th>
+              <th scope="col" className="py-1 font-medium">
+                Run
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Scenario
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Climate file
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Status
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Hours by mode
+              </th>
             </tr>
           </thead>
           <tbody>

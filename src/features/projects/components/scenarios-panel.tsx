@@ -23,10 +23,15 @@ export function ScenariosPanel({ projectId, canEdit }: { projectId: number; canE
       }
     >
       {scenarios.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />}
-      {scenarios.isError && <Notice tone="bad" title="Scenarios could not be loaded">{scenarios.error.message}</Notice>}
+      {scenarios.isError && (
+        <Notice tone="bad" title="Scenarios could not be loaded">
+          {scenarios.error.message}
+        </Notice>
+      )}
       {scenarios.data && scenarios.data.scenarios.length === 0 && (
         <p className="text-sm text-ink-soft">
-          No scenarios yet. {canEdit ? 'Create one to set the cooling design, setpoints and envelope, then run it on a climate file.' : 'The project’s engineers create them.'}
+          No scenarios yet.{' '}
+          {canEdit ? 'Create one to set the cooling design, setpoints and envelope, then run it on a climate file.' : 'The project’s engineers create them.'}
         </p>
       )}
       {scenarios.data && scenarios.data.scenarios.length > 0 && (

@@ -19,7 +19,11 @@ export function SweepsPanel({ projectId, canEdit }: { projectId: number; canEdit
       }
     >
       {sweeps.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sweeps" />}
-      {sweeps.isError && <Notice tone="bad" title="Sweeps could not be loaded">{sweeps.error.message}</Notice>}
+      {sweeps.isError && (
+        <Notice tone="bad" title="Sweeps could not be loaded">
+          {sweeps.error.message}
+        </Notice>
+      )}
       {sweeps.data && sweeps.data.sweeps.length === 0 && (
         <p className="text-sm text-ink-soft">
           No sweeps yet.{' '}

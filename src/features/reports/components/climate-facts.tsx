@@ -16,7 +16,16 @@ export function SiteFacts({ run, unitSystem }: { run: ReportRun; unitSystem: Uni
       items={[
         ['Site', s.name],
         ['Elevation', <span className="num">{formatQuantity('elevation', unitSystem, s.elevationM)}</span>],
-        ['Location', s.latitude !== null && s.longitude !== null ? <span className="num">{s.latitude.toFixed(3)}°, {s.longitude.toFixed(3)}°</span> : 'not given'],
+        [
+          'Location',
+          s.latitude !== null && s.longitude !== null ? (
+            <span className="num">
+              {s.latitude.toFixed(3)}°, {s.longitude.toFixed(3)}°
+            </span>
+          ) : (
+            'not given'
+          ),
+        ],
         ['Time zone', `${s.timeZone}; months and hours of day on site standard time (${utcOffsetLabel(s.utcOffsetMinutes)})`],
       ]}
     />
@@ -30,13 +39,23 @@ export function ClimateFacts({ run }: { run: ReportRun }) {
   const items: Array<[string, React.ReactNode]> = [
     ['Climate file', c.name],
     ['Uploaded as', c.fileName ?? 'the file has since been deleted from the project'],
-    ['Period', <span className="num">{standardPeriod(c.firstHourMs, c.lastHourMs, run.site.utcOffsetMinutes)} ({c.hours.toLocaleString('en')} hours, site standard time)</span>],
+    [
+      'Period',
+      <span className="num">
+        {standardPeriod(c.firstHourMs, c.lastHourMs, run.site.utcOffsetMinutes)} ({c.hours.toLocaleString('en')} hours, site standard time)
+      </span>,
+    ],
     ['Humidity in the file', <span data-testid="humidity-reading">{humidityReadingWords(c.humidityOverIce)}</span>],
   ];
   if (v) {
     items.push(
       ['Calendar years', <span className="num">{run.results.hoursByYear.map((y) => y.year).join(', ')}</span>],
-      ['Completeness', <span className="num" data-testid="completeness">{v.completenessPct.toFixed(1)} % of hours have data</span>],
+      [
+        'Completeness',
+        <span className="num" data-testid="completeness">
+          {v.completenessPct.toFixed(1)} % of hours have data
+        </span>,
+      ],
       [
         'Hours',
         <span className="num">
@@ -46,11 +65,14 @@ export function ClimateFacts({ run }: { run: ReportRun }) {
       [
         'Gaps',
         v.gaps === 0 ? (
-          <span>none (gaps up to <span className="num">{v.maxGapFilledHours} h</span> would be filled by linear interpolation)</span>
+          <span>
+            none (gaps up to <span className="num">{v.maxGapFilledHours} h</span> would be filled by linear interpolation)
+          </span>
         ) : (
           <span>
-            <span className="num">{v.gaps.toLocaleString('en')}</span> gap{v.gaps === 1 ? '' : 's'}, the longest <span className="num">{v.longestGapHours} h</span>; gaps up to{' '}
-            <span className="num">{v.maxGapFilledHours} h</span> filled by linear interpolation, longer ones left as no data
+            <span className="num">{v.gaps.toLocaleString('en')}</span> gap{v.gaps === 1 ? '' : 's'}, the longest{' '}
+            <span className="num">{v.longestGapHours} h</span>; gaps up to <span className="num">{v.maxGapFilledHours} h</span> filled by linear interpolation,
+            longer ones left as no data
           </span>
         ),
       ],

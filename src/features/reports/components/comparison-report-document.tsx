@@ -50,7 +50,7 @@ function unsigned(unit: string, system: UnitSystem, value: number): string {
 
 function verdict(row: ComparisonRow, difference: number | null, shown: string): string {
   if (difference === null || !/[1-9]/.test(shown) || row.better === 'none') return 'text-ink-soft';
-  return (difference > 0) === (row.better === 'higher') ? 'text-signal-ok' : 'text-signal-bad';
+  return difference > 0 === (row.better === 'higher') ? 'text-signal-ok' : 'text-signal-bad';
 }
 
 const runLabel = (run: ReportRun, baselineId: number) => `Run ${run.id}${run.id === baselineId ? ' (baseline)' : ''}`;
@@ -64,7 +64,8 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
   // Runs on the same file show its validation once.
   const files = runs.filter((run, i) => runs.findIndex((other) => other.climate.sha256 === run.climate.sha256 && other.site.name === run.site.name) === i);
   // Runs with the same envelope as applied (limits and site derating) show it once.
-  const envelopeKey = (run: ReportRun) => JSON.stringify([run.envelope.label, run.scenario.envelope, run.results.envelope, hallAirSystem(run.scenario.system).supplyAirC]);
+  const envelopeKey = (run: ReportRun) =>
+    JSON.stringify([run.envelope.label, run.scenario.envelope, run.results.envelope, hallAirSystem(run.scenario.system).supplyAirC]);
   const envelopes = runs
     .filter((run, i) => runs.findIndex((other) => envelopeKey(other) === envelopeKey(run)) === i)
     .map((run) => ({ run, runIds: runs.filter((other) => envelopeKey(other) === envelopeKey(run)).map((r) => r.id) }));
@@ -87,8 +88,8 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
 
       <ReportSection id="job" title="1. The job">
         <p className="text-sm leading-relaxed">
-          How do these cooling designs compare in hours of free cooling, adiabatic assist and mechanical cooling, and in energy, water and peak
-          mechanical load, against the baseline run {baselineId}?
+          How do these cooling designs compare in hours of free cooling, adiabatic assist and mechanical cooling, and in energy, water and peak mechanical load,
+          against the baseline run {baselineId}?
         </p>
         <ReportTable
           text
@@ -114,7 +115,9 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
         <table className="w-full text-sm" data-testid="report-comparison">
           <thead>
             <tr className="border-b border-rule align-bottom text-xs text-ink-soft">
-              <th scope="col" className="py-1 pr-2 text-left font-medium">Figure</th>
+              <th scope="col" className="py-1 pr-2 text-left font-medium">
+                Figure
+              </th>
               {runs.map((run) => (
                 <th key={run.id} scope="col" className="px-2 py-1 text-right font-medium">
                   <span className="block text-ink">{runLabel(run, baselineId)}</span>
@@ -125,7 +128,9 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
           </thead>
           <tbody>
             <tr className="border-b border-rule/60">
-              <th scope="row" className="py-1 pr-2 text-left font-normal">Share of hours</th>
+              <th scope="row" className="py-1 pr-2 text-left font-normal">
+                Share of hours
+              </th>
               {runs.map((run) => (
                 <td key={run.id} className="px-2 py-1">
                   <ModeShareBar hours={run.results.hours} />
@@ -134,12 +139,16 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
             </tr>
             {rows.map((row) => (
               <tr key={row.key} className={`border-b border-rule/60 ${row.part ? 'text-xs text-ink-soft' : ''}`}>
-                <th scope="row" className={`py-0.5 pr-2 text-left font-normal ${row.part ? 'pl-5' : ''}`}>{row.figure}</th>
+                <th scope="row" className={`py-0.5 pr-2 text-left font-normal ${row.part ? 'pl-5' : ''}`}>
+                  {row.figure}
+                </th>
                 {row.cells.map((cell) => (
                   <td key={cell.runId} className="num whitespace-nowrap px-2 py-0.5 text-right">
                     {cell.value === null && row.notInOldRuns ? NOT_COUNTED : figure(row.unit, unitSystem, cell.value)}
                     {cell.difference !== null && (
-                      <span className={`ml-2 inline-block min-w-24 text-xs ${verdict(row, cell.difference, figure(row.unit, unitSystem, cell.difference, true))}`}>
+                      <span
+                        className={`ml-2 inline-block min-w-24 text-xs ${verdict(row, cell.difference, figure(row.unit, unitSystem, cell.difference, true))}`}
+                      >
                         {figure(row.unit, unitSystem, cell.difference, true)}
                       </span>
                     )}
@@ -149,14 +158,16 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
             ))}
           </tbody>
         </table>
-        {runs.filter((run) => !countsSubsets(run.results)).map((run) => (
-          <p key={run.id} className="text-xs text-ink-soft">
-            Run {run.id}: {notCountedShort(run.engineVersion)}
-          </p>
-        ))}
+        {runs
+          .filter((run) => !countsSubsets(run.results))
+          .map((run) => (
+            <p key={run.id} className="text-xs text-ink-soft">
+              Run {run.id}: {notCountedShort(run.engineVersion)}
+            </p>
+          ))}
         <p className="text-xs text-ink-soft">
-          Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours
-          of data so files of different lengths compare.
+          Differences are against the baseline; green where the figure improves, red where it worsens. Energy and water are scaled to 8,760 hours of data so
+          files of different lengths compare.
         </p>
       </ReportSection>
 
@@ -185,7 +196,12 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
         {files.map((run) => (
           <div key={run.id} className="space-y-2">
             <SubHeading>
-              {run.site.name} · {run.climate.name} (runs {runs.filter((r) => r.climate.sha256 === run.climate.sha256 && r.site.name === run.site.name).map((r) => r.id).join(', ')})
+              {run.site.name} · {run.climate.name} (runs{' '}
+              {runs
+                .filter((r) => r.climate.sha256 === run.climate.sha256 && r.site.name === run.site.name)
+                .map((r) => r.id)
+                .join(', ')}
+              )
             </SubHeading>
             <SiteFacts run={run} unitSystem={unitSystem} />
             <ClimateFacts run={run} />

@@ -10,7 +10,13 @@ import { ReportError, ReportLoading } from './report-states';
 import { ReportToolbar } from './report-toolbar';
 import { ShareLinksPanel } from './share-links-panel';
 
-const idList = (text: string | null) => (text ? text.split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0) : []);
+const idList = (text: string | null) =>
+  text
+    ? text
+        .split(',')
+        .map(Number)
+        .filter((n) => Number.isInteger(n) && n > 0)
+    : [];
 
 /** /projects/:projectId/compare/report?runs=1,2&baseline=1 — the printable comparison. */
 export function ComparisonReportPage() {

@@ -22,16 +22,23 @@ export function LoopsSection({ results, unitSystem }: { results: ScenarioResults
         <SubHeading>Liquid and air loops</SubHeading>
         {t && (
           <p className="text-sm">
-            Facility water {temperature(t.facilitySupplyC)} supply, {temperature(t.facilityReturnC)} return; coolant {temperature(t.coolantSupplyC)} after the CDU.
+            Facility water {temperature(t.facilitySupplyC)} supply, {temperature(t.facilityReturnC)} return; coolant {temperature(t.coolantSupplyC)} after the
+            CDU.
           </p>
         )}
         <LoopHoursTable hall={results.hours} liquid={liquid.hours} air={air.hours} liquidShare={liquid.share} />
         <table className="w-full text-sm">
           <thead>
             <tr className="border-b border-rule text-left text-xs text-ink-soft">
-              <th scope="col" className="py-1 font-normal">Per loop</th>
-              <th scope="col" className="py-1 text-right font-normal">Liquid loop</th>
-              <th scope="col" className="py-1 text-right font-normal">Air loop</th>
+              <th scope="col" className="py-1 font-normal">
+                Per loop
+              </th>
+              <th scope="col" className="py-1 text-right font-normal">
+                Liquid loop
+              </th>
+              <th scope="col" className="py-1 text-right font-normal">
+                Air loop
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -42,7 +49,9 @@ export function LoopsSection({ results, unitSystem }: { results: ScenarioResults
               ['Longest mechanical run', hours(liquid.longestMechanicalRunHours), hours(air.longestMechanicalRunHours)],
             ].map(([label, l, a]) => (
               <tr key={label} className="border-b border-rule/60 last:border-0">
-                <th scope="row" className="py-1 text-left font-normal">{label}</th>
+                <th scope="row" className="py-1 text-left font-normal">
+                  {label}
+                </th>
                 <td className="num py-1 text-right">{l}</td>
                 <td className="num py-1 text-right">{a}</td>
               </tr>
@@ -59,9 +68,7 @@ export function LoopsSection({ results, unitSystem }: { results: ScenarioResults
             {reuse.source === 'heat-pump' ? ` (heat pump, heating COP ${reuse.heatPumpCop!.toFixed(2)})` : ''}; {mwh(reuse.availableKwh)} available,{' '}
             {mwh(reuse.reusedKwh)} reused at a {Math.round(reuse.reusedShare * 100)} % take; ERF {ratio(reuse.erf)} (ISO/IEC 30134-6).
           </p>
-          <p className="num text-xs">
-            {reuse.availableKwhByMonth.map((kwh, m) => `${MONTH_SHORT[m]} ${(kwh / 1000).toFixed(0)}`).join(' · ')} MWh
-          </p>
+          <p className="num text-xs">{reuse.availableKwhByMonth.map((kwh, m) => `${MONTH_SHORT[m]} ${(kwh / 1000).toFixed(0)}`).join(' · ')} MWh</p>
           <p className="text-xs text-ink-soft">This is heat available at the return, not a contract with a heat customer.</p>
         </div>
       )}

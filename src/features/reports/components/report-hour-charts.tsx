@@ -30,7 +30,13 @@ export function ReportHourCharts({ run, downloadBase }: { run: ReportRun; downlo
   const chartHours = useMemo(
     () =>
       hours.data
-        ? { dryBulbC: hours.data.dryBulbC, humidityRatio: hours.data.humidityRatio, modes: hours.data.modes, mechanicalFraction: hours.data.mechanicalFraction, humidified: hours.data.humidified ?? undefined }
+        ? {
+            dryBulbC: hours.data.dryBulbC,
+            humidityRatio: hours.data.humidityRatio,
+            modes: hours.data.modes,
+            mechanicalFraction: hours.data.mechanicalFraction,
+            humidified: hours.data.humidified ?? undefined,
+          }
         : null,
     [hours.data],
   );
@@ -42,7 +48,8 @@ export function ReportHourCharts({ run, downloadBase }: { run: ReportRun; downlo
       </Notice>
     );
   }
-  if (!chartHours || !hours.data) return <div role="status" className="h-72 animate-pulse rounded bg-mist print:hidden" aria-label="Loading the hourly charts" />;
+  if (!chartHours || !hours.data)
+    return <div role="status" className="h-72 animate-pulse rounded bg-mist print:hidden" aria-label="Loading the hourly charts" />;
   return (
     <div className="space-y-6" data-testid="report-hour-charts">
       <div className="keep-together space-y-2">
@@ -52,7 +59,15 @@ export function ReportHourCharts({ run, downloadBase }: { run: ReportRun; downlo
           site's standard pressure. Ink: how many of the site's hours fall in each cell.
         </p>
         <div className="max-w-[45rem]">
-          <MoistAirChart pressurePa={standardPressurePa(r.site.elevationM)} hours={chartHours} design={design} envelopes={envelopes} markers={markers} projection="dry-bulb-humidity-ratio" compact />
+          <MoistAirChart
+            pressurePa={standardPressurePa(r.site.elevationM)}
+            hours={chartHours}
+            design={design}
+            envelopes={envelopes}
+            markers={markers}
+            projection="dry-bulb-humidity-ratio"
+            compact
+          />
         </div>
       </div>
       <div className="keep-together space-y-2">

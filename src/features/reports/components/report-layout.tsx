@@ -44,7 +44,13 @@ export function Facts({ items, testId }: { items: Array<[string, ReactNode]>; te
  * A figure-dense table that prints without splitting a row across pages: figures right-aligned and kept
  * on one line; `text` for a table of words (left-aligned, wrapping).
  */
-export function ReportTable({ caption, head, rows, testId, text = false }: {
+export function ReportTable({
+  caption,
+  head,
+  rows,
+  testId,
+  text = false,
+}: {
   caption?: string;
   head: ReactNode[];
   rows: Array<{ key: string; cells: ReactNode[]; strong?: boolean }>;

@@ -34,16 +34,35 @@ export function ModeHoursTable({ results, engineVersion }: { results: ScenarioRe
         rows={[
           ...modeRowSpecs.map((spec) => {
             const n = hoursOfSpec(h, spec);
-            if (spec.kind === 'mode') return { key: spec.mode, cells: [<><ModeSwatch mode={spec.mode} />{modeLabels[spec.mode]}</>, hoursText(n), share(n ?? 0, h.total)] };
+            if (spec.kind === 'mode')
+              return {
+                key: spec.mode,
+                cells: [
+                  <>
+                    <ModeSwatch mode={spec.mode} />
+                    {modeLabels[spec.mode]}
+                  </>,
+                  hoursText(n),
+                  share(n ?? 0, h.total),
+                ],
+              };
             return {
               key: spec.subset.key,
-              cells: [<span className="whitespace-nowrap pl-5 text-xs text-ink-soft">{spec.subset.rowLabel}</span>, <span className="text-xs text-ink-soft">{hoursText(n)}</span>, <span className="text-xs text-ink-soft">{n === null ? '' : share(n, h.total)}</span>],
+              cells: [
+                <span className="whitespace-nowrap pl-5 text-xs text-ink-soft">{spec.subset.rowLabel}</span>,
+                <span className="text-xs text-ink-soft">{hoursText(n)}</span>,
+                <span className="text-xs text-ink-soft">{n === null ? '' : share(n, h.total)}</span>,
+              ],
             };
           }),
           { key: 'all', strong: true, cells: ['All hours', h.total.toLocaleString('en'), '100.0 %'] },
         ]}
       />
-      {!countsSubsets(results) && <p className="text-xs text-ink-soft" data-testid="report-not-counted">{notCountedNote(engineVersion)}</p>}
+      {!countsSubsets(results) && (
+        <p className="text-xs text-ink-soft" data-testid="report-not-counted">
+          {notCountedNote(engineVersion)}
+        </p>
+      )}
     </div>
   );
 }
@@ -68,8 +87,19 @@ export function MonthlyTable({ byMonth, engineVersion }: { byMonth: (ModeHours &
       <ReportTable
         testId="report-monthly"
         caption="Hours per mode for each calendar month"
-        head={['Month', ...modeRowSpecs.map((spec) => <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>{modeColumnLabel(spec, modeLabels)}</span>), 'All (h)']}
-        rows={byMonth.map((m) => ({ key: String(m.month), cells: [monthShort[m.month - 1], ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(m, spec))), m.total.toLocaleString('en')] }))}
+        head={[
+          'Month',
+          ...modeRowSpecs.map((spec) => (
+            <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>
+              {modeColumnLabel(spec, modeLabels)}
+            </span>
+          )),
+          'All (h)',
+        ]}
+        rows={byMonth.map((m) => ({
+          key: String(m.month),
+          cells: [monthShort[m.month - 1], ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(m, spec))), m.total.toLocaleString('en')],
+        }))}
       />
       {byMonth.length > 0 && !countsSubsets({ hours: byMonth[0] }) && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
     </div>
@@ -86,7 +116,16 @@ export function YearTable({ years, unitSystem, engineVersion }: { years: YearRes
       <ReportTable
         testId="report-years"
         caption="Hours, cooling energy and water for each calendar year (site standard time)"
-        head={['Year', ...modeRowSpecs.map((spec) => <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>{modeColumnLabel(spec, modeLabels)}</span>), 'Cooling energy', 'Water']}
+        head={[
+          'Year',
+          ...modeRowSpecs.map((spec) => (
+            <span key={modeSpecKey(spec)} className={spec.kind === 'subset' ? 'italic' : ''}>
+              {modeColumnLabel(spec, modeLabels)}
+            </span>
+          )),
+          'Cooling energy',
+          'Water',
+        ]}
         rows={years.map((y) => ({
           key: String(y.year),
           cells: [
@@ -101,7 +140,11 @@ export function YearTable({ years, unitSystem, engineVersion }: { years: YearRes
         }))}
       />
       {years.length > 0 && !countsSubsets({ hours: years[0] }) && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
-      {note && <p className="text-xs text-ink-soft" data-testid="report-partial-years">{note}</p>}
+      {note && (
+        <p className="text-xs text-ink-soft" data-testid="report-partial-years">
+          {note}
+        </p>
+      )}
     </div>
   );
 }
@@ -131,7 +174,12 @@ export function EnergyTable({ results, system }: { results: ScenarioResults; sys
       />
       <Facts
         items={[
-          ['Partial PUE (cooling)', <span className="num" data-testid="report-ppue">{ratio(e.partialPue)}</span>],
+          [
+            'Partial PUE (cooling)',
+            <span className="num" data-testid="report-ppue">
+              {ratio(e.partialPue)}
+            </span>,
+          ],
           ['Peak mechanical load', <span className="num">{kw(results.peakMechanicalLoadKw)} thermal</span>],
           ['Peak compressor power', <span className="num">{kw(results.peakCompressorKw)} electric</span>],
         ]}
@@ -156,7 +204,12 @@ export function WaterTable({ results, unitSystem, engineVersion }: { results: Sc
         head={['Water', 'Over the file']}
         rows={[
           { key: 'evaporated', cells: ['Evaporated', water(w.evaporatedL)] },
-          ...parts.filter((p) => p.ofEvaporated).map((p) => ({ key: p.key, cells: [<span className="pl-5 text-xs text-ink-soft">{p.rowLabel}</span>, <span className="text-xs text-ink-soft">{part(p.key)}</span>] })),
+          ...parts
+            .filter((p) => p.ofEvaporated)
+            .map((p) => ({
+              key: p.key,
+              cells: [<span className="pl-5 text-xs text-ink-soft">{p.rowLabel}</span>, <span className="text-xs text-ink-soft">{part(p.key)}</span>],
+            })),
           { key: 'blowdown', cells: ['Blowdown', water(w.blowdownL)] },
           ...parts.filter((p) => !p.ofEvaporated).map((p) => ({ key: p.key, cells: [p.rowLabel, part(p.key)] })),
           { key: 'total', strong: true, cells: ['Total', water(w.totalL)] },
@@ -164,7 +217,16 @@ export function WaterTable({ results, unitSystem, engineVersion }: { results: Sc
         ]}
       />
       {!counted && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
-      <Facts items={[['WUE', <span className="num" data-testid="report-wue">{w.wueLPerKwh === null ? '–' : `${ratio(w.wueLPerKwh)} L/kWh`}</span>]]} />
+      <Facts
+        items={[
+          [
+            'WUE',
+            <span className="num" data-testid="report-wue">
+              {w.wueLPerKwh === null ? '–' : `${ratio(w.wueLPerKwh)} L/kWh`}
+            </span>,
+          ],
+        ]}
+      />
     </div>
   );
 }

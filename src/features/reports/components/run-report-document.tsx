@@ -42,7 +42,9 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
     <ReportSheet>
       <header className="space-y-1 border-b-2 border-harbour pb-3">
         <p className="text-xs uppercase tracking-wider text-ink-soft">Tramontane · cooling-hours report{linkTitle ? ` · ${linkTitle}` : ''}</p>
-        <h1 className="text-2xl font-semibold text-ink" data-testid="report-title">{runDisplayName(run.scenario.name, run.sweepPoint, unitSystem)}</h1>
+        <h1 className="text-2xl font-semibold text-ink" data-testid="report-title">
+          {runDisplayName(run.scenario.name, run.sweepPoint, unitSystem)}
+        </h1>
         <p className="text-sm text-ink-soft">
           {report.projectName} · run {run.id} · {run.site.name} · {run.climate.name} · generated {dateTime(report.generatedAt)} · units {unitSystem}
         </p>
@@ -53,15 +55,19 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
 
       <ReportSection id="job" title="1. The job">
         <p className="text-sm leading-relaxed">
-          From {standardDay(run.climate.firstHourMs, run.site.utcOffsetMinutes)} to {standardDay(run.climate.lastHourMs, run.site.utcOffsetMinutes)} (site standard time), for how many hours can the IT halls at {run.site.name}, cooled by{' '}
-          {systemInWords(run)}, run on outside air or water alone (free cooling), with evaporative help (adiabatic assist), or only with
-          compressors (mechanical), keeping the IT inlet within {run.envelope.label}; and what does that mean in energy, water and peak
-          mechanical load?
+          From {standardDay(run.climate.firstHourMs, run.site.utcOffsetMinutes)} to {standardDay(run.climate.lastHourMs, run.site.utcOffsetMinutes)} (site
+          standard time), for how many hours can the IT halls at {run.site.name}, cooled by {systemInWords(run)}, run on outside air or water alone (free
+          cooling), with evaporative help (adiabatic assist), or only with compressors (mechanical), keeping the IT inlet within {run.envelope.label}; and what
+          does that mean in energy, water and peak mechanical load?
         </p>
         <div className="grid grid-cols-3 gap-2 print:grid-cols-3" data-testid="report-headline">
           <Headline label="Free cooling" value={hours(h.free)} note={withPart(share(h.free, h.total), subsetHours(h, 'humidified'), 'with humidification')} />
           <Headline label="Adiabatic assist" value={hours(h.adiabatic)} note={share(h.adiabatic, h.total)} />
-          <Headline label="Mechanical" value={hours(h.mechanical)} note={withPart(share(h.mechanical, h.total), subsetHours(h, 'partialMechanical'), 'partly economised')} />
+          <Headline
+            label="Mechanical"
+            value={hours(h.mechanical)}
+            note={withPart(share(h.mechanical, h.total), subsetHours(h, 'partialMechanical'), 'partly economised')}
+          />
           <Headline label="Partial PUE (cooling)" value={ratio(r.energy.partialPue)} note="(IT + cooling) / IT energy" />
           <Headline label="WUE" value={r.water.wueLPerKwh === null ? '–' : `${ratio(r.water.wueLPerKwh)} L/kWh`} note="site water per IT energy" />
           <Headline label="Peak mechanical load" value={kw(r.peakMechanicalLoadKw)} note="thermal" />
@@ -88,8 +94,8 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
 
       <ReportSection id="inputs" title="4. Scenario inputs">
         <p className="text-xs text-ink-soft">
-          Exactly as run, each with its field name in the scenario JSON beneath. The run uses the site's elevation ({formatQuantity('elevation', unitSystem, run.site.elevationM)}) in
-          place of the scenario's elevationM.
+          Exactly as run, each with its field name in the scenario JSON beneath. The run uses the site's elevation (
+          {formatQuantity('elevation', unitSystem, run.site.elevationM)}) in place of the scenario's elevationM.
         </p>
         <InputsTable runs={[run]} unitSystem={unitSystem} />
       </ReportSection>

@@ -48,7 +48,17 @@ function LinkRow({ link, onRevoke, busy }: { link: ShareLink; onRevoke: (id: num
 }
 
 /** For owners: make a read-only link to this report, see the links made so far, revoke them. */
-export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { projectId: number; target: ShareLink['target']; runIds: number[]; defaultTitle: string }) {
+export function ShareLinksPanel({
+  projectId,
+  target,
+  runIds,
+  defaultTitle,
+}: {
+  projectId: number;
+  target: ShareLink['target'];
+  runIds: number[];
+  defaultTitle: string;
+}) {
   const links = useShareLinks(projectId, true);
   const create = useCreateShareLink(projectId);
   const revoke = useRevokeShareLink(projectId);
@@ -78,7 +88,13 @@ export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { p
           <div className="space-y-2">
             <label className="block">
               <span className="text-ink-soft">Title readers see</span>
-              <input value={title} onChange={(e) => setTitle(e.target.value)} required maxLength={200} className="mt-0.5 block w-full rounded border border-rule px-2 py-1" />
+              <input
+                value={title}
+                onChange={(e) => setTitle(e.target.value)}
+                required
+                maxLength={200}
+                className="mt-0.5 block w-full rounded border border-rule px-2 py-1"
+              />
             </label>
             <fieldset className="space-y-1">
               <legend className="text-ink-soft">Who can open it</legend>
@@ -113,18 +129,31 @@ export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { p
         </form>
         {create.isError && (
           <div className="mt-3">
-            <Notice tone="bad" title="The link was not made">{create.error.message}</Notice>
+            <Notice tone="bad" title="The link was not made">
+              {create.error.message}
+            </Notice>
           </div>
         )}
         {made && (
           <div className="mt-3 space-y-1 rounded border border-harbour-soft/40 bg-mist p-3 text-sm" data-testid="new-share-link">
             <p className="font-medium">Copy the link now: it is shown only this once (Tramontane keeps only a fingerprint of it).</p>
             <div className="flex gap-2">
-              <input readOnly value={made} aria-label="New share link" className="num w-full rounded border border-rule bg-panel px-2 py-1 text-xs" onFocus={(e) => e.target.select()} />
+              <input
+                readOnly
+                value={made}
+                aria-label="New share link"
+                className="num w-full rounded border border-rule bg-panel px-2 py-1 text-xs"
+                onFocus={(e) => e.target.select()}
+              />
               <button
                 type="button"
                 className="rounded border border-rule bg-panel px-2 py-1 text-xs hover:bg-paper"
-                onClick={() => void navigator.clipboard?.writeText(made).then(() => setCopied(true), () => setCopied(false))}
+                onClick={() =>
+                  void navigator.clipboard?.writeText(made).then(
+                    () => setCopied(true),
+                    () => setCopied(false),
+                  )
+                }
               >
                 {copied ? 'Copied' : 'Copy'}
               </button>
@@ -134,8 +163,14 @@ export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { p
         <div className="mt-4">
           <h3 className="text-sm font-semibold">Links to this report</h3>
           {links.isPending && <div role="status" className="mt-1 h-10 animate-pulse rounded bg-mist" aria-label="Loading links" />}
-          {links.isError && <Notice tone="bad" title="Links could not be loaded">{links.error.message}</Notice>}
-          {links.data && all.filter(sameReport).length === 0 && <p className="text-sm text-ink-soft">None yet. Create one above to hand this report to a reviewer.</p>}
+          {links.isError && (
+            <Notice tone="bad" title="Links could not be loaded">
+              {links.error.message}
+            </Notice>
+          )}
+          {links.data && all.filter(sameReport).length === 0 && (
+            <p className="text-sm text-ink-soft">None yet. Create one above to hand this report to a reviewer.</p>
+          )}
           <ul>
             {all.filter(sameReport).map((link) => (
               <LinkRow key={link.id} link={link} busy={revoke.isPending} onRevoke={(id) => revoke.mutate(id)} />
@@ -145,13 +180,19 @@ export function ShareLinksPanel({ projectId, target, runIds, defaultTitle }: { p
             <details className="mt-2 text-sm">
               <summary className="cursor-pointer text-ink-soft">Other report links in this project ({all.filter((l) => !sameReport(l)).length})</summary>
               <ul>
-                {all.filter((l) => !sameReport(l)).map((link) => (
-                  <LinkRow key={link.id} link={link} busy={revoke.isPending} onRevoke={(id) => revoke.mutate(id)} />
-                ))}
+                {all
+                  .filter((l) => !sameReport(l))
+                  .map((link) => (
+                    <LinkRow key={link.id} link={link} busy={revoke.isPending} onRevoke={(id) => revoke.mutate(id)} />
+                  ))}
               </ul>
             </details>
           )}
-          {revoke.isError && <Notice tone="bad" title="The link was not revoked">{revoke.error.message}</Notice>}
+          {revoke.isError && (
+            <Notice tone="bad" title="The link was not revoked">
+              {revoke.error.message}
+            </Notice>
+          )}
         </div>
       </Panel>
     </div>

@@ -60,7 +60,12 @@ function SharedReportPageBody() {
   const downloads =
     report.kind === 'run'
       ? runDownloadLinks(base, unitSystem)
-      : comparisonDownloadLinks(base, '', report.runs.map((r) => ({ runId: r.id, href: `${base}/hourly.csv?run=${r.id}` })), unitSystem);
+      : comparisonDownloadLinks(
+          base,
+          '',
+          report.runs.map((r) => ({ runId: r.id, href: `${base}/hourly.csv?run=${r.id}` })),
+          unitSystem,
+        );
   return (
     <div>
       <ReportToolbar downloads={downloads} />
@@ -68,7 +73,11 @@ function SharedReportPageBody() {
         A read-only report shared from Tramontane
         {link.publicUntil ? `, open to anyone with the link until ${link.publicUntil.slice(0, 10)}` : ' with the members of its project'}.
       </p>
-      {report.kind === 'run' ? <RunReportDocument report={report} linkTitle={link.title} downloadBase={base} /> : <ComparisonReportDocument report={report} linkTitle={link.title} />}
+      {report.kind === 'run' ? (
+        <RunReportDocument report={report} linkTitle={link.title} downloadBase={base} />
+      ) : (
+        <ComparisonReportDocument report={report} linkTitle={link.title} />
+      )}
     </div>
   );
 }

@@ -2,8 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { RunRecord } from './get-run';
 
-export const cancelRun = (projectId: number, runId: number) =>
-  apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST' });
+export const cancelRun = (projectId: number, runId: number) => apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST' });
 
 export function useCancelRun(projectId: number, runId: number) {
   const queryClient = useQueryClient();

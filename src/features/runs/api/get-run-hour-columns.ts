@@ -80,4 +80,5 @@ export const runHourColumnsQueryOptions = (projectId: number, runId: number) =>
     retry: false,
   });
 
-export const useRunHourColumns = (projectId: number, runId: number, ready: boolean) => useQuery({ ...runHourColumnsQueryOptions(projectId, runId), enabled: ready });
+export const useRunHourColumns = (projectId: number, runId: number, ready: boolean) =>
+  useQuery({ ...runHourColumnsQueryOptions(projectId, runId), enabled: ready });

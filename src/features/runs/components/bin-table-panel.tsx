@@ -67,7 +67,15 @@ export function BinTablePanel({ siTable, projectId, runId, fileStem }: { siTable
     const header = [`dry_bulb_from_${suffix}`, `dry_bulb_to_${suffix}`, ...modeKeys.map((k) => `${k}_h`), 'total_h', `mean_wet_bulb_${suffix}`];
     const lines = [csvRow(header)];
     for (const { original: b } of view.getRowModel().rows) {
-      lines.push(csvRow([edge(b.fromC), edge(b.toC), ...b.hours, b.total, Number.isFinite(b.meanWetBulbC) ? formatQuantity('temperature', unitSystem, b.meanWetBulbC, false) : '']));
+      lines.push(
+        csvRow([
+          edge(b.fromC),
+          edge(b.toC),
+          ...b.hours,
+          b.total,
+          Number.isFinite(b.meanWetBulbC) ? formatQuantity('temperature', unitSystem, b.meanWetBulbC, false) : '',
+        ]),
+      );
     }
     downloadCsv(`${fileStem}-bins.csv`, `${lines.join('\n')}\n`);
   }

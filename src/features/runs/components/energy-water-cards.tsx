@@ -53,18 +53,24 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
           <tbody>
             {rows.map((r) => (
               <tr key={r.label} className="border-b border-rule/60">
-                <th scope="row" className="py-1 text-left font-normal">{r.label}</th>
+                <th scope="row" className="py-1 text-left font-normal">
+                  {r.label}
+                </th>
                 <td className="num py-1 text-right">{mwh(r.kwh)}</td>
                 <td className="num w-20 py-1 text-right text-ink-soft">{e.coolingKwh > 0 ? ((100 * r.kwh) / e.coolingKwh).toFixed(1) : '0.0'} %</td>
               </tr>
             ))}
             <tr className="border-b border-rule/60">
-              <th scope="row" className="py-1 text-left font-medium">Cooling total</th>
+              <th scope="row" className="py-1 text-left font-medium">
+                Cooling total
+              </th>
               <td className="num py-1 text-right font-medium">{mwh(e.coolingKwh)}</td>
               <td />
             </tr>
             <tr>
-              <th scope="row" className="py-1 text-left font-normal text-ink-soft">IT equipment</th>
+              <th scope="row" className="py-1 text-left font-normal text-ink-soft">
+                IT equipment
+              </th>
               <td className="num py-1 text-right text-ink-soft">{mwh(e.itKwh)}</td>
               <td />
             </tr>
@@ -73,13 +79,24 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
       </Panel>
       <Panel title="Water">
         <div className="grid grid-cols-2 gap-2">
-          <Figure label="WUE" value={w.wueLPerKwh === null ? '–' : `${w.wueLPerKwh.toFixed(3)} L/kWh`} note="site water per IT energy (ISO/IEC 30134-9)" testId="wue" />
-          <Figure label="Water use" value={formatQuantity('water', unitSystem, w.totalL)} note={w.annualL !== null ? `${formatQuantity('water', unitSystem, w.annualL)} per 8,760 h` : undefined} />
+          <Figure
+            label="WUE"
+            value={w.wueLPerKwh === null ? '–' : `${w.wueLPerKwh.toFixed(3)} L/kWh`}
+            note="site water per IT energy (ISO/IEC 30134-9)"
+            testId="wue"
+          />
+          <Figure
+            label="Water use"
+            value={formatQuantity('water', unitSystem, w.totalL)}
+            note={w.annualL !== null ? `${formatQuantity('water', unitSystem, w.annualL)} per 8,760 h` : undefined}
+          />
         </div>
         <table className="mt-3 w-full text-sm">
           <tbody>
             <tr className="border-b border-rule/60">
-              <th scope="row" className="py-1 text-left font-normal">Evaporated</th>
+              <th scope="row" className="py-1 text-left font-normal">
+                Evaporated
+              </th>
               <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.evaporatedL)}</td>
             </tr>
             {parts
@@ -88,25 +105,33 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
                 const litres = waterPartL(w, p.key);
                 return (
                   <tr key={p.key} className="border-b border-rule/60 text-ink-soft" data-testid={`water-${p.key}`}>
-                    <th scope="row" className="py-0.5 pl-5 text-left text-xs font-normal">{p.rowLabel}</th>
+                    <th scope="row" className="py-0.5 pl-5 text-left text-xs font-normal">
+                      {p.rowLabel}
+                    </th>
                     <td className="num py-0.5 text-right text-xs">{litres === null ? NOT_COUNTED : formatQuantity('water', unitSystem, litres)}</td>
                   </tr>
                 );
               })}
             <tr className="border-b border-rule/60">
-              <th scope="row" className="py-1 text-left font-normal">Blowdown</th>
+              <th scope="row" className="py-1 text-left font-normal">
+                Blowdown
+              </th>
               <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.blowdownL)}</td>
             </tr>
             {parts
               .filter((p) => !p.ofEvaporated)
               .map((p) => (
                 <tr key={p.key} className="border-b border-rule/60" data-testid={`water-${p.key}`}>
-                  <th scope="row" className="py-1 text-left font-normal">{p.rowLabel}</th>
+                  <th scope="row" className="py-1 text-left font-normal">
+                    {p.rowLabel}
+                  </th>
                   <td className="num py-1 text-right">{formatQuantity('water', unitSystem, waterPartL(w, p.key))}</td>
                 </tr>
               ))}
             <tr>
-              <th scope="row" className="py-1 text-left font-medium">Total</th>
+              <th scope="row" className="py-1 text-left font-medium">
+                Total
+              </th>
               <td className="num py-1 text-right font-medium">{formatQuantity('water', unitSystem, w.totalL)}</td>
             </tr>
           </tbody>

@@ -28,25 +28,26 @@ export function HeatReuseCard({ reuse }: { reuse: HeatReuseResults }) {
           <Figure label="ERF (ISO/IEC 30134-6)" value={reuse.erf === null ? '–' : reuse.erf.toFixed(3)} testId="erf" note="reused / data-centre energy" />
         </div>
         {reuse.availableKwh > 0 && (
-        <table className="w-full text-sm">
-          <caption className="pb-1 text-left text-xs text-ink-soft">Heat available per month</caption>
-          <tbody>
-            {reuse.availableKwhByMonth.map((kwh, m) => (
-              <tr key={MONTH_SHORT[m]} className="border-b border-rule/60 last:border-0">
-                <th scope="row" className="w-12 py-0.5 text-left font-normal">{MONTH_SHORT[m]}</th>
-                <td className="py-0.5 pr-3">
-                  <div className="h-2 rounded-sm bg-harbour/70" style={{ width: `${(100 * kwh) / peak}%` }} aria-hidden />
-                </td>
-                <td className="num w-24 py-0.5 text-right">{mwh(kwh)}</td>
-                <td className="num w-20 py-0.5 text-right text-ink-soft">{reuse.availableHoursByMonth[m].toLocaleString('en')} h</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+          <table className="w-full text-sm">
+            <caption className="pb-1 text-left text-xs text-ink-soft">Heat available per month</caption>
+            <tbody>
+              {reuse.availableKwhByMonth.map((kwh, m) => (
+                <tr key={MONTH_SHORT[m]} className="border-b border-rule/60 last:border-0">
+                  <th scope="row" className="w-12 py-0.5 text-left font-normal">
+                    {MONTH_SHORT[m]}
+                  </th>
+                  <td className="py-0.5 pr-3">
+                    <div className="h-2 rounded-sm bg-harbour/70" style={{ width: `${(100 * kwh) / peak}%` }} aria-hidden />
+                  </td>
+                  <td className="num w-24 py-0.5 text-right">{mwh(kwh)}</td>
+                  <td className="num w-20 py-0.5 text-right text-ink-soft">{reuse.availableHoursByMonth[m].toLocaleString('en')} h</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
         )}
         <p className="text-xs text-ink-soft">
-          This is heat available at the loop’s return, not a contract with a heat customer: how much a network takes, and when, is for that
-          agreement to settle.
+          This is heat available at the loop’s return, not a contract with a heat customer: how much a network takes, and when, is for that agreement to settle.
         </p>
       </div>
     </Panel>

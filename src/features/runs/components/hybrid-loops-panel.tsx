@@ -33,33 +33,50 @@ export function HybridLoopsPanel({ results, zoneLabel, engineVersion }: { result
     { label: 'Fans', of: (l) => mwh(l.energy.fanKwh), whole: mwh(results.energy.fanKwh) },
     { label: 'Pumps', of: (l) => mwh(l.energy.pumpKwh), whole: mwh(results.energy.pumpKwh) },
     { label: 'Water', of: (l) => formatQuantity('water', unitSystem, l.water.totalL), whole: formatQuantity('water', unitSystem, results.water.totalL) },
-    { label: 'Peak mechanical load', of: (l) => `${Math.round(l.peakMechanicalLoadKw).toLocaleString('en')} kW`, whole: `${Math.round(results.peakMechanicalLoadKw).toLocaleString('en')} kW` },
+    {
+      label: 'Peak mechanical load',
+      of: (l) => `${Math.round(l.peakMechanicalLoadKw).toLocaleString('en')} kW`,
+      whole: `${Math.round(results.peakMechanicalLoadKw).toLocaleString('en')} kW`,
+    },
   ];
   return (
     <Panel title="Liquid and air loops">
       <div className="space-y-4" data-testid="hybrid-loops">
         {t && (
           <p className="text-sm text-ink-soft" data-testid="liquid-temperatures">
-            Facility water {temperature(t.facilitySupplyC)} supply{waterClass ? ` (${waterClass.label}, recalled from memory)` : ' (custom)'}, {temperature(t.facilityReturnC)} return;
-            coolant to the cold plates {temperature(t.coolantSupplyC)} after the CDU. Air loop: {kindWords[air.systemKind]}.
+            Facility water {temperature(t.facilitySupplyC)} supply{waterClass ? ` (${waterClass.label}, recalled from memory)` : ' (custom)'},{' '}
+            {temperature(t.facilityReturnC)} return; coolant to the cold plates {temperature(t.coolantSupplyC)} after the CDU. Air loop:{' '}
+            {kindWords[air.systemKind]}.
           </p>
         )}
         <div className="grid gap-4 xl:grid-cols-2">
           <LoopHoursTable hall={results.hours} liquid={liquid.hours} air={air.hours} liquidShare={liquid.share} />
           <table className="w-full text-sm" data-testid="loop-energy">
-            <caption className="pb-1 text-left text-xs text-ink-soft">Energy and water per loop over the hours with data; pPUE and WUE are over the whole hall</caption>
+            <caption className="pb-1 text-left text-xs text-ink-soft">
+              Energy and water per loop over the hours with data; pPUE and WUE are over the whole hall
+            </caption>
             <thead>
               <tr className="border-b border-rule text-left text-xs text-ink-soft">
-                <th scope="col" className="py-1 font-normal">Figure</th>
-                <th scope="col" className="py-1 text-right font-normal">Liquid loop</th>
-                <th scope="col" className="py-1 text-right font-normal">Air loop</th>
-                <th scope="col" className="py-1 text-right font-normal">Hall</th>
+                <th scope="col" className="py-1 font-normal">
+                  Figure
+                </th>
+                <th scope="col" className="py-1 text-right font-normal">
+                  Liquid loop
+                </th>
+                <th scope="col" className="py-1 text-right font-normal">
+                  Air loop
+                </th>
+                <th scope="col" className="py-1 text-right font-normal">
+                  Hall
+                </th>
               </tr>
             </thead>
             <tbody>
               {rows.map((r) => (
                 <tr key={r.label} className="border-b border-rule/60 last:border-0">
-                  <th scope="row" className="py-1 text-left font-normal">{r.label}</th>
+                  <th scope="row" className="py-1 text-left font-normal">
+                    {r.label}
+                  </th>
                   <td className="num py-1 text-right">{r.of(liquid)}</td>
                   <td className="num py-1 text-right">{r.of(air)}</td>
                   <td className="num py-1 text-right font-medium">{r.whole}</td>

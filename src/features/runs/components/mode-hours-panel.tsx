@@ -16,9 +16,15 @@ export function ModeHoursPanel({ results, engineVersion }: { results: ScenarioRe
       <table className="mt-3 w-full text-sm" data-testid="mode-hours">
         <thead>
           <tr className="border-b border-rule text-xs text-ink-soft">
-            <th scope="col" className="py-1 text-left font-medium">Mode</th>
-            <th scope="col" className="py-1 text-right font-medium">Hours</th>
-            <th scope="col" className="py-1 text-right font-medium">Share</th>
+            <th scope="col" className="py-1 text-left font-medium">
+              Mode
+            </th>
+            <th scope="col" className="py-1 text-right font-medium">
+              Hours
+            </th>
+            <th scope="col" className="py-1 text-right font-medium">
+              Share
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -48,7 +54,9 @@ export function ModeHoursPanel({ results, engineVersion }: { results: ScenarioRe
             );
           })}
           <tr>
-            <th scope="row" className="py-1 text-left font-medium">All hours</th>
+            <th scope="row" className="py-1 text-left font-medium">
+              All hours
+            </th>
             <td className="num py-1 text-right font-medium">{h.total.toLocaleString('en')}</td>
             <td className="num py-1 text-right text-ink-soft">100.0 %</td>
           </tr>

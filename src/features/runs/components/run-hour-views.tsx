@@ -30,10 +30,26 @@ function useOneAfterAnother(ready: boolean, count: number): number {
 }
 
 /** A panel's body, or its loading placeholder until the view's turn comes. */
-function HourView({ title, what, shown, heightPx, children }: { title: string; what: 'chart' | 'table'; shown: boolean; heightPx: number; children: () => ReactNode }) {
+function HourView({
+  title,
+  what,
+  shown,
+  heightPx,
+  children,
+}: {
+  title: string;
+  what: 'chart' | 'table';
+  shown: boolean;
+  heightPx: number;
+  children: () => ReactNode;
+}) {
   return (
     <Panel title={title}>
-      {shown ? children() : <div role="status" className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />}
+      {shown ? (
+        children()
+      ) : (
+        <div role="status" className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />
+      )}
     </Panel>
   );
 }
@@ -49,7 +65,16 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   const data = columns.data;
   const shown = useOneAfterAnother(!!data, VIEWS.length);
   const chartHours = useMemo(
-    () => (data ? { dryBulbC: data.dryBulbC, humidityRatio: data.humidityRatio, modes: data.modes, mechanicalFraction: data.mechanicalFraction, humidified: data.humidified } : null),
+    () =>
+      data
+        ? {
+            dryBulbC: data.dryBulbC,
+            humidityRatio: data.humidityRatio,
+            modes: data.modes,
+            mechanicalFraction: data.mechanicalFraction,
+            humidified: data.humidified,
+          }
+        : null,
     [data],
   );
   // The design as run: its limits derated as the run derated them, its fan heat as the run derived it.
@@ -72,8 +97,16 @@ export function RunHourViews({ run }: { run: RunRecord }) {
   );
   const markers = useMemo(
     () => [
-      { label: 'Supply setpoint at the upper moisture limit', dryBulbC: hallAirSystem(run.scenario.system).supplyAirC, humidityRatio: results.envelope.highHumidityRatioGPerKg / 1000 },
-      { label: 'Supply setpoint at the lower moisture limit', dryBulbC: hallAirSystem(run.scenario.system).supplyAirC, humidityRatio: results.envelope.lowHumidityRatioGPerKg / 1000 },
+      {
+        label: 'Supply setpoint at the upper moisture limit',
+        dryBulbC: hallAirSystem(run.scenario.system).supplyAirC,
+        humidityRatio: results.envelope.highHumidityRatioGPerKg / 1000,
+      },
+      {
+        label: 'Supply setpoint at the lower moisture limit',
+        dryBulbC: hallAirSystem(run.scenario.system).supplyAirC,
+        humidityRatio: results.envelope.lowHumidityRatioGPerKg / 1000,
+      },
     ],
     [run.scenario.system, results.envelope.highHumidityRatioGPerKg, results.envelope.lowHumidityRatioGPerKg],
   );
@@ -110,8 +143,8 @@ export function RunHourViews({ run }: { run: RunRecord }) {
         {() => (
           <>
             <p className="mb-2 text-xs text-ink-soft">
-              Where the scenario as run cools freely, with adiabatic assist or with compressors, at the site's pressure; the site's hours shaded over it; the envelope
-              as run and the supply setpoint between its moisture limits.
+              Where the scenario as run cools freely, with adiabatic assist or with compressors, at the site's pressure; the site's hours shaded over it; the
+              envelope as run and the supply setpoint between its moisture limits.
             </p>
             <MoistAirChart pressurePa={data!.sitePressurePa} hours={chartHours!} design={design} envelopes={envelopes} markers={markers} />
           </>

@@ -36,7 +36,8 @@ export function RunInputs({ run }: { run: RunRecord }) {
         </dd>
         <dt className="text-ink-soft">Hours</dt>
         <dd className="num">
-          {c.hours.toLocaleString('en')} ({standardPeriod(c.firstHourMs, c.lastHourMs, c.utcOffsetMinutes)}, site standard time {utcOffsetLabel(c.utcOffsetMinutes)})
+          {c.hours.toLocaleString('en')} ({standardPeriod(c.firstHourMs, c.lastHourMs, c.utcOffsetMinutes)}, site standard time{' '}
+          {utcOffsetLabel(c.utcOffsetMinutes)})
         </dd>
         <dt className="text-ink-soft">File checksum</dt>
         <dd className="num break-all">sha256 {c.sha256}</dd>

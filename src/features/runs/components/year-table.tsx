@@ -42,12 +42,18 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
         <table className="num w-full text-right text-xs" data-testid="year-table">
           <thead>
             <tr className="border-b border-rule text-ink-soft">
-              <th scope="col" className="py-1 text-left font-sans font-medium">Year</th>
+              <th scope="col" className="py-1 text-left font-sans font-medium">
+                Year
+              </th>
               {modeRowSpecs.map((spec) => (
                 <ModeColumnHead key={modeSpecKey(spec)} spec={spec} />
               ))}
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Cooling energy (MWh)</th>
-              <th scope="col" className="px-2 py-1 font-sans font-medium">Water ({unitOf('water', unitSystem)})</th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Cooling energy (MWh)
+              </th>
+              <th scope="col" className="px-2 py-1 font-sans font-medium">
+                Water ({unitOf('water', unitSystem)})
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -72,10 +78,19 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
             <tbody data-testid="year-statistics">
               {statRows.map((row) => (
                 <tr key={row.label} className="border-b border-rule/60 bg-mist/40">
-                  <th scope="row" className="py-0.5 text-left font-sans font-medium" title={row.title}>{row.label}</th>
+                  <th scope="row" className="py-0.5 text-left font-sans font-medium" title={row.title}>
+                    {row.label}
+                  </th>
                   {modeRowSpecs.map((spec) => {
                     const column = spec.kind === 'mode' ? statColumns.find((c) => c.metric === spec.mode) : undefined;
-                    return <StatCell key={modeSpecKey(spec)} point={column ? row.cell(stats.metrics![column.metric]) : null} format={column?.format} system={unitSystem} />;
+                    return (
+                      <StatCell
+                        key={modeSpecKey(spec)}
+                        point={column ? row.cell(stats.metrics![column.metric]) : null}
+                        format={column?.format}
+                        system={unitSystem}
+                      />
+                    );
                   })}
                   {statColumns.slice(3).map((c) => (
                     <StatCell key={c.metric} point={row.cell(stats.metrics![c.metric])} format={c.format} system={unitSystem} />
@@ -92,7 +107,15 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
   );
 }
 
-function StatCell({ point, format, system }: { point: YearPoint | { value: number | null } | null; format?: (v: number, s: UnitSystem) => string; system: UnitSystem }) {
+function StatCell({
+  point,
+  format,
+  system,
+}: {
+  point: YearPoint | { value: number | null } | null;
+  format?: (v: number, s: UnitSystem) => string;
+  system: UnitSystem;
+}) {
   if (!point || !format || point.value === null) return <td className="px-2 py-0.5 text-ink-soft">–</td>;
   return (
     <td className="px-2 py-0.5">
@@ -109,7 +132,13 @@ function YearNotes({ stats }: { stats: ReturnType<typeof yearStatistics> }) {
       {stats.worst && (
         <p>
           <span className="font-medium text-ink">Worst year: {stats.worst.year}</span>, {hoursText(stats.worst.mechanical)} mechanical hours
-          {stats.worst.tiedWith.length > 0 && <> (tied with {stats.worst.tiedWith.join(', ')} on mechanical hours; rule: {WORST_YEAR_TIE_RULE})</>}.
+          {stats.worst.tiedWith.length > 0 && (
+            <>
+              {' '}
+              (tied with {stats.worst.tiedWith.join(', ')} on mechanical hours; rule: {WORST_YEAR_TIE_RULE})
+            </>
+          )}
+          .
         </p>
       )}
       <p>{yearStatisticsNote(n)}</p>

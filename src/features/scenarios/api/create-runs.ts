@@ -20,8 +20,7 @@ export const createRuns = (projectId: number, scenarioIds: number[], climateFile
 export function useCreateRuns(projectId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ scenarioIds, climateFileIds }: { scenarioIds: number[]; climateFileIds: number[] }) =>
-      createRuns(projectId, scenarioIds, climateFileIds),
+    mutationFn: ({ scenarioIds, climateFileIds }: { scenarioIds: number[]; climateFileIds: number[] }) => createRuns(projectId, scenarioIds, climateFileIds),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'runs'] }),
   });
 }

@@ -21,8 +21,7 @@ export interface StoredScenario {
   migration: { migratedAt: string; changes: ScenarioChange[]; dismissedAt: string | null; dismissedBy: number | null } | null;
 }
 
-export const getScenario = (projectId: number, scenarioId: number) =>
-  apiFetch<{ scenario: StoredScenario }>(`/projects/${projectId}/scenarios/${scenarioId}`);
+export const getScenario = (projectId: number, scenarioId: number) => apiFetch<{ scenario: StoredScenario }>(`/projects/${projectId}/scenarios/${scenarioId}`);
 
 export const scenarioQueryOptions = (projectId: number, scenarioId: number) =>
   queryOptions({ queryKey: ['projects', projectId, 'scenarios', scenarioId], queryFn: () => getScenario(projectId, scenarioId) });

@@ -26,7 +26,13 @@ export function DesignChartPreview({ projectId, climateFileId, values }: { proje
   const hours = useMemo(() => {
     if (!series || !design) return null;
     const c = classifyHours(design.system, design.limits, series, design.plant);
-    return { dryBulbC: series.dryBulbC, humidityRatio: series.humidityRatio, modes: c.modes, mechanicalFraction: c.mechanicalFraction, humidified: c.humidified };
+    return {
+      dryBulbC: series.dryBulbC,
+      humidityRatio: series.humidityRatio,
+      modes: c.modes,
+      mechanicalFraction: c.mechanicalFraction,
+      humidified: c.humidified,
+    };
   }, [series, design]);
   const envelopes = useMemo(() => (design ? [{ label: 'Envelope', limits: design.limits }] : []), [design]);
   const markers = useMemo(() => [] as never[], []);
@@ -36,7 +42,15 @@ export function DesignChartPreview({ projectId, climateFileId, values }: { proje
   return (
     <div className={parsed.success ? '' : 'opacity-50'} data-testid="design-chart-preview" aria-disabled={!parsed.success || undefined}>
       {!parsed.success && <p className="mb-1 text-xs text-signal-warn">Showing the last valid design until every field is valid.</p>}
-      <MoistAirChart pressurePa={series.chartPressurePa} hours={hours} design={design} envelopes={envelopes} markers={markers} compact projection="dry-bulb-humidity-ratio" />
+      <MoistAirChart
+        pressurePa={series.chartPressurePa}
+        hours={hours}
+        design={design}
+        envelopes={envelopes}
+        markers={markers}
+        compact
+        projection="dry-bulb-humidity-ratio"
+      />
     </div>
   );
 }

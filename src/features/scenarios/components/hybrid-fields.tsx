@@ -68,10 +68,8 @@ export function HybridFields({
           </button>
         </div>
         <p className="text-xs text-ink-soft">
-          {chosenClass
-            ? `${chosenClass.label}: ${chosenClass.note} ${chosenClass.edition}.`
-            : 'A custom supply: the temperature you type.'}{' '}
-          The equipment maker’s coolant limits (flow, pressure, temperature, water chemistry) come before the class.
+          {chosenClass ? `${chosenClass.label}: ${chosenClass.note} ${chosenClass.edition}.` : 'A custom supply: the temperature you type.'} The equipment
+          maker’s coolant limits (flow, pressure, temperature, water chemistry) come before the class.
         </p>
         {outsideClass && (
           <p role="alert" className="text-xs font-medium text-signal-warn">
@@ -82,7 +80,11 @@ export function HybridFields({
           <label htmlFor="liquid-heat-rejection" className="text-sm">
             Heat rejection
           </label>
-          <select id="liquid-heat-rejection" {...register('system.liquid.heatRejection')} className="w-fit rounded border border-rule bg-panel px-2 py-1 text-sm">
+          <select
+            id="liquid-heat-rejection"
+            {...register('system.liquid.heatRejection')}
+            className="w-fit rounded border border-rule bg-panel px-2 py-1 text-sm"
+          >
             <option value="dry-cooler">Dry cooler (dry-bulb, optional spray)</option>
             <option value="cooling-tower">Cooling tower (wet-bulb)</option>
           </select>
@@ -136,7 +138,13 @@ export function HybridFields({
           Heat reuse
         </h3>
         <label className="flex items-center gap-2 text-sm">
-          <input type="checkbox" className="accent-harbour" disabled={disabled} checked={heatReuse !== undefined} onChange={(e) => set('system.heatReuse', e.target.checked ? newHeatReuse : undefined)} />
+          <input
+            type="checkbox"
+            className="accent-harbour"
+            disabled={disabled}
+            checked={heatReuse !== undefined}
+            onChange={(e) => set('system.heatReuse', e.target.checked ? newHeatReuse : undefined)}
+          />
           Estimate the heat available to a heating network from the facility-water return
         </label>
         {heatReuse && (
@@ -145,8 +153,8 @@ export function HybridFields({
               <QuantityField key={f.path} control={control} field={f} disabled={disabled} />
             ))}
             <label className="flex items-center gap-2 text-sm">
-              <input type="checkbox" className="accent-harbour" disabled={disabled} {...register('system.heatReuse.heatPump')} />
-              A heat pump lifts the return to that temperature when it is below it (COP from the lift model)
+              <input type="checkbox" className="accent-harbour" disabled={disabled} {...register('system.heatReuse.heatPump')} />A heat pump lifts the return to
+              that temperature when it is below it (COP from the lift model)
             </label>
             <p className="text-xs text-ink-soft">This is heat available at the return, not a contract with a heat customer.</p>
           </>

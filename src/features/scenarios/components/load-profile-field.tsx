@@ -5,14 +5,23 @@ import { EXAMPLE_LOAD_PROFILE_NAME, exampleLoadProfile, parseLoadProfileCsv } fr
 import { parseRampText, summariseLoadProfile } from '../utils/load-profile-summary';
 import { loadProfileKinds } from '../utils/scenario-fields';
 
-
 const pct = (f: number) => `${(100 * f).toLocaleString('en', { maximumFractionDigits: 1 })} %`;
 
 /**
  * The IT load through the year: constant, a ramp by year, or an hourly profile uploaded as CSV (checked line by line;
  * a bad file is reported and nothing is kept) or the built-in example shape. Shows the chosen profile in brief.
  */
-export function LoadProfileField({ value, onChange, disabled, itLoadKw }: { value: ItLoadProfile; onChange: (profile: ItLoadProfile) => void; disabled: boolean; itLoadKw: number }) {
+export function LoadProfileField({
+  value,
+  onChange,
+  disabled,
+  itLoadKw,
+}: {
+  value: ItLoadProfile;
+  onChange: (profile: ItLoadProfile) => void;
+  disabled: boolean;
+  itLoadKw: number;
+}) {
   const [rampText, setRampText] = useState(value.kind === 'yearly-ramp' ? value.fractions.join(', ') : '0.4, 0.6, 0.8, 1');
   const [rampErrors, setRampErrors] = useState<string[]>([]);
   const [fileReport, setFileReport] = useState<{ fileName: string; errors: string[] } | null>(null);
@@ -22,7 +31,8 @@ export function LoadProfileField({ value, onChange, disabled, itLoadKw }: { valu
     if (kind === 'constant') onChange({ kind: 'constant' });
     if (kind === 'yearly-ramp') applyRamp(rampText);
     // An hourly profile needs its values first: the example until a file is read.
-    if (kind === 'hourly-profile' && value.kind !== 'hourly-profile') onChange({ kind: 'hourly-profile', name: EXAMPLE_LOAD_PROFILE_NAME, fractions: exampleLoadProfile() });
+    if (kind === 'hourly-profile' && value.kind !== 'hourly-profile')
+      onChange({ kind: 'hourly-profile', name: EXAMPLE_LOAD_PROFILE_NAME, fractions: exampleLoadProfile() });
   }
 
   function applyRamp(text: string) {
@@ -49,7 +59,14 @@ export function LoadProfileField({ value, onChange, disabled, itLoadKw }: { valu
         <div className="mt-1 grid gap-2 md:grid-cols-3">
           {loadProfileKinds.map((k) => (
             <ChoiceCard key={k.kind} selected={value.kind === k.kind} label={k.label} help={k.help} compact>
-              <input type="radio" name="it-load-profile" checked={value.kind === k.kind} disabled={disabled} onChange={() => choose(k.kind)} className="mt-1 accent-harbour" />
+              <input
+                type="radio"
+                name="it-load-profile"
+                checked={value.kind === k.kind}
+                disabled={disabled}
+                onChange={() => choose(k.kind)}
+                className="mt-1 accent-harbour"
+              />
             </ChoiceCard>
           ))}
         </div>
@@ -68,7 +85,9 @@ export function LoadProfileField({ value, onChange, disabled, itLoadKw }: { valu
             aria-invalid={rampErrors.length ? true : undefined}
             className="num w-full max-w-xl rounded border border-rule bg-panel px-2 py-1 text-sm"
           />
-          <p className="text-xs text-ink-soft">For example 0.4, 0.6, 0.8, 1: the file's first calendar year at 40 % of design, and so on; the last value holds for later years.</p>
+          <p className="text-xs text-ink-soft">
+            For example 0.4, 0.6, 0.8, 1: the file's first calendar year at 40 % of design, and so on; the last value holds for later years.
+          </p>
           {rampErrors.length > 0 && <ErrorList title="This ramp was not taken" errors={rampErrors} />}
           {rampErrors.length === 0 && <RampBars fractions={value.fractions} itLoadKw={itLoadKw} />}
         </div>
@@ -134,7 +153,11 @@ function RampBars({ fractions, itLoadKw }: { fractions: number[]; itLoadKw: numb
     <div className="flex items-end gap-1 pt-1" aria-label="Load by year" role="img">
       {fractions.map((f, i) => (
         <div key={i} className="flex w-12 flex-col items-center text-[11px] text-ink-soft">
-          <div className="w-6 rounded-t-sm bg-harbour" style={{ height: `${Math.max(2, 48 * f)}px` }} title={`${pct(f)} · ${Math.round(f * itLoadKw).toLocaleString('en')} kW`} />
+          <div
+            className="w-6 rounded-t-sm bg-harbour"
+            style={{ height: `${Math.max(2, 48 * f)}px` }}
+            title={`${pct(f)} · ${Math.round(f * itLoadKw).toLocaleString('en')} kW`}
+          />
           <span className="num">{pct(f)}</span>
           <span>year {i + 1}</span>
         </div>
@@ -169,11 +192,22 @@ function ProfileSummary({ name, fractions, itLoadKw }: { name: string; fractions
         <dt className="text-ink-soft">Full-load hours</dt>
         <dd className="num">{Math.round(s.fullLoadHours).toLocaleString('en')} h of 8,760</dd>
       </dl>
-      <svg viewBox={`0 -6 ${widthPx} ${heightPx + 22}`} width={widthPx} height={heightPx + 22} className="mt-2 max-w-full text-ink-soft" role="img" aria-label="Average week of the profile">
+      <svg
+        viewBox={`0 -6 ${widthPx} ${heightPx + 22}`}
+        width={widthPx}
+        height={heightPx + 22}
+        className="mt-2 max-w-full text-ink-soft"
+        role="img"
+        aria-label="Average week of the profile"
+      >
         <line x1={leftPx} x2={widthPx} y1={y(1)} y2={y(1)} stroke="currentColor" strokeDasharray="3,3" opacity={0.5} />
         <line x1={leftPx} x2={widthPx} y1={heightPx} y2={heightPx} stroke="currentColor" opacity={0.5} />
-        <text x={leftPx - 4} y={y(1) + 3} fontSize={9} textAnchor="end" fill="currentColor">100 %</text>
-        <text x={leftPx - 4} y={heightPx + 3} fontSize={9} textAnchor="end" fill="currentColor">{pct(low)}</text>
+        <text x={leftPx - 4} y={y(1) + 3} fontSize={9} textAnchor="end" fill="currentColor">
+          100 %
+        </text>
+        <text x={leftPx - 4} y={heightPx + 3} fontSize={9} textAnchor="end" fill="currentColor">
+          {pct(low)}
+        </text>
         <polyline points={points} fill="none" stroke="currentColor" strokeWidth={1.5} className="text-harbour" />
         {[1, 2, 3, 4, 5, 6, 7].map((d) => (
           <text key={d} x={leftPx + ((d - 1) * plotPx) / 7 + 2} y={heightPx + 12} fontSize={9} fill="currentColor">

@@ -29,16 +29,24 @@ export function MigrationNotice({ projectId, stored, canDismiss }: { projectId: 
     <div data-testid="migration-notice">
       <Notice tone="warn" title="This scenario was brought up to date with the current engine">
         <p>
-          Some inputs it was saved with are no longer used. They were replaced as listed below on {migration.migratedAt.slice(0, 10)}. Check the new values before you
-          run it again; runs made before keep the inputs they were made with.
+          Some inputs it was saved with are no longer used. They were replaced as listed below on {migration.migratedAt.slice(0, 10)}. Check the new values
+          before you run it again; runs made before keep the inputs they were made with.
         </p>
         <table className="mt-2 w-full text-xs">
           <thead>
             <tr className="border-b border-rule text-left text-ink-soft">
-              <th scope="col" className="py-1 pr-3 font-medium">Input</th>
-              <th scope="col" className="py-1 pr-3 font-medium">Before</th>
-              <th scope="col" className="py-1 pr-3 font-medium">Now</th>
-              <th scope="col" className="py-1 font-medium">Why</th>
+              <th scope="col" className="py-1 pr-3 font-medium">
+                Input
+              </th>
+              <th scope="col" className="py-1 pr-3 font-medium">
+                Before
+              </th>
+              <th scope="col" className="py-1 pr-3 font-medium">
+                Now
+              </th>
+              <th scope="col" className="py-1 font-medium">
+                Why
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -57,7 +65,12 @@ export function MigrationNotice({ projectId, stored, canDismiss }: { projectId: 
         </table>
         <div className="mt-2 flex items-center gap-3">
           {canDismiss ? (
-            <button type="button" className="rounded border border-rule bg-panel px-3 py-1 text-xs text-ink hover:bg-mist disabled:opacity-60" disabled={dismiss.isPending} onClick={() => dismiss.mutate()}>
+            <button
+              type="button"
+              className="rounded border border-rule bg-panel px-3 py-1 text-xs text-ink hover:bg-mist disabled:opacity-60"
+              disabled={dismiss.isPending}
+              onClick={() => dismiss.mutate()}
+            >
               {dismiss.isPending ? 'Dismissing…' : 'I have checked these: dismiss'}
             </button>
           ) : (

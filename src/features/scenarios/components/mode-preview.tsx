@@ -68,7 +68,12 @@ export function ModePreview({
           </table>
           {preview.data?.loops && scenario?.system.kind === 'hybrid' && (
             <div className="mt-3">
-              <LoopHoursTable hall={hours} liquid={preview.data.loops.liquid.hours} air={preview.data.loops.air.hours} liquidShare={scenario.system.liquidShare} />
+              <LoopHoursTable
+                hall={hours}
+                liquid={preview.data.loops.liquid.hours}
+                air={preview.data.loops.air.hours}
+                liquidShare={scenario.system.liquidShare}
+              />
             </div>
           )}
           <p className="num mt-1 text-xs text-ink-soft">

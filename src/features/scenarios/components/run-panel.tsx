@@ -54,7 +54,12 @@ export function RunPanel({
               {climateFiles.map((f) => (
                 <li key={f.id}>
                   <label className="flex items-baseline gap-2">
-                    <input type="checkbox" className="accent-harbour" checked={chosenFiles.includes(f.id)} onChange={() => setFileIds(toggle(chosenFiles, f.id))} />
+                    <input
+                      type="checkbox"
+                      className="accent-harbour"
+                      checked={chosenFiles.includes(f.id)}
+                      onChange={() => setFileIds(toggle(chosenFiles, f.id))}
+                    />
                     <span>
                       {f.siteName} · {f.name} <span className="num text-xs text-ink-faint">{f.hours.toLocaleString('en')} h</span>
                     </span>
@@ -70,7 +75,12 @@ export function RunPanel({
                 {others.map((s) => (
                   <li key={s.id}>
                     <label className="flex items-baseline gap-2">
-                      <input type="checkbox" className="accent-harbour" checked={otherIds.includes(s.id)} onChange={() => setOtherIds(toggle(otherIds, s.id))} />
+                      <input
+                        type="checkbox"
+                        className="accent-harbour"
+                        checked={otherIds.includes(s.id)}
+                        onChange={() => setOtherIds(toggle(otherIds, s.id))}
+                      />
                       <span>{s.name}</span>
                     </label>
                   </li>

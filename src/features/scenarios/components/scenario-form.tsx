@@ -178,11 +178,17 @@ export function ScenarioForm({
                   Heat rejection
                 </label>
                 <div>
-                  <select id="heat-rejection" {...register('system.heatRejection')} className="rounded border border-rule bg-panel px-2 py-1 text-sm disabled:bg-paper disabled:text-ink-soft">
+                  <select
+                    id="heat-rejection"
+                    {...register('system.heatRejection')}
+                    className="rounded border border-rule bg-panel px-2 py-1 text-sm disabled:bg-paper disabled:text-ink-soft"
+                  >
                     <option value="cooling-tower">Cooling tower (wet-bulb)</option>
                     <option value="dry-cooler">Dry cooler (dry-bulb, optional spray)</option>
                   </select>
-                  <p className="text-xs text-ink-soft">A tower follows the wet-bulb; a dry cooler the dry-bulb, helped by the evaporative stage if it has one.</p>
+                  <p className="text-xs text-ink-soft">
+                    A tower follows the wet-bulb; a dry cooler the dry-bulb, helped by the evaporative stage if it has one.
+                  </p>
                 </div>
               </div>
             )}
@@ -252,7 +258,10 @@ export function ScenarioForm({
               beforeRun={() =>
                 new Promise<number | null>((resolve) => {
                   if (scenarioId !== null && !formState.isDirty) return resolve(scenarioId);
-                  void handleSubmit(async (s) => resolve(await persist(s)), () => resolve(null))();
+                  void handleSubmit(
+                    async (s) => resolve(await persist(s)),
+                    () => resolve(null),
+                  )();
                 })
               }
             />

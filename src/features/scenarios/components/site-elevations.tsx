@@ -25,14 +25,16 @@ export function SiteElevations({ projectId, climateFiles }: { projectId: number;
                   {f.siteName}
                 </Link>
                 : <span className="num">{formatQuantity('elevation', unitSystem, f.siteElevationM)}</span>{' '}
-                <span className="text-xs text-ink-soft">(standard pressure {formatQuantity('pressure', unitSystem, standardPressurePa(f.siteElevationM))})</span>
+                <span className="text-xs text-ink-soft">
+                  (standard pressure {formatQuantity('pressure', unitSystem, standardPressurePa(f.siteElevationM))})
+                </span>
               </li>
             ))}
           </ul>
         )}
         <p className="text-xs text-ink-soft">
-          A run takes the elevation of its climate file's site: it sets the air pressure where the file has none, and lowers the envelope's maximum on
-          high sites. Change it on the site's page.
+          A run takes the elevation of its climate file's site: it sets the air pressure where the file has none, and lowers the envelope's maximum on high
+          sites. Change it on the site's page.
         </p>
       </div>
     </div>

@@ -46,7 +46,10 @@ export function parseRampText(text: string): RampParse {
   const errors: string[] = [];
   const fractions: number[] = [];
   // "40 %" is one entry.
-  const cells = text.replace(/(\d)\s+%/g, '$1%').split(/[\s,;]+/).filter((e) => e !== '');
+  const cells = text
+    .replace(/(\d)\s+%/g, '$1%')
+    .split(/[\s,;]+/)
+    .filter((e) => e !== '');
   cells.forEach((cell, i) => {
     const percent = cell.endsWith('%');
     const value = Number(percent ? cell.slice(0, -1) : cell);

@@ -71,7 +71,13 @@ export const systemFields: NumericField[] = [
     'Outdoor air mass flow through the exchanger per unit of hall air flow; 1 is common practice. Less scavenger air lowers the exchanger’s effectiveness (and its fan power).',
     ['indirect-air'],
   ),
-  field(ws.chilledWaterSupplyC, 'system.chilledWaterSupplyC', 'temperature', 'Water temperature leaving the plant to the hall coils; must be below the supply air.', ['water-side']),
+  field(
+    ws.chilledWaterSupplyC,
+    'system.chilledWaterSupplyC',
+    'temperature',
+    'Water temperature leaving the plant to the hall coils; must be below the supply air.',
+    ['water-side'],
+  ),
   field(ws.chilledWaterDeltaTK, 'system.chilledWaterDeltaTK', 'temperatureDifference', 'Water temperature rise across the hall coils.', ['water-side']),
   field(
     ws.approachK,
@@ -127,7 +133,12 @@ export const energyFields: NumericField[] = [
   field(en.compressorMinTurndown, 'energy.compressorMinTurndown', 'shareAsPercent', 'Lowest compressor capacity before it cycles on and off.'),
   field(en.fanPowerFraction, 'energy.fanPowerFraction', 'shareAsPercent', 'Hall fan power at design flow as a share of IT load; the fan heat follows from it.'),
   field(en.fanMinSpeedFraction, 'energy.fanMinSpeedFraction', 'shareAsPercent', 'Fans follow the load down to this speed; power goes with speed cubed.'),
-  field(en.pumpPowerFraction, 'energy.pumpPowerFraction', 'shareAsPercent', 'Pump power at design flow as a share of IT load; water-side every hour, air-side only while the evaporative stage runs.'),
+  field(
+    en.pumpPowerFraction,
+    'energy.pumpPowerFraction',
+    'shareAsPercent',
+    'Pump power at design flow as a share of IT load; water-side every hour, air-side only while the evaporative stage runs.',
+  ),
   field(en.pumpMinSpeedFraction, 'energy.pumpMinSpeedFraction', 'shareAsPercent', 'Pumps follow the load down to this speed; power goes with speed cubed.'),
   field(
     en.heatRejectionFanFraction,
@@ -136,9 +147,23 @@ export const energyFields: NumericField[] = [
     'Share of IT load for dry-cooler or tower fans, or scavenger fans at a scavenger air ratio of 1, at design.',
     ['water-side', 'indirect-air'],
   ),
-  field(en.cyclesOfConcentration, 'energy.cyclesOfConcentration', 'ratio', 'Dissolved solids in the circulating water over the make-up water; sets the blowdown. 4 is common practice.'),
-  towerField(field(en.towerDriftFraction, 'energy.towerDriftFraction', 'shareAsPercent', 'Water carried off as droplets, as a share of the circulating water.')),
-  towerField(field(en.basinHeaterFraction, 'energy.basinHeaterFraction', 'shareAsPercent', 'Basin-heater power in freeze-protection hours, as a share of IT load; take it from the tower’s data.')),
+  field(
+    en.cyclesOfConcentration,
+    'energy.cyclesOfConcentration',
+    'ratio',
+    'Dissolved solids in the circulating water over the make-up water; sets the blowdown. 4 is common practice.',
+  ),
+  towerField(
+    field(en.towerDriftFraction, 'energy.towerDriftFraction', 'shareAsPercent', 'Water carried off as droplets, as a share of the circulating water.'),
+  ),
+  towerField(
+    field(
+      en.basinHeaterFraction,
+      'energy.basinHeaterFraction',
+      'shareAsPercent',
+      'Basin-heater power in freeze-protection hours, as a share of IT load; take it from the tower’s data.',
+    ),
+  ),
 ];
 
 export type LoadProfileKind = Scenario['energy']['itLoadProfile']['kind'];
@@ -146,7 +171,11 @@ export type LoadProfileKind = Scenario['energy']['itLoadProfile']['kind'];
 /** The ways of giving the IT load through the year, for the editor's choice. */
 export const loadProfileKinds: { kind: LoadProfileKind; label: string; help: string }[] = [
   { kind: 'constant', label: 'Constant', help: 'The design IT load every hour.' },
-  { kind: 'yearly-ramp', label: 'Ramp by year', help: 'A share of the design load for each year from the first year of the weather; the last share holds after.' },
+  {
+    kind: 'yearly-ramp',
+    label: 'Ramp by year',
+    help: 'A share of the design load for each year from the first year of the weather; the last share holds after.',
+  },
   { kind: 'hourly-profile', label: 'Hourly profile', help: 'A file of 8760 shares of the design load, one per hour of the year in local standard time.' },
 ];
 
@@ -160,24 +189,75 @@ export const systemKinds: { kind: SystemKind; label: string; help: string }[] = 
 const liq = liquidLoopSchema.shape as unknown as Record<string, AnyNumber>;
 
 /** A hybrid's share of IT heat to the liquid loop. */
-export const liquidShareField = field(hybridSchema.shape.liquidShare, 'system.liquidShare', 'shareAsPercent', 'Share of the IT heat the cold plates take to the facility water; the rest goes to the hall air.');
+export const liquidShareField = field(
+  hybridSchema.shape.liquidShare,
+  'system.liquidShare',
+  'shareAsPercent',
+  'Share of the IT heat the cold plates take to the facility water; the rest goes to the hall air.',
+);
 
 /** The liquid loop of a hybrid: facility water to the CDUs, cooled like a water-side system. */
 export const liquidFields: NumericField[] = [
-  field(liq.chilledWaterSupplyC, 'system.liquid.chilledWaterSupplyC', 'temperature', 'Facility-water supply to the CDUs; a class sets its highest value, the equipment maker may set less.'),
-  field(liq.chilledWaterDeltaTK, 'system.liquid.chilledWaterDeltaTK', 'temperatureDifference', 'Facility-water rise across the CDUs; the return (supply + rise) is what heat reuse can take.'),
-  field(liq.approachK, 'system.liquid.approachK', 'temperatureDifference', 'Between the outdoor dry-bulb (wet-bulb for a tower) and the facility-water supply.'),
-  field(liq.cduApproachK, 'system.liquid.cduApproachK', 'temperatureDifference', 'The CDU’s approach: coolant to the cold plates is the facility supply plus this.'),
-  field(liq.evaporativeEffectiveness, 'system.liquid.evaporativeEffectiveness', 'ratio', 'Spray or pads on the dry cooler; 0 means a dry cooler without wetting.'),
-  { ...field(liq.dryCoolerAirRiseK, 'system.liquid.dryCoolerAirRiseK', 'temperatureDifference', 'Air temperature rise through the dry cooler at design; 10 K is common practice.'), heatRejection: 'dry-cooler' },
-  { ...field(liq.freezeProtectionWetBulbC, 'system.liquid.freezeProtectionWetBulbC', 'temperature', 'Below this outdoor wet-bulb the tower runs dry with its basin heaters on.'), heatRejection: 'cooling-tower' },
+  field(
+    liq.chilledWaterSupplyC,
+    'system.liquid.chilledWaterSupplyC',
+    'temperature',
+    'Facility-water supply to the CDUs; a class sets its highest value, the equipment maker may set less.',
+  ),
+  field(
+    liq.chilledWaterDeltaTK,
+    'system.liquid.chilledWaterDeltaTK',
+    'temperatureDifference',
+    'Facility-water rise across the CDUs; the return (supply + rise) is what heat reuse can take.',
+  ),
+  field(
+    liq.approachK,
+    'system.liquid.approachK',
+    'temperatureDifference',
+    'Between the outdoor dry-bulb (wet-bulb for a tower) and the facility-water supply.',
+  ),
+  field(
+    liq.cduApproachK,
+    'system.liquid.cduApproachK',
+    'temperatureDifference',
+    'The CDU’s approach: coolant to the cold plates is the facility supply plus this.',
+  ),
+  field(
+    liq.evaporativeEffectiveness,
+    'system.liquid.evaporativeEffectiveness',
+    'ratio',
+    'Spray or pads on the dry cooler; 0 means a dry cooler without wetting.',
+  ),
+  {
+    ...field(
+      liq.dryCoolerAirRiseK,
+      'system.liquid.dryCoolerAirRiseK',
+      'temperatureDifference',
+      'Air temperature rise through the dry cooler at design; 10 K is common practice.',
+    ),
+    heatRejection: 'dry-cooler',
+  },
+  {
+    ...field(
+      liq.freezeProtectionWetBulbC,
+      'system.liquid.freezeProtectionWetBulbC',
+      'temperature',
+      'Below this outdoor wet-bulb the tower runs dry with its basin heaters on.',
+    ),
+    heatRejection: 'cooling-tower',
+  },
 ];
 
 const reuse = heatReuseSchema.shape as unknown as Record<string, AnyNumber>;
 
 export const heatReuseFields: NumericField[] = [
   field(reuse.thresholdC, 'system.heatReuse.thresholdC', 'temperature', 'Water temperature a heating network needs; 45 °C suits a low-temperature network.'),
-  field(reuse.reusedShare, 'system.heatReuse.reusedShare', 'shareAsPercent', 'How much of the available heat the network takes (your assumption, not a contract).'),
+  field(
+    reuse.reusedShare,
+    'system.heatReuse.reusedShare',
+    'shareAsPercent',
+    'How much of the available heat the network takes (your assumption, not a contract).',
+  ),
 ];
 
 /** A field of the single systems moved under a hybrid's air loop ("system.supplyAirC" → "system.air.supplyAirC"). */

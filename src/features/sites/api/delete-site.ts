@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 
-export const deleteSite = (projectId: number, siteId: number) =>
-  apiFetch<void>(`/projects/${projectId}/sites/${siteId}`, { method: 'DELETE' });
+export const deleteSite = (projectId: number, siteId: number) => apiFetch<void>(`/projects/${projectId}/sites/${siteId}`, { method: 'DELETE' });
 
 export function useDeleteSite(projectId: number) {
   const queryClient = useQueryClient();

@@ -16,7 +16,6 @@ export const sitesQueryKey = (projectId: number) => ['projects', projectId, 'sit
 
 export const getSites = (projectId: number) => apiFetch<{ sites: Site[] }>(`/projects/${projectId}/sites`);
 
-export const sitesQueryOptions = (projectId: number) =>
-  queryOptions({ queryKey: sitesQueryKey(projectId), queryFn: () => getSites(projectId), retry: false });
+export const sitesQueryOptions = (projectId: number) => queryOptions({ queryKey: sitesQueryKey(projectId), queryFn: () => getSites(projectId), retry: false });
 
 export const useSites = (projectId: number) => useQuery(sitesQueryOptions(projectId));

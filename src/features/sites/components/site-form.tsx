@@ -17,7 +17,13 @@ const optionalCoordinate = (label: string, limit: number) =>
     .string()
     .trim()
     .transform((s) => (s === '' ? null : Number(s.replace(',', '.'))))
-    .pipe(z.number({ error: `${label} must be a number` }).min(-limit, `${label} must be between −${limit} and ${limit}`).max(limit, `${label} must be between −${limit} and ${limit}`).nullable());
+    .pipe(
+      z
+        .number({ error: `${label} must be a number` })
+        .min(-limit, `${label} must be between −${limit} and ${limit}`)
+        .max(limit, `${label} must be between −${limit} and ${limit}`)
+        .nullable(),
+    );
 
 /** The site form in the person's units; on submit the elevation goes back to metres and the shared schema checks the whole. */
 function siteFormSchema(system: UnitSystem) {
@@ -116,7 +122,9 @@ export function SiteForm({
 
   const field = (name: 'name' | 'latitude' | 'longitude' | 'elevation' | 'timeZone', label: string, help: string, input: React.ReactNode) => (
     <div className="space-y-1">
-      <label htmlFor={`${ids}-${name}`} className="block text-sm font-medium">{label}</label>
+      <label htmlFor={`${ids}-${name}`} className="block text-sm font-medium">
+        {label}
+      </label>
       {input}
       <p id={`${ids}-${name}-help`} className={`text-xs ${errors[name] ? 'text-signal-bad' : 'text-ink-soft'}`}>
         {errors[name]?.message ?? help}
@@ -133,7 +141,9 @@ export function SiteForm({
     <form onSubmit={submit} className="space-y-3" noValidate aria-label={site ? `Edit ${site.name}` : 'New site'}>
       {!site && !initial && (
         <div className="text-sm">
-          <label htmlFor={`${ids}-header-file`} className="block font-medium">Fill from a weather file's header (optional)</label>
+          <label htmlFor={`${ids}-header-file`} className="block font-medium">
+            Fill from a weather file's header (optional)
+          </label>
           <input
             id={`${ids}-header-file`}
             type="file"
@@ -143,7 +153,9 @@ export function SiteForm({
               if (chosen) void fillFromFile(chosen);
             }}
           />
-          <p className="text-xs text-ink-soft" role="status">{fillNote ?? 'EPW, header-block CSV or a CSV with a station line: name, position, elevation and UTC offset.'}</p>
+          <p className="text-xs text-ink-soft" role="status">
+            {fillNote ?? 'EPW, header-block CSV or a CSV with a station line: name, position, elevation and UTC offset.'}
+          </p>
         </div>
       )}
       <div className="grid gap-3 sm:grid-cols-2">
@@ -154,8 +166,18 @@ export function SiteForm({
           `Sets the pressure when a file has none; ${formatQuantity('elevation', unitSystem, 0)} is sea level.`,
           <input {...aria('elevation')} type="number" step="any" className={`num ${inputClass}`} {...form.register('elevation', { valueAsNumber: true })} />,
         )}
-        {field('latitude', 'Latitude (°, optional)', 'North positive, e.g. 52.37.', <input {...aria('latitude')} inputMode="decimal" className={`num ${inputClass}`} {...form.register('latitude')} />)}
-        {field('longitude', 'Longitude (°, optional)', 'East positive, e.g. −6.26.', <input {...aria('longitude')} inputMode="decimal" className={`num ${inputClass}`} {...form.register('longitude')} />)}
+        {field(
+          'latitude',
+          'Latitude (°, optional)',
+          'North positive, e.g. 52.37.',
+          <input {...aria('latitude')} inputMode="decimal" className={`num ${inputClass}`} {...form.register('latitude')} />,
+        )}
+        {field(
+          'longitude',
+          'Longitude (°, optional)',
+          'East positive, e.g. −6.26.',
+          <input {...aria('longitude')} inputMode="decimal" className={`num ${inputClass}`} {...form.register('longitude')} />,
+        )}
         {field(
           'timeZone',
           'Time zone',
@@ -170,9 +192,17 @@ export function SiteForm({
           </>,
         )}
       </div>
-      {errors.root && <p role="alert" className="text-sm text-signal-bad">{errors.root.message}</p>}
+      {errors.root && (
+        <p role="alert" className="text-sm text-signal-bad">
+          {errors.root.message}
+        </p>
+      )}
       <div className="flex gap-2">
-        <button type="submit" disabled={form.formState.isSubmitting} className="rounded bg-harbour px-4 py-2 text-sm text-paper hover:bg-harbour-soft disabled:opacity-50">
+        <button
+          type="submit"
+          disabled={form.formState.isSubmitting}
+          className="rounded bg-harbour px-4 py-2 text-sm text-paper hover:bg-harbour-soft disabled:opacity-50"
+        >
           {site ? 'Save changes' : 'Save site'}
         </button>
         {onCancel && (

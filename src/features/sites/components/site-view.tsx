@@ -30,7 +30,12 @@ export function SiteView({
   const sites = useSites(projectId);
   const site = sites.data?.sites.find((s) => s.id === siteId);
   if (sites.isPending) return <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading the site" />;
-  if (sites.isError) return <Notice tone="bad" title="The site could not be loaded">{sites.error.message}</Notice>;
+  if (sites.isError)
+    return (
+      <Notice tone="bad" title="The site could not be loaded">
+        {sites.error.message}
+      </Notice>
+    );
   if (!site) {
     return (
       <Notice tone="bad" title="This site does not exist">
@@ -41,7 +46,19 @@ export function SiteView({
   return <Loaded projectId={projectId} site={site} canEdit={canEdit} climateFiles={climateFiles} onDeleted={onDeleted} />;
 }
 
-function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { projectId: number; site: Site; canEdit: boolean; climateFiles: ReactNode; onDeleted: () => void }) {
+function Loaded({
+  projectId,
+  site,
+  canEdit,
+  climateFiles,
+  onDeleted,
+}: {
+  projectId: number;
+  site: Site;
+  canEdit: boolean;
+  climateFiles: ReactNode;
+  onDeleted: () => void;
+}) {
   const { unitSystem } = useUnitSystem();
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
@@ -58,7 +75,11 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
   const remove = useDeleteSite(projectId);
   const facts: Array<[string, string, string?]> = [
     ['Elevation', formatQuantity('elevation', unitSystem, site.elevationM)],
-    ['Standard pressure', formatQuantity('pressure', unitSystem, standardPressurePa(site.elevationM)), 'used when a file has no pressure (standard atmosphere)'],
+    [
+      'Standard pressure',
+      formatQuantity('pressure', unitSystem, standardPressurePa(site.elevationM)),
+      'used when a file has no pressure (standard atmosphere)',
+    ],
     ['Latitude, longitude', site.latitude === null && site.longitude === null ? 'not given' : `${degrees(site.latitude)}, ${degrees(site.longitude)}`],
     ['Time zone', site.timeZone, `standard time ${utcOffsetLabel(standardOffsetMinutes(site.timeZone))}; reads local timestamps in files`],
   ];
@@ -75,7 +96,11 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
               Edit site
             </button>
             {!confirming && (
-              <button type="button" onClick={() => setConfirming(true)} className="rounded border border-rule bg-panel px-3 py-1.5 text-signal-bad hover:bg-[#fbeceb]">
+              <button
+                type="button"
+                onClick={() => setConfirming(true)}
+                className="rounded border border-rule bg-panel px-3 py-1.5 text-signal-bad hover:bg-[#fbeceb]"
+              >
                 Delete…
               </button>
             )}
@@ -86,11 +111,20 @@ function Loaded({ projectId, site, canEdit, climateFiles, onDeleted }: { project
         {closed?.saved ? 'Site saved.' : ''}
       </p>
       {confirming && (
-        <div role="alertdialog" aria-label="Delete site" className="flex flex-wrap items-center gap-2 rounded border border-signal-bad/40 bg-[#fbeceb] px-3 py-2 text-sm">
+        <div
+          role="alertdialog"
+          aria-label="Delete site"
+          className="flex flex-wrap items-center gap-2 rounded border border-signal-bad/40 bg-[#fbeceb] px-3 py-2 text-sm"
+        >
           <span>
             Delete <strong>{site.name}</strong> with all its climate files? Runs already made keep their results.
           </span>
-          <button type="button" disabled={remove.isPending} onClick={() => remove.mutateAsync(site.id).then(onDeleted, () => undefined)} className="rounded bg-signal-bad px-3 py-1 text-paper disabled:opacity-50">
+          <button
+            type="button"
+            disabled={remove.isPending}
+            onClick={() => remove.mutateAsync(site.id).then(onDeleted, () => undefined)}
+            className="rounded bg-signal-bad px-3 py-1 text-paper disabled:opacity-50"
+          >
             Delete site and files
           </button>
           <button type="button" onClick={() => setConfirming(false)} className="rounded border border-rule bg-panel px-3 py-1">

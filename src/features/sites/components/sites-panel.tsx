@@ -37,40 +37,53 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
         {closed?.saved ? `Site “${closed.saved}” added.` : ''}
       </p>
       {sites.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
-      {sites.isError && <Notice tone="bad" title="Sites could not be loaded">{sites.error.message}</Notice>}
+      {sites.isError && (
+        <Notice tone="bad" title="Sites could not be loaded">
+          {sites.error.message}
+        </Notice>
+      )}
       {sites.data && sites.data.sites.length === 0 && !adding && (
         <p className="text-sm text-ink-soft">
-          No sites yet. {canEdit ? 'Add the site the weather belongs to; its elevation and time zone are used to read files.' : 'An engineer of the project adds them.'}
+          No sites yet.{' '}
+          {canEdit ? 'Add the site the weather belongs to; its elevation and time zone are used to read files.' : 'An engineer of the project adds them.'}
         </p>
       )}
       {sites.data && sites.data.sites.length > 0 && (
         <div className="overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <thead>
-            <tr className="border-b border-rule text-xs text-ink-soft">
-              <th scope="col" className="py-1 font-medium">Site</th>
-              <th scope="col" className="px-2 text-right font-medium">Elevation</th>
-              <th scope="col" className="px-2 text-right font-medium">Lat, long</th>
-              <th scope="col" className="px-2 font-medium">Time zone</th>
-            </tr>
-          </thead>
-          <tbody>
-            {sites.data.sites.map((s) => (
-              <tr key={s.id} className="border-b border-rule/60">
-                <td className="py-1">
-                  <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
-                    {s.name}
-                  </Link>
-                </td>
-                <td className="num px-2 text-right">{formatQuantity('elevation', unitSystem, s.elevationM)}</td>
-                <td className="num px-2 text-right text-ink-soft">
-                  {s.latitude === null && s.longitude === null ? '–' : `${s.latitude?.toFixed(2) ?? '–'}, ${s.longitude?.toFixed(2) ?? '–'}`}
-                </td>
-                <td className="px-2 text-ink-soft">{s.timeZone}</td>
+          <table className="w-full text-left text-sm">
+            <thead>
+              <tr className="border-b border-rule text-xs text-ink-soft">
+                <th scope="col" className="py-1 font-medium">
+                  Site
+                </th>
+                <th scope="col" className="px-2 text-right font-medium">
+                  Elevation
+                </th>
+                <th scope="col" className="px-2 text-right font-medium">
+                  Lat, long
+                </th>
+                <th scope="col" className="px-2 font-medium">
+                  Time zone
+                </th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {sites.data.sites.map((s) => (
+                <tr key={s.id} className="border-b border-rule/60">
+                  <td className="py-1">
+                    <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                      {s.name}
+                    </Link>
+                  </td>
+                  <td className="num px-2 text-right">{formatQuantity('elevation', unitSystem, s.elevationM)}</td>
+                  <td className="num px-2 text-right text-ink-soft">
+                    {s.latitude === null && s.longitude === null ? '–' : `${s.latitude?.toFixed(2) ?? '–'}, ${s.longitude?.toFixed(2) ?? '–'}`}
+                  </td>
+                  <td className="px-2 text-ink-soft">{s.timeZone}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
         </div>
       )}
       {adding && (

@@ -24,12 +24,25 @@ import { useScenarios } from '../api/get-scenarios';
 import { formatSweepValue, sweepPointParts, sweepUnit } from '@/lib/sweep-value';
 import { applicableInputs, AxisFields, draftFor, type AxisDraft } from './axis-fields';
 
-const specAxis = (a: AxisDraft) => (a.input === 'envelope.presetId' ? { input: a.input, presetIds: a.presetIds } : { input: a.input, from: a.from, to: a.to, step: a.step });
+const specAxis = (a: AxisDraft) =>
+  a.input === 'envelope.presetId' ? { input: a.input, presetIds: a.presetIds } : { input: a.input, from: a.from, to: a.to, step: a.step };
 
 /** The points whose supply setpoint breaks the envelope at the chosen site, named before the sweep starts. */
-function OutsideEnvelopeWarning({ outside, total, elevationM }: { outside: { values: SweepPointValues; found: SupplyOutsideEnvelope }[]; total: number; elevationM: number }) {
+function OutsideEnvelopeWarning({
+  outside,
+  total,
+  elevationM,
+}: {
+  outside: { values: SweepPointValues; found: SupplyOutsideEnvelope }[];
+  total: number;
+  elevationM: number;
+}) {
   const { unitSystem } = useUnitSystem();
-  const shown = outside.slice(0, 6).map((o) => sweepPointParts(o.values, unitSystem).map((part) => part.value).join(' × '));
+  const shown = outside.slice(0, 6).map((o) =>
+    sweepPointParts(o.values, unitSystem)
+      .map((part) => part.value)
+      .join(' × '),
+  );
   const first = outside[0].found;
   const limit = `${first.side === 'above' ? 'maximum' : 'minimum'} ${formatQuantity('temperature', unitSystem, first.limitC)}${first.derated ? `, derated for the site's ${formatQuantity('elevation', unitSystem, elevationM)}` : ''}`;
   return (
@@ -74,14 +87,21 @@ export function NewSweepPage() {
     setAxes(kept.length ? kept : [draftFor(offered[0])]);
   }
 
-  const spec: SweepSpecInput | null = base && file ? { scenarioId: base.id, climateFileId: file.id, axes: axes.map(specAxis), ...(name.trim() ? { name: name.trim() } : {}) } : null;
+  const spec: SweepSpecInput | null =
+    base && file ? { scenarioId: base.id, climateFileId: file.id, axes: axes.map(specAxis), ...(name.trim() ? { name: name.trim() } : {}) } : null;
   // Checked as the server will check it, on every edit: 200 points parse in well under a frame.
   const check = (() => {
     if (!spec || !base || axes.length === 0) return null;
     const parsed = sweepSpecSchema.safeParse(spec);
-    if (!parsed.success) return { count: 0, errors: parsed.error.issues.map((i) => `${SWEEP_INPUTS[axes[Number(i.path[1])]?.input]?.label ?? 'Sweep'}: ${i.message}`) };
+    if (!parsed.success)
+      return { count: 0, errors: parsed.error.issues.map((i) => `${SWEEP_INPUTS[axes[Number(i.path[1])]?.input]?.label ?? 'Sweep'}: ${i.message}`) };
     const prepared = prepareSweep(base.scenario, parsed.data.axes);
-    return { count: sweepPointCount(parsed.data.axes), errors: prepared.ok ? [] : prepared.errors, axes: parsed.data.axes, points: prepared.ok ? prepared.points : [] };
+    return {
+      count: sweepPointCount(parsed.data.axes),
+      errors: prepared.ok ? [] : prepared.errors,
+      axes: parsed.data.axes,
+      points: prepared.ok ? prepared.points : [],
+    };
   })();
   // Points whose supply setpoint the envelope (derated for this file's site) does not allow: warned before starting.
   const outside = (check?.points ?? []).flatMap((p) => {
@@ -102,23 +122,33 @@ export function NewSweepPage() {
         <ProjectCrumb projectId={projectId} />
         <h1 className="text-xl font-semibold">Sweep an input</h1>
         <p className="max-w-3xl text-sm text-ink-soft">
-          Vary one input of a saved scenario over a range (or two inputs, as a grid) on one climate file. Every point is an ordinary run on the
-          worker pool; the sweep draws hours per mode, partial PUE, water and peak mechanical load against the swept value.
+          Vary one input of a saved scenario over a range (or two inputs, as a grid) on one climate file. Every point is an ordinary run on the worker pool; the
+          sweep draws hours per mode, partial PUE, water and peak mechanical load against the swept value.
         </p>
       </header>
-      {role && !canEdit && (
-        <Notice title="Viewers can read sweeps but not start them">Ask an engineer or owner of this project to start one.</Notice>
-      )}
+      {role && !canEdit && <Notice title="Viewers can read sweeps but not start them">Ask an engineer or owner of this project to start one.</Notice>}
       {loading && <div role="status" className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading scenarios and climate files" />}
-      {scenarios.isError && <Notice tone="bad" title="Scenarios could not be loaded">{scenarios.error.message}</Notice>}
+      {scenarios.isError && (
+        <Notice tone="bad" title="Scenarios could not be loaded">
+          {scenarios.error.message}
+        </Notice>
+      )}
       {!loading && list.length === 0 && (
         <Notice title="No scenario to sweep yet">
-          Save a scenario first: <Link className="underline" to={`/projects/${projectId}/scenarios/new`}>new scenario</Link>.
+          Save a scenario first:{' '}
+          <Link className="underline" to={`/projects/${projectId}/scenarios/new`}>
+            new scenario
+          </Link>
+          .
         </Notice>
       )}
       {!loading && files.data?.climateFiles.length === 0 && (
         <Notice title="No climate file yet">
-          A sweep runs on a climate file: <Link className="underline" to={`/projects/${projectId}/climate-files/new`}>upload one</Link>.
+          A sweep runs on a climate file:{' '}
+          <Link className="underline" to={`/projects/${projectId}/climate-files/new`}>
+            upload one
+          </Link>
+          .
         </Notice>
       )}
       {base && file && (

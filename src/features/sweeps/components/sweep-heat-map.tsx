@@ -19,7 +19,10 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
   const { unitSystem } = useUnitSystem();
   const [metric, setMetric] = useState<SweepMetric>('mechanical');
   const rowLabels = useMemo(() => axisOrder(points, rowInput).map((v) => formatSweepValue(rowInput, unitSystem, v)), [points, rowInput, unitSystem]);
-  const columnLabels = useMemo(() => axisOrder(points, columnInput).map((v) => formatSweepValue(columnInput, unitSystem, v)), [points, columnInput, unitSystem]);
+  const columnLabels = useMemo(
+    () => axisOrder(points, columnInput).map((v) => formatSweepValue(columnInput, unitSystem, v)),
+    [points, columnInput, unitSystem],
+  );
   // Preset names are long: the chart's ticks take the short form, the table the full one.
   const tick = useCallback((label: string) => compactPresetLabel(label), []);
   const cells = useMemo(
@@ -48,37 +51,45 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
       const figure = document.createElement('div');
       // The ramp is drawn apart from the plot so its first tick keeps a margin of its own.
       figure.append(Plot.legend({ color: colour, marginLeft: 12, width: 340 }));
-      figure.append(Plot.plot({
-        width: widthPx,
-        height: 70 + bandPx * rowLabels.length,
-        marginLeft: Math.min(200, 16 + 7 * Math.max(...rowLabels.map((l) => tick(l).length))),
-        marginTop: 28,
-        marginBottom: 44,
-        style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
-        x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, tickFormat: tick },
-        // The row title sits above the axis, level, so it never runs into the row labels.
-        y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'top', labelArrow: 'none', tickFormat: tick },
-        color: colour,
-        marks: [
-          Plot.cell(
-            cells.filter((c) => c.shown === null),
-            { x: 'columnLabel', y: 'rowLabel', fill: '#f6f5f1', stroke: '#dcdad2', inset: 1 },
-          ),
-          Plot.cell(
-            cells.filter((c) => c.shown !== null),
-            { x: 'columnLabel', y: 'rowLabel', fill: 'shown', inset: 1, tip: true },
-          ),
-          Plot.cell(
-            cells.filter((c) => c.noMechanical),
-            { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#1d2327', strokeWidth: 2, strokeDasharray: '3,2', inset: 3 },
-          ),
-          Plot.cell(
-            cells.filter((c) => c.breaksEnvelope),
-            { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#a8322d', strokeWidth: 2, inset: 2 },
-          ),
-          Plot.text(cells, { x: 'columnLabel', y: 'rowLabel', text: 'text', fill: (c: (typeof cells)[number]) => cellInk(t(c.shown)), fontFamily: 'var(--font-mono)' }),
-        ],
-      }));
+      figure.append(
+        Plot.plot({
+          width: widthPx,
+          height: 70 + bandPx * rowLabels.length,
+          marginLeft: Math.min(200, 16 + 7 * Math.max(...rowLabels.map((l) => tick(l).length))),
+          marginTop: 28,
+          marginBottom: 44,
+          style: { fontFamily: 'var(--font-sans)', fontSize: '12px' },
+          x: { type: 'band', domain: columnLabels, label: columnTitle, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, tickFormat: tick },
+          // The row title sits above the axis, level, so it never runs into the row labels.
+          y: { type: 'band', domain: rowLabels, label: rowTitle, labelAnchor: 'top', labelArrow: 'none', tickFormat: tick },
+          color: colour,
+          marks: [
+            Plot.cell(
+              cells.filter((c) => c.shown === null),
+              { x: 'columnLabel', y: 'rowLabel', fill: '#f6f5f1', stroke: '#dcdad2', inset: 1 },
+            ),
+            Plot.cell(
+              cells.filter((c) => c.shown !== null),
+              { x: 'columnLabel', y: 'rowLabel', fill: 'shown', inset: 1, tip: true },
+            ),
+            Plot.cell(
+              cells.filter((c) => c.noMechanical),
+              { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#1d2327', strokeWidth: 2, strokeDasharray: '3,2', inset: 3 },
+            ),
+            Plot.cell(
+              cells.filter((c) => c.breaksEnvelope),
+              { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#a8322d', strokeWidth: 2, inset: 2 },
+            ),
+            Plot.text(cells, {
+              x: 'columnLabel',
+              y: 'rowLabel',
+              text: 'text',
+              fill: (c: (typeof cells)[number]) => cellInk(t(c.shown)),
+              fontFamily: 'var(--font-mono)',
+            }),
+          ],
+        }),
+      );
       return figure;
     },
     [cells, rowLabels, columnLabels, rowTitle, columnTitle, title, tick],
@@ -88,7 +99,12 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
     <div className="space-y-3">
       <label className="flex items-baseline gap-2 text-sm">
         <span className="text-ink-soft">Colour the cells by</span>
-        <select className="rounded border border-rule bg-panel px-2 py-1" value={metric} onChange={(e) => setMetric(e.target.value as SweepMetric)} data-testid="heat-map-metric">
+        <select
+          className="rounded border border-rule bg-panel px-2 py-1"
+          value={metric}
+          onChange={(e) => setMetric(e.target.value as SweepMetric)}
+          data-testid="heat-map-metric"
+        >
           {SWEEP_METRICS.filter((m) => m !== 'liquidMechanical' || points.some((p) => p.results?.liquidMechanicalHours !== undefined)).map((m) => (
             <option key={m} value={m}>
               {sweepMetricLabels[m]}
@@ -97,7 +113,10 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
         </select>
       </label>
       <PlotFigure render={render} label={`${title} for each ${rowTitle} and ${columnTitle}`} placeholderHeightPx={320} />
-      <p className="text-xs text-ink-soft">Cells outlined with a dashed line have no mechanical hours (inside the envelope); cells outlined in red break the inlet envelope (supply setpoint beyond the derated limits, every hour an excursion), marked ✕ in the table. Pale cells with a dash have not finished yet.</p>
+      <p className="text-xs text-ink-soft">
+        Cells outlined with a dashed line have no mechanical hours (inside the envelope); cells outlined in red break the inlet envelope (supply setpoint beyond
+        the derated limits, every hour an excursion), marked ✕ in the table. Pale cells with a dash have not finished yet.
+      </p>
       <details className="text-sm">
         <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
         <div className="overflow-x-auto">

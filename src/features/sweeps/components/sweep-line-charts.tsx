@@ -3,7 +3,15 @@ import { ModeLegend } from '@/components/charts/mode-legend';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { modeColours, modeLabels } from '../../../../shared/modes';
-import { metricRows, modeHoursRows, type SweepInputPath, type SweepMetric, type SweepPoint, type SweepValue, type ZeroMechanical } from '../../../../shared/sweep';
+import {
+  metricRows,
+  modeHoursRows,
+  type SweepInputPath,
+  type SweepMetric,
+  type SweepPoint,
+  type SweepValue,
+  type ZeroMechanical,
+} from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
 import { compactPresetLabel, displayNumber } from '../utils/sweep-format';
 import { metricDisplay, metricTitle } from '../utils/metric-format';
@@ -42,12 +50,30 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
           ? []
           : [
               Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3', strokeWidth: 1.5 }),
-              Plot.text([zeroX], { x: (d: SweepValue) => d, frameAnchor: 'top', dy: -14, text: () => (zero.kind === 'up-to' ? '◀ no mechanical hours' : 'no mechanical hours ▶'), textAnchor: zero.kind === 'up-to' ? 'end' : 'start', fill: '#1d2327' }),
+              Plot.text([zeroX], {
+                x: (d: SweepValue) => d,
+                frameAnchor: 'top',
+                dy: -14,
+                text: () => (zero.kind === 'up-to' ? '◀ no mechanical hours' : 'no mechanical hours ▶'),
+                textAnchor: zero.kind === 'up-to' ? 'end' : 'start',
+                fill: '#1d2327',
+              }),
             ];
       const outside = axis.breaking.length
         ? [
             Plot.ruleX(axis.breaking, { stroke: ENVELOPE_BREAK, strokeOpacity: 0.5, strokeWidth: 3 }),
-            Plot.text([axis.breaking[0]], { x: (d: SweepValue) => d, frameAnchor: 'bottom', dy: -6, text: () => 'outside envelope', textAnchor: 'start', dx: 4, fill: ENVELOPE_BREAK, stroke: '#ffffff', strokeWidth: 3, paintOrder: 'stroke' }),
+            Plot.text([axis.breaking[0]], {
+              x: (d: SweepValue) => d,
+              frameAnchor: 'bottom',
+              dy: -6,
+              text: () => 'outside envelope',
+              textAnchor: 'start',
+              dx: 4,
+              fill: ENVELOPE_BREAK,
+              stroke: '#ffffff',
+              strokeWidth: 3,
+              paintOrder: 'stroke',
+            }),
           ]
         : [];
       return Plot.plot({
@@ -93,7 +119,13 @@ function flatDomain(values: number[], fromZero: boolean): { domain?: [number, nu
 }
 
 /** A count that is part of a mode is drawn in its mode's colour. */
-const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = { free: 'free', humidified: 'free', adiabatic: 'adiabatic', mechanical: 'mechanical', partialMechanical: 'mechanical' };
+const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = {
+  free: 'free',
+  humidified: 'free',
+  adiabatic: 'adiabatic',
+  mechanical: 'mechanical',
+  partialMechanical: 'mechanical',
+};
 
 /**
  * One result against the swept value, as a line with a dot per finished point, on its own scale (a few
@@ -126,12 +158,28 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
         x: axis.preset
           ? { type: 'point', domain: axis.labels, label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, padding: 0.5 }
           : { label: axis.title, labelAnchor: 'center', labelArrow: 'none', labelOffset: 36, ticks: 6 },
-        y: { label: title, grid: true, labelArrow: 'up', zero: metric !== 'partialPue', nice: true, ...flatDomain(rows.map((r) => r.y), metric !== 'partialPue') },
+        y: {
+          label: title,
+          grid: true,
+          labelArrow: 'up',
+          zero: metric !== 'partialPue',
+          nice: true,
+          ...flatDomain(
+            rows.map((r) => r.y),
+            metric !== 'partialPue',
+          ),
+        },
         marks: [
           zeroX === null ? null : Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3' }),
           Plot.lineY(rows, { x: 'x', y: 'y', stroke: colour, strokeWidth: 1.75 }),
-          Plot.dot(rows.filter((r) => r.outside === 'inside envelope'), { x: 'x', y: 'y', fill: colour, r: 3, tip: true }),
-          Plot.dot(rows.filter((r) => r.outside === 'outside envelope'), { x: 'x', y: 'y', symbol: 'times', stroke: ENVELOPE_BREAK, strokeWidth: 2, r: 4, tip: true, title: (r: { outside: string }) => r.outside }),
+          Plot.dot(
+            rows.filter((r) => r.outside === 'inside envelope'),
+            { x: 'x', y: 'y', fill: colour, r: 3, tip: true },
+          ),
+          Plot.dot(
+            rows.filter((r) => r.outside === 'outside envelope'),
+            { x: 'x', y: 'y', symbol: 'times', stroke: ENVELOPE_BREAK, strokeWidth: 2, r: 4, tip: true, title: (r: { outside: string }) => r.outside },
+          ),
         ],
       }),
     [rows, axis, title, metric, colour, zeroX],
@@ -161,7 +209,8 @@ export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath
       </div>
       {points.some((p) => p.results?.breaksEnvelope) && (
         <p className="text-xs text-ink-soft">
-          <span className="font-semibold text-[#a8322d]">×</span> and the shaded lines mark points outside the inlet envelope (supply setpoint beyond the derated limits).
+          <span className="font-semibold text-[#a8322d]">×</span> and the shaded lines mark points outside the inlet envelope (supply setpoint beyond the
+          derated limits).
         </p>
       )}
     </div>

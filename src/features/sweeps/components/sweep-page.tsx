@@ -33,8 +33,7 @@ function AxisSummary({ axis }: { axis: SweepRecord['axes'][number] }) {
 /** The cautions every set of results carries (product brief), for the sweep's system. */
 function SweepCautions({ sweep }: { sweep: SweepRecord }) {
   const system = sweep.baseScenario.system;
-  const evaporative =
-    usesEvaporativeWater(system) || sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness');
+  const evaporative = usesEvaporativeWater(system) || sweep.axes.some((a) => a.input === 'system.evaporativeEffectiveness');
   return <ResultCautions systemKind={hallAirSystem(system).kind} evaporative={evaporative} hybrid={system.kind === 'hybrid'} />;
 }
 
@@ -54,7 +53,11 @@ export function SweepPage() {
   if (query.isError) {
     return (
       <Notice tone="bad" title="This sweep could not be opened">
-        {query.error.message} It may have been deleted; <Link className="underline" to={`/projects/${projectId}`}>open the project</Link> to see its sweeps.
+        {query.error.message} It may have been deleted;{' '}
+        <Link className="underline" to={`/projects/${projectId}`}>
+          open the project
+        </Link>{' '}
+        to see its sweeps.
       </Notice>
     );
   }
@@ -64,7 +67,13 @@ export function SweepPage() {
   const anyDone = doneIds.length > 0;
   const zero =
     inputs.length === 1
-      ? zeroMechanical(sweep.points.map((p) => ({ value: p.values[inputs[0]]!, mechanicalHours: p.results?.hours.mechanical ?? null, breaksEnvelope: p.results?.breaksEnvelope })))
+      ? zeroMechanical(
+          sweep.points.map((p) => ({
+            value: p.values[inputs[0]]!,
+            mechanicalHours: p.results?.hours.mechanical ?? null,
+            breaksEnvelope: p.results?.breaksEnvelope,
+          })),
+        )
       : null;
   const breaking = sweep.points.filter((p) => p.results?.breaksEnvelope).length;
 
@@ -118,14 +127,27 @@ export function SweepPage() {
             </button>
           )}
           {canEdit && (
-            <button type="button" onClick={deleteSweep} disabled={remove.isPending} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-50">
+            <button
+              type="button"
+              onClick={deleteSweep}
+              disabled={remove.isPending}
+              className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist disabled:opacity-50"
+            >
               {sweep.progress.finished ? 'Delete sweep' : 'Stop and delete'}
             </button>
           )}
         </div>
       </header>
-      {remove.isError && <Notice tone="bad" title="The sweep was not deleted">{remove.error.message}</Notice>}
-      {stop.isError && <Notice tone="bad" title="The sweep was not stopped">{stop.error.message}</Notice>}
+      {remove.isError && (
+        <Notice tone="bad" title="The sweep was not deleted">
+          {remove.error.message}
+        </Notice>
+      )}
+      {stop.isError && (
+        <Notice tone="bad" title="The sweep was not stopped">
+          {stop.error.message}
+        </Notice>
+      )}
 
       <SweepProgressBar progress={sweep.progress} />
       {sweep.progress.failed > 0 && (
@@ -137,8 +159,8 @@ export function SweepPage() {
       {breaking > 0 && (
         <Notice tone="warn" title={`${breaking} ${breaking === 1 ? 'point breaks' : 'points break'} the inlet envelope`}>
           <span data-testid="envelope-breaking-notice">
-            Their supply setpoint is outside the envelope's dry-bulb limits (the maximum derated for the site's elevation), so every hour is an
-            excursion. They are marked "outside envelope" in the charts and the table, and their hours per mode are not results a design can use.
+            Their supply setpoint is outside the envelope's dry-bulb limits (the maximum derated for the site's elevation), so every hour is an excursion. They
+            are marked "outside envelope" in the charts and the table, and their hours per mode are not results a design can use.
           </span>
         </Notice>
       )}

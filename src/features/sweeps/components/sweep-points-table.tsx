@@ -22,11 +22,22 @@ const statusClass: Record<SweepRunStatus, string> = {
 const hourSpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
 
 /** Every point with its run and results: the table beside the charts, and its CSV download in the person's units. */
-export function SweepPointsTable({ projectId, name, inputs, points }: { projectId: number; name: string; inputs: SweepInputPath[]; points: readonly SweepPoint[] }) {
+export function SweepPointsTable({
+  projectId,
+  name,
+  inputs,
+  points,
+}: {
+  projectId: number;
+  name: string;
+  inputs: SweepInputPath[];
+  points: readonly SweepPoint[];
+}) {
   const { unitSystem } = useUnitSystem();
   const waterUnit = metricUnit('waterL', unitSystem);
   const waterSuffix = waterUnit === 'm³' ? 'm3' : 'us_gal';
-  const water = (litres: number | null | undefined) => (litres === null || litres === undefined ? null : Math.round(toDisplay('water', unitSystem, litres) * 1000) / 1000);
+  const water = (litres: number | null | undefined) =>
+    litres === null || litres === undefined ? null : Math.round(toDisplay('water', unitSystem, litres) * 1000) / 1000;
 
   function download() {
     const head = csvRow([
@@ -117,7 +128,11 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
           </thead>
           <tbody>
             {points.map((p, i) => (
-              <tr key={p.runId} className={`border-b border-rule/60 ${p.results?.breaksEnvelope ? 'bg-[#fbeceb]/60' : ''}`} data-breaks-envelope={p.results?.breaksEnvelope ? 'yes' : undefined}>
+              <tr
+                key={p.runId}
+                className={`border-b border-rule/60 ${p.results?.breaksEnvelope ? 'bg-[#fbeceb]/60' : ''}`}
+                data-breaks-envelope={p.results?.breaksEnvelope ? 'yes' : undefined}
+              >
                 <td className="num py-1 text-left">
                   <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 hover:underline">
                     {i + 1} · run #{p.runId}
@@ -133,7 +148,10 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
                     {p.status}
                   </span>
                   {p.results?.breaksEnvelope && (
-                    <span className="ml-1 rounded bg-[#fbeceb] px-1.5 py-0.5 text-xs text-signal-bad" title="The supply setpoint is outside the derated inlet envelope: every hour is an excursion">
+                    <span
+                      className="ml-1 rounded bg-[#fbeceb] px-1.5 py-0.5 text-xs text-signal-bad"
+                      title="The supply setpoint is outside the derated inlet envelope: every hour is an excursion"
+                    >
                       outside envelope
                     </span>
                   )}
@@ -143,7 +161,9 @@ export function SweepPointsTable({ projectId, name, inputs, points }: { projectI
                     {p.results ? hoursText(hoursOfSpec(p.results.hours, spec)) : '–'}
                   </td>
                 ))}
-                <td className={`num px-2 ${p.results?.excursionHours ? 'text-signal-bad' : ''}`}>{formatMetric('excursionHours', unitSystem, p.results?.excursionHours ?? null)}</td>
+                <td className={`num px-2 ${p.results?.excursionHours ? 'text-signal-bad' : ''}`}>
+                  {formatMetric('excursionHours', unitSystem, p.results?.excursionHours ?? null)}
+                </td>
                 <td className="num px-2">{formatMetric('partialPue', unitSystem, p.results?.partialPue ?? null)}</td>
                 <td className="num px-2">{formatMetric('waterL', unitSystem, p.results?.waterL ?? null)}</td>
                 <td className="num px-2">{formatMetric('peakMechanicalLoadKw', unitSystem, p.results?.peakMechanicalLoadKw ?? null)}</td>

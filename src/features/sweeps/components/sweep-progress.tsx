@@ -15,7 +15,12 @@ export function SweepProgressBar({ progress }: { progress: SweepProgress }) {
     <div className="rounded-md border border-rule bg-panel p-4" data-testid="sweep-progress">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <p className="text-sm font-medium" role="status" aria-live="polite">
-          {!progress.finished ? 'Running the points on the worker pool…' : progress.cancelled > 0 ? 'Stopped before every point ran.' : 'Every point has finished.'} <span className="num text-ink-soft">{parts.join(' · ')}</span>
+          {!progress.finished
+            ? 'Running the points on the worker pool…'
+            : progress.cancelled > 0
+              ? 'Stopped before every point ran.'
+              : 'Every point has finished.'}{' '}
+          <span className="num text-ink-soft">{parts.join(' · ')}</span>
         </p>
         <span className="num text-sm">{pct} %</span>
       </div>

@@ -11,7 +11,11 @@ export function rangeToSi(path: SweepInputPath, system: UnitSystem, shown: { fro
   const q = SWEEP_INPUTS[path].quantity;
   const kind = kindOf[q];
   if (!kind) return shown;
-  return { from: fromDisplay(kind, system, shown.from), to: fromDisplay(kind, system, shown.to), step: fromDisplay('temperatureDifference', system, shown.step) };
+  return {
+    from: fromDisplay(kind, system, shown.from),
+    to: fromDisplay(kind, system, shown.to),
+    step: fromDisplay('temperatureDifference', system, shown.step),
+  };
 }
 
 /** An SI range in the person's units, rounded for the form's fields. */
@@ -20,7 +24,11 @@ export function rangeFromSi(path: SweepInputPath, system: UnitSystem, si: { from
   const kind = kindOf[q];
   if (!kind) return si;
   const round = (v: number) => Math.round(v * 10) / 10;
-  return { from: round(toDisplay(kind, system, si.from)), to: round(toDisplay(kind, system, si.to)), step: round(toDisplay('temperatureDifference', system, si.step)) };
+  return {
+    from: round(toDisplay(kind, system, si.from)),
+    to: round(toDisplay(kind, system, si.to)),
+    step: round(toDisplay('temperatureDifference', system, si.step)),
+  };
 }
 
 /** A numeric swept value as a number in the person's units, for a chart's linear axis. */
