@@ -38,7 +38,7 @@ export function pickerPage(params: Record<string, string>, people: { demo: FakeP
             border: 1px solid #dcdad2; border-radius: 4px; font: inherit; }
   .go { background: #1f3a4a; color: #f6f5f1; border: 0; border-radius: 4px; padding: 8px 14px; font: inherit; cursor: pointer; }
   .problem { border-color: #9b2f25; background: #fbeceb; }
-  .small { font-size: 12px; color: #6b747a; }
+  .small { font-size: 12px; color: #4a545b; }
 </style></head>
 <body>
 <header><h1>Local sign-in</h1><p>A stand-in identity provider for trying Tramontane on this machine. No passwords: pick who you are.</p></header>

@@ -1,14 +1,13 @@
 /**
- * Read speed and load (issue 15 "Load"): the demo workspace (synthetic; 12 runs and a 13-point sweep, every run
- * done) served by the app in this process, as a browser asks for it (a session cookie, gzip and brotli accepted).
+ * Read speed and load (issue 15 "Load"): the demo workspace (synthetic; every run done) served by the app in this process, as a browser asks for it (a session cookie, gzip and brotli accepted).
  * - Per request, one keep-alive connection, the reads taken in turn: the project's run listing (what the project
  *   overview shows) and one run with its results, each as a ratio to /api/health in the same run, so the figures
  *   hold on a busy machine: of median wall times, and of mean CPU times (which waiting for a core does not
  *   inflate). "Cold" reads follow a write to the database, so nothing remembered from the previous read can answer
  *   them.
  * - Load: 100 connections for 20 s on the run listing from a worker thread; requests per second, latency
- *   percentiles, timeouts (no answer within 10 s) and errors (any status but 200); then the same on /api/health,
- *   for the listing's throughput as a share of it.
+ *   percentiles, timeouts (no answer within 10 s) and errors (any status but 200); then the same on one run and on
+ *   /api/health, for each read's throughput as a share of health's.
  */
 import http from 'node:http';
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -82,7 +81,7 @@ async function demoServer(log: BenchContext['log']): Promise<DemoServer> {
   await runQueue.idle();
   const project = db.select({ id: projects.id }).from(projects).get()!;
   const done = db.select({ id: runs.id, status: runs.status }).from(runs).where(eq(runs.projectId, project.id)).all();
-  if (done.length !== 25 || done.some((r) => r.status !== 'done')) throw new Error(`demo runs did not all finish: ${JSON.stringify(done)}`);
+  if (done.length !== queued || done.some((r) => r.status !== 'done')) throw new Error(`demo runs did not all finish: ${JSON.stringify(done)}`);
   log(`load: demo workspace with ${queued} runs done in ${((performance.now() - started) / 1000).toFixed(1)} s`);
   const run = db
     .select({ id: runs.id })
@@ -243,6 +242,7 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
       return figures;
     };
     const overviewLoad = await underLoad(overviewPath);
+    const runLoad = await underLoad(runPath);
     const healthLoad = await underLoad('/api/health');
     return {
       loadHealthMs: Number(warm.ms('health').toFixed(2)),
@@ -265,6 +265,10 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
       loadOverviewErrors100: overviewLoad.errors,
       loadHealthRequestsPerSecond100: Math.round(healthLoad.perSecond),
       loadOverviewThroughputToHealth: Number((overviewLoad.perSecond / healthLoad.perSecond).toFixed(2)),
+      loadRunRequestsPerSecond100: Math.round(runLoad.perSecond),
+      loadRunP99Ms100: Number(runLoad.p99.toFixed(1)),
+      loadRunTimeouts100: runLoad.timeouts,
+      loadRunThroughputToHealth: Number((runLoad.perSecond / healthLoad.perSecond).toFixed(2)),
     };
   } finally {
     await s.close();

@@ -110,7 +110,7 @@ describe('an engineer adding hourly weather to a project', () => {
     await h.screenshot('climate-file-page-ip-hover');
     // The text alternatives, and the page on a laptop and on a wide monitor.
     for (const summary of await page.getByText('Table of the same figures').all()) await summary.click();
-    expect(await page.getByTestId('moist-air-chart').innerText()).toMatch(/26,280 of 26,280 hours with data/);
+    await expect.poll(() => page.getByTestId('moist-air-chart').innerText(), { timeout: 15_000 }).toMatch(/26,280 of 26,280 hours with data/);
     await page.setViewportSize({ width: 1280, height: 800 });
     await h.screenshot('climate-file-page-ip-tables-1280');
     await page.setViewportSize({ width: 1920, height: 1080 });

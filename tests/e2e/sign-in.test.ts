@@ -63,7 +63,7 @@ describe('signing in through the local provider', () => {
     await h.screenshot('audit-trail-project');
 
     await h.page.getByRole('link', { name: 'People' }).click();
-    await h.page.getByRole('cell', { name: 'Priya Castellane' }).waitFor();
+    await h.page.getByRole('cell', { name: 'Priya Castellane', exact: true }).waitFor();
     expect(await h.page.getByRole('checkbox').first().isDisabled()).toBe(true); // the only admin cannot drop her own rights
     await h.screenshot('admin-people');
   });

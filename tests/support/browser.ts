@@ -23,8 +23,8 @@ export interface BrowserHarness {
   screenshot: (name: string) => Promise<string>;
   /**
    * A full-page screenshot from the top, so sticky side columns sit where a reader sees them;
-   * `settleMs` waits after the scroll for anything drawn on scroll. Every screen shot this way is also checked for
-   * accessibility first (`audit`), so a serious violation fails the test that visits it.
+   * `settleMs` waits after the scroll for anything drawn on scroll. (Accessibility: tests/e2e/workspace-reading.test.ts
+   * runs `audit` on every page of the workspace at phone and desk widths.)
    */
   shot: (name: string, settleMs?: number) => Promise<string>;
   /**
@@ -108,7 +108,6 @@ export async function startBrowserHarness(overrides: Partial<AppDeps> = {}): Pro
     screenshot,
     audit,
     shot: async (name, settleMs = 0) => {
-      await audit(name);
       await page.evaluate(() => window.scrollTo(0, 0));
       if (settleMs > 0) await page.waitForTimeout(settleMs);
       return screenshot(name);

@@ -21,7 +21,7 @@ export function ClimateFileUploadRoute() {
         <ProjectCrumb projectId={projectId} />
         <h1 className="text-xl font-semibold">Upload a climate file</h1>
       </div>
-      {sites.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
+      {sites.isPending && <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
       {sites.isError && (
         <Notice tone="bad" title="The project's sites could not be loaded">
           {sites.error.message}

@@ -16,7 +16,7 @@ export function HomeRoute() {
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
       <div className="grid content-start gap-6">
         <Panel title="Projects">
-          {projects.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
+          {projects.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
           {projects.isError &&
             (signedOut ? (
               <Notice title="You are not signed in">
@@ -49,7 +49,7 @@ export function HomeRoute() {
                 {projects.data.projects.map((p) => (
                   <tr key={p.id}>
                     <td className="py-2 pr-4">
-                      <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                      <Link to={`/projects/${p.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
                         {p.name}
                       </Link>
                       {p.description && <p className="text-ink-soft">{p.description}</p>}
@@ -63,7 +63,7 @@ export function HomeRoute() {
         </Panel>
         {projects.data && (
           <Panel title="Start a project">
-            <Suspense fallback={<div role="status" className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the form" />}>
+            <Suspense fallback={<div role="progressbar" className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the form" />}>
               <NewProjectForm />
             </Suspense>
           </Panel>

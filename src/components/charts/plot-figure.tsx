@@ -33,10 +33,16 @@ export function asOneImage(figure: Element, label: string): void {
   for (const svg of svgs) {
     svg.setAttribute('role', 'img');
     if (!svg.hasAttribute('aria-label')) svg.setAttribute('aria-label', label);
-    for (const mark of svg.querySelectorAll('[aria-label]')) {
-      mark.setAttribute('data-mark', mark.getAttribute('aria-label')!);
-      mark.removeAttribute('aria-label');
-    }
+    quietMarks(svg);
+    // Plot draws a pointer's tip again on each move, named as before: keep those quiet too.
+    if (typeof MutationObserver !== 'undefined') new MutationObserver(() => quietMarks(svg)).observe(svg, { childList: true, subtree: true });
+  }
+}
+
+function quietMarks(svg: Element): void {
+  for (const mark of svg.querySelectorAll('[aria-label]')) {
+    mark.setAttribute('data-mark', mark.getAttribute('aria-label')!);
+    mark.removeAttribute('aria-label');
   }
 }
 
@@ -80,7 +86,7 @@ export function PlotFigure({ render, label, placeholderHeightPx = 320, className
   return (
     <figure aria-label={label} className={className}>
       {state === 'loading' && (
-        <div role="status" aria-label={`Loading chart: ${label}`} className="animate-pulse rounded bg-mist" style={{ height: placeholderHeightPx }} />
+        <div role="progressbar" aria-label={`Loading chart: ${label}`} className="animate-pulse rounded bg-mist" style={{ height: placeholderHeightPx }} />
       )}
       {state === 'error' && (
         <p role="alert" className="rounded border border-signal-bad/40 bg-[#fbeceb] p-3 text-sm">

@@ -6,11 +6,11 @@ export function ProjectCrumb({ projectId }: { projectId: number }) {
   const { projectName } = useProjectRole(projectId);
   return (
     <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
-      <Link to="/" className="hover:underline">
+      <Link to="/" className="underline hover:decoration-2">
         Projects
       </Link>{' '}
       /{' '}
-      <Link to={`/projects/${projectId}`} className="hover:underline">
+      <Link to={`/projects/${projectId}`} className="underline hover:decoration-2">
         {projectName ?? 'Project'}
       </Link>{' '}
       /

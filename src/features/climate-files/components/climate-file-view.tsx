@@ -33,7 +33,7 @@ export function ClimateFileView({
   onDeleted?: () => void;
 }) {
   const detail = useClimateFile(projectId, fileId);
-  if (detail.isPending) return <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />;
+  if (detail.isPending) return <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />;
   if (detail.isError) {
     const notFound = detail.error instanceof ApiError && detail.error.status === 404;
     return (
@@ -88,7 +88,7 @@ function Loaded({
           {file.projection && (
             <p className="text-sm text-ink-soft">
               A future-climate projection of {file.projection.parentName}, not measured weather.{' '}
-              <Link to={`/projects/${projectId}/projections/${fileId}`} className="text-harbour underline-offset-2 hover:underline">
+              <Link to={`/projects/${projectId}/projections/${fileId}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                 Today and the projection side by side
               </Link>
             </p>
@@ -152,7 +152,7 @@ function Loaded({
             {hours.error.message} Reload the page to try again.
           </Notice>
         ) : (
-          <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the hours" />
+          <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the hours" />
         )}
       </Panel>
 
@@ -160,7 +160,7 @@ function Loaded({
         {chartHours ? (
           <MoistAirChart pressurePa={summary.meanPressurePa} hours={chartHours} />
         ) : (
-          <div role="status" className="h-96 animate-pulse rounded bg-mist" aria-label="Loading the chart" />
+          <div role="progressbar" className="h-96 animate-pulse rounded bg-mist" aria-label="Loading the chart" />
         )}
       </Panel>
 

@@ -34,7 +34,7 @@ export function ClimateFilesPanel({
         ) : undefined
       }
     >
-      {files.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
+      {files.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
       {files.isError && (
         <Notice tone="bad" title="Climate files could not be loaded">
           {files.error.message}
@@ -73,7 +73,10 @@ export function ClimateFilesPanel({
               return (
                 <tr key={f.id} className="border-b border-rule/60">
                   <td className="py-1">
-                    <Link to={`/projects/${projectId}/climate-files/${f.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                    <Link
+                      to={`/projects/${projectId}/climate-files/${f.id}`}
+                      className="font-medium text-harbour underline-offset-2 underline hover:decoration-2"
+                    >
                       {f.name}
                     </Link>
                     {f.projection && (

@@ -15,19 +15,28 @@ function confidenceWords(c: number | undefined): { text: string; tone: string } 
 
 function ColumnSelect({
   id,
+  name,
   headers,
   value,
   onChange,
   allowNone,
 }: {
   id: string;
+  /** What the column holds, as a screen reader announces the select (several share one row's label). */
+  name?: string;
   headers: string[];
   value: number | null;
   onChange: (v: number | null) => void;
   allowNone?: string;
 }) {
   return (
-    <select id={id} className={selectClass} value={value ?? ''} onChange={(e) => onChange(e.target.value === '' ? null : Number(e.target.value))}>
+    <select
+      id={id}
+      aria-label={name}
+      className={selectClass}
+      value={value ?? ''}
+      onChange={(e) => onChange(e.target.value === '' ? null : Number(e.target.value))}
+    >
       {allowNone !== undefined && <option value="">{allowNone}</option>}
       {value === null && allowNone === undefined && <option value="">Choose a column…</option>}
       {headers.map((h, i) => (
@@ -107,12 +116,30 @@ export function MappingEditor({
           <option value="ymdh">Year, month, day and hour columns</option>
         </select>
         {time?.layout === 'iso' && (
-          <ColumnSelect id="map-time-col" headers={headers} value={time.column as number} onChange={(v) => setTime({ column: v ?? 0 })} />
+          <ColumnSelect
+            id="map-time-col"
+            name="Timestamp column"
+            headers={headers}
+            value={time.column as number}
+            onChange={(v) => setTime({ column: v ?? 0 })}
+          />
         )}
         {time?.layout === 'date-time' && (
           <>
-            <ColumnSelect id="map-date-col" headers={headers} value={time.dateColumn as number} onChange={(v) => setTime({ dateColumn: v ?? 0 })} />
-            <ColumnSelect id="map-timeofday-col" headers={headers} value={time.timeColumn as number} onChange={(v) => setTime({ timeColumn: v ?? 0 })} />
+            <ColumnSelect
+              id="map-date-col"
+              name="Date column"
+              headers={headers}
+              value={time.dateColumn as number}
+              onChange={(v) => setTime({ dateColumn: v ?? 0 })}
+            />
+            <ColumnSelect
+              id="map-timeofday-col"
+              name="Time-of-day column"
+              headers={headers}
+              value={time.timeColumn as number}
+              onChange={(v) => setTime({ timeColumn: v ?? 0 })}
+            />
             <select
               aria-label="Date order"
               className={selectClass}
@@ -130,7 +157,13 @@ export function MappingEditor({
             {(['year', 'month', 'day', 'hour'] as const).map((part) => (
               <span key={part} className="flex items-center gap-1 text-xs text-ink-soft">
                 {part}
-                <ColumnSelect id={`map-${part}-col`} headers={headers} value={time[part] as number} onChange={(v) => setTime({ [part]: v ?? 0 })} />
+                <ColumnSelect
+                  id={`map-${part}-col`}
+                  name={`${part[0].toUpperCase()}${part.slice(1)} column`}
+                  headers={headers}
+                  value={time[part] as number}
+                  onChange={(v) => setTime({ [part]: v ?? 0 })}
+                />
               </span>
             ))}
             <select

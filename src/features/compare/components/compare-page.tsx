@@ -69,7 +69,7 @@ export function ComparePage() {
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">
-          {runsQuery.isPending && <div role="status" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+          {runsQuery.isPending && <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
           {runsQuery.isError && (
             <Notice tone="bad" title="Runs could not be loaded">
               {runsQuery.error.message}
@@ -102,7 +102,7 @@ export function ComparePage() {
                 {monthlySeries ? (
                   <MonthlyComparisonChart series={monthlySeries} />
                 ) : (
-                  <div role="status" className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />
+                  <div role="progressbar" className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />
                 )}
               </Panel>
               {anyMultiYear && (

@@ -10,7 +10,8 @@ import type { RunListing } from '../api/get-runs';
  */
 export function DifferingInputs({ runs, scenarios }: { runs: RunListing[]; scenarios: (unknown | undefined)[] }) {
   const { unitSystem } = useUnitSystem();
-  if (scenarios.some((s) => s === undefined)) return <div role="status" className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the runs' inputs" />;
+  if (scenarios.some((s) => s === undefined))
+    return <div role="progressbar" className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the runs' inputs" />;
   const inputs = differingInputs(scenarios);
   const files = runs.map((r) => `${r.climate.site.name} · ${r.climate.name}`);
   const fileDiffers = new Set(files).size > 1;

@@ -73,7 +73,7 @@ export function RunPicker({
           // A sweep point is named by its swept value in the reader's units; its scenario name repeats the base and gives the value in SI.
           if (r.sweepId !== null && r.sweepPoint) {
             return (
-              <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline" title={r.scenario.name}>
+              <Link to={`/projects/${projectId}/runs/${r.id}`} className="underline hover:decoration-2" title={r.scenario.name}>
                 <span className="num text-xs text-ink-faint">#{r.id}</span>{' '}
                 <span data-testid="sweep-point-value">
                   {sweepPointParts(r.sweepPoint, unitSystem).map((part, i) => (
@@ -91,7 +91,7 @@ export function RunPicker({
             );
           }
           return (
-            <Link to={`/projects/${projectId}/runs/${r.id}`} className="hover:underline">
+            <Link to={`/projects/${projectId}/runs/${r.id}`} className="underline hover:decoration-2">
               <span className="num text-xs text-ink-faint">#{r.id}</span> {r.scenario.name}
               {place}
             </Link>

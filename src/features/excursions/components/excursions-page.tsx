@@ -69,7 +69,7 @@ export function ExcursionsPage() {
         </div>
       </header>
 
-      {query.isPending && <div role="status" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Working out excursions" />}
+      {query.isPending && <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Working out excursions" />}
       {query.isError && (
         <Notice tone="bad" title="The excursions could not be worked out">
           {query.error.message}{' '}

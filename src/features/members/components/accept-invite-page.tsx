@@ -18,7 +18,7 @@ export function AcceptInvitePage() {
         Open the link from the e-mail again, whole.
       </Notice>
     );
-  if (preview.isPending) return <div role="status" className="h-32 animate-pulse rounded bg-mist" aria-label="Loading invitation" />;
+  if (preview.isPending) return <div role="progressbar" className="h-32 animate-pulse rounded bg-mist" aria-label="Loading invitation" />;
   if (preview.isError)
     return (
       <Notice tone="bad" title="This invitation cannot be used">

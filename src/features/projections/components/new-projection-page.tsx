@@ -38,14 +38,14 @@ export function NewProjectionPage() {
         {parent && (
           <p className="text-sm text-ink-soft">
             From{' '}
-            <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">
+            <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
               {parent.name}
             </Link>{' '}
             · {parent.siteName} · <span className="num">{parent.hours.toLocaleString('en')}</span> hours
           </p>
         )}
       </header>
-      {files.isPending && <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />}
+      {files.isPending && <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />}
       {files.isError && (
         <Notice tone="bad" title="The climate files could not be loaded">
           {files.error.message}

@@ -23,7 +23,7 @@ export function ProjectionPage() {
   return (
     <div className="space-y-4">
       <ProjectCrumb projectId={projectId} />
-      {projection.isPending && <div role="status" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the projection" />}
+      {projection.isPending && <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the projection" />}
       {projection.isError && (
         <Notice
           tone="bad"
@@ -56,7 +56,7 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
           <p className="text-sm text-ink-soft">
             Made from{' '}
             {parent ? (
-              <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 hover:underline">
+              <Link to={`/projects/${projectId}/climate-files/${parent.id}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                 {parent.name}
               </Link>
             ) : (

@@ -26,7 +26,7 @@ export function RunOnBothPanel({
       </p>
     );
   }
-  if (scenarios.isPending) return <div role="status" className="h-10 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />;
+  if (scenarios.isPending) return <div role="progressbar" className="h-10 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />;
   if (scenarios.isError)
     return (
       <Notice tone="bad" title="Scenarios could not be loaded">

@@ -50,7 +50,7 @@ export function ProjectOverview({
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <p className="text-sm text-ink-soft">
-            <Link to="/" className="hover:underline">
+            <Link to="/" className="underline hover:decoration-2">
               Projects
             </Link>{' '}
             /
@@ -58,17 +58,17 @@ export function ProjectOverview({
           <h1 className="text-xl font-semibold">{name ?? <span className="inline-block h-6 w-48 animate-pulse rounded bg-mist align-middle" />}</h1>
           {listed?.description && <p className="mt-1 max-w-3xl text-sm text-ink-soft">{listed.description}</p>}
           <nav aria-label="Project" className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-sm">
-            <Link to={`/projects/${projectId}/compare`} className="text-harbour underline-offset-2 hover:underline">
+            <Link to={`/projects/${projectId}/compare`} className="text-harbour underline-offset-2 underline hover:decoration-2">
               Compare runs
             </Link>
-            <Link to={`/projects/${projectId}/envelopes`} className="text-harbour underline-offset-2 hover:underline">
+            <Link to={`/projects/${projectId}/envelopes`} className="text-harbour underline-offset-2 underline hover:decoration-2">
               Inlet envelopes
             </Link>
-            <Link to={`/projects/${projectId}/members`} className="text-harbour underline-offset-2 hover:underline">
+            <Link to={`/projects/${projectId}/members`} className="text-harbour underline-offset-2 underline hover:decoration-2">
               Members and invitations
             </Link>
             {role === 'owner' && (
-              <Link to={`/projects/${projectId}/audit`} className="text-harbour underline-offset-2 hover:underline">
+              <Link to={`/projects/${projectId}/audit`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                 Audit trail
               </Link>
             )}

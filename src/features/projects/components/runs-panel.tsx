@@ -45,7 +45,7 @@ function SweepRunsRow({ projectId, row }: { projectId: number; row: SweepRow<Run
         <span className="rounded border border-rule px-1 text-xs text-ink-soft">sweep</span>
       </td>
       <td className="px-2">
-        <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="text-harbour underline-offset-2 hover:underline">
+        <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
           {row.name}
         </Link>
         : <span className="num text-xs text-ink-soft">{sweepRowSummary(row)}</span>
@@ -78,7 +78,7 @@ export function RunsPanel({ projectId }: { projectId: number }) {
         ) : undefined
       }
     >
-      {runs.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+      {runs.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
       {runs.isError && (
         <Notice tone="bad" title="Runs could not be loaded">
           {runs.error.message}
@@ -113,7 +113,7 @@ export function RunsPanel({ projectId }: { projectId: number }) {
               return (
                 <tr key={r.id} className="border-b border-rule/60">
                   <td className="num py-1">
-                    <Link to={`/projects/${projectId}/runs/${r.id}`} className="text-harbour underline-offset-2 hover:underline">
+                    <Link to={`/projects/${projectId}/runs/${r.id}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                       #{r.id}
                     </Link>
                   </td>

@@ -22,7 +22,7 @@ export function ScenariosPanel({ projectId, canEdit }: { projectId: number; canE
         ) : undefined
       }
     >
-      {scenarios.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />}
+      {scenarios.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />}
       {scenarios.isError && (
         <Notice tone="bad" title="Scenarios could not be loaded">
           {scenarios.error.message}
@@ -38,7 +38,7 @@ export function ScenariosPanel({ projectId, canEdit }: { projectId: number; canE
         <ul className="divide-y divide-rule/60 text-sm">
           {scenarios.data.scenarios.map((s) => (
             <li key={s.id} className="flex items-baseline justify-between gap-3 py-1.5">
-              <Link to={`/projects/${projectId}/scenarios/${s.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+              <Link to={`/projects/${projectId}/scenarios/${s.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
                 {s.name}
               </Link>
               <span className="text-xs text-ink-soft">{systemWords[s.scenario.system?.kind ?? ''] ?? s.scenario.system?.kind ?? ''}</span>

@@ -18,7 +18,7 @@ export function SweepsPanel({ projectId, canEdit }: { projectId: number; canEdit
         ) : undefined
       }
     >
-      {sweeps.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sweeps" />}
+      {sweeps.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sweeps" />}
       {sweeps.isError && (
         <Notice tone="bad" title="Sweeps could not be loaded">
           {sweeps.error.message}
@@ -37,7 +37,7 @@ export function SweepsPanel({ projectId, canEdit }: { projectId: number; canEdit
           {sweeps.data.sweeps.slice(0, 10).map((s) => (
             <li key={s.id} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 py-1.5">
               <div className="min-w-0">
-                <Link to={`/projects/${projectId}/sweeps/${s.id}`} className="text-harbour underline-offset-2 hover:underline">
+                <Link to={`/projects/${projectId}/sweeps/${s.id}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                   {s.name}
                 </Link>
                 <p className="text-xs text-ink-soft">

@@ -22,7 +22,7 @@ export function ReportToolbar({
   return (
     <div className="mx-auto mb-4 flex max-w-[62rem] flex-wrap items-center gap-2 text-sm print:hidden" data-testid="report-toolbar">
       {back && (
-        <Link to={back.to} className="mr-auto text-ink-soft hover:underline">
+        <Link to={back.to} className="mr-auto text-ink-soft underline hover:decoration-2">
           ← {back.label}
         </Link>
       )}

@@ -48,7 +48,7 @@ function HourView({
       {shown ? (
         children()
       ) : (
-        <div role="status" className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />
+        <div role="progressbar" className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />
       )}
     </Panel>
   );

@@ -38,7 +38,7 @@ export function RunPage() {
   const { canEdit } = useProjectRole(projectId);
   const { unitSystem } = useUnitSystem();
 
-  if (query.isPending) return <div role="status" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading run" />;
+  if (query.isPending) return <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading run" />;
   if (query.isError) {
     return (
       <Notice tone="bad" title="This run could not be opened">

@@ -108,7 +108,7 @@ export function RunPanel({
               <ul className="mt-1 space-y-0.5">
                 {queued.map((r) => (
                   <li key={r.id}>
-                    <Link className="text-harbour underline-offset-2 hover:underline" to={`/projects/${projectId}/runs/${r.id}`}>
+                    <Link className="text-harbour underline-offset-2 underline hover:decoration-2" to={`/projects/${projectId}/runs/${r.id}`}>
                       Run {r.id}: {r.scenario.name} · {r.climate.name}
                     </Link>
                   </li>

@@ -11,7 +11,7 @@ export function ScenarioRuns({ projectId, scenarioId }: { projectId: number; sce
   const done = runs.filter((r) => r.status === 'done' && r.sweepId === null);
   return (
     <Panel title="Runs of this scenario">
-      {isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
+      {isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
       {isError && <p className="text-xs text-signal-bad">Runs could not be loaded: {error?.message}</p>}
       {!isPending && runs.length === 0 && <p className="text-sm text-ink-soft">Not run yet.</p>}
       {entries.length > 0 && (
@@ -21,7 +21,7 @@ export function ScenarioRuns({ projectId, scenarioId }: { projectId: number; sce
               const row = entry.sweep;
               return (
                 <li key={`sweep-${row.sweepId}`} data-testid="scenario-sweep-row">
-                  <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="flex items-baseline justify-between gap-2 hover:underline">
+                  <Link to={`/projects/${projectId}/sweeps/${row.sweepId}`} className="flex items-baseline justify-between gap-2 underline hover:decoration-2">
                     <span>
                       <span className="rounded border border-rule px-1 text-xs text-ink-soft">sweep</span> {row.name}
                       <span className="num block text-xs text-ink-soft">{sweepRowSummary(row)}</span>
@@ -34,7 +34,7 @@ export function ScenarioRuns({ projectId, scenarioId }: { projectId: number; sce
             const r = entry.run;
             return (
               <li key={r.id}>
-                <Link to={`/projects/${projectId}/runs/${r.id}`} className="flex items-baseline justify-between gap-2 hover:underline">
+                <Link to={`/projects/${projectId}/runs/${r.id}`} className="flex items-baseline justify-between gap-2 underline hover:decoration-2">
                   <span>
                     <span className="num text-xs text-ink-faint">#{r.id}</span> {r.climate.site.name} · {r.climate.name}
                   </span>

@@ -36,7 +36,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
       <p role="status" className="text-xs text-signal-ok empty:hidden">
         {closed?.saved ? `Site “${closed.saved}” added.` : ''}
       </p>
-      {sites.isPending && <div role="status" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
+      {sites.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
       {sites.isError && (
         <Notice tone="bad" title="Sites could not be loaded">
           {sites.error.message}
@@ -71,7 +71,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
               {sites.data.sites.map((s) => (
                 <tr key={s.id} className="border-b border-rule/60">
                   <td className="py-1">
-                    <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 hover:underline">
+                    <Link to={`/projects/${projectId}/sites/${s.id}`} className="font-medium text-harbour underline-offset-2 underline hover:decoration-2">
                       {s.name}
                     </Link>
                   </td>

@@ -127,7 +127,7 @@ export function NewSweepPage() {
         </p>
       </header>
       {role && !canEdit && <Notice title="Viewers can read sweeps but not start them">Ask an engineer or owner of this project to start one.</Notice>}
-      {loading && <div role="status" className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading scenarios and climate files" />}
+      {loading && <div role="progressbar" className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading scenarios and climate files" />}
       {scenarios.isError && (
         <Notice tone="bad" title="Scenarios could not be loaded">
           {scenarios.error.message}

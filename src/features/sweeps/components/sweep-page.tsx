@@ -49,7 +49,7 @@ export function SweepPage() {
   const remove = useDeleteSweep(projectId, sweepId);
   const stop = useCancelSweep(projectId, sweepId);
 
-  if (query.isPending) return <div role="status" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading sweep" />;
+  if (query.isPending) return <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading sweep" />;
   if (query.isError) {
     return (
       <Notice tone="bad" title="This sweep could not be opened">

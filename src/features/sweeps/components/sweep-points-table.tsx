@@ -134,7 +134,7 @@ export function SweepPointsTable({
                 data-breaks-envelope={p.results?.breaksEnvelope ? 'yes' : undefined}
               >
                 <td className="num py-1 text-left">
-                  <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 hover:underline">
+                  <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                     {i + 1} · run #{p.runId}
                   </Link>
                 </td>
