@@ -52,6 +52,8 @@ export default defineConfig({
           globalSetup: ['tests/e2e/global-setup.ts'],
           testTimeout: 60_000,
           hookTimeout: 120_000,
+          // A page on a busy two-core machine can take seconds to settle: polls wait up to 15 s, not vitest's 1 s.
+          expect: { poll: { timeout: 15_000 } },
           fileParallelism: false,
         },
       },

@@ -19,7 +19,9 @@ export function executeRun({ scenario, series, options }: ExecuteRunInput): Exec
   // A run queued before engine 2.0.0 holds a scenario with retired inputs; it runs on their migration.
   const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
-  const run = runScenario(parsed.scenario, series, options);
+  // The migration removes a scenario's own elevation; with no site's elevation given (tests, old callers) it still serves.
+  const own = scenario !== null && typeof scenario === 'object' ? (scenario as { elevationM?: unknown }).elevationM : undefined;
+  const run = runScenario(parsed.scenario, series, { ...options, elevationM: options?.elevationM ?? (typeof own === 'number' ? own : undefined) });
   const { modes, mechanicalFraction, humidified } = run.classification;
   return { results: run.results, modes, mechanicalFraction, humidified };
 }

@@ -52,12 +52,12 @@ export function formatHourly({
   // (only its elevation is used here).
   const parsed = parseScenario(migrateScenario(scenario).scenario);
   if (!parsed.ok) throw new RangeError(`Invalid scenario: ${parsed.errors.join('; ')}`);
-  const { states } = outdoorStates(series, elevationM ?? parsed.scenario.elevationM);
+  // The run's site elevation (the climate snapshot's); a stored scenario no longer carries one once migrated.
+  const siteElevationM = elevationM ?? parsed.scenario.elevationM ?? 0;
+  const { states } = outdoorStates(series, siteElevationM);
   // A hybrid run stores only the hall's modes; its loops' columns come from classifying the loops again (the same
   // scenario, series and elevation give the same hours).
-  const loops = isHybrid(parsed.scenario)
-    ? hybridHourlyColumns(runScenario(parsed.scenario, series, { elevationM: elevationM ?? parsed.scenario.elevationM, utcOffsetMinutes }))
-    : null;
+  const loops = isHybrid(parsed.scenario) ? hybridHourlyColumns(runScenario(parsed.scenario, series, { elevationM: siteElevationM, utcOffsetMinutes })) : null;
   const hourly = hourlyCsvInput(series, { states, classification: { modes, mechanicalFraction, humidified } }, utcOffsetMinutes ?? 0, loops);
   if (format === 'json') return encoder.encode(JSON.stringify({ ...(about ? { run: about } : {}), ...hourlyJson(hourly) }));
   const chunks: Uint8Array[] = [];

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { importClimateText } from '../../shared/climate';
-import { parseScenario } from '../../shared/scenario';
+import { parseScenario, withoutOwnElevation } from '../../shared/scenario';
 import { saveClimateFile } from '../climate/store';
 import type { Tx } from '../db/client';
 import { runs, scenarios, sites } from '../db/schema';
@@ -51,7 +51,7 @@ export function seedDemoClimate(tx: Tx, projectId: number, createdBy: number | n
   for (const scenarioFile of demoScenarioFiles) {
     const parsed = parseScenario(JSON.parse(readFileSync(path.join(sampleFolder, 'scenarios', scenarioFile), 'utf8')));
     if (!parsed.ok) throw new Error(`Sample scenario ${scenarioFile} is not valid: ${parsed.errors.join('; ')}`);
-    const scenarioJson = JSON.stringify(parsed.scenario);
+    const scenarioJson = JSON.stringify(withoutOwnElevation(parsed.scenario));
     const scenario = tx.insert(scenarios).values({ projectId, name: parsed.scenario.name, scenarioJson, createdBy }).returning().get();
     for (const { file, site } of files) {
       tx.insert(runs)

@@ -128,13 +128,14 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
   return [
     route('get', '/projects/:projectId/climate-files', access.viewer, (req, res) => {
       const rows = db
-        .select({ file: climateFiles, siteName: sites.name })
+        .select({ file: climateFiles, siteName: sites.name, siteElevationM: sites.elevationM })
         .from(climateFiles)
         .innerJoin(sites, eq(sites.id, climateFiles.siteId))
         .where(eq(climateFiles.projectId, req.projectId!))
         .orderBy(desc(climateFiles.createdAt))
         .all();
-      res.json({ climateFiles: rows.map(({ file, siteName }) => listing(file, siteName)) });
+      // The site's elevation rides along: forms check a setpoint against the envelope derated for it.
+      res.json({ climateFiles: rows.map(({ file, siteName, siteElevationM }) => ({ ...listing(file, siteName), siteElevationM })) });
     }),
 
     route('post', '/projects/:projectId/sites/:siteId/climate-files/preview', access.engineer, rawUpload, async (req, res) => {

@@ -122,7 +122,9 @@ export function inviteRoutes(deps: AppDeps): RouteSpec[] {
       res.status(204).end();
     }),
 
-    route('post', '/invites/preview', access.signedIn, async (req, res) => {
+    // Public: an invitation link opened signed out names the project and the inviter before offering sign-in. The
+    // token is the secret; the answer holds nothing its holder could not read in the e-mail.
+    route('post', '/invites/preview', access.public, async (req, res) => {
       const { token } = tokenBody.parse(req.body ?? {});
       const row = await openInvite(token, clock());
       const project = db.select({ name: projects.name }).from(projects).where(eq(projects.id, row.projectId)).get();
@@ -134,7 +136,8 @@ export function inviteRoutes(deps: AppDeps): RouteSpec[] {
         email: row.email,
         invitedBy: inviter?.name ?? null,
         expiresAt: row.expiresAt.toISOString(),
-        forYou: row.email === req.user!.email.toLowerCase(),
+        signedIn: Boolean(req.user),
+        forYou: req.user ? row.email === req.user.email.toLowerCase() : false,
       });
     }),
 

@@ -27,8 +27,13 @@ export function projectRoutes(deps: AppDeps): RouteSpec[] {
   const { db } = deps;
   return [
     // Members see their projects with their role; an organisation admin sees every project, as owner where not a member.
-    route('get', '/projects', access.signedIn, (req, res) => {
-      const user = req.user!;
+    // A signed-out visitor gets an empty list, not a 401: every page asks for it, and a 401 would be logged on each.
+    route('get', '/projects', access.public, (req, res) => {
+      const user = req.user;
+      if (!user) {
+        res.json({ projects: [], signedIn: false });
+        return;
+      }
       const rows = db
         .select({ id: projects.id, name: projects.name, description: projects.description, role: memberships.role })
         .from(projects)

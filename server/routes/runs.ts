@@ -1,4 +1,4 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull } from 'drizzle-orm';
 import { z } from 'zod';
 import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
 import { MODE_NAMES } from '../../shared/scenario';
@@ -22,10 +22,12 @@ const maxRunsPerRequest = 200;
 
 /**
  * `?columns=modes,dryBulbC` picks columns of the hour-columns message (all of them when absent); `&bins=2` adds the
- * dry-bulb bins of that width (K) to its header.
+ * dry-bulb bins of that width (K) to its header, on a grid with an edge at `&binOrigin` (°C, 0 when absent; IP pages
+ * ask for 5 °F bins from 0 °F).
  */
 const hourColumnsQuery = z.object({
   bins: z.coerce.number().min(0.5, 'bins must be at least 0.5 K').max(10, 'bins must be at most 10 K').optional(),
+  binOrigin: z.coerce.number().min(-50, 'binOrigin must be at least -50 °C').max(50, 'binOrigin must be at most 50 °C').optional(),
   columns: z
     .string()
     .optional()
@@ -46,10 +48,38 @@ const createRunsInput = z
   .object({
     scenarioIds: z.array(z.number().int().positive()).min(1, 'scenarioIds must name at least one scenario'),
     climateFileIds: z.array(z.number().int().positive()).min(1, 'climateFileIds must name at least one climate file'),
+    /**
+     * Reuse a run of the same scenario inputs on the same file, site snapshot and engine that is queued, running or done
+     * (not a sweep point) instead of queueing it again ("Run on today and on the projection").
+     */
+    reuse: z.boolean({ error: 'reuse must be true or false' }).default(false),
   })
   .refine((r) => r.scenarioIds.length * r.climateFileIds.length <= maxRunsPerRequest, {
     message: `at most ${maxRunsPerRequest} runs per request`,
   });
+
+/**
+ * A run of exactly these inputs (scenario JSON, climate and site snapshot, engine version) that is queued, running or
+ * done, and not a sweep point; the newest. Reusing it gives the same results without computing them again.
+ */
+function identicalRun(tx: Pick<AppDeps['db'], 'select'>, values: typeof runs.$inferInsert): typeof runs.$inferSelect | undefined {
+  return tx
+    .select()
+    .from(runs)
+    .where(
+      and(
+        eq(runs.projectId, values.projectId),
+        eq(runs.climateFileId, values.climateFileId!),
+        eq(runs.scenarioJson, values.scenarioJson),
+        eq(runs.climateJson, values.climateJson),
+        eq(runs.engineVersion, values.engineVersion!),
+        inArray(runs.status, ['queued', 'running', 'done']),
+        isNull(runs.sweepId),
+      ),
+    )
+    .orderBy(desc(runs.id))
+    .get();
+}
 
 export function runRoutes(deps: AppDeps): RouteSpec[] {
   const { db, runQueue, pool } = deps;
@@ -92,6 +122,7 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         const site = db.select().from(sites).where(eq(sites.id, file.siteId)).get()!;
         return { file, site };
       });
+      const reused = new Set<number>();
       const created = db.transaction((tx) => {
         // Each run is counted at what it will store when done (its file's hours × RUN_BYTES_PER_HOUR), before any is queued.
         const neededBytes = chosen.length * files.reduce((sum, { file }) => sum + runBytes(file.hours), 0);
@@ -99,22 +130,15 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         requireStorage(tx, projectId, storageLimitOf(deps), neededBytes, count === 1 ? 'the run' : `these ${count} runs`);
         const rows = chosen.flatMap((scenarioRow) => {
           const scenario = validScenario(JSON.parse(scenarioRow.scenarioJson));
-          return files.map(({ file, site }) =>
-            tx
-              .insert(runs)
-              .values(
-                newRunValues({
-                  projectId,
-                  scenarioId: scenarioRow.id,
-                  scenarioJson: JSON.stringify(scenario),
-                  file,
-                  site,
-                  createdBy: req.user!.id,
-                }),
-              )
-              .returning()
-              .get(),
-          );
+          return files.map(({ file, site }) => {
+            const values = newRunValues({ projectId, scenarioId: scenarioRow.id, scenarioJson: JSON.stringify(scenario), file, site, createdBy: req.user!.id });
+            const same = input.reuse ? identicalRun(tx, values) : undefined;
+            if (same) {
+              reused.add(same.id);
+              return same;
+            }
+            return tx.insert(runs).values(values).returning().get();
+          });
         });
         recordRequestAudit(tx, req, 'run.start', rows.length === 1 ? `run ${rows[0].id}` : `${rows.length} runs`, {
           runIds: rows.map((r) => r.id),
@@ -123,11 +147,13 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
         });
         return rows;
       });
-      for (const run of created) runQueue.enqueue(run.id);
+      for (const run of created) if (!reused.has(run.id)) runQueue.enqueue(run.id);
+      // Each run as GET gives it, plus whether it is an earlier identical run reused rather than a new one.
+      const createdText = created.map((run) => `${runText({ run, sweepName: null }).slice(0, -1)},"reused":${reused.has(run.id)}}`);
       res
         .status(202)
         .type('json')
-        .send(`{"runs":[${created.map((run) => runText({ run, sweepName: null })).join(',')}]}`);
+        .send(`{"runs":[${createdText.join(',')}]}`);
     }),
 
     route('get', '/projects/:projectId/runs/:runId', access.viewer, (req, res) => {
@@ -153,12 +179,12 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
     // The run page's hourly views: typed columns in one binary message (shared/report/hour-columns.ts), made on the pool.
     route('get', '/projects/:projectId/runs/:runId/hour-columns', access.viewer, async (req, res) => {
       const run = runOr404(req.projectId!, req.params);
-      const { columns, bins } = hourColumnsQuery.parse(req.query);
+      const { columns, bins, binOrigin } = hourColumnsQuery.parse(req.query);
       const { series, modes, mechanicalFraction, humidified, climate } = storedRunHours(db, run);
       const gzip = /\bgzip\b/.test(req.get('accept-encoding') ?? '');
       const bytes = await pool.run(
         'hourColumns',
-        { series, elevationM: climate.elevationM, modes, mechanicalFraction, humidified, columns, gzip, binWidthK: bins },
+        { series, elevationM: climate.elevationM, modes, mechanicalFraction, humidified, columns, gzip, binWidthK: bins, binOriginC: binOrigin },
         {
           lane: 'interactive',
           signal: closedRequestSignal(res),

@@ -1,6 +1,6 @@
 import { and, desc, eq } from 'drizzle-orm';
 import { z } from 'zod';
-import { parseScenario, type Scenario } from '../../shared/scenario';
+import { parseScenario, withoutOwnElevation, type Scenario } from '../../shared/scenario';
 import { MODE_NAMES } from '../../shared/scenario';
 import { standardOffsetMinutes } from '../../shared/climate';
 import type { AppDeps } from '../app';
@@ -19,7 +19,8 @@ const previewInput = z.object({ scenario: z.unknown(), climateFileId: z.number()
 export function validScenario(input: unknown): Scenario {
   const parsed = parseScenario(input);
   if (!parsed.ok) throw new HttpError(400, 'invalid_scenario', parsed.errors.join('; '), { errors: parsed.errors });
-  return parsed.scenario;
+  // One elevation: the site's. A scenario file written for the command line may carry its own; it is not kept.
+  return withoutOwnElevation(parsed.scenario);
 }
 
 /** A saved scenario as the API gives it; `migration` lists what the start-up migration changed (null if never migrated). */

@@ -107,15 +107,30 @@ function chosen(
   } as QuantityAssignment;
 }
 
+/** The choice itself, without how sure or how described: what decides whether an override changed anything. */
+function choiceOf(mapping: object | null): string {
+  if (!mapping) return 'null';
+  const { confidence: _c, description: _d, reason: _r, header: _h, ...rest } = mapping as Record<string, unknown>;
+  return JSON.stringify(Object.entries(rest).sort(([a], [b]) => a.localeCompare(b)));
+}
+
+/**
+ * An override that repeats what was recognised (the mapping step sends every part back) keeps the recognition,
+ * so the report says "recognised" rather than "chosen by the user" for a choice nobody changed.
+ */
+function keepRecognised<T extends object>(recognised: T | null, overridden: T | null): T | null {
+  return recognised && overridden && choiceOf(recognised) === choiceOf(overridden) ? recognised : overridden;
+}
+
 /** Applies the overrides in place; errors go to the log. */
 export function applyMappingOverride(recognition: Recognition, override: Partial<ColumnMappingOverride>, headers: string[], log: IssueLog): void {
-  if (override.time) recognition.time = overrideTime(override.time, headers, log);
+  if (override.time) recognition.time = keepRecognised(recognition.time, overrideTime(override.time, headers, log));
   if (override.dryBulb) {
-    recognition.dryBulb = chosen({ ...override.dryBulb, quantity: 'dry-bulb' }, headers, log);
+    recognition.dryBulb = keepRecognised(recognition.dryBulb, chosen({ ...override.dryBulb, quantity: 'dry-bulb' }, headers, log));
   }
-  if (override.humidity) recognition.humidity = chosen(override.humidity, headers, log);
+  if (override.humidity) recognition.humidity = keepRecognised(recognition.humidity, chosen(override.humidity, headers, log));
   if (override.pressure === null) recognition.pressure = null;
-  else if (override.pressure) recognition.pressure = chosen({ ...override.pressure, quantity: 'pressure' }, headers, log);
+  else if (override.pressure) recognition.pressure = keepRecognised(recognition.pressure, chosen({ ...override.pressure, quantity: 'pressure' }, headers, log));
   for (const key of ['dryBulb', 'humidity', 'pressure'] as const) {
     const a = recognition[key];
     if (a) recognition.assumedUnits = recognition.assumedUnits.filter((u) => u.column !== a.column || a.confidence < 1);

@@ -61,8 +61,11 @@ export function dateOrderOf(cells: string[]): DateOrder {
   return separator === '/' ? 'MDY' : 'DMY';
 }
 
-function describeOrder(order: DateOrder): string {
-  return order === 'YMD' ? 'year-month-day' : order === 'DMY' ? 'day.month.year' : 'month/day/year';
+/** "day/month/year", "day.month.year": the order, written with the separator the file's dates use ('/' when none is seen). */
+export function describeOrder(order: DateOrder, cells: readonly string[] = []): string {
+  const separator = cells.map((cell) => /^\s*\d{1,2}([./-])\d{1,2}\1/.exec(cell)?.[1]).find((s) => s !== undefined) ?? (order === 'YMD' ? '-' : '/');
+  const parts = order === 'YMD' ? ['year', 'month', 'day'] : order === 'DMY' ? ['day', 'month', 'year'] : ['month', 'day', 'year'];
+  return parts.join(separator);
 }
 
 function detectTime(sample: Sample, parts: (TimePart | null)[]): TimeMapping | null {
@@ -87,7 +90,7 @@ function detectTime(sample: Sample, parts: (TimePart | null)[]): TimeMapping | n
       column: iso,
       dateOrder: orders[iso],
       confidence: canonical ? 1 : parts[iso] ? 0.95 : 0.8,
-      description: `one date-time column "${sample.headers[iso]}" (${orders[iso] === 'YMD' ? 'ISO 8601' : describeOrder(orders[iso])}, ${offsetWords})`,
+      description: `one date-time column "${sample.headers[iso]}" (${orders[iso] === 'YMD' ? 'ISO 8601' : describeOrder(orders[iso], cells[iso])}, ${offsetWords})`,
     };
   }
 
@@ -112,7 +115,7 @@ function detectTime(sample: Sample, parts: (TimePart | null)[]): TimeMapping | n
         timeColumn,
         dateOrder: orders[dateColumn],
         confidence: parts[dateColumn] && parts[timeColumn] ? 0.95 : 0.8,
-        description: `a date column "${sample.headers[dateColumn]}" (${describeOrder(orders[dateColumn])}) and a time column "${sample.headers[timeColumn]}"`,
+        description: `a date column "${sample.headers[dateColumn]}" (${describeOrder(orders[dateColumn], cells[dateColumn])}) and a time column "${sample.headers[timeColumn]}"`,
       };
     }
   }

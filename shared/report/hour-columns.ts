@@ -70,7 +70,7 @@ export interface HourColumnsHeader {
    * Asked for with `bins`: hours per mode and the mean coincident wet-bulb in dry-bulb bins, from the full-precision
    * states, so a page that shows only the bins needs no wet-bulb column.
    */
-  dryBulbBins?: BinTable & { widthK: number };
+  dryBulbBins?: BinTable & { widthK: number; originC: number };
   columns: Array<{ name: string; type: HourColumnType; offset: number; length: number }>;
 }
 

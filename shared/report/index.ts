@@ -6,3 +6,4 @@ export * from './hourly-json';
 export * from './mode-subsets';
 export * from './hour-columns';
 export * from './run-hour-columns';
+export * from './fan-groups';

@@ -43,6 +43,29 @@ function listText(list: unknown[]): string {
   return `${list.length} values, ${r(min)} to ${r(max)}, mean ${r(sum / list.length)}`;
 }
 
+/**
+ * A run's scenario inputs as rows, without an elevation of the scenario's own: a run uses its site's elevation
+ * (stated apart), so an old scenario's field would only be a second, unused elevation.
+ */
+export function scenarioInputRows(scenario: unknown): InputRow[] {
+  return flattenInputs(scenario).filter((row) => row.path !== 'elevationM');
+}
+
+/** One input that is not the same in every run: its path and each run's row (undefined where a run lacks it). */
+export interface DifferingInput {
+  path: string;
+  rows: (InputRow | undefined)[];
+}
+
+/** The inputs whose values differ between the scenarios (the name left out), in the order they first appear. */
+export function differingInputs(scenarios: readonly unknown[]): DifferingInput[] {
+  const perRun = scenarios.map((s) => new Map(scenarioInputRows(s).map((row) => [row.path, row])));
+  const paths = [...new Set(perRun.flatMap((m) => [...m.keys()]))].filter((p) => p !== 'name');
+  return paths
+    .map((path) => ({ path, rows: perRun.map((m) => m.get(path)) }))
+    .filter(({ rows }) => new Set(rows.map((r) => (r === undefined ? undefined : JSON.stringify(r.value)))).size > 1);
+}
+
 export function kindOfKey(key: string): InputKind {
   if (/ElevationM$|^elevationM$/.test(key)) return 'elevation';
   if (/C$/.test(key)) return 'temperature';

@@ -48,11 +48,11 @@ function rounded(values: ArrayLike<number>, decimals: number): Float32Array {
  * station pressure where the series has it, the standard atmosphere at the run's elevation elsewhere), rounded as
  * the hourly downloads write them, and the stored per-hour outcome as it was.
  */
-export function runHourColumns(input: RunHourInput, names: readonly HourColumnName[], options: { binWidthK?: number } = {}): Uint8Array {
+export function runHourColumns(input: RunHourInput, names: readonly HourColumnName[], options: { binWidthK?: number; binOriginC?: number } = {}): Uint8Array {
   const { series, elevationM, modes } = input;
   const n = series.timestampsMs.length;
   if (modes.length !== n) throw new RangeError(`modes has ${modes.length} hours but the series has ${n}`);
-  const { binWidthK } = options;
+  const { binWidthK, binOriginC = 0 } = options;
   const needsStates =
     binWidthK !== undefined || names.some((name) => ['humidityRatio', 'wetBulbC', 'dewPointC', 'rhPct', 'enthalpyKJPerKg', 'pressurePa'].includes(name));
   const outdoor = needsStates ? outdoorStates(series, elevationM) : null;
@@ -76,7 +76,9 @@ export function runHourColumns(input: RunHourInput, names: readonly HourColumnNa
       stepMs,
       sitePressurePa: chartPressurePa(series, elevationM),
       modeNames: MODE_NAMES,
-      ...(binWidthK === undefined ? {} : { dryBulbBins: { widthK: binWidthK, ...dryBulbBins(modes, series.dryBulbC, outdoor!.states.wetBulbC, binWidthK) } }),
+      ...(binWidthK === undefined
+        ? {}
+        : { dryBulbBins: { widthK: binWidthK, originC: binOriginC, ...dryBulbBins(modes, series.dryBulbC, outdoor!.states.wetBulbC, binWidthK, binOriginC) } }),
     },
     // timestamps first: float64 wants the 8-byte alignment every column starts at anyway
     stepMs === null ? { timestampsMs: series.timestampsMs, ...columns } : columns,

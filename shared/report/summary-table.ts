@@ -23,9 +23,11 @@ import {
 import type { LoopResults, ScenarioResults } from '../scenario/run';
 import type { HeatReuseResults } from '../scenario/heat-reuse';
 import { humidityReadingWords } from './humidity-reading';
-import { PARTIAL_YEAR_MARK, yearStatistics } from '../scenario/year-statistics';
+import { PARTIAL_YEAR_MARK, WORST_YEAR_TIE_RULE, YEAR_METRIC_INFO, YEAR_METRICS, YEAR_STATISTIC_ROWS, yearStatistics } from '../scenario/year-statistics';
 import { standardPeriod, utcOffsetLabel } from '../time-zone';
-import { flattenInputs, inputUnitSi } from './inputs';
+import { inputUnitSi, scenarioInputRows } from './inputs';
+import { pressureSourceWords } from './pressure-source';
+import { fanGroups } from './fan-groups';
 import type { ReportRun } from './report-data';
 
 export interface SummaryRow {
@@ -74,6 +76,15 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
       value: standardPeriod(run.climate.firstHourMs, run.climate.lastHourMs, run.site.utcOffsetMinutes),
     },
     { section: 'run', figure: 'Site standard time', unit: '', value: utcOffsetLabel(run.site.utcOffsetMinutes) },
+    { section: 'site', figure: 'Site elevation used', unit: 'm', value: r.site.elevationM },
+    { section: 'site', figure: 'Air pressure used', unit: '', value: pressureSourceWords(r.site) },
+    {
+      section: 'site',
+      figure: 'Hours with pressure from the standard atmosphere',
+      unit: 'h',
+      value: r.site.pressureSource === 'weather' ? r.site.pressureFilledHours : r.hours.total - r.hours.noData,
+    },
+    { section: 'site', figure: 'Envelope maximum dry-bulb after altitude derating', unit: '°C', value: rounded(r.envelope.dryBulbMaxC, 2) },
     ...(countsSubsets(r) ? [] : [{ section: 'run', figure: 'Not counted', unit: '', value: notCountedNote(run.engineVersion) }]),
     ...modeRows('hours', '', r.hours),
     { section: 'hours', figure: 'All hours', unit: 'h', value: r.hours.total },
@@ -83,7 +94,7 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     { section: 'excursions', figure: 'of which too dry', unit: 'h', value: r.excursions.lowHumidityHours },
     { section: 'excursions', figure: 'Longest excursion', unit: 'h', value: r.excursions.longestRunHours },
     { section: 'energy', figure: 'IT energy', unit: 'kWh', value: rounded(e.itKwh, 1) },
-    { section: 'energy', figure: 'Hall fans', unit: 'kWh', value: rounded(e.fanKwh, 1) },
+    ...fanGroups(e, run.scenario.system).map((g) => ({ section: 'energy', figure: g.label, unit: 'kWh', value: rounded(g.kwh, 1) })),
     { section: 'energy', figure: 'Compressors', unit: 'kWh', value: rounded(e.compressorKwh, 1) },
     { section: 'energy', figure: 'Pumps', unit: 'kWh', value: rounded(e.pumpKwh, 1) },
     { section: 'energy', figure: 'Basin heaters', unit: 'kWh', value: rounded(e.basinHeaterKwh, 1) },
@@ -120,7 +131,8 @@ export function runSummaryRows(run: ReportRun): SummaryRow[] {
     rows.push({ section: 'by year', figure: `${y.year}: cooling energy`, unit: 'kWh', value: rounded(y.coolingKwh, 1) });
     rows.push({ section: 'by year', figure: `${y.year}: water`, unit: 'L', value: rounded(y.waterL, 1) });
   }
-  for (const input of flattenInputs(run.scenario)) {
+  rows.push(...yearStatisticRows(r));
+  for (const input of scenarioInputRows(run.scenario)) {
     rows.push({
       section: 'inputs',
       figure: input.path,
@@ -169,6 +181,29 @@ function loopRows(r: ScenarioResults): SummaryRow[] {
       { section: 'heat reuse', figure: 'ERF (ISO/IEC 30134-6)', unit: '', value: rounded(reuse.erf, 4) },
       { section: 'heat reuse', figure: 'Note', unit: '', value: 'Heat available at the return, not a contract with a heat customer.' },
     );
+  }
+  return rows;
+}
+
+/** The year-to-year statistics the run page shows under its year table: each statistic of each quantity, its year, the worst year. */
+function yearStatisticRows(r: ScenarioResults): SummaryRow[] {
+  const stats = yearStatistics(r.hoursByYear);
+  const section = 'year statistics';
+  if (!stats.metrics) return [{ section, figure: 'Full calendar years', unit: '', value: 0 }];
+  const rows: SummaryRow[] = [{ section, figure: 'Full calendar years', unit: '', value: stats.fullYears.length }];
+  for (const statistic of YEAR_STATISTIC_ROWS) {
+    for (const metric of YEAR_METRICS) {
+      const info = YEAR_METRIC_INFO[metric];
+      const cell = statistic.cell(stats.metrics[metric]);
+      rows.push({ section, figure: `${statistic.label}: ${info.label}`, unit: info.unit, value: rounded(cell.value, info.unit === 'h' ? 0 : 1) });
+      if ('year' in cell) rows.push({ section, figure: `${statistic.label}: ${info.label}, year`, unit: '', value: cell.year });
+    }
+  }
+  if (stats.worst) {
+    rows.push({ section, figure: 'Worst year', unit: '', value: stats.worst.year });
+    rows.push({ section, figure: 'Worst year: mechanical', unit: 'h', value: stats.worst.mechanical });
+    if (stats.worst.tiedWith.length)
+      rows.push({ section, figure: 'Worst year: tied with', unit: '', value: `${stats.worst.tiedWith.join(' ')} (${WORST_YEAR_TIE_RULE})` });
   }
   return rows;
 }
@@ -232,12 +267,28 @@ export interface ComparedFigure {
   decimals: number;
   /** A count older engines did not make: a run without it shows NOT_COUNTED, not a blank. */
   notInOldRuns?: boolean;
+  /**
+   * Below this baseline (in the figure's unit, by size) a difference is not given as a percentage: a percentage of a
+   * near-zero base says nothing ("0.0 MWh → 1.0 MWh, +2356.3 %"). Defaults by unit: PERCENT_FLOOR.
+   */
+  percentFloor?: number;
   /** Shown indented under the figure before it ("of which …"); `standalone` names it where rows stand alone (CSV). */
   part?: boolean;
   /** A hybrid hall's figure: compared only when a run is a hybrid (– for the single systems beside it). */
   hybridOnly?: boolean;
   standalone?: string;
   value: (r: ComparableResults) => number | null;
+}
+
+/** Smallest baseline a percentage is given for, per unit: a day of hours, 1 MWh, 1 m³ of water, 10 kW; ratios always. */
+export const PERCENT_FLOOR: Record<string, number> = { h: 24, kWh: 1000, L: 1000, kW: 10, '': 0, 'L/kWh': 0.01 };
+
+/** A difference as a percentage of its baseline, or null where the baseline is missing or under the figure's floor. */
+export function differencePercent(figure: Pick<ComparedFigure, 'unit' | 'percentFloor'>, difference: number | null, base: number | null): number | null {
+  if (difference === null || base === null) return null;
+  const floor = figure.percentFloor ?? PERCENT_FLOOR[figure.unit] ?? 0;
+  if (base === 0 || Math.abs(base) < floor) return null;
+  return (100 * difference) / Math.abs(base);
 }
 
 /** Litres over the file scaled to 8,760 hours of data, as the run's own annual total is. */

@@ -29,6 +29,8 @@ export interface HourlyEnergy {
   cop: Float64Array;
   /** Hall fans plus heat-rejection or scavenger fans, kW. */
   fanKw: Float64Array;
+  /** The heat-rejection or scavenger fans' part of fanKw, kW (hall fans = fanKw − rejectionFanKw). */
+  rejectionFanKw: Float64Array;
   pumpKw: Float64Array;
   /** Cooling-tower basin heaters, kW (freeze-protection hours only). */
   basinHeaterKw: Float64Array;
@@ -86,6 +88,7 @@ export function hourlyEnergy(
     compressorKw: new Float64Array(n),
     cop: new Float64Array(n),
     fanKw: new Float64Array(n),
+    rejectionFanKw: new Float64Array(n),
     pumpKw: new Float64Array(n),
     basinHeaterKw: new Float64Array(n),
     rejectedKw: new Float64Array(n),
@@ -176,6 +179,7 @@ export function hourlyEnergy(
       outCompressorKw[i] = compressorKw;
     }
     outFanKw[i] = hallFanKw + rejectionFanKw;
+    if (rejectionFanKw > 0) out.rejectionFanKw[i] = rejectionFanKw;
     const pumpKw = affinityPowerKw(designPumpKw, speedFraction(load, pumpMinSpeedFraction));
     if (waterSide) outPumpKw[i] = pumpKw;
     outRejectedKw[i] = rejectedKw;

@@ -118,6 +118,7 @@ export function addLoopEnergy(liquid: HourlyEnergy, air: HourlyEnergy): HourlyEn
     compressorKw: sum(liquid.compressorKw, air.compressorKw),
     cop,
     fanKw: sum(liquid.fanKw, air.fanKw),
+    rejectionFanKw: sum(liquid.rejectionFanKw, air.rejectionFanKw),
     pumpKw: sum(liquid.pumpKw, air.pumpKw),
     basinHeaterKw: sum(liquid.basinHeaterKw, air.basinHeaterKw),
     rejectedKw: sum(liquid.rejectedKw, air.rejectedKw),

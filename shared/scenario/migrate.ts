@@ -39,6 +39,7 @@ const clamp = (x: number, lo: number, hi: number): number => Math.min(hi, Math.m
  *   energy.mechanicalCop at the rating conditions (mechanicalCop is kept).
  * - energy.blowdownRatio b → energy.cyclesOfConcentration = 1 + 1/b (b = 1 / (C − 1)), within 1.5…50.
  * - energy.towerEvaporationShare → removed; the evaporation follows the conditions.
+ * - elevationM → removed; a run uses its site's elevation (issue 17: the site's always won, the field misled).
  * Anything that is not an object, or lacks the fields, is passed through for the schema to judge.
  */
 export function migrateScenario(json: unknown): MigratedScenario {
@@ -139,6 +140,16 @@ export function migrateScenario(json: unknown): MigratedScenario {
       });
       delete energy.towerEvaporationShare;
     }
+  }
+
+  if ('elevationM' in scenario) {
+    changes.push({
+      path: 'elevationM',
+      before: scenario.elevationM,
+      after: undefined,
+      note: 'A run takes the elevation of its climate file’s site (for the air pressure where the file has none, and the envelope’s altitude derating); this scenario’s own elevation was never used there, so it is removed.',
+    });
+    delete scenario.elevationM;
   }
 
   if (changes.length === 0) return { scenario: json, changes };

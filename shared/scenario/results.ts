@@ -22,6 +22,11 @@ export interface ModeHours {
 export interface EnergyTotals {
   itKwh: number;
   fanKwh: number;
+  /**
+   * The heat-rejection fans' part of fanKwh (scavenger fans of an indirect system, dry-cooler or tower fans); the hall
+   * fans are the rest. Absent in runs stored before the split was kept (their fanKwh holds both groups).
+   */
+  rejectionFanKwh?: number;
   compressorKwh: number;
   pumpKwh: number;
   /** Cooling-tower basin heaters in freeze-protection hours. Engine 2.0.0 on. */
@@ -124,6 +129,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
   const yearIndex = new Map<number, YearTotals>();
   let itKwh = 0;
   let fanKwh = 0;
+  let rejectionFanKwh = 0;
   let compressorKwh = 0;
   let pumpKwh = 0;
   let basinHeaterKwh = 0;
@@ -150,6 +156,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
   const {
     itKw,
     fanKw,
+    rejectionFanKw,
     compressorKw,
     pumpKw,
     basinHeaterKw,
@@ -222,6 +229,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
     const blowdown = blowdownHour > 0 ? blowdownHour : 0;
     itKwh += itKw[i];
     fanKwh += fan;
+    rejectionFanKwh += rejectionFanKw[i];
     compressorKwh += compressor;
     pumpKwh += pump;
     basinHeaterKwh += heater;
@@ -263,6 +271,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
     energy: {
       itKwh,
       fanKwh,
+      rejectionFanKwh,
       compressorKwh,
       pumpKwh,
       basinHeaterKwh,
@@ -273,6 +282,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
         ? {
             itKwh: itKwh * scale,
             fanKwh: fanKwh * scale,
+            rejectionFanKwh: rejectionFanKwh * scale,
             compressorKwh: compressorKwh * scale,
             pumpKwh: pumpKwh * scale,
             basinHeaterKwh: basinHeaterKwh * scale,

@@ -85,19 +85,25 @@ export interface ScenarioRun {
 
 type Outdoor = ReturnType<typeof outdoorStates>;
 
+/** Run options once the site's elevation is known (from the options or the scenario). */
+type SiteRunOptions = RunOptions & { elevationM: number };
+
 /** Runs a scenario of any kind; a hybrid runs its two loops over the same outdoor states and joins them. */
 export function runScenario(scenario: Scenario, series: ScenarioSeries, options: RunOptions = {}): ScenarioRun {
   const n = series.dryBulbC.length;
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
   const elevationM = options.elevationM ?? scenario.elevationM;
+  if (elevationM === undefined)
+    throw new RangeError("elevationM: give the site's elevation (RunOptions.elevationM, or elevationM in a scenario run without a site)");
   const outdoor = outdoorStates(series, elevationM);
-  if (isHybrid(scenario)) return runHybrid(scenario, series, options, outdoor);
-  return runSingle(scenario as SingleScenario, series, options, outdoor);
+  const atSite: SiteRunOptions = { ...options, elevationM };
+  if (isHybrid(scenario)) return runHybrid(scenario, series, atSite, outdoor);
+  return runSingle(scenario as SingleScenario, series, atSite, outdoor);
 }
 
-function runSingle(scenario: SingleScenario, series: ScenarioSeries, options: RunOptions, outdoor: Outdoor, withEnergy = true): ScenarioRun {
+function runSingle(scenario: SingleScenario, series: ScenarioSeries, options: SiteRunOptions, outdoor: Outdoor, withEnergy = true): ScenarioRun {
   const n = series.dryBulbC.length;
-  const elevationM = options.elevationM ?? scenario.elevationM;
+  const { elevationM } = options;
   const sitePressurePa = standardPressurePa(elevationM);
   const { states, pressurePa, filledHours } = outdoor;
   const { envelope, system } = scenario;
@@ -208,6 +214,7 @@ function noEnergy(n: number): HourlyEnergy {
     compressorKw: zeros(),
     cop: zeros(),
     fanKw: zeros(),
+    rejectionFanKw: zeros(),
     pumpKw: zeros(),
     basinHeaterKw: zeros(),
     rejectedKw: zeros(),
@@ -222,7 +229,7 @@ function noEnergy(n: number): HourlyEnergy {
  * the joined classification, energy and water as the loops' sums, pPUE and WUE over the whole, heat reuse from the
  * liquid loop. A loop with share 0 is classified (its hours are shown) but carries no energy.
  */
-function runHybrid(scenario: HybridScenario, series: ScenarioSeries, options: RunOptions, outdoor: Outdoor): ScenarioRun {
+function runHybrid(scenario: HybridScenario, series: ScenarioSeries, options: SiteRunOptions, outdoor: Outdoor): ScenarioRun {
   const { system } = scenario;
   const share = system.liquidShare;
   const loops = loopScenarios(scenario);
@@ -302,8 +309,16 @@ const HOURS_PER_YEAR = 8760;
 function addEnergyTotals(x: EnergyResults, y: EnergyResults): EnergyResults {
   const keys = ['itKwh', 'fanKwh', 'compressorKwh', 'pumpKwh', 'basinHeaterKwh', 'coolingKwh'] as const;
   const sum = Object.fromEntries(keys.map((k) => [k, x[k] + y[k]])) as Record<(typeof keys)[number], number>;
-  const annual = x.annual && y.annual ? (Object.fromEntries(keys.map((k) => [k, x.annual![k] + y.annual![k]])) as Record<(typeof keys)[number], number>) : null;
-  return { ...sum, partialPue: sum.itKwh > 0 ? (sum.itKwh + sum.coolingKwh) / sum.itKwh : null, annual };
+  // The heat-rejection fans' part of fanKwh (absent only in results stored before the split).
+  const rejectionFanKwh = (x.rejectionFanKwh ?? 0) + (y.rejectionFanKwh ?? 0);
+  const annual =
+    x.annual && y.annual
+      ? {
+          ...(Object.fromEntries(keys.map((k) => [k, x.annual![k] + y.annual![k]])) as Record<(typeof keys)[number], number>),
+          rejectionFanKwh: (x.annual.rejectionFanKwh ?? 0) + (y.annual.rejectionFanKwh ?? 0),
+        }
+      : null;
+  return { ...sum, rejectionFanKwh, partialPue: sum.itKwh > 0 ? (sum.itKwh + sum.coolingKwh) / sum.itKwh : null, annual };
 }
 
 /** Two loops' water added; WUE over the whole, total litres / IT kWh (ISO/IEC 30134-9). */

@@ -221,7 +221,11 @@ export const energySchema = z.object({
 export const scenarioSchema = z
   .object({
     name: plainName,
-    elevationM: between(-500, 6000, 'm'),
+    /**
+     * Only for the command line, which runs without a site (its --elevation wins). A run in the workspace always takes
+     * its climate file's site's elevation; scenarios saved there carry none (migrateScenario removes an old one).
+     */
+    elevationM: between(-500, 6000, 'm').optional(),
     envelope: envelopeSchema,
     system: systemSchema,
     energy: energySchema,
@@ -246,6 +250,12 @@ export type HeatReuseInput = z.infer<typeof heatReuseSchema>;
 export type ScenarioEnvelope = Scenario['envelope'];
 export type ScenarioEnergy = Scenario['energy'];
 export type ItLoadProfile = z.infer<typeof itLoadProfileSchema>;
+
+/** A scenario as the workspace saves it: without an elevation of its own, since a run takes its site's. */
+export function withoutOwnElevation(scenario: Scenario): Scenario {
+  const { elevationM: _unused, ...rest } = scenario;
+  return rest;
+}
 
 export type ParseScenarioResult = { ok: true; scenario: Scenario } | { ok: false; errors: string[] };
 

@@ -6,7 +6,8 @@
  * Percentiles use the nearest-rank method (the P-th percentile of N ordered values is the value of
  * rank ⌈P/100 · N⌉, rank 1 the smallest), so every percentile is a year that really happened and
  * can be named. The median is the 50th percentile by the same rule (for an even count, the lower
- * of the two middle years). The spread's standard deviation is the sample one (divisor N − 1).
+ * of the two middle years). The spread is the range (largest minus smallest year); the standard
+ * deviation, given beside it, is the sample one (divisor N − 1).
  */
 import type { YearResults } from './results';
 
@@ -56,6 +57,34 @@ export interface YearStatistics {
   /** Null when no full year exists. */
   metrics: Record<YearMetric, MetricStatistics> | null;
   worst: WorstYear | null;
+}
+
+/** The quantities by name and SI unit, as the year table, the report and the summary CSV write them. */
+export const YEAR_METRIC_INFO: Record<YearMetric, { label: string; unit: 'h' | 'kWh' | 'L' }> = {
+  free: { label: 'Free cooling', unit: 'h' },
+  adiabatic: { label: 'Adiabatic assist', unit: 'h' },
+  mechanical: { label: 'Mechanical', unit: 'h' },
+  coolingKwh: { label: 'Cooling energy', unit: 'kWh' },
+  waterL: { label: 'Water', unit: 'L' },
+};
+
+/** The statistic rows under a year table, in order: the page, the report and the summary CSV share them. */
+export const YEAR_STATISTIC_ROWS: { key: string; label: string; title: string; cell: (s: MetricStatistics) => YearPoint | { value: number | null } }[] = [
+  { key: 'median', label: 'Median year', title: '50th percentile, nearest rank', cell: (s) => s.median },
+  { key: 'p10', label: 'P10 year', title: '10th percentile, nearest rank', cell: (s) => s.p10 },
+  { key: 'p90', label: 'P90 year', title: '90th percentile, nearest rank', cell: (s) => s.p90 },
+  { key: 'range', label: 'Spread (max − min)', title: 'largest minus smallest full year', cell: (s) => ({ value: s.range }) },
+  {
+    key: 'standardDeviation',
+    label: 'Standard deviation',
+    title: 'sample standard deviation over the full years (divisor N − 1)',
+    cell: (s) => ({ value: s.standardDeviation }),
+  },
+];
+
+/** The note under a year table on how the statistics are taken (page and report). */
+export function yearStatisticsNote(fullYears: number): string {
+  return `Statistics over ${fullYears} full calendar year${fullYears === 1 ? '' : 's'}. Percentiles by nearest rank: of N years ordered from the smallest value, the P-th percentile is the year of rank ⌈P/100 · N⌉, so each one is a year that happened (the median of an even count is the lower middle year). Each column is ordered on its own, so the median year for free cooling need not be the median year for water. The spread is the range from the smallest to the largest year; the standard deviation beside it is the sample one (divisor N − 1).`;
 }
 
 /** How a partial year is marked beside its row, on the run page, in the report and in the summary CSV. */

@@ -6,3 +6,4 @@ export * from './schema';
 export * from './prepare';
 export * from './zero-point';
 export * from './series';
+export * from './envelope-check';

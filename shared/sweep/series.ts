@@ -23,6 +23,13 @@ export interface SweepPointResults {
   peakMechanicalLoadKw: number;
   /** A hybrid hall's liquid-loop mechanical (trim-chiller) hours; absent for a single system. */
   liquidMechanicalHours?: number;
+  /** Hours with data whose supply air lies outside the inlet envelope (any reason). */
+  excursionHours: number;
+  /**
+   * The supply setpoint is outside the (altitude-derated) envelope, so every hour is an excursion: the point's
+   * hours per mode describe a design the envelope does not allow.
+   */
+  breaksEnvelope: boolean;
 }
 
 export interface SweepPoint {
@@ -45,6 +52,8 @@ export function pointResults(results: ScenarioResults): SweepPointResults {
     wueLPerKwh: results.water.wueLPerKwh,
     peakMechanicalLoadKw: results.peakMechanicalLoadKw,
     ...(results.loops ? { liquidMechanicalHours: results.loops.liquid.hours.mechanical } : {}),
+    excursionHours: results.excursions.hours,
+    breaksEnvelope: results.excursions.supplyAboveMaxHours > 0 || results.excursions.supplyBelowMinHours > 0,
   };
 }
 
@@ -83,6 +92,7 @@ export const SWEEP_METRICS = [
   'waterL',
   'peakMechanicalLoadKw',
   'liquidMechanical',
+  'excursionHours',
 ] as const;
 export type SweepMetric = (typeof SWEEP_METRICS)[number];
 
@@ -96,6 +106,7 @@ export const sweepMetricLabels: Record<SweepMetric, string> = {
   waterL: 'Water use',
   peakMechanicalLoadKw: 'Peak mechanical load',
   liquidMechanical: 'Liquid-loop mechanical hours',
+  excursionHours: 'Hours outside the envelope',
 };
 
 /** One metric of a finished point (SI: hours, litres, kW); null while it is not done. */
@@ -117,6 +128,8 @@ export function metricOf(results: SweepPointResults | null, metric: SweepMetric)
       return results.peakMechanicalLoadKw;
     case 'liquidMechanical':
       return results.liquidMechanicalHours ?? null;
+    case 'excursionHours':
+      return results.excursionHours;
   }
 }
 
@@ -171,6 +184,8 @@ export interface GridCell {
   done: boolean;
   /** The point has zero mechanical hours. */
   noMechanical: boolean;
+  /** The point's supply setpoint is outside the derated envelope (every hour an excursion). */
+  breaksEnvelope: boolean;
 }
 
 /** The grid of a two-input sweep: one cell per point, rows the first input, columns the second. */
@@ -179,7 +194,17 @@ export function gridCells(points: readonly SweepPoint[], rowInput: string, colum
     const row = p.values[rowInput as keyof SweepPointValues];
     const column = p.values[columnInput as keyof SweepPointValues];
     if (row === undefined || column === undefined) return [];
-    return [{ row, column, runId: p.runId, metric: metricOf(p.results, metric), done: p.results !== null, noMechanical: p.results?.hours.mechanical === 0 }];
+    return [
+      {
+        row,
+        column,
+        runId: p.runId,
+        metric: metricOf(p.results, metric),
+        done: p.results !== null,
+        noMechanical: p.results?.hours.mechanical === 0 && !p.results.breaksEnvelope,
+        breaksEnvelope: p.results?.breaksEnvelope ?? false,
+      },
+    ];
   });
 }
 

@@ -67,11 +67,12 @@ const router = createBrowserRouter([
       { path: 'projects/:projectId/sites/:siteId', lazy: () => import('./routes/site').then((m) => ({ Component: m.SiteRoute })) },
       // Sign-in, settings, members, invitations, audit trail and the local mailbox.
       { path: 'sign-in', element: <SignInPage /> },
+      // Open signed out too: the page names the project and the inviter, then offers sign-in.
+      { path: 'invites/accept', lazy: () => import('@/features/members/components/accept-invite-page').then((m) => ({ Component: m.AcceptInvitePage })) },
       {
         element: <RequireSignIn />,
         children: [
           { path: 'settings', lazy: () => import('@/features/auth/components/settings-page').then((m) => ({ Component: m.SettingsPage })) },
-          { path: 'invites/accept', lazy: () => import('@/features/members/components/accept-invite-page').then((m) => ({ Component: m.AcceptInvitePage })) },
           { path: 'projects/:projectId/members', lazy: () => import('@/features/members/components/members-page').then((m) => ({ Component: m.MembersPage })) },
           { path: 'projects/:projectId/audit', lazy: () => import('@/features/audit/components/audit-page').then((m) => ({ Component: m.AuditPage })) },
           { path: 'audit', lazy: () => import('@/features/audit/components/audit-page').then((m) => ({ Component: m.AuditPage })) },

@@ -10,7 +10,8 @@ export interface ProjectSummary {
   role: ProjectRole;
 }
 
-export const getProjects = () => apiFetch<{ projects: ProjectSummary[] }>('/projects');
+/** Signed out, the server answers an empty list with `signedIn: false` (not a 401, which every page would log). */
+export const getProjects = () => apiFetch<{ projects: ProjectSummary[]; signedIn?: false }>('/projects');
 
 /** The signed-in person's projects with their role in each; one cache entry for every screen. */
 export const projectsQueryOptions = () => queryOptions({ queryKey: ['projects'], queryFn: getProjects, retry: false });

@@ -38,7 +38,8 @@ export const presentations: Record<QuantityKind, Record<UnitSystem, Presentation
   },
   temperatureDifference: {
     SI: { unit: 'K', digits: 1, fromSi: identity, toSi: identity },
-    IP: { unit: '°F', digits: 1, fromSi: kelvinDifferenceToFahrenheit, toSi: fahrenheitDifferenceToKelvin },
+    // A difference reads as one: Δ°F, never a temperature's °F (issue 17).
+    IP: { unit: 'Δ°F', digits: 1, fromSi: kelvinDifferenceToFahrenheit, toSi: fahrenheitDifferenceToKelvin },
   },
   humidityRatio: {
     SI: { unit: 'g/kg', digits: 2, fromSi: (w) => w * 1000, toSi: (g) => g / 1000 },
@@ -95,6 +96,28 @@ export function numberFormat(decimals: number, locale = 'en'): Intl.NumberFormat
 /** A whole number with thousands separators ("262,800"), through the cached formatter. */
 export function formatCount(value: number): string {
   return numberFormat(0).format(value);
+}
+
+/**
+ * An energy in kWh as read: MWh with one decimal from 1 MWh up, kWh below it, so a small energy never reads "0.0 MWh".
+ * `signed` writes + before a positive value (a difference).
+ */
+export function energyText(kwh: number | null | undefined, signed = false): string {
+  if (kwh === null || kwh === undefined || !Number.isFinite(kwh)) return '–';
+  const sign = signed && kwh > 0 ? '+' : '';
+  if (Math.abs(kwh) < 1000) return `${sign}${kwh.toLocaleString('en', { maximumFractionDigits: Math.abs(kwh) < 10 ? 1 : 0 })} kWh`;
+  return `${sign}${(kwh / 1000).toLocaleString('en', { minimumFractionDigits: 1, maximumFractionDigits: 1 })} MWh`;
+}
+
+/** 1 ton of refrigeration = 12,000 Btu/h = 3.516 852 842 kW (1 Btu_IT/h = 0.293 071 07 W; NIST SP 811, 2008, App. B). */
+const KW_PER_TON_OF_REFRIGERATION = 3.516852842;
+const KBTU_PER_HOUR_PER_KW = 1 / 0.29307107;
+
+/** A cooling load: kW in SI; in IP also in tons of refrigeration and kBtu/h ("1,200 kW (341 tons of refrigeration, 4,095 kBtu/h)"). */
+export function coolingLoadText(kw: number, system: UnitSystem): string {
+  const whole = (v: number) => v.toLocaleString('en', { maximumFractionDigits: 0 });
+  if (system === 'SI') return `${whole(kw)} kW`;
+  return `${whole(kw)} kW (${whole(kw / KW_PER_TON_OF_REFRIGERATION)} tons of refrigeration, ${whole(kw * KBTU_PER_HOUR_PER_KW)} kBtu/h)`;
 }
 
 /** "21.4 °C" or "70.5 °F"; an en dash for a missing value. */

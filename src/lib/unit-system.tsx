@@ -5,6 +5,8 @@ export type UnitSystem = 'SI' | 'IP';
 interface UnitSystemContext {
   unitSystem: UnitSystem;
   setUnitSystem: (next: UnitSystem) => void;
+  /** Inside a LocalUnitSystem: switching changes this part of the page only, not the person's setting. */
+  local?: boolean;
 }
 
 const Context = createContext<UnitSystemContext | null>(null);
@@ -44,4 +46,16 @@ export function useUnitSystem(): UnitSystemContext {
   const value = useContext(Context);
   if (!value) throw new Error('useUnitSystem must be used inside UnitSystemProvider');
   return value;
+}
+
+/**
+ * A unit switch for one part of a page (a chart, a report): inside it, `useUnitSystem` gives the local choice, and
+ * its `setUnitSystem` changes only that part, never the person's setting. It starts from, and follows, the setting
+ * until the person switches it here. `isLocal` tells a switch to say it acts here only.
+ */
+export function LocalUnitSystem({ children }: { children: ReactNode }) {
+  const outer = useUnitSystem();
+  const [local, setLocal] = useState<UnitSystem | null>(null);
+  const value = useMemo(() => ({ unitSystem: local ?? outer.unitSystem, setUnitSystem: setLocal, local: true }), [local, outer.unitSystem]);
+  return <Context.Provider value={value}>{children}</Context.Provider>;
 }

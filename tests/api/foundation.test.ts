@@ -22,9 +22,14 @@ describe('a visitor checking the server', () => {
     expect(res.body.engineVersion).toBe('scenario-engine 2.0.0');
   });
 
-  it('is told to sign in before listing projects, in the one error shape', async () => {
-    const res = await request(t.app).get('/api/projects').expect(401);
+  it('is told to sign in before reading their settings, in the one error shape', async () => {
+    const res = await request(t.app).get('/api/me').expect(401);
     expect(res.body).toEqual({ error: { code: 'unauthenticated', message: 'Sign in to use this.' } });
+  });
+
+  it('gets an empty project list signed out, not a 401 that every signed-out page would log (issue 17)', async () => {
+    const res = await request(t.app).get('/api/projects').expect(200);
+    expect(res.body).toEqual({ projects: [], signedIn: false });
   });
 
   it('gets a JSON 404 for an API route that does not exist', async () => {

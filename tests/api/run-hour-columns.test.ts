@@ -101,6 +101,16 @@ describe("a run's hour columns", () => {
     }
   });
 
+  it('give the bins on another grid when asked: IP pages ask for 5 °F bins from 0 °F', async () => {
+    // 5 °F = 5/1.8 K and 0 °F = −32/1.8 °C (°F = 1.8 °C + 32, exact), sent as the JS numbers themselves.
+    const url = `/api/projects/${projectId}/runs/${runId}/hour-columns?columns=modes&bins=${5 / 1.8}&binOrigin=${-32 / 1.8}`;
+    const res = await binary(request(t.app).get(url).set(asPerson(viewer))).expect(200);
+    const table = decodeHourColumns(arrayBufferOf(res.body)).dryBulbBins!;
+    // three-days.csv runs from 6.3 to 22.0 °C (43.3 to 71.6 °F): bins [70, 75) °F down to [40, 45) °F, warmest first
+    expect(table.bins.map((b) => Math.round((b.fromC * 1.8 + 32) * 1e9) / 1e9)).toEqual([70, 65, 60, 55, 50, 45, 40]);
+    expect(table.bins.reduce((sum, b) => sum + b.total, 0)).toBe(72);
+  });
+
   it('refuse an unknown column, naming it', async () => {
     const res = await request(t.app).get(`/api/projects/${projectId}/runs/${runId}/hour-columns?columns=modes,dryBulbF`).set(asPerson(viewer)).expect(400);
     expect(res.body.error.message).toContain('"dryBulbF"');

@@ -3,6 +3,10 @@ import { describe, expect, it } from 'vitest';
 import type { RunListing } from '@/features/compare/api/get-runs';
 import { compareRuns } from '@/features/compare/utils/compare-runs';
 import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
+import { formatMetric } from '@/features/compare/components/metric-format';
+import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
+import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../shared/report/dry-bulb-bins';
+import { engineNoteText } from '@/lib/engine-notes';
 import { solveState } from '@/features/calculator/utils/state-request';
 import { stateRows } from '@/features/calculator/utils/state-rows';
 
@@ -83,6 +87,20 @@ describe('comparing runs against a baseline', () => {
     expect(csv).toContain('"Cooling energy per 8,760 h",MWh,400,,500,100');
   });
 
+  it('gives no percentage on a near-zero base, and small energies in kWh (issue 17: "0.0 MWh → 1.0 MWh, +2356.3 %")', () => {
+    // 42.5 kWh of cooling per 8,760 h against 1,044 kWh: a percentage of so small a base says nothing.
+    const small = [run(1, 80, 0, 1.0, 42.5), run(2, 80, 3, 1.001, 1044)];
+    const cooling = compareRuns(small, 1).find((r) => r.metric.key === 'cooling')!;
+    expect(cooling.cells[1].difference).toBeCloseTo(1001.5, 9);
+    expect(cooling.cells[1].differencePct).toBeNull();
+    // Mechanical hours 0 → 3: no percentage either (floor: a day of hours).
+    expect(compareRuns(small, 1).find((r) => r.metric.key === 'mechanical')!.cells[1].differencePct).toBeNull();
+    expect(formatMetric('mwh', 'SI', 42.5)).toBe('43 kWh');
+    expect(formatMetric('mwh', 'SI', 1044)).toBe('1.0 MWh');
+    expect(formatMetric('mwh', 'SI', 1001.5, true)).toBe('+1.0 MWh');
+    expect(formatMetric('mwh', 'SI', 0.4)).toBe('0.4 kWh');
+  });
+
   it('falls back to the first finished run when the baseline is not among them', () => {
     expect(compareRuns(runs, 99)[0].cells[0].difference).toBeNull();
     expect(compareRuns([], 1)).toEqual([]);
@@ -140,5 +158,57 @@ describe('the air-state calculator', () => {
     expect(Object.fromEntries(stateRows(out.state, 'IP').map((r) => [r.label, r.value]))['Frost point (over ice)']).toMatch(/16\.0 °F/);
     const warm = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '30', rhPct: '50' }, saturated: false }, 'SI');
     if (warm.ok) expect(Object.fromEntries(stateRows(warm.state, 'SI').map((r) => [r.label, r.value]))['Frost point (over ice)']).toBe('— (only below 0 °C)');
+  });
+});
+
+describe('engine notes follow the unit switch (issue 17 defect 6)', () => {
+  it('writes the supply-above-envelope note with the plain input name, in °F in IP', () => {
+    const note = "supplyAirC 28 °C is above the envelope's maximum dry-bulb 27 °C (derated for 1400 m): every hour is an excursion.";
+    // 28 °C × 9/5 + 32 = 82.4 °F; 27 °C = 80.6 °F; 1,400 m / 0.3048 = 4,593 ft (exact factors).
+    expect(engineNoteText(note, 'IP')).toBe(
+      "The supply setpoint 82.4 °F is above the envelope's maximum dry-bulb 80.6 °F (derated for the site's 4,593 ft): every hour is an excursion.",
+    );
+    expect(engineNoteText(note, 'SI')).toBe(
+      "The supply setpoint 28.0 °C is above the envelope's maximum dry-bulb 27.0 °C (derated for the site's 1,400 m): every hour is an excursion.",
+    );
+    expect(engineNoteText('12 hours have no usable data and are counted as no data.', 'IP')).toBe('12 hours have no usable data and are counted as no data.');
+  });
+});
+
+describe('IP that is whole (issue 17 defect 6)', () => {
+  it('gives a cooling load in tons of refrigeration and kBtu/h in IP, kW alone in SI', () => {
+    // 1 ton of refrigeration = 12,000 Btu/h = 3.516 852 842 kW; 1 kW = 3.412 141 6 kBtu/h (NIST SP 811, 2008, App. B).
+    expect(coolingLoadText(1000, 'SI')).toBe('1,000 kW');
+    expect(coolingLoadText(1000, 'IP')).toBe('1,000 kW (284 tons of refrigeration, 3,412 kBtu/h)');
+  });
+
+  it('bins IP dry-bulb in 5 °F bins with whole-degree edges, not 3.6 °F bins', () => {
+    // 21.1 °C is 70 °F, 23.9 °C is 75 °F, 26.7 °C is 80 °F (°F = 1.8 °C + 32, exact).
+    const dryBulbC = Float64Array.from([21.2, 21.5, 23.8, 24.0]);
+    const { bins } = dryBulbBins([0, 0, 0, 2], dryBulbC, dryBulbC, DRY_BULB_BIN_GRIDS.IP.widthK, DRY_BULB_BIN_GRIDS.IP.originC);
+    const edgesF = bins.map((b) => [
+      Math.round(toDisplay('temperature', 'IP', b.fromC) * 1e6) / 1e6,
+      Math.round(toDisplay('temperature', 'IP', b.toC) * 1e6) / 1e6,
+    ]);
+    expect(edgesF).toEqual([
+      [75, 80],
+      [70, 75],
+    ]);
+    expect(bins.map((b) => b.total)).toEqual([1, 3]);
+  });
+
+  it('writes a temperature difference as Δ°F', () => {
+    expect(formatQuantity('temperatureDifference', 'IP', 12)).toBe('21.6 Δ°F');
+  });
+});
+
+describe('calculator errors follow the unit switch (issue 17 defect 6)', () => {
+  it('names the inputs plainly and gives the values in °F in IP', () => {
+    // 86 °F = 30 °C and 77 °F = 25 °C (°F = 1.8 °C + 32, exact): a dew point above the dry-bulb is supersaturated.
+    const out = solveState({ basis: 'elevation', basisText: '0', properties: { dryBulbC: '77', dewPointC: '86' }, saturated: false }, 'IP');
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.message).toContain('dew point = 86.0 °F is above dry-bulb = 77.0 °F');
+    expect(out.message).not.toMatch(/dewPointC|°C/);
   });
 });

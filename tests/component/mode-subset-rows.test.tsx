@@ -60,6 +60,7 @@ function asOldRun(results: ScenarioResults): ScenarioResults {
 }
 
 const results = syntheticRun();
+const directAir = makeScenario('direct-air').system;
 
 let host: HTMLDivElement;
 let root: Root;
@@ -115,7 +116,7 @@ describe('"of which" rows on the run page', () => {
 
   it('give the water for humidification and for evaporative cooling in m³ (SI) and US gallons (IP)', () => {
     const w = results.water;
-    render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} />, 'SI');
+    render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'SI');
     expect(text('water-humidificationL')).toBe(
       `of which for humidification${(w.humidificationL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`,
     );
@@ -124,7 +125,7 @@ describe('"of which" rows on the run page', () => {
     );
     act(() => root.unmount());
     root = createRoot(host);
-    render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} />, 'IP');
+    render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'IP');
     const gallons = Math.round(w.humidificationL / US_GALLON_L).toLocaleString('en');
     expect(text('water-humidificationL')).toBe(`of which for humidification${gallons} US gal`);
     // The two parts make up the evaporated water.
@@ -165,7 +166,7 @@ describe('a run made before these were counted', () => {
   it('shows — for its water split, in IP too, and in the report', () => {
     render(
       <>
-        <EnergyWaterCards results={old} engineVersion="scenario-engine 1.0.0" />
+        <EnergyWaterCards results={old} engineVersion="scenario-engine 1.0.0" system={directAir} />
         <ModeHoursTable results={old} engineVersion="scenario-engine 1.0.0" />
       </>,
       'IP',

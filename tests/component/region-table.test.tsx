@@ -87,8 +87,8 @@ describe('RegionTable', () => {
   it('states the rules in IP with the same numbers', () => {
     const rules = regionRules(designAtSite(makeScenario('direct-air'), 0), 101_325, 'IP');
     act(() => root.render(<RegionTable rules={rules} hours={null} totalHours={0} countedBy="grid" />));
-    // 23 °C = 73.4 °F; a 1 K difference is 1.8 °F.
-    expect(rowsOf().free.text).toContain('at most 73.4 °F (the 75.2 °F supply less 1.8 °F of fan heat)');
+    // 23 °C = 73.4 °F; a 1 K difference is 1.8 °F, written Δ°F as every temperature difference is in IP.
+    expect(rowsOf().free.text).toContain('at most 73.4 °F (the 75.2 °F supply less 1.8 Δ°F of fan heat)');
     expect(rowsOf().free.hours).toBe('…');
   });
 

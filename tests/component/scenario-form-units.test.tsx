@@ -31,7 +31,7 @@ describe('scenario inputs in SI and IP', () => {
     expect(rangeText(supply.unit, 'SI', supply.min, supply.max)).toBe('5 to 45 °C');
     expect(rangeText(supply.unit, 'IP', supply.min, supply.max)).toBe('41 to 113 °F');
     const rise = systemFields.find((f) => f.path === 'system.itDeltaTK')!;
-    expect(rangeText(rise.unit, 'IP', rise.min, rise.max)).toBe('1.8 to 72 °F');
+    expect(rangeText(rise.unit, 'IP', rise.min, rise.max)).toBe('1.8 to 72 Δ°F');
     // −500…6000 m is −1,640.4…19,685.0 ft; shown as a person would type it.
     expect(rangeText('elevation', 'IP', -500, 6000)).toBe('-1,640 to 19,685 ft');
   });

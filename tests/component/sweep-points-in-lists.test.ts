@@ -109,7 +109,7 @@ describe('a sweep point in words', () => {
       ['IT load', '1,500 kW'],
     ]);
     // A temperature difference converts as one: 4 K × 9/5 = 7.2 °F (exact), no 32 °F offset.
-    expect(words({ 'system.approachK': 4 }, 'IP')).toBe('Approach = 7.2 °F');
+    expect(words({ 'system.approachK': 4 }, 'IP')).toBe('Approach = 7.2 Δ°F');
     expect(words({ 'system.evaporativeEffectiveness': 0.85 }, 'IP')).toBe('Evaporative effectiveness = 0.85');
   });
 

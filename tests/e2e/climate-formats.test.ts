@@ -77,7 +77,7 @@ describe('an engineer uploading an EPW file', () => {
       expect(await page.getByTestId('typical-year').innerText()).toContain('placed in 2001');
       await expect.poll(() => page.locator('figure svg').count(), { timeout: 20_000 }).toBeGreaterThanOrEqual(2);
       await h.shot('climate-file-epw-si', 300);
-      await page.getByRole('group', { name: 'Units' }).getByRole('button', { name: 'IP' }).click();
+      await h.useUnits('IP');
       await expect.poll(() => page.getByTestId('file-origin').innerText()).toContain('ft');
       await h.shot('climate-file-epw-ip', 300);
     },

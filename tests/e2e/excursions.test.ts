@@ -166,7 +166,7 @@ describe('an operator checking a proposed setpoint for excursions', () => {
     await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
     // 30 °C is 86 °F; the limit of 20 K/h is 36 °F/h.
     expect(await page.getByTestId('proposal-summary').innerText()).toContain('86.0 °F');
-    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 °F/h');
+    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 Δ°F/h');
     await h.shot('excursions-ip');
 
     // A setpoint typed in °F travels in SI: 77 °F is 25 °C.

@@ -85,6 +85,10 @@ describe('an engineer designing, running and comparing scenarios', () => {
     await h.useUnits('IP');
     await chartsDrawn(page);
     expect(await page.getByTestId('run-inputs').innerText()).toContain('75.2 °F');
+    // In IP the bins are 5 °F on a 0 °F grid, whole-degree edges (three-days.csv peaks at 22.0 °C = 71.6 °F, °F = 1.8 °C + 32).
+    const firstBin = () => page.getByTestId('bin-table').locator('tbody tr th').first().innerText();
+    await expect.poll(firstBin, { timeout: 30_000 }).toMatch(/^70(\.0)? to 75(\.0)?$/);
+    expect(await page.getByText('Bins of 5 °F of outdoor dry-bulb').count()).toBe(1);
     await h.shot('run-page-ip');
   });
 

@@ -14,7 +14,7 @@ describe('opening Tramontane in a browser', () => {
     await expect.poll(() => h.page.getByTestId('health').getAttribute('data-state')).toBe('up');
     expect(await h.page.getByTestId('health').innerText()).toContain('Server up');
     expect(await h.page.getByRole('heading', { name: 'Projects' }).isVisible()).toBe(true);
-    expect(await h.page.getByText('You are not signed in').isVisible()).toBe(true);
+    await expect.poll(() => h.page.getByText('You are not signed in').isVisible()).toBe(true);
     const fontsLoaded = await h.page.evaluate(async () => {
       await document.fonts.ready;
       return ['IBM Plex Sans', 'JetBrains Mono'].map((f) => document.fonts.check(`12px "${f}"`));

@@ -74,8 +74,10 @@ describe('signing in through the local provider', () => {
     expect(inviteLink).toMatch(new RegExp(`^${h.baseUrl}/invites/accept\\?token=`));
     await signOut();
     await h.page.goto(inviteLink!);
-    await h.page.getByText('You are not signed in').waitFor();
-    await h.page.getByRole('link', { name: 'Sign in' }).last().click();
+    // Signed out, the invitation names the project and who sent it, and offers to sign in.
+    await h.page.getByTestId('invite-signed-out').waitFor();
+    expect(await h.page.locator('main').innerText()).toMatch(/invited rafa\.underhill@consult\.example to Larchfield campus study \(demo\) as engineer/);
+    await h.page.getByRole('link', { name: 'Sign in to accept' }).click();
     await h.page.getByRole('heading', { name: 'Local sign-in' }).waitFor();
     await h.page.getByLabel('Name').fill('Rafa Underhill');
     await h.page.getByRole('textbox', { name: 'E-mail' }).fill('rafa.underhill@consult.example');

@@ -133,7 +133,7 @@ describe('an engineer sweeping the supply setpoint', () => {
     await page.goto(`${h.baseUrl}/projects/${projectId}/sweeps/new?scenario=${a2ScenarioId}`);
     await expect.poll(() => page.getByTestId('point-count').innerText(), { timeout: 10_000 }).toBe('13');
     expect(await page.getByLabel('From (°F)').inputValue()).toBe('64.4');
-    expect(await page.getByLabel('Step (°F)').inputValue()).toBe('1.8');
+    expect(await page.getByLabel('Step (Δ°F)').inputValue()).toBe('1.8');
     await h.shot('sweep-new-ip');
     await h.useUnits('SI');
   });

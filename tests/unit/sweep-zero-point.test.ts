@@ -14,7 +14,7 @@ describe('where mechanical hours reach zero', () => {
         [23, 0],
       ]),
     );
-    expect(zero).toEqual({ kind: 'from', index: 2, value: 22 });
+    expect(zero).toEqual({ kind: 'from', index: 2, value: 22, leftOut: [] });
     expect(zeroMechanicalText(zero, celsius)).toBe('Mechanical hours reach zero from 22 °C.');
   });
 
@@ -38,7 +38,7 @@ describe('where mechanical hours reach zero', () => {
         [26, 13],
       ]),
     );
-    expect(zero).toEqual({ kind: 'none', fewest: { index: 2, value: 24, mechanicalHours: 13 } });
+    expect(zero).toEqual({ kind: 'none', fewest: { index: 2, value: 24, mechanicalHours: 13 }, leftOut: [] });
     expect(zeroMechanicalText(zero, celsius)).toBe('No swept point reaches zero mechanical hours; the fewest are 13 h, first at 24 °C.');
   });
 
@@ -52,7 +52,7 @@ describe('where mechanical hours reach zero', () => {
           [5, 80],
         ]),
       ),
-    ).toEqual({ kind: 'up-to', index: 1, value: 3 });
+    ).toEqual({ kind: 'up-to', index: 1, value: 3, leftOut: [] });
   });
 
   it('says "at X" when zero comes and goes', () => {
@@ -64,7 +64,25 @@ describe('where mechanical hours reach zero', () => {
           [3, 2],
         ]),
       ),
-    ).toEqual({ kind: 'at', index: 1, value: 2 });
+    ).toEqual({ kind: 'at', index: 1, value: 2, leftOut: [] });
+  });
+
+  it('leaves out points whose supply setpoint breaks the envelope, and names them', () => {
+    // Issue 17: an 18–30 °C supply sweep on an envelope allowing 27 °C said "reach zero from 27.0 °C", so 28–30 °C looked best.
+    const points = [
+      [25, 40],
+      [26, 12],
+      [27, 3],
+      [28, 0],
+      [29, 0],
+      [30, 0],
+    ].map(([value, mechanicalHours]) => ({ value, mechanicalHours, breaksEnvelope: value > 27 }));
+    const zero = zeroMechanical(points);
+    expect(zero.kind).toBe('none');
+    expect(zero.leftOut.map((p) => p.value)).toEqual([28, 29, 30]);
+    expect(zeroMechanicalText(zero, celsius)).toBe(
+      "No swept point inside the envelope reaches zero mechanical hours; the fewest are 3 h, first at 27 °C. Left out: 28 °C, 29 °C and 30 °C, where the supply setpoint is outside the inlet envelope (derated for the site's elevation), so every hour of those points is an excursion.",
+    );
   });
 
   it('skips points not yet finished', () => {
@@ -77,8 +95,8 @@ describe('where mechanical hours reach zero', () => {
           [23, null],
         ]),
       ),
-    ).toEqual({ kind: 'from', index: 2, value: 22 });
-    expect(zeroMechanical(line([[20, null]]))).toEqual({ kind: 'none', fewest: null });
+    ).toEqual({ kind: 'from', index: 2, value: 22, leftOut: [] });
+    expect(zeroMechanical(line([[20, null]]))).toEqual({ kind: 'none', fewest: null, leftOut: [] });
     expect(zeroMechanicalText(zeroMechanical(line([[20, null]])), celsius)).toBe('No swept point reaches zero mechanical hours.');
   });
 });
@@ -109,6 +127,8 @@ describe('figures drawn from the points', () => {
         evaporativeCoolingL: null,
         wueLPerKwh: 0.1,
         peakMechanicalLoadKw: 300,
+        excursionHours: 0,
+        breaksEnvelope: false,
       },
     },
     { runId: 2, values: { 'system.supplyAirC': 22 }, status: 'running', progress: 0.5, error: null, results: null },

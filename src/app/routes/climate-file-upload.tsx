@@ -1,4 +1,5 @@
-import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
+import { useProjectRole } from '@/lib/projects';
 import { Notice } from '@/components/ui/notice';
 import { UploadWizard } from '@/features/climate-files/components/upload-wizard';
 import { useSites } from '@/features/sites/api/get-sites';
@@ -12,6 +13,7 @@ export function ClimateFileUploadRoute() {
   const navigate = useNavigate();
   const [search] = useSearchParams();
   const sites = useSites(projectId);
+  const { role, canEdit } = useProjectRole(projectId);
   if (!Number.isInteger(projectId) || projectId <= 0) return <NotFoundRoute />;
   return (
     <div className="space-y-4">
@@ -19,13 +21,24 @@ export function ClimateFileUploadRoute() {
         <ProjectCrumb projectId={projectId} />
         <h1 className="text-xl font-semibold">Upload a climate file</h1>
       </div>
-      {sites.isPending && <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading sites" />}
+      {sites.isPending && <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
       {sites.isError && (
         <Notice tone="bad" title="The project's sites could not be loaded">
           {sites.error.message}
         </Notice>
       )}
-      {sites.data && (
+      {role && !canEdit && (
+        <Notice title="Viewers can read climate files but not upload them">
+          <span data-testid="upload-read-only">
+            Your role in this project is {role}. Ask an engineer or owner to upload the file, or{' '}
+            <Link className="underline" to={`/projects/${projectId}`}>
+              go back to the project
+            </Link>{' '}
+            to read the files it has.
+          </span>
+        </Notice>
+      )}
+      {sites.data && canEdit && (
         <UploadWizard
           projectId={projectId}
           sites={sites.data.sites}

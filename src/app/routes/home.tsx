@@ -11,26 +11,27 @@ const roleWords = { owner: 'Owner', engineer: 'Engineer', viewer: 'Viewer' } as 
 
 export function HomeRoute() {
   const projects = useProjects();
-  const signedOut = projects.error instanceof ApiError && projects.error.status === 401;
+  const signedOut = projects.data?.signedIn === false || (projects.error instanceof ApiError && projects.error.status === 401);
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
       <div className="grid content-start gap-6">
         <Panel title="Projects">
-          {projects.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading projects" />}
-          {projects.isError &&
-            (signedOut ? (
-              <Notice title="You are not signed in">
-                <Link to="/sign-in" className="font-medium text-harbour underline">
-                  Sign in
-                </Link>{' '}
-                to see your projects.
-              </Notice>
-            ) : (
+          {projects.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading projects" />}
+          {signedOut ? (
+            <Notice title="You are not signed in">
+              <Link to="/sign-in" className="font-medium text-harbour underline">
+                Sign in
+              </Link>{' '}
+              to see your projects.
+            </Notice>
+          ) : (
+            projects.isError && (
               <Notice tone="bad" title="Projects could not be loaded">
                 {projects.error.message}
               </Notice>
-            ))}
-          {projects.data && projects.data.projects.length === 0 && (
+            )
+          )}
+          {!signedOut && projects.data && projects.data.projects.length === 0 && (
             <p className="text-sm text-ink-soft">No projects yet. Start one below, or ask a project owner to invite you.</p>
           )}
           {projects.data && projects.data.projects.length > 0 && (
@@ -61,9 +62,9 @@ export function HomeRoute() {
             </table>
           )}
         </Panel>
-        {projects.data && (
+        {projects.data && !signedOut && (
           <Panel title="Start a project">
-            <Suspense fallback={<div className="h-24 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the form" />}>
+            <Suspense fallback={<div role="progressbar" className="h-24 animate-pulse rounded bg-mist" aria-label="Loading the form" />}>
               <NewProjectForm />
             </Suspense>
           </Panel>

@@ -11,7 +11,7 @@ import {
   type OperatingRegionGrid,
 } from '../../../shared/scenario/operating-regions';
 import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
-import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
+import { LocalUnitSystem, useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ChartHover, hoverAt, type HoverPoint } from './chart-hover';
 import { placeLabels, textWidthPx, type LabelBox, type LabelRequest } from './label-placement';
 import {
@@ -72,7 +72,16 @@ const unitOptions = [
  * names the region and its rule and gives a cell's hours; and the table of regions beside it. Marks and
  * tooltips do not grow with the number of hours: the hours are binned, and only the hovered cell is put in words.
  */
-export function MoistAirChart({
+export function MoistAirChart(props: MoistAirChartProps) {
+  // The chart's own unit switch changes this chart only, never the person's setting (issue 17).
+  return (
+    <LocalUnitSystem>
+      <MoistAirChartBody {...props} />
+    </LocalUnitSystem>
+  );
+}
+
+function MoistAirChartBody({
   pressurePa,
   projection: fixedProjection,
   hours,
@@ -81,7 +90,7 @@ export function MoistAirChart({
   markers = [],
   compact = false,
 }: MoistAirChartProps) {
-  const { unitSystem, setUnitSystem } = useUnitSystem();
+  const { unitSystem, setUnitSystem, local } = useUnitSystem();
   const [chosenProjection, setProjection] = useState<ChartProjection>('dry-bulb-humidity-ratio');
   const projection = fixedProjection ?? chosenProjection;
 
@@ -331,7 +340,10 @@ export function MoistAirChart({
     <div className="space-y-2" data-testid="moist-air-chart">
       <div className="flex flex-wrap items-center gap-3">
         {!fixedProjection && !compact && <SegmentedSwitch label="Chart projection" options={projectionOptions} value={projection} onChange={setProjection} />}
-        {!compact && <SegmentedSwitch<UnitSystem> label="Units" options={unitOptions} value={unitSystem} onChange={setUnitSystem} />}
+        {!compact && (
+          <SegmentedSwitch<UnitSystem> label={local ? 'Units of this chart' : 'Units'} options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
+        )}
+        {!compact && local && <span className="text-xs text-ink-soft">(this chart only)</span>}
         <p className="num text-xs text-ink-soft">at {formatQuantity('pressure', unitSystem, pressurePa)}</p>
         {cells && <DensityKey maxHours={cells.maxHours} units={unitSystem} />}
         {envelopes.length > 0 && (

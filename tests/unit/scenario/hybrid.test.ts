@@ -230,11 +230,14 @@ describe('properties', () => {
   it('loop energies and water add up to the total, for shares across 0…1', () => {
     const series = YEAR(HOT_DRY_HIGH);
     for (const share of [0, 0.1, 0.35, 0.5, 0.8, 0.95, 1]) {
-      const { results } = runScenario(hybrid({ liquidShare: share, liquid: { heatRejection: 'cooling-tower' } }), series);
+      const { results, energy } = runScenario(hybrid({ liquidShare: share, liquid: { heatRejection: 'cooling-tower' } }), series);
       const { liquid, air } = results.loops!;
-      for (const key of ['itKwh', 'fanKwh', 'compressorKwh', 'pumpKwh', 'basinHeaterKwh', 'coolingKwh'] as const) {
-        expect(liquid.energy[key] + air.energy[key]).toBeCloseTo(results.energy[key], 6);
+      for (const key of ['itKwh', 'fanKwh', 'rejectionFanKwh', 'compressorKwh', 'pumpKwh', 'basinHeaterKwh', 'coolingKwh'] as const) {
+        expect(liquid.energy[key]! + air.energy[key]!).toBeCloseTo(results.energy[key]!, 6);
       }
+      // The tower's fans are the liquid loop's heat-rejection fans; the joined hours carry them as well as the totals.
+      if (share > 0) expect(liquid.energy.rejectionFanKwh).toBeGreaterThan(0);
+      expect(energy.rejectionFanKw.reduce((sum, kw) => sum + kw, 0)).toBeCloseTo(results.energy.rejectionFanKwh!, 6);
       expect(liquid.water.totalL + air.water.totalL).toBeCloseTo(results.water.totalL, 6);
       // pPUE and WUE over the whole hall (ISO/IEC 30134-2 style partial PUE; ISO/IEC 30134-9).
       expect(results.energy.partialPue).toBeCloseTo((results.energy.itKwh + results.energy.coolingKwh) / results.energy.itKwh, 12);

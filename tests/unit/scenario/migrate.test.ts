@@ -66,8 +66,20 @@ describe('migrateScenario', () => {
       'energy.blowdownRatio',
       'energy.cyclesOfConcentration',
       'energy.towerEvaporationShare',
+      'elevationM',
     ]);
     for (const change of changes) expect(change.note.length).toBeGreaterThan(20);
+  });
+
+  it('removes the scenario\'s own elevation, saying the site\'s is used (issue 17: "elevation is stated three ways")', () => {
+    expect(scenario).not.toHaveProperty('elevationM');
+    const change = changes.find((c) => c.path === 'elevationM');
+    expect(change).toMatchObject({ before: 120, after: undefined });
+    expect(change?.note).toContain('elevation of its climate file’s site');
+    // A scenario with nothing else retired still records the removal.
+    const { energy: _e, ...rest } = OLD;
+    const current = { ...rest, system: { ...OLD.system, fanHeatK: undefined }, energy: { itLoadKw: 1000, mechanicalCop: 5.5 } };
+    expect(migrateScenario(current).changes.map((c) => c.path)).toContain('elevationM');
   });
 
   it('does not modify its input, and passes a current scenario through with no changes', () => {

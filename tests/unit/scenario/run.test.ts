@@ -73,7 +73,7 @@ describe('worker task executeRun', () => {
   });
 
   it('rejects an invalid scenario, naming the field', () => {
-    expect(() => executeRun({ scenario: { ...scenario, elevationM: 'high' }, series: weather })).toThrow(/elevationM: must be a number/);
+    expect(() => executeRun({ scenario: { ...scenario, system: { ...scenario.system, supplyAirC: 'warm' } }, series: weather })).toThrow(/system.supplyAirC: /);
   });
 
   it('runs on a piscina thread with the hourly columns as typed arrays', { timeout: 30_000 }, async () => {

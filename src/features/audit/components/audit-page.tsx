@@ -107,7 +107,7 @@ export function AuditPage() {
           {audit.error.message}
         </Notice>
       )}
-      {audit.isPending && <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading audit trail" />}
+      {audit.isPending && <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading audit trail" />}
       {audit.isSuccess && (
         <Panel>
           {events.length === 0 ? (

@@ -16,7 +16,4 @@ export const sessionQueryOptions = () => queryOptions({ queryKey: ['session'], q
 
 export const useSession = () => useQuery(sessionQueryOptions());
 
-/** The address that starts sign-in and comes back to `returnTo` (a path on this site). */
-export function signInHref(returnTo: string): string {
-  return `/api/auth/sign-in?returnTo=${encodeURIComponent(returnTo)}`;
-}
+export { signInHref } from '@/lib/sign-in';

@@ -7,7 +7,7 @@ export function AccountMenu() {
   const session = useSession();
   const location = useLocation();
   const signOut = useSignOut();
-  if (session.isPending) return <span className="h-7 w-24 animate-pulse rounded bg-harbour-soft" role="progressbar" aria-label="Checking sign-in" />;
+  if (session.isPending) return <span role="progressbar" className="h-7 w-24 animate-pulse rounded bg-harbour-soft" aria-label="Checking sign-in" />;
   if (!session.data?.signedIn) {
     const here = location.pathname.startsWith('/sign-in') ? '/' : `${location.pathname}${location.search}`;
     return (

@@ -9,7 +9,7 @@ const time = (iso: string) => iso.slice(0, 16).replace('T', ' ');
 export function MailboxPage() {
   const mailbox = useMailbox();
   const [openId, setOpenId] = useState<string | null>(null);
-  if (mailbox.isPending) return <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading mailbox" />;
+  if (mailbox.isPending) return <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading mailbox" />;
   if (mailbox.isError)
     return (
       <Notice tone="bad" title="The mailbox could not be opened">

@@ -16,7 +16,7 @@ export function SettingsPage() {
   const signOutEverywhere = useSignOut(true);
   // The whole app follows the unit system at once; UnitSystemSync saves it to these settings.
   const { unitSystem, setUnitSystem } = useUnitSystem();
-  if (me.isPending) return <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading settings" />;
+  if (me.isPending) return <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading settings" />;
   if (me.isError)
     return (
       <Notice tone="bad" title="Settings could not be loaded">

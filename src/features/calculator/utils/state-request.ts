@@ -1,3 +1,4 @@
+import { plainEngineMessage } from '@/lib/engine-notes';
 import { fromDisplay, type QuantityKind } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { moistAirState, StateRequestError, type MoistAirRequest, type MoistAirState } from '../../../../shared/psychrometrics';
@@ -32,7 +33,7 @@ function parse(text: string | undefined): number | undefined | null {
 
 /**
  * The typed inputs as an engine request in SI, and the engine's answer. Only filled boxes are sent, so
- * the engine's phase rule decides what is too little or too much, and its message is shown as given.
+ * the engine's phase rule decides what is too little or too much; its message is shown with plain names, in the person's units.
  */
 export function solveState(input: CalculatorInput, system: UnitSystem): CalculatorOutcome {
   const request: MoistAirRequest = {};
@@ -52,8 +53,9 @@ export function solveState(input: CalculatorInput, system: UnitSystem): Calculat
   try {
     return { ok: true, state: moistAirState(request) };
   } catch (error) {
-    if (error instanceof StateRequestError) return { ok: false, message: error.message, problem: error.problem };
-    if (error instanceof RangeError) return { ok: false, message: error.message, problem: 'out-of-range' };
+    // The engine writes SI and field names; the person reads their units and plain names.
+    if (error instanceof StateRequestError) return { ok: false, message: plainEngineMessage(error.message, system), problem: error.problem };
+    if (error instanceof RangeError) return { ok: false, message: plainEngineMessage(error.message, system), problem: 'out-of-range' };
     throw error;
   }
 }

@@ -33,7 +33,7 @@ export function ClimateFileView({
   onDeleted?: () => void;
 }) {
   const detail = useClimateFile(projectId, fileId);
-  if (detail.isPending) return <div className="h-64 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the climate file" />;
+  if (detail.isPending) return <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />;
   if (detail.isError) {
     const notFound = detail.error instanceof ApiError && detail.error.status === 404;
     return (
@@ -152,7 +152,7 @@ function Loaded({
             {hours.error.message} Reload the page to try again.
           </Notice>
         ) : (
-          <div className="h-64 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the hours" />
+          <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the hours" />
         )}
       </Panel>
 
@@ -160,7 +160,7 @@ function Loaded({
         {chartHours ? (
           <MoistAirChart pressurePa={summary.meanPressurePa} hours={chartHours} />
         ) : (
-          <div className="h-96 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the chart" />
+          <div role="progressbar" className="h-96 animate-pulse rounded bg-mist" aria-label="Loading the chart" />
         )}
       </Panel>
 

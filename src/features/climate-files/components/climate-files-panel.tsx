@@ -34,7 +34,7 @@ export function ClimateFilesPanel({
         ) : undefined
       }
     >
-      {files.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading climate files" />}
+      {files.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading climate files" />}
       {files.isError && (
         <Notice tone="bad" title="Climate files could not be loaded">
           {files.error.message}

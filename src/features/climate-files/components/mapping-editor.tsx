@@ -243,7 +243,8 @@ export function MappingEditor({
       <Row
         label="Station pressure"
         htmlFor="map-pressure-col"
-        confidence={detected.pressure ? edited('pressure', detected.pressure.confidence) : undefined}
+        // Nothing detected and nothing chosen: no figure, not "set by you".
+        confidence={detected.pressure ? edited('pressure', detected.pressure.confidence) : draft.pressure ? undefined : null}
         reason={draft.pressure ? detected.pressure?.reason : "None: the site's elevation sets the pressure (standard atmosphere)."}
       >
         <ColumnSelect

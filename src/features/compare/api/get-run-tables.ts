@@ -6,10 +6,11 @@ type MonthRow = ModeHours & { month: number };
 
 /** The per-month and per-year tables of one finished run (the run list leaves them out). */
 export const getRunTables = async (projectId: number, runId: number) => {
-  const { run } = await apiFetch<{ run: { id: number; results: { hoursByMonth: MonthRow[]; hoursByYear: YearResults[] } | null } }>(
+  const { run } = await apiFetch<{ run: { id: number; scenario: unknown; results: { hoursByMonth: MonthRow[]; hoursByYear: YearResults[] } | null } }>(
     `/projects/${projectId}/runs/${runId}`,
   );
-  return { runId: run.id, hoursByMonth: run.results?.hoursByMonth ?? [], hoursByYear: run.results?.hoursByYear ?? [] };
+  // The scenario as run, for the inputs that differ between the compared runs.
+  return { runId: run.id, scenario: run.scenario, hoursByMonth: run.results?.hoursByMonth ?? [], hoursByYear: run.results?.hoursByYear ?? [] };
 };
 
 type RunTables = Awaited<ReturnType<typeof getRunTables>>;

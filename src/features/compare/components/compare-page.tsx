@@ -9,6 +9,7 @@ import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
 import { RunPicker } from './run-picker';
 import { YearSpreadTable } from './year-spread-table';
+import { DifferingInputs } from './differing-inputs';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { mixedEngineNote } from '../../../../shared/report/mode-subsets';
 
@@ -68,7 +69,7 @@ export function ComparePage() {
       </header>
       <div className="grid gap-4 xl:grid-cols-[26rem_minmax(0,1fr)]">
         <Panel title="Runs">
-          {runsQuery.isPending && <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading runs" />}
+          {runsQuery.isPending && <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
           {runsQuery.isError && (
             <Notice tone="bad" title="Runs could not be loaded">
               {runsQuery.error.message}
@@ -94,11 +95,14 @@ export function ComparePage() {
               <Panel title="Side by side">
                 <ComparisonTable rows={rows} runs={selected} baselineId={baselineId} />
               </Panel>
+              <Panel title="Inputs that differ">
+                <DifferingInputs runs={selected} scenarios={selected.map((r) => tables.find((t) => t?.runId === r.id)?.scenario)} />
+              </Panel>
               <Panel title="Hours per mode by month">
                 {monthlySeries ? (
                   <MonthlyComparisonChart series={monthlySeries} />
                 ) : (
-                  <div className="h-80 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading monthly hours" />
+                  <div role="progressbar" className="h-80 animate-pulse rounded bg-mist" aria-label="Loading monthly hours" />
                 )}
               </Panel>
               {anyMultiYear && (

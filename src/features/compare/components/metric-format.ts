@@ -1,4 +1,4 @@
-import { formatQuantity } from '@/lib/quantity';
+import { energyText, formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import type { Metric } from '../utils/compare-runs';
 
@@ -13,7 +13,7 @@ export function formatMetric(format: Metric['format'], system: UnitSystem, value
     case 'ratio':
       return n(value, 3);
     case 'mwh':
-      return `${n(value / 1000, 1)} MWh`;
+      return energyText(value, signed);
     case 'kw':
       return `${n(value, 0)} kW`;
     case 'wue':

@@ -1,5 +1,5 @@
 import type { RunListing } from '../api/get-runs';
-import { comparedFigures, type ComparedFigure } from '../../../../shared/report/summary-table';
+import { comparedFigures, differencePercent, type ComparedFigure } from '../../../../shared/report/summary-table';
 
 type Results = NonNullable<RunListing['results']>;
 
@@ -17,7 +17,7 @@ export interface ComparedCell {
   value: number | null;
   /** value − baseline value; null for the baseline itself or when either is missing. */
   difference: number | null;
-  /** difference as a percentage of the baseline; null when the baseline is 0 or missing. */
+  /** difference as a percentage of the baseline; null when the baseline is missing or under the figure's floor. */
   differencePct: number | null;
   /** Whether the difference is an improvement, a worsening, or neither. */
   verdict: 'better' | 'worse' | 'same' | 'none';
@@ -45,7 +45,7 @@ export function compareRuns(runs: RunListing[], baselineId: number): ComparedRow
           const value = metric.value(run.results!);
           const isBase = run.id === baseline.id;
           const difference = !isBase && value !== null && base !== null ? value - base : null;
-          const differencePct = difference !== null && base ? (100 * difference) / Math.abs(base) : null;
+          const differencePct = differencePercent(metric, difference, base);
           let verdict: ComparedCell['verdict'] = 'none';
           if (difference !== null && metric.better !== 'none') {
             const tolerance = Math.abs(base ?? 0) * 1e-9;

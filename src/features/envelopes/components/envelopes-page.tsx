@@ -124,7 +124,7 @@ export function EnvelopesPage() {
       <div className="grid gap-4 xl:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
         <div className="space-y-4">
           {presets.isPending ? (
-            <div className="h-64 animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Loading envelopes" />
+            <div role="progressbar" className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading envelopes" />
           ) : (
             group(
               'Published',

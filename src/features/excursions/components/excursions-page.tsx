@@ -4,7 +4,8 @@ import { Panel } from '@/components/ui/panel';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { proposalQuerySchema, type ProposalQuery } from '../../../../shared/excursions/proposal-query';
+import { proposalQuerySchema, RUN_ENVELOPE, type ProposalQuery } from '../../../../shared/excursions/proposal-query';
+import { deratedDryBulbMaxC, findEnvelopePreset } from '../../../../shared/scenario/envelopes';
 import { proposalSearch, useExcursions, type ExcursionsResponse } from '../api/get-excursions';
 import { CauseTable, ExcursionFigures, ModeChangeTable } from './excursion-figures';
 import { EnvelopesApplied, EventHistogram, XFactorTable } from './excursion-tables';
@@ -68,7 +69,7 @@ export function ExcursionsPage() {
         </div>
       </header>
 
-      {query.isPending && <div className="h-96 animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Working out excursions" />}
+      {query.isPending && <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Working out excursions" />}
       {query.isError && (
         <Notice tone="bad" title="The excursions could not be worked out">
           {query.error.message}{' '}
@@ -101,7 +102,18 @@ function Results({
     <>
       <div data-print="hide">
         <Panel title="Proposal">
-          <ProposalForm key={`${unitSystem}:${JSON.stringify(current)}`} current={current} onSubmit={onSubmit} busy={busy} />
+          <ProposalForm
+            key={`${unitSystem}:${JSON.stringify(current)}`}
+            current={current}
+            onSubmit={onSubmit}
+            busy={busy}
+            allowableMaxC={(id) => {
+              // The run's own envelope is known here only when it is the one the answer was worked out for.
+              const limits =
+                id === data.proposal.allowable.id ? data.proposal.allowable.limits : id === RUN_ENVELOPE ? null : (findEnvelopePreset(id)?.limits ?? null);
+              return limits ? deratedDryBulbMaxC(limits.dryBulbMaxC, data.run.elevationM, limits.altitudeDerating) : null;
+            }}
+          />
         </Panel>
       </div>
       <p className="text-sm" data-testid="proposal-summary">

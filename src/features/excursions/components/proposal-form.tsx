@@ -58,10 +58,13 @@ export function ProposalForm({
   current,
   onSubmit,
   busy,
+  allowableMaxC,
 }: {
   current: ProposalQuery & { supplyAirC: number };
   onSubmit: (q: ProposalQuery) => void;
   busy: boolean;
+  /** The chosen allowable class's maximum dry-bulb at the site, derated for its elevation, °C. */
+  allowableMaxC: (allowableId: string) => number | null;
 }) {
   const { unitSystem } = useUnitSystem();
   const unit = unitOf('temperature', unitSystem);
@@ -77,6 +80,13 @@ export function ProposalForm({
     },
   });
   const floats = watch('floats');
+  const ceilingText = watch('floatUpToC');
+  const allowableId = watch('allowable');
+  const ceilingC =
+    floats && ceilingText.trim() !== '' && Number.isFinite(Number(ceilingText)) ? fromDisplay('temperature', unitSystem, Number(ceilingText)) : null;
+  const allowedMaxC = allowableMaxC(allowableId);
+  // Compared at 0.05 K, so a ceiling typed in °F that rounds to the limit is not flagged.
+  const ceilingAbove = ceilingC !== null && allowedMaxC !== null && ceilingC > allowedMaxC + 0.05;
   const { errors } = formState;
   const box =
     'w-24 rounded border border-rule bg-panel px-2 py-1 text-right num disabled:bg-paper disabled:text-ink-soft focus-visible:outline-2 focus-visible:outline-harbour';
@@ -115,6 +125,12 @@ export function ProposalForm({
         {errors.floatUpToC && (
           <p className="text-xs text-signal-bad" role="alert">
             Float ceiling: {errors.floatUpToC.message}
+          </p>
+        )}
+        {ceilingAbove && (
+          <p className="rounded border border-signal-warn/50 bg-[#fdf3e1] px-2 py-1 text-xs" role="status" data-testid="float-ceiling-warning">
+            The float ceiling {shown(ceilingC!, unitSystem)} {unit} is above the allowable maximum {shown(allowedMaxC!, unitSystem)} {unit} of{' '}
+            {presetLabel(allowableId)} at this site (derated for its elevation): every hour the supply floats past it is an allowable excursion.
           </p>
         )}
       </div>

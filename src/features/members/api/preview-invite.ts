@@ -9,6 +9,8 @@ export interface InvitePreview {
   email: string;
   invitedBy: string | null;
   expiresAt: string;
+  /** Whether the person opening the link is signed in; signed out, `forYou` is false and the page offers sign-in. */
+  signedIn: boolean;
   forYou: boolean;
 }
 

@@ -1,22 +1,24 @@
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link, useLocation, useSearchParams } from 'react-router-dom';
+import { signInHref } from '@/lib/sign-in';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useAcceptInvite } from '../api/accept-invite';
 import { useInvitePreview } from '../api/preview-invite';
 
-/** Where an invitation link lands, after sign-in: what the invitation is, and the button to take it. */
+/** Where an invitation link lands: what the invitation is and who sent it; signed out, the way to sign in; signed in, the button to take it. */
 export function AcceptInvitePage() {
   const [params] = useSearchParams();
   const token = params.get('token') ?? '';
   const preview = useInvitePreview(token, token.length > 0);
   const accept = useAcceptInvite();
+  const location = useLocation();
   if (!token)
     return (
       <Notice tone="bad" title="This link has no invitation in it">
         Open the link from the e-mail again, whole.
       </Notice>
     );
-  if (preview.isPending) return <div className="h-32 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading invitation" />;
+  if (preview.isPending) return <div role="progressbar" className="h-32 animate-pulse rounded bg-mist" aria-label="Loading invitation" />;
   if (preview.isError)
     return (
       <Notice tone="bad" title="This invitation cannot be used">
@@ -43,7 +45,18 @@ export function AcceptInvitePage() {
               <strong>{invite.role}</strong>.
             </p>
             <p className="num text-xs text-ink-faint">Valid until {invite.expiresAt.slice(0, 16).replace('T', ' ')} UTC, once.</p>
-            {!invite.forYou && (
+            {!invite.signedIn && (
+              <div className="space-y-2" data-testid="invite-signed-out">
+                <p>Sign in as {invite.email} to accept it; you come back here after signing in.</p>
+                <a
+                  href={signInHref(`${location.pathname}${location.search}`)}
+                  className="inline-block rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft"
+                >
+                  Sign in to accept
+                </a>
+              </div>
+            )}
+            {invite.signedIn && !invite.forYou && (
               <Notice tone="warn" title="This invitation is for another address">
                 Sign out and sign in as {invite.email} to accept it.
               </Notice>
@@ -53,14 +66,16 @@ export function AcceptInvitePage() {
                 {accept.error.message}
               </Notice>
             )}
-            <button
-              type="button"
-              disabled={!invite.forYou || accept.isPending}
-              onClick={() => accept.mutate(token)}
-              className="rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft disabled:opacity-50"
-            >
-              Accept and join
-            </button>
+            {invite.signedIn && (
+              <button
+                type="button"
+                disabled={!invite.forYou || accept.isPending}
+                onClick={() => accept.mutate(token)}
+                className="rounded bg-harbour px-4 py-2 text-paper hover:bg-harbour-soft disabled:opacity-50"
+              >
+                Accept and join
+              </button>
+            )}
           </div>
         )}
       </Panel>

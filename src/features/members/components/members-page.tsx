@@ -15,7 +15,7 @@ export const roleHelp: Record<string, string> = {
 export function MembersPage() {
   const projectId = Number(useParams().projectId);
   const members = useMembers(projectId);
-  if (members.isPending) return <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading members" />;
+  if (members.isPending) return <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading members" />;
   if (members.isError)
     return (
       <Notice tone="bad" title="Members could not be loaded">

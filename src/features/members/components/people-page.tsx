@@ -7,7 +7,7 @@ import { useSetAdmin } from '../api/set-admin';
 export function PeoplePage() {
   const people = usePeople();
   const setAdmin = useSetAdmin();
-  if (people.isPending) return <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading people" />;
+  if (people.isPending) return <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading people" />;
   if (people.isError)
     return (
       <Notice tone="bad" title="People could not be loaded">

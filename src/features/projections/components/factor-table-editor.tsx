@@ -17,7 +17,8 @@ export function FactorTableEditor({
   humidityMethod: HumidityMethod;
 }) {
   const { unitSystem } = useUnitSystem();
-  const dT = unitOf('temperatureDifference', unitSystem);
+  // The heading already says ΔT, so the unit is written without a second Δ.
+  const dT = unitOf('temperatureDifference', unitSystem).replace('Δ', '');
   const humidityKey: FactorKey = humidityMethod === 'stretch' ? 'humidityChangePct' : 'humidityShiftGPerKg';
   const humidityUnit = humidityMethod === 'stretch' ? '% of q' : unitOf('humidityRatio', unitSystem);
   const columns: { key: FactorKey; label: string; unit: string; used: boolean }[] = [

@@ -7,7 +7,8 @@ const signed = (v: number, digits: number) => `${v > 0 ? '+' : v < 0 ? '−' : '
 /** The change factors a projection was made with, and the stretch α each month got from the parent's daily range. */
 export function FactorsView({ factors, alphaByMonth }: { factors: ChangeFactors; alphaByMonth: number[] }) {
   const { unitSystem } = useUnitSystem();
-  const dT = unitOf('temperatureDifference', unitSystem);
+  // The heading already says ΔT, so the unit is written without a second Δ.
+  const dT = unitOf('temperatureDifference', unitSystem).replace('Δ', '');
   const stretch = factors.dryBulbMethod === 'shift-and-stretch';
   const humidityByStretch = factors.humidityMethod === 'stretch';
   const t = (k: number) => signed(toDisplay('temperatureDifference', unitSystem, k), 1);

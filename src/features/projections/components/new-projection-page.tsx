@@ -45,7 +45,7 @@ export function NewProjectionPage() {
           </p>
         )}
       </header>
-      {files.isPending && <div className="h-64 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the climate file" />}
+      {files.isPending && <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the climate file" />}
       {files.isError && (
         <Notice tone="bad" title="The climate files could not be loaded">
           {files.error.message}

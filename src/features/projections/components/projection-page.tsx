@@ -11,6 +11,7 @@ import { ProjectionCaution } from './projection-caution';
 import { RunOnBothPanel } from './run-on-both-panel';
 import { UnitsSwitch } from './units-switch';
 import { Fact } from '@/components/ui/fact';
+import { rhBoundedNote } from '../utils/rh-bounded';
 
 /** /projects/:projectId/projections/:fileId — today and the projection side by side, the factors, and runs on both. */
 export function ProjectionPage() {
@@ -22,7 +23,7 @@ export function ProjectionPage() {
   return (
     <div className="space-y-4">
       <ProjectCrumb projectId={projectId} />
-      {projection.isPending && <div className="h-64 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the projection" />}
+      {projection.isPending && <div role="progressbar" className="h-64 animate-pulse rounded bg-mist" aria-label="Loading the projection" />}
       {projection.isError && (
         <Notice
           tone="bad"
@@ -88,11 +89,7 @@ function Loaded({ projectId, detail, canEdit }: { projectId: number; detail: Pro
           note={`${d.method}: dry-bulb by ${d.factors.dryBulbMethod === 'shift' ? 'shift' : 'shift and stretch'}, humidity through ${d.humidityQuantity}`}
         />
         <Fact label="Hours" value={file.hours.toLocaleString('en')} note={`${file.missingHours.toLocaleString('en')} without data, as in today's file`} />
-        <Fact
-          label="RH bounded"
-          value={`${bounded.toLocaleString('en')} h`}
-          note={`${d.clampedHighHours.toLocaleString('en')} to 100 %, ${d.clampedLowHours.toLocaleString('en')} to 0 %`}
-        />
+        <Fact label="Hours with RH held in 0–100 %" value={`${bounded.toLocaleString('en')} h`} note={rhBoundedNote(d.clampedHighHours, d.clampedLowHours)} />
         <Fact
           label="Years"
           value={file.years.length > 1 ? `${file.years[0]}–${file.years[file.years.length - 1]}` : String(file.years[0] ?? '–')}

@@ -26,7 +26,7 @@ export function RunOnBothPanel({
       </p>
     );
   }
-  if (scenarios.isPending) return <div className="h-10 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading scenarios" />;
+  if (scenarios.isPending) return <div role="progressbar" className="h-10 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />;
   if (scenarios.isError)
     return (
       <Notice tone="bad" title="Scenarios could not be loaded">
@@ -79,8 +79,12 @@ export function RunOnBothPanel({
         </Notice>
       )}
       {runs && baseline && (
-        <p>
-          Two runs queued.{' '}
+        <p data-testid="run-on-both-result">
+          {runs.every((r) => r.reused)
+            ? `Both runs already existed (runs #${runs.map((r) => r.id).join(' and #')}); they are reused, not run again.`
+            : runs.some((r) => r.reused)
+              ? `Run #${runs.find((r) => r.reused)!.id} already existed and is reused; run #${runs.find((r) => !r.reused)!.id} is queued.`
+              : 'Two runs queued.'}{' '}
           <Link
             to={`/projects/${projectId}/compare?runs=${runs.map((r) => r.id).join(',')}&baseline=${baseline.id}`}
             className="font-medium text-harbour underline"

@@ -22,7 +22,7 @@ export function MembersPanel({ projectId, members, error }: { projectId: number;
           {error.message}
         </Notice>
       )}
-      {!members && !error && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading members" />}
+      {!members && !error && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading members" />}
       {members && (
         <ul className="divide-y divide-rule/60 text-sm">
           {members.members.map((m) => (

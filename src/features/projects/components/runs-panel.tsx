@@ -78,7 +78,7 @@ export function RunsPanel({ projectId }: { projectId: number }) {
         ) : undefined
       }
     >
-      {runs.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading runs" />}
+      {runs.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
       {runs.isError && (
         <Notice tone="bad" title="Runs could not be loaded">
           {runs.error.message}

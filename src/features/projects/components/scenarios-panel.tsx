@@ -22,7 +22,7 @@ export function ScenariosPanel({ projectId, canEdit }: { projectId: number; canE
         ) : undefined
       }
     >
-      {scenarios.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading scenarios" />}
+      {scenarios.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading scenarios" />}
       {scenarios.isError && (
         <Notice tone="bad" title="Scenarios could not be loaded">
           {scenarios.error.message}

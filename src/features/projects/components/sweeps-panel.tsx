@@ -18,7 +18,7 @@ export function SweepsPanel({ projectId, canEdit }: { projectId: number; canEdit
         ) : undefined
       }
     >
-      {sweeps.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading sweeps" />}
+      {sweeps.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sweeps" />}
       {sweeps.isError && (
         <Notice tone="bad" title="Sweeps could not be loaded">
           {sweeps.error.message}

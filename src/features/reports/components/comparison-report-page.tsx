@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { useProjectRole } from '@/lib/projects';
-import { useUnitSystem } from '@/lib/unit-system';
+import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { comparisonSearch, useComparisonReport } from '../api/get-comparison-report';
 import { ComparisonReportDocument } from './comparison-report-document';
 import { comparisonDownloadLinks } from './report-downloads';
@@ -20,6 +20,15 @@ const idList = (text: string | null) =>
 
 /** /projects/:projectId/compare/report?runs=1,2&baseline=1 — the printable comparison. */
 export function ComparisonReportPage() {
+  // The report's unit switch sets the report's units only, not the person's setting (issue 17).
+  return (
+    <LocalUnitSystem>
+      <ComparisonReportPageBody />
+    </LocalUnitSystem>
+  );
+}
+
+function ComparisonReportPageBody() {
   const projectId = Number(useParams().projectId);
   const [search] = useSearchParams();
   const runsParam = search.get('runs');

@@ -1,6 +1,6 @@
 import { formatInputValue } from '@/components/ui/input-value';
 import type { UnitSystem } from '@/lib/unit-system';
-import { flattenInputs, type InputRow } from '../../../../shared/report/inputs';
+import { scenarioInputRows, type InputRow } from '../../../../shared/report/inputs';
 import { inputLabel } from '../../../../shared/scenario/input-labels';
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { ReportTable, SubHeading } from './report-layout';
@@ -22,7 +22,7 @@ const groups = [
  * one column each, and the rows where they differ marked.
  */
 export function InputsTable({ runs, unitSystem }: { runs: ReportRun[]; unitSystem: UnitSystem }) {
-  const perRun = runs.map((run) => new Map(flattenInputs(run.scenario).map((row) => [row.path, row])));
+  const perRun = runs.map((run) => new Map(scenarioInputRows(run.scenario).map((row) => [row.path, row])));
   const paths = [...new Set(perRun.flatMap((m) => [...m.keys()]))].filter((p) => p !== 'name');
   const several = runs.length > 1;
   return (

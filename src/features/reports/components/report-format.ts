@@ -1,5 +1,6 @@
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
+import { energyText } from '@/lib/quantity';
 
 const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
@@ -12,7 +13,8 @@ export function share(part: number, whole: number): string {
   if (part < whole && pct >= 99.95) return '> 99.9 %';
   return `${fixed(pct, 1)} %`;
 }
-export const mwh = (kwh: number | null | undefined) => (kwh === null || kwh === undefined ? '–' : `${fixed(kwh / 1000, 1)} MWh`);
+/** Energy as read: MWh from 1 MWh up, kWh below (energyText). */
+export const mwh = (kwh: number | null | undefined) => energyText(kwh);
 export const kw = (v: number) => `${fixed(v, 0)} kW`;
 export const ratio = (v: number | null | undefined, digits = 3) => (v === null || v === undefined ? '–' : fixed(v, digits));
 export const dateTime = (iso: string) => `${iso.slice(0, 16).replace('T', ' ')} UTC`;

@@ -49,7 +49,7 @@ export function ReportHourCharts({ run, downloadBase }: { run: ReportRun; downlo
     );
   }
   if (!chartHours || !hours.data)
-    return <div className="h-72 animate-pulse rounded bg-mist print:hidden" role="progressbar" aria-label="Loading the hourly charts" />;
+    return <div role="progressbar" className="h-72 animate-pulse rounded bg-mist print:hidden" aria-label="Loading the hourly charts" />;
   return (
     <div className="space-y-6" data-testid="report-hour-charts">
       <div className="keep-together space-y-2">

@@ -3,7 +3,7 @@ import { ApiError } from '@/lib/api-client';
 
 /** A sheet-shaped placeholder while the report loads. */
 export function ReportLoading() {
-  return <div className="mx-auto h-[40rem] max-w-[62rem] animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Loading report" />;
+  return <div role="progressbar" className="mx-auto h-[40rem] max-w-[62rem] animate-pulse rounded-md bg-mist" aria-label="Loading report" />;
 }
 
 /** Why a report cannot be shown, and what to do about it. */

@@ -18,7 +18,7 @@ export function ReportToolbar({
   downloads: DownloadLink[];
   share?: { open: boolean; toggle: () => void };
 }) {
-  const { unitSystem, setUnitSystem } = useUnitSystem();
+  const { unitSystem, setUnitSystem, local } = useUnitSystem();
   return (
     <div className="mx-auto mb-4 flex max-w-[62rem] flex-wrap items-center gap-2 text-sm print:hidden" data-testid="report-toolbar">
       {back && (
@@ -26,7 +26,8 @@ export function ReportToolbar({
           ← {back.label}
         </Link>
       )}
-      <SegmentedSwitch<UnitSystem> label="Units" options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
+      <SegmentedSwitch<UnitSystem> label={local ? 'Units of this report' : 'Units'} options={unitOptions} value={unitSystem} onChange={setUnitSystem} />
+      {local && <span className="text-xs text-ink-soft">(this report only; your setting stays)</span>}
       <DownloadMenu links={downloads} />
       {share && (
         <button type="button" aria-expanded={share.open} onClick={share.toggle} className="rounded border border-rule bg-panel px-3 py-1.5 hover:bg-mist">

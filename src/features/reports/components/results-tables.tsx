@@ -17,6 +17,8 @@ import {
 } from '../../../../shared/report/mode-subsets';
 import type { ModeHours, YearResults } from '../../../../shared/scenario/results';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
+import type { ScenarioSystem } from '../../../../shared/scenario/schema';
+import { fanGroups } from '../../../../shared/report/fan-groups';
 import { PARTIAL_YEAR_MARK, partialYearsSentence, yearStatistics } from '../../../../shared/scenario/year-statistics';
 import { hours, kw, mwh, ratio, share } from './report-format';
 import { Facts, ReportTable } from './report-layout';
@@ -147,7 +149,7 @@ export function YearTable({ years, unitSystem, engineVersion }: { years: YearRes
   );
 }
 
-export function EnergyTable({ results }: { results: ScenarioResults }) {
+export function EnergyTable({ results, system }: { results: ScenarioResults; system: ScenarioSystem }) {
   const e = results.energy;
   const a = e.annual;
   const row = (key: string, label: string, kwh: number, annual: number | undefined, strong = false) => ({
@@ -162,7 +164,7 @@ export function EnergyTable({ results }: { results: ScenarioResults }) {
         caption="Energy over the hours with data, and scaled to 8,760 hours"
         head={['Component', 'Over the file', 'Per 8,760 h', 'Share of cooling']}
         rows={[
-          row('fans', 'Hall fans', e.fanKwh, a?.fanKwh),
+          ...fanGroups(e, system).map((g) => row(g.key, g.label, g.kwh, g.annualKwh ?? undefined)),
           row('compressors', 'Compressors', e.compressorKwh, a?.compressorKwh),
           row('pumps', 'Pumps', e.pumpKwh, a?.pumpKwh),
           ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [row('basin', 'Basin heaters', e.basinHeaterKwh, a?.basinHeaterKwh)] : []),

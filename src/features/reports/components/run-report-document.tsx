@@ -1,3 +1,4 @@
+import { engineNoteText } from '@/lib/engine-notes';
 import { standardDay, utcOffsetLabel } from '../../../../shared/time-zone';
 import { hallAirSystem } from '../../../../shared/scenario/hybrid';
 import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
@@ -75,7 +76,7 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
           <Notice tone="warn" title="Notes from the engine">
             <ul className="list-disc pl-5">
               {r.warnings.map((w) => (
-                <li key={w}>{w}</li>
+                <li key={w}>{engineNoteText(w, unitSystem)}</li>
               ))}
             </ul>
           </Notice>
@@ -122,7 +123,7 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
         </div>
         <div className="keep-together space-y-2">
           <SubHeading>Energy</SubHeading>
-          <EnergyTable results={r} />
+          <EnergyTable results={r} system={run.scenario.system} />
         </div>
         <div className="keep-together space-y-2">
           <SubHeading>Water</SubHeading>

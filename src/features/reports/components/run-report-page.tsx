@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { runDownloadLinks } from '@/components/ui/download-menu';
 import { useProjectRole } from '@/lib/projects';
-import { useUnitSystem } from '@/lib/unit-system';
+import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { useRunReport } from '../api/get-run-report';
 import { ReportError, ReportLoading } from './report-states';
 import { ReportToolbar } from './report-toolbar';
@@ -11,6 +11,15 @@ import { ShareLinksPanel } from './share-links-panel';
 
 /** /projects/:projectId/runs/:runId/report — the printable report of one run. */
 export function RunReportPage() {
+  // The report's unit switch sets the report's units only, not the person's setting (issue 17).
+  return (
+    <LocalUnitSystem>
+      <RunReportPageBody />
+    </LocalUnitSystem>
+  );
+}
+
+function RunReportPageBody() {
   const params = useParams();
   const projectId = Number(params.projectId);
   const runId = Number(params.runId);

@@ -162,7 +162,7 @@ export function ShareLinksPanel({
         )}
         <div className="mt-4">
           <h3 className="text-sm font-semibold">Links to this report</h3>
-          {links.isPending && <div className="mt-1 h-10 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading links" />}
+          {links.isPending && <div role="progressbar" className="mt-1 h-10 animate-pulse rounded bg-mist" aria-label="Loading links" />}
           {links.isError && (
             <Notice tone="bad" title="Links could not be loaded">
               {links.error.message}

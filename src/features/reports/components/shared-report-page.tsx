@@ -2,7 +2,7 @@ import { useParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { runDownloadLinks } from '@/components/ui/download-menu';
 import { ApiError } from '@/lib/api-client';
-import { useUnitSystem } from '@/lib/unit-system';
+import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { useSharedReport } from '../api/get-shared-report';
 import { comparisonDownloadLinks } from './report-downloads';
 import { ComparisonReportDocument } from './comparison-report-document';
@@ -41,6 +41,15 @@ function Refused({ error, token }: { error: Error; token: string }) {
 
 /** /shared/:token — a report someone shared read-only: public until a date, or for the project's members. */
 export function SharedReportPage() {
+  // The report's unit switch sets the report's units only, not the person's setting (issue 17).
+  return (
+    <LocalUnitSystem>
+      <SharedReportPageBody />
+    </LocalUnitSystem>
+  );
+}
+
+function SharedReportPageBody() {
   const token = useParams().token ?? '';
   const query = useSharedReport(token);
   const { unitSystem } = useUnitSystem();

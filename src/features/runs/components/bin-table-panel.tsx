@@ -7,13 +7,22 @@ import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
 import { ModeSwatch } from '@/components/ui/mode-marks';
 import { modeKeys, modeLabels } from '../../../../shared/modes';
-import type { BinTable, DryBulbBin } from '../../../../shared/report/dry-bulb-bins';
+import { DRY_BULB_BIN_GRIDS, type BinTable, type DryBulbBin } from '../../../../shared/report/dry-bulb-bins';
+import { useRunDryBulbBins } from '../api/get-run-hour-columns';
 
 const column = createColumnHelper<DryBulbBin>();
+const noBins: DryBulbBin[] = [];
 
-/** 2 K dry-bulb bins × hours per mode, with the mean coincident wet-bulb (made on the server); sortable by any column, downloadable as CSV. */
-export function BinTablePanel({ table, fileStem }: { table: BinTable; fileStem: string }) {
+/**
+ * Dry-bulb bins × hours per mode, with the mean coincident wet-bulb (made on the server); sortable by any column,
+ * downloadable as CSV. Bins are chosen for the unit, not converted: the page's 2 K bins in SI, 5 °F bins on a 0 °F grid
+ * in IP (whole-degree edges), asked for when IP is chosen.
+ */
+export function BinTablePanel({ siTable, projectId, runId, fileStem }: { siTable: BinTable; projectId: number; runId: number; fileStem: string }) {
   const { unitSystem } = useUnitSystem();
+  const grid = DRY_BULB_BIN_GRIDS[unitSystem];
+  const ipTable = useRunDryBulbBins(projectId, runId, DRY_BULB_BIN_GRIDS.IP, unitSystem === 'IP');
+  const table = unitSystem === 'IP' ? ipTable.data : siTable;
   const tUnit = unitOf('temperature', unitSystem);
   const [sorting, setSorting] = useState<SortingState>([]);
   const columns = useMemo(() => {
@@ -44,7 +53,7 @@ export function BinTablePanel({ table, fileStem }: { table: BinTable; fileStem: 
     ];
   }, [unitSystem, tUnit]);
   const view = useReactTable({
-    data: table.bins,
+    data: table?.bins ?? noBins,
     columns,
     state: { sorting },
     onSortingChange: setSorting,
@@ -75,13 +84,19 @@ export function BinTablePanel({ table, fileStem }: { table: BinTable; fileStem: 
     <div>
       <div className="mb-2 flex items-center justify-between">
         <p className="text-xs text-ink-soft">
-          Bins of 2 K ({unitSystem === 'IP' ? '3.6 °F' : '2 °C'}) of outdoor dry-bulb, warmest first; choose a heading to sort by it.
-          {table.hoursWithoutDryBulb > 0 && ` ${formatCount(table.hoursWithoutDryBulb)} hours without a dry-bulb are left out.`}
+          Bins of {grid.label} of outdoor dry-bulb, warmest first; choose a heading to sort by it.
+          {table && table.hoursWithoutDryBulb > 0 && ` ${formatCount(table.hoursWithoutDryBulb)} hours without a dry-bulb are left out.`}
         </p>
         <button type="button" onClick={csv} className="rounded border border-rule px-3 py-1 text-xs hover:bg-mist">
           Download CSV
         </button>
       </div>
+      {unitSystem === 'IP' && ipTable.isPending && <p className="text-xs text-ink-soft">Loading the 5 °F bins…</p>}
+      {unitSystem === 'IP' && ipTable.isError && (
+        <p role="alert" className="text-xs text-signal-bad">
+          The 5 °F bins could not be loaded: {ipTable.error.message}
+        </p>
+      )}
       <div className="max-h-[28rem] overflow-auto">
         <table className="num w-full text-right text-xs" data-testid="bin-table">
           <thead className="sticky top-0 bg-panel">

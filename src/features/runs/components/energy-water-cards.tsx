@@ -1,10 +1,12 @@
 import { Panel } from '@/components/ui/panel';
-import { formatQuantity } from '@/lib/quantity';
+import { coolingLoadText, energyText, formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { countsSubsets, NOT_COUNTED, notCountedShort, waterPartL, waterPartsShown } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
+import type { ScenarioSystem } from '../../../../shared/scenario/schema';
+import { fanGroups } from '../../../../shared/report/fan-groups';
 
-const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
+const mwh = (kwh: number) => energyText(kwh);
 const kw = (v: number) => `${v.toLocaleString('en', { maximumFractionDigits: 0 })} kW`;
 
 function Figure({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
@@ -20,14 +22,14 @@ function Figure({ label, value, note, testId }: { label: string; value: string; 
 }
 
 /** Partial PUE, WUE, peak mechanical load and the energy and water behind them. */
-export function EnergyWaterCards({ results, engineVersion }: { results: ScenarioResults; engineVersion: string }) {
+export function EnergyWaterCards({ results, engineVersion, system }: { results: ScenarioResults; engineVersion: string; system: ScenarioSystem }) {
   const { unitSystem } = useUnitSystem();
   const e = results.energy;
   const w = results.water;
   const counted = countsSubsets(results);
   const parts = waterPartsShown(w, counted);
   const rows = [
-    { label: 'Hall fans', kwh: e.fanKwh },
+    ...fanGroups(e, system).map((g) => ({ label: g.label, kwh: g.kwh })),
     { label: 'Compressors', kwh: e.compressorKwh },
     { label: 'Pumps', kwh: e.pumpKwh },
     // Only towers in freeze protection use them; runs before engine 2.0.0 have no such figure.
@@ -38,7 +40,12 @@ export function EnergyWaterCards({ results, engineVersion }: { results: Scenario
       <Panel title="Energy">
         <div className="grid grid-cols-2 gap-2 2xl:grid-cols-3">
           <Figure label="Partial PUE (cooling)" value={e.partialPue?.toFixed(3) ?? '–'} note="(IT + cooling) / IT energy" testId="ppue" />
-          <Figure label="Peak mechanical load" value={kw(results.peakMechanicalLoadKw)} note={`compressors peak ${kw(results.peakCompressorKw)} electric`} />
+          <Figure
+            label="Peak mechanical load"
+            value={kw(results.peakMechanicalLoadKw)}
+            note={`${unitSystem === 'IP' ? `${coolingLoadText(results.peakMechanicalLoadKw, 'IP').replace(/^[^(]*\(|\)$/g, '')}; ` : ''}compressors peak ${kw(results.peakCompressorKw)} electric`}
+            testId="peak-load"
+          />
           <Figure label="Cooling energy" value={mwh(e.coolingKwh)} note={e.annual ? `${mwh(e.annual.coolingKwh)} per 8,760 h` : undefined} />
         </div>
         <table className="mt-3 w-full text-sm">

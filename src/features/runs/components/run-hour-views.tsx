@@ -48,7 +48,7 @@ function HourView({
       {shown ? (
         children()
       ) : (
-        <div className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} role="progressbar" aria-label={`Loading ${what}: ${title}`} />
+        <div role="progressbar" className="animate-pulse rounded-md bg-mist" style={{ height: heightPx }} aria-label={`Loading ${what}: ${title}`} />
       )}
     </Panel>
   );
@@ -151,7 +151,7 @@ export function RunHourViews({ run }: { run: RunRecord }) {
         )}
       </HourView>
       <HourView title="Dry-bulb bins" what="table" shown={turn('bins')} heightPx={420}>
-        {() => <BinTablePanel table={data!.bins} fileStem={stem} />}
+        {() => <BinTablePanel siTable={data!.bins} projectId={run.projectId} runId={run.id} fileStem={stem} />}
       </HourView>
     </div>
   );

@@ -2,7 +2,7 @@ import { formatQuantity } from '@/lib/quantity';
 import { standardPeriod, utcOffsetLabel } from '../../../../shared/time-zone';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '../api/get-run';
-import { flattenInputs } from '../../../../shared/report/inputs';
+import { scenarioInputRows } from '../../../../shared/report/inputs';
 import { formatInputValue } from '@/components/ui/input-value';
 import { inputLabel } from '../../../../shared/scenario/input-labels';
 import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
@@ -10,7 +10,7 @@ import { humidityReadingWords } from '../../../../shared/report/humidity-reading
 /** Everything the run was computed from, exactly as stored with it: scenario, climate file, engine. */
 export function RunInputs({ run }: { run: RunRecord }) {
   const { unitSystem } = useUnitSystem();
-  const rows = flattenInputs(run.scenario);
+  const rows = scenarioInputRows(run.scenario);
   const c = run.climate;
   return (
     <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">

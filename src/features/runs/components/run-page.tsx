@@ -7,6 +7,7 @@ import { useRun, type RunRecord } from '../api/get-run';
 import { useProjectRole } from '@/lib/projects';
 import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
+import { engineNoteText } from '@/lib/engine-notes';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { EnergyWaterCards } from './energy-water-cards';
 import { HeatReuseCard } from './heat-reuse-card';
@@ -37,7 +38,7 @@ export function RunPage() {
   const { canEdit } = useProjectRole(projectId);
   const { unitSystem } = useUnitSystem();
 
-  if (query.isPending) return <div className="h-96 animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Loading run" />;
+  if (query.isPending) return <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading run" />;
   if (query.isError) {
     return (
       <Notice tone="bad" title="This run could not be opened">
@@ -111,7 +112,7 @@ export function RunPage() {
             <Notice tone="warn" title="Notes from the engine">
               <ul className="list-disc pl-5">
                 {results.warnings.map((w) => (
-                  <li key={w}>{w}</li>
+                  <li key={w}>{engineNoteText(w, unitSystem)}</li>
                 ))}
               </ul>
             </Notice>
@@ -122,7 +123,7 @@ export function RunPage() {
               <MonthlyModeChart byMonth={results.hoursByMonth} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} engineVersion={run.engineVersion} />
             </Panel>
           </div>
-          <EnergyWaterCards results={results} engineVersion={run.engineVersion} />
+          <EnergyWaterCards results={results} engineVersion={run.engineVersion} system={run.scenario.system} />
           <HybridLoopsPanel results={results} zoneLabel={utcOffsetLabel(run.climate.utcOffsetMinutes)} engineVersion={run.engineVersion} />
           {results.heatReuse && <HeatReuseCard reuse={results.heatReuse} />}
           {results.hoursByYear.length > 1 && (

@@ -7,8 +7,9 @@ import {
   PARTIAL_YEAR_MARK,
   partialYearsSentence,
   WORST_YEAR_TIE_RULE,
+  YEAR_STATISTIC_ROWS,
   yearStatistics,
-  type MetricStatistics,
+  yearStatisticsNote,
   type YearMetric,
   type YearPoint,
 } from '../../../../shared/scenario/year-statistics';
@@ -25,13 +26,7 @@ const statColumns: { metric: YearMetric; format: (v: number, system: UnitSystem)
   { metric: 'waterL', format: (v, system) => formatQuantity('water', system, v, false) },
 ];
 
-const statRows: { label: string; title: string; cell: (s: MetricStatistics) => YearPoint | { value: number | null } }[] = [
-  { label: 'Median year', title: '50th percentile, nearest rank', cell: (s) => s.median },
-  { label: 'P10 year', title: '10th percentile, nearest rank', cell: (s) => s.p10 },
-  { label: 'P90 year', title: '90th percentile, nearest rank', cell: (s) => s.p90 },
-  { label: 'Spread (max − min)', title: 'largest minus smallest full year', cell: (s) => ({ value: s.range }) },
-  { label: 'Standard deviation', title: 'sample standard deviation over the full years (divisor N − 1)', cell: (s) => ({ value: s.standardDeviation }) },
-];
+const statRows = YEAR_STATISTIC_ROWS;
 
 /**
  * Hours, cooling energy and water for each calendar year of a multi-year file, then the median, P10 and
@@ -146,12 +141,7 @@ function YearNotes({ stats }: { stats: ReturnType<typeof yearStatistics> }) {
           .
         </p>
       )}
-      <p>
-        Statistics over {n} full calendar year{n === 1 ? '' : 's'}. Percentiles by nearest rank: of N years ordered from the smallest value, the P-th percentile
-        is the year of rank ⌈P/100 · N⌉, so each one is a year that happened (the median of an even count is the lower middle year). Each column is ordered on
-        its own, so the median year for free cooling need not be the median year for water. Spread is the sample standard deviation (divisor N − 1) and the
-        range from the smallest to the largest year.
-      </p>
+      <p>{yearStatisticsNote(n)}</p>
       {stats.partialYears.length > 0 && <p>{partialYearsSentence(stats.partialYears)}</p>}
       {!stats.metrics && <p>No full calendar year in this file, so no year statistics.</p>}
     </div>

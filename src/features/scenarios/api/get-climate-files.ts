@@ -5,6 +5,8 @@ export interface ClimateFileListing {
   id: number;
   siteId: number;
   siteName: string;
+  /** The site's elevation, m: the one a run on this file uses. */
+  siteElevationM: number;
   name: string;
   hours: number;
   firstHourMs: number;

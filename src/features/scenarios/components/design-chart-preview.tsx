@@ -38,7 +38,7 @@ export function DesignChartPreview({ projectId, climateFileId, values }: { proje
   const markers = useMemo(() => [] as never[], []);
 
   if (climate.isError) return <p className="text-xs text-signal-bad">The chart's climate file could not be read: {climate.error.message}</p>;
-  if (!hours || !series || !design) return <div className="h-72 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the moist-air chart" />;
+  if (!hours || !series || !design) return <div role="progressbar" className="h-72 animate-pulse rounded bg-mist" aria-label="Loading the moist-air chart" />;
   return (
     <div className={parsed.success ? '' : 'opacity-50'} data-testid="design-chart-preview" aria-disabled={!parsed.success || undefined}>
       {!parsed.success && <p className="mb-1 text-xs text-signal-warn">Showing the last valid design until every field is valid.</p>}

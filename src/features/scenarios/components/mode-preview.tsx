@@ -47,7 +47,7 @@ export function ModePreview({
       </div>
       {invalid && <p className="text-xs text-signal-warn">The preview waits until every field is valid.</p>}
       {preview.isError && <p className="text-xs text-signal-bad">Preview failed: {preview.error.message}</p>}
-      {!hours && preview.isFetching && <div className="h-20 animate-pulse rounded bg-mist" role="progressbar" aria-label="Computing preview" />}
+      {!hours && preview.isFetching && <div role="progressbar" className="h-20 animate-pulse rounded bg-mist" aria-label="Computing preview" />}
       {hours && (
         <div className={preview.isFetching || invalid ? 'opacity-40 transition-opacity' : ''} data-testid="mode-preview" aria-disabled={invalid || undefined}>
           <ModeShareBar hours={hours} />

@@ -17,7 +17,7 @@ export function ScenarioEditorPage() {
   const { canEdit, role } = useProjectRole(projectId);
 
   if (scenarioId !== null && scenario.isPending) {
-    return <div className="h-96 animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Loading scenario" />;
+    return <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading scenario" />;
   }
   if (scenario.isError) {
     return (

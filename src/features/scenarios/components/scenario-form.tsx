@@ -9,7 +9,7 @@ import { scenarioSchema, type Scenario } from '../../../../shared/scenario/schem
 import { useDuplicateScenario } from '../api/duplicate-scenario';
 import type { ClimateFileListing } from '../api/get-climate-files';
 import { useSaveScenario } from '../api/save-scenario';
-import { energyFields, envelopeFields, fieldsFor, siteFields, systemFields, systemKinds } from '../utils/scenario-fields';
+import { energyFields, envelopeFields, fieldsFor, systemFields, systemKinds } from '../utils/scenario-fields';
 import type { ScenarioFormValues } from '../utils/scenario-form';
 import { useDebouncedValue } from '../utils/use-debounced-value';
 import { useLeaveGuard } from '../utils/use-leave-guard';
@@ -20,6 +20,7 @@ import { DesignChartPreview } from './design-chart-preview';
 import { ModePreview } from './mode-preview';
 import { QuantityField } from './quantity-field';
 import { RunPanel } from './run-panel';
+import { SiteElevations } from './site-elevations';
 import { ScenarioRuns } from './scenario-runs';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { ChoiceCard } from '@/components/ui/choice-card';
@@ -167,11 +168,7 @@ export function ScenarioForm({
                 ))}
               </div>
             </fieldset>
-            <div className="mt-3">
-              {siteFields.map((f) => (
-                <QuantityField key={f.path} control={control} field={f} disabled={readOnly} />
-              ))}
-            </div>
+            <SiteElevations projectId={projectId} climateFiles={climateFiles} />
           </Panel>
 
           <Panel title="Setpoints, effectivenesses and approaches">

@@ -11,7 +11,7 @@ export function ScenarioRuns({ projectId, scenarioId }: { projectId: number; sce
   const done = runs.filter((r) => r.status === 'done' && r.sweepId === null);
   return (
     <Panel title="Runs of this scenario">
-      {isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading runs" />}
+      {isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading runs" />}
       {isError && <p className="text-xs text-signal-bad">Runs could not be loaded: {error?.message}</p>}
       {!isPending && runs.length === 0 && <p className="text-sm text-ink-soft">Not run yet.</p>}
       {entries.length > 0 && (

@@ -7,7 +7,6 @@ import {
   hybridSchema,
   indirectAirSchema,
   liquidLoopSchema,
-  scenarioSchema,
   waterSideSchema,
   type Scenario,
 } from '../../../../shared/scenario/schema';
@@ -48,15 +47,6 @@ const ind = indirectAirSchema.shape;
 const ws = waterSideSchema.shape;
 const en = energySchema.shape as unknown as Record<string, AnyNumber>;
 const envelopeShape = envelopeSchema.shape;
-
-export const siteFields: NumericField[] = [
-  field(
-    scenarioSchema.shape.elevationM,
-    'elevationM',
-    'elevation',
-    'Sets the air pressure when the weather has none, and lowers the envelope maximum on high sites.',
-  ),
-];
 
 export const systemFields: NumericField[] = [
   field(sys.supplyAirC, 'system.supplyAirC', 'temperature', 'Air temperature held at the IT inlet.'),
@@ -278,7 +268,7 @@ export function fieldsFor(fields: NumericField[], kind: SystemKind, heatRejectio
   return fields.filter((f) => (!f.kinds || f.kinds.includes(kind)) && (!f.heatRejection || (kind === 'water-side' && f.heatRejection === heatRejection)));
 }
 
-const labelByKey = new Map([...siteFields, ...systemFields, ...envelopeFields, ...energyFields].map((f) => [f.path.split('.').pop()!, f.label.toLowerCase()]));
+const labelByKey = new Map([...systemFields, ...envelopeFields, ...energyFields].map((f) => [f.path.split('.').pop()!, f.label.toLowerCase()]));
 
 /** A schema message in words: "dryBulbMinC must be below dryBulbMaxC" → "“Dry-bulb, lowest” must be below “dry-bulb, highest”." */
 export function inWords(message: string): string {

@@ -7,7 +7,6 @@ import type { SystemKind } from './scenario-fields';
  */
 export interface ScenarioFormValues {
   name: string;
-  elevationM: number;
   envelope: Scenario['envelope'];
   system: {
     kind: SystemKind;
@@ -40,7 +39,6 @@ export const newHeatReuse: HeatReuseInput = { thresholdC: 45, reusedShare: 0.5, 
 /** A new scenario's starting point: direct outdoor air on the 2021 A1 allowable class (figures as in the envelope presets). */
 export const newScenarioValues: ScenarioFormValues = {
   name: 'New scenario',
-  elevationM: 0,
   envelope: {
     presetId: 'ashrae-2021-a1',
     dryBulbMinC: 15,
@@ -101,7 +99,6 @@ export const newScenarioValues: ScenarioFormValues = {
 export function toFormValues(scenario: Scenario): ScenarioFormValues {
   return {
     name: scenario.name,
-    elevationM: scenario.elevationM,
     envelope: { ...scenario.envelope },
     system:
       scenario.system.kind === 'hybrid'

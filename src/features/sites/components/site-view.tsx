@@ -29,7 +29,7 @@ export function SiteView({
 }) {
   const sites = useSites(projectId);
   const site = sites.data?.sites.find((s) => s.id === siteId);
-  if (sites.isPending) return <div className="h-40 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading the site" />;
+  if (sites.isPending) return <div role="progressbar" className="h-40 animate-pulse rounded bg-mist" aria-label="Loading the site" />;
   if (sites.isError)
     return (
       <Notice tone="bad" title="The site could not be loaded">

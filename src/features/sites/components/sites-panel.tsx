@@ -36,7 +36,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
       <p role="status" className="text-xs text-signal-ok empty:hidden">
         {closed?.saved ? `Site “${closed.saved}” added.` : ''}
       </p>
-      {sites.isPending && <div className="h-16 animate-pulse rounded bg-mist" role="progressbar" aria-label="Loading sites" />}
+      {sites.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
       {sites.isError && (
         <Notice tone="bad" title="Sites could not be loaded">
           {sites.error.message}

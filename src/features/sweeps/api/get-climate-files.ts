@@ -6,6 +6,8 @@ export interface SweepClimateFile {
   siteName: string;
   name: string;
   hours: number;
+  /** The site's elevation, m: the envelope's maximum dry-bulb is derated for it. */
+  siteElevationM: number;
 }
 
 export const getClimateFiles = (projectId: number) => apiFetch<{ climateFiles: SweepClimateFile[] }>(`/projects/${projectId}/climate-files`);

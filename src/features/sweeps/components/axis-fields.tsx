@@ -125,7 +125,11 @@ export function AxisFields({
         <div className="flex flex-wrap items-end gap-3">
           <RangeNumber label={`From${unit ? ` (${unit})` : ''}`} value={shown.from} onChange={(v) => setShown('from', v)} />
           <RangeNumber label={`To${unit ? ` (${unit})` : ''}`} value={shown.to} onChange={(v) => setShown('to', v)} />
-          <RangeNumber label={`Step${unit ? ` (${unit === '°C' ? 'K' : unit})` : ''}`} value={shown.step} onChange={(v) => setShown('step', v)} />
+          <RangeNumber
+            label={`Step${unit ? ` (${unit === '°C' ? 'K' : unit === '°F' ? 'Δ°F' : unit})` : ''}`}
+            value={shown.step}
+            onChange={(v) => setShown('step', v)}
+          />
         </div>
       )}
       {notOffered.length > 0 && (

@@ -5,15 +5,57 @@ import { Panel } from '@/components/ui/panel';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { useProjectRole } from '@/lib/projects';
 import { useUnitSystem } from '@/lib/unit-system';
-import { axisValues, MAX_SWEEP_POINTS, prepareSweep, sweepPointCount, sweepSpecSchema, SWEEP_INPUTS, type SweepSpecInput } from '../../../../shared/sweep';
+import {
+  axisValues,
+  MAX_SWEEP_POINTS,
+  prepareSweep,
+  supplyOutsideEnvelope,
+  sweepPointCount,
+  sweepSpecSchema,
+  SWEEP_INPUTS,
+  type SupplyOutsideEnvelope,
+  type SweepPointValues,
+  type SweepSpecInput,
+} from '../../../../shared/sweep';
+import { formatQuantity } from '@/lib/quantity';
 import { useClimateFiles } from '../api/get-climate-files';
 import { useCreateSweep } from '../api/create-sweep';
 import { useScenarios } from '../api/get-scenarios';
-import { formatSweepValue, sweepUnit } from '@/lib/sweep-value';
+import { formatSweepValue, sweepPointParts, sweepUnit } from '@/lib/sweep-value';
 import { applicableInputs, AxisFields, draftFor, type AxisDraft } from './axis-fields';
 
 const specAxis = (a: AxisDraft) =>
   a.input === 'envelope.presetId' ? { input: a.input, presetIds: a.presetIds } : { input: a.input, from: a.from, to: a.to, step: a.step };
+
+/** The points whose supply setpoint breaks the envelope at the chosen site, named before the sweep starts. */
+function OutsideEnvelopeWarning({
+  outside,
+  total,
+  elevationM,
+}: {
+  outside: { values: SweepPointValues; found: SupplyOutsideEnvelope }[];
+  total: number;
+  elevationM: number;
+}) {
+  const { unitSystem } = useUnitSystem();
+  const shown = outside.slice(0, 6).map((o) =>
+    sweepPointParts(o.values, unitSystem)
+      .map((part) => part.value)
+      .join(' × '),
+  );
+  const first = outside[0].found;
+  const limit = `${first.side === 'above' ? 'maximum' : 'minimum'} ${formatQuantity('temperature', unitSystem, first.limitC)}${first.derated ? `, derated for the site's ${formatQuantity('elevation', unitSystem, elevationM)}` : ''}`;
+  return (
+    <Notice tone="warn" title={`${outside.length} of ${total} points break the inlet envelope`}>
+      <p data-testid="sweep-envelope-warning">
+        At {outside.length === 1 ? 'this point' : 'these points'} the supply setpoint is outside the envelope's dry-bulb limits ({limit}):{' '}
+        <span className="num">{shown.join('; ')}</span>
+        {outside.length > shown.length && ` and ${outside.length - shown.length} more`}. Every hour of {outside.length === 1 ? 'it' : 'them'} will be an
+        excursion. The sweep page marks them and leaves them out of where mechanical hours reach zero.
+      </p>
+    </Notice>
+  );
+}
 
 /** /projects/:projectId/sweeps/new?scenario=ID — one or two inputs of a saved scenario over a range, on one climate file. */
 export function NewSweepPage() {
@@ -54,8 +96,18 @@ export function NewSweepPage() {
     if (!parsed.success)
       return { count: 0, errors: parsed.error.issues.map((i) => `${SWEEP_INPUTS[axes[Number(i.path[1])]?.input]?.label ?? 'Sweep'}: ${i.message}`) };
     const prepared = prepareSweep(base.scenario, parsed.data.axes);
-    return { count: sweepPointCount(parsed.data.axes), errors: prepared.ok ? [] : prepared.errors, axes: parsed.data.axes };
+    return {
+      count: sweepPointCount(parsed.data.axes),
+      errors: prepared.ok ? [] : prepared.errors,
+      axes: parsed.data.axes,
+      points: prepared.ok ? prepared.points : [],
+    };
   })();
+  // Points whose supply setpoint the envelope (derated for this file's site) does not allow: warned before starting.
+  const outside = (check?.points ?? []).flatMap((p) => {
+    const found = file ? supplyOutsideEnvelope(p.scenario, file.siteElevationM) : null;
+    return found ? [{ values: p.values, found }] : [];
+  });
 
   async function start() {
     if (!spec) return;
@@ -75,7 +127,7 @@ export function NewSweepPage() {
         </p>
       </header>
       {role && !canEdit && <Notice title="Viewers can read sweeps but not start them">Ask an engineer or owner of this project to start one.</Notice>}
-      {loading && <div className="h-64 animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Loading scenarios and climate files" />}
+      {loading && <div role="progressbar" className="h-64 animate-pulse rounded-md bg-mist" aria-label="Loading scenarios and climate files" />}
       {scenarios.isError && (
         <Notice tone="bad" title="Scenarios could not be loaded">
           {scenarios.error.message}
@@ -193,6 +245,7 @@ export function NewSweepPage() {
                   {unitSystem === 'IP' && <p className="mt-1 text-xs">These messages give values in SI, as the scenario stores them.</p>}
                 </Notice>
               )}
+              {outside.length > 0 && file && <OutsideEnvelopeWarning outside={outside} total={check?.count ?? 0} elevationM={file.siteElevationM} />}
               <button
                 type="button"
                 onClick={start}

@@ -76,6 +76,10 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
               cells.filter((c) => c.noMechanical),
               { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#1d2327', strokeWidth: 2, strokeDasharray: '3,2', inset: 3 },
             ),
+            Plot.cell(
+              cells.filter((c) => c.breaksEnvelope),
+              { x: 'columnLabel', y: 'rowLabel', fill: 'none', stroke: '#a8322d', strokeWidth: 2, inset: 2 },
+            ),
             Plot.text(cells, {
               x: 'columnLabel',
               y: 'rowLabel',
@@ -109,7 +113,10 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
         </select>
       </label>
       <PlotFigure render={render} label={`${title} for each ${rowTitle} and ${columnTitle}`} placeholderHeightPx={320} />
-      <p className="text-xs text-ink-soft">Cells outlined with a dashed line have no mechanical hours. Pale cells with a dash have not finished yet.</p>
+      <p className="text-xs text-ink-soft">
+        Cells outlined with a dashed line have no mechanical hours (inside the envelope); cells outlined in red break the inlet envelope (supply setpoint beyond
+        the derated limits, every hour an excursion), marked ✕ in the table. Pale cells with a dash have not finished yet.
+      </p>
       <details className="text-sm">
         <summary className="cursor-pointer text-ink-soft">Table of the same figures</summary>
         <div className="overflow-x-auto">
@@ -137,7 +144,10 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
                   </th>
                   {columnLabels.map((c) => (
                     <td key={c} className="px-2 py-0.5">
-                      {cells.find((x) => x.rowLabel === r && x.columnLabel === c)?.text ?? '–'}
+                      {(() => {
+                        const cell = cells.find((x) => x.rowLabel === r && x.columnLabel === c);
+                        return cell ? `${cell.text}${cell.breaksEnvelope ? ' ✕' : ''}` : '–';
+                      })()}
                     </td>
                   ))}
                 </tr>

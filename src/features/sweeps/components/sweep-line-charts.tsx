@@ -18,6 +18,8 @@ import { metricDisplay, metricTitle } from '../utils/metric-format';
 import { modeColourScale, modeLabelOrder } from '@/components/charts/mode-scale';
 
 const plotStyle = { fontFamily: 'var(--font-sans)', fontSize: '12px' };
+/** Marks a point whose supply setpoint breaks the envelope (the signal colour for a bad result). */
+const ENVELOPE_BREAK = '#a8322d';
 
 /**
  * The swept value on the x axis: a number in the person's units on a linear scale, or the preset's
@@ -30,7 +32,9 @@ function useAxis(input: SweepInputPath, points: readonly SweepPoint[]) {
     // Presets carry long names; the ticks take a short form, the table beside the charts the full one.
     const x = (v: SweepValue) => (typeof v === 'number' ? displayNumber(input, unitSystem, v) : compactPresetLabel(formatSweepValue(input, unitSystem, v)));
     const labels = points.map((p) => x(p.values[input]!) as string);
-    return { preset, x, labels, title: sweepAxisTitle(input, unitSystem), unitSystem };
+    // Finished points whose supply setpoint breaks the envelope: marked in every chart.
+    const breaking = points.filter((p) => p.results?.breaksEnvelope).map((p) => x(p.values[input]!));
+    return { preset, x, labels, breaking, title: sweepAxisTitle(input, unitSystem), unitSystem };
   }, [input, points, unitSystem]);
 }
 
@@ -55,6 +59,23 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
                 fill: '#1d2327',
               }),
             ];
+      const outside = axis.breaking.length
+        ? [
+            Plot.ruleX(axis.breaking, { stroke: ENVELOPE_BREAK, strokeOpacity: 0.5, strokeWidth: 3 }),
+            Plot.text([axis.breaking[0]], {
+              x: (d: SweepValue) => d,
+              frameAnchor: 'bottom',
+              dy: -6,
+              text: () => 'outside envelope',
+              textAnchor: 'start',
+              dx: 4,
+              fill: ENVELOPE_BREAK,
+              stroke: '#ffffff',
+              strokeWidth: 3,
+              paintOrder: 'stroke',
+            }),
+          ]
+        : [];
       return Plot.plot({
         width: widthPx,
         height: 260,
@@ -72,6 +93,7 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
             ? Plot.barY(rows, { x: 'x', y: 'hours', fill: 'label', order: modeLabelOrder, tip: true })
             : Plot.areaY(rows, { x: 'x', y: 'hours', fill: 'label', order: modeLabelOrder, curve: 'linear', tip: true }),
           Plot.ruleY([0]),
+          ...outside,
           ...marker,
         ],
       });
@@ -112,7 +134,12 @@ const modeOfMetric: Partial<Record<SweepMetric, keyof typeof modeColours>> = {
 function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; metric: SweepMetric; zero?: ZeroMechanical }) {
   const axis = useAxis(input, points);
   const rows = useMemo(
-    () => metricRows(points, input, metric).map((r) => ({ x: axis.x(r.value), y: metricDisplay(metric, axis.unitSystem, r.metric) })),
+    () =>
+      metricRows(points, input, metric).map((r) => ({
+        x: axis.x(r.value),
+        y: metricDisplay(metric, axis.unitSystem, r.metric),
+        outside: points[r.index].results?.breaksEnvelope ? 'outside envelope' : 'inside envelope',
+      })),
     [points, input, metric, axis],
   );
   const title = metricTitle(metric, axis.unitSystem);
@@ -145,7 +172,14 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
         marks: [
           zeroX === null ? null : Plot.ruleX([zeroX], { stroke: '#1d2327', strokeDasharray: '4,3' }),
           Plot.lineY(rows, { x: 'x', y: 'y', stroke: colour, strokeWidth: 1.75 }),
-          Plot.dot(rows, { x: 'x', y: 'y', fill: colour, r: 3, tip: true }),
+          Plot.dot(
+            rows.filter((r) => r.outside === 'inside envelope'),
+            { x: 'x', y: 'y', fill: colour, r: 3, tip: true },
+          ),
+          Plot.dot(
+            rows.filter((r) => r.outside === 'outside envelope'),
+            { x: 'x', y: 'y', symbol: 'times', stroke: ENVELOPE_BREAK, strokeWidth: 2, r: 4, tip: true, title: (r: { outside: string }) => r.outside },
+          ),
         ],
       }),
     [rows, axis, title, metric, colour, zeroX],
@@ -154,8 +188,9 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
 }
 
 /**
- * The one-input sweep drawn: hours per mode stacked, then each mode's hours, partial PUE, water and peak
- * mechanical load against the swept value, the zero-mechanical point marked where there is one.
+ * The one-input sweep drawn: hours per mode stacked, then each mode's hours, partial PUE, water, peak
+ * mechanical load and hours outside the envelope against the swept value, the zero-mechanical point marked
+ * where there is one and the points that break the envelope marked in every chart.
  */
 export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath; points: readonly SweepPoint[]; zero: ZeroMechanical }) {
   return (
@@ -170,7 +205,14 @@ export function SweepLineCharts({ input, points, zero }: { input: SweepInputPath
         <MetricChart input={input} points={points} metric="partialPue" />
         <MetricChart input={input} points={points} metric="waterL" />
         <MetricChart input={input} points={points} metric="peakMechanicalLoadKw" />
+        <MetricChart input={input} points={points} metric="excursionHours" />
       </div>
+      {points.some((p) => p.results?.breaksEnvelope) && (
+        <p className="text-xs text-ink-soft">
+          <span className="font-semibold text-[#a8322d]">×</span> and the shaded lines mark points outside the inlet envelope (supply setpoint beyond the
+          derated limits).
+        </p>
+      )}
     </div>
   );
 }

@@ -49,7 +49,7 @@ export function SweepPage() {
   const remove = useDeleteSweep(projectId, sweepId);
   const stop = useCancelSweep(projectId, sweepId);
 
-  if (query.isPending) return <div className="h-96 animate-pulse rounded-md bg-mist" role="progressbar" aria-label="Loading sweep" />;
+  if (query.isPending) return <div role="progressbar" className="h-96 animate-pulse rounded-md bg-mist" aria-label="Loading sweep" />;
   if (query.isError) {
     return (
       <Notice tone="bad" title="This sweep could not be opened">
@@ -67,8 +67,15 @@ export function SweepPage() {
   const anyDone = doneIds.length > 0;
   const zero =
     inputs.length === 1
-      ? zeroMechanical(sweep.points.map((p) => ({ value: p.values[inputs[0]]!, mechanicalHours: p.results?.hours.mechanical ?? null })))
+      ? zeroMechanical(
+          sweep.points.map((p) => ({
+            value: p.values[inputs[0]]!,
+            mechanicalHours: p.results?.hours.mechanical ?? null,
+            breaksEnvelope: p.results?.breaksEnvelope,
+          })),
+        )
       : null;
+  const breaking = sweep.points.filter((p) => p.results?.breaksEnvelope).length;
 
   async function deleteSweep() {
     if (!window.confirm(`Delete the sweep "${sweep.name}" and its ${sweep.points.length} runs? Points still waiting are cancelled.`)) return;
@@ -146,6 +153,15 @@ export function SweepPage() {
       {sweep.progress.failed > 0 && (
         <Notice tone="bad" title={`${sweep.progress.failed} ${sweep.progress.failed === 1 ? 'point' : 'points'} failed`}>
           Open a failed point's run from the table for its reason; the charts leave it out.
+        </Notice>
+      )}
+
+      {breaking > 0 && (
+        <Notice tone="warn" title={`${breaking} ${breaking === 1 ? 'point breaks' : 'points break'} the inlet envelope`}>
+          <span data-testid="envelope-breaking-notice">
+            Their supply setpoint is outside the envelope's dry-bulb limits (the maximum derated for the site's elevation), so every hour is an excursion. They
+            are marked "outside envelope" in the charts and the table, and their hours per mode are not results a design can use.
+          </span>
         </Notice>
       )}
 

@@ -50,6 +50,8 @@ export function SweepPointsTable({
       'mechanical_h',
       'partial_mechanical_h',
       'no_data_h',
+      'outside_envelope_h',
+      'breaks_envelope',
       'partial_pue',
       `water_${waterSuffix}`,
       `water_humidification_${waterSuffix}`,
@@ -72,6 +74,8 @@ export function SweepPointsTable({
         r?.hours.mechanical,
         r ? subsetHours(r.hours, 'partialMechanical') : null,
         r?.hours.noData,
+        r?.excursionHours,
+        r ? (r.breaksEnvelope ? 'yes' : 'no') : null,
         r?.partialPue === null || r === null ? null : Math.round(r.partialPue * 1e4) / 1e4,
         water(r?.waterL),
         water(r?.humidificationL),
@@ -108,6 +112,9 @@ export function SweepPointsTable({
               {hourSpecs.map((spec) => (
                 <ModeColumnHead key={modeSpecKey(spec)} spec={spec} className="px-2" />
               ))}
+              <th scope="col" className="px-2 font-medium" title="Hours with data whose supply air lies outside the inlet envelope">
+                Outside envelope (h)
+              </th>
               <th scope="col" className="px-2 font-medium">
                 Partial PUE
               </th>
@@ -121,7 +128,11 @@ export function SweepPointsTable({
           </thead>
           <tbody>
             {points.map((p, i) => (
-              <tr key={p.runId} className="border-b border-rule/60">
+              <tr
+                key={p.runId}
+                className={`border-b border-rule/60 ${p.results?.breaksEnvelope ? 'bg-[#fbeceb]/60' : ''}`}
+                data-breaks-envelope={p.results?.breaksEnvelope ? 'yes' : undefined}
+              >
                 <td className="num py-1 text-left">
                   <Link to={`/projects/${projectId}/runs/${p.runId}`} className="text-harbour underline-offset-2 underline hover:decoration-2">
                     {i + 1} · run #{p.runId}
@@ -136,12 +147,23 @@ export function SweepPointsTable({
                   <span className={`num rounded px-1.5 py-0.5 text-xs ${statusClass[p.status]}`} title={p.error ?? undefined}>
                     {p.status}
                   </span>
+                  {p.results?.breaksEnvelope && (
+                    <span
+                      className="ml-1 rounded bg-[#fbeceb] px-1.5 py-0.5 text-xs text-signal-bad"
+                      title="The supply setpoint is outside the derated inlet envelope: every hour is an excursion"
+                    >
+                      outside envelope
+                    </span>
+                  )}
                 </td>
                 {hourSpecs.map((spec) => (
                   <td key={modeSpecKey(spec)} className={`num px-2 ${spec.kind === 'subset' ? 'text-ink-soft' : ''}`}>
                     {p.results ? hoursText(hoursOfSpec(p.results.hours, spec)) : '–'}
                   </td>
                 ))}
+                <td className={`num px-2 ${p.results?.excursionHours ? 'text-signal-bad' : ''}`}>
+                  {formatMetric('excursionHours', unitSystem, p.results?.excursionHours ?? null)}
+                </td>
                 <td className="num px-2">{formatMetric('partialPue', unitSystem, p.results?.partialPue ?? null)}</td>
                 <td className="num px-2">{formatMetric('waterL', unitSystem, p.results?.waterL ?? null)}</td>
                 <td className="num px-2">{formatMetric('peakMechanicalLoadKw', unitSystem, p.results?.peakMechanicalLoadKw ?? null)}</td>
