@@ -169,7 +169,7 @@ describe('an operator checking a proposed setpoint for excursions', () => {
     await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
     // 30 °C is 86 °F; the limit of 20 K/h is 36 °F/h.
     expect(await page.getByTestId('proposal-summary').innerText()).toContain('86.0 °F');
-    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 °F/h');
+    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 Δ°F/h'); // a difference reads as one (issue 17)
     await h.shot('excursions-ip');
     await page.getByTestId('method-notes').screenshot({ path: path.join(screenshotFolder, 'excursions-method-ip.png') });
     expect(await page.getByTestId('method-notes-run').innerText()).toContain('36.0 Δ°F');
