@@ -1,7 +1,7 @@
 /**
  * Excursion analysis for operators: the IT inlet state per hour under a proposed setpoint and envelope,
  * and how often, how long and how far it leaves the recommended range and the allowable class.
- * The model and its sources: inlet-model.ts, excursion-count.ts, x-factor.ts, and README.md.
+ * The model and its sources: inlet-model.ts, excursion-count.ts, x-factor.ts, and docs/method.md ("Inlet excursions").
  */
 export { modelInletHours } from './inlet-model';
 export type { InletHours, InletProposal } from './inlet-model';

@@ -3,7 +3,7 @@
  * (2017) ch. 1, SI throughout (°C, Pa, kg/kg, kJ/kg dry air). Relative humidity, dew point and
  * saturation are over liquid water at every temperature (WMO-No. 8); ice only in the wet-bulb
  * equation's ice branch and the frost point (saturation.ts). The equations and their sources:
- * README.md, "How it works".
+ * docs/method.md.
  */
 export { saturationPressurePa, saturationPressureOverIcePa, dewPointFromVapourPressure, frostPointFromVapourPressure, boilingPointC } from './saturation';
 export { rhOverWaterFromRhOverIce, dewPointFromFrostPoint } from './over-ice';

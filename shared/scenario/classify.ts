@@ -2,7 +2,7 @@
  * The hour classifier: each hour of outdoor weather becomes free cooling (with or without
  * humidification), adiabatic assist, mechanical or no data, with the fraction of the cooling load the
  * compressors carry, the envelope excursions, and the water the evaporative stage takes up. Typed arrays in and out,
- * no object per hour; the rules per system kind are written out in README.md, "How it works".
+ * no object per hour; the rules per system kind are written out in docs/method.md.
  */
 import {
   dewPointFromHumidityRatio,

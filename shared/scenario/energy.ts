@@ -2,7 +2,7 @@
  * Energy and water per hour from the hour classification: IT load through the year, fans and pumps on the
  * affinity law, compressors on their lift, basin heaters, and the water evaporated (humidification,
  * evaporative stages, wetted dry coolers, cooling towers) and drifted. Power in kW averaged over the hour,
- * so each value is also the kWh of that hour. Equations and their sources: README.md, "How it works".
+ * so each value is also the kWh of that hour. Equations and their sources: docs/method.md.
  */
 import { MODE, type HourClassification } from './classify';
 import { CP_AIR_KJ_PER_KG_K, hallAirMassFlowKgPerS, LITRES_PER_KG } from './air';

@@ -3,7 +3,7 @@
  * water-side system), the rest to the hall air (any single system). Each loop is one single-system run of its own
  * kind with the IT load scaled by its share; the hour's overall mode is the more demanding of the loops that carry
  * load (mechanical > adiabatic assist > free cooling); energy and water add up. What the model leaves out:
- * docs/hybrid.md.
+ * docs/guide/hybrid-hall.md.
  */
 import { MODE, type HourClassification } from './classify';
 import type { HourlyEnergy } from './energy';

@@ -1,6 +1,6 @@
 /**
  * The scenario engine: schema, envelope presets, hour classifier, energy and water model, results.
- * Formulas and their sources: README.md, "How it works".
+ * Formulas and their sources: docs/method.md.
  */
 export * from './schema';
 export * from './envelopes';

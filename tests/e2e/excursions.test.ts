@@ -159,15 +159,20 @@ describe('an operator checking a proposed setpoint for excursions', () => {
     expect(await page.getByTestId('x-factor-table').innerText()).toContain('1.00');
     expect(await page.getByText('Recalled from memory').first().isVisible()).toBe(true);
     expect(await page.getByTestId('method-notes').innerText()).toContain('only the hourly limit can');
+    // This run's figures beside docs/method.md's text, in the reader's units.
+    expect(await page.getByTestId('method-notes-run').innerText()).toContain('compared with 20.0 K');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
     await h.shot('excursions-si');
+    await page.getByTestId('method-notes').screenshot({ path: path.join(screenshotFolder, 'excursions-method-si.png') });
 
     await h.useUnits('IP');
     await page.getByTestId('excursion-figures').waitFor({ timeout: 30_000 });
     // 30 °C is 86 °F; the limit of 20 K/h is 36 °F/h.
     expect(await page.getByTestId('proposal-summary').innerText()).toContain('86.0 °F');
-    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 Δ°F/h');
+    expect(await page.getByTestId('rate-of-change').innerText()).toContain('36.0 Δ°F/h'); // a difference reads as one (issue 17)
     await h.shot('excursions-ip');
+    await page.getByTestId('method-notes').screenshot({ path: path.join(screenshotFolder, 'excursions-method-ip.png') });
+    expect(await page.getByTestId('method-notes-run').innerText()).toContain('36.0 Δ°F');
 
     // A setpoint typed in °F travels in SI: 77 °F is 25 °C.
     await page.getByLabel('Supply setpoint at the IT inlet').fill('77');

@@ -93,6 +93,8 @@ describe('the report of a run', () => {
     expect(await page.getByTestId('report-envelope').innerText()).toContain('5th edition (2021)');
     expect(await page.getByTestId('report-years').locator('tbody tr').count()).toBe(3);
     expect(await page.getByTestId('report-method').innerText()).toContain('ISO/IEC 30134-9');
+    // The method is docs/method.md's text, rendered in the built client: the direct-air rule as the file states it.
+    expect(await page.getByTestId('report-method').innerText()).toContain('W on the wet-bulb line');
     expect(await page.getByText('Read these results as estimates').isVisible()).toBe(true);
     // The figures are the run's own.
     const { run } = await h.api<{ run: { results: { hours: { free: number; mechanical: number }; energy: { partialPue: number } } } }>(
@@ -111,6 +113,7 @@ describe('the report of a run', () => {
     await chartsDrawn(page, { atLeast: 3, timeoutMs: 30_000 });
     expect(await page.getByTestId('report-hour-charts').getByTestId('region-table').innerText()).toContain('Free cooling');
     await h.shot('report-run-si');
+    await page.getByTestId('report-method').screenshot({ path: path.join(screenshotFolder, 'report-method-si.png') });
 
     // The button hands the page to the browser's print dialog (stubbed here: headless Chromium has none).
     await page.evaluate(() => {
@@ -135,6 +138,7 @@ describe('the report of a run', () => {
     expect(await page.getByTestId('report-inputs').innerText()).toContain('77.0 °F');
     expect(await page.getByTestId('report-site').innerText()).toContain('46 ft'); // 14 m = 45.9 ft
     await h.shot('report-run-ip');
+    await page.getByTestId('report-method').screenshot({ path: path.join(screenshotFolder, 'report-method-ip.png') });
     await printed('report-run-ip');
     await h.useUnits('SI');
   }, 180_000);

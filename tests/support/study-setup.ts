@@ -8,7 +8,7 @@ import { asPerson, type TestPerson } from './people';
 
 /** Synthetic test weather: 72 hours of July at an invented site, 6.3…22.0 °C (tests/fixtures/api/three-days.csv). */
 export const threeDaysCsv = readFileSync(new URL('../fixtures/api/three-days.csv', import.meta.url), 'utf8');
-/** The sample direct-air scenario the README's command line uses (sample-weather/scenarios/direct-air-a1.json). */
+/** The sample direct-air scenario the command-line guide (docs/guide/command-line.md) uses (sample-weather/scenarios/direct-air-a1.json). */
 export const directAirSample = JSON.parse(readFileSync(new URL('../../sample-weather/scenarios/direct-air-a1.json', import.meta.url), 'utf8'));
 
 export interface StudySetup {

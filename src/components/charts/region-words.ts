@@ -45,7 +45,7 @@ export const densityInk: [number, number, number] = rgbOf('#1d2327');
 
 /**
  * Each region's rule in plain words with the design's numbers, or null where the design has no such region
- * (no evaporative stage, a tower's wet fill). The rules restate classify.ts; README.md "How it works" has the equations.
+ * (no evaporative stage, a tower's wet fill). The rules restate classify.ts; docs/method.md has the equations.
  */
 export function regionRules(design: DesignForRegions, pressurePa: number, units: UnitSystem): Record<RegionKey, string | null> {
   const { system, limits, plant } = design;

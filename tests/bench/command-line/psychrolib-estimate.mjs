@@ -56,7 +56,7 @@ const lowW = Math.max(wFromDewPoint(envelope.dewPointMinC, p), wFromRh(supplyC, 
 const highDewPointC = dewPointC(supplyC, highW, p);
 const lineW = (tC, twb) => psy.GetHumRatioFromTWetBulb(Math.max(tC, twb), twb, p);
 
-/** Mode and compressor share of one hour, by the direct-air rules (README, "How it works"). */
+/** Mode and compressor share of one hour, by the direct-air rules (docs/method.md, "Classification"). */
 function classify(t, w, twb) {
   if (w <= highW && t <= offCoilC) return { mode: 'free', fraction: 0, humidified: w < lowW && eps > 0 ? 1 : 0 };
   if (w <= highW && eps > 0 && t - eps * (t - twb) <= offCoilC && lineW(offCoilC, twb) <= highW) return { mode: 'adiabatic', fraction: 0, humidified: 0 };

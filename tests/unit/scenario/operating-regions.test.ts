@@ -1,6 +1,6 @@
 /**
  * Operating regions on a grid: every cell's region is what a run gives for that state as an hour (runScenario
- * end to end, not the classifier alone), and the boundaries sit where the rules in README.md put them, with the
+ * end to end, not the classifier alone), and the boundaries sit where the rules in docs/method.md put them, with the
  * moisture limits from psychrolib.
  */
 import { describe, expect, it } from 'vitest';
