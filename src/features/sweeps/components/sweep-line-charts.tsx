@@ -108,13 +108,24 @@ function ModeHoursChart({ input, points, zero }: { input: SweepInputPath; points
   );
 }
 
-/** A line with one value throughout (no water at any point, say) gets a domain of its own, not a zero-height one. */
-function flatDomain(values: number[], fromZero: boolean): { domain?: [number, number] } {
+/** Least span of a ratio's axis (partial PUE): a sweep that moves it in the fifth decimal reads as flat, on ticks of 0.005. */
+const MIN_RATIO_SPAN = 0.02;
+
+/**
+ * The value axis's domain where Plot's own would mislead: a count with one value throughout (no water at any point,
+ * say) gets a domain of its own, not a zero-height one; a ratio that barely moves gets at least MIN_RATIO_SPAN around
+ * its middle, so its ticks read 1.075, 1.080 rather than digits of the seventh decimal cut off at the margin.
+ */
+export function valueDomain(values: number[], fromZero: boolean): { domain?: [number, number] } {
   if (values.length === 0) return {};
   const lo = Math.min(...values);
   const hi = Math.max(...values);
+  if (!fromZero) {
+    if (hi - lo >= MIN_RATIO_SPAN) return {};
+    const middle = (lo + hi) / 2;
+    return { domain: [middle - MIN_RATIO_SPAN / 2, middle + MIN_RATIO_SPAN / 2] };
+  }
   if (hi > lo) return {};
-  if (!fromZero) return { domain: [hi - 0.01, hi + 0.01] };
   return { domain: hi === 0 ? [0, 1] : [Math.min(0, hi), Math.abs(hi) * 1.1] };
 }
 
@@ -164,7 +175,7 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
           labelArrow: 'up',
           zero: metric !== 'partialPue',
           nice: true,
-          ...flatDomain(
+          ...valueDomain(
             rows.map((r) => r.y),
             metric !== 'partialPue',
           ),
