@@ -155,7 +155,7 @@ export function writeFixed(buf: Uint8Array, pos: number, x: number, decimals: nu
     buf[--at] = PAIRS[pair];
     scaled = hundredth;
   }
-  if (at > pos) buf[--at] = ZERO + scaled;
+  if (at > pos) buf[pos] = ZERO + scaled; // the one digit left, at pos
   return end;
 }
 
