@@ -149,7 +149,7 @@ function main(argv: string[]): number {
 
 /**
  * The file as text, UTF-8 as readFileSync(file, 'utf8') reads it. A weather file is nearly always ASCII, and then
- * decoding it as Latin-1 gives the same string several times faster (about 60 ms less for 30 years of hours).
+ * decoding it as Latin-1 gives the same string faster (in a fresh process about 50 ms of CPU against 77 ms for 30 years of hours).
  */
 function readText(file: string, flag: string): string {
   try {
