@@ -40,12 +40,12 @@ const bundles = [
   // The server: the pool picks dist/workers.mjs when __TRAMONTANE_BUNDLE__ is set, instead of building on demand.
   { entry: 'server/index.ts', format: 'esm', outfile: 'server.mjs', define: { __TRAMONTANE_BUNDLE__: 'true' } },
   { entry: 'workers/dispatch.ts', format: 'esm', outfile: 'workers.mjs' },
-  { entry: 'server/cli/estimate.ts', format: 'cjs', outfile: 'estimate.cjs' },
+  { entry: 'server/cli/estimate.ts', format: 'cjs', outfile: 'estimate.cjs', compact: true },
 ];
 mkdirSync(dist, { recursive: true });
 await Promise.all(
-  bundles.map(({ entry, format, outfile, define }) =>
-    bundle({ ...bundleOptions({ entry, format }), outfile: path.join(dist, outfile), packages: 'external', define }),
+  bundles.map(({ entry, format, outfile, define, compact }) =>
+    bundle({ ...bundleOptions({ entry, format, compact }), outfile: path.join(dist, outfile), packages: 'external', define }),
   ),
 );
 writeFileSync(stamp, JSON.stringify({ builtAt: new Date().toISOString() }));

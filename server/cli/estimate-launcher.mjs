@@ -4,20 +4,24 @@
 // was built from has changed since (workers/fresh-bundle.mjs), so the command always runs the code in the
 // tree. V8's code cache for the bundle is kept beside it (Node 20 has no built-in compile cache for user
 // code), so later runs skip compiling it again.
+import { isAscii } from 'node:buffer';
 import { existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import vm from 'node:vm';
 import { freshBundle } from '../../workers/fresh-bundle.mjs';
 
-const { file: bundle, rebuilt } = freshBundle({ entry: 'server/cli/estimate.ts', name: 'estimate', format: 'cjs' });
+const { file: bundle, rebuilt } = freshBundle({ entry: 'server/cli/estimate.ts', name: 'estimate', format: 'cjs', compact: true });
 const codeCacheFile = bundle.replace(/\.cjs$/, '.v8cache');
 if (rebuilt) rmSync(codeCacheFile, { force: true });
 
 // The bundle runs as Node runs a CommonJS module, compiled through vm.Script so its code cache can be
 // handed in; V8 refuses a cache made from other source or by another V8, and the cache is then made afresh.
 const cachedData = existsSync(codeCacheFile) ? readFileSync(codeCacheFile) : undefined;
-const script = new vm.Script(`(function (exports, require, module, __filename, __dirname) {${readFileSync(bundle, 'utf8')}\n})`, {
+// The compact bundle is ASCII, which Latin-1 decodes byte for byte and faster than UTF-8 (kept for any other text).
+const bytes = readFileSync(bundle);
+const source = isAscii(bytes) ? bytes.toString('latin1') : bytes.toString('utf8');
+const script = new vm.Script(`(function (exports, require, module, __filename, __dirname) {${source}\n})`, {
   filename: bundle,
   cachedData,
 });

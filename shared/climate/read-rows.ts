@@ -43,6 +43,8 @@ export function readRows(
   const dry = reader(dryBulb);
   const hum = reader(humidity);
   const pres = pressure ? reader(pressure) : null;
+  const { scale: dryScale, offset: dryOffset } = dry.conversion;
+  const { scale: humidityScale, offset: humidityOffset } = hum.conversion;
   const humidityQuantity = humidity.quantity as HumidityQuantity;
   const rows: RowColumns = {
     count: 0,
@@ -184,9 +186,15 @@ export function readRows(
     previousOffset = offsetNow;
     previousLine = line;
 
-    // values
-    const d = readValue(dry, dryBulb.column, line, DRY_BULB_MIN_C, DRY_BULB_MAX_C);
-    let w = readValue(hum, humidity.column, line, -Infinity, Infinity);
+    // values: a readable, possible cell is taken here; readValue reports the others (and reads them again)
+    const dryColumn = dryBulb.column;
+    const dryRaw = dryColumn < row.count ? parseNumberAt(row.text, row.starts[dryColumn], row.ends[dryColumn], decimalComma) : NaN;
+    const drySi = dryRaw * dryScale + dryOffset;
+    const d = drySi >= DRY_BULB_MIN_C && drySi <= DRY_BULB_MAX_C ? drySi : readValue(dry, dryColumn, line, DRY_BULB_MIN_C, DRY_BULB_MAX_C);
+    const humidityColumn = humidity.column;
+    const humidityRaw = humidityColumn < row.count ? parseNumberAt(row.text, row.starts[humidityColumn], row.ends[humidityColumn], decimalComma) : NaN;
+    const humiditySi = humidityRaw * humidityScale + humidityOffset;
+    let w = humiditySi === humiditySi ? humiditySi : readValue(hum, humidityColumn, line, -Infinity, Infinity);
     if (w === w) {
       checkHumidity(humidityQuantity, w, d);
       if (humidityCheck.verdict === 'impossible') {

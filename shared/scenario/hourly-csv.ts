@@ -104,6 +104,13 @@ const POW10_INT = [1, 10, 100, 1000, 10_000, 100_000, 1_000_000, 10_000_000, 100
 const encoder = new TextEncoder();
 const MODE_BYTES = MODE_NAMES.map((name) => encoder.encode(name));
 
+/** The two ASCII digits of 0…99: PAIRS[2k] and PAIRS[2k + 1] are those of k. */
+const PAIRS = new Uint8Array(200);
+for (let k = 0; k < 100; k++) {
+  PAIRS[2 * k] = ZERO + ((k / 10) | 0);
+  PAIRS[2 * k + 1] = ZERO + (k % 10);
+}
+
 /**
  * Writes x with `decimals` (0–4) digits after the point into buf at pos and returns the new position.
  * NaN writes nothing (an empty cell). Half-way cases round away from zero.
@@ -111,30 +118,44 @@ const MODE_BYTES = MODE_NAMES.map((name) => encoder.encode(name));
 export function writeFixed(buf: Uint8Array, pos: number, x: number, decimals: number): number {
   if (x - x !== 0) return pos; // NaN or ±Infinity: empty cell
   const negative = x < 0;
-  let scaled = Math.round(negative ? -x * POW10[decimals] : x * POW10[decimals]);
-  if (scaled > 2_147_483_647) {
+  const rounded = Math.round(negative ? -x * POW10[decimals] : x * POW10[decimals]);
+  if (rounded > 2_147_483_647) {
     // Beyond 32-bit integer digits; rare enough to go through the string formatter.
     const bytes = encoder.encode(x.toFixed(decimals));
     buf.set(bytes, pos);
     return pos + bytes.length;
   }
+  // a 32-bit integer from here, so the divisions below are integer ones
+  let scaled = rounded | 0;
   if (negative && scaled !== 0) buf[pos++] = MINUS;
-  // The digits of `scaled`, at least decimals + 1 of them (a leading 0 before the point), written from the right.
+  // The digits of `scaled`, at least decimals + 1 of them (a leading 0 before the point), written from the right,
+  // two at a time.
   let digits = decimals + 1;
   while (digits < 10 && scaled >= POW10_INT[digits]) digits++;
   const end = decimals > 0 ? pos + digits + 1 : pos + digits;
   let at = end;
-  for (let d = 0; d < decimals; d++) {
+  let fraction = decimals;
+  for (; fraction >= 2; fraction -= 2) {
+    const hundredth = (scaled / 100) | 0;
+    const pair = (scaled - hundredth * 100) << 1;
+    buf[--at] = PAIRS[pair + 1];
+    buf[--at] = PAIRS[pair];
+    scaled = hundredth;
+  }
+  if (fraction === 1) {
     const tenth = (scaled / 10) | 0;
     buf[--at] = ZERO + scaled - tenth * 10;
     scaled = tenth;
   }
   if (decimals > 0) buf[--at] = DOT;
-  while (at > pos) {
-    const tenth = (scaled / 10) | 0;
-    buf[--at] = ZERO + scaled - tenth * 10;
-    scaled = tenth;
+  while (at - pos >= 2) {
+    const hundredth = (scaled / 100) | 0;
+    const pair = (scaled - hundredth * 100) << 1;
+    buf[--at] = PAIRS[pair + 1];
+    buf[--at] = PAIRS[pair];
+    scaled = hundredth;
   }
+  if (at > pos) buf[pos] = ZERO + scaled; // the one digit left, at pos
   return end;
 }
 
@@ -212,6 +233,7 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
     let pos = 0;
     for (let i = start; i < end; i++) {
       const ms = timestampsMs[i];
+      const stampAt = pos;
       pos = writeTimestamp(buf, pos, ms, prefix);
       buf[pos++] = COMMA;
       const mode = modes[i];
@@ -235,8 +257,11 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
       buf[pos++] = COMMA;
       if (hasData && humidified !== null) buf[pos++] = humidified[i] === 1 ? ONE : ZERO;
       buf[pos++] = COMMA;
-      // the same stamp on the site's standard time, without the Z (overwritten by the newline)
-      pos = writeTimestamp(buf, pos, ms + offsetMs, localPrefix) - 1;
+      // the same stamp on the site's standard time, without the Z: on UTC itself a copy of the first 16 bytes
+      if (offsetMs === 0) {
+        for (let k = 0; k < 16; k++) buf[pos + k] = buf[stampAt + k];
+        pos += 16;
+      } else pos = writeTimestamp(buf, pos, ms + offsetMs, localPrefix) - 1;
       if (loops) {
         buf[pos++] = COMMA;
         const liquidBytes = MODE_BYTES[loops.liquidModes[i]];
