@@ -10,7 +10,7 @@ import { modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import { countsSubsets, hoursOfSpec, modeRowSpecs, notCountedNote, waterPartL, waterParts } from './mode-subsets';
 import type { ScenarioResults } from '../scenario/run';
-import { METRICS, metricUnitKinds, rounded, type MetricKey } from '../metrics';
+import { METRICS, metricUnitKinds, rounded, type MetricKey, type MetricUnits } from '../metrics';
 import { humidityReadingWords } from './humidity-reading';
 import { PARTIAL_YEAR_MARK, WORST_YEAR_TIE_RULE, YEAR_METRIC_INFO, YEAR_METRICS, YEAR_STATISTIC_ROWS, yearStatistics } from '../scenario/year-statistics';
 import { standardPeriod, utcOffsetLabel } from '../time-zone';
@@ -188,7 +188,8 @@ function yearStatisticRows(r: ScenarioResults): SummaryRow[] {
   return rows;
 }
 
-export type SummaryUnits = 'SI' | 'IP';
+/** The units a summary or comparison is written in (shared/metrics.ts). */
+export type SummaryUnits = MetricUnits;
 
 /** How an SI unit of the summaries is written in IP; units not listed (h, %, kWh, kW, L/kWh) are the same in both. */
 const ipUnits: Record<string, { unit: string; convert: (v: number) => number; decimals: number }> = {
