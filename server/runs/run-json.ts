@@ -1,6 +1,7 @@
 import { and, desc, eq, getTableColumns, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { runs, sweeps } from '../db/schema';
+import { listedResultPaths } from '../../shared/metrics';
 
 type RunRow = typeof runs.$inferSelect;
 /** A run's own columns without its stored JSON texts, which runJsonText splices in. */
@@ -23,8 +24,35 @@ export function runJsonText(
   return `${head.slice(0, -1)},"sweepPoint":${sweepPointJson || 'null'},"scenario":${scenarioJson},"climate":${climateJson},"results":${resultsText || 'null'}}`;
 }
 
-/** The results a run list carries: the totals a comparison reads, not the per-month, per-hour-of-day or per-year tables. */
-export const listedResultFields = ['hours', 'energy', 'water', 'peakMechanicalLoadKw', 'excursions'] as const;
+type PathTree = { [field: string]: PathTree | null };
+
+/** Dotted paths as a tree of fields: "loops.liquid.hours" → { loops: { liquid: { hours: null } } } (null: the whole field). */
+function pathTree(paths: readonly string[]): PathTree {
+  const tree: PathTree = {};
+  for (const path of paths) {
+    let node = tree;
+    const steps = path.split('.');
+    steps.forEach((step, i) => {
+      if (i === steps.length - 1) node[step] = null;
+      else node = node[step] ??= {};
+    });
+  }
+  return tree;
+}
+
+/**
+ * The SQL that takes one listed field out of the stored results as JSON text (SQLite's `->` gives a field's JSON text,
+ * or NULL where the results lack it); a field of which only parts are listed is rebuilt with json_object from them.
+ */
+function pickedJson(results: SQL | typeof runs.resultsJson, path: string, children: PathTree | null): SQL {
+  if (children === null) return sql`${results} -> ${`$.${path}`}`;
+  const parts = Object.entries(children).map(([field, sub]) => sql`${field}, json(${pickedJson(results, `${path}.${field}`, sub)})`);
+  return sql`CASE WHEN ${results} -> ${`$.${path}`} IS NULL THEN NULL ELSE json_object(${sql.join(parts, sql`, `)}) END`;
+}
+
+/** The results a run list carries, per top-level field: the parts of the results the compared figures read (shared/metrics.ts). */
+const listedTree = pathTree(listedResultPaths);
+export const listedResultFields = Object.keys(listedTree);
 
 /** Listed results remembered at most for this many runs; past it the memory starts again empty. */
 const maxRememberedListings = 50_000;
@@ -53,19 +81,14 @@ export function createRunReads(db: Db) {
     .where(eq(runs.projectId, sql.placeholder('projectId')))
     .orderBy(desc(runs.id))
     .prepare();
-  // SQLite takes the fields out (`->` gives a field's JSON text, or NULL where the results lack it).
-  const r = runs.resultsJson;
+  // SQLite takes the listed fields out, as comparableResults (shared/metrics.ts) picks them; NULL where a run lacks one.
   const listedResultsQuery = db
-    .select({
-      ...(Object.fromEntries(listedResultFields.map((field) => [field, sql<string | null>`${r} -> ${`$.${field}`}`])) as Record<string, SQL<string | null>>),
-      // A hybrid hall's loops (their hours only) and its heat reuse, as comparableResults gives them; NULL otherwise.
-      loops: sql<
-        string | null
-      >`CASE WHEN ${r} -> '$.loops' IS NULL THEN NULL ELSE json_object('liquid', json_object('hours', json(${r} -> '$.loops.liquid.hours')), 'air', json_object('hours', json(${r} -> '$.loops.air.hours'))) END`,
-      heatReuse: sql<
-        string | null
-      >`CASE WHEN ${r} -> '$.heatReuse' IS NULL THEN NULL ELSE json_object('availableKwh', json(${r} -> '$.heatReuse.availableKwh'), 'erf', json(${r} -> '$.heatReuse.erf')) END`,
-    })
+    .select(
+      Object.fromEntries(listedResultFields.map((field) => [field, pickedJson(runs.resultsJson, field, listedTree[field]) as SQL<string | null>])) as Record<
+        string,
+        SQL<string | null>
+      >,
+    )
     .from(runs)
     .where(eq(runs.id, sql.placeholder('runId')))
     .prepare();
@@ -76,7 +99,7 @@ export function createRunReads(db: Db) {
     let text = listedResults.get(key);
     if (text === undefined) {
       const picked = listedResultsQuery.get({ runId }) ?? {};
-      text = `{${[...listedResultFields, 'loops', 'heatReuse']
+      text = `{${listedResultFields
         .filter((field) => picked[field as keyof typeof picked] !== null && picked[field as keyof typeof picked] !== undefined)
         .map((field) => `"${field}":${picked[field as keyof typeof picked]}`)
         .join(',')}}`;

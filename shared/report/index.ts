@@ -7,3 +7,4 @@ export * from './mode-subsets';
 export * from './hour-columns';
 export * from './run-hour-columns';
 export * from './fan-groups';
+export * from './comparison';

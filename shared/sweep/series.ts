@@ -3,7 +3,8 @@
  * and the other results against the swept value, and grid cells of one metric.
  */
 import type { ModeHours } from '../scenario/results';
-import { modeSubsets, subsetHours, waterPartL } from '../report/mode-subsets';
+import { subsetHours, waterPartL } from '../report/mode-subsets';
+import { METRICS, type MetricDefinition, type MetricKey } from '../metrics';
 import type { ScenarioResults } from '../scenario/run';
 import type { SweepPointValues, SweepValue } from './expand';
 
@@ -96,18 +97,22 @@ export const SWEEP_METRICS = [
 ] as const;
 export type SweepMetric = (typeof SWEEP_METRICS)[number];
 
-export const sweepMetricLabels: Record<SweepMetric, string> = {
-  free: 'Free-cooling hours',
-  humidified: `${modeSubsets.find((m) => m.key === 'humidified')!.figure} hours`,
-  adiabatic: 'Adiabatic-assist hours',
-  mechanical: 'Mechanical hours',
-  partialMechanical: `${modeSubsets.find((m) => m.key === 'partialMechanical')!.figure} hours`,
-  partialPue: 'Partial PUE (cooling)',
-  waterL: 'Water use',
-  peakMechanicalLoadKw: 'Peak mechanical load',
-  liquidMechanical: 'Liquid-loop mechanical hours',
-  excursionHours: 'Hours outside the envelope',
-};
+/** Each metric's figure in the metric list (shared/metrics.ts), where its label, units and decimals are. */
+export const sweepMetricKeys = {
+  free: 'free',
+  humidified: 'humidified',
+  adiabatic: 'adiabatic',
+  mechanical: 'mechanical',
+  partialMechanical: 'partialMechanical',
+  partialPue: 'ppue',
+  waterL: 'waterTotal',
+  peakMechanicalLoadKw: 'peak',
+  liquidMechanical: 'liquidMechanical',
+  excursionHours: 'excursions',
+} as const satisfies Record<SweepMetric, MetricKey>;
+
+/** A sweep metric's definition: label, units, decimals, which way is better. */
+export const sweepMetric = (metric: SweepMetric): MetricDefinition => METRICS[sweepMetricKeys[metric]];
 
 /** One metric of a finished point (SI: hours, litres, kW); null while it is not done. */
 export function metricOf(results: SweepPointResults | null, metric: SweepMetric): number | null {

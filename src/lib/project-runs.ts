@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ComparableResults } from '../../shared/report/summary-table';
+import type { ComparableResults } from '../../shared/metrics';
 import type { SweepPointValues } from '../../shared/sweep';
 import { apiFetch } from './api-client';
 

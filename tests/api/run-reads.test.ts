@@ -4,6 +4,7 @@ import { asc, eq } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runs, sweeps } from '../../server/db/schema';
+import { comparableResults } from '../../shared/metrics';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 import { siteFileAndScenario } from '../support/study-setup';
 import { createTestApp, type TestApp } from '../support/test-app';
@@ -69,11 +70,8 @@ function parsedListing() {
   return {
     runs: rows.map((row) => {
       const run = parsedRun(row, row.sweepId === null ? null : (names.get(row.sweepId) ?? null));
-      const r = run.results;
-      return {
-        ...run,
-        results: r ? { hours: r.hours, energy: r.energy, water: r.water, peakMechanicalLoadKw: r.peakMechanicalLoadKw, excursions: r.excursions } : null,
-      };
+      // The listed results as the metric list picks them (shared/metrics.ts), in its order.
+      return { ...run, results: run.results ? comparableResults(run.results) : null };
     }),
   };
 }
@@ -94,7 +92,7 @@ describe('the run list and a run, read from the stored JSON text', () => {
     // The sweep point and the plain run as the list gives them, and a full run carries its per-month table.
     const listedPoint = list.body.runs.find((r: { id: number }) => r.id === point.id);
     expect(listedPoint).toMatchObject({ sweepId, sweepName: 'Supply air steps', sweepPoint: { 'system.supplyAirC': 20 }, status: 'done' });
-    expect(Object.keys(listedPoint.results)).toEqual(['hours', 'energy', 'water', 'peakMechanicalLoadKw', 'excursions']);
+    expect(Object.keys(listedPoint.results)).toEqual(['hours', 'excursions', 'energy', 'peakMechanicalLoadKw', 'water']);
     expect((await oneRun(plainRunId)).body.run.results.hoursByMonth).toHaveLength(12);
   });
 

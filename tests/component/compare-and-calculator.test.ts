@@ -1,9 +1,8 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { RunListing } from '@/features/compare/api/get-runs';
-import { compareRuns } from '@/features/compare/utils/compare-runs';
-import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
-import { formatMetric } from '@/features/compare/components/metric-format';
+import { compareRuns as compareResults, comparisonCsv, withResults } from '../../shared/report/comparison';
+import { formatMetric } from '@/lib/metric-text';
 import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
 import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../shared/report/dry-bulb-bins';
 import { engineNoteText } from '@/lib/engine-notes';
@@ -48,6 +47,9 @@ function run(id: number, free: number, mechanical: number, partialPue: number, a
   };
 }
 
+/** As the compare page does: runs without results are left out. */
+const compareRuns = (list: RunListing[], baselineId: number) => compareResults(withResults(list), baselineId);
+
 describe('comparing runs against a baseline', () => {
   const runs = [run(1, 80, 10, 1.1, 400_000), run(2, 60, 30, 1.25, 500_000), { ...run(3, 0, 0, 1, 0), status: 'running' as const, results: null }];
 
@@ -62,7 +64,7 @@ describe('comparing runs against a baseline', () => {
     const ppue = rows.find((r) => r.metric.key === 'ppue')!;
     expect(ppue.cells[1].difference).toBeCloseTo(0.15, 12);
     expect(ppue.cells[1].verdict).toBe('worse');
-    const cooling = rows.find((r) => r.metric.key === 'cooling')!;
+    const cooling = rows.find((r) => r.metric.key === 'coolingPerYear')!;
     expect(cooling.cells[1].differencePct).toBeCloseTo(25, 12);
   });
 
@@ -73,32 +75,31 @@ describe('comparing runs against a baseline', () => {
   });
 
   it('writes the comparison as CSV with units, values and differences', () => {
-    const csv = comparisonCsv(
-      compareRuns(runs, 1),
-      new Map([
-        [1, '=run one'],
-        [2, 'run two'],
-      ]),
-      'SI',
-    ).split('\n');
-    // A label that a spreadsheet would read as a formula is defused (shared/csv.ts).
-    expect(csv[0]).toBe("figure,unit,'=run one,'=run one difference,run two,run two difference");
-    expect(csv[1]).toBe('Free cooling,h,80,,60,-20');
-    expect(csv).toContain('"Cooling energy per 8,760 h",MWh,400,,500,100');
+    const csv = comparisonCsv(withResults(runs), 1, 'SI', (r) => `${r.scenario.name} at 24 °C`).split('\n');
+    expect(csv[0]).toBe(
+      'figure,unit,run 1 (baseline): Scenario 1 at 24 °C / synthetic,run 1 difference,run 2: Scenario 2 at 24 °C / synthetic,run 2 difference',
+    );
+    expect(csv[1]).toBe('Engine version,,scenario-engine 1.0.0,,scenario-engine 1.0.0,');
+    expect(csv[2]).toBe('Free cooling,h,80,,60,-20');
+    // Energy in kWh to 0.1 kWh, as the metric list gives it (shared/metrics.ts).
+    expect(csv).toContain('"Cooling total per 8,760 h",kWh,400000,,500000,100000');
   });
 
   it('gives no percentage on a near-zero base, and small energies in kWh (issue 17: "0.0 MWh → 1.0 MWh, +2356.3 %")', () => {
     // 42.5 kWh of cooling per 8,760 h against 1,044 kWh: a percentage of so small a base says nothing.
     const small = [run(1, 80, 0, 1.0, 42.5), run(2, 80, 3, 1.001, 1044)];
-    const cooling = compareRuns(small, 1).find((r) => r.metric.key === 'cooling')!;
+    const cooling = compareRuns(small, 1).find((r) => r.metric.key === 'coolingPerYear')!;
     expect(cooling.cells[1].difference).toBeCloseTo(1001.5, 9);
     expect(cooling.cells[1].differencePct).toBeNull();
     // Mechanical hours 0 → 3: no percentage either (floor: a day of hours).
     expect(compareRuns(small, 1).find((r) => r.metric.key === 'mechanical')!.cells[1].differencePct).toBeNull();
-    expect(formatMetric('mwh', 'SI', 42.5)).toBe('43 kWh');
-    expect(formatMetric('mwh', 'SI', 1044)).toBe('1.0 MWh');
-    expect(formatMetric('mwh', 'SI', 1001.5, true)).toBe('+1.0 MWh');
-    expect(formatMetric('mwh', 'SI', 0.4)).toBe('0.4 kWh');
+    expect(formatMetric(cooling.metric, 'SI', 42.5)).toBe('43 kWh');
+    expect(formatMetric(cooling.metric, 'SI', 1044)).toBe('1.0 MWh');
+    expect(formatMetric(cooling.metric, 'SI', 1001.5, { signed: true })).toBe('+1.0 MWh');
+    expect(formatMetric(cooling.metric, 'SI', -1001.5, { signed: true })).toBe('-1.0 MWh');
+    expect(formatMetric(cooling.metric, 'SI', 0.4)).toBe('0.4 kWh');
+    // A difference that rounds to nothing carries no sign.
+    expect(formatMetric('mechanical', 'SI', 0.2, { signed: true })).toBe('0 h');
   });
 
   it('falls back to the first finished run when the baseline is not among them', () => {

@@ -100,7 +100,7 @@ describe('a supply sweep past the derated envelope (defect 1)', () => {
     expect(await page.getByTestId('envelope-breaking-notice').isVisible()).toBe(true);
     const table = page.getByTestId('sweep-table');
     expect(await table.locator('tr[data-breaks-envelope="yes"]').count()).toBe(2);
-    expect(await table.locator('thead').innerText()).toContain('Outside envelope (h)');
+    expect(await table.locator('thead').innerText()).toContain('Hours outside the envelope (h)');
     // Each breaking point's every hour is an excursion: 26,280 hours of data.
     expect(await table.locator('tr[data-breaks-envelope="yes"]').first().innerText()).toContain('26,280');
     expect(await page.getByRole('figure', { name: /Hours outside the envelope \(h\) against/ }).count()).toBe(1);

@@ -164,7 +164,7 @@ describe('an engineer sweeping the supply setpoint', () => {
     await chartsDrawn(page, manyCharts);
     await page.getByTestId('heat-map-metric').selectOption('waterL');
     await chartsDrawn(page, manyCharts);
-    expect(await page.getByTestId('heat-map-table').textContent()).toContain('Water use (US gal)');
+    expect(await page.getByTestId('heat-map-table').textContent()).toContain('Water total (US gal)');
     await h.shot('sweep-grid-ip');
     await h.useUnits('SI');
   });

@@ -173,7 +173,7 @@ describe('summaries in IP units', () => {
     expect(rows.find((r) => r.figure === 'system.supplyAirC')).toEqual({ section: 'inputs', figure: 'system.supplyAirC', unit: '°F', value: 75.2 });
     expect(rows.find((r) => r.figure === 'Scenario')!.value).toBe('Supply 24 °C');
     const b = shapeReportRun(source(2, 10));
-    const water = comparisonRows([a, b], 1, 'IP').find((r) => r.key === 'water')!;
+    const water = comparisonRows([a, b], 1, 'IP').find((r) => r.key === 'waterPerYear')!;
     expect(water.unit).toBe('US gal');
     const [base, other] = water.cells;
     expect(other.difference).toBeCloseTo(other.value! - base.value!, 0);

@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { useRuns } from '../api/get-runs';
 import { useRunTables } from '../api/get-run-tables';
-import { compareRuns } from '../utils/compare-runs';
+import { compareRuns, withResults, type ComparedRun } from '../../../../shared/report/comparison';
 import { ComparisonTable } from './comparison-table';
 import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
 import { RunPicker } from './run-picker';
@@ -33,7 +33,8 @@ export function ComparePage() {
   const selected = useMemo(() => chosen.flatMap((id) => done.filter((r) => r.id === id)), [chosen, done]);
   const baselineParam = Number(search.get('baseline'));
   const baselineId = selected.some((r) => r.id === baselineParam) ? baselineParam : (selected[0]?.id ?? 0);
-  const rows = useMemo(() => compareRuns(selected, baselineId), [selected, baselineId]);
+  const compared: ComparedRun[] = useMemo(() => withResults(selected), [selected]);
+  const rows = useMemo(() => compareRuns(compared, baselineId), [compared, baselineId]);
   const tables = useRunTables(
     projectId,
     selected.map((r) => r.id),
@@ -93,7 +94,7 @@ export function ComparePage() {
                 </Notice>
               )}
               <Panel title="Side by side">
-                <ComparisonTable rows={rows} runs={selected} baselineId={baselineId} />
+                <ComparisonTable rows={rows} runs={selected} compared={compared} baselineId={baselineId} />
               </Panel>
               <Panel title="Inputs that differ">
                 <DifferingInputs runs={selected} scenarios={selected.map((r) => tables.find((t) => t?.runId === r.id)?.scenario)} />

@@ -2,23 +2,31 @@ import { downloadCsv } from '@/lib/download';
 import { runDisplayName } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
-import type { ComparedRow } from '../utils/compare-runs';
-import { comparisonCsv } from '../utils/comparison-csv';
-import { formatMetric } from './metric-format';
+import { formatMetric } from '@/lib/metric-text';
+import { comparisonCsv, type ComparedRow, type ComparedRun } from '../../../../shared/report/comparison';
 import { countsSubsets, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';
 
 const verdictInk = { better: 'text-signal-ok', worse: 'text-signal-bad', same: 'text-ink-soft', none: 'text-ink-soft' };
 
 /** Metrics down, runs across, each with its difference from the baseline. */
-export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[]; runs: RunListing[]; baselineId: number }) {
+export function ComparisonTable({
+  rows,
+  runs,
+  compared,
+  baselineId,
+}: {
+  rows: ComparedRow[];
+  runs: RunListing[];
+  /** The same runs as compared (those with results). */
+  compared: ComparedRun[];
+  baselineId: number;
+}) {
   const { unitSystem } = useUnitSystem();
   const byId = new Map(runs.map((r) => [r.id, r]));
   function download() {
-    const labels = new Map(runs.map((r) => [r.id, `run ${r.id} ${runDisplayName(r.scenario.name, r.sweepPoint, unitSystem)} / ${r.climate.name}`]));
-    downloadCsv(
-      `comparison-${runs.map((r) => r.id).join('-')}.csv`,
-      comparisonCsv(rows, labels, unitSystem, new Map(runs.map((r) => [r.id, r.engineVersion]))),
-    );
+    // The comparison report's CSV, with a sweep point's values in each run's name.
+    const name = (run: ComparedRun) => runDisplayName(run.scenario.name, byId.get(run.id)?.sweepPoint ?? null, unitSystem);
+    downloadCsv(`comparison-${compared.map((r) => r.id).join('-')}.csv`, comparisonCsv(compared, baselineId, unitSystem, name));
   }
   return (
     <div className="overflow-x-auto">
@@ -58,10 +66,10 @@ export function ComparisonTable({ rows, runs, baselineId }: { rows: ComparedRow[
               </th>
               {cells.map((c) => (
                 <td key={c.runId} className={`num px-2 text-right ${metric.part ? 'py-0.5 text-xs' : 'py-1'}`}>
-                  <span className="block">{c.value === null && metric.notInOldRuns ? NOT_COUNTED : formatMetric(metric.format, unitSystem, c.value)}</span>
+                  <span className="block">{c.value === null && metric.notInOldRuns ? NOT_COUNTED : formatMetric(metric, unitSystem, c.value)}</span>
                   {c.difference !== null && (
                     <span className={`block text-xs ${verdictInk[c.verdict]}`}>
-                      {formatMetric(metric.format, unitSystem, c.difference, true)}
+                      {formatMetric(metric, unitSystem, c.difference, { signed: true })}
                       {c.differencePct !== null && ` (${c.differencePct > 0 ? '+' : ''}${c.differencePct.toFixed(1)} %)`}
                     </span>
                   )}

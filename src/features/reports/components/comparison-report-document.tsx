@@ -1,16 +1,16 @@
 import { MonthlyComparisonChart } from '@/components/charts/monthly-comparison-chart';
 import { MONTH_SHORT as monthShort } from '../../../../shared/calendar';
 import { ResultCautions } from '@/components/ui/result-cautions';
-import { formatQuantity } from '@/lib/quantity';
-import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
+import { useUnitSystem } from '@/lib/unit-system';
 import { modeLabels } from '../../../../shared/modes';
 import type { ComparisonReportData, ReportRun } from '../../../../shared/report/report-data';
-import { comparisonRows, type ComparisonRow } from '../../../../shared/report/summary-table';
+import { compareRuns } from '../../../../shared/report/comparison';
+import { formatMetric } from '@/lib/metric-text';
 import { ClimateFacts, SiteFacts } from './climate-facts';
 import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
-import { dateTime, hours, kw, mwh, ratio, systemInWords, usesWater } from './report-format';
+import { dateTime, systemInWords, usesWater } from './report-format';
 import { standardPeriod } from '../../../../shared/time-zone';
 import { hallAirSystem } from '../../../../shared/scenario/hybrid';
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';
@@ -22,36 +22,7 @@ import { countsSubsets, hoursOfSpec, hoursText, mixedEngineNote, modeRowSpecs, N
 /** The monthly table's figures per run: each mode with its 'of which' counts, no-data hours left out. */
 const monthlySpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
 
-function figure(unit: string, system: UnitSystem, value: number | null, signed = false): string {
-  if (value === null) return '–';
-  const text = unsigned(unit, system, value);
-  // A difference that rounds to nothing is shown without a sign.
-  if (!signed) return text;
-  if (!/[1-9]/.test(text)) return text.replace(/^-/, '');
-  return value > 0 ? `+${text}` : text;
-}
-
-function unsigned(unit: string, system: UnitSystem, value: number): string {
-  switch (unit) {
-    case 'h':
-      return hours(value);
-    case 'kWh':
-      return mwh(value);
-    case 'kW':
-      return kw(value);
-    case 'L':
-      return formatQuantity('water', system, value);
-    case 'L/kWh':
-      return `${ratio(value)} L/kWh`;
-    default:
-      return ratio(value);
-  }
-}
-
-function verdict(row: ComparisonRow, difference: number | null, shown: string): string {
-  if (difference === null || !/[1-9]/.test(shown) || row.better === 'none') return 'text-ink-soft';
-  return difference > 0 === (row.better === 'higher') ? 'text-signal-ok' : 'text-signal-bad';
-}
+const verdictInk = { better: 'text-signal-ok', worse: 'text-signal-bad', same: 'text-ink-soft', none: 'text-ink-soft' };
 
 const runLabel = (run: ReportRun, baselineId: number) => `Run ${run.id}${run.id === baselineId ? ' (baseline)' : ''}`;
 
@@ -59,7 +30,7 @@ const runLabel = (run: ReportRun, baselineId: number) => `Run ${run.id}${run.id 
 export function ComparisonReportDocument({ report, linkTitle }: { report: ComparisonReportData; linkTitle?: string }) {
   const { unitSystem } = useUnitSystem();
   const { runs, baselineId } = report;
-  const rows = comparisonRows(runs, baselineId);
+  const rows = compareRuns(runs, baselineId);
   const mixedEngines = mixedEngineNote(runs);
   // Runs on the same file show its validation once.
   const files = runs.filter((run, i) => runs.findIndex((other) => other.climate.sha256 === run.climate.sha256 && other.site.name === run.site.name) === i);
@@ -137,19 +108,17 @@ export function ComparisonReportDocument({ report, linkTitle }: { report: Compar
                 </td>
               ))}
             </tr>
-            {rows.map((row) => (
-              <tr key={row.key} className={`border-b border-rule/60 ${row.part ? 'text-xs text-ink-soft' : ''}`}>
-                <th scope="row" className={`py-0.5 pr-2 text-left font-normal ${row.part ? 'pl-5' : ''}`}>
-                  {row.figure}
+            {rows.map(({ metric, cells }) => (
+              <tr key={metric.key} className={`border-b border-rule/60 ${metric.part ? 'text-xs text-ink-soft' : ''}`}>
+                <th scope="row" className={`py-0.5 pr-2 text-left font-normal ${metric.part ? 'pl-5' : ''}`}>
+                  {metric.label}
                 </th>
-                {row.cells.map((cell) => (
+                {cells.map((cell) => (
                   <td key={cell.runId} className="num whitespace-nowrap px-2 py-0.5 text-right">
-                    {cell.value === null && row.notInOldRuns ? NOT_COUNTED : figure(row.unit, unitSystem, cell.value)}
+                    {cell.value === null && metric.notInOldRuns ? NOT_COUNTED : formatMetric(metric, unitSystem, cell.value)}
                     {cell.difference !== null && (
-                      <span
-                        className={`ml-2 inline-block min-w-24 text-xs ${verdict(row, cell.difference, figure(row.unit, unitSystem, cell.difference, true))}`}
-                      >
-                        {figure(row.unit, unitSystem, cell.difference, true)}
+                      <span className={`ml-2 inline-block min-w-24 text-xs ${verdictInk[cell.verdict]}`}>
+                        {formatMetric(metric, unitSystem, cell.difference, { signed: true })}
                       </span>
                     )}
                   </td>

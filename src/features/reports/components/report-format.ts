@@ -1,10 +1,11 @@
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { usesEvaporativeWater } from '../../../../shared/scenario/hybrid';
-import { energyText } from '@/lib/quantity';
+import { formatMetric } from '@/lib/metric-text';
 
 const fixed = (v: number, digits: number) => v.toLocaleString('en', { minimumFractionDigits: digits, maximumFractionDigits: digits });
 
-export const hours = (h: number) => `${h.toLocaleString('en')} h`;
+// The report's figures as the metric list writes them (src/lib/metric-text.ts), so the report reads as the run page.
+export const hours = (h: number) => formatMetric('totalHours', 'SI', h);
 /** A share to 0.1 %, never rounded to 0 or 100 when some hours are (or are not) in it. */
 export function share(part: number, whole: number): string {
   if (!(whole > 0)) return '0.0 %';
@@ -14,9 +15,10 @@ export function share(part: number, whole: number): string {
   return `${fixed(pct, 1)} %`;
 }
 /** Energy as read: MWh from 1 MWh up, kWh below (energyText). */
-export const mwh = (kwh: number | null | undefined) => energyText(kwh);
-export const kw = (v: number) => `${fixed(v, 0)} kW`;
-export const ratio = (v: number | null | undefined, digits = 3) => (v === null || v === undefined ? '–' : fixed(v, digits));
+export const mwh = (kwh: number | null | undefined) => formatMetric('cooling', 'SI', kwh);
+export const kw = (v: number) => formatMetric('peak', 'SI', v);
+/** A ratio (pPUE, ERF) to 3 decimals. */
+export const ratio = (v: number | null | undefined) => formatMetric('ppue', 'SI', v);
 export const dateTime = (iso: string) => `${iso.slice(0, 16).replace('T', ' ')} UTC`;
 
 const systemWords: Record<ReportRun['scenario']['system']['kind'], string> = {

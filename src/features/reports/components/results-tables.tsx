@@ -1,4 +1,5 @@
-import { formatQuantity } from '@/lib/quantity';
+import { formatMetric } from '@/lib/metric-text';
+import { METRICS } from '../../../../shared/metrics';
 import type { UnitSystem } from '@/lib/unit-system';
 import { MONTH_SHORT as monthShort } from '../../../../shared/calendar';
 import { ModeShareBar, ModeSwatch, modeSpecKey } from '@/components/ui/mode-marks';
@@ -135,7 +136,7 @@ export function YearTable({ years, unitSystem, engineVersion }: { years: YearRes
             </>,
             ...modeRowSpecs.map((spec) => hoursText(hoursOfSpec(y, spec))),
             mwh(y.coolingKwh),
-            formatQuantity('water', unitSystem, y.waterL),
+            formatMetric('waterTotal', unitSystem, y.waterL),
           ],
         }))}
       />
@@ -165,23 +166,25 @@ export function EnergyTable({ results, system }: { results: ScenarioResults; sys
         head={['Component', 'Over the file', 'Per 8,760 h', 'Share of cooling']}
         rows={[
           ...fanGroups(e, system).map((g) => row(g.key, g.label, g.kwh, g.annualKwh ?? undefined)),
-          row('compressors', 'Compressors', e.compressorKwh, a?.compressorKwh),
-          row('pumps', 'Pumps', e.pumpKwh, a?.pumpKwh),
-          ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [row('basin', 'Basin heaters', e.basinHeaterKwh, a?.basinHeaterKwh)] : []),
-          row('cooling', 'Cooling total', e.coolingKwh, a?.coolingKwh, true),
-          row('it', 'IT equipment', e.itKwh, a?.itKwh),
+          row('compressors', METRICS.compressor.label, e.compressorKwh, a?.compressorKwh),
+          row('pumps', METRICS.pumps.label, e.pumpKwh, a?.pumpKwh),
+          ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0
+            ? [row('basin', METRICS.basinHeaters.label, e.basinHeaterKwh, a?.basinHeaterKwh)]
+            : []),
+          row('cooling', METRICS.cooling.label, e.coolingKwh, a?.coolingKwh, true),
+          row('it', METRICS.it.label, e.itKwh, a?.itKwh),
         ]}
       />
       <Facts
         items={[
           [
-            'Partial PUE (cooling)',
+            METRICS.ppue.label,
             <span className="num" data-testid="report-ppue">
               {ratio(e.partialPue)}
             </span>,
           ],
-          ['Peak mechanical load', <span className="num">{kw(results.peakMechanicalLoadKw)} thermal</span>],
-          ['Peak compressor power', <span className="num">{kw(results.peakCompressorKw)} electric</span>],
+          [METRICS.peak.label, <span className="num">{kw(results.peakMechanicalLoadKw)} thermal</span>],
+          [METRICS.peakCompressor.label, <span className="num">{kw(results.peakCompressorKw)} electric</span>],
         ]}
       />
     </div>
@@ -190,7 +193,7 @@ export function EnergyTable({ results, system }: { results: ScenarioResults; sys
 
 export function WaterTable({ results, unitSystem, engineVersion }: { results: ScenarioResults; unitSystem: UnitSystem; engineVersion: string }) {
   const w = results.water;
-  const water = (l: number | null) => formatQuantity('water', unitSystem, l);
+  const water = (l: number | null) => formatMetric('waterTotal', unitSystem, l);
   const counted = countsSubsets(results);
   const parts = waterPartsShown(w, counted);
   const part = (key: (typeof parts)[number]['key']) => {
@@ -203,26 +206,26 @@ export function WaterTable({ results, unitSystem, engineVersion }: { results: Sc
         testId="report-water"
         head={['Water', 'Over the file']}
         rows={[
-          { key: 'evaporated', cells: ['Evaporated', water(w.evaporatedL)] },
+          { key: 'evaporated', cells: [METRICS.evaporated.label, water(w.evaporatedL)] },
           ...parts
             .filter((p) => p.ofEvaporated)
             .map((p) => ({
               key: p.key,
               cells: [<span className="pl-5 text-xs text-ink-soft">{p.rowLabel}</span>, <span className="text-xs text-ink-soft">{part(p.key)}</span>],
             })),
-          { key: 'blowdown', cells: ['Blowdown', water(w.blowdownL)] },
+          { key: 'blowdown', cells: [METRICS.blowdown.label, water(w.blowdownL)] },
           ...parts.filter((p) => !p.ofEvaporated).map((p) => ({ key: p.key, cells: [p.rowLabel, part(p.key)] })),
-          { key: 'total', strong: true, cells: ['Total', water(w.totalL)] },
-          { key: 'annual', cells: ['Total per 8,760 h', water(w.annualL)] },
+          { key: 'total', strong: true, cells: [METRICS.waterTotal.label, water(w.totalL)] },
+          { key: 'annual', cells: [METRICS.waterPerYear.label, water(w.annualL)] },
         ]}
       />
       {!counted && <p className="text-xs text-ink-soft">{notCountedShort(engineVersion)}</p>}
       <Facts
         items={[
           [
-            'WUE',
+            METRICS.wue.label,
             <span className="num" data-testid="report-wue">
-              {w.wueLPerKwh === null ? '–' : `${ratio(w.wueLPerKwh)} L/kWh`}
+              {formatMetric('wue', unitSystem, w.wueLPerKwh)}
             </span>,
           ],
         ]}

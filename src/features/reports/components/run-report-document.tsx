@@ -5,6 +5,8 @@ import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { Notice } from '@/components/ui/notice';
 import { ResultCautions } from '@/components/ui/result-cautions';
 import { formatQuantity } from '@/lib/quantity';
+import { formatMetric } from '@/lib/metric-text';
+import { METRICS } from '../../../../shared/metrics';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunReportData } from '../../../../shared/report/report-data';
 import { ClimateFacts, SiteFacts } from './climate-facts';
@@ -68,8 +70,8 @@ export function RunReportDocument({ report, linkTitle, downloadBase }: { report:
             value={hours(h.mechanical)}
             note={withPart(share(h.mechanical, h.total), subsetHours(h, 'partialMechanical'), 'partly economised')}
           />
-          <Headline label="Partial PUE (cooling)" value={ratio(r.energy.partialPue)} note="(IT + cooling) / IT energy" />
-          <Headline label="WUE" value={r.water.wueLPerKwh === null ? '–' : `${ratio(r.water.wueLPerKwh)} L/kWh`} note="site water per IT energy" />
+          <Headline label={METRICS.ppue.label} value={ratio(r.energy.partialPue)} note="(IT + cooling) / IT energy" />
+          <Headline label={METRICS.wue.label} value={formatMetric('wue', unitSystem, r.water.wueLPerKwh)} note="site water per IT energy" />
           <Headline label="Peak mechanical load" value={kw(r.peakMechanicalLoadKw)} note="thermal" />
         </div>
         {r.warnings.length > 0 && (

@@ -1,13 +1,15 @@
 import { Panel } from '@/components/ui/panel';
-import { coolingLoadText, energyText, formatQuantity } from '@/lib/quantity';
+import { coolingLoadText } from '@/lib/quantity';
+import { formatMetric } from '@/lib/metric-text';
+import { METRICS } from '../../../../shared/metrics';
 import { useUnitSystem } from '@/lib/unit-system';
 import { countsSubsets, NOT_COUNTED, notCountedShort, waterPartL, waterPartsShown } from '../../../../shared/report/mode-subsets';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 import type { ScenarioSystem } from '../../../../shared/scenario/schema';
 import { fanGroups } from '../../../../shared/report/fan-groups';
 
-const mwh = (kwh: number) => energyText(kwh);
-const kw = (v: number) => `${v.toLocaleString('en', { maximumFractionDigits: 0 })} kW`;
+const mwh = (kwh: number | null) => formatMetric('cooling', 'SI', kwh);
+const kw = (v: number) => formatMetric('peak', 'SI', v);
 
 function Figure({ label, value, note, testId }: { label: string; value: string; note?: string; testId?: string }) {
   return (
@@ -24,29 +26,30 @@ function Figure({ label, value, note, testId }: { label: string; value: string; 
 /** Partial PUE, WUE, peak mechanical load and the energy and water behind them. */
 export function EnergyWaterCards({ results, engineVersion, system }: { results: ScenarioResults; engineVersion: string; system: ScenarioSystem }) {
   const { unitSystem } = useUnitSystem();
+  const water = (litres: number | null) => formatMetric('waterTotal', unitSystem, litres);
   const e = results.energy;
   const w = results.water;
   const counted = countsSubsets(results);
   const parts = waterPartsShown(w, counted);
   const rows = [
     ...fanGroups(e, system).map((g) => ({ label: g.label, kwh: g.kwh })),
-    { label: 'Compressors', kwh: e.compressorKwh },
-    { label: 'Pumps', kwh: e.pumpKwh },
+    { label: METRICS.compressor.label, kwh: e.compressorKwh },
+    { label: METRICS.pumps.label, kwh: e.pumpKwh },
     // Only towers in freeze protection use them; runs before engine 2.0.0 have no such figure.
-    ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [{ label: 'Basin heaters', kwh: e.basinHeaterKwh }] : []),
+    ...(typeof e.basinHeaterKwh === 'number' && e.basinHeaterKwh > 0 ? [{ label: METRICS.basinHeaters.label, kwh: e.basinHeaterKwh }] : []),
   ];
   return (
     <div className="grid gap-4 lg:grid-cols-2">
       <Panel title="Energy">
         <div className="grid grid-cols-2 gap-2 2xl:grid-cols-3">
-          <Figure label="Partial PUE (cooling)" value={e.partialPue?.toFixed(3) ?? '–'} note="(IT + cooling) / IT energy" testId="ppue" />
+          <Figure label={METRICS.ppue.label} value={formatMetric('ppue', unitSystem, e.partialPue)} note="(IT + cooling) / IT energy" testId="ppue" />
           <Figure
-            label="Peak mechanical load"
+            label={METRICS.peak.label}
             value={kw(results.peakMechanicalLoadKw)}
             note={`${unitSystem === 'IP' ? `${coolingLoadText(results.peakMechanicalLoadKw, 'IP').replace(/^[^(]*\(|\)$/g, '')}; ` : ''}compressors peak ${kw(results.peakCompressorKw)} electric`}
             testId="peak-load"
           />
-          <Figure label="Cooling energy" value={mwh(e.coolingKwh)} note={e.annual ? `${mwh(e.annual.coolingKwh)} per 8,760 h` : undefined} />
+          <Figure label={METRICS.cooling.label} value={mwh(e.coolingKwh)} note={e.annual ? `${mwh(e.annual.coolingKwh)} per 8,760 h` : undefined} />
         </div>
         <table className="mt-3 w-full text-sm">
           <caption className="pb-1 text-left text-xs text-ink-soft">Energy by component over the hours with data</caption>
@@ -62,14 +65,14 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
             ))}
             <tr className="border-b border-rule/60">
               <th scope="row" className="py-1 text-left font-medium">
-                Cooling total
+                {METRICS.cooling.label}
               </th>
               <td className="num py-1 text-right font-medium">{mwh(e.coolingKwh)}</td>
               <td />
             </tr>
             <tr>
               <th scope="row" className="py-1 text-left font-normal text-ink-soft">
-                IT equipment
+                {METRICS.it.label}
               </th>
               <td className="num py-1 text-right text-ink-soft">{mwh(e.itKwh)}</td>
               <td />
@@ -80,24 +83,20 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
       <Panel title="Water">
         <div className="grid grid-cols-2 gap-2">
           <Figure
-            label="WUE"
-            value={w.wueLPerKwh === null ? '–' : `${w.wueLPerKwh.toFixed(3)} L/kWh`}
+            label={METRICS.wue.label}
+            value={formatMetric('wue', unitSystem, w.wueLPerKwh)}
             note="site water per IT energy (ISO/IEC 30134-9)"
             testId="wue"
           />
-          <Figure
-            label="Water use"
-            value={formatQuantity('water', unitSystem, w.totalL)}
-            note={w.annualL !== null ? `${formatQuantity('water', unitSystem, w.annualL)} per 8,760 h` : undefined}
-          />
+          <Figure label={METRICS.waterTotal.label} value={water(w.totalL)} note={w.annualL !== null ? `${water(w.annualL)} per 8,760 h` : undefined} />
         </div>
         <table className="mt-3 w-full text-sm">
           <tbody>
             <tr className="border-b border-rule/60">
               <th scope="row" className="py-1 text-left font-normal">
-                Evaporated
+                {METRICS.evaporated.label}
               </th>
-              <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.evaporatedL)}</td>
+              <td className="num py-1 text-right">{water(w.evaporatedL)}</td>
             </tr>
             {parts
               .filter((p) => p.ofEvaporated)
@@ -108,15 +107,15 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
                     <th scope="row" className="py-0.5 pl-5 text-left text-xs font-normal">
                       {p.rowLabel}
                     </th>
-                    <td className="num py-0.5 text-right text-xs">{litres === null ? NOT_COUNTED : formatQuantity('water', unitSystem, litres)}</td>
+                    <td className="num py-0.5 text-right text-xs">{litres === null ? NOT_COUNTED : water(litres)}</td>
                   </tr>
                 );
               })}
             <tr className="border-b border-rule/60">
               <th scope="row" className="py-1 text-left font-normal">
-                Blowdown
+                {METRICS.blowdown.label}
               </th>
-              <td className="num py-1 text-right">{formatQuantity('water', unitSystem, w.blowdownL)}</td>
+              <td className="num py-1 text-right">{water(w.blowdownL)}</td>
             </tr>
             {parts
               .filter((p) => !p.ofEvaporated)
@@ -125,14 +124,14 @@ export function EnergyWaterCards({ results, engineVersion, system }: { results: 
                   <th scope="row" className="py-1 text-left font-normal">
                     {p.rowLabel}
                   </th>
-                  <td className="num py-1 text-right">{formatQuantity('water', unitSystem, waterPartL(w, p.key))}</td>
+                  <td className="num py-1 text-right">{water(waterPartL(w, p.key))}</td>
                 </tr>
               ))}
             <tr>
               <th scope="row" className="py-1 text-left font-medium">
-                Total
+                {METRICS.waterTotal.label}
               </th>
-              <td className="num py-1 text-right font-medium">{formatQuantity('water', unitSystem, w.totalL)}</td>
+              <td className="num py-1 text-right font-medium">{water(w.totalL)}</td>
             </tr>
           </tbody>
         </table>

@@ -2,11 +2,13 @@ import { MonthlyModeChart } from '@/components/charts/monthly-mode-chart';
 import { LoopHoursTable } from '@/components/ui/loop-hours-table';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
+import { formatMetric } from '@/lib/metric-text';
+import { METRICS } from '../../../../shared/metrics';
 import { useUnitSystem } from '@/lib/unit-system';
 import { findFacilityWaterClass } from '../../../../shared/scenario/facility-water';
 import type { LoopResults, ScenarioResults } from '../../../../shared/scenario/run';
 
-const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
+const mwh = (kwh: number) => formatMetric('cooling', 'SI', kwh);
 
 const kindWords: Record<LoopResults['systemKind'], string> = {
   'direct-air': 'direct outdoor air',
@@ -26,18 +28,16 @@ export function HybridLoopsPanel({ results, zoneLabel, engineVersion }: { result
   const t = liquid.temperatures;
   const waterClass = t?.facilityWaterClassId ? findFacilityWaterClass(t.facilityWaterClassId) : undefined;
   const temperature = (c: number) => formatQuantity('temperature', unitSystem, c);
+  const water = (litres: number) => formatMetric('waterTotal', unitSystem, litres);
+  const kw = (v: number) => formatMetric('peak', unitSystem, v);
   const rows: { label: string; of: (l: LoopResults) => string; whole: string }[] = [
-    { label: 'Share of IT heat', of: (l) => `${Math.round(l.share * 100)} %`, whole: '100 %' },
-    { label: 'Cooling energy', of: (l) => mwh(l.energy.coolingKwh), whole: mwh(results.energy.coolingKwh) },
-    { label: 'Compressors', of: (l) => mwh(l.energy.compressorKwh), whole: mwh(results.energy.compressorKwh) },
+    { label: METRICS.loopShare.label, of: (l) => `${Math.round(l.share * 100)} %`, whole: '100 %' },
+    { label: METRICS.cooling.label, of: (l) => mwh(l.energy.coolingKwh), whole: mwh(results.energy.coolingKwh) },
+    { label: METRICS.compressor.label, of: (l) => mwh(l.energy.compressorKwh), whole: mwh(results.energy.compressorKwh) },
     { label: 'Fans', of: (l) => mwh(l.energy.fanKwh), whole: mwh(results.energy.fanKwh) },
-    { label: 'Pumps', of: (l) => mwh(l.energy.pumpKwh), whole: mwh(results.energy.pumpKwh) },
-    { label: 'Water', of: (l) => formatQuantity('water', unitSystem, l.water.totalL), whole: formatQuantity('water', unitSystem, results.water.totalL) },
-    {
-      label: 'Peak mechanical load',
-      of: (l) => `${Math.round(l.peakMechanicalLoadKw).toLocaleString('en')} kW`,
-      whole: `${Math.round(results.peakMechanicalLoadKw).toLocaleString('en')} kW`,
-    },
+    { label: METRICS.pumps.label, of: (l) => mwh(l.energy.pumpKwh), whole: mwh(results.energy.pumpKwh) },
+    { label: METRICS.waterTotal.label, of: (l) => water(l.water.totalL), whole: water(results.water.totalL) },
+    { label: METRICS.peak.label, of: (l) => kw(l.peakMechanicalLoadKw), whole: kw(results.peakMechanicalLoadKw) },
   ];
   return (
     <Panel title="Liquid and air loops">

@@ -2,10 +2,10 @@ import { useCallback, useMemo, useState } from 'react';
 import { densityRamp } from '@/components/charts/colour-ramps';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
-import { axisOrder, gridCells, SWEEP_METRICS, sweepMetricLabels, type SweepInputPath, type SweepMetric, type SweepPoint } from '../../../../shared/sweep';
+import { axisOrder, gridCells, SWEEP_METRICS, sweepMetric, type SweepInputPath, type SweepMetric, type SweepPoint } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
 import { compactPresetLabel } from '../utils/sweep-format';
-import { formatMetric, metricDisplay, metricTitle } from '../utils/metric-format';
+import { formatMetric, metricTitle, shownNumber } from '@/lib/metric-text';
 import { NOT_COUNTED } from '../../../../shared/report/mode-subsets';
 
 /** Ink on the pale half of the ramp, paper on the dark half, so every cell's figure keeps its contrast. */
@@ -31,12 +31,12 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
         ...c,
         rowLabel: formatSweepValue(rowInput, unitSystem, c.row),
         columnLabel: formatSweepValue(columnInput, unitSystem, c.column),
-        shown: c.metric === null ? null : metricDisplay(metric, unitSystem, c.metric),
-        text: c.metric === null && c.done ? NOT_COUNTED : formatMetric(metric, unitSystem, c.metric),
+        shown: c.metric === null ? null : shownNumber(sweepMetric(metric), unitSystem, c.metric),
+        text: c.metric === null && c.done ? NOT_COUNTED : formatMetric(sweepMetric(metric), unitSystem, c.metric, { withUnit: false }),
       })),
     [points, rowInput, columnInput, metric, unitSystem],
   );
-  const title = metricTitle(metric, unitSystem);
+  const title = metricTitle(sweepMetric(metric), unitSystem);
   const rowTitle = sweepAxisTitle(rowInput, unitSystem);
   const columnTitle = sweepAxisTitle(columnInput, unitSystem);
 
@@ -107,7 +107,7 @@ export function SweepHeatMap({ rowInput, columnInput, points }: { rowInput: Swee
         >
           {SWEEP_METRICS.filter((m) => m !== 'liquidMechanical' || points.some((p) => p.results?.liquidMechanicalHours !== undefined)).map((m) => (
             <option key={m} value={m}>
-              {sweepMetricLabels[m]}
+              {sweepMetric(m).label}
             </option>
           ))}
         </select>

@@ -5,6 +5,7 @@ import { useUnitSystem } from '@/lib/unit-system';
 import { modeColours, modeLabels } from '../../../../shared/modes';
 import {
   metricRows,
+  sweepMetric,
   modeHoursRows,
   type SweepInputPath,
   type SweepMetric,
@@ -14,7 +15,7 @@ import {
 } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
 import { compactPresetLabel, displayNumber } from '../utils/sweep-format';
-import { metricDisplay, metricTitle } from '../utils/metric-format';
+import { metricTitle, shownNumber } from '@/lib/metric-text';
 import { modeColourScale, modeLabelOrder } from '@/components/charts/mode-scale';
 
 const plotStyle = { fontFamily: 'var(--font-sans)', fontSize: '12px' };
@@ -148,12 +149,12 @@ function MetricChart({ input, points, metric, zero }: { input: SweepInputPath; p
     () =>
       metricRows(points, input, metric).map((r) => ({
         x: axis.x(r.value),
-        y: metricDisplay(metric, axis.unitSystem, r.metric),
+        y: shownNumber(sweepMetric(metric), axis.unitSystem, r.metric),
         outside: points[r.index].results?.breaksEnvelope ? 'outside envelope' : 'inside envelope',
       })),
     [points, input, metric, axis],
   );
-  const title = metricTitle(metric, axis.unitSystem);
+  const title = metricTitle(sweepMetric(metric), axis.unitSystem);
   const mode = modeOfMetric[metric];
   const colour = mode ? modeColours[mode] : '#1f3a4a';
   const zeroX = zero && zero.kind !== 'none' ? axis.x(zero.value) : null;

@@ -1,6 +1,5 @@
 import { Link } from 'react-router-dom';
 import { downloadCsv } from '@/lib/download';
-import { toDisplay } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { csvRow } from '../../../../shared/csv';
 import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
@@ -8,7 +7,8 @@ import { hoursOfSpec, hoursText, modeRowSpecs, subsetHours } from '../../../../s
 import type { SweepInputPath, SweepPoint, SweepRunStatus } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle, sweepUnit } from '@/lib/sweep-value';
 import { displayNumber } from '../utils/sweep-format';
-import { formatMetric, metricUnit } from '../utils/metric-format';
+import { formatMetric, metricTitle } from '@/lib/metric-text';
+import { METRICS, metricUnit, metricValue, type MetricKey } from '../../../../shared/metrics';
 
 const statusClass: Record<SweepRunStatus, string> = {
   queued: 'bg-mist text-ink-soft',
@@ -34,10 +34,9 @@ export function SweepPointsTable({
   points: readonly SweepPoint[];
 }) {
   const { unitSystem } = useUnitSystem();
-  const waterUnit = metricUnit('waterL', unitSystem);
-  const waterSuffix = waterUnit === 'm³' ? 'm3' : 'us_gal';
-  const water = (litres: number | null | undefined) =>
-    litres === null || litres === undefined ? null : Math.round(toDisplay('water', unitSystem, litres) * 1000) / 1000;
+  // The download gives each figure in the metric list's unit and decimals, as the comparison and summary CSVs do.
+  const csvUnit = (key: MetricKey) => metricUnit(METRICS[key], unitSystem).toLowerCase().replace(/\W+/g, '_');
+  const csvValue = (key: MetricKey, si: number | null | undefined) => metricValue(METRICS[key], si, unitSystem);
 
   function download() {
     const head = csvRow([
@@ -53,10 +52,10 @@ export function SweepPointsTable({
       'outside_envelope_h',
       'breaks_envelope',
       'partial_pue',
-      `water_${waterSuffix}`,
-      `water_humidification_${waterSuffix}`,
-      `water_evaporative_cooling_${waterSuffix}`,
-      'peak_mechanical_load_kw',
+      `water_${csvUnit('waterTotal')}`,
+      `water_humidification_${csvUnit('humidificationL')}`,
+      `water_evaporative_cooling_${csvUnit('evaporativeCoolingL')}`,
+      `peak_mechanical_load_${csvUnit('peak')}`,
       'run_id',
     ]);
     const rows = points.map((p, i) => {
@@ -76,11 +75,11 @@ export function SweepPointsTable({
         r?.hours.noData,
         r?.excursionHours,
         r ? (r.breaksEnvelope ? 'yes' : 'no') : null,
-        r?.partialPue === null || r === null ? null : Math.round(r.partialPue * 1e4) / 1e4,
-        water(r?.waterL),
-        water(r?.humidificationL),
-        water(r?.evaporativeCoolingL),
-        r ? Math.round(r.peakMechanicalLoadKw * 10) / 10 : null,
+        csvValue('ppue', r?.partialPue),
+        csvValue('waterTotal', r?.waterL),
+        csvValue('humidificationL', r?.humidificationL),
+        csvValue('evaporativeCoolingL', r?.evaporativeCoolingL),
+        csvValue('peak', r?.peakMechanicalLoadKw),
         p.runId,
       ]);
     });
@@ -113,17 +112,13 @@ export function SweepPointsTable({
                 <ModeColumnHead key={modeSpecKey(spec)} spec={spec} className="px-2" />
               ))}
               <th scope="col" className="px-2 font-medium" title="Hours with data whose supply air lies outside the inlet envelope">
-                Outside envelope (h)
+                {metricTitle(METRICS.excursions, unitSystem)}
               </th>
-              <th scope="col" className="px-2 font-medium">
-                Partial PUE
-              </th>
-              <th scope="col" className="px-2 font-medium">
-                Water ({waterUnit})
-              </th>
-              <th scope="col" className="px-2 font-medium">
-                Peak mechanical (kW)
-              </th>
+              {(['ppue', 'waterTotal', 'peak'] as const).map((key) => (
+                <th key={key} scope="col" className="px-2 font-medium">
+                  {metricTitle(METRICS[key], unitSystem)}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>
@@ -162,11 +157,11 @@ export function SweepPointsTable({
                   </td>
                 ))}
                 <td className={`num px-2 ${p.results?.excursionHours ? 'text-signal-bad' : ''}`}>
-                  {formatMetric('excursionHours', unitSystem, p.results?.excursionHours ?? null)}
+                  {formatMetric('excursions', unitSystem, p.results?.excursionHours, { withUnit: false })}
                 </td>
-                <td className="num px-2">{formatMetric('partialPue', unitSystem, p.results?.partialPue ?? null)}</td>
-                <td className="num px-2">{formatMetric('waterL', unitSystem, p.results?.waterL ?? null)}</td>
-                <td className="num px-2">{formatMetric('peakMechanicalLoadKw', unitSystem, p.results?.peakMechanicalLoadKw ?? null)}</td>
+                <td className="num px-2">{formatMetric('ppue', unitSystem, p.results?.partialPue, { withUnit: false })}</td>
+                <td className="num px-2">{formatMetric('waterTotal', unitSystem, p.results?.waterL, { withUnit: false })}</td>
+                <td className="num px-2">{formatMetric('peak', unitSystem, p.results?.peakMechanicalLoadKw, { withUnit: false })}</td>
               </tr>
             ))}
           </tbody>
