@@ -20,7 +20,13 @@ export function connectDatabase(file: string, { fileMustExist = true }: { fileMu
   sqlite.pragma('synchronous = NORMAL');
   sqlite.pragma('foreign_keys = ON');
   sqlite.pragma('busy_timeout = 5000');
-  return drizzle({ client: sqlite, schema, casing: 'snake_case' });
+  const db = drizzle({ client: sqlite, schema, casing: 'snake_case' });
+  // The pool's threads write to the same file (they store the run queue's runs). A transaction that began deferred,
+  // read, and then wrote after a thread committed would fail at once with SQLITE_BUSY_SNAPSHOT (busy_timeout cannot
+  // help it), so every transaction takes the write lock as it begins (IMMEDIATE), waiting for it up to busy_timeout.
+  const deferredByDefault = db.transaction.bind(db);
+  db.transaction = ((run, config) => deferredByDefault(run, { behavior: 'immediate', ...config })) as Db['transaction'];
+  return db;
 }
 
 /** Opens (creating if needed) the SQLite file in WAL mode and brings its schema up to date. */

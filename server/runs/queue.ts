@@ -53,9 +53,20 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
    * points are told as one: a failed point is audited, and when its last point settles the sweep is audited and noticed.
    */
   function settle(runId: number, status: 'done' | 'failed'): void {
-    const run = db.select().from(runs).where(eq(runs.id, runId)).get();
+    const run = db
+      .select({
+        id: runs.id,
+        projectId: runs.projectId,
+        sweepId: runs.sweepId,
+        error: runs.error,
+        scenarioJson: runs.scenarioJson,
+        climateJson: runs.climateJson,
+      })
+      .from(runs)
+      .where(eq(runs.id, runId))
+      .get();
     if (!run) return;
-    if (run.sweepId !== null) return settleSweepPoint(run, status);
+    if (run.sweepId !== null) return settleSweepPoint({ ...run, sweepId: run.sweepId }, status);
     const name = `${(JSON.parse(run.scenarioJson) as { name: string }).name} on ${(JSON.parse(run.climateJson) as { name: string }).name}`;
     recordAudit(db, { actorId: null, projectId: run.projectId, action: `run.${status}`, target: `run ${runId}: ${name}`, detail: { runId, error: run.error } });
     if (status === 'done') {
@@ -66,8 +77,8 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     }
   }
 
-  function settleSweepPoint(run: typeof runs.$inferSelect, status: 'done' | 'failed'): void {
-    const sweepId = run.sweepId!;
+  function settleSweepPoint(run: { id: number; projectId: number; sweepId: number; error: string | null }, status: 'done' | 'failed'): void {
+    const sweepId = run.sweepId;
     if (status === 'failed') {
       recordAudit(db, {
         actorId: null,
@@ -77,8 +88,10 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
         detail: { runId: run.id, sweepId, error: run.error },
       });
     }
-    const points = db.select({ status: runs.status }).from(runs).where(eq(runs.sweepId, sweepId)).all();
-    if (points.some((p) => p.status === 'queued' || p.status === 'running')) return;
+    const points = db.select({ id: runs.id, status: runs.status }).from(runs).where(eq(runs.sweepId, sweepId)).all();
+    // A thread stores its point itself, so another point may already read done before this queue has settled it:
+    // then that point's own settle, which comes later, tells the sweep (once).
+    if (points.some((p) => p.status === 'queued' || p.status === 'running' || (p.id !== run.id && running.has(p.id)))) return;
     const sweep = db.select({ name: sweeps.name }).from(sweeps).where(eq(sweeps.id, sweepId)).get();
     if (!sweep) return;
     const tally = (s: string) => points.filter((p) => p.status === s).length;
