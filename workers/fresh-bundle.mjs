@@ -47,6 +47,8 @@ export function bundleOptions({ entry, format, compact = false }) {
     format,
     target: 'node20',
     logLevel: 'error',
+    // a native addon: loaded from node_modules where the bundle runs (the run queue's threads store runs through it)
+    external: ['better-sqlite3'],
     // papaparse is CommonJS; an ESM bundle needs a require to load it.
     ...(format === 'esm'
       ? { banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" } }

@@ -1,10 +1,11 @@
 /**
  * The tasks the pool runs, by name: `pool.run('<name>', input)` (workers/pool.ts).
- * Each is a thin wrapper over shared/.
+ * Each is a thin wrapper over shared/ (executeAndStoreRun also stores its run through server/runs/run-rows.ts).
  */
 export { importClimate } from './import-climate';
 export { summariseClimate } from './summarise-climate';
 export { executeRun } from './execute-run';
+export { executeAndStoreRun } from './execute-and-store-run';
 export { morphClimate } from './morph-climate';
 export { analyseExcursions } from './analyse-excursions';
 export { formatHourly } from './format-hourly';

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
-import { decodeClimateSeries, encodeColumn, type ClimateSeries, type EncodedClimateSeries, type ImportResult } from '../../shared/climate';
+import { decodeClimateSeries, encodeColumn, type ClimateSeries, type DecodeOptions, type EncodedClimateSeries, type ImportResult } from '../../shared/climate';
 import type { HumidityKind } from '../../shared/psychrometrics';
 import type { Db, DbOrTx } from '../db/client';
 import { climateFiles, climateOriginals, climateSeries } from '../db/schema';
@@ -84,10 +84,10 @@ export function loadEncodedSeries(db: Db, fileId: number): EncodedClimateSeries 
   return { humidityKind: row.kind as HumidityKind, timestampsMs, dryBulbC, humidity, pressurePa, flags };
 }
 
-/** The hourly series of a stored file, as typed arrays ready for the engine or a worker. */
-export function loadClimateSeries(db: Db, fileId: number): ClimateSeries | undefined {
+/** The hourly series of a stored file, as typed arrays ready for the engine or a worker (shared: see DecodeOptions). */
+export function loadClimateSeries(db: Db, fileId: number, options?: DecodeOptions): ClimateSeries | undefined {
   const encoded = loadEncodedSeries(db, fileId);
-  return encoded && decodeClimateSeries(encoded);
+  return encoded && decodeClimateSeries(encoded, options);
 }
 
 export function loadOriginal(db: Db, fileId: number): Buffer | undefined {

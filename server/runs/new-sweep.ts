@@ -41,16 +41,23 @@ export function insertSweep(
     .values({ projectId, name, baseScenarioId: input.scenarioId, climateFileId: file.id, specJson: JSON.stringify(spec), createdBy })
     .returning()
     .get();
-  const created = input.points.map((point) =>
-    tx
-      .insert(runs)
-      .values({
-        ...newRunValues({ projectId, scenarioId: input.scenarioId, scenarioJson: JSON.stringify(point.scenario), file, site, createdBy }),
-        sweepId: sweep.id,
-        sweepPointJson: JSON.stringify(point.values),
-      })
-      .returning()
-      .get(),
-  );
+  // One climate snapshot for every point (they share the file and site) and one INSERT for all of them: a 200-point
+  // sweep is a few thousand bound values, far below SQLite's limit.
+  const shared = newRunValues({ projectId, scenarioId: input.scenarioId, scenarioJson: '', file, site, createdBy });
+  const created = input.points.length
+    ? tx
+        .insert(runs)
+        .values(
+          input.points.map((point) => ({
+            ...shared,
+            scenarioJson: JSON.stringify(point.scenario),
+            sweepId: sweep.id,
+            sweepPointJson: JSON.stringify(point.values),
+          })),
+        )
+        .returning()
+        .all()
+        .sort((a, b) => a.id - b.id)
+    : [];
   return { sweep, created };
 }

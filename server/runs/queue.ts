@@ -1,9 +1,9 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { ClimateSeries } from '../../shared/climate';
 import type { Db } from '../db/client';
-import { runHours, runs, sweeps } from '../db/schema';
-import { blob } from '../climate/store';
+import { runs, sweeps } from '../db/schema';
 import { createSeriesCache } from './series-cache';
+import { markRunStarted, storeRunOutput } from './run-rows';
 import type { WorkerPool } from '../../workers/pool';
 import { recordAudit } from '../auth/audit';
 import type { Mailer } from '../mail/mailer';
@@ -45,15 +45,28 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
   let idleWaiters: Array<() => void> = [];
   // A sweep's points read one file: decoded once while the queue has work, shared with the threads.
   const seriesCache = createSeriesCache(db);
+  // The pool's threads store runs into the same file; an in-memory database can only be written from here.
+  const dbFile = db.$client.memory ? null : db.$client.name;
 
   /**
    * A run that finished or failed on its own goes into the audit trail and, when done, out as notices. A sweep's
    * points are told as one: a failed point is audited, and when its last point settles the sweep is audited and noticed.
    */
   function settle(runId: number, status: 'done' | 'failed'): void {
-    const run = db.select().from(runs).where(eq(runs.id, runId)).get();
+    const run = db
+      .select({
+        id: runs.id,
+        projectId: runs.projectId,
+        sweepId: runs.sweepId,
+        error: runs.error,
+        scenarioJson: runs.scenarioJson,
+        climateJson: runs.climateJson,
+      })
+      .from(runs)
+      .where(eq(runs.id, runId))
+      .get();
     if (!run) return;
-    if (run.sweepId !== null) return settleSweepPoint(run, status);
+    if (run.sweepId !== null) return settleSweepPoint({ ...run, sweepId: run.sweepId }, status);
     const name = `${(JSON.parse(run.scenarioJson) as { name: string }).name} on ${(JSON.parse(run.climateJson) as { name: string }).name}`;
     recordAudit(db, { actorId: null, projectId: run.projectId, action: `run.${status}`, target: `run ${runId}: ${name}`, detail: { runId, error: run.error } });
     if (status === 'done') {
@@ -64,8 +77,8 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     }
   }
 
-  function settleSweepPoint(run: typeof runs.$inferSelect, status: 'done' | 'failed'): void {
-    const sweepId = run.sweepId!;
+  function settleSweepPoint(run: { id: number; projectId: number; sweepId: number; error: string | null }, status: 'done' | 'failed'): void {
+    const sweepId = run.sweepId;
     if (status === 'failed') {
       recordAudit(db, {
         actorId: null,
@@ -75,8 +88,10 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
         detail: { runId: run.id, sweepId, error: run.error },
       });
     }
-    const points = db.select({ status: runs.status }).from(runs).where(eq(runs.sweepId, sweepId)).all();
-    if (points.some((p) => p.status === 'queued' || p.status === 'running')) return;
+    const points = db.select({ id: runs.id, status: runs.status }).from(runs).where(eq(runs.sweepId, sweepId)).all();
+    // A thread stores its point itself, so another point may already read done before this queue has settled it:
+    // then that point's own settle, which comes later, tells the sweep (once).
+    if (points.some((p) => p.status === 'queued' || p.status === 'running' || (p.id !== run.id && running.has(p.id)))) return;
     const sweep = db.select({ name: sweeps.name }).from(sweeps).where(eq(sweeps.id, sweepId)).get();
     if (!sweep) return;
     const tally = (s: string) => points.filter((p) => p.status === s).length;
@@ -114,39 +129,22 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     if (!run || run.status !== 'queued') return pump();
     const controller = new AbortController();
     running.set(runId, controller);
-    // A run is one pool task: the server knows only that it started and when it finishes, so progress stays 0 until done.
-    db.update(runs).set({ status: 'running', startedAt: new Date(), progress: 0 }).where(eq(runs.id, runId)).run();
     const timer = setTimeout(() => controller.abort(new Error(`The run took longer than ${Math.round(timeoutMs / 1000)} s and was stopped.`)), timeoutMs);
     try {
       const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : seriesCache.get(run.climateFileId);
       if (!series) throw new Error('The climate file of this run was deleted before the run started.');
       const climate = JSON.parse(run.climateJson) as RunSnapshotClimate;
-      const out = await pool.run(
-        'executeRun',
-        {
-          scenario: JSON.parse(run.scenarioJson),
-          series,
-          options: { elevationM: climate.elevationM, utcOffsetMinutes: climate.utcOffsetMinutes },
-        },
-        { signal: controller.signal },
-      );
-      const stored = db.transaction((tx) => {
-        const current = tx.select({ status: runs.status }).from(runs).where(eq(runs.id, runId)).get();
-        if (current?.status !== 'running') return false;
-        tx.insert(runHours)
-          .values({
-            runId,
-            modes: blob(out.modes),
-            mechanicalFraction: blob(out.mechanicalFraction),
-            humidified: blob(out.humidified),
-          })
-          .run();
-        tx.update(runs)
-          .set({ status: 'done', progress: 1, resultsJson: JSON.stringify(out.results), finishedAt: new Date() })
-          .where(eq(runs.id, runId))
-          .run();
-        return true;
-      });
+      const input = {
+        scenario: JSON.parse(run.scenarioJson),
+        series,
+        options: { elevationM: climate.elevationM, utcOffsetMinutes: climate.utcOffsetMinutes },
+      };
+      // A run is one pool task: it is marked running as a thread starts it, and its progress stays 0 until done. The
+      // thread marks and stores it over its own connection to the file, so the main thread writes nothing per run (a
+      // sweep's points would otherwise wait behind its writes and for SQLite's write lock) and never sees the hours.
+      const stored = dbFile
+        ? (await pool.run('executeAndStoreRun', { ...input, store: { dbFile, runId } }, { signal: controller.signal })).stored
+        : markRunStarted(db, runId) && storeRunOutput(db, runId, await pool.run('executeRun', input, { signal: controller.signal }));
       if (stored) settle(runId, 'done');
     } catch (error) {
       const cancelled = controller.signal.aborted && controller.signal.reason === 'cancelled';
@@ -158,7 +156,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
             : String(error);
         db.update(runs)
           .set({ status: 'failed', error: message, finishedAt: new Date() })
-          .where(and(eq(runs.id, runId), eq(runs.status, 'running')))
+          .where(and(eq(runs.id, runId), inArray(runs.status, ['queued', 'running'])))
           .run();
         settle(runId, 'failed');
       }

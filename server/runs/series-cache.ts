@@ -11,15 +11,6 @@ export interface SeriesCache {
   clear(): void;
 }
 
-/** A typed array's copy over a SharedArrayBuffer: posted to a pool thread, its memory is shared instead of copied. */
-function shared<T extends Float64Array | Uint8Array>(values: T): T {
-  const copy = (
-    values instanceof Float64Array ? new Float64Array(new SharedArrayBuffer(values.byteLength)) : new Uint8Array(new SharedArrayBuffer(values.byteLength))
-  ) as T;
-  copy.set(values);
-  return copy;
-}
-
 /**
  * The climate series the queued runs read, decoded once per batch of runs (a sweep's 50 points read one file) rather
  * than once per run, and posted to the threads as shared memory rather than a copy per run. An entry is keyed by the
@@ -40,15 +31,9 @@ export function createSeriesCache(db: Db, { maxFiles = 4 }: { maxFiles?: number 
         entries.set(key, held);
         return held;
       }
-      const series = loadClimateSeries(db, fileId);
-      if (!series) return undefined;
-      const sharedSeries: ClimateSeries = {
-        timestampsMs: shared(series.timestampsMs),
-        dryBulbC: shared(series.dryBulbC),
-        humidity: { kind: series.humidity.kind, values: shared(series.humidity.values) },
-        pressurePa: series.pressurePa ? shared(series.pressurePa) : null,
-        flags: shared(series.flags),
-      };
+      // decoded straight into SharedArrayBuffers: posted to a pool thread, their memory is shared instead of copied
+      const sharedSeries = loadClimateSeries(db, fileId, { shared: true });
+      if (!sharedSeries) return undefined;
       entries.set(key, sharedSeries);
       while (entries.size > maxFiles) entries.delete(entries.keys().next().value!);
       return sharedSeries;

@@ -47,27 +47,35 @@ function header(blob: Uint8Array): { type: number; length: number } {
   return { type, length };
 }
 
-/** The typed array of a blob made by encodeColumn (a fresh copy). Throws RangeError on a foreign or cut blob. */
-export function decodeColumn(blob: Uint8Array): ColumnArray {
+/** Where a decoded column's memory lives: a plain ArrayBuffer, or a SharedArrayBuffer that pool threads read without a copy. */
+export interface DecodeOptions {
+  shared?: boolean;
+}
+
+/**
+ * The typed array of a blob made by encodeColumn (a fresh copy, over a SharedArrayBuffer when `shared`). Throws
+ * RangeError on a foreign or cut blob.
+ */
+export function decodeColumn(blob: Uint8Array, { shared = false }: DecodeOptions = {}): ColumnArray {
   const { type, length } = header(blob);
   const body = blob.subarray(HEADER_BYTES);
-  if (type === UINT8) return new Uint8Array(body);
-  const bytes = new Uint8Array(length * 8);
+  const bytes = new Uint8Array(shared ? new SharedArrayBuffer(body.byteLength) : new ArrayBuffer(body.byteLength));
   bytes.set(body);
+  if (type === UINT8) return bytes;
   if (!LITTLE_ENDIAN) swapBytes(bytes, 8);
-  return new Float64Array(bytes.buffer);
+  return new Float64Array(bytes.buffer, 0, length);
 }
 
 /** decodeColumn for a column known to be float64. */
-export function decodeFloat64Column(blob: Uint8Array): Float64Array {
-  const column = decodeColumn(blob);
+export function decodeFloat64Column(blob: Uint8Array, options?: DecodeOptions): Float64Array {
+  const column = decodeColumn(blob, options);
   if (!(column instanceof Float64Array)) throw new RangeError('blob holds a uint8 column, not float64');
   return column;
 }
 
 /** decodeColumn for a column known to be uint8 (the hour flags). */
-export function decodeUint8Column(blob: Uint8Array): Uint8Array {
-  const column = decodeColumn(blob);
+export function decodeUint8Column(blob: Uint8Array, options?: DecodeOptions): Uint8Array {
+  const column = decodeColumn(blob, options);
   if (column instanceof Float64Array) throw new RangeError('blob holds a float64 column, not uint8');
   return column;
 }
@@ -82,13 +90,16 @@ export interface EncodedClimateSeries {
   flags: Uint8Array;
 }
 
-/** The typed arrays of a stored series (each a fresh copy, so they can be transferred). */
-export function decodeClimateSeries(encoded: EncodedClimateSeries): ClimateSeries {
+/**
+ * The typed arrays of a stored series (each a fresh copy, so they can be transferred; over SharedArrayBuffers when
+ * `shared`, so pool threads can share them).
+ */
+export function decodeClimateSeries(encoded: EncodedClimateSeries, options?: DecodeOptions): ClimateSeries {
   return {
-    timestampsMs: decodeFloat64Column(encoded.timestampsMs),
-    dryBulbC: decodeFloat64Column(encoded.dryBulbC),
-    humidity: { kind: encoded.humidityKind, values: decodeFloat64Column(encoded.humidity) },
-    pressurePa: encoded.pressurePa ? decodeFloat64Column(encoded.pressurePa) : null,
-    flags: decodeUint8Column(encoded.flags),
+    timestampsMs: decodeFloat64Column(encoded.timestampsMs, options),
+    dryBulbC: decodeFloat64Column(encoded.dryBulbC, options),
+    humidity: { kind: encoded.humidityKind, values: decodeFloat64Column(encoded.humidity, options) },
+    pressurePa: encoded.pressurePa ? decodeFloat64Column(encoded.pressurePa, options) : null,
+    flags: decodeUint8Column(encoded.flags, options),
   };
 }

@@ -3,6 +3,7 @@ export { importClimateText, DEFAULT_MAX_GAP_HOURS, MAX_SERIES_HOURS } from './im
 export {
   encodeColumn,
   decodeColumn,
+  type DecodeOptions,
   decodeFloat64Column,
   decodeUint8Column,
   decodeClimateSeries,

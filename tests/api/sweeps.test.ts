@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditEvents, runHours, runs, sweeps } from '../../server/db/schema';
 import { createApp } from '../../server/app';
 import { createRunQueue } from '../../server/runs/queue';
+import { markRunStarted } from '../../server/runs/run-rows';
 import type { WorkerPool } from '../../workers/pool';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
@@ -214,10 +215,14 @@ describe('a sweep that cannot be run', () => {
 
 describe('deleting a sweep', () => {
   it('cancels its waiting and running points and removes it with every run, in one audit entry', async () => {
-    // Workers that never answer, as a long run would: every point is still waiting or running when the sweep is deleted.
+    // Workers that start each run they are given (marking it running, as the real task does first) and never answer,
+    // as a long run would: every point is still waiting or running when the sweep is deleted.
     const stuckPool: WorkerPool = {
       ...t.pool,
-      run: (_task, _input, options) => new Promise((_resolve, reject) => options?.signal?.addEventListener('abort', () => reject(options.signal!.reason))),
+      run: (task, input, options) => {
+        if (task === 'executeAndStoreRun') markRunStarted(t.db, (input as { store: { runId: number } }).store.runId);
+        return new Promise((_resolve, reject) => options?.signal?.addEventListener('abort', () => reject(options.signal!.reason)));
+      },
     };
     const stuckQueue = createRunQueue({ db: t.db, pool: stuckPool });
     const app = createApp({ db: t.db, pool: stuckPool, runQueue: stuckQueue });

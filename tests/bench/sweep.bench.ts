@@ -7,7 +7,7 @@
  * The process's CPU time per warm sweep is given too: on a machine whose cores are taken by other work, two threads
  * cannot run faster than one, and the CPU figures show what the second thread costs beyond the first.
  */
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { eq } from 'drizzle-orm';
@@ -60,8 +60,24 @@ export async function prepareStudy(): Promise<Study> {
   }
 }
 
+/**
+ * CPU time of the process's main thread so far, ms (Linux: /proc/self/task/<pid>/stat, in clock ticks of 10 ms; NaN
+ * elsewhere). The main thread's share is what two pool threads cannot split: speedup ≈ W / ((W + M) / 2) on two free cores.
+ */
+function mainThreadCpuMs(): number {
+  try {
+    const fields = readFileSync(`/proc/self/task/${process.pid}/stat`, 'utf8').split(') ')[1].split(' ');
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  } catch {
+    return Number.NaN;
+  }
+}
+
 /** Starts an app on `threads` pool threads and times its first and second sweep, POST to idle, in ms. */
-export async function timeStartAndSweeps(study: Study, threads: number): Promise<{ firstMs: number; warmMs: number; warmCpuMs: number; free: number[] }> {
+export async function timeStartAndSweeps(
+  study: Study,
+  threads: number,
+): Promise<{ firstMs: number; warmMs: number; warmCpuMs: number; warmMainCpuMs: number; free: number[] }> {
   const { db, engineer, projectId, scenarioId, climateFileId } = study;
   const pool = createWorkerPool({ threads });
   const runQueue = createRunQueue({ db, pool });
@@ -69,28 +85,36 @@ export async function timeStartAndSweeps(study: Study, threads: number): Promise
   const as = asPerson(engineer);
   const sweepOnce = async () => {
     const cpuStart = process.cpuUsage();
+    const mainStart = mainThreadCpuMs();
     const start = performance.now();
     const res = await request(app).post(`/api/projects/${projectId}/sweeps`).set(as).send({ scenarioId, climateFileId, axes: AXES }).expect(202);
     await runQueue.idle();
     const ms = performance.now() - start;
     const cpu = process.cpuUsage(cpuStart);
+    const mainCpuMs = mainThreadCpuMs() - mainStart;
     const sweepId = res.body.sweep.id as number;
     const points = db.select({ status: runs.status, resultsJson: runs.resultsJson }).from(runs).where(eq(runs.sweepId, sweepId)).orderBy(runs.id).all();
     if (points.length !== POINTS || points.some((p) => p.status !== 'done')) throw new Error(`sweep ${sweepId}: not every point is done`);
     const free = points.map((p) => (JSON.parse(p.resultsJson!) as { hours: { free: number } }).hours.free);
     await request(app).delete(`/api/projects/${projectId}/sweeps/${sweepId}`).set(as).expect(204);
-    return { ms, cpuMs: (cpu.user + cpu.system) / 1000, free };
+    return { ms, cpuMs: (cpu.user + cpu.system) / 1000, mainCpuMs, free };
   };
   try {
     const first = await sweepOnce();
     const warm = await sweepOnce();
     if (first.free.some((f, k) => f !== warm.free[k])) throw new Error('two sweeps of the same points disagree');
-    return { firstMs: first.ms, warmMs: warm.ms, warmCpuMs: warm.cpuMs, free: warm.free };
+    return { firstMs: first.ms, warmMs: warm.ms, warmCpuMs: warm.cpuMs, warmMainCpuMs: warm.mainCpuMs, free: warm.free };
   } finally {
     await runQueue.idle();
     await pool.destroy();
   }
 }
+
+/** W / ((W + M) / 2): two pool threads' speedup on two otherwise idle cores when the main thread's M cannot overlap them. */
+const freeCoreSpeedup = (processCpuMs: number, mainCpuMs: number) => {
+  const poolCpuMs = processCpuMs - mainCpuMs;
+  return poolCpuMs / ((poolCpuMs + mainCpuMs) / 2);
+};
 
 const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
@@ -98,8 +122,8 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
   const study = await prepareStudy();
   try {
     const times = {
-      1: { first: [] as number[], warm: [] as number[], cpu: [] as number[] },
-      2: { first: [] as number[], warm: [] as number[], cpu: [] as number[] },
+      1: { first: [] as number[], warm: [] as number[], cpu: [] as number[], mainCpu: [] as number[] },
+      2: { first: [] as number[], warm: [] as number[], cpu: [] as number[], mainCpu: [] as number[] },
     };
     let reference: number[] | null = null;
     for (let round = 0; round < ROUNDS; round++) {
@@ -110,6 +134,7 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
         times[threads as 1 | 2].first.push(measured.firstMs);
         times[threads as 1 | 2].warm.push(measured.warmMs);
         times[threads as 1 | 2].cpu.push(measured.warmCpuMs);
+        times[threads as 1 | 2].mainCpu.push(measured.warmMainCpuMs);
         log(`sweep round ${round + 1}, ${threads} thread(s): first after start ${measured.firstMs.toFixed(0)} ms, warm ${measured.warmMs.toFixed(0)} ms`);
       }
     }
@@ -132,6 +157,10 @@ async function run({ log }: BenchContext): Promise<Record<string, number | strin
       // CPU time of the whole process (main thread and pool threads) for a warm sweep: what two threads cost beyond one
       'sweep.oneThreadCpuMs': Math.round(median(times[1].cpu)),
       'sweep.twoThreadsCpuMs': Math.round(median(times[2].cpu)),
+      // of which the main thread (the queue, the route, SQLite on its connection): the part two threads cannot share
+      'sweep.twoThreadsMainThreadCpuMs': Math.round(median(times[2].mainCpu)),
+      // the speedup two free cores would give with this main-thread share: W / ((W + M) / 2), W the pool threads' CPU
+      'sweep.twoThreadsSpeedupOnFreeCores': Number(freeCoreSpeedup(median(times[2].cpu), median(times[2].mainCpu)).toFixed(2)),
     };
   } finally {
     study.db.$client.close();
