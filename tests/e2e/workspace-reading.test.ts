@@ -106,6 +106,25 @@ async function checked(name: string, problems: string[]) {
   await h.screenshot(name);
 }
 
+/** Numbers in table cells (digits with their sign, thousands commas and decimals) that wrap inside themselves onto more lines. */
+const brokenFigures = () =>
+  h.page.evaluate(() => {
+    const broken: string[] = [];
+    for (const cell of document.querySelectorAll('main td, main th')) {
+      const walker = document.createTreeWalker(cell, NodeFilter.SHOW_TEXT);
+      for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+        for (const word of node.textContent!.matchAll(/\S+/g)) {
+          if (!/^[−+-]?\d[\d,]*(\.\d+)?%?$/.test(word[0])) continue;
+          const range = document.createRange();
+          range.setStart(node, word.index);
+          range.setEnd(node, word.index + word[0].length);
+          if (new Set([...range.getClientRects()].map((r) => Math.round(r.top))).size > 1) broken.push(word[0]);
+        }
+      }
+    }
+    return broken.slice(0, 10);
+  });
+
 /** How far the page is wider than the window, in CSS pixels (0 when nothing runs off the right edge). */
 const overflowPx = () => h.page.evaluate(() => document.scrollingElement!.scrollWidth - window.innerWidth);
 
@@ -118,7 +137,7 @@ describe('on a phone, 390 px wide', () => {
       await open(pathOf[name]);
       const problems: string[] = [];
       await checked(`phone-${name}`, problems);
-      expect({ overflowPx: await overflowPx(), problems }).toEqual({ overflowPx: 0, problems: [] });
+      expect({ overflowPx: await overflowPx(), problems, brokenFigures: await brokenFigures() }).toEqual({ overflowPx: 0, problems: [], brokenFigures: [] });
     },
     180_000,
   );
@@ -152,6 +171,37 @@ describe('at a desk, 1440 px wide', () => {
     },
     180_000,
   );
+});
+
+describe('in IP units, on a phone and at a desk', () => {
+  beforeAll(() => h.useUnits('IP'));
+  afterAll(() => h.useUnits('SI'));
+
+  it.each(pageNames)(
+    'the %s page fits 390 px in IP, and is drawn at 1440 px',
+    async (name) => {
+      await h.page.setViewportSize({ width: 390, height: 844 });
+      await open(pathOf[name]);
+      await h.screenshot(`phone-ip-${name}`);
+      // Longer IP labels (°F, gr/lb, Btu/lb, tons) must wrap or scroll in their panel as the SI ones do; figures never break.
+      expect({ overflowPx: await overflowPx(), brokenFigures: await brokenFigures() }).toEqual({ overflowPx: 0, brokenFigures: [] });
+      await h.page.setViewportSize({ width: 1440, height: 900 });
+      await h.page.evaluate(() => window.scrollTo(0, 0));
+      await h.screenshot(`desk-ip-${name}`);
+    },
+    180_000,
+  );
+
+  it('reads the run in IP: temperatures in °F and moisture in gr/lb, no °C left in the run’s figures', async () => {
+    await h.page.setViewportSize({ width: 1440, height: 900 });
+    await open(pathOf.run);
+    // The scenario's own name ("… 25 °C supply …") is the person's words, not a figure: leave it out.
+    const name = await h.page.locator('main h1').first().innerText();
+    const text = (await h.page.locator('main').innerText()).replaceAll(name, '');
+    expect(text).toMatch(/°F/);
+    expect(text).toMatch(/gr\/lb/);
+    expect(text).not.toMatch(/\d °C/);
+  }, 120_000);
 });
 
 describe('with the keyboard alone', () => {
