@@ -12,6 +12,7 @@ import {
   maxHumidityRatioForLimits,
 } from '../psychrometrics';
 import type { EnvelopeLimits } from './envelopes';
+import { ENVELOPE_BREACH, envelopeTest } from './inside-envelope';
 import { hallSideEffectiveness } from './exchanger';
 import type { SingleSystem } from './schema';
 
@@ -114,8 +115,10 @@ export function classifyHours(system: SingleSystem, limits: InletLimits, hours: 
     excursions: new Uint8Array(n),
     evaporationKgPerKgAir: new Float64Array(n),
   };
+  // The supply setpoint against the envelope's dry-bulb range (no moisture given: only the dry-bulb bits can be set).
+  const supplyBreach = envelopeTest(limits)(system.supplyAirC, Number.NaN, Number.NaN);
   const supplyFlag =
-    (system.supplyAirC > limits.dryBulbMaxC ? EXCURSION.supplyAboveMax : 0) | (system.supplyAirC < limits.dryBulbMinC ? EXCURSION.supplyBelowMin : 0);
+    (supplyBreach & ENVELOPE_BREACH.warm ? EXCURSION.supplyAboveMax : 0) | (supplyBreach & ENVELOPE_BREACH.cold ? EXCURSION.supplyBelowMin : 0);
 
   const rule =
     system.kind === 'direct-air'
@@ -174,6 +177,8 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
   let targets: MoistureTargets = { highW: 0, lowW: 0, highDewPointC: 0 };
   // Where the mechanical-hour evaporative stage leaves the outdoor air, written by enteringState.
   const entering = { c: 0, w: 0 };
+  // Is air brought to the supply setpoint with this moisture inside the envelope? (the one envelope test)
+  const breach = envelopeTest(limits);
 
   return (i, t, w, twb, p) => {
     if (p !== targetsPressure) {
@@ -182,13 +187,14 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
     }
     const { highW, lowW } = targets;
     let suppliedW = w;
+    const outdoorBreach = breach(supplyAirC, w, p);
 
-    if (w > highW) {
+    if (outdoorBreach & ENVELOPE_BREACH.humid) {
       out.modes[i] = MODE.mechanical;
       suppliedW = highW;
     } else if (t <= offCoilC) {
       out.modes[i] = MODE.free;
-      if (w < lowW && eps > 0) {
+      if (outdoorBreach & ENVELOPE_BREACH.dry && eps > 0) {
         // Free cooling with humidification: outdoor air mixes with return air (held at lowW) and the evaporative
         // stage humidifies the mix to lowW at constant enthalpy, ending at the off-coil temperature. The outdoor
         // share x follows from the enthalpy balance h(offCoil, lowW) = x·h_out + (1 − x)·h(return, lowW).
@@ -201,7 +207,8 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
       }
     } else {
       const leavingW = eps > 0 && t - eps * (t - twb) <= offCoilC ? wetBulbLineW(offCoilC, twb, p) : Number.NaN;
-      if (leavingW <= highW) {
+      // NaN: the wetted air cannot reach the off-coil temperature (or there is no stage).
+      if (leavingW === leavingW && !(breach(supplyAirC, leavingW, p) & ENVELOPE_BREACH.humid)) {
         out.modes[i] = MODE.adiabatic;
         out.evaporationKgPerKgAir[i] = leavingW - w;
         suppliedW = leavingW;
@@ -220,7 +227,7 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
         suppliedW = entering.w;
       }
     }
-    if (suppliedW < lowW) out.excursions[i] |= EXCURSION.lowHumidity;
+    if (breach(supplyAirC, suppliedW, p) & ENVELOPE_BREACH.dry) out.excursions[i] |= EXCURSION.lowHumidity;
   };
 }
 
