@@ -4,15 +4,9 @@
  * compressors carry, the envelope excursions, and the water the evaporative stage takes up. Typed arrays in and out,
  * no object per hour; the rules per system kind are written out in README.md, "How it works".
  */
-import {
-  dewPointFromHumidityRatio,
-  humidityRatioAtDewPointLimit,
-  humidityRatioAtRhLimit,
-  humidityRatioFromWetBulb,
-  maxHumidityRatioForLimits,
-} from '../psychrometrics';
+import { dewPointFromHumidityRatio, humidityRatioFromWetBulb } from '../psychrometrics';
 import type { EnvelopeLimits } from './envelopes';
-import { ENVELOPE_BREACH, envelopeTest } from './inside-envelope';
+import { ENVELOPE_BREACH, envelopeBreach, envelopeMoistureLimits, envelopeTest } from './inside-envelope';
 import { hallSideEffectiveness } from './exchanger';
 import type { SingleSystem } from './schema';
 
@@ -82,12 +76,11 @@ interface MoistureTargets {
 /**
  * Supply-air moisture limits at pressurePa for a supply at supplyAirC: highW is the smaller of W at
  * the dew-point maximum and W at (supplyAirC, RH maximum); lowW the larger of W at the dew-point
- * minimum and W at (supplyAirC, RH minimum). Equations: ASHRAE Handbook—Fundamentals (2017) ch. 1
- * eq. 20, 22, 36 through shared/psychrometrics.
+ * minimum and W at (supplyAirC, RH minimum): the envelope test's own limits (envelopeMoistureLimits). Equations:
+ * ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 20, 22, 36.
  */
 export function moistureTargets(limits: InletLimits, supplyAirC: number, pressurePa: number): MoistureTargets {
-  const highW = maxHumidityRatioForLimits(supplyAirC, { dewPointMaxC: limits.dewPointMaxC, rhMaxPct: limits.rhMaxPct }, pressurePa);
-  const lowW = Math.max(humidityRatioAtDewPointLimit(limits.dewPointMinC, pressurePa), humidityRatioAtRhLimit(supplyAirC, limits.rhMinPct, pressurePa));
+  const { highW, lowW } = envelopeMoistureLimits(limits, supplyAirC, pressurePa);
   return { highW, lowW, highDewPointC: dewPointFromHumidityRatio(highW, pressurePa) };
 }
 
@@ -177,8 +170,9 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
   let targets: MoistureTargets = { highW: 0, lowW: 0, highDewPointC: 0 };
   // Where the mechanical-hour evaporative stage leaves the outdoor air, written by enteringState.
   const entering = { c: 0, w: 0 };
-  // Is air brought to the supply setpoint with this moisture inside the envelope? (the one envelope test)
-  const breach = envelopeTest(limits);
+  // Is air brought to the supply setpoint with this moisture inside the envelope? The one envelope test, on the
+  // moisture limits at the setpoint that the targets hold.
+  const breach = (w: number): number => envelopeBreach(limits, supplyAirC, w, targets);
 
   return (i, t, w, twb, p) => {
     if (p !== targetsPressure) {
@@ -187,7 +181,7 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
     }
     const { highW, lowW } = targets;
     let suppliedW = w;
-    const outdoorBreach = breach(supplyAirC, w, p);
+    const outdoorBreach = breach(w);
 
     if (outdoorBreach & ENVELOPE_BREACH.humid) {
       out.modes[i] = MODE.mechanical;
@@ -208,7 +202,7 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
     } else {
       const leavingW = eps > 0 && t - eps * (t - twb) <= offCoilC ? wetBulbLineW(offCoilC, twb, p) : Number.NaN;
       // NaN: the wetted air cannot reach the off-coil temperature (or there is no stage).
-      if (leavingW === leavingW && !(breach(supplyAirC, leavingW, p) & ENVELOPE_BREACH.humid)) {
+      if (leavingW === leavingW && !(breach(leavingW) & ENVELOPE_BREACH.humid)) {
         out.modes[i] = MODE.adiabatic;
         out.evaporationKgPerKgAir[i] = leavingW - w;
         suppliedW = leavingW;
@@ -227,7 +221,7 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
         suppliedW = entering.w;
       }
     }
-    if (breach(supplyAirC, suppliedW, p) & ENVELOPE_BREACH.dry) out.excursions[i] |= EXCURSION.lowHumidity;
+    if (breach(suppliedW) & ENVELOPE_BREACH.dry) out.excursions[i] |= EXCURSION.lowHumidity;
   };
 }
 

@@ -34,48 +34,95 @@ export const NO_SLACK: EnvelopeSlack = { dryBulbK: 0, humidityRatio: 0 };
 /** W, kg/kg, of air whose vapour pressure is pwPa at pressurePa (eq. 20, unchecked: NaN/negative pass through). */
 const wAt = (pwPa: number, pressurePa: number): number => (MOLAR_MASS_RATIO * pwPa) / (pressurePa - pwPa);
 
+/** The humidity ratios, kg/kg, between which air at one dry-bulb and pressure meets the envelope's moisture limits. */
+export interface EnvelopeMoistureLimits {
+  /** The larger of W at the dew-point floor and W at (dry-bulb, RH floor). */
+  lowW: number;
+  /** The smaller of W at the dew-point ceiling and W at (dry-bulb, RH ceiling). */
+  highW: number;
+}
+
 /**
- * A prepared test for one envelope: a function of (dry-bulb °C, humidity ratio kg/kg, pressure Pa) giving the
- * ENVELOPE_BREACH bits (0 inside). It keeps the limits' humidity ratios for the last pressure and dry-bulb it saw,
- * so a loop over hours at one pressure, or at one supply temperature, computes them once. A NaN input sets no bit:
- * callers skip hours without data first.
+ * The envelope's moisture limits as humidity ratios for air at dryBulbC (°C) and pressurePa (Pa), written into `into`.
+ * No checks (NaN passes through): a kernel for loops.
  * Sources: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 6 (saturation over water), 20, 22, 36.
+ */
+export function envelopeMoistureLimits(
+  limits: EnvelopeTestLimits,
+  dryBulbC: number,
+  pressurePa: number,
+  into: EnvelopeMoistureLimits = { lowW: 0, highW: 0 },
+): EnvelopeMoistureLimits {
+  const dewMinW = wAt(Math.exp(lnSaturationPressure(limits.dewPointMinC)), pressurePa);
+  const dewMaxW = wAt(Math.exp(lnSaturationPressure(limits.dewPointMaxC)), pressurePa);
+  return withRhLimits(limits, dewMinW, dewMaxW, Math.exp(lnSaturationPressure(dryBulbC)), pressurePa, into);
+}
+
+/** The moisture limits from W at the dew-point limits and the saturation pressure at the dry-bulb, Pa. */
+function withRhLimits(
+  limits: EnvelopeTestLimits,
+  dewMinW: number,
+  dewMaxW: number,
+  pwsPa: number,
+  pressurePa: number,
+  into: EnvelopeMoistureLimits,
+): EnvelopeMoistureLimits {
+  into.lowW = Math.max(dewMinW, wAt((limits.rhMinPct / 100) * pwsPa, pressurePa));
+  into.highW = Math.min(dewMaxW, wAt((limits.rhMaxPct / 100) * pwsPa, pressurePa));
+  return into;
+}
+
+/**
+ * The ENVELOPE_BREACH bits (0: inside) of air at dryBulbC holding humidityRatio, given the envelope's moisture limits
+ * at that dry-bulb and pressure ({@link envelopeMoistureLimits}). A NaN input sets no bit: callers skip hours
+ * without data first.
+ */
+export function envelopeBreach(
+  limits: EnvelopeTestLimits,
+  dryBulbC: number,
+  humidityRatio: number,
+  moisture: EnvelopeMoistureLimits,
+  slack: EnvelopeSlack = NO_SLACK,
+): number {
+  let breach = 0;
+  if (dryBulbC > limits.dryBulbMaxC + slack.dryBulbK) breach |= ENVELOPE_BREACH.warm;
+  if (dryBulbC < limits.dryBulbMinC - slack.dryBulbK) breach |= ENVELOPE_BREACH.cold;
+  if (humidityRatio > moisture.highW + slack.humidityRatio) breach |= ENVELOPE_BREACH.humid;
+  if (humidityRatio < moisture.lowW - slack.humidityRatio) breach |= ENVELOPE_BREACH.dry;
+  return breach;
+}
+
+/**
+ * A prepared test for one envelope: a function of (dry-bulb °C, humidity ratio kg/kg, pressure Pa) giving
+ * {@link envelopeBreach}'s bits. It keeps W at the dew-point limits for the last pressure and the saturation pressure
+ * for the last dry-bulb, so a loop at one pressure, or at one dry-bulb (a supply setpoint), computes them once.
  */
 export function envelopeTest(
   limits: EnvelopeTestLimits,
   slack: EnvelopeSlack = NO_SLACK,
 ): (dryBulbC: number, humidityRatio: number, pressurePa: number) => number {
-  const { dryBulbMinC, dryBulbMaxC, rhMinPct, rhMaxPct } = limits;
-  const lnDewMin = lnSaturationPressure(limits.dewPointMinC);
-  const lnDewMax = lnSaturationPressure(limits.dewPointMaxC);
-  const tSlack = slack.dryBulbK;
-  const wSlack = slack.humidityRatio;
+  const lnDewMinPa = lnSaturationPressure(limits.dewPointMinC);
+  const lnDewMaxPa = lnSaturationPressure(limits.dewPointMaxC);
+  const moisture: EnvelopeMoistureLimits = { lowW: 0, highW: 0 };
   let pressure = Number.NaN;
   let dewMinW = 0;
   let dewMaxW = 0;
-  let rhPressure = Number.NaN;
-  let rhDryBulb = Number.NaN;
-  let rhMinW = 0;
-  let rhMaxW = 0;
+  let dryBulb = Number.NaN;
+  let pws = Number.NaN;
   return (t, w, p) => {
-    if (p !== pressure) {
-      pressure = p;
-      dewMinW = wAt(Math.exp(lnDewMin), p);
-      dewMaxW = wAt(Math.exp(lnDewMax), p);
+    if (p !== pressure || t !== dryBulb) {
+      if (p !== pressure) {
+        dewMinW = wAt(Math.exp(lnDewMinPa), p);
+        dewMaxW = wAt(Math.exp(lnDewMaxPa), p);
+        pressure = p;
+      }
+      if (t !== dryBulb) {
+        pws = Math.exp(lnSaturationPressure(t));
+        dryBulb = t;
+      }
+      withRhLimits(limits, dewMinW, dewMaxW, pws, p, moisture);
     }
-    if (t !== rhDryBulb || p !== rhPressure) {
-      rhDryBulb = t;
-      rhPressure = p;
-      const pws = Math.exp(lnSaturationPressure(t));
-      rhMinW = wAt((rhMinPct / 100) * pws, p);
-      rhMaxW = wAt((rhMaxPct / 100) * pws, p);
-    }
-    let breach = 0;
-    if (t > dryBulbMaxC + tSlack) breach |= ENVELOPE_BREACH.warm;
-    if (t < dryBulbMinC - tSlack) breach |= ENVELOPE_BREACH.cold;
-    if (w > dewMaxW + wSlack || w > rhMaxW + wSlack) breach |= ENVELOPE_BREACH.humid;
-    if (w < dewMinW - wSlack || w < rhMinW - wSlack) breach |= ENVELOPE_BREACH.dry;
-    return breach;
+    return envelopeBreach(limits, t, w, moisture, slack);
   };
 }
 
