@@ -12,6 +12,10 @@ import type { SingleSystem } from './schema';
 
 export const MODE = { free: 0, adiabatic: 1, mechanical: 2, noData: 3 } as const;
 export type ModeCode = (typeof MODE)[keyof typeof MODE];
+/**
+ * The words the hourly files (CSV and JSON) and the hour columns' header write for each mode code: a file format
+ * read by people and programs, so `no_data` stays as written since the first engine. In code the key is `noData`.
+ */
 export const MODE_NAMES = ['free', 'adiabatic', 'mechanical', 'no_data'] as const;
 
 /** Bit flags per hour. */
