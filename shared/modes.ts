@@ -5,21 +5,26 @@
  */
 import type { ModeHours } from './scenario/results';
 
-export const modeKeys = ['free', 'adiabatic', 'mechanical', 'no_data'] as const;
+/**
+ * In code the hours without data are `noData`, as a run's stored results (ModeHours) name them. The hourly files and
+ * the hour columns write the word `no_data` (MODE_NAMES in shared/scenario/classify.ts): that is their format, not a
+ * second name here.
+ */
+export const modeKeys = ['free', 'adiabatic', 'mechanical', 'noData'] as const;
 export type ModeKey = (typeof modeKeys)[number];
 
 export const modeLabels: Record<ModeKey, string> = {
   free: 'Free cooling',
   adiabatic: 'Adiabatic assist',
   mechanical: 'Mechanical',
-  no_data: 'No data',
+  noData: 'No data',
 };
 
 export const modeColours: Record<ModeKey, string> = {
   free: '#2a78a8',
   adiabatic: '#dba53a',
   mechanical: '#7b3057',
-  no_data: '#b9bec3',
+  noData: '#b9bec3',
 };
 
 /** Text colour with WCAG AA contrast on each mode colour, for labels drawn on it. */
@@ -27,18 +32,10 @@ export const modeInk: Record<ModeKey, string> = {
   free: '#ffffff',
   adiabatic: '#1d2327',
   mechanical: '#ffffff',
-  no_data: '#1d2327',
-};
-
-/** Where each mode's hours sit in a results table (ModeHours names the no-data hours `noData`). */
-const modeHoursField: Record<ModeKey, 'free' | 'adiabatic' | 'mechanical' | 'noData'> = {
-  free: 'free',
-  adiabatic: 'adiabatic',
-  mechanical: 'mechanical',
-  no_data: 'noData',
+  noData: '#1d2327',
 };
 
 /** The hours of one mode in a results table (a run's, a month's, a year's). */
-export function hoursOfMode(row: Pick<ModeHours, 'free' | 'adiabatic' | 'mechanical' | 'noData'>, mode: ModeKey): number {
-  return row[modeHoursField[mode]];
+export function hoursOfMode(row: Pick<ModeHours, ModeKey>, mode: ModeKey): number {
+  return row[mode];
 }

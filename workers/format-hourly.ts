@@ -1,10 +1,10 @@
+import { outdoorStates } from '../shared/psychrometrics';
 import { hourlyJson } from '../shared/report/hourly-json';
 import {
   hourlyCsvInput,
   hybridHourlyColumns,
   isHybrid,
   migrateScenario,
-  outdoorStates,
   parseScenario,
   runScenario,
   writeHourlyCsv,

@@ -25,7 +25,6 @@ const previewHours = 48;
 const siteParams = z.object({ siteId: z.coerce.number().int().positive('siteId must be a positive whole number') });
 const fileParams = z.object({ fileId: z.coerce.number().int().positive('fileId must be a positive whole number') });
 const listParams = z.object({ listId: z.coerce.number().int().positive('listId must be a positive whole number') });
-const hoursQuery = z.object({ year: z.coerce.number().int().min(1800).max(2200).optional() });
 
 function countRows(text: string): number {
   let n = 0;
@@ -113,15 +112,10 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
    * century of hours takes seconds, which on the main thread would stall every other request), stopped if the
    * client leaves.
    */
-  async function formatOnPool(
-    res: express.Response,
-    fileId: number,
-    format: 'csv' | 'hours-json',
-    year?: { year: number; offsetMinutes: number },
-  ): Promise<Buffer> {
+  async function formatOnPool(res: express.Response, fileId: number, format: 'csv' | 'hours-json'): Promise<Buffer> {
     const encoded = loadEncodedSeries(db, fileId);
     if (!encoded) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
-    const bytes = await pool.run('formatClimateSeries', { encoded, format, year }, { lane: 'interactive', signal: closedRequestSignal(res) });
+    const bytes = await pool.run('formatClimateSeries', { encoded, format }, { lane: 'interactive', signal: closedRequestSignal(res) });
     return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 
@@ -222,10 +216,7 @@ export function climateFileRoutes(deps: AppDeps): RouteSpec[] {
 
     route('get', '/projects/:projectId/climate-files/:fileId/hours', access.viewer, async (req, res) => {
       const file = fileOr404(req.projectId!, req.params.fileId);
-      const { year } = hoursQuery.parse(req.query);
-      // a calendar year on the site's standard time, as the file page and run pages count years
-      const window = year === undefined ? undefined : { year, offsetMinutes: standardOffsetMinutes(findSite(deps, req.projectId!, file.siteId).timeZone) };
-      const bytes = await formatOnPool(res, file.id, 'hours-json', window);
+      const bytes = await formatOnPool(res, file.id, 'hours-json');
       res.type('application/json').send(bytes);
     }),
 

@@ -1,5 +1,5 @@
 import type { ClimateSeries } from '../climate';
-import { bulkStates, humidityRatioFromDewPoint, hourlyPressurePa } from '../psychrometrics';
+import { humidityRatioFromDewPoint, meanSitePressurePa, outdoorStates } from '../psychrometrics';
 import { designConditions, type DesignConditions } from './design-conditions';
 import { civilFromDays, MS_PER_DAY } from '../calendar';
 import { monthlyStats, type MonthlyStat } from './monthly';
@@ -16,18 +16,8 @@ export interface ClimateSummary {
 
 /** What a climate file holds: coverage per year, monthly statistics and design conditions. */
 export function summariseClimate(series: ClimateSeries, elevationM: number): ClimateSummary {
-  const { pressurePa, sitePressurePa: fallbackPressurePa } = hourlyPressurePa(series, elevationM);
-  const state = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
-  let pressureSum = 0;
-  let pressureN = 0;
-  if (series.pressurePa) {
-    for (const p of series.pressurePa) {
-      if (p !== p) continue;
-      pressureSum += p;
-      pressureN++;
-    }
-  }
-  const meanPressurePa = pressureN ? pressureSum / pressureN : fallbackPressurePa;
+  const { states: state } = outdoorStates(series, elevationM);
+  const meanPressurePa = meanSitePressurePa(series, elevationM);
 
   const byYear = new Map<number, { hours: number; measuredHours: number; filledHours: number; missingHours: number }>();
   let usable = 0;

@@ -10,7 +10,7 @@ export {
   type ColumnArray,
   type EncodedClimateSeries,
 } from './column-codec';
-export { cleanedSeriesCsv, seriesHoursJson, yearWindow } from './series-files';
+export { cleanedSeriesCsv, seriesHoursJson } from './series-files';
 export { decodeClimateBytes } from './decode-bytes';
 export { joinClimateFiles, type FileImport } from './join-files';
 export { isKnownTimeZone, standardOffsetMinutes } from '../time-zone';

@@ -37,27 +37,15 @@ export function cleanedSeriesCsv(s: ClimateSeries): string {
   return `${lines.join('\n')}\n`;
 }
 
-/** Index range [from, to) of the hours in one calendar year on a clock `offsetMinutes` from UTC (the site's standard time). */
-export function yearWindow(timestampsMs: Float64Array, year: number, offsetMinutes: number): { from: number; to: number } {
-  const offsetMs = offsetMinutes * 60_000;
-  const start = Date.UTC(year, 0, 1) - offsetMs;
-  const end = Date.UTC(year + 1, 0, 1) - offsetMs;
-  const n = timestampsMs.length;
-  let from = timestampsMs.findIndex((t) => t >= start);
-  if (from < 0) from = n;
-  const after = timestampsMs.findIndex((t) => t >= end);
-  return { from, to: after < 0 ? n : after };
-}
-
-/** The hours of [from, to) as the file page reads them: JSON, values to 3 decimals, missing values null. */
-export function seriesHoursJson(s: ClimateSeries, { from, to }: { from: number; to: number }): string {
-  const pick = (a: Float64Array | null) => (a ? Array.from(a.subarray(from, to), round3) : null);
+/** Every hour as the file page reads them: JSON, values to 3 decimals, missing values null. */
+export function seriesHoursJson(s: ClimateSeries): string {
+  const pick = (a: Float64Array | null) => (a ? Array.from(a, round3) : null);
   return JSON.stringify({
     humidityKind: s.humidity.kind,
-    timestampsMs: Array.from(s.timestampsMs.subarray(from, to)),
+    timestampsMs: Array.from(s.timestampsMs),
     dryBulbC: pick(s.dryBulbC),
     humidity: pick(s.humidity.values),
     pressurePa: pick(s.pressurePa),
-    flags: Array.from(s.flags.subarray(from, to)),
+    flags: Array.from(s.flags),
   });
 }

@@ -3,7 +3,7 @@
  * the excursion totals (excursion-count.ts) against a recommended range and an allowable class.
  * Pure and synchronous: the worker task and the tests call the same function.
  */
-import { bulkStates, hourlyPressurePa } from '../psychrometrics';
+import { outdoorStates } from '../psychrometrics';
 import { MODE } from '../scenario/classify';
 import { deratedDryBulbMaxC, type EnvelopeLimits } from '../scenario/envelopes';
 import { designFanHeatK } from '../scenario/fans';
@@ -58,8 +58,7 @@ export interface ExcursionAnalysis extends ExcursionCounts {
 export function analyseProposal(scenario: Scenario, series: ScenarioSeries, elevationM: number, proposal: Proposal): ExcursionAnalysis {
   const n = series.dryBulbC.length;
   if (series.timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${series.timestampsMs.length} hours, dryBulbC has ${n}`);
-  const { pressurePa } = hourlyPressurePa(series, elevationM);
-  const states = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
+  const { states, pressurePa } = outdoorStates(series, elevationM);
 
   const derate = (e: EnvelopeLimits): EnvelopeBounds => ({
     dryBulbMinC: e.dryBulbMinC,

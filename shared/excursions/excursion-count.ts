@@ -4,18 +4,16 @@
  * consecutive hours outside the recommended range) with their durations; the hourly rate of change of the
  * inlet dry-bulb; and the time-weighted X-factor. Typed arrays in, plain totals out, no allocation per hour.
  */
-import { lnSaturationPressure } from '../psychrometrics/saturation';
-import { humidityRatioFromDewPoint } from '../psychrometrics';
-import { MOLAR_MASS_RATIO } from '../psychrometrics/constants';
 import { MS_PER_HOUR } from '../calendar';
 import type { InletLimits } from '../scenario/classify';
+import { ENVELOPE_BREACH, envelopeTest } from '../scenario/inside-envelope';
 import { xFactorAt } from './x-factor';
 
 /** Inlet limits an hour is checked against; dryBulbMaxC already derated for altitude. */
 export type EnvelopeBounds = InletLimits;
 
-/** Why an hour is outside an envelope (bit flags; an hour may have two). */
-export const CAUSE = { warm: 1, cold: 2, humid: 4, dry: 8 } as const;
+/** Why an hour is outside an envelope (bit flags; an hour may have two): the envelope test's own. */
+export const CAUSE = ENVELOPE_BREACH;
 
 export interface CauseHours {
   warm: number;
@@ -86,9 +84,8 @@ const MOISTURE_SLACK = 1e-9;
 
 /**
  * Excursion totals over the hours. An hour with a NaN inlet value is a no-data hour; an event is broken by a
- * no-data hour, by an hour back inside the range, or by a time step other than one hour. Humidity limits are
- * checked as humidity ratios: W at a dew-point limit (eq. 36 with 20) and W at (inlet dry-bulb, RH limit)
- * (eq. 22 with 20, saturation pressure eq. 5/6), ASHRAE Handbook—Fundamentals (2017) ch. 1.
+ * no-data hour, by an hour back inside the range, or by a time step other than one hour. Inside or outside is the
+ * envelope test's (shared/scenario/inside-envelope.ts), with a slack of 1e-9 for inlets a coil sets exactly to a limit.
  * Throws RangeError for arrays of different lengths or a non-positive rate limit.
  */
 export function countExcursions(input: CountInput): ExcursionCounts {
@@ -126,11 +123,9 @@ export function countExcursions(input: CountInput): ExcursionCounts {
 
   const fixedPressure = typeof pressurePa === 'number' ? pressurePa : Number.NaN;
   const pressureSeries = typeof pressurePa === 'number' ? null : pressurePa;
-  let cachedPressure = Number.NaN;
-  let recDpMinW = 0;
-  let recDpMaxW = 0;
-  let allowDpMinW = 0;
-  let allowDpMaxW = 0;
+  const slack = { dryBulbK: TEMPERATURE_SLACK_K, humidityRatio: MOISTURE_SLACK };
+  const recommendedBreach = envelopeTest(recommended, slack);
+  const allowableBreach = envelopeTest(allowable, slack);
 
   const closeRun = (length: number, start: number, totals: EventTotals, binned: boolean) => {
     if (length === 0) return;
@@ -157,22 +152,14 @@ export function countExcursions(input: CountInput): ExcursionCounts {
       previousC = Number.NaN;
       continue;
     }
-    if (p !== cachedPressure) {
-      cachedPressure = p;
-      recDpMinW = humidityRatioFromDewPoint(recommended.dewPointMinC, p);
-      recDpMaxW = humidityRatioFromDewPoint(recommended.dewPointMaxC, p);
-      allowDpMinW = humidityRatioFromDewPoint(allowable.dewPointMinC, p);
-      allowDpMaxW = humidityRatioFromDewPoint(allowable.dewPointMaxC, p);
-    }
     dataHours++;
     sumC += c;
     if (c < minC) minC = c;
     if (c > maxC) maxC = c;
     xSum += xFactorAt(c);
 
-    const pws = Math.exp(lnSaturationPressure(c));
-    const rec = causesOf(c, w, p, pws, recommended, recDpMinW, recDpMaxW);
-    const allow = causesOf(c, w, p, pws, allowable, allowDpMinW, allowDpMaxW);
+    const rec = recommendedBreach(c, w, p);
+    const allow = allowableBreach(c, w, p);
     tally(rec, recCauses);
     tally(allow, allowCauses);
     if (allow !== 0) outsideAllowable++;
@@ -241,19 +228,6 @@ export function durationBin(hours: number): number {
     if (to === null || hours <= to) return b;
   }
   return DURATION_BINS.length - 1;
-}
-
-function causesOf(c: number, w: number, p: number, pws: number, e: EnvelopeBounds, dpMinW: number, dpMaxW: number): number {
-  let causes = 0;
-  if (c > e.dryBulbMaxC + TEMPERATURE_SLACK_K) causes |= CAUSE.warm;
-  if (c < e.dryBulbMinC - TEMPERATURE_SLACK_K) causes |= CAUSE.cold;
-  const pwMax = (e.rhMaxPct / 100) * pws;
-  const rhMaxW = (MOLAR_MASS_RATIO * pwMax) / (p - pwMax);
-  if (w > dpMaxW + MOISTURE_SLACK || w > rhMaxW + MOISTURE_SLACK) causes |= CAUSE.humid;
-  const pwMin = (e.rhMinPct / 100) * pws;
-  const rhMinW = (MOLAR_MASS_RATIO * pwMin) / (p - pwMin);
-  if (w < dpMinW - MOISTURE_SLACK || w < rhMinW - MOISTURE_SLACK) causes |= CAUSE.dry;
-  return causes;
 }
 
 function tally(causes: number, into: CauseHours): void {

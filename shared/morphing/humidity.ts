@@ -3,20 +3,20 @@
  * near-surface humidity fields are reported and their changes published; then back to relative humidity
  * at the morphed dry-bulb and the hour's pressure. Same equations as shared/psychrometrics.
  */
-import { bulkStates, type BulkStateInput } from '../psychrometrics';
 import { MOLAR_MASS_RATIO } from '../psychrometrics/constants';
 import { lnSaturationPressure } from '../psychrometrics/saturation';
 import { isPressureOk, isTemperatureOk } from '../psychrometrics/validate';
 
 /**
- * Specific humidity, kg/kg of moist air, of each hour: the humidity ratio W of the hour's state
- * (bulkStates), then q = W / (1 + W). NaN where the state has no valid humidity.
- * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 9b (q = W/(1+W)); W by eq. 20, 22, 33, 35, 36.
+ * Specific humidity, kg/kg of moist air, of each hour from its humidity ratio W (the hour's outdoor state,
+ * outdoorStates): q = W / (1 + W), written into `out` (which may be `humidityRatio` itself). NaN stays NaN.
+ * Source: ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 9b.
+ * @param humidityRatio kg/kg of dry air
  */
-export function specificHumidityOfHours(input: BulkStateInput): Float64Array {
-  const w = bulkStates(input).humidityRatio;
-  for (let i = 0; i < w.length; i++) w[i] = w[i] / (1 + w[i]);
-  return w;
+export function specificHumidityOfHours(humidityRatio: Float64Array, out: Float64Array = new Float64Array(humidityRatio.length)): Float64Array {
+  if (out.length !== humidityRatio.length) throw new RangeError(`out has ${out.length} hours but humidityRatio has ${humidityRatio.length}`);
+  for (let i = 0; i < humidityRatio.length; i++) out[i] = humidityRatio[i] / (1 + humidityRatio[i]);
+  return out;
 }
 
 export interface RhClampCounts {

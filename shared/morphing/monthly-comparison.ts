@@ -1,6 +1,6 @@
 import type { ClimateSeries } from '../climate';
 import { monthlyStats } from '../climate-summary/monthly';
-import { bulkStates, hourlyPressurePa } from '../psychrometrics';
+import { outdoorStates } from '../psychrometrics';
 import { localCalendar } from './local-days';
 import { monthlyDayStatistics } from './monthly-day-statistics';
 
@@ -28,13 +28,13 @@ const rows = (stats: ReturnType<typeof monthlyStats>): MonthRow[] =>
 /**
  * Monthly min/mean/max of dry-bulb, dew point and specific humidity on the site's months, and the monthly
  * means of daily extremes of dry-bulb: what the projection page sets side by side for parent and projection.
- * Dew point and W from the engine's bulk states (ASHRAE Handbook—Fundamentals 2017 ch. 1); q = W/(1+W), eq. 9b.
+ * Dew point and W from the engine's outdoor states (outdoorStates; ASHRAE Handbook—Fundamentals 2017 ch. 1); q = W/(1+W), eq. 9b.
  */
 export function monthlyClimate(series: ClimateSeries, utcOffsetMinutes: number, elevationM: number): MonthlyClimate {
   const offsetMs = utcOffsetMinutes * 60_000;
-  const state = bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa: hourlyPressurePa(series, elevationM).pressurePa });
+  const state = outdoorStates(series, elevationM).states;
   const q = state.humidityRatio;
-  for (let i = 0; i < q.length; i++) q[i] = (1000 * q[i]) / (1 + q[i]);
+  for (let i = 0; i < q.length; i++) q[i] = (1000 * q[i]) / (1 + q[i]); // g/kg; eq. 9b as specificHumidityOfHours
   const days = monthlyDayStatistics(series.dryBulbC, localCalendar(series.timestampsMs, utcOffsetMinutes));
   const orNull = (a: Float64Array) => Array.from(a, (v) => (v === v ? v : null));
   return {

@@ -1,5 +1,5 @@
 import type { ClimateSeries } from '../climate';
-import { hourlyPressurePa } from '../psychrometrics';
+import { outdoorStates } from '../psychrometrics';
 import { HOUR_FLAG } from '../climate/types';
 import { MONTH_NAMES, type ChangeFactors } from './factors';
 import { rhPctFromSpecificHumidity, specificHumidityOfHours } from './humidity';
@@ -12,7 +12,7 @@ export interface MorphClimateInput {
   factors: ChangeFactors;
   /** The site's standard-time offset, minutes: days and months are the site's. */
   utcOffsetMinutes: number;
-  /** The site's elevation, m: the standard atmosphere there fills missing station pressure (hourlyPressurePa). */
+  /** The site's elevation, m: the standard atmosphere there fills missing station pressure (outdoorStates). */
   elevationM: number;
 }
 
@@ -88,8 +88,8 @@ export function morphClimate(input: MorphClimateInput): MorphOutcome {
     );
   }
 
-  const { pressurePa } = hourlyPressurePa(series, elevationM);
-  const q = specificHumidityOfHours({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa });
+  const { states, pressurePa } = outdoorStates(series, elevationM);
+  const q = specificHumidityOfHours(states.humidityRatio, states.humidityRatio);
   if (factors.humidityMethod === 'stretch')
     stretchByMonth(
       q,

@@ -8,7 +8,9 @@
 export { saturationPressurePa, saturationPressureOverIcePa, dewPointFromVapourPressure, frostPointFromVapourPressure, boilingPointC } from './saturation';
 export { rhOverWaterFromRhOverIce, dewPointFromFrostPoint } from './over-ice';
 export { standardPressurePa, standardElevationM } from './atmosphere';
-export { hourlyPressurePa } from './site-pressure';
+export { hourlyPressurePa, meanSitePressurePa } from './site-pressure';
+export { outdoorStates } from './outdoor-states';
+export type { OutdoorSeries, OutdoorStates } from './outdoor-states';
 export type { HourlyPressure, PressureSeries } from './site-pressure';
 export {
   humidityRatioFromVapourPressure,

@@ -47,3 +47,24 @@ export function hourlyPressurePa(series: PressureSeries, elevationM: number): Ho
   }
   return { pressurePa: filled ?? station, sitePressurePa, filledHours };
 }
+
+/**
+ * One pressure for a whole series, Pa, for what needs a single value (a chart's lines, design-condition humidity
+ * ratios): the mean of the station readings the series has, else the standard atmosphere at elevationM (ASHRAE
+ * Handbook—Fundamentals 2017 ch. 1 eq. 3).
+ * @param elevationM site elevation, m, −500…11 000
+ */
+export function meanSitePressurePa(series: Pick<PressureSeries, 'pressurePa'>, elevationM: number): number {
+  const station = series.pressurePa;
+  if (station) {
+    let sum = 0;
+    let count = 0;
+    for (let i = 0; i < station.length; i++) {
+      if (station[i] !== station[i]) continue; // NaN: no reading this hour
+      sum += station[i];
+      count++;
+    }
+    if (count > 0) return sum / count;
+  }
+  return standardPressurePa(elevationM);
+}

@@ -1,6 +1,6 @@
 /**
  * A finished run's hours as typed columns in one binary message, for the run page and its charts: the engine's
- * own outdoor states (the run's climate series at the run's elevation, shared/scenario outdoorStates) beside the
+ * own outdoor states (the run's climate series at the run's elevation, shared/psychrometrics outdoorStates) beside the
  * stored modes. No object per hour, no timestamps when the hours lie on a regular grid.
  *
  * Layout (all numbers little-endian):

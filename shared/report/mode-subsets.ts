@@ -129,7 +129,7 @@ export function modeColumnLabel(spec: ModeRowSpec, modeLabels: Record<ModeKey, s
 /** The hours of one row or column of a mode table; null for a count the run's engine did not make. */
 export function hoursOfSpec(row: { free: number; adiabatic: number; mechanical: number; noData: number }, spec: ModeRowSpec): number | null {
   if (spec.kind === 'subset') return subsetHours(row, spec.subset.key);
-  return spec.mode === 'no_data' ? row.noData : row[spec.mode];
+  return row[spec.mode];
 }
 
 /** Hours as a table shows them: whole hours with thousands separators, or NOT_COUNTED. */

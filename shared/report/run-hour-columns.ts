@@ -2,9 +2,9 @@
  * A finished run's hour columns (shared/report/hour-columns.ts lays them out): the outdoor states exactly as the run
  * computed them, and the stored per-hour outcome as it was. Runs on a pool thread (workers/hour-columns.ts).
  */
-import { standardPressurePa } from '../psychrometrics';
+import { meanSitePressurePa, outdoorStates } from '../psychrometrics';
 import { MODE_NAMES } from '../scenario/classify';
-import { outdoorStates, type ScenarioSeries } from '../scenario/run';
+import type { ScenarioSeries } from '../scenario/run';
 import { dryBulbBins } from './dry-bulb-bins';
 import { encodeHourColumns, evenStepMs, type HourColumnName, type HourColumns } from './hour-columns';
 
@@ -74,7 +74,7 @@ export function runHourColumns(input: RunHourInput, names: readonly HourColumnNa
       hours: n,
       startMs: n ? series.timestampsMs[0] : null,
       stepMs,
-      sitePressurePa: chartPressurePa(series, elevationM),
+      sitePressurePa: meanSitePressurePa(series, elevationM),
       modeNames: MODE_NAMES,
       ...(binWidthK === undefined
         ? {}
@@ -83,20 +83,4 @@ export function runHourColumns(input: RunHourInput, names: readonly HourColumnNa
     // timestamps first: float64 wants the 8-byte alignment every column starts at anyway
     stepMs === null ? { timestampsMs: series.timestampsMs, ...columns } : columns,
   );
-}
-
-/** The mean station pressure where the series has any, else the standard atmosphere at the elevation, Pa. */
-function chartPressurePa(series: ScenarioSeries, elevationM: number): number {
-  const station = series.pressurePa;
-  if (station) {
-    let sum = 0;
-    let count = 0;
-    for (let i = 0; i < station.length; i++) {
-      if (station[i] !== station[i]) continue; // NaN: no reading this hour
-      sum += station[i];
-      count++;
-    }
-    if (count > 0) return sum / count;
-  }
-  return standardPressurePa(elevationM);
 }

@@ -4,19 +4,18 @@
  * compressors carry, the envelope excursions, and the water the evaporative stage takes up. Typed arrays in and out,
  * no object per hour; the rules per system kind are written out in docs/method.md.
  */
-import {
-  dewPointFromHumidityRatio,
-  humidityRatioAtDewPointLimit,
-  humidityRatioAtRhLimit,
-  humidityRatioFromWetBulb,
-  maxHumidityRatioForLimits,
-} from '../psychrometrics';
+import { dewPointFromHumidityRatio, humidityRatioFromWetBulb } from '../psychrometrics';
 import type { EnvelopeLimits } from './envelopes';
+import { ENVELOPE_BREACH, envelopeBreach, envelopeMoistureLimits, envelopeTest } from './inside-envelope';
 import { hallSideEffectiveness } from './exchanger';
 import type { SingleSystem } from './schema';
 
 export const MODE = { free: 0, adiabatic: 1, mechanical: 2, noData: 3 } as const;
 export type ModeCode = (typeof MODE)[keyof typeof MODE];
+/**
+ * The words the hourly files (CSV and JSON) and the hour columns' header write for each mode code: a file format
+ * read by people and programs, so `no_data` stays as written since the first engine. In code the key is `noData`.
+ */
 export const MODE_NAMES = ['free', 'adiabatic', 'mechanical', 'no_data'] as const;
 
 /** Bit flags per hour. */
@@ -81,12 +80,11 @@ interface MoistureTargets {
 /**
  * Supply-air moisture limits at pressurePa for a supply at supplyAirC: highW is the smaller of W at
  * the dew-point maximum and W at (supplyAirC, RH maximum); lowW the larger of W at the dew-point
- * minimum and W at (supplyAirC, RH minimum). Equations: ASHRAE Handbook—Fundamentals (2017) ch. 1
- * eq. 20, 22, 36 through shared/psychrometrics.
+ * minimum and W at (supplyAirC, RH minimum): the envelope test's own limits (envelopeMoistureLimits). Equations:
+ * ASHRAE Handbook—Fundamentals (2017) ch. 1 eq. 20, 22, 36.
  */
 export function moistureTargets(limits: InletLimits, supplyAirC: number, pressurePa: number): MoistureTargets {
-  const highW = maxHumidityRatioForLimits(supplyAirC, { dewPointMaxC: limits.dewPointMaxC, rhMaxPct: limits.rhMaxPct }, pressurePa);
-  const lowW = Math.max(humidityRatioAtDewPointLimit(limits.dewPointMinC, pressurePa), humidityRatioAtRhLimit(supplyAirC, limits.rhMinPct, pressurePa));
+  const { highW, lowW } = envelopeMoistureLimits(limits, supplyAirC, pressurePa);
   return { highW, lowW, highDewPointC: dewPointFromHumidityRatio(highW, pressurePa) };
 }
 
@@ -114,8 +112,10 @@ export function classifyHours(system: SingleSystem, limits: InletLimits, hours: 
     excursions: new Uint8Array(n),
     evaporationKgPerKgAir: new Float64Array(n),
   };
+  // The supply setpoint against the envelope's dry-bulb range (no moisture given: only the dry-bulb bits can be set).
+  const supplyBreach = envelopeTest(limits)(system.supplyAirC, Number.NaN, Number.NaN);
   const supplyFlag =
-    (system.supplyAirC > limits.dryBulbMaxC ? EXCURSION.supplyAboveMax : 0) | (system.supplyAirC < limits.dryBulbMinC ? EXCURSION.supplyBelowMin : 0);
+    (supplyBreach & ENVELOPE_BREACH.warm ? EXCURSION.supplyAboveMax : 0) | (supplyBreach & ENVELOPE_BREACH.cold ? EXCURSION.supplyBelowMin : 0);
 
   const rule =
     system.kind === 'direct-air'
@@ -174,6 +174,9 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
   let targets: MoistureTargets = { highW: 0, lowW: 0, highDewPointC: 0 };
   // Where the mechanical-hour evaporative stage leaves the outdoor air, written by enteringState.
   const entering = { c: 0, w: 0 };
+  // Is air brought to the supply setpoint with this moisture inside the envelope? The one envelope test, on the
+  // moisture limits at the setpoint that the targets hold.
+  const breach = (w: number): number => envelopeBreach(limits, supplyAirC, w, targets);
 
   return (i, t, w, twb, p) => {
     if (p !== targetsPressure) {
@@ -182,13 +185,14 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
     }
     const { highW, lowW } = targets;
     let suppliedW = w;
+    const outdoorBreach = breach(w);
 
-    if (w > highW) {
+    if (outdoorBreach & ENVELOPE_BREACH.humid) {
       out.modes[i] = MODE.mechanical;
       suppliedW = highW;
     } else if (t <= offCoilC) {
       out.modes[i] = MODE.free;
-      if (w < lowW && eps > 0) {
+      if (outdoorBreach & ENVELOPE_BREACH.dry && eps > 0) {
         // Free cooling with humidification: outdoor air mixes with return air (held at lowW) and the evaporative
         // stage humidifies the mix to lowW at constant enthalpy, ending at the off-coil temperature. The outdoor
         // share x follows from the enthalpy balance h(offCoil, lowW) = x·h_out + (1 − x)·h(return, lowW).
@@ -201,7 +205,8 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
       }
     } else {
       const leavingW = eps > 0 && t - eps * (t - twb) <= offCoilC ? wetBulbLineW(offCoilC, twb, p) : Number.NaN;
-      if (leavingW <= highW) {
+      // NaN: the wetted air cannot reach the off-coil temperature (or there is no stage).
+      if (leavingW === leavingW && !(breach(leavingW) & ENVELOPE_BREACH.humid)) {
         out.modes[i] = MODE.adiabatic;
         out.evaporationKgPerKgAir[i] = leavingW - w;
         suppliedW = leavingW;
@@ -220,7 +225,7 @@ function directAirHour(system: Extract<SingleSystem, { kind: 'direct-air' }>, fa
         suppliedW = entering.w;
       }
     }
-    if (suppliedW < lowW) out.excursions[i] |= EXCURSION.lowHumidity;
+    if (breach(suppliedW) & ENVELOPE_BREACH.dry) out.excursions[i] |= EXCURSION.lowHumidity;
   };
 }
 

@@ -29,7 +29,9 @@ export { migrateScenario } from './migrate';
 export type { MigratedScenario, ScenarioChange } from './migrate';
 export { aggregateResults, blowdownL } from './results';
 export type { AggregatedResults, ModeHours, EnergyTotals, YearResults } from './results';
-export { designAtSite, outdoorStates, runScenario } from './run';
+export { designAtSite, runScenario } from './run';
+/** The run's first step, kept in the psychrometric engine (shared/psychrometrics/outdoor-states.ts). */
+export { outdoorStates } from '../psychrometrics';
 export { REGION, REGION_KEYS, binHours, cellCentre, cellOf, gridStates, hoursPerGridRegion, operatingRegionGrid, regionOfHour } from './operating-regions';
 export type { CellHours, DesignForRegions, GridStates, HourColumns, OperatingRegionGrid, RegionCode, RegionKey, StateGrid } from './operating-regions';
 export type { ScenarioSeries, RunOptions, ScenarioResults, ScenarioRun, LoopResults } from './run';

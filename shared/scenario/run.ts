@@ -2,7 +2,7 @@
  * One scenario over one hourly climate series: outdoor states, classification, energy, results.
  * Pure and synchronous, so the worker task, the command line and the tests call the same function.
  */
-import { bulkStates, hourlyPressurePa, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
+import { outdoorStates, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
 import { classifyHours, moistureTargets, type ClassifierPlant, type HourClassification, type InletLimits } from './classify';
 import { compressorModelFor, hourlyEnergy, type HourlyEnergy } from './energy';
 import { deratedDryBulbMaxC } from './envelopes';
@@ -174,16 +174,6 @@ export function designAtSite(scenario: Scenario, elevationM: number): { system: 
   const { envelope, system, energy } = single;
   const limits: InletLimits = { ...envelope, dryBulbMaxC: deratedDryBulbMaxC(envelope.dryBulbMaxC, elevationM, envelope.altitudeDerating) };
   return { system, limits, plant: { fanHeatK: designFanHeatK(energy.fanPowerFraction, system.itDeltaTK) } };
-}
-
-/**
- * Every hour's outdoor moist-air state at its pressure: the station's where the series has it, the standard
- * atmosphere at the site's elevation where it has none or a hole (hourlyPressurePa). The first step of a run,
- * and all the hourly downloads need to write a run's states again.
- */
-export function outdoorStates(series: ScenarioSeries, elevationM: number): { states: BulkState; pressurePa: Float64Array | number; filledHours: number } {
-  const { pressurePa, filledHours } = hourlyPressurePa(series, elevationM);
-  return { states: bulkStates({ dryBulbC: series.dryBulbC, humidity: series.humidity, pressurePa }), pressurePa, filledHours };
 }
 
 const round2 = (x: number): number => Math.round(x * 100) / 100;

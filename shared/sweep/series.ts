@@ -2,6 +2,7 @@
  * A sweep's points as the API gives them, and the figures drawn from them: progress, hours per mode
  * and the other results against the swept value, and grid cells of one metric.
  */
+import type { ModeKey } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import { subsetHours, waterPartL } from '../report/mode-subsets';
 import { METRICS, type MetricDefinition, type MetricKey } from '../metrics';
@@ -142,7 +143,7 @@ export interface ModeHoursRow {
   /** Position along the axis (0-based), so presets and numbers share one chart form. */
   index: number;
   value: SweepValue;
-  mode: 'free' | 'adiabatic' | 'mechanical' | 'no_data';
+  mode: ModeKey;
   hours: number;
 }
 
@@ -157,7 +158,7 @@ export function modeHoursRows(points: readonly SweepPoint[], input: string): Mod
       { index, value, mode: 'free', hours: h.free },
       { index, value, mode: 'adiabatic', hours: h.adiabatic },
       { index, value, mode: 'mechanical', hours: h.mechanical },
-      { index, value, mode: 'no_data', hours: h.noData },
+      { index, value, mode: 'noData', hours: h.noData },
     );
   });
   return rows;

@@ -1,9 +1,9 @@
 /**
- * The stored hours as the charts need them: typed arrays (JSON nulls back to NaN) and the humidity
- * ratio of every hour at the file's pressure, or at the site's standard-atmosphere pressure where the
- * file has none (hourlyPressurePa, as a run does).
+ * The stored hours as the charts need them: typed arrays (JSON nulls back to NaN) and every hour's state by the
+ * engine's outdoorStates (the file's pressure, or the site's standard atmosphere where the file has none), as a run
+ * computes them.
  */
-import { bulkStates, hourlyPressurePa, type HumidityKind } from '../../shared/psychrometrics';
+import { meanSitePressurePa, outdoorStates, type HumidityKind } from '../../shared/psychrometrics';
 
 /** The stored hourly series as the API sends it, SI; humidity in the unit of its kind; a missing value is null. */
 export interface ClimateHoursJson {
@@ -26,7 +26,7 @@ export interface ChartSeries {
   /** Each hour's pressure, Pa (one number when the file has no station pressure), as a run takes it. */
   pressurePa: Float64Array | number;
   flags: Uint8Array | null;
-  /** The chart's one pressure, Pa: the mean of the hours' pressures (station where given, else the standard atmosphere at the site). */
+  /** The chart's one pressure, Pa: the mean station reading where the file has any, else the standard atmosphere at the site (meanSitePressurePa). */
   chartPressurePa: number;
 }
 
@@ -40,27 +40,20 @@ export function toFloat64(values: ArrayLike<number | null>): Float64Array {
 }
 
 export function chartSeries(hours: ClimateHoursJson, elevationM: number): ChartSeries {
-  const dryBulbC = toFloat64(hours.dryBulbC);
-  const humidity = { kind: hours.humidityKind, values: toFloat64(hours.humidity) };
-  const { pressurePa, sitePressurePa } = hourlyPressurePa(
-    { dryBulbC, humidity, pressurePa: hours.pressurePa ? toFloat64(hours.pressurePa) : null },
-    elevationM,
-  );
-  const state = bulkStates({ dryBulbC, humidity, pressurePa });
-  let chartPressurePa = sitePressurePa;
-  if (typeof pressurePa !== 'number' && pressurePa.length) {
-    let sum = 0;
-    for (let i = 0; i < pressurePa.length; i++) sum += pressurePa[i];
-    chartPressurePa = sum / pressurePa.length;
-  }
+  const series = {
+    dryBulbC: toFloat64(hours.dryBulbC),
+    humidity: { kind: hours.humidityKind, values: toFloat64(hours.humidity) },
+    pressurePa: hours.pressurePa ? toFloat64(hours.pressurePa) : null,
+  };
+  const { states, pressurePa } = outdoorStates(series, elevationM);
   return {
     timestampsMs: Float64Array.from(hours.timestampsMs),
-    dryBulbC,
-    humidityRatio: state.humidityRatio,
-    dewPointC: state.dewPointC,
-    wetBulbC: state.wetBulbC,
+    dryBulbC: series.dryBulbC,
+    humidityRatio: states.humidityRatio,
+    dewPointC: states.dewPointC,
+    wetBulbC: states.wetBulbC,
     pressurePa,
     flags: hours.flags ? Uint8Array.from(hours.flags) : null,
-    chartPressurePa,
+    chartPressurePa: meanSitePressurePa(series, elevationM),
   };
 }

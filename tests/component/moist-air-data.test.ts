@@ -101,7 +101,7 @@ describe('envelopes and the chart window', () => {
     const hours = { dryBulbC: [22, 22, 30, Number.NaN], humidityRatio: [0.008, 0.0125, 0.008, 0.008] };
     const state = hourStates(hours, seaLevelPa);
     // 22 °C at 12.5 g/kg has a dew point near 17.4 °C (above 15 °C); 30 °C is above 27 °C.
-    expect(hoursInside(hours, state, recommended)).toEqual({ inside: 1, withData: 3 });
+    expect(hoursInside(hours, seaLevelPa, recommended)).toEqual({ inside: 1, withData: 3 });
     expect(state.dewPointC[1]).toBeCloseTo(psychrolib.GetTDewPointFromHumRatio(22, 0.0125, seaLevelPa), 2);
   });
 

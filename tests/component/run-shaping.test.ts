@@ -47,7 +47,7 @@ describe('monthly rows and inputs as run', () => {
       { month: 7, mode: 'free', hours: 39 },
       { month: 7, mode: 'adiabatic', hours: 6 },
       { month: 7, mode: 'mechanical', hours: 27 },
-      { month: 7, mode: 'no_data', hours: 0 },
+      { month: 7, mode: 'noData', hours: 0 },
     ]);
   });
 

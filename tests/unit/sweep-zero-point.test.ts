@@ -146,7 +146,7 @@ describe('figures drawn from the points', () => {
       [20, 'free', 50],
       [20, 'adiabatic', 10],
       [20, 'mechanical', 12],
-      [20, 'no_data', 0],
+      [20, 'noData', 0],
     ]);
     expect(metricRows(points, 'system.supplyAirC', 'peakMechanicalLoadKw')).toEqual([{ index: 0, value: 20, metric: 300 }]);
     expect(gridCells(points, 'system.supplyAirC', 'system.evaporativeEffectiveness', 'free')).toEqual([]);

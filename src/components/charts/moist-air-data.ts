@@ -21,6 +21,7 @@ import { enthalpyIpToSiKJPerKg, fahrenheitToCelsius } from '../../../shared/unit
 import { toDisplay } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import type { EnvelopeLimits } from '../../../shared/scenario/envelopes';
+import { envelopeTest } from '../../../shared/scenario/inside-envelope';
 
 /** The six limits the chart draws; derating is already applied by whoever hands them in. */
 export type EnvelopeLimitsInput = Omit<EnvelopeLimits, 'altitudeDerating'>;
@@ -271,26 +272,20 @@ export function hourStates(hours: ChartHours, pressurePa: number): BulkState {
   });
 }
 
-/** Hours whose state lies within the envelope's limits (all six), and hours with a state at all. */
-export function hoursInside(hours: ChartHours, state: BulkState, limits: EnvelopeLimitsInput): { inside: number; withData: number } {
+/**
+ * Hours inside the envelope's limits (all six, at the chart's pressure, by the one envelope test), and hours with a
+ * state at all (a dry-bulb and a humidity ratio).
+ */
+export function hoursInside(hours: ChartHours, pressurePa: number, limits: EnvelopeLimitsInput): { inside: number; withData: number } {
+  const breach = envelopeTest(limits);
   let inside = 0;
   let withData = 0;
   for (let i = 0; i < hours.dryBulbC.length; i++) {
     const t = hours.dryBulbC[i];
-    const dp = state.dewPointC[i];
-    const rh = state.rhPct[i];
-    if (!(t === t && dp === dp && rh === rh)) continue;
+    const w = hours.humidityRatio[i];
+    if (!(t === t && w === w)) continue;
     withData++;
-    if (
-      t >= limits.dryBulbMinC &&
-      t <= limits.dryBulbMaxC &&
-      dp >= limits.dewPointMinC &&
-      dp <= limits.dewPointMaxC &&
-      rh >= limits.rhMinPct &&
-      rh <= limits.rhMaxPct
-    ) {
-      inside++;
-    }
+    if (breach(t, w, pressurePa) === 0) inside++;
   }
   return { inside, withData };
 }

@@ -46,7 +46,7 @@ export function MoistAirTable({
       dewPoint: range(states.dewPointC),
       wetBulb: range(states.wetBulbC),
       enthalpy: range(states.enthalpyKJPerKg),
-      inside: envelopes.map((e) => hoursInside(hours, states, e.limits)),
+      inside: envelopes.map((e) => hoursInside(hours, pressurePa, e.limits)),
       modeHours,
     };
   }, [open, hours, pressurePa, envelopes]);

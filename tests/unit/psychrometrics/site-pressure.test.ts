@@ -7,9 +7,12 @@ import { describe, expect, it } from 'vitest';
 import { HOUR_FLAG, type ClimateSeries } from '../../../shared/climate';
 import { summariseClimate } from '../../../shared/climate-summary';
 import { monthlyClimate } from '../../../shared/morphing';
-import { hourlyPressurePa } from '../../../shared/psychrometrics';
+import { hourlyPressurePa, meanSitePressurePa, outdoorStates } from '../../../shared/psychrometrics';
 import { runScenario } from '../../../shared/scenario';
-import { makeScenario } from '../scenario/fixtures';
+import { analyseProposal } from '../../../shared/excursions';
+import { ENVELOPE_PRESETS } from '../../../shared/scenario/envelopes';
+import { chartSeries } from '../../../src/lib/climate-series';
+import { makeScenario, stateFromDewPoint } from '../scenario/fixtures';
 import { psychrolib as psy } from './reference-psychrolib';
 
 const NaN_ = Number.NaN;
@@ -63,5 +66,63 @@ describe('every place uses it', () => {
   it('the projection statistics compute it too', () => {
     const monthly = monthlyClimate(series(), 0, 1200);
     expect(monthly.dewPointC[0].hours).toBe(3);
+  });
+});
+
+describe('meanSitePressurePa: the one pressure of a whole series', () => {
+  it('is the mean of the station readings, not of the filled column', () => {
+    // (88 000 + 88 500) / 2: the holes do not pull it towards the standard atmosphere.
+    expect(meanSitePressurePa(series(), 1200)).toBe(88_250);
+    // No station column, or one without a reading: the standard atmosphere (psychrolib GetStandardAtmPressure).
+    expect(meanSitePressurePa({ pressurePa: null }, 1200)).toBeCloseTo(psy.GetStandardAtmPressure(1200), 6);
+    expect(meanSitePressurePa({ pressurePa: Float64Array.of(NaN_, NaN_) }, 1200)).toBeCloseTo(psy.GetStandardAtmPressure(1200), 6);
+  });
+
+  it("the climate file's chart takes the same pressure as the summary and the run page (it used to average the filled column)", () => {
+    const s = series();
+    const hours = {
+      humidityKind: s.humidity.kind,
+      timestampsMs: Array.from(s.timestampsMs),
+      dryBulbC: Array.from(s.dryBulbC, (v) => (v === v ? v : null)),
+      humidity: Array.from(s.humidity.values, (v) => (v === v ? v : null)),
+      pressurePa: Array.from(s.pressurePa!, (v) => (v === v ? v : null)),
+      flags: Array.from(s.flags),
+    };
+    const chart = chartSeries(hours, 1200);
+    expect(chart.chartPressurePa).toBe(88_250);
+    expect(summariseClimate(s, 1200).meanPressurePa).toBe(88_250);
+  });
+});
+
+describe("outdoorStates: one function for an hour's state", () => {
+  it("gives psychrolib's state at each hour's pressure, the hole at the standard atmosphere", () => {
+    const { states, pressurePa, filledHours } = outdoorStates(series(), 1200);
+    expect(filledHours).toBe(1);
+    const p = pressurePa as Float64Array;
+    for (const [i, dewPointC] of [
+      [0, 0],
+      [1, 1],
+      [3, 2],
+    ] as const) {
+      const t = series().dryBulbC[i];
+      const at = i === 1 ? psy.GetStandardAtmPressure(1200) : p[i];
+      expect(p[i]).toBeCloseTo(at, 6);
+      // psychrolib: W from the dew point over water (eq. 20, 36), wet-bulb (eq. 33), enthalpy (eq. 32) at the hour's pressure.
+      const { w, twb } = stateFromDewPoint(t, dewPointC, at);
+      expect(states.humidityRatio[i]).toBeCloseTo(w, 9);
+      expect(states.dewPointC[i]).toBeCloseTo(dewPointC, 6);
+      expect(states.wetBulbC[i]).toBeCloseTo(twb, 4);
+      expect(states.enthalpyKJPerKg[i]).toBeCloseTo(psy.GetMoistAirEnthalpy(t, w) / 1000, 6);
+    }
+    expect(Number.isNaN(states.humidityRatio[2])).toBe(true);
+  });
+
+  it('the excursions see the same hours as the run (the state of the hole hour included)', () => {
+    const s = series();
+    const scenario = makeScenario('direct-air', { elevationM: 1200 });
+    const a1 = ENVELOPE_PRESETS.find((e) => e.id === 'ashrae-2021-a1')!.limits;
+    const rec = ENVELOPE_PRESETS.find((e) => e.id === 'ashrae-2021-recommended')!.limits;
+    const out = analyseProposal(scenario, s, 1200, { supplyAirC: 24, floatUpToC: null, control: rec, recommended: rec, allowable: a1 });
+    expect(out.dataHours).toBe(3);
   });
 });

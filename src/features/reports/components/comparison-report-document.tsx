@@ -20,7 +20,7 @@ import { Notice } from '@/components/ui/notice';
 import { countsSubsets, hoursOfSpec, hoursText, mixedEngineNote, modeRowSpecs, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';
 
 /** The monthly table's figures per run: each mode with its 'of which' counts, no-data hours left out. */
-const monthlySpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
+const monthlySpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'noData');
 
 const verdictInk = { better: 'text-signal-ok', worse: 'text-signal-bad', same: 'text-ink-soft', none: 'text-ink-soft' };
 

@@ -19,7 +19,7 @@ const statusClass: Record<SweepRunStatus, string> = {
 };
 
 /** The mode columns (no-data hours left out), each followed by the hours that are part of it. */
-const hourSpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'no_data');
+const hourSpecs = modeRowSpecs.filter((spec) => spec.kind === 'subset' || spec.mode !== 'noData');
 
 /** Every point with its run and results: the table beside the charts, and its CSV download in the person's units. */
 export function SweepPointsTable({
