@@ -1,13 +1,15 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
-// Four projects share one run: pure modules, the HTTP API through supertest,
-// client components in jsdom, and end-to-end journeys in Debian's Chromium.
+// Four projects share one run: pure modules (the client's too), the HTTP API through supertest,
+// client components rendered in jsdom with Testing Library, and end-to-end journeys in Debian's Chromium.
 export default defineConfig({
   test: {
     onConsoleLog: undefined,
     projects: [
       {
+        // The client's pure modules (tests/unit/client) import '@/…' as the app does.
+        resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
         test: {
           name: 'unit',
           include: ['tests/unit/**/*.test.ts'],
@@ -28,9 +30,9 @@ export default defineConfig({
         resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
         test: {
           name: 'component',
-          include: ['tests/component/**/*.test.{ts,tsx}'],
+          include: ['tests/component/**/*.test.tsx'],
           environment: 'jsdom',
-          setupFiles: ['tests/setup/fail-on-console-error.ts'],
+          setupFiles: ['tests/setup/fail-on-console-error.ts', 'tests/setup/testing-library.ts'],
         },
       },
       {

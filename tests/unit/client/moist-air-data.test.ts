@@ -8,10 +8,10 @@ import {
   hourStates,
   sampleIndex,
   stateToChartXY,
-} from '../../src/components/charts/moist-air-data';
-import { ENVELOPE_PRESETS } from '../../shared/scenario/envelopes';
-import { psychrolib } from '../unit/psychrometrics/reference-psychrolib';
-import { hylandWexlerWaterPa } from '../unit/psychrometrics/reference-over-water';
+} from '../../../src/components/charts/moist-air-data';
+import { ENVELOPE_PRESETS } from '../../../shared/scenario/envelopes';
+import { psychrolib } from '../psychrometrics/reference-psychrolib';
+import { hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
 
 const seaLevelPa = 101_325;
 

@@ -5,7 +5,7 @@ import { compareRuns } from '@/features/compare/utils/compare-runs';
 import { comparisonCsv } from '@/features/compare/utils/comparison-csv';
 import { formatMetric } from '@/features/compare/components/metric-format';
 import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
-import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../shared/report/dry-bulb-bins';
+import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../../shared/report/dry-bulb-bins';
 import { engineNoteText } from '@/lib/engine-notes';
 import { solveState } from '@/features/calculator/utils/state-request';
 import { stateRows } from '@/features/calculator/utils/state-rows';
