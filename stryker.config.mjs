@@ -16,6 +16,8 @@ export default {
   timeoutMS: 30_000,
   reporters: ['clear-text', 'progress-append-only', 'json'],
   jsonReporter: { fileName: 'reports/mutation/mutation.json' },
-  ignorePatterns: ['dist', 'data', 'reports', 'test-results', '.tmp'],
+  // Root-anchored: a bare 'reports' would also drop server/reports/, and a test file that then fails to import is
+  // skipped without a word (its suite fails, no test fails), leaving every mutant it covers 'survived' or 'no coverage'.
+  ignorePatterns: ['/dist', '/data', '/reports', '/test-results', '/.tmp'],
   tempDirName: '.stryker-tmp',
 };

@@ -4,7 +4,13 @@ import { defineConfig } from 'vitest/config';
 // hour classifier. Not part of `npm test`; vitest.config.ts stays the one suite.
 export default defineConfig({
   test: {
-    include: ['tests/unit/scenario/classify.test.ts', 'tests/api/roles.test.ts', 'tests/api/runs.test.ts', 'tests/api/sweep-cancel.test.ts'],
+    include: [
+      'tests/unit/scenario/classify.test.ts',
+      'tests/unit/access-rules.test.ts',
+      'tests/api/roles.test.ts',
+      'tests/api/runs.test.ts',
+      'tests/api/sweep-cancel.test.ts',
+    ],
     environment: 'node',
     setupFiles: ['tests/setup/fail-on-console-error.ts'],
     testTimeout: 20_000,
