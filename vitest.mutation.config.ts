@@ -1,16 +1,18 @@
 import { defineConfig } from 'vitest/config';
 
-// Only the tests that guard the rules `npm run mutation` mutates (stryker.config.mjs): role checks, run cancel and the
-// hour classifier. Not part of `npm test`; vitest.config.ts stays the one suite.
+/** The tests that guard the rules `npm run mutation` mutates (stryker.config.mjs), by the file they guard. */
+export const MUTATION_TESTS = {
+  access: ['tests/unit/access-rules.test.ts', 'tests/api/roles.test.ts'],
+  cancel: ['tests/api/runs.test.ts', 'tests/api/sweep-cancel.test.ts'],
+  classify: ['tests/unit/scenario/classify.test.ts', 'tests/unit/scenario/classify-edges.test.ts'],
+};
+
+// Not part of `npm test`; vitest.config.ts stays the one suite. MUTATION_TESTS=access,cancel narrows a run to those sets.
+const sets = (process.env.MUTATION_TESTS ?? 'access,cancel,classify').split(',') as Array<keyof typeof MUTATION_TESTS>;
+
 export default defineConfig({
   test: {
-    include: [
-      'tests/unit/scenario/classify.test.ts',
-      'tests/unit/access-rules.test.ts',
-      'tests/api/roles.test.ts',
-      'tests/api/runs.test.ts',
-      'tests/api/sweep-cancel.test.ts',
-    ],
+    include: sets.flatMap((set) => MUTATION_TESTS[set]),
     environment: 'node',
     setupFiles: ['tests/setup/fail-on-console-error.ts'],
     testTimeout: 20_000,
