@@ -1,0 +1,1 @@
+CREATE INDEX `runs_sweep_idx` ON `runs` (`sweep_id`);

@@ -1,0 +1,1 @@
+ALTER TABLE `run_hours` ADD `humidified` blob;

@@ -1,0 +1,1 @@
+ALTER TABLE `scenarios` ADD `migration_json` text;

@@ -1,0 +1,16 @@
+/**
+ * mulberry32: a small seeded generator (public domain, T. Ettinger), uniform on [0, 1). Enough for
+ * synthetic demo weather and benchmark inputs, which must come out the same on every run.
+ */
+// @ts-nocheck
+
+export function seededRandom(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}

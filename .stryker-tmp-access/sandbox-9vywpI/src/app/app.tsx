@@ -1,0 +1,11 @@
+// @ts-nocheck
+import { AppProvider } from './provider';
+import { AppRouter } from './router';
+
+export function App() {
+  return (
+    <AppProvider>
+      <AppRouter />
+    </AppProvider>
+  );
+}

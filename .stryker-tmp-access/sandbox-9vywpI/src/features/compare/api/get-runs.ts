@@ -1,0 +1,2 @@
+// @ts-nocheck
+export { useProjectRuns as useRuns, type RunListing } from '@/lib/project-runs';

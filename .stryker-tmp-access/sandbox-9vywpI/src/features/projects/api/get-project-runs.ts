@@ -1,0 +1,2 @@
+// @ts-nocheck
+export { useProjectRuns, type RunListing, type RunStatus } from '@/lib/project-runs';

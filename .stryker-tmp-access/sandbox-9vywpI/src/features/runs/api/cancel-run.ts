@@ -1,0 +1,14 @@
+// @ts-nocheck
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiFetch } from '@/lib/api-client';
+import type { RunRecord } from './get-run';
+
+export const cancelRun = (projectId: number, runId: number) => apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST' });
+
+export function useCancelRun(projectId: number, runId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => cancelRun(projectId, runId),
+    onSuccess: (data) => queryClient.setQueryData(['projects', projectId, 'runs', runId], data),
+  });
+}

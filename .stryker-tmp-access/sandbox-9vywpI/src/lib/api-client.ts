@@ -1,0 +1,58 @@
+/** The one way the client talks to the server: JSON in, JSON out, errors in the server's one shape. */
+// @ts-nocheck
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: unknown,
+  ) {
+    super(message);
+  }
+}
+
+async function send(path: string, init: RequestInit): Promise<Response> {
+  const headers = new Headers(init.headers);
+  // The server refuses signed-in changes without this header: a cross-site form or image cannot add it.
+  headers.set('x-tramontane-request', '1');
+  if (init.body && !(init.body instanceof FormData) && !headers.has('content-type')) {
+    headers.set('content-type', 'application/json');
+  }
+  try {
+    return await fetch(`/api${path}`, { ...init, headers, credentials: 'same-origin' });
+  } catch {
+    throw new ApiError(0, 'network', 'The server cannot be reached. Check that Tramontane is running.');
+  }
+}
+
+function refusal(response: Response, body: unknown): ApiError {
+  const error = (body as { error?: { code?: string; message?: string; details?: unknown } } | undefined)?.error;
+  return new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.details);
+}
+
+export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
+  const response = await send(path, init);
+  const text = await response.text();
+  const body = text ? safeJson(text) : undefined;
+  if (!response.ok) throw refusal(response, body);
+  return body as T;
+}
+
+/** A binary answer (application/octet-stream) as bytes; a refusal still arrives in the one JSON error shape. */
+export async function apiFetchBytes(path: string, init: RequestInit = {}): Promise<ArrayBuffer> {
+  const response = await send(path, init);
+  if (!response.ok) {
+    const text = await response.text();
+    throw refusal(response, text ? safeJson(text) : undefined);
+  }
+  return response.arrayBuffer();
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}

@@ -1,0 +1,100 @@
+/**
+ * The import boundaries of DEVELOPERS.md ("Imports flow one way") are enforced by eslint.config.js. Each case
+ * lints one import line as if it were written in a file of the named folder, through ESLint's Node API with the
+ * project's own configuration, and checks whether the boundary rule refuses it. The imported modules are real
+ * files, so the rule resolves them as it does in `npm run lint` (the '@/…' alias included).
+ */
+// @ts-nocheck
+
+import { fileURLToPath } from 'node:url';
+import { ESLint } from 'eslint';
+import { describe, expect, it } from 'vitest';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+const eslint = new ESLint({ cwd: root });
+const RULE = 'import-x/no-restricted-paths';
+
+/** The boundary rule's messages for `code` written in `file` (a path from the project root; it need not exist). */
+async function boundaryErrors(file: string, code: string): Promise<string[]> {
+  const [result] = await eslint.lintText(`${code}\nexport {};\n`, { filePath: `${root}/${file}` });
+  return result.messages.filter((m) => m.ruleId === RULE).map((m) => m.message);
+}
+
+// ESLint loads typescript-eslint and the resolver on first use; allow a busy machine.
+const slow = { timeout: 60_000 };
+
+describe('import boundaries (DEVELOPERS.md, Layout)', () => {
+  it.each([
+    ['shared/ importing the client', 'shared/boundary-fixture.ts', "import { toDisplay } from '../src/lib/quantity';", /shared\/ imports nothing of ours/],
+    [
+      'shared/ importing the server',
+      'shared/psychrometrics/boundary-fixture.ts',
+      "import { createApp } from '../../server/app';",
+      /shared\/ imports nothing of ours/,
+    ],
+    ['shared/ importing the pool', 'shared/boundary-fixture.ts', "import { createWorkerPool } from '../workers/pool';", /shared\/ imports nothing of ours/],
+    ['the client importing the server', 'src/lib/boundary-fixture.ts', "import { createApp } from '../../server/app';", /never server\/ or workers\//],
+    [
+      'the client importing the pool',
+      'src/features/runs/api/boundary-fixture.ts',
+      "import { createWorkerPool } from '../../../../workers/pool';",
+      /never server\/ or workers\//,
+    ],
+    [
+      'a feature importing another through the alias',
+      'src/features/runs/api/boundary-fixture.ts',
+      "import { getSweep } from '@/features/sweeps/api/get-sweep';",
+      /Features never import each other/,
+    ],
+    [
+      'a feature importing another by a relative path',
+      'src/features/runs/components/boundary-fixture.tsx',
+      "import { getSweep } from '../../sweeps/api/get-sweep';",
+      /Features never import each other/,
+    ],
+    [
+      'a shared component importing a feature',
+      'src/components/ui/boundary-fixture.tsx',
+      "import { getRun } from '@/features/runs/api/get-run';",
+      /import no feature and not src\/app/,
+    ],
+    [
+      'a shared component importing the app',
+      'src/components/ui/boundary-fixture.tsx',
+      "import { AppShell } from '@/app/app-shell';",
+      /import no feature and not src\/app/,
+    ],
+    [
+      'a feature importing the app',
+      'src/features/runs/components/boundary-fixture.tsx',
+      "import { AppShell } from '@/app/app-shell';",
+      /never import src\/app/,
+    ],
+    ['the server importing the client', 'server/routes/boundary-fixture.ts', "import { toDisplay } from '../../src/lib/quantity';", /never import the client/],
+  ])('refuses %s', slow, async (_case, file, code, message) => {
+    const errors = await boundaryErrors(file, code);
+    expect(errors).toHaveLength(1);
+    expect(errors[0]).toMatch(message);
+  });
+
+  it.each([
+    [
+      'a feature importing its own modules, src/lib, src/components and shared/',
+      'src/features/runs/components/boundary-fixture.tsx',
+      "import { getRun } from '../api/get-run';\nimport { toDisplay } from '@/lib/quantity';\nimport { Panel } from '@/components/ui/panel';\nimport { withoutControlCharacters } from '../../../../shared/schemas/plain-text';",
+    ],
+    [
+      'the app composing features',
+      'src/app/boundary-fixture.tsx',
+      "import { getRun } from '@/features/runs/api/get-run';\nimport { getSweep } from '@/features/sweeps/api/get-sweep';",
+    ],
+    ['the server and a test importing shared/', 'server/boundary-fixture.ts', "import { withoutControlCharacters } from '../shared/schemas/plain-text';"],
+    [
+      'a test importing anything',
+      'tests/unit/boundary-fixture.test.ts',
+      "import { createApp } from '../../server/app';\nimport { toDisplay } from '../../src/lib/quantity';",
+    ],
+  ])('allows %s', slow, async (_case, file, code) => {
+    expect(await boundaryErrors(file, code)).toEqual([]);
+  });
+});
