@@ -1,1 +1,0 @@
-CREATE INDEX `runs_sweep_idx` ON `runs` (`sweep_id`);

@@ -1,1 +1,0 @@
-ALTER TABLE `run_hours` ADD `humidified` blob;

@@ -1,1 +1,0 @@
-ALTER TABLE `scenarios` ADD `migration_json` text;

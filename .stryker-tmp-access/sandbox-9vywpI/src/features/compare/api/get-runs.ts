@@ -1,2 +1,0 @@
-// @ts-nocheck
-export { useProjectRuns as useRuns, type RunListing } from '@/lib/project-runs';

@@ -1,2 +1,0 @@
-// @ts-nocheck
-export { useProjectRuns, type RunListing, type RunStatus } from '@/lib/project-runs';
