@@ -55,7 +55,7 @@ const boundaryZones = [
 ];
 
 export default tseslint.config(
-  { ignores: ['node_modules/', 'dist/', 'data/', 'test-results/', '.tmp/', 'drizzle/'] },
+  { ignores: ['node_modules/', 'dist/', 'data/', 'test-results/', '.tmp/', 'drizzle/', '.stryker-tmp*/', 'reports/'] },
   js.configs.recommended,
   tseslint.configs.recommended,
   {

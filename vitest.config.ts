@@ -1,8 +1,8 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
-// Four projects share one run: pure modules, the HTTP API through supertest,
-// client components in jsdom, and end-to-end journeys in Debian's Chromium.
+// Four projects share one run: pure modules (the client's too), the HTTP API through supertest,
+// client components rendered in jsdom with Testing Library, and end-to-end journeys in Debian's Chromium.
 
 // A test process that dies of a fatal error (out of memory, a V8 check) leaves a Node report here, which
 // .ci/run prints with the files that never finished.
@@ -15,6 +15,8 @@ export default defineConfig({
     onConsoleLog: undefined,
     projects: [
       {
+        // The client's pure modules (tests/unit/client) import '@/…' as the app does.
+        resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
         test: {
           ...diagnostics,
           name: 'unit',
@@ -38,9 +40,9 @@ export default defineConfig({
         test: {
           ...diagnostics,
           name: 'component',
-          include: ['tests/component/**/*.test.{ts,tsx}'],
+          include: ['tests/component/**/*.test.tsx'],
           environment: 'jsdom',
-          setupFiles: ['tests/setup/fail-on-console-error.ts'],
+          setupFiles: ['tests/setup/fail-on-console-error.ts', 'tests/setup/testing-library.ts'],
         },
       },
       {

@@ -1,22 +1,18 @@
-import { act } from 'react';
-import { createRoot } from 'react-dom/client';
+import { render } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { MethodSection } from '@/features/reports/components/method-section';
 import type { ReportRun } from '../../shared/report/report-data';
-
-(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
 /** Only what the method section reads of a run: its engine and its system kind. */
 const runOf = (engineVersion: string, kind: ReportRun['scenario']['system']['kind']) =>
   ({ engineVersion, scenario: { system: { kind } } }) as unknown as ReportRun;
 
+/** The section as rendered: all the text a reader of the report sees in it. */
 function methodText(runs: ReportRun[]): string {
-  const host = document.createElement('div');
-  const root = createRoot(host);
-  act(() => root.render(<MethodSection runs={runs} />));
+  const { container, unmount } = render(<MethodSection runs={runs} />);
   // The doc's line breaks reach the page as whitespace, as a browser shows them.
-  const text = (host.textContent ?? '').replace(/\s+/g, ' ');
-  act(() => root.unmount());
+  const text = (container.textContent ?? '').replace(/\s+/g, ' ');
+  unmount();
   return text;
 }
 

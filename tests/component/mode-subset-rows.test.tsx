@@ -1,7 +1,6 @@
 import { createRequire } from 'node:module';
-import { act } from 'react';
-import { createRoot, type Root } from 'react-dom/client';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { render as renderUi, screen, within } from '@testing-library/react';
+import { afterEach, describe, expect, it } from 'vitest';
 import { UnitSystemProvider } from '@/lib/unit-system';
 import { ModeHoursPanel } from '@/features/runs/components/mode-hours-panel';
 import { EnergyWaterCards } from '@/features/runs/components/energy-water-cards';
@@ -10,8 +9,6 @@ import { mixedEngineNote, subsetHours } from '../../shared/report/mode-subsets';
 import { comparisonRows, runSummaryRows, shapeReportRun, type ReportRunSource } from '../../shared/report';
 import { ENGINE_VERSION, runScenario, type ScenarioResults } from '../../shared/scenario';
 import { makeScenario } from '../unit/scenario/fixtures';
-
-(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
 const psychrolib = createRequire(import.meta.url)('psychrolib');
 psychrolib.SetUnitSystem(psychrolib.SI);
@@ -62,24 +59,14 @@ function asOldRun(results: ScenarioResults): ScenarioResults {
 const results = syntheticRun();
 const directAir = makeScenario('direct-air').system;
 
-let host: HTMLDivElement;
-let root: Root;
-beforeEach(() => {
-  host = document.createElement('div');
-  document.body.append(host);
-  root = createRoot(host);
-});
-afterEach(() => {
-  act(() => root.unmount());
-  host.remove();
-  localStorage.clear();
-});
+afterEach(() => localStorage.clear());
 
+/** Renders in the person's unit system, remembered as the app remembers it. */
 function render(ui: React.ReactNode, units: 'SI' | 'IP' = 'SI') {
   localStorage.setItem('tramontane.unitSystem', units);
-  act(() => root.render(<UnitSystemProvider>{ui}</UnitSystemProvider>));
+  return renderUi(<UnitSystemProvider>{ui}</UnitSystemProvider>);
 }
-const text = (testId: string) => host.querySelector(`[data-testid="${testId}"]`)?.textContent ?? '';
+const text = (testId: string) => screen.queryByTestId(testId)?.textContent ?? '';
 
 describe('the engine’s counts on the synthetic days', () => {
   it('humidifies exactly the two days drier than the envelope’s lowest dew point, and economises part of the mechanical hours', () => {
@@ -102,7 +89,9 @@ describe('"of which" rows on the run page', () => {
     expect(text('subset-humidified')).toBe(`of which with humidification${h.humidified.toLocaleString('en')}${((100 * h.humidified) / h.total).toFixed(1)} %`);
     expect(text('subset-partialMechanical')).toContain(h.partialMechanical.toLocaleString('en'));
     // The rows sit right after their mode's row.
-    const rows = [...host.querySelectorAll('[data-testid="mode-hours"] tbody tr')].map((r) => r.querySelector('th')!.textContent);
+    const rows = within(screen.getByTestId('mode-hours'))
+      .getAllByRole('rowheader')
+      .map((th) => th.textContent);
     expect(rows.slice(0, 6)).toEqual([
       'Free cooling',
       'of which with humidification',
@@ -111,20 +100,19 @@ describe('"of which" rows on the run page', () => {
       'of which partly economised',
       'No data',
     ]);
-    expect(host.querySelector('[data-testid="not-counted-note"]')).toBeNull();
+    expect(screen.queryByTestId('not-counted-note')).toBeNull();
   });
 
   it('give the water for humidification and for evaporative cooling in m³ (SI) and US gallons (IP)', () => {
     const w = results.water;
-    render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'SI');
+    const si = render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'SI');
     expect(text('water-humidificationL')).toBe(
       `of which for humidification${(w.humidificationL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`,
     );
     expect(text('water-evaporativeCoolingL')).toContain(
       `${(w.evaporativeCoolingL / 1000).toLocaleString('en', { minimumFractionDigits: 2, maximumFractionDigits: 2 })} m³`,
     );
-    act(() => root.unmount());
-    root = createRoot(host);
+    si.unmount();
     render(<EnergyWaterCards results={results} engineVersion={ENGINE_VERSION} system={directAir} />, 'IP');
     const gallons = Math.round(w.humidificationL / US_GALLON_L).toLocaleString('en');
     expect(text('water-humidificationL')).toBe(`of which for humidification${gallons} US gal`);
@@ -173,7 +161,7 @@ describe('a run made before these were counted', () => {
     );
     expect(text('water-humidificationL')).toBe('of which for humidification—');
     expect(text('water-evaporativeCoolingL')).toBe('of which for evaporative cooling—');
-    expect(host.querySelector('[data-testid="water-driftL"]')).toBeNull();
+    expect(screen.queryByTestId('water-driftL')).toBeNull();
     expect(text('report-not-counted')).toContain('scenario-engine 1.0.0');
   });
 

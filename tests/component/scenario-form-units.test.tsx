@@ -1,13 +1,11 @@
-import { act } from 'react';
-import { createRoot, type Root } from 'react-dom/client';
+import { render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
 import { useForm } from 'react-hook-form';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { UnitSystemProvider } from '@/lib/unit-system';
 import { QuantityField } from '@/features/scenarios/components/quantity-field';
 import { fieldFromDisplay, fieldToDisplay, inputText, parseInputText, rangeText } from '@/features/scenarios/utils/field-units';
 import { energyFields, fieldsFor, inWords, systemFields } from '@/features/scenarios/utils/scenario-fields';
-
-(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
 const supply = systemFields.find((f) => f.path === 'system.supplyAirC')!;
 
@@ -74,8 +72,6 @@ describe('scenario inputs in SI and IP', () => {
 });
 
 describe('a quantity field in a form', () => {
-  let host: HTMLDivElement;
-  let root: Root;
   let values: () => { system: { supplyAirC: number } };
 
   function Harness() {
@@ -84,44 +80,26 @@ describe('a quantity field in a form', () => {
     return <QuantityField control={form.control} field={supply} />;
   }
 
-  function type(input: HTMLInputElement, text: string) {
-    // React listens for the native input event; set the value through the prototype's setter as a browser would.
-    Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value')!.set!.call(input, text);
-    input.dispatchEvent(new Event('input', { bubbles: true }));
-  }
+  afterEach(() => localStorage.clear());
 
-  beforeEach(() => {
-    host = document.createElement('div');
-    document.body.append(host);
-    root = createRoot(host);
-  });
-  afterEach(() => {
-    act(() => root.unmount());
-    host.remove();
-    localStorage.clear();
-  });
-
-  it('shows the SI value in °F and stores what is typed in °F as °C', () => {
+  it('shows the SI value in °F and stores what is typed in °F as °C', async () => {
     localStorage.setItem('tramontane.unitSystem', 'IP');
-    act(() =>
-      root.render(
-        <UnitSystemProvider>
-          <Harness />
-        </UnitSystemProvider>,
-      ),
+    render(
+      <UnitSystemProvider>
+        <Harness />
+      </UnitSystemProvider>,
     );
-    const input = host.querySelector('input')!;
+    const input = screen.getByRole<HTMLInputElement>('textbox', { name: supply.label });
     // 24 °C = 75.2 °F.
     expect(input.value).toBe('75.2');
-    expect(host.textContent).toContain('41 to 113 °F');
-    act(() => {
-      input.focus();
-      type(input, '64.4');
-    });
+    expect(screen.getByText('41 to 113 °F')).toBeTruthy();
+    const user = userEvent.setup();
+    await user.clear(input);
+    await user.type(input, '64.4');
     // 64.4 °F = 18 °C.
     expect(values().system.supplyAirC).toBeCloseTo(18, 12);
     // While typing, the box keeps the text as typed, even a trailing point.
-    act(() => type(input, '64.'));
+    await user.type(input, '{Backspace}');
     expect(input.value).toBe('64.');
   });
 });

@@ -11,16 +11,16 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { importClimateText } from '../../shared/climate';
-import { countExcursions } from '../../shared/excursions';
-import { meanSitePressurePa, outdoorStates } from '../../shared/psychrometrics';
-import { classifyHours, EXCURSION, MODE } from '../../shared/scenario/classify';
-import { findEnvelopePreset } from '../../shared/scenario/envelopes';
-import { ENVELOPE_BREACH, envelopeTest, insideEnvelope, type EnvelopeTestLimits } from '../../shared/scenario/inside-envelope';
-import { hoursInside } from '../../src/components/charts/moist-air-data';
-import { hylandWexlerWaterPa } from '../unit/psychrometrics/reference-over-water';
-import { psychrolib as psy } from '../unit/psychrometrics/reference-psychrolib';
-import { makeScenario, SEA_LEVEL_PA, wFromDewPoint, wFromRh } from '../unit/scenario/fixtures';
+import { importClimateText } from '../../../shared/climate';
+import { countExcursions } from '../../../shared/excursions';
+import { meanSitePressurePa, outdoorStates } from '../../../shared/psychrometrics';
+import { classifyHours, EXCURSION, MODE } from '../../../shared/scenario/classify';
+import { findEnvelopePreset } from '../../../shared/scenario/envelopes';
+import { ENVELOPE_BREACH, envelopeTest, insideEnvelope, type EnvelopeTestLimits } from '../../../shared/scenario/inside-envelope';
+import { hoursInside } from '../../../src/components/charts/moist-air-data';
+import { hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
+import { psychrolib as psy } from '../psychrometrics/reference-psychrolib';
+import { makeScenario, SEA_LEVEL_PA, wFromDewPoint, wFromRh } from '../scenario/fixtures';
 
 const limitsOf = (id: string): EnvelopeTestLimits => {
   const { altitudeDerating: _derating, ...limits } = findEnvelopePreset(id)!.limits;
@@ -111,7 +111,7 @@ function referenceInside(limits: EnvelopeTestLimits, t: number, w: number, p: nu
   );
 }
 
-const folder = fileURLToPath(new URL('../../sample-weather', import.meta.url));
+const folder = fileURLToPath(new URL('../../../sample-weather', import.meta.url));
 const { sites } = JSON.parse(readFileSync(path.join(folder, 'sites.json'), 'utf8')) as {
   sites: Array<{ id: string; file: string; importTimeZone: string; elevationM: number }>;
 };

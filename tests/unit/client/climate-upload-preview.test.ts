@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import type { DetectedMapping } from '../../shared/climate/types';
-import { draftFromDetected, overrideFromDraft, timeDraftFor } from '../../src/features/climate-files/lib/mapping-draft';
-import { previewColumns, previewRows } from '../../src/features/climate-files/lib/preview-values';
-import { chartSeries, toFloat64 } from '../../src/lib/climate-series';
-import { psychrolib } from '../unit/psychrometrics/reference-psychrolib';
+import type { DetectedMapping } from '../../../shared/climate/types';
+import { draftFromDetected, overrideFromDraft, timeDraftFor } from '../../../src/features/climate-files/lib/mapping-draft';
+import { previewColumns, previewRows } from '../../../src/features/climate-files/lib/preview-values';
+import { chartSeries, toFloat64 } from '../../../src/lib/climate-series';
+import { psychrolib } from '../psychrometrics/reference-psychrolib';
 
 const hour = { timestampMs: Date.UTC(2023, 6, 1, 0), dryBulbC: 8.3, humidity: 88, pressurePa: 101_300, flag: 0 };
 

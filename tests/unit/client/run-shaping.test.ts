@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { dryBulbBins } from '../../shared/report/dry-bulb-bins';
-import { flattenInputs } from '../../shared/report/inputs';
+import { dryBulbBins } from '../../../shared/report/dry-bulb-bins';
+import { flattenInputs } from '../../../shared/report/inputs';
 import { monthlyModeRows } from '@/components/charts/monthly-mode-rows';
 
 describe('the bin table', () => {

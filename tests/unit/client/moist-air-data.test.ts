@@ -8,9 +8,10 @@ import {
   hourStates,
   sampleIndex,
   stateToChartXY,
-} from '../../src/components/charts/moist-air-data';
-import { psychrolib } from '../unit/psychrometrics/reference-psychrolib';
-import { hylandWexlerWaterPa } from '../unit/psychrometrics/reference-over-water';
+} from '../../../src/components/charts/moist-air-data';
+import { ENVELOPE_PRESETS } from '../../../shared/scenario/envelopes';
+import { psychrolib } from '../psychrometrics/reference-psychrolib';
+import { hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
 
 const seaLevelPa = 101_325;
 
@@ -71,8 +72,16 @@ describe('density binning', () => {
 });
 
 describe('envelopes and the chart window', () => {
-  // ASHRAE TC 9.9 recommended range (5th edition, recalled from memory): 18–27 °C, dew point −9…15 °C, RH ≤ 60 %.
+  // ASHRAE TC 9.9 recommended range with RH ≤ 60 %: the 4th edition (2015) of the Thermal Guidelines, recalled from
+  // memory (the 5th edition, 2021, raised the upper RH to 70 %): 18–27 °C, dew point −9…15 °C, RH ≤ 60 %.
   const recommended = { dryBulbMinC: 18, dryBulbMaxC: 27, dewPointMinC: -9, dewPointMaxC: 15, rhMinPct: 0, rhMaxPct: 60 };
+  const preset60 = ENVELOPE_PRESETS.find((p) => p.limits.rhMaxPct === 60 && p.limits.dryBulbMinC === 18)!;
+
+  it('takes its RH ≤ 60 % envelope from the 4th edition (2015) preset, which says it is recalled from memory', () => {
+    expect(preset60.edition).toMatch(/4th edition \(2015\)/);
+    expect(preset60.recalledFromMemory).toBe(true);
+    expect(preset60.limits).toMatchObject(recommended);
+  });
   const window = chartWindowFor(seaLevelPa, { dryBulbC: [], humidityRatio: [] }, [recommended]);
 
   it('draws the envelope between its limits; its ceiling is the 15 °C dew point where RH 60 % lies higher', () => {

@@ -4,7 +4,7 @@ import type { RunListing } from '@/features/compare/api/get-runs';
 import { compareRuns as compareResults, comparisonCsv, withResults } from '../../shared/report/comparison';
 import { formatMetric } from '@/lib/metric-text';
 import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
-import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../shared/report/dry-bulb-bins';
+import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../../shared/report/dry-bulb-bins';
 import { engineNoteText } from '@/lib/engine-notes';
 import { solveState } from '@/features/calculator/utils/state-request';
 import { stateRows } from '@/features/calculator/utils/state-rows';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { zeroFactors } from '../../shared/morphing';
+import { zeroFactors } from '../../../shared/morphing';
 import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi } from '@/features/projections/utils/factor-form';
 
 function typedForm(system: 'SI' | 'IP', july: Record<string, string>) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { uploadQuery } from '@/features/climate-files/api/send-file';
-import { climateUploadQuerySchema } from '../../shared/schemas/climate-file';
+import { climateUploadQuerySchema } from '../../../shared/schemas/climate-file';
 
 describe('the upload query the wizard sends', () => {
   it('carries the file name, gap length, time basis, mapping and humidity option, and passes the server schema', () => {
