@@ -31,6 +31,7 @@ import { sweepRoutes } from './routes/sweeps';
 import { projectionRoutes } from './routes/projections';
 import { excursionRoutes } from './routes/excursions';
 import { reportRoutes } from './routes/reports';
+import { openApiRoutes } from './routes/openapi';
 
 export interface AppDeps {
   db: Db;
@@ -68,8 +69,9 @@ export interface AppDeps {
 
 /** Every API route with its access rule; the role-matrix test walks this same list. */
 export function apiRoutes(deps: AppDeps): RouteSpec[] {
-  return [
+  const routes: RouteSpec[] = [
     ...healthRoutes(deps),
+    ...openApiRoutes(() => routes),
     ...projectRoutes(deps),
     ...siteRoutes(deps),
     ...climateFileRoutes(deps),
@@ -87,6 +89,7 @@ export function apiRoutes(deps: AppDeps): RouteSpec[] {
     ...auditRoutes(deps),
     ...mailboxRoutes(deps),
   ];
+  return routes;
 }
 
 /** Builds the app without listening, so tests can hand it to supertest. */
