@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import type { DetectedMapping, ImportReport } from '../../climate/types';
 import type { ClimateSummary } from '../../climate-summary';
+import type { HumidityKind } from '../../psychrometrics/bulk';
 import { idSchema, isoTimeSchema, shapedAs } from './common';
 import { siteSchema } from './sites';
 
@@ -35,6 +36,9 @@ export const climateSummarySchema = shapedAs<ClimateSummary>()(
   'A climate file summary (shared/climate-summary ClimateSummary)',
 );
 
+/** The humidity a stored series holds, with its unit in the name (shared/psychrometrics/bulk.ts HumidityKind). */
+export const humidityKindSchema = z.enum(['relative-humidity-pct', 'dew-point-c', 'wet-bulb-c', 'humidity-ratio-kgkg']) satisfies z.ZodType<HumidityKind>;
+
 /** The listing row of a climate file (without mapping and report). */
 export const climateFileListingSchema = z.object({
   id: idSchema,
@@ -45,7 +49,7 @@ export const climateFileListingSchema = z.object({
   originalFileName: z.string(),
   byteSize: z.number().int().nonnegative(),
   sha256: z.string(),
-  humidityKind: z.string(),
+  humidityKind: humidityKindSchema,
   hasPressure: z.boolean(),
   hours: z.number().int().nonnegative(),
   measuredHours: z.number().int().nonnegative(),
@@ -77,7 +81,6 @@ export const climateFileDetailResponse = z.object({
 });
 export type ClimateFileDetail = z.infer<typeof climateFileDetailResponse>;
 
-export const humidityKindSchema = z.enum(['relative-humidity', 'dew-point', 'wet-bulb', 'humidity-ratio']);
 
 /** One of the first hours an upload preview shows: SI, humidity in the unit of its kind (%, °C or kg/kg). */
 export const previewHourSchema = z.object({

@@ -59,10 +59,10 @@ export * from './sweeps';
 /** A route's success answer: a JSON body with its schema, a file of these media types, a redirect, or nothing (204). */
 export type ApiAnswer = { status: number; summary: string } & ({ json: z.ZodType } | { file: readonly string[] } | { redirect: true } | { empty: true });
 
-const json = (status: number, summary: string, schema: z.ZodType): ApiAnswer => ({ status, summary, json: schema });
-const file = (summary: string, ...types: string[]): ApiAnswer => ({ status: 200, summary, file: types });
-const none = (summary: string): ApiAnswer => ({ status: 204, summary, empty: true });
-const redirect = (summary: string): ApiAnswer => ({ status: 302, summary, redirect: true });
+const json = <S extends z.ZodType>(status: number, summary: string, schema: S) => ({ status, summary, json: schema });
+const file = (summary: string, ...types: string[]) => ({ status: 200, summary, file: types });
+const none = (summary: string) => ({ status: 204, summary, empty: true as const });
+const redirect = (summary: string) => ({ status: 302, summary, redirect: true as const });
 
 /** Every route's answer, keyed by `method path` as the server registers it (Express syntax, under /api). */
 export const apiAnswers = {

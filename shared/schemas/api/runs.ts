@@ -35,8 +35,9 @@ export const scenarioResultsSchema = shapedAs<ScenarioResults>()(
     hoursByYear: z.array(z.looseObject({ year: z.number() })),
     energy: z.looseObject({ coolingKwh: z.number() }),
     water: z.looseObject({ totalL: z.number() }),
-    peakMechanicalLoadKw: z.number(),
-    excursions: z.looseObject({ hours: z.number() }),
+    // Results stored by an older engine may lack a figure or hold null for it; lists leave such a field out.
+    peakMechanicalLoadKw: z.number().nullable(),
+    excursions: z.looseObject({ hours: z.number() }).optional(),
   },
   "A run's results (shared/scenario/run.ts ScenarioResults)",
 );
@@ -47,7 +48,7 @@ export const listedResultsSchema = shapedAs<ComparableResults>()(
     hours: modeHoursSchema,
     energy: z.looseObject({ coolingKwh: z.number() }),
     water: z.looseObject({ totalL: z.number() }),
-    peakMechanicalLoadKw: z.number(),
+    peakMechanicalLoadKw: z.number().nullable().optional(),
   },
   "A run's totals (shared/report/summary-table.ts ComparableResults)",
 );

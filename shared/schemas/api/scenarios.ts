@@ -4,7 +4,8 @@ import { scenarioSchema } from '../../scenario/schema';
 import { idSchema, isoTimeSchema, modeHoursSchema } from './common';
 
 /** One retired input the start-up migration replaced, as the server recorded it. */
-export const scenarioChangeSchema = z.object({ path: z.string(), before: z.unknown(), after: z.unknown(), note: z.string() });
+// before or after is absent where the input was added or removed (JSON leaves out undefined).
+export const scenarioChangeSchema = z.object({ path: z.string(), before: z.unknown().optional(), after: z.unknown().optional(), note: z.string() });
 export type ScenarioChange = z.infer<typeof scenarioChangeSchema>;
 
 /** What the start-up migration changed; the editor shows it until an engineer or owner dismisses it. */
