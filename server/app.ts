@@ -65,6 +65,8 @@ export interface AppDeps {
   sharedLinkRateLimit?: { limit: number; windowMs: number };
   /** Sign-in and callback requests allowed per address per window. */
   signInRateLimit?: { limit: number; windowMs: number };
+  /** Tests only: runs before everything else (tests/support/answer-check.ts checks each JSON answer against its schema). */
+  answerCheck?: express.RequestHandler;
 }
 
 /** Every API route with its access rule; the role-matrix test walks this same list. */
@@ -97,6 +99,7 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  if (deps.answerCheck) app.use(deps.answerCheck);
   app.use(securityHeaders({ development: Boolean(deps.devMiddleware) }));
   app.use(compressAnswers());
 

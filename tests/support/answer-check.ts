@@ -1,4 +1,5 @@
-import express, { type Express, type RequestHandler } from 'express';
+import type express from 'express';
+import type { RequestHandler } from 'express';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import { apiAnswers, apiErrorSchema, type ApiAnswer } from '../../shared/schemas/api';
 
@@ -26,7 +27,7 @@ function jsonText(body: unknown, encoding: string | undefined): string | undefin
  * the error is logged (an unexpected console.error fails an API test): no API test can pass on an answer the
  * contract does not describe.
  */
-const checkJsonAnswers: RequestHandler = (req, res, next) => {
+export const checkJsonAnswers: RequestHandler = (req, res, next) => {
   if (!req.originalUrl.startsWith('/api/')) return next();
   const send = res.send.bind(res);
   let checking = false;
@@ -52,13 +53,3 @@ const checkJsonAnswers: RequestHandler = (req, res, next) => {
   };
   next();
 };
-
-/** The app behind the answer check (see checkJsonAnswers). */
-export function withAnswerCheck(app: Express): Express {
-  const outer = express();
-  outer.disable('x-powered-by');
-  outer.set('trust proxy', 'loopback');
-  outer.use(checkJsonAnswers);
-  outer.use(app);
-  return outer;
-}

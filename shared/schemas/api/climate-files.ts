@@ -81,7 +81,6 @@ export const climateFileDetailResponse = z.object({
 });
 export type ClimateFileDetail = z.infer<typeof climateFileDetailResponse>;
 
-
 /** One of the first hours an upload preview shows: SI, humidity in the unit of its kind (%, °C or kg/kg). */
 export const previewHourSchema = z.object({
   timestampMs: z.number(),
