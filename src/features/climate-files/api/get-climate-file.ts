@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { DetectedMapping, ImportReport } from '../../../../shared/climate/types';
 import type { ClimateSummary } from '../../../../shared/climate-summary';
 import { apiFetch } from '@/lib/api-client';
-import { climateFilesQueryKey, type ClimateFileListing } from './get-climate-files';
+import { climateFilesQueryKey, type ClimateFileListing } from '@/lib/api/climate-files';
 
 export interface ClimateFileSite {
   id: number;
