@@ -31,7 +31,7 @@ export const projectMembersResponse = z.object({
   project: z.object({ id: idSchema, name: z.string() }),
   yourRole: projectRoleSchema,
   canManage: z.boolean(),
-  members: z.array(z.object({ userId: idSchema, name: z.string().nullable(), email: z.string(), role: projectRoleSchema })),
+  members: z.array(z.object({ userId: idSchema, name: z.string(), email: z.string(), role: projectRoleSchema })),
 });
 export type ProjectMembers = z.infer<typeof projectMembersResponse>;
 

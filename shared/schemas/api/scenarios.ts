@@ -36,8 +36,8 @@ export const scenarioResponse = z.object({ scenario: storedScenarioSchema });
 export const scenarioPreviewResponse = z.object({
   hours: modeHoursSchema,
   modes: z.array(z.string()),
-  energy: z.looseObject({ coolingKwh: z.number() }),
-  water: z.looseObject({ totalL: z.number() }),
+  energy: z.looseObject({ coolingKwh: z.number(), partialPue: z.number().nullable() }),
+  water: z.looseObject({ totalL: z.number(), wueLPerKwh: z.number().nullable() }),
   /** A hybrid hall's loops, their hours only. */
   loops: z.object({ liquid: z.object({ hours: modeHoursSchema }), air: z.object({ hours: modeHoursSchema }) }).optional(),
 });
