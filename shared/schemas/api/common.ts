@@ -14,7 +14,8 @@ export const projectRoleSchema = z.enum(['owner', 'engineer', 'viewer']);
 export type ProjectRole = z.infer<typeof projectRoleSchema>;
 
 /** Where a run (or a sweep's point) stands; the one list the server, the queue and every page share. */
-export const runStatusSchema = z.enum(['queued', 'running', 'done', 'failed', 'cancelled']);
+export const runStatuses = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
+export const runStatusSchema = z.enum(runStatuses);
 export type RunStatus = z.infer<typeof runStatusSchema>;
 
 /**
