@@ -31,6 +31,7 @@ import { sweepRoutes } from './routes/sweeps';
 import { projectionRoutes } from './routes/projections';
 import { excursionRoutes } from './routes/excursions';
 import { reportRoutes } from './routes/reports';
+import { openApiRoutes } from './routes/openapi';
 
 export interface AppDeps {
   db: Db;
@@ -64,12 +65,15 @@ export interface AppDeps {
   sharedLinkRateLimit?: { limit: number; windowMs: number };
   /** Sign-in and callback requests allowed per address per window. */
   signInRateLimit?: { limit: number; windowMs: number };
+  /** Tests only: runs before everything else (tests/support/answer-check.ts checks each JSON answer against its schema). */
+  answerCheck?: express.RequestHandler;
 }
 
 /** Every API route with its access rule; the role-matrix test walks this same list. */
 export function apiRoutes(deps: AppDeps): RouteSpec[] {
-  return [
+  const routes: RouteSpec[] = [
     ...healthRoutes(deps),
+    ...openApiRoutes(() => routes),
     ...projectRoutes(deps),
     ...siteRoutes(deps),
     ...climateFileRoutes(deps),
@@ -87,6 +91,7 @@ export function apiRoutes(deps: AppDeps): RouteSpec[] {
     ...auditRoutes(deps),
     ...mailboxRoutes(deps),
   ];
+  return routes;
 }
 
 /** Builds the app without listening, so tests can hand it to supertest. */
@@ -94,6 +99,7 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  if (deps.answerCheck) app.use(deps.answerCheck);
   app.use(securityHeaders({ development: Boolean(deps.devMiddleware) }));
   app.use(compressAnswers());
 

@@ -70,7 +70,7 @@ export const METRICS = {
   adiabatic: hours('adiabatic', modeLabels.adiabatic, 'none'),
   mechanical: hours('mechanical', modeLabels.mechanical, 'lower'),
   partialMechanical: hours('partialMechanical', subsetLabel('partialMechanical'), 'none'),
-  noData: hours('noData', modeLabels.no_data, 'none'),
+  noData: hours('noData', modeLabels.noData, 'none'),
   totalHours: hours('totalHours', 'All hours', 'none'),
   freeShare: { key: 'freeShare', label: 'Free cooling share', kind: 'percent', decimals: 2, better: 'higher' },
   longestMechanicalRun: hours('longestMechanicalRun', 'Longest run of mechanical hours', 'lower'),

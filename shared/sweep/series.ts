@@ -8,8 +8,10 @@ import { subsetHours, waterPartL } from '../report/mode-subsets';
 import { METRICS, type MetricDefinition, type MetricKey } from '../metrics';
 import type { ScenarioResults } from '../scenario/run';
 import type { SweepPointValues, SweepValue } from './expand';
+import type { RunStatus as SweepRunStatus } from '../schemas/api/common';
 
-export type SweepRunStatus = 'queued' | 'running' | 'done' | 'failed' | 'cancelled';
+/** A sweep's point is a run: the same statuses. */
+export type { RunStatus as SweepRunStatus } from '../schemas/api/common';
 
 /** The results a sweep shows for each point: enough for its charts and table, not the per-month tables. */
 export interface SweepPointResults {

@@ -1,3 +1,5 @@
+import { apiErrorBodySchema } from '../../shared/schemas/api/health';
+
 /** The one way the client talks to the server: JSON in, JSON out, errors in the server's one shape. */
 export class ApiError extends Error {
   constructor(
@@ -24,16 +26,22 @@ async function send(path: string, init: RequestInit): Promise<Response> {
   }
 }
 
-function refusal(response: Response, body: unknown): ApiError {
-  const error = (body as { error?: { code?: string; message?: string; details?: unknown } } | undefined)?.error;
-  return new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.details);
+/**
+ * The one place the client reads the server's error body (shared/schemas/api/health.ts apiErrorBodySchema). A body
+ * not in that shape (a proxy's page, say) still becomes an ApiError, named by its status.
+ */
+export function refusal(status: number, body: unknown): ApiError {
+  const parsed = apiErrorBodySchema.safeParse(body);
+  if (!parsed.success) return new ApiError(status, 'http_error', `The server answered ${status}.`);
+  const { code, message, details } = parsed.data.error;
+  return new ApiError(status, code, message, details);
 }
 
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
   const response = await send(path, init);
   const text = await response.text();
   const body = text ? safeJson(text) : undefined;
-  if (!response.ok) throw refusal(response, body);
+  if (!response.ok) throw refusal(response.status, body);
   return body as T;
 }
 
@@ -42,12 +50,12 @@ export async function apiFetchBytes(path: string, init: RequestInit = {}): Promi
   const response = await send(path, init);
   if (!response.ok) {
     const text = await response.text();
-    throw refusal(response, text ? safeJson(text) : undefined);
+    throw refusal(response.status, text ? safeJson(text) : undefined);
   }
   return response.arrayBuffer();
 }
 
-function safeJson(text: string): unknown {
+export function safeJson(text: string): unknown {
   try {
     return JSON.parse(text);
   } catch {

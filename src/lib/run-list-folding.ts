@@ -1,4 +1,4 @@
-import type { RunListing } from './project-runs';
+import type { RunListing } from './api/runs';
 
 /** What folding reads of a run. */
 export type FoldableRun = Pick<RunListing, 'id' | 'status' | 'sweepId' | 'sweepName' | 'results'>;

@@ -9,7 +9,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { comparableResults, listedResultPaths, METRICS } from '../../shared/metrics';
 import { comparisonCsv, withResults } from '../../shared/report/comparison';
-import type { RunListing } from '../../src/lib/project-runs';
+import type { RunListing } from '../../src/lib/api/runs';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
 import { siteFileAndScenario } from '../support/study-setup';

@@ -41,19 +41,19 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
     [
       'a feature importing another through the alias',
       'src/features/runs/api/boundary-fixture.ts',
-      "import { getSweep } from '@/features/sweeps/api/get-sweep';",
+      "import { createSweep } from '@/features/sweeps/api/create-sweep';",
       /Features never import each other/,
     ],
     [
       'a feature importing another by a relative path',
       'src/features/runs/components/boundary-fixture.tsx',
-      "import { getSweep } from '../../sweeps/api/get-sweep';",
+      "import { createSweep } from '../../sweeps/api/create-sweep';",
       /Features never import each other/,
     ],
     [
       'a shared component importing a feature',
       'src/components/ui/boundary-fixture.tsx',
-      "import { getRun } from '@/features/runs/api/get-run';",
+      "import { cancelRun } from '@/features/runs/api/cancel-run';",
       /import no feature and not src\/app/,
     ],
     [
@@ -79,12 +79,12 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
     [
       'a feature importing its own modules, src/lib, src/components and shared/',
       'src/features/runs/components/boundary-fixture.tsx',
-      "import { getRun } from '../api/get-run';\nimport { toDisplay } from '@/lib/quantity';\nimport { Panel } from '@/components/ui/panel';\nimport { withoutControlCharacters } from '../../../../shared/schemas/plain-text';",
+      "import { cancelRun } from '../api/cancel-run';\nimport { toDisplay } from '@/lib/quantity';\nimport { Panel } from '@/components/ui/panel';\nimport { withoutControlCharacters } from '../../../../shared/schemas/plain-text';",
     ],
     [
       'the app composing features',
       'src/app/boundary-fixture.tsx',
-      "import { getRun } from '@/features/runs/api/get-run';\nimport { getSweep } from '@/features/sweeps/api/get-sweep';",
+      "import { cancelRun } from '@/features/runs/api/cancel-run';\nimport { createSweep } from '@/features/sweeps/api/create-sweep';",
     ],
     ['the server and a test importing shared/', 'server/boundary-fixture.ts', "import { withoutControlCharacters } from '../shared/schemas/plain-text';"],
     [

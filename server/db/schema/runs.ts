@@ -3,6 +3,7 @@ import { blob, index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlit
 import { climateFiles } from './climate';
 import { users } from './people';
 import { projects } from './projects';
+import { runStatuses } from '../../../shared/schemas/api/common';
 
 /** A project's own inlet envelope, beside the published presets. */
 export const envelopes = sqliteTable(
@@ -73,8 +74,7 @@ export const sweeps = sqliteTable(
   (table) => [index('sweeps_project_idx').on(table.projectId)],
 );
 
-export const runStatuses = ['queued', 'running', 'done', 'failed', 'cancelled'] as const;
-export type RunStatus = (typeof runStatuses)[number];
+export { runStatuses, type RunStatus } from '../../../shared/schemas/api/common';
 
 /** One immutable computation: its inputs are copied in, so editing the scenario later changes nothing here. */
 export const runs = sqliteTable(

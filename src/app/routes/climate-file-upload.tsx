@@ -1,8 +1,8 @@
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { Notice } from '@/components/ui/notice';
 import { UploadWizard } from '@/features/climate-files/components/upload-wizard';
-import { useSites } from '@/features/sites/api/get-sites';
+import { useSites } from '@/lib/api/sites';
 import { SiteForm } from '@/features/sites/components/site-form';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { NotFoundRoute } from './not-found';

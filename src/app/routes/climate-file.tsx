@@ -1,6 +1,6 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { ClimateFileView } from '@/features/climate-files/components/climate-file-view';
-import { useProjects } from '@/features/projects/api/get-projects';
+import { useProjects } from '@/lib/api/projects';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { NotFoundRoute } from './not-found';
 

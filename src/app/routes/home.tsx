@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
-import { useProjects } from '@/features/projects/api/get-projects';
+import { useProjects } from '@/lib/api/projects';
 // The form brings the form and schema libraries; they load with it, not with the first page.
 const NewProjectForm = lazy(() => import('@/features/projects/components/new-project-form').then((m) => ({ default: m.NewProjectForm })));
 

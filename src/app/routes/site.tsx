@@ -1,6 +1,6 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { ClimateFilesPanel } from '@/features/climate-files/components/climate-files-panel';
-import { useProjects } from '@/features/projects/api/get-projects';
+import { useProjects } from '@/lib/api/projects';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { SiteView } from '@/features/sites/components/site-view';
 import { NotFoundRoute } from './not-found';

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 
 /** "Projects / <project name> /" above every page inside a project. */
 export function ProjectCrumb({ projectId }: { projectId: number }) {

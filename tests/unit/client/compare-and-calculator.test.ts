@@ -1,7 +1,7 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import type { RunListing } from '@/features/compare/api/get-runs';
-import { compareRuns as compareResults, comparisonCsv, withResults } from '../../shared/report/comparison';
+import { compareRuns as compareResults, comparisonCsv, withResults } from '../../../shared/report/comparison';
 import { formatMetric } from '@/lib/metric-text';
 import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
 import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../../shared/report/dry-bulb-bins';
@@ -15,7 +15,10 @@ psychrolib.SetUnitSystem(psychrolib.SI);
 function run(id: number, free: number, mechanical: number, partialPue: number, annualCoolingKwh: number): RunListing {
   return {
     id,
+    projectId: 1,
     scenarioId: 1,
+    createdBy: null,
+    startedAt: '2026-12-01T00:01:00Z',
     climateFileId: 1,
     status: 'done',
     progress: 1,
@@ -26,8 +29,9 @@ function run(id: number, free: number, mechanical: number, partialPue: number, a
     engineVersion: 'scenario-engine 1.0.0',
     finishedAt: '2026-12-01T00:05:00Z',
     createdAt: '2026-12-01T00:00:00Z',
-    scenario: { name: `Scenario ${id}`, system: { kind: 'direct-air' } },
-    climate: { name: 'synthetic', hours: 100, site: { name: 'Site' } },
+    // Only the fields the compare page reads; the rest of the scenario and climate snapshot is left out.
+    scenario: { name: `Scenario ${id}`, system: { kind: 'direct-air' } } as RunListing['scenario'],
+    climate: { name: 'synthetic', hours: 100, site: { name: 'Site' } } as RunListing['climate'],
     results: {
       hours: { free, adiabatic: 100 - free - mechanical, mechanical, noData: 0, total: 100, humidified: 0, partialMechanical: 0 },
       energy: {

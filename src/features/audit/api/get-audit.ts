@@ -1,17 +1,7 @@
 import { useInfiniteQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export interface AuditEvent {
-  id: number;
-  at: string;
-  actorId: number | null;
-  actorName: string | null;
-  projectId: number | null;
-  projectName: string | null;
-  action: string;
-  target: string;
-  detail: Record<string, unknown>;
-}
+import type { AuditEvent } from '../../../../shared/schemas/api/people';
+export type { AuditEvent } from '../../../../shared/schemas/api/people';
 
 export interface AuditFilters {
   action?: string;

@@ -1,14 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export interface MailboxMessage {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-}
+import type { MailboxMessage } from '../../../../shared/schemas/api/people';
+export type { MailboxMessage } from '../../../../shared/schemas/api/people';
 
 export const getMailbox = () => apiFetch<{ messages: MailboxMessage[] }>('/mailbox');
 

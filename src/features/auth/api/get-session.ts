@@ -1,14 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export interface SessionUser {
-  id: number;
-  email: string;
-  name: string;
-  isAdmin: boolean;
-}
-
-export type Session = { signedIn: false; signInAvailable: boolean } | { signedIn: true; signInAvailable: boolean; user: SessionUser; mailbox: boolean };
+import type { Session } from '../../../../shared/schemas/api/people';
+export type { Session, SessionUser } from '../../../../shared/schemas/api/people';
 
 export const getSession = () => apiFetch<Session>('/auth/session');
 

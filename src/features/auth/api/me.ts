@@ -1,17 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export interface Settings {
-  /** Lower-case on the wire; the unit-system context uses 'SI' | 'IP'. */
-  unitSystem: 'si' | 'ip';
-  runNotices: boolean;
-}
-
-export interface Me {
-  user: { id: number; email: string; name: string; isAdmin: boolean };
-  settings: Settings;
-  projects: { id: number; name: string; role: 'owner' | 'engineer' | 'viewer' }[];
-}
+import type { Settings, Me } from '../../../../shared/schemas/api/people';
+export type { Settings, Me } from '../../../../shared/schemas/api/people';
 
 export const getMe = () => apiFetch<Me>('/me');
 export const updateSettings = (patch: Partial<Settings>) => apiFetch<Me>('/me', { method: 'PATCH', body: JSON.stringify(patch) });

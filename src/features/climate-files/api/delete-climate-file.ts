@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import { climateFilesQueryKey } from './get-climate-files';
+import { climateFilesQueryKey } from '@/lib/api/climate-files';
 
 export const deleteClimateFile = (projectId: number, fileId: number) => apiFetch<void>(`/projects/${projectId}/climate-files/${fileId}`, { method: 'DELETE' });
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { ClimateHoursJson } from '@/lib/climate-series';
-import { climateFilesQueryKey } from './get-climate-files';
+import { climateFilesQueryKey } from '@/lib/api/climate-files';
 
 /** The stored hourly series, SI; humidity in the unit of its kind (%, °C or kg/kg). */
 export interface ClimateFileHours extends ClimateHoursJson {

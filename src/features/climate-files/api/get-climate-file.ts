@@ -1,25 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { DetectedMapping, ImportReport } from '../../../../shared/climate/types';
-import type { ClimateSummary } from '../../../../shared/climate-summary';
 import { apiFetch } from '@/lib/api-client';
-import { climateFilesQueryKey, type ClimateFileListing } from './get-climate-files';
-
-export interface ClimateFileSite {
-  id: number;
-  name: string;
-  latitude: number | null;
-  longitude: number | null;
-  elevationM: number;
-  timeZone: string;
-}
-
-export interface ClimateFileDetail {
-  climateFile: ClimateFileListing;
-  site: ClimateFileSite;
-  mapping: DetectedMapping;
-  report: ImportReport;
-  summary: ClimateSummary;
-}
+import { climateFilesQueryKey } from '@/lib/api/climate-files';
+import type { ClimateFileDetail } from '../../../../shared/schemas/api';
+export type { Site as ClimateFileSite, ClimateFileDetail } from '../../../../shared/schemas/api';
 
 export const getClimateFile = (projectId: number, fileId: number) => apiFetch<ClimateFileDetail>(`/projects/${projectId}/climate-files/${fileId}`);
 

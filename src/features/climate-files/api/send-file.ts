@@ -1,4 +1,4 @@
-import { ApiError } from '@/lib/api-client';
+import { ApiError, refusal, safeJson } from '@/lib/api-client';
 import type { MappingOverride, TimeBasis } from '../../../../shared/schemas/climate-file';
 
 export interface UploadParams {
@@ -55,15 +55,9 @@ export function sendFile<T>(path: string, upload: UploadBody, onProgress?: (p: U
     xhr.onerror = () => reject(new ApiError(0, 'network', 'The upload did not reach the server. Check the connection and try again.'));
     xhr.onabort = () => reject(new ApiError(0, 'aborted', 'The upload was cancelled.'));
     xhr.onload = () => {
-      let body: unknown;
-      try {
-        body = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
-      } catch {
-        body = undefined;
-      }
+      const body = xhr.responseText ? safeJson(xhr.responseText) : undefined;
       if (xhr.status >= 200 && xhr.status < 300) return resolve(body as T);
-      const error = (body as { error?: { code?: string; message?: string; details?: unknown } } | undefined)?.error;
-      reject(new ApiError(xhr.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${xhr.status}.`, error?.details));
+      reject(refusal(xhr.status, body));
     };
     signal?.addEventListener('abort', () => xhr.abort());
     if (several) {

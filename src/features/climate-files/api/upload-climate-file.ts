@@ -1,5 +1,5 @@
 import type { DetectedMapping, ImportReport } from '../../../../shared/climate/types';
-import type { ClimateFileListing } from './get-climate-files';
+import type { ClimateFileListing } from '@/lib/api/climate-files';
 import { sendFile, uploadQuery, type UploadBody, type UploadParams, type UploadProgress } from './send-file';
 
 /** The 422 answer's details when the importer refuses the file. */

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
-import { useClimateFiles } from '../api/get-climate-files';
+import { useClimateFiles } from '@/lib/api/climate-files';
 
 /** Calendar year of an instant on the site's standard-time clock (a local-time file starting 1 January stays in that year). */
 

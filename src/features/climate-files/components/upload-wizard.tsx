@@ -4,7 +4,7 @@ import type { ImportReport } from '../../../../shared/climate/types';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
-import { climateFilesQueryKey } from '../api/get-climate-files';
+import { climateFilesQueryKey } from '@/lib/api/climate-files';
 import { previewClimateFile, type ClimatePreview } from '../api/preview-climate-file';
 import { uploadBytes, type UploadProgress } from '../api/send-file';
 import { uploadClimateFile, type RejectedImportDetails } from '../api/upload-climate-file';

@@ -1,1 +1,1 @@
-export { useProjectRuns as useRuns, type RunListing } from '@/lib/project-runs';
+export { useProjectRuns as useRuns, type RunListing } from '@/lib/api/runs';

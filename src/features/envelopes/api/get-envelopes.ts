@@ -1,15 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { EnvelopeLimits, EnvelopePreset } from '../../../../shared/scenario/envelopes';
-
-export interface ProjectEnvelope {
-  id: number;
-  projectId: number;
-  name: string;
-  note: string;
-  limits: EnvelopeLimits;
-  createdAt: string;
-}
+import type { EnvelopePreset } from '../../../../shared/scenario/envelopes';
+import type { ProjectEnvelope } from '../../../../shared/schemas/api/envelopes';
+export type { ProjectEnvelope } from '../../../../shared/schemas/api/envelopes';
 
 export const getEnvelopePresets = () => apiFetch<{ presets: EnvelopePreset[] }>('/envelope-presets');
 export const getProjectEnvelopes = (projectId: number) => apiFetch<{ envelopes: ProjectEnvelope[] }>(`/projects/${projectId}/envelopes`);

@@ -9,7 +9,7 @@ import { standardPressurePa } from '../../../../shared/psychrometrics';
 import type { EnvelopeLimits } from '../../../../shared/scenario/envelopes';
 import { useDeleteEnvelope } from '../api/delete-envelope';
 import { useEnvelopePresets, useProjectEnvelopes } from '../api/get-envelopes';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { EnvelopeForm } from './envelope-form';
 import { formatLimit } from './limit-format';
 import { ProjectCrumb } from '@/components/ui/project-crumb';

@@ -1,29 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { ExcursionAnalysis, XFactorPoint } from '../../../../shared/excursions';
-import type { ChosenEnvelope, ProposalQuery } from '../../../../shared/excursions/proposal-query';
-
-import type { ModeHours } from '../../../../shared/scenario/results';
-
-export interface ExcursionsResponse {
-  run: {
-    id: number;
-    scenarioName: string;
-    systemKind: 'direct-air' | 'indirect-air' | 'water-side';
-    evaporativeEffectiveness: number;
-    heatRejection: 'dry-cooler' | 'cooling-tower' | null;
-    supplyAirC: number;
-    climateName: string;
-    siteName: string;
-    elevationM: number;
-    utcOffsetMinutes: number;
-    hours: ModeHours | null;
-  };
-  proposal: { supplyAirC: number; floatUpToC: number | null; control: ChosenEnvelope; recommended: ChosenEnvelope; allowable: ChosenEnvelope };
-  /** JSON turns NaN into null: a run without data hours has null X-factor and inlet range. */
-  analysis: ExcursionAnalysis;
-  reference: { xFactorTable: XFactorPoint[]; hourlyRateLimitK: number; durationBins: { fromHours: number; toHours: number | null }[] };
-}
+import type { ProposalQuery } from '../../../../shared/excursions/proposal-query';
+import type { ExcursionsResponse } from '../../../../shared/schemas/api/studies';
+export type { ExcursionsResponse } from '../../../../shared/schemas/api/studies';
 
 /** The proposal as address parameters, leaving out what is not set (the server fills in the run's own). */
 export function proposalSearch(query: ProposalQuery): string {

@@ -1,15 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export interface Health {
-  status: 'ok';
-  /** The app's release (package.json). */
-  version: string;
-  /** The engine new runs are made by, e.g. 'scenario-engine 2.0.0'. */
-  engineVersion: string;
-  database: { reachable: boolean; latencyMs: number };
-  time: string;
-}
+import type { Health } from '../../../../shared/schemas/api/health';
+export type { Health } from '../../../../shared/schemas/api/health';
 
 export const getHealth = () => apiFetch<Health>('/health');
 

@@ -1,16 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { ProjectRole } from './get-members';
 
-export interface Invite {
-  id: number;
-  email: string;
-  role: ProjectRole;
-  invitedBy: string | null;
-  createdAt: string;
-  expiresAt: string;
-  status: 'pending' | 'accepted' | 'revoked' | 'expired';
-}
+import type { Invite } from '../../../../shared/schemas/api/people';
+export type { Invite } from '../../../../shared/schemas/api/people';
 
 export const getInvites = (projectId: number) => apiFetch<{ invites: Invite[] }>(`/projects/${projectId}/invites`);
 

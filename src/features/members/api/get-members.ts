@@ -1,22 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
+import type { ProjectRole, ProjectMembers as MembersAnswer } from '../../../../shared/schemas/api';
+export type { ProjectRole, ProjectMembers as MembersAnswer } from '../../../../shared/schemas/api';
 
-export type ProjectRole = 'owner' | 'engineer' | 'viewer';
 export const projectRoles: ProjectRole[] = ['owner', 'engineer', 'viewer'];
 
-export interface Member {
-  userId: number;
-  name: string;
-  email: string;
-  role: ProjectRole;
-}
-
-export interface MembersAnswer {
-  project: { id: number; name: string };
-  yourRole: ProjectRole;
-  canManage: boolean;
-  members: Member[];
-}
+/** One member of the project as the members list gives them. */
+export type Member = MembersAnswer['members'][number];
 
 export const getMembers = (projectId: number) => apiFetch<MembersAnswer>(`/projects/${projectId}/members`);
 

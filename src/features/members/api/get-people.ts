@@ -1,13 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export interface Person {
-  id: number;
-  name: string;
-  email: string;
-  isAdmin: boolean;
-  lastSignInAt: string | null;
-}
+import type { Person } from '../../../../shared/schemas/api/people';
+export type { Person } from '../../../../shared/schemas/api/people';
 
 export const getPeople = () => apiFetch<{ people: Person[] }>('/admin/people');
 

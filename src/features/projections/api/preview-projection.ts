@@ -1,14 +1,8 @@
 import { useMutation } from '@tanstack/react-query';
-import type { MonthlyClimate, ProjectionRequest } from '../../../../shared/morphing';
+import type { ProjectionRequest } from '../../../../shared/morphing';
 import { apiFetch } from '@/lib/api-client';
-
-export interface ProjectionPreview {
-  comparison: { parent: MonthlyClimate; projection: MonthlyClimate };
-  alphaByMonth: number[];
-  clampedHighHours: number;
-  clampedLowHours: number;
-  lostHours: number;
-}
+import type { ProjectionPreview } from '../../../../shared/schemas/api/studies';
+export type { ProjectionPreview } from '../../../../shared/schemas/api/studies';
 
 /** The monthly statistics a projection would have, computed on the server, nothing stored. */
 export const previewProjection = (projectId: number, fileId: number, request: ProjectionRequest) =>

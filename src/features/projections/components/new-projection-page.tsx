@@ -7,10 +7,10 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { ApiError } from '@/lib/api-client';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { useCreateProjection } from '../api/create-projection';
-import { useClimateFileNames } from '../api/get-climate-file-names';
+import { useClimateFiles } from '@/lib/api/climate-files';
 import { usePreviewProjection } from '../api/preview-projection';
 import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi, type FactorFormValues, type FactorKey } from '../utils/factor-form';
 import { FactorTableEditor } from './factor-table-editor';
@@ -24,7 +24,7 @@ export function NewProjectionPage() {
   const [search] = useSearchParams();
   const fromId = Number(search.get('from'));
   const { canEdit } = useProjectRole(projectId);
-  const files = useClimateFileNames(projectId);
+  const files = useClimateFiles(projectId);
   const parent = files.data?.climateFiles.find((f) => f.id === fromId);
 
   return (

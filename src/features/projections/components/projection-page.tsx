@@ -3,7 +3,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 import { ApiError } from '@/lib/api-client';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { useProjection, type ProjectionDetail } from '../api/get-projection';
 import { FactorsView } from './factors-view';
 import { MonthlyComparison } from './monthly-comparison';

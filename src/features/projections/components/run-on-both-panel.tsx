@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
-import { useScenarioNames } from '../api/get-scenario-names';
+import { useScenarios } from '@/lib/api/scenarios';
 import { useRunOnBoth } from '../api/run-on-both';
 
 /** One scenario on today's file and on the projection, then the comparison of the two runs. */
@@ -16,7 +16,7 @@ export function RunOnBothPanel({
   projectionFileId: number;
   canEdit: boolean;
 }) {
-  const scenarios = useScenarioNames(projectId);
+  const scenarios = useScenarios(projectId);
   const run = useRunOnBoth(projectId);
   const [scenarioId, setScenarioId] = useState<number | null>(null);
   if (parentFileId === null) {

@@ -1,14 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export type ProjectRole = 'owner' | 'engineer' | 'viewer';
-
-export interface ProjectMembers {
-  project: { id: number; name: string };
-  yourRole: ProjectRole;
-  canManage: boolean;
-  members: Array<{ userId: number; name: string | null; email: string; role: ProjectRole }>;
-}
+import type { ProjectMembers } from '../../../../shared/schemas/api';
+export type { ProjectRole, ProjectMembers } from '../../../../shared/schemas/api';
 
 export const getProjectMembers = (projectId: number) => apiFetch<ProjectMembers>(`/projects/${projectId}/members`);
 

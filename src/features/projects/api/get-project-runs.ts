@@ -1,1 +1,1 @@
-export { useProjectRuns, type RunListing, type RunStatus } from '@/lib/project-runs';
+export { useProjectRuns, type RunListing, type RunStatus } from '@/lib/api/runs';

@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { z } from 'zod';
 import { Notice } from '@/components/ui/notice';
-import { useCreateProject } from '../api/create-project';
+import { useCreateProject } from '@/lib/api/projects';
 
 const newProjectSchema = z.object({
   name: z.string().trim().min(1, 'Give the project a name.').max(120, 'At most 120 characters.'),

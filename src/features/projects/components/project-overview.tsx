@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useProjectMembers } from '../api/get-project-members';
-import { useProjects } from '../api/get-projects';
+import { useProjects } from '@/lib/api/projects';
 import { MembersPanel } from './members-panel';
 import { RunsPanel } from './runs-panel';
 import { ScenariosPanel } from './scenarios-panel';

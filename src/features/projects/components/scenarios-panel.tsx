@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
-import { useProjectScenarios } from '../api/get-project-scenarios';
+import { useScenarios } from '@/lib/api/scenarios';
 
 const systemWords: Record<string, string> = {
   'direct-air': 'direct air-side',
@@ -10,7 +10,7 @@ const systemWords: Record<string, string> = {
 };
 
 export function ScenariosPanel({ projectId, canEdit }: { projectId: number; canEdit: boolean }) {
-  const scenarios = useProjectScenarios(projectId);
+  const scenarios = useScenarios(projectId);
   return (
     <Panel
       title="Scenarios"

@@ -1,5 +1,5 @@
 import { BYTES_PER_MB, type ProjectStorage } from '../../../../shared/schemas/project-storage';
-import { useProjectStorage } from '../api/get-project-storage';
+import { useProjectStorage } from '@/lib/api/projects';
 
 /** Decimal units, as the limit is set (MB of 1,000,000 bytes): kB below 1 MB, one decimal below 100 of a unit. */
 function mb(bytes: number): string {

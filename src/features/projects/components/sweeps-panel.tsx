@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
-import { useProjectSweeps } from '@/lib/project-sweeps';
+import { useProjectSweeps } from '@/lib/api/sweeps';
 import { SWEEP_INPUTS } from '../../../../shared/sweep';
 
 /** The project's sweeps with how far each has got; engineers and owners can start one. */

@@ -1,11 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { ReportData } from '../../../../shared/report/report-data';
 
-export interface SharedReport {
-  link: { title: string; target: 'run' | 'comparison'; publicUntil: string | null };
-  report: ReportData;
-}
+import type { SharedReport } from '../../../../shared/schemas/api/reports';
+export type { SharedReport } from '../../../../shared/schemas/api/reports';
 
 export const getSharedReport = (token: string) => apiFetch<SharedReport>(`/shared/${encodeURIComponent(token)}`);
 

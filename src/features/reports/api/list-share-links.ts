@@ -1,19 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-
-export type ShareState = 'members' | 'public' | 'public-ended' | 'revoked';
-
-export interface ShareLink {
-  id: number;
-  target: 'run' | 'comparison';
-  runIds: number[];
-  title: string;
-  publicUntil: string | null;
-  createdAt: string;
-  createdByName: string | null;
-  revokedAt: string | null;
-  state: ShareState;
-}
+import type { ShareLink } from '../../../../shared/schemas/api/reports';
+export type { ShareState, ShareLink } from '../../../../shared/schemas/api/reports';
 
 export const listShareLinks = (projectId: number) => apiFetch<{ links: ShareLink[] }>(`/projects/${projectId}/share-links`);
 

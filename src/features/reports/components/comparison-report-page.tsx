@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { comparisonSearch, useComparisonReport } from '../api/get-comparison-report';
 import { ComparisonReportDocument } from './comparison-report-document';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { runDownloadLinks } from '@/components/ui/download-menu';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { useRunReport } from '../api/get-run-report';
 import { ReportError, ReportLoading } from './report-states';

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { RunRecord } from './get-run';
+import type { RunRecord } from '@/lib/api/runs';
 
 export const cancelRun = (projectId: number, runId: number) => apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST' });
 

@@ -7,7 +7,7 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import type { RunRecord } from '../api/get-run';
+import type { RunRecord } from '@/lib/api/runs';
 import { useRunHourColumns } from '../api/get-run-hour-columns';
 import { designAtSite } from '../../../../shared/scenario/run';
 import { BinTablePanel } from './bin-table-panel';

@@ -1,7 +1,7 @@
 import { formatQuantity } from '@/lib/quantity';
 import { standardPeriod, utcOffsetLabel } from '../../../../shared/time-zone';
 import { useUnitSystem } from '@/lib/unit-system';
-import type { RunRecord } from '../api/get-run';
+import type { RunRecord } from '@/lib/api/runs';
 import { scenarioInputRows } from '../../../../shared/report/inputs';
 import { formatInputValue } from '@/components/ui/input-value';
 import { inputLabel } from '../../../../shared/scenario/input-labels';

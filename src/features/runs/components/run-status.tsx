@@ -1,6 +1,6 @@
 import { Notice } from '@/components/ui/notice';
 import { useCancelRun } from '../api/cancel-run';
-import type { RunRecord } from '../api/get-run';
+import type { RunRecord } from '@/lib/api/runs';
 
 /**
  * Where the run stands while it waits or computes, with a way to cancel; what happened when it did not finish.

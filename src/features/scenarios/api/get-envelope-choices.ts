@@ -1,13 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { EnvelopeLimits, EnvelopePreset } from '../../../../shared/scenario/envelopes';
-
-export interface ProjectEnvelope {
-  id: number;
-  name: string;
-  note: string;
-  limits: EnvelopeLimits;
-}
+import type { EnvelopePreset } from '../../../../shared/scenario/envelopes';
+import type { ProjectEnvelope } from '../../../../shared/schemas/api/envelopes';
+export type { ProjectEnvelope } from '../../../../shared/schemas/api/envelopes';
 
 export interface EnvelopeChoices {
   presets: EnvelopePreset[];

@@ -1,25 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { Scenario } from '../../../../shared/scenario/schema';
-
-/** One retired input the start-up migration replaced, as the server recorded it. */
-export interface ScenarioChange {
-  path: string;
-  before: unknown;
-  after: unknown;
-  note: string;
-}
-
-export interface StoredScenario {
-  id: number;
-  projectId: number;
-  name: string;
-  scenario: Scenario;
-  createdAt: string;
-  updatedAt: string;
-  /** What the start-up migration changed; the editor shows it until an engineer or owner dismisses it. Null if never migrated. */
-  migration: { migratedAt: string; changes: ScenarioChange[]; dismissedAt: string | null; dismissedBy: number | null } | null;
-}
+import type { StoredScenario } from '../../../../shared/schemas/api/scenarios';
+export type { ScenarioChange, StoredScenario } from '../../../../shared/schemas/api/scenarios';
 
 export const getScenario = (projectId: number, scenarioId: number) => apiFetch<{ scenario: StoredScenario }>(`/projects/${projectId}/scenarios/${scenarioId}`);
 

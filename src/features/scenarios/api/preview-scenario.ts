@@ -1,14 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { Scenario } from '../../../../shared/scenario/schema';
-
-export interface ScenarioPreview {
-  hours: { free: number; adiabatic: number; mechanical: number; noData: number; total: number };
-  energy: { partialPue: number | null };
-  water: { wueLPerKwh: number | null };
-  /** A hybrid hall's loops. */
-  loops?: { liquid: { hours: ScenarioPreview['hours'] }; air: { hours: ScenarioPreview['hours'] } };
-}
+import type { ScenarioPreview } from '../../../../shared/schemas/api/scenarios';
+export type { ScenarioPreview } from '../../../../shared/schemas/api/scenarios';
 
 /** Hours per mode for an unsaved scenario on one climate file; computed on the server, never stored. */
 export const previewScenario = (projectId: number, climateFileId: number, scenario: Scenario, signal?: AbortSignal) =>

@@ -4,7 +4,7 @@ import { LoopHoursTable } from '@/components/ui/loop-hours-table';
 import { ModeShareBar, ModeSwatch } from '@/components/ui/mode-marks';
 import type { Scenario } from '../../../../shared/scenario/schema';
 import { useScenarioPreview } from '../api/preview-scenario';
-import type { ClimateFileListing } from '../api/get-climate-files';
+import type { ListedClimateFile as ClimateFileListing } from '@/lib/api/climate-files';
 
 /** Hours per mode for the scenario as it stands in the editor, on one climate file, refreshed as it changes. */
 export function ModePreview({

@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { Panel } from '@/components/ui/panel';
-import { useCreateRuns, type QueuedRun } from '../api/create-runs';
-import type { ClimateFileListing } from '../api/get-climate-files';
-import { useScenarios } from '../api/get-scenarios';
+import { useCreateRuns, type QueuedRun } from '@/lib/api/runs';
+import type { ListedClimateFile as ClimateFileListing } from '@/lib/api/climate-files';
+import { useScenarios } from '@/lib/api/scenarios';
 
 /**
  * Runs this scenario on the chosen climate files, optionally with other scenarios of the project: every

@@ -1,7 +1,7 @@
 import { useParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
-import { useClimateFiles } from '../api/get-climate-files';
-import { useProjectRole } from '@/lib/projects';
+import { useClimateFiles } from '@/lib/api/climate-files';
+import { useProjectRole } from '@/lib/api/projects';
 import { useScenario } from '../api/get-scenario';
 import { newScenarioValues, toFormValues } from '../utils/scenario-form';
 import { ScenarioForm } from './scenario-form';

@@ -7,7 +7,7 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { scenarioSchema, type Scenario } from '../../../../shared/scenario/schema';
 import { useDuplicateScenario } from '../api/duplicate-scenario';
-import type { ClimateFileListing } from '../api/get-climate-files';
+import type { ListedClimateFile as ClimateFileListing } from '@/lib/api/climate-files';
 import { useSaveScenario } from '../api/save-scenario';
 import { energyFields, envelopeFields, fieldsFor, systemFields, systemKinds } from '../utils/scenario-fields';
 import type { ScenarioFormValues } from '../utils/scenario-form';

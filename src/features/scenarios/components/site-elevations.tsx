@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { formatQuantity } from '@/lib/quantity';
 import { standardPressurePa } from '../../../../shared/psychrometrics';
 import { useUnitSystem } from '@/lib/unit-system';
-import type { ClimateFileListing } from '../api/get-climate-files';
+import type { ListedClimateFile as ClimateFileListing } from '@/lib/api/climate-files';
 
 /**
  * The elevation a run of this scenario uses: its climate file's site's, shown read-only with a link to the

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { SiteInput } from '../../../../shared/schemas/climate-file';
 import { apiFetch } from '@/lib/api-client';
-import { sitesQueryKey, type Site } from './get-sites';
+import { sitesQueryKey, type Site } from '@/lib/api/sites';
 
 export const createSite = (projectId: number, input: SiteInput) =>
   apiFetch<{ site: Site }>(`/projects/${projectId}/sites`, {

@@ -9,7 +9,7 @@ import { formatQuantity, fromDisplay, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { useCreateSite } from '../api/create-site';
 import { useUpdateSite } from '../api/update-site';
-import type { Site } from '../api/get-sites';
+import type { Site } from '@/lib/api/sites';
 
 /** Blank for "not given"; otherwise a number within the range, named in the message. */
 const optionalCoordinate = (label: string, limit: number) =>

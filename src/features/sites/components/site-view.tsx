@@ -7,7 +7,7 @@ import { ApiError } from '@/lib/api-client';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { useDeleteSite } from '../api/delete-site';
-import { useSites, type Site } from '../api/get-sites';
+import { useSites, type Site } from '@/lib/api/sites';
 import { SiteForm } from './site-form';
 
 const degrees = (v: number | null) => (v === null ? '–' : `${v.toFixed(3)}°`);

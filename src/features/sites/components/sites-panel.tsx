@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { useSites } from '../api/get-sites';
+import { useSites } from '@/lib/api/sites';
 import { SiteForm } from './site-form';
 
 /** The project's sites with elevation, position and time zone; engineers and owners can add one. */

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
 import type { SweepSpecInput } from '../../../../shared/sweep';
-import type { SweepRecord } from './get-sweep';
+import type { SweepRecord } from '@/lib/api/sweeps';
 
 /** Queues every point of the sweep as a run; the server checks every point first and stores all or nothing. */
 export const createSweep = (projectId: number, spec: SweepSpecInput) =>

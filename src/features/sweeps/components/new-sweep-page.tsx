@@ -3,7 +3,7 @@ import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom'
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
-import { useProjectRole } from '@/lib/projects';
+import { useProjectRole } from '@/lib/api/projects';
 import { useUnitSystem } from '@/lib/unit-system';
 import {
   axisValues,
@@ -18,9 +18,9 @@ import {
   type SweepSpecInput,
 } from '../../../../shared/sweep';
 import { formatQuantity } from '@/lib/quantity';
-import { useClimateFiles } from '../api/get-climate-files';
+import { useClimateFiles } from '@/lib/api/climate-files';
 import { useCreateSweep } from '../api/create-sweep';
-import { useScenarios } from '../api/get-scenarios';
+import { useScenarios } from '@/lib/api/scenarios';
 import { formatSweepValue, sweepPointParts, sweepUnit } from '@/lib/sweep-value';
 import { applicableInputs, AxisFields, draftFor, type AxisDraft } from './axis-fields';
 
