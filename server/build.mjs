@@ -1,5 +1,5 @@
 // `npm run build`: everything production runs, in dist/ — the client (Vite) in dist/client, and one esbuild
-// bundle each of the server (dist/server.mjs), the worker pool's threads (dist/workers.mjs) and the command line
+// bundle each of the server (dist/server.mjs), the worker pool's threads (dist/workers.cjs) and the command line
 // (dist/estimate.cjs). Packages stay in node_modules (installed with `npm ci --omit=dev`); nothing is built at
 // run time, so the app runs from a read-only image. With --if-stale (what `npm start` runs) it builds only
 // when a source is newer than the last build.
@@ -37,16 +37,17 @@ await build({ root: projectRoot, logLevel: 'warn' });
 
 const { build: bundle } = await import('esbuild');
 const bundles = [
-  // The server: the pool picks dist/workers.mjs when __TRAMONTANE_BUNDLE__ is set, instead of building on demand.
+  // The server: the pool picks dist/workers.cjs when __TRAMONTANE_BUNDLE__ is set, instead of building on demand.
   { entry: 'server/index.ts', format: 'esm', outfile: 'server.mjs', define: { __TRAMONTANE_BUNDLE__: 'true' } },
-  { entry: 'workers/dispatch.ts', format: 'esm', outfile: 'workers.mjs' },
+  { entry: 'workers/dispatch.ts', format: 'cjs', outfile: 'workers.cjs' },
   { entry: 'server/cli/estimate.ts', format: 'cjs', outfile: 'estimate.cjs', compact: true },
 ];
 mkdirSync(dist, { recursive: true });
 await Promise.all(
-  bundles.map(({ entry, format, outfile, define, compact }) =>
-    bundle({ ...bundleOptions({ entry, format, compact }), outfile: path.join(dist, outfile), packages: 'external', define }),
-  ),
+  bundles.map(({ entry, format, outfile, define, compact }) => {
+    const options = bundleOptions({ entry, format, compact });
+    return bundle({ ...options, outfile: path.join(dist, outfile), packages: 'external', define: { ...options.define, ...define } });
+  }),
 );
 writeFileSync(stamp, JSON.stringify({ builtAt: new Date().toISOString() }));
-console.log(`Built dist/ (client, server.mjs, workers.mjs, estimate.cjs) in ${((Date.now() - started) / 1000).toFixed(1)} s.`);
+console.log(`Built dist/ (client, server.mjs, workers.cjs, estimate.cjs) in ${((Date.now() - started) / 1000).toFixed(1)} s.`);

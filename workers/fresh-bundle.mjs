@@ -49,10 +49,11 @@ export function bundleOptions({ entry, format, compact = false }) {
     logLevel: 'error',
     // a native addon: loaded from node_modules where the bundle runs (the run queue's threads store runs through it)
     external: ['better-sqlite3'],
-    // papaparse is CommonJS; an ESM bundle needs a require to load it.
+    // papaparse is CommonJS; an ESM bundle needs a require to load it. A CommonJS bundle has no import.meta: the few
+    // modules that find files from their own address (server/paths.ts) get the bundle's own, as an ESM bundle would.
     ...(format === 'esm'
       ? { banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" } }
-      : {}),
+      : { banner: { js: "const __bundleUrl = require('node:url').pathToFileURL(__filename).href;" }, define: { 'import.meta.url': '__bundleUrl' } }),
   };
 }
 

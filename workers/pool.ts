@@ -26,10 +26,15 @@ export class TaskTimeLimitError extends Error {
 /** Set to true by esbuild in the production server bundle (server/build.mjs); undefined when run from source. */
 declare const __TRAMONTANE_BUNDLE__: boolean | undefined;
 
-/** The production bundle's threads run dist/workers.mjs, built beside it; from source, a bundle built when stale. */
+/**
+ * The production bundle's threads run dist/workers.cjs, built beside it; from source, a bundle built when stale.
+ * CommonJS, not an ES module: piscina loads a thread's file with require() first, and Node 20's require() of an ES
+ * module can abort the whole process with a V8 fatal error ("Module::IsGraphAsync must be used on an instantiated
+ * module") when threads start and stop in quick succession, as they do under cancels, time limits and restarts.
+ */
 function workerBundleUrl(): string {
-  if (typeof __TRAMONTANE_BUNDLE__ !== 'undefined') return new URL('./workers.mjs', import.meta.url).href;
-  return pathToFileURL(freshBundle({ entry: 'workers/dispatch.ts', name: 'workers', format: 'esm' }).file).href;
+  if (typeof __TRAMONTANE_BUNDLE__ !== 'undefined') return new URL('./workers.cjs', import.meta.url).href;
+  return pathToFileURL(freshBundle({ entry: 'workers/dispatch.ts', name: 'workers', format: 'cjs' }).file).href;
 }
 export type TaskName = keyof Tasks;
 

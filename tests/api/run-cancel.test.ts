@@ -94,9 +94,11 @@ describe('cancelling a run', () => {
   it('stops a running run’s task; the run stays cancelled, not failed, and the runs waiting behind it still run', async () => {
     const { pool, tasks } = heldPool();
     const { queue, app } = appWith(pool);
-    // The test pool has two threads: two runs start, the third waits.
+    // The test pool has two threads: two runs' tasks are handed to it, the third waits. A run reads 'running' only once
+    // its thread starts it (the thread marks it), and these tasks are held before that.
     const ids = await startRuns(app, 3);
-    expect(ids.map((id) => rowOf(id).status)).toEqual(['running', 'running', 'queued']);
+    expect(tasks).toHaveLength(2);
+    expect(ids.map((id) => rowOf(id).status)).toEqual(['queued', 'queued', 'queued']);
     const res = await request(app).post(`/api/projects/${projectId}/runs/${ids[0]}/cancel`).set(asPerson(engineer)).expect(200);
     expect(res.body.run.status).toBe('cancelled');
     expect(tasks[0].signal?.aborted).toBe(true);
