@@ -172,6 +172,17 @@ describe('a newcomer touring the demo workspace', () => {
     await page.getByTestId('moist-air-chart').getByRole('group', { name: 'Units of this chart' }).getByRole('button', { name: 'IP' }).click();
     await expect.poll(() => page.getByTestId('moist-air-chart').locator('figure svg').last().textContent(), { timeout: 30_000 }).toContain('gr/lb');
     expect(await page.getByTestId('run-inputs').innerText()).not.toContain('°F');
+    // This person signed in through the provider page, so the harness cannot save the choice for them: the page saves
+    // it to their settings as the settings page does (the app's request header included), then the harness reloads in
+    // IP (else the saved SI would win).
+    const saved = await page.evaluate(() =>
+      fetch('/api/me', {
+        method: 'PATCH',
+        headers: { 'content-type': 'application/json', 'x-tramontane-request': '1' },
+        body: JSON.stringify({ unitSystem: 'ip' }),
+      }).then((r) => r.status),
+    );
+    expect(saved).toBe(200);
     await h.useUnits('IP');
     await expect.poll(() => page.getByTestId('run-inputs').innerText(), { timeout: 30_000 }).toContain('64.4 °F'); // 18 °C × 9/5 + 32 = 64.4 °F (exact)
     await chartsDrawn(page, { atLeast: 3 });
