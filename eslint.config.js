@@ -48,6 +48,11 @@ const boundaryZones = [
     message: 'src/components and src/lib are shared by every feature and import no feature and not src/app (DEVELOPERS.md, Layout).',
   },
   {
+    target: './src/app/router.tsx',
+    from: './src/features',
+    message: 'The router wires pages one way: every page is a route module in src/app/routes, which composes the features (DEVELOPERS.md, Layout).',
+  },
+  {
     target: './src/features',
     from: './src/app',
     message: 'Features never import src/app; the app imports features (DEVELOPERS.md, Layout).',

@@ -3,8 +3,8 @@ import { AppShell } from './app-shell';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 import { RouteError } from './routes/route-error';
-import { SignInPage } from '@/features/auth/components/sign-in-page';
-import { RequireSignIn } from '@/features/auth/components/require-sign-in';
+import { SignInRoute } from './routes/sign-in';
+import { SignedInRoute } from './routes/signed-in';
 
 const router = createBrowserRouter([
   {
@@ -17,46 +17,46 @@ const router = createBrowserRouter([
       // Scenarios, runs, comparison, envelopes and the state calculator: each page loaded on first visit.
       {
         path: 'projects/:projectId/scenarios/new',
-        lazy: () => import('@/features/scenarios/components/scenario-editor-page').then((m) => ({ Component: m.ScenarioEditorPage })),
+        lazy: () => import('./routes/scenario-editor').then((m) => ({ Component: m.ScenarioEditorRoute })),
       },
       {
         path: 'projects/:projectId/scenarios/:scenarioId',
-        lazy: () => import('@/features/scenarios/components/scenario-editor-page').then((m) => ({ Component: m.ScenarioEditorPage })),
+        lazy: () => import('./routes/scenario-editor').then((m) => ({ Component: m.ScenarioEditorRoute })),
       },
-      { path: 'projects/:projectId/runs/:runId', lazy: () => import('@/features/runs/components/run-page').then((m) => ({ Component: m.RunPage })) },
-      { path: 'projects/:projectId/compare', lazy: () => import('@/features/compare/components/compare-page').then((m) => ({ Component: m.ComparePage })) },
+      { path: 'projects/:projectId/runs/:runId', lazy: () => import('./routes/run').then((m) => ({ Component: m.RunRoute })) },
+      { path: 'projects/:projectId/compare', lazy: () => import('./routes/compare').then((m) => ({ Component: m.CompareRoute })) },
       // Studies: sweeps, future-climate projections, excursions for operators, print-ready reports.
       {
         path: 'projects/:projectId/sweeps/new',
-        lazy: () => import('@/features/sweeps/components/new-sweep-page').then((m) => ({ Component: m.NewSweepPage })),
+        lazy: () => import('./routes/new-sweep').then((m) => ({ Component: m.NewSweepRoute })),
       },
-      { path: 'projects/:projectId/sweeps/:sweepId', lazy: () => import('@/features/sweeps/components/sweep-page').then((m) => ({ Component: m.SweepPage })) },
+      { path: 'projects/:projectId/sweeps/:sweepId', lazy: () => import('./routes/sweep').then((m) => ({ Component: m.SweepRoute })) },
       {
         path: 'projects/:projectId/projections/new',
-        lazy: () => import('@/features/projections/components/new-projection-page').then((m) => ({ Component: m.NewProjectionPage })),
+        lazy: () => import('./routes/new-projection').then((m) => ({ Component: m.NewProjectionRoute })),
       },
       {
         path: 'projects/:projectId/projections/:fileId',
-        lazy: () => import('@/features/projections/components/projection-page').then((m) => ({ Component: m.ProjectionPage })),
+        lazy: () => import('./routes/projection').then((m) => ({ Component: m.ProjectionRoute })),
       },
       {
         path: 'projects/:projectId/runs/:runId/excursions',
-        lazy: () => import('@/features/excursions/components/excursions-page').then((m) => ({ Component: m.ExcursionsPage })),
+        lazy: () => import('./routes/excursions').then((m) => ({ Component: m.ExcursionsRoute })),
       },
       {
         path: 'projects/:projectId/runs/:runId/report',
-        lazy: () => import('@/features/reports/components/run-report-page').then((m) => ({ Component: m.RunReportPage })),
+        lazy: () => import('./routes/run-report').then((m) => ({ Component: m.RunReportRoute })),
       },
       {
         path: 'projects/:projectId/compare/report',
-        lazy: () => import('@/features/reports/components/comparison-report-page').then((m) => ({ Component: m.ComparisonReportPage })),
+        lazy: () => import('./routes/comparison-report').then((m) => ({ Component: m.ComparisonReportRoute })),
       },
-      { path: 'shared/:token', lazy: () => import('@/features/reports/components/shared-report-page').then((m) => ({ Component: m.SharedReportPage })) },
+      { path: 'shared/:token', lazy: () => import('./routes/shared-report').then((m) => ({ Component: m.SharedReportRoute })) },
       {
         path: 'projects/:projectId/envelopes',
-        lazy: () => import('@/features/envelopes/components/envelopes-page').then((m) => ({ Component: m.EnvelopesPage })),
+        lazy: () => import('./routes/envelopes').then((m) => ({ Component: m.EnvelopesRoute })),
       },
-      { path: 'calculator', lazy: () => import('@/features/calculator/components/calculator-page').then((m) => ({ Component: m.CalculatorPage })) },
+      { path: 'calculator', lazy: () => import('./routes/calculator').then((m) => ({ Component: m.CalculatorRoute })) },
       // Project overview, sites and climate files.
       { path: 'projects/:projectId', lazy: () => import('./routes/project-overview').then((m) => ({ Component: m.ProjectOverviewRoute })) },
       {
@@ -66,18 +66,18 @@ const router = createBrowserRouter([
       { path: 'projects/:projectId/climate-files/:fileId', lazy: () => import('./routes/climate-file').then((m) => ({ Component: m.ClimateFileRoute })) },
       { path: 'projects/:projectId/sites/:siteId', lazy: () => import('./routes/site').then((m) => ({ Component: m.SiteRoute })) },
       // Sign-in, settings, members, invitations, audit trail and the local mailbox.
-      { path: 'sign-in', element: <SignInPage /> },
+      { path: 'sign-in', element: <SignInRoute /> },
       // Open signed out too: the page names the project and the inviter, then offers sign-in.
-      { path: 'invites/accept', lazy: () => import('@/features/members/components/accept-invite-page').then((m) => ({ Component: m.AcceptInvitePage })) },
+      { path: 'invites/accept', lazy: () => import('./routes/accept-invite').then((m) => ({ Component: m.AcceptInviteRoute })) },
       {
-        element: <RequireSignIn />,
+        element: <SignedInRoute />,
         children: [
-          { path: 'settings', lazy: () => import('@/features/auth/components/settings-page').then((m) => ({ Component: m.SettingsPage })) },
-          { path: 'projects/:projectId/members', lazy: () => import('@/features/members/components/members-page').then((m) => ({ Component: m.MembersPage })) },
-          { path: 'projects/:projectId/audit', lazy: () => import('@/features/audit/components/audit-page').then((m) => ({ Component: m.AuditPage })) },
-          { path: 'audit', lazy: () => import('@/features/audit/components/audit-page').then((m) => ({ Component: m.AuditPage })) },
-          { path: 'admin/people', lazy: () => import('@/features/members/components/people-page').then((m) => ({ Component: m.PeoplePage })) },
-          { path: 'mailbox', lazy: () => import('@/features/auth/components/mailbox-page').then((m) => ({ Component: m.MailboxPage })) },
+          { path: 'settings', lazy: () => import('./routes/settings').then((m) => ({ Component: m.SettingsRoute })) },
+          { path: 'projects/:projectId/members', lazy: () => import('./routes/members').then((m) => ({ Component: m.MembersRoute })) },
+          { path: 'projects/:projectId/audit', lazy: () => import('./routes/audit').then((m) => ({ Component: m.AuditRoute })) },
+          { path: 'audit', lazy: () => import('./routes/audit').then((m) => ({ Component: m.AuditRoute })) },
+          { path: 'admin/people', lazy: () => import('./routes/people').then((m) => ({ Component: m.PeopleRoute })) },
+          { path: 'mailbox', lazy: () => import('./routes/mailbox').then((m) => ({ Component: m.MailboxRoute })) },
         ],
       },
       { path: '*', element: <NotFoundRoute /> },

@@ -68,6 +68,12 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
       "import { AppShell } from '@/app/app-shell';",
       /never import src\/app/,
     ],
+    [
+      'the router importing a page without its route module',
+      'src/app/router.tsx',
+      "import { RunPage } from '@/features/runs/components/run-page';",
+      /every page is a route module in src\/app\/routes/,
+    ],
     ['the server importing the client', 'server/routes/boundary-fixture.ts', "import { toDisplay } from '../../src/lib/quantity';", /never import the client/],
   ])('refuses %s', slow, async (_case, file, code, message) => {
     const errors = await boundaryErrors(file, code);
@@ -85,6 +91,11 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
       'the app composing features',
       'src/app/boundary-fixture.tsx',
       "import { cancelRun } from '@/features/runs/api/cancel-run';\nimport { createSweep } from '@/features/sweeps/api/create-sweep';",
+    ],
+    [
+      'the router importing route modules and the shell',
+      'src/app/router.tsx',
+      "import { RunRoute } from './routes/run';\nimport { AppShell } from './app-shell';",
     ],
     ['the server and a test importing shared/', 'server/boundary-fixture.ts', "import { withoutControlCharacters } from '../shared/schemas/plain-text';"],
     [
