@@ -5,8 +5,8 @@
  * is compared with painting 1 year in the same run (ratio near 1), while binning grows with the hours.
  */
 import { binHours, designAtSite, gridStates, operatingRegionGrid, parseScenario, runScenario, findEnvelopePreset } from '../../shared/scenario';
-import { chartWindowFor } from '../../src/components/charts/moist-air-data';
-import { densityGridFor, paintLayer, regionGridFor } from '../../src/components/charts/region-layer';
+import { chartWindowFor } from '../../src/lib/charts/moist-air-data';
+import { densityGridFor, paintLayer, regionGridFor } from '../../src/lib/charts/region-layer';
 import { syntheticSeries, type SyntheticClimate } from '../unit/scenario/synthetic-climate';
 import type { BenchSuite } from './suite';
 

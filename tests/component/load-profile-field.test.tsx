@@ -2,7 +2,7 @@ import { render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { LoadProfileField } from '@/features/scenarios/components/load-profile-field';
-import { parseRampText, summariseLoadProfile } from '@/features/scenarios/utils/load-profile-summary';
+import { parseRampText, summariseLoadProfile } from '@/features/scenarios/lib/load-profile-summary';
 import { EXAMPLE_LOAD_PROFILE_NAME, exampleLoadProfile, type ItLoadProfile } from '../../shared/scenario';
 
 function renderField(value: ItLoadProfile) {

@@ -5,7 +5,7 @@
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { RegionTable } from '@/components/charts/region-table';
-import { regionRules } from '@/components/charts/region-words';
+import { regionRules } from '@/lib/charts/region-words';
 import { binHours, designAtSite, runScenario } from '../../shared/scenario';
 import { makeScenario, psy } from '../unit/scenario/fixtures';
 

@@ -4,8 +4,8 @@ import { useForm } from 'react-hook-form';
 import { afterEach, describe, expect, it } from 'vitest';
 import { UnitSystemProvider } from '@/lib/unit-system';
 import { QuantityField } from '@/features/scenarios/components/quantity-field';
-import { fieldFromDisplay, fieldToDisplay, inputText, parseInputText, rangeText } from '@/features/scenarios/utils/field-units';
-import { energyFields, fieldsFor, inWords, systemFields } from '@/features/scenarios/utils/scenario-fields';
+import { fieldFromDisplay, fieldToDisplay, inputText, parseInputText, rangeText } from '@/features/scenarios/lib/field-units';
+import { energyFields, fieldsFor, inWords, systemFields } from '@/features/scenarios/lib/scenario-fields';
 
 const supply = systemFields.find((f) => f.path === 'system.supplyAirC')!;
 

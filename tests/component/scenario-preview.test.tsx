@@ -3,7 +3,7 @@ import { act, renderHook, waitFor } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { useScenarioPreview } from '@/features/scenarios/api/preview-scenario';
-import { newScenarioValues } from '@/features/scenarios/utils/scenario-form';
+import { newScenarioValues } from '@/features/scenarios/lib/scenario-form';
 import { scenarioSchema, type Scenario } from '../../shared/scenario/schema';
 
 const base = scenarioSchema.parse(newScenarioValues);

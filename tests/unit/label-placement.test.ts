@@ -3,7 +3,7 @@
  * labels against the hours): boxes never overlap, stay in the plotting area, and prefer empty ground.
  */
 import { describe, expect, it } from 'vitest';
-import { placeLabels, type LabelBox, type LabelRequest } from '../../src/components/charts/label-placement';
+import { placeLabels, type LabelBox, type LabelRequest } from '../../src/lib/charts/label-placement';
 
 const area: LabelBox = { left: 0, top: 0, right: 400, bottom: 300 };
 const overlap = (a: LabelBox, b: LabelBox) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { importClimateText } from '../../shared/climate';
 import { describeOrder } from '../../shared/climate/recognise-columns';
 import { yearStatisticsNote } from '../../shared/scenario/year-statistics';
-import { rhBoundedNote } from '../../src/features/projections/utils/rh-bounded';
+import { rhBoundedNote } from '../../src/features/projections/lib/rh-bounded';
 
 // Synthetic rows (not a station): slashed day-first dates, a day above 12 so the order is certain.
 const slashed = [

@@ -2,11 +2,11 @@ import { useCallback, useMemo } from 'react';
 import { modeColours, modeKeys, modeLabels } from '../../../shared/modes';
 import { formatCount, formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { CARPET_DAYS, carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from './carpet-data';
+import { CARPET_DAYS, carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from '../../lib/charts/carpet-data';
 import { MONTH_SHORT as monthNames } from '../../../shared/calendar';
 import { utcOffsetLabel } from '../../../shared/time-zone';
-import { carpetDayLabel, carpetMonthStartDays } from './chart-format';
-import { temperatureRamp } from './colour-ramps';
+import { carpetDayLabel, carpetMonthStartDays } from '../../lib/charts/chart-format';
+import { temperatureRamp } from '../../lib/charts/colour-ramps';
 import { ModeLegend } from './mode-legend';
 import { PlotFigure, type PlotModule } from './plot-figure';
 

@@ -9,8 +9,8 @@ import {
 import { cellOf, REGION, REGION_KEYS, type CellHours, type OperatingRegionGrid, type RegionKey } from '../../../shared/scenario/operating-regions';
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
-import { chartXYToState } from './region-layer';
-import { regionNames, regionTintCss } from './region-words';
+import { chartXYToState } from '../../lib/charts/region-layer';
+import { regionNames, regionTintCss } from '../../lib/charts/region-words';
 
 /** What lies under the pointer: the state, the design's region there, and the hour cell holding it. */
 export interface HoverPoint {

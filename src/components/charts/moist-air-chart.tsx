@@ -13,7 +13,7 @@ import {
 import { formatQuantity, toDisplay, unitOf } from '@/lib/quantity';
 import { LocalUnitSystem, useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ChartHover, hoverAt, type HoverPoint } from './chart-hover';
-import { placeLabels, textWidthPx, type LabelBox, type LabelRequest } from './label-placement';
+import { placeLabels, textWidthPx, type LabelBox, type LabelRequest } from '../../lib/charts/label-placement';
 import {
   backgroundLines,
   chartWindowFor,
@@ -23,12 +23,12 @@ import {
   type ChartMarker,
   type DisplayLine,
   type EnvelopeLimitsInput,
-} from './moist-air-data';
+} from '../../lib/charts/moist-air-data';
 import { MoistAirTable } from './moist-air-table';
 import { PlotFigure, type PlotModule } from './plot-figure';
-import { chartXYToState, densityGridFor, paintLayer, regionGridFor } from './region-layer';
+import { chartXYToState, densityGridFor, paintLayer, regionGridFor } from '../../lib/charts/region-layer';
 import { RegionTable } from './region-table';
-import { densityInk, regionRules } from './region-words';
+import { densityInk, regionRules } from '../../lib/charts/region-words';
 import { SegmentedSwitch } from './segmented-switch';
 
 export interface MoistAirChartProps {

@@ -2,7 +2,7 @@ import { useMemo, useState } from 'react';
 import { modeKeys, modeLabels } from '../../../shared/modes';
 import { formatCount, formatQuantity, unitOf } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
-import { hoursInside, modeCodeAt, type ChartHours, type ChartMarker, type EnvelopeLimitsInput, hourStates } from './moist-air-data';
+import { hoursInside, modeCodeAt, type ChartHours, type ChartMarker, type EnvelopeLimitsInput, hourStates } from '../../lib/charts/moist-air-data';
 
 /** The text alternative of the moist-air chart: ranges of every quantity, hours per envelope and mode, the markers. */
 export function MoistAirTable({

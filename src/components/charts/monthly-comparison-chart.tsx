@@ -4,7 +4,7 @@ import { PlotFigure, type PlotModule } from './plot-figure';
 import { hoursOfMode, modeKeys, modeLabels, type ModeKey } from '../../../shared/modes';
 import type { ModeHours } from '../../../shared/scenario/results';
 import { MONTH_SHORT as months } from '../../../shared/calendar';
-import { modeColourScale, modeLabelOrder } from './mode-scale';
+import { modeColourScale, modeLabelOrder } from '../../lib/charts/mode-scale';
 
 type MonthRow = ModeHours & { month: number };
 

@@ -5,9 +5,9 @@ import { modeLabels } from '../../../shared/modes';
 import { countsSubsets, hoursOfSpec, hoursText, modeRowSpecs, notCountedShort } from '../../../shared/report/mode-subsets';
 import type { ModeHours } from '../../../shared/scenario/results';
 import { MONTH_SHORT as monthShort } from '../../../shared/calendar';
-import { monthlyModeRows } from './monthly-mode-rows';
+import { monthlyModeRows } from '../../lib/charts/monthly-mode-rows';
 import { ModeColumnHead, modeSpecKey } from '../ui/mode-marks';
-import { modeColourScale, modeLabelOrder } from './mode-scale';
+import { modeColourScale, modeLabelOrder } from '../../lib/charts/mode-scale';
 
 /**
  * Stacked hours per mode for each calendar month (site standard time), with the table beside it

@@ -1,5 +1,5 @@
 import { REGION_KEYS, type RegionKey } from '../../../shared/scenario/operating-regions';
-import { regionNames, regionTintCss } from './region-words';
+import { regionNames, regionTintCss } from '../../lib/charts/region-words';
 
 export interface RegionTableProps {
   /** Each region's rule in words, null where the design has no such region. */

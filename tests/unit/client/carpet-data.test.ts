@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from '../../../src/components/charts/carpet-data';
-import { carpetDayLabel } from '../../../src/components/charts/chart-format';
+import { carpetBins, carpetSummary, HOURS_PER_DAY, LEAP_DAY_INDEX } from '../../../src/lib/charts/carpet-data';
+import { carpetDayLabel } from '../../../src/lib/charts/chart-format';
 import { utcOffsetLabel } from '../../../shared/time-zone';
 
 const cellOf = (dayIndex: number, hour: number) => dayIndex * HOURS_PER_DAY + hour;

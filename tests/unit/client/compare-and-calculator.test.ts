@@ -6,8 +6,8 @@ import { formatMetric } from '@/lib/metric-text';
 import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';
 import { DRY_BULB_BIN_GRIDS, dryBulbBins } from '../../../shared/report/dry-bulb-bins';
 import { engineNoteText } from '@/lib/engine-notes';
-import { solveState } from '@/features/calculator/utils/state-request';
-import { stateRows } from '@/features/calculator/utils/state-rows';
+import { solveState } from '@/features/calculator/lib/state-request';
+import { stateRows } from '@/features/calculator/lib/state-rows';
 
 const psychrolib = createRequire(import.meta.url)('psychrolib');
 psychrolib.SetUnitSystem(psychrolib.SI);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { envelopeFormSchema } from '@/features/envelopes/utils/envelope-form';
+import { envelopeFormSchema } from '@/features/envelopes/lib/envelope-form';
 
 const typed = (limits: Record<string, string>) => ({ name: 'Client hall', note: '', limits });
 

@@ -17,7 +17,7 @@ import { meanSitePressurePa, outdoorStates } from '../../../shared/psychrometric
 import { classifyHours, EXCURSION, MODE } from '../../../shared/scenario/classify';
 import { findEnvelopePreset } from '../../../shared/scenario/envelopes';
 import { ENVELOPE_BREACH, envelopeTest, insideEnvelope, type EnvelopeTestLimits } from '../../../shared/scenario/inside-envelope';
-import { hoursInside } from '../../../src/components/charts/moist-air-data';
+import { hoursInside } from '../../../src/lib/charts/moist-air-data';
 import { hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';
 import { psychrolib as psy } from '../psychrometrics/reference-psychrolib';
 import { makeScenario, SEA_LEVEL_PA, wFromDewPoint, wFromRh } from '../scenario/fixtures';

@@ -8,7 +8,7 @@ import {
   hourStates,
   sampleIndex,
   stateToChartXY,
-} from '../../../src/components/charts/moist-air-data';
+} from '../../../src/lib/charts/moist-air-data';
 import { ENVELOPE_PRESETS } from '../../../shared/scenario/envelopes';
 import { psychrolib } from '../psychrometrics/reference-psychrolib';
 import { hylandWexlerWaterPa } from '../psychrometrics/reference-over-water';

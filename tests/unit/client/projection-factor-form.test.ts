@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { zeroFactors } from '../../../shared/morphing';
-import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi } from '@/features/projections/utils/factor-form';
+import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi } from '@/features/projections/lib/factor-form';
 
 function typedForm(system: 'SI' | 'IP', july: Record<string, string>) {
   const months = siToTyped(zeroFactors(), system);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { dryBulbBins } from '../../../shared/report/dry-bulb-bins';
 import { flattenInputs } from '../../../shared/report/inputs';
-import { monthlyModeRows } from '@/components/charts/monthly-mode-rows';
+import { monthlyModeRows } from '@/lib/charts/monthly-mode-rows';
 
 describe('the bin table', () => {
   it('counts hours per mode in 2 K bins, warmest first, with the mean coincident wet-bulb', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pickerViewOptions, runsInView, defaultPickerView } from '@/features/compare/utils/run-picker-view';
+import { pickerViewOptions, runsInView, defaultPickerView } from '@/features/compare/lib/run-picker-view';
 import { foldSweepPoints, freeShareText, sweepRowSummary, type FoldableRun } from '@/lib/run-list-folding';
 import { runDisplayName, sweepPointParts } from '@/lib/sweep-value';
 

@@ -3,8 +3,8 @@ import { MoistAirChart } from '@/components/charts/moist-air-chart';
 import { Panel } from '@/components/ui/panel';
 import { unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { propertyInputs, solveState, type CalculatorInput, type PropertyKey } from '../utils/state-request';
-import { stateRows } from '../utils/state-rows';
+import { propertyInputs, solveState, type CalculatorInput, type PropertyKey } from '../lib/state-request';
+import { stateRows } from '../lib/state-rows';
 
 const noHours = { dryBulbC: [], humidityRatio: [] };
 

@@ -3,7 +3,7 @@ import { Panel } from '@/components/ui/panel';
 import type { UploadProgress } from '../api/send-file';
 import type { TimeBasis } from '../../../../shared/schemas/climate-file';
 import { UploadProgressBar, formatBytes } from './progress-bar';
-import { button, quietButton } from './wizard-buttons';
+import { button, quietButton } from '../lib/wizard-buttons';
 
 /** Step 2: the file, its name in the project, the longest gap to fill and the clock its times are on; reading it sends it with a progress bar. */
 export function FileStep({

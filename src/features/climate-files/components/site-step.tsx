@@ -3,7 +3,7 @@ import type { SitePrefill } from '../../../../shared/climate/formats/site-check'
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { button, quietButton } from './wizard-buttons';
+import { button, quietButton } from '../lib/wizard-buttons';
 
 export interface WizardSite {
   id: number;

@@ -17,7 +17,7 @@ import { SiteStep, type RenderNewSite, type WizardSite } from './site-step';
 import { FileFormatNote, FileOrigin } from './file-origin';
 import { sitePrefillFromHeader } from '../../../../shared/climate/formats/site-check';
 import { ValidationReport } from './validation-report';
-import { button, quietButton } from './wizard-buttons';
+import { button, quietButton } from '../lib/wizard-buttons';
 import type { TimeBasis } from '../../../../shared/schemas/climate-file';
 
 export type { WizardSite };

@@ -5,7 +5,7 @@ import { Link } from 'react-router-dom';
 import { sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunListing } from '../api/get-runs';
-import { defaultPickerView, pickerViewOptions, runsInView, type PickerView } from '../utils/run-picker-view';
+import { defaultPickerView, pickerViewOptions, runsInView, type PickerView } from '../lib/run-picker-view';
 import { ENGINE_VERSION } from '../../../../shared/scenario/version';
 
 const column = createColumnHelper<RunListing>();

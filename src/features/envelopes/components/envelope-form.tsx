@@ -5,8 +5,8 @@ import { unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { envelopeSchema } from '../../../../shared/scenario/schema';
 import { useCreateEnvelope, type NewEnvelope } from '../api/create-envelope';
-import { blankEnvelopeForm, envelopeFormSchema, limitFields, type EnvelopeFormValues } from '../utils/envelope-form';
-import { formatLimit } from './limit-format';
+import { blankEnvelopeForm, envelopeFormSchema, limitFields, type EnvelopeFormValues } from '../lib/envelope-form';
+import { formatLimit } from '../lib/limit-format';
 
 /** A project envelope: name, note and six limits typed in the person's units, checked by the shared schema. */
 export function EnvelopeForm({ projectId, onCreated }: { projectId: number; onCreated: (id: number) => void }) {

@@ -11,7 +11,7 @@ import { useDeleteEnvelope } from '../api/delete-envelope';
 import { useEnvelopePresets, useProjectEnvelopes } from '../api/get-envelopes';
 import { useProjectRole } from '@/lib/api/projects';
 import { EnvelopeForm } from './envelope-form';
-import { formatLimit } from './limit-format';
+import { formatLimit } from '../lib/limit-format';
 import { ProjectCrumb } from '@/components/ui/project-crumb';
 
 interface Entry {

@@ -4,7 +4,7 @@ import { useUnitSystem } from '@/lib/unit-system';
 import { ModeSwatch } from '@/components/ui/mode-marks';
 import { hoursOfMode, modeKeys, modeLabels } from '../../../../shared/modes';
 import type { ExcursionsResponse } from '../api/get-excursions';
-import { hoursText, percentText, siteTime } from './excursion-format';
+import { hoursText, percentText, siteTime } from '../lib/excursion-format';
 
 function Figure({
   label,

@@ -2,7 +2,7 @@ import { formatQuantity, unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { ChosenEnvelope } from '../../../../shared/excursions/proposal-query';
 import type { ExcursionsResponse } from '../api/get-excursions';
-import { hoursText } from './excursion-format';
+import { hoursText } from '../lib/excursion-format';
 
 const binLabel = (b: { fromHours: number; toHours: number | null }) =>
   b.toHours === null ? `${b.fromHours} h or longer` : b.fromHours === b.toHours ? `${b.fromHours} h` : `${b.fromHours}–${b.toHours} h`;

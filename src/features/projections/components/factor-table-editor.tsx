@@ -2,7 +2,7 @@ import type { FieldErrors, UseFormRegister } from 'react-hook-form';
 import { MONTH_NAMES, type DryBulbMethod, type HumidityMethod } from '../../../../shared/morphing';
 import { unitOf } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
-import { inDisplayUnits, type FactorFormValues, type FactorKey } from '../utils/factor-form';
+import { inDisplayUnits, type FactorFormValues, type FactorKey } from '../lib/factor-form';
 
 /** The twelve-month table of change factors as typed, in the person's unit system; columns the method does not use are read-only. */
 export function FactorTableEditor({

@@ -12,7 +12,7 @@ import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { useCreateProjection } from '../api/create-projection';
 import { useClimateFiles } from '@/lib/api/climate-files';
 import { usePreviewProjection } from '../api/preview-projection';
-import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi, type FactorFormValues, type FactorKey } from '../utils/factor-form';
+import { factorFormSchema, inDisplayUnits, siToTyped, typedToSi, type FactorFormValues, type FactorKey } from '../lib/factor-form';
 import { FactorTableEditor } from './factor-table-editor';
 import { MonthlyComparison } from './monthly-comparison';
 import { ProjectionCaution } from './projection-caution';

@@ -11,7 +11,7 @@ import { ProjectionCaution } from './projection-caution';
 import { RunOnBothPanel } from './run-on-both-panel';
 import { UnitsSwitch } from './units-switch';
 import { Fact } from '@/components/ui/fact';
-import { rhBoundedNote } from '../utils/rh-bounded';
+import { rhBoundedNote } from '../lib/rh-bounded';
 
 /** /projects/:projectId/projections/:fileId — today and the projection side by side, the factors, and runs on both. */
 export function ProjectionPage() {

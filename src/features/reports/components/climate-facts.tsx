@@ -4,7 +4,7 @@ import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import type { ReportRun } from '../../../../shared/report/report-data';
 import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
-import { humidityWords } from './report-format';
+import { humidityWords } from '../lib/report-format';
 import { Facts } from './report-layout';
 
 /** Where the site is and which clock its months are on. */

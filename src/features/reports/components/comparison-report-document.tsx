@@ -10,7 +10,7 @@ import { ClimateFacts, SiteFacts } from './climate-facts';
 import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
 import { MethodSection, ModelLimits } from './method-section';
-import { dateTime, systemInWords, usesWater } from './report-format';
+import { dateTime, systemInWords, usesWater } from '../lib/report-format';
 import { standardPeriod } from '../../../../shared/time-zone';
 import { hallAirSystem } from '../../../../shared/scenario/hybrid';
 import { ReportSection, ReportSheet, ReportTable, SubHeading } from './report-layout';

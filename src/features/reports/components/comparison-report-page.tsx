@@ -5,7 +5,7 @@ import { useProjectRole } from '@/lib/api/projects';
 import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { comparisonSearch, useComparisonReport } from '../api/get-comparison-report';
 import { ComparisonReportDocument } from './comparison-report-document';
-import { comparisonDownloadLinks } from './report-downloads';
+import { comparisonDownloadLinks } from '../lib/report-downloads';
 import { ReportError, ReportLoading } from './report-states';
 import { ReportToolbar } from './report-toolbar';
 import { ShareLinksPanel } from './share-links-panel';

@@ -1,4 +1,4 @@
-import { formatInputValue } from '@/components/ui/input-value';
+import { formatInputValue } from '@/lib/input-value';
 import type { UnitSystem } from '@/lib/unit-system';
 import { scenarioInputRows, type InputRow } from '../../../../shared/report/inputs';
 import { inputLabel } from '../../../../shared/scenario/input-labels';

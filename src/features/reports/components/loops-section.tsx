@@ -3,7 +3,7 @@ import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { MONTH_SHORT } from '../../../../shared/calendar';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
-import { hours, ratio } from './report-format';
+import { hours, ratio } from '../lib/report-format';
 import { SubHeading } from './report-layout';
 
 const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;

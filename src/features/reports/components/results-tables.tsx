@@ -21,7 +21,7 @@ import type { ScenarioResults } from '../../../../shared/scenario/run';
 import type { ScenarioSystem } from '../../../../shared/scenario/schema';
 import { fanGroups } from '../../../../shared/report/fan-groups';
 import { PARTIAL_YEAR_MARK, partialYearsSentence, yearStatistics } from '../../../../shared/scenario/year-statistics';
-import { hours, kw, mwh, ratio, share } from './report-format';
+import { hours, kw, mwh, ratio, share } from '../lib/report-format';
 import { Facts, ReportTable } from './report-layout';
 
 export function ModeHoursTable({ results, engineVersion }: { results: ScenarioResults; engineVersion: string }) {

@@ -14,7 +14,7 @@ import { EnvelopeFacts } from './envelope-facts';
 import { InputsTable } from './inputs-table';
 import { LoopsSection } from './loops-section';
 import { MethodSection, ModelLimits } from './method-section';
-import { dateTime, hours, kw, ratio, share, systemInWords, usesWater } from './report-format';
+import { dateTime, hours, kw, ratio, share, systemInWords, usesWater } from '../lib/report-format';
 import { ReportHourCharts } from './report-hour-charts';
 import { ReportSection, ReportSheet, SubHeading } from './report-layout';
 import { EnergyTable, ExcursionFacts, ModeHoursTable, MonthlyTable, WaterTable, YearTable } from './results-tables';

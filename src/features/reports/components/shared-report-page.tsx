@@ -4,7 +4,7 @@ import { runDownloadLinks } from '@/components/ui/download-menu';
 import { ApiError } from '@/lib/api-client';
 import { LocalUnitSystem, useUnitSystem } from '@/lib/unit-system';
 import { useSharedReport } from '../api/get-shared-report';
-import { comparisonDownloadLinks } from './report-downloads';
+import { comparisonDownloadLinks } from '../lib/report-downloads';
 import { ComparisonReportDocument } from './comparison-report-document';
 import { ReportLoading } from './report-states';
 import { ReportToolbar } from './report-toolbar';

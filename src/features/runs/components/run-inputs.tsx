@@ -3,7 +3,7 @@ import { standardPeriod, utcOffsetLabel } from '../../../../shared/time-zone';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { RunRecord } from '@/lib/api/runs';
 import { scenarioInputRows } from '../../../../shared/report/inputs';
-import { formatInputValue } from '@/components/ui/input-value';
+import { formatInputValue } from '@/lib/input-value';
 import { inputLabel } from '../../../../shared/scenario/input-labels';
 import { humidityReadingWords } from '../../../../shared/report/humidity-reading';
 

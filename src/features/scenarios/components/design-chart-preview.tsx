@@ -4,8 +4,8 @@ import { classifyHours } from '../../../../shared/scenario/classify';
 import { designAtSite } from '../../../../shared/scenario/run';
 import { scenarioSchema, type Scenario } from '../../../../shared/scenario/schema';
 import { usePreviewClimate } from '../api/get-preview-climate';
-import type { ScenarioFormValues } from '../utils/scenario-form';
-import { useDebouncedValue } from '../utils/use-debounced-value';
+import type { ScenarioFormValues } from '../lib/scenario-form';
+import { useDebouncedValue } from '../lib/use-debounced-value';
 
 /**
  * The scenario's operating regions on the moist-air chart as it stands in the form, over the preview file's

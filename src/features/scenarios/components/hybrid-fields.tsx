@@ -3,8 +3,8 @@ import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import { FACILITY_WATER_CLASSES, findFacilityWaterClass, supplyFitsClass } from '../../../../shared/scenario/facility-water';
 import type { Scenario } from '../../../../shared/scenario/schema';
-import { asAirLoopField, fieldsFor, heatReuseFields, liquidFields, liquidShareField, systemFields, systemKinds } from '../utils/scenario-fields';
-import { newHeatReuse, type ScenarioFormValues } from '../utils/scenario-form';
+import { asAirLoopField, fieldsFor, heatReuseFields, liquidFields, liquidShareField, systemFields, systemKinds } from '../lib/scenario-fields';
+import { newHeatReuse, type ScenarioFormValues } from '../lib/scenario-form';
 import { QuantityField } from './quantity-field';
 
 type FormControl = Control<ScenarioFormValues, unknown, Scenario>;

@@ -2,8 +2,8 @@ import { useState } from 'react';
 import { ChoiceCard } from '@/components/ui/choice-card';
 import type { ItLoadProfile } from '../../../../shared/scenario/schema';
 import { EXAMPLE_LOAD_PROFILE_NAME, exampleLoadProfile, parseLoadProfileCsv } from '../../../../shared/scenario/load-profile';
-import { parseRampText, summariseLoadProfile } from '../utils/load-profile-summary';
-import { loadProfileKinds } from '../utils/scenario-fields';
+import { parseRampText, summariseLoadProfile } from '../lib/load-profile-summary';
+import { loadProfileKinds } from '../lib/scenario-fields';
 
 const pct = (f: number) => `${(100 * f).toLocaleString('en', { maximumFractionDigits: 1 })} %`;
 

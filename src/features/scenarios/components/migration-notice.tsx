@@ -1,5 +1,5 @@
 import { Notice } from '@/components/ui/notice';
-import { formatInputValue } from '@/components/ui/input-value';
+import { formatInputValue } from '@/lib/input-value';
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { kindOfKey } from '../../../../shared/report/inputs';
 import { inputLabel } from '../../../../shared/scenario/input-labels';

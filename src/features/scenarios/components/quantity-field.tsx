@@ -1,8 +1,8 @@
 import { useId, useState } from 'react';
 import { useController, type Control, type FieldValues, type Path } from 'react-hook-form';
 import { useUnitSystem } from '@/lib/unit-system';
-import { fieldUnitLabel, inputText, parseInputText, rangeText } from '../utils/field-units';
-import { inWords, type NumericField } from '../utils/scenario-fields';
+import { fieldUnitLabel, inputText, parseInputText, rangeText } from '../lib/field-units';
+import { inWords, type NumericField } from '../lib/scenario-fields';
 
 /**
  * One numeric scenario input. The form keeps SI; the box shows and takes the chosen unit system.

@@ -3,7 +3,7 @@ import { Notice } from '@/components/ui/notice';
 import { useClimateFiles } from '@/lib/api/climate-files';
 import { useProjectRole } from '@/lib/api/projects';
 import { useScenario } from '../api/get-scenario';
-import { newScenarioValues, toFormValues } from '../utils/scenario-form';
+import { newScenarioValues, toFormValues } from '../lib/scenario-form';
 import { ScenarioForm } from './scenario-form';
 import { MigrationNotice } from './migration-notice';
 

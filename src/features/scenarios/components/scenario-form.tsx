@@ -9,10 +9,10 @@ import { scenarioSchema, type Scenario } from '../../../../shared/scenario/schem
 import { useDuplicateScenario } from '../api/duplicate-scenario';
 import type { ListedClimateFile as ClimateFileListing } from '@/lib/api/climate-files';
 import { useSaveScenario } from '../api/save-scenario';
-import { energyFields, envelopeFields, fieldsFor, systemFields, systemKinds } from '../utils/scenario-fields';
-import type { ScenarioFormValues } from '../utils/scenario-form';
-import { useDebouncedValue } from '../utils/use-debounced-value';
-import { useLeaveGuard } from '../utils/use-leave-guard';
+import { energyFields, envelopeFields, fieldsFor, systemFields, systemKinds } from '../lib/scenario-fields';
+import type { ScenarioFormValues } from '../lib/scenario-form';
+import { useDebouncedValue } from '../lib/use-debounced-value';
+import { useLeaveGuard } from '../lib/use-leave-guard';
 import { EnvelopePicker } from './envelope-picker';
 import { HybridFields } from './hybrid-fields';
 import { LoadProfileField } from './load-profile-field';

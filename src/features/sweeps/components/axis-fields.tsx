@@ -4,7 +4,7 @@ import type { Scenario } from '../../../../shared/scenario/schema';
 import { ENVELOPE_PRESETS } from '../../../../shared/scenario/envelopes';
 import { SWEEP_INPUT_PATHS, SWEEP_INPUTS, sweepInputRefusal, type SweepInputPath } from '../../../../shared/sweep';
 import { sweepUnit } from '@/lib/sweep-value';
-import { rangeFromSi, rangeToSi } from '../utils/sweep-format';
+import { rangeFromSi, rangeToSi } from '../lib/sweep-format';
 
 /** One axis as the form holds it: always SI, whatever the person types in. */
 export interface AxisDraft {

@@ -1,10 +1,10 @@
 import { useCallback, useMemo, useState } from 'react';
-import { densityRamp } from '@/components/charts/colour-ramps';
+import { densityRamp } from '@/lib/charts/colour-ramps';
 import { PlotFigure, type PlotModule } from '@/components/charts/plot-figure';
 import { useUnitSystem } from '@/lib/unit-system';
 import { axisOrder, gridCells, SWEEP_METRICS, sweepMetric, type SweepInputPath, type SweepMetric, type SweepPoint } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
-import { compactPresetLabel } from '../utils/sweep-format';
+import { compactPresetLabel } from '../lib/sweep-format';
 import { formatMetric, metricTitle, shownNumber } from '@/lib/metric-text';
 import { NOT_COUNTED } from '../../../../shared/report/mode-subsets';
 

@@ -14,9 +14,9 @@ import {
   type ZeroMechanical,
 } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle } from '@/lib/sweep-value';
-import { compactPresetLabel, displayNumber } from '../utils/sweep-format';
+import { compactPresetLabel, displayNumber } from '../lib/sweep-format';
 import { metricTitle, shownNumber } from '@/lib/metric-text';
-import { modeColourScale, modeLabelOrder } from '@/components/charts/mode-scale';
+import { modeColourScale, modeLabelOrder } from '@/lib/charts/mode-scale';
 
 const plotStyle = { fontFamily: 'var(--font-sans)', fontSize: '12px' };
 /** Marks a point whose supply setpoint breaks the envelope (the signal colour for a bad result). */

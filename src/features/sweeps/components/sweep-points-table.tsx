@@ -6,7 +6,7 @@ import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
 import { hoursOfSpec, hoursText, modeRowSpecs, subsetHours } from '../../../../shared/report/mode-subsets';
 import type { SweepInputPath, SweepPoint, SweepRunStatus } from '../../../../shared/sweep';
 import { formatSweepValue, sweepAxisTitle, sweepUnit } from '@/lib/sweep-value';
-import { displayNumber } from '../utils/sweep-format';
+import { displayNumber } from '../lib/sweep-format';
 import { formatMetric, metricTitle } from '@/lib/metric-text';
 import { METRICS, metricUnit, metricValue, type MetricKey } from '../../../../shared/metrics';
 

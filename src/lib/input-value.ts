@@ -1,6 +1,6 @@
 import { formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
-import type { InputRow } from '../../../shared/report/inputs';
+import type { InputRow } from '../../shared/report/inputs';
 
 /** One scenario input as shown beside its field name, in the reader's unit system. */
 export function formatInputValue(row: InputRow, system: UnitSystem): string {
