@@ -12,6 +12,9 @@ export type { QueuedRun, RunClimate, RunListing, RunRecord } from '../../../shar
 export const isFinished = (status: RunStatus | undefined) => status === 'done' || status === 'failed' || status === 'cancelled';
 
 export const runsQueryKey = (projectId: number) => ['projects', projectId, 'runs'] as const;
+export const runQueryKey = (projectId: number, runId: number) => [...runsQueryKey(projectId), runId] as const;
+/** A run's monthly and yearly tables alone (the compare page): kept apart from the run's own entry, whose shape differs. */
+export const runTablesQueryKey = (projectId: number, runId: number) => [...runQueryKey(projectId, runId), 'tables'] as const;
 
 export const getProjectRuns = (projectId: number) => apiFetch<z.infer<typeof runListResponse>>(`/projects/${projectId}/runs`);
 
@@ -35,7 +38,7 @@ export const getRun = (projectId: number, runId: number) => apiFetch<z.infer<typ
 /** Polls once a second while the run is queued or running, then stops: a finished run never changes. */
 export const runQueryOptions = (projectId: number, runId: number) =>
   queryOptions({
-    queryKey: [...runsQueryKey(projectId), runId],
+    queryKey: runQueryKey(projectId, runId),
     queryFn: () => getRun(projectId, runId),
     refetchInterval: (query) => (isFinished(query.state.data?.run.status) ? false : 1000),
   });

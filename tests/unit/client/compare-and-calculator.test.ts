@@ -1,6 +1,6 @@
 import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
-import type { RunListing } from '@/features/compare/api/get-runs';
+import type { RunListing } from '@/lib/api/runs';
 import { compareRuns as compareResults, comparisonCsv, withResults } from '../../../shared/report/comparison';
 import { formatMetric } from '@/lib/metric-text';
 import { coolingLoadText, formatQuantity, toDisplay } from '@/lib/quantity';

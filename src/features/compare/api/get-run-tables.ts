@@ -1,5 +1,6 @@
 import { useQueries } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
+import { runTablesQueryKey } from '@/lib/api/runs';
 import type { ModeHours, YearResults } from '../../../../shared/scenario/results';
 
 type MonthRow = ModeHours & { month: number };
@@ -25,8 +26,7 @@ const tablesOnly = (results: { data?: RunTables }[]) => results.map((q) => q.dat
 export function useRunTables(projectId: number, runIds: number[]) {
   return useQueries({
     queries: runIds.map((runId) => ({
-      // The same key as the run page's query would hold a different shape; keep these apart.
-      queryKey: ['projects', projectId, 'runs', runId, 'tables'],
+      queryKey: runTablesQueryKey(projectId, runId),
       queryFn: () => getRunTables(projectId, runId),
       staleTime: Infinity,
     })),

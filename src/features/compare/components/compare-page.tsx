@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
-import { useRuns } from '../api/get-runs';
+import { useProjectRuns } from '@/lib/api/runs';
 import { useRunTables } from '../api/get-run-tables';
 import { compareRuns, withResults, type ComparedRun } from '../../../../shared/report/comparison';
 import { ComparisonTable } from './comparison-table';
@@ -25,7 +25,7 @@ const idList = (text: string | null) =>
 export function ComparePage() {
   const projectId = Number(useParams().projectId);
   const [search, setSearch] = useSearchParams();
-  const runsQuery = useRuns(projectId);
+  const runsQuery = useProjectRuns(projectId);
   const runsParam = search.get('runs');
   const chosen = useMemo(() => idList(runsParam), [runsParam]);
   const done = useMemo(() => (runsQuery.data?.runs ?? []).filter((r) => r.status === 'done' && r.results), [runsQuery.data]);

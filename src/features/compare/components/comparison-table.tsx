@@ -1,7 +1,7 @@
 import { downloadCsv } from '@/lib/download';
 import { runDisplayName } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
-import type { RunListing } from '../api/get-runs';
+import type { RunListing } from '@/lib/api/runs';
 import { formatMetric } from '@/lib/metric-text';
 import { comparisonCsv, type ComparedRow, type ComparedRun } from '../../../../shared/report/comparison';
 import { countsSubsets, NOT_COUNTED, notCountedShort } from '../../../../shared/report/mode-subsets';

@@ -2,7 +2,7 @@ import { formatInputValue } from '@/lib/input-value';
 import { useUnitSystem } from '@/lib/unit-system';
 import { differingInputs } from '../../../../shared/report/inputs';
 import { inputLabel } from '../../../../shared/scenario/input-labels';
-import type { RunListing } from '../api/get-runs';
+import type { RunListing } from '@/lib/api/runs';
 
 /**
  * What differs between the compared runs: the climate file and site, then every scenario input whose value is not

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { sweepPointParts } from '@/lib/sweep-value';
 import { useUnitSystem } from '@/lib/unit-system';
-import type { RunListing } from '../api/get-runs';
+import type { RunListing } from '@/lib/api/runs';
 import { defaultPickerView, pickerViewOptions, runsInView, type PickerView } from '../lib/run-picker-view';
 import { ENGINE_VERSION } from '../../../../shared/scenario/version';
 

@@ -1,4 +1,4 @@
-import type { RunListing } from '../api/get-runs';
+import type { RunListing } from '@/lib/api/runs';
 import type { YearResults } from '../../../../shared/scenario/results';
 import { yearStatistics, type YearPoint } from '../../../../shared/scenario/year-statistics';
 

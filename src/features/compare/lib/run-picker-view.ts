@@ -1,4 +1,4 @@
-import type { RunListing } from '../api/get-runs';
+import type { RunListing } from '@/lib/api/runs';
 
 /** Which runs the compare page's picker lists: plain runs, all runs, or the points of one sweep ("sweep-12"). */
 export type PickerView = 'plain' | 'all' | `sweep-${number}`;

@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
+import { runQueryKey } from '@/lib/api/runs';
 import type { ProposalQuery } from '../../../../shared/excursions/proposal-query';
 import type { ExcursionsResponse } from '../../../../shared/schemas/api/studies';
 export type { ExcursionsResponse } from '../../../../shared/schemas/api/studies';
@@ -17,7 +18,7 @@ export const getExcursions = (projectId: number, runId: number, query: ProposalQ
 
 export const excursionsQueryOptions = (projectId: number, runId: number, query: ProposalQuery) =>
   queryOptions({
-    queryKey: ['projects', projectId, 'runs', runId, 'excursions', query],
+    queryKey: [...runQueryKey(projectId, runId), 'excursions', query],
     queryFn: () => getExcursions(projectId, runId, query),
     // A finished run's hours never change, so one answer per proposal is enough.
     staleTime: Infinity,

@@ -4,7 +4,7 @@ import { ModeShareBar } from '@/components/ui/mode-marks';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { foldSweepPoints, freeShareText, sweepRowSummary, type SweepRow } from '@/lib/run-list-folding';
-import { useProjectRuns, type RunListing, type RunStatus } from '../api/get-project-runs';
+import { useProjectRuns, type RunListing, type RunStatus } from '@/lib/api/runs';
 
 const statusStyle: Record<RunStatus, { text: string; className: string }> = {
   queued: { text: 'queued', className: 'bg-mist text-ink-soft' },

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
+import { runQueryKey } from '@/lib/api/runs';
 import type { RunReportData } from '../../../../shared/report/report-data';
 
 export const getRunReport = (projectId: number, runId: number) => apiFetch<{ report: RunReportData }>(`/projects/${projectId}/runs/${runId}/report`);
@@ -7,7 +8,7 @@ export const getRunReport = (projectId: number, runId: number) => apiFetch<{ rep
 /** A finished run never changes, so its report is read once per visit. */
 export const runReportQueryOptions = (projectId: number, runId: number) =>
   queryOptions({
-    queryKey: ['projects', projectId, 'runs', runId, 'report'],
+    queryKey: [...runQueryKey(projectId, runId), 'report'],
     queryFn: () => getRunReport(projectId, runId),
     retry: false,
     staleTime: Infinity,

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/api-client';
-import type { RunRecord } from '@/lib/api/runs';
+import { runQueryKey, type RunRecord } from '@/lib/api/runs';
 
 export const cancelRun = (projectId: number, runId: number) => apiFetch<{ run: RunRecord }>(`/projects/${projectId}/runs/${runId}/cancel`, { method: 'POST' });
 
@@ -8,6 +8,6 @@ export function useCancelRun(projectId: number, runId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => cancelRun(projectId, runId),
-    onSuccess: (data) => queryClient.setQueryData(['projects', projectId, 'runs', runId], data),
+    onSuccess: (data) => queryClient.setQueryData(runQueryKey(projectId, runId), data),
   });
 }

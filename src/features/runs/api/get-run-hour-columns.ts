@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetchBytes } from '@/lib/api-client';
+import { runQueryKey } from '@/lib/api/runs';
 import { DRY_BULB_BIN_GRIDS, type BinTable } from '../../../../shared/report/dry-bulb-bins';
 import { decodeHourColumns, hourTimestampsMs, type HourColumns, type HourColumnName } from '../../../../shared/report/hour-columns';
 
@@ -64,7 +65,7 @@ export async function getRunDryBulbBins(projectId: number, runId: number, grid: 
 
 export const useRunDryBulbBins = (projectId: number, runId: number, grid: { widthK: number; originC: number }, enabled: boolean) =>
   useQuery({
-    queryKey: ['projects', projectId, 'runs', runId, 'dry-bulb-bins', grid.widthK, grid.originC],
+    queryKey: [...runQueryKey(projectId, runId), 'dry-bulb-bins', grid.widthK, grid.originC],
     queryFn: () => getRunDryBulbBins(projectId, runId, grid),
     staleTime: Infinity,
     retry: false,
@@ -73,7 +74,7 @@ export const useRunDryBulbBins = (projectId: number, runId: number, grid: { widt
 
 export const runHourColumnsQueryOptions = (projectId: number, runId: number) =>
   queryOptions({
-    queryKey: ['projects', projectId, 'runs', runId, 'hour-columns'],
+    queryKey: [...runQueryKey(projectId, runId), 'hour-columns'],
     queryFn: () => getRunHourColumns(projectId, runId),
     // a finished run's hours never change
     staleTime: Infinity,

@@ -1,1 +1,0 @@
-export { useProjectRuns as useRuns, type RunListing } from '@/lib/api/runs';

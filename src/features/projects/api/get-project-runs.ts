@@ -1,1 +1,0 @@
-export { useProjectRuns, type RunListing, type RunStatus } from '@/lib/api/runs';
