@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { standardPressurePa } from '../../../../shared/psychrometrics';
 import { standardOffsetMinutes, utcOffsetLabel } from '../../../../shared/time-zone';
 import { Notice } from '@/components/ui/notice';
@@ -6,6 +6,7 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
+import { useFocusReturn } from '@/lib/use-focus-return';
 import { useDeleteSite } from '../api/delete-site';
 import { useSites, type Site } from '@/lib/api/sites';
 import { SiteForm } from './site-form';
@@ -60,18 +61,9 @@ function Loaded({
   onDeleted: () => void;
 }) {
   const { unitSystem } = useUnitSystem();
-  const [editing, setEditing] = useState(false);
-  const [confirming, setConfirming] = useState(false);
   // When the form closes, the focus goes back to "Edit site", and a save is announced.
-  const editButton = useRef<HTMLButtonElement>(null);
-  const [closed, setClosed] = useState<{ saved: boolean } | null>(null);
-  useEffect(() => {
-    if (!editing && closed) editButton.current?.focus();
-  }, [editing, closed]);
-  const close = (saved: boolean) => {
-    setEditing(false);
-    setClosed({ saved });
-  };
+  const { open: editing, setOpen: setEditing, close, opener: editButton, closedWith: saved } = useFocusReturn<boolean>();
+  const [confirming, setConfirming] = useState(false);
   const remove = useDeleteSite(projectId);
   const facts: Array<[string, string, string?]> = [
     ['Elevation', formatQuantity('elevation', unitSystem, site.elevationM)],
@@ -108,7 +100,7 @@ function Loaded({
         )}
       </div>
       <p role="status" className="text-sm text-signal-ok empty:hidden">
-        {closed?.saved ? 'Site saved.' : ''}
+        {saved ? 'Site saved.' : ''}
       </p>
       {confirming && (
         <div

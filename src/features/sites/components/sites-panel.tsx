@@ -1,5 +1,5 @@
-import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
+import { useFocusReturn } from '@/lib/use-focus-return';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { formatQuantity } from '@/lib/quantity';
@@ -11,17 +11,8 @@ import { SiteForm } from './site-form';
 export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit: boolean }) {
   const sites = useSites(projectId);
   const { unitSystem } = useUnitSystem();
-  const [adding, setAdding] = useState(false);
   // When the form closes, the focus goes back to the button that opened it, and a saved site is announced.
-  const addButton = useRef<HTMLButtonElement>(null);
-  const [closed, setClosed] = useState<{ saved: string | null } | null>(null);
-  useEffect(() => {
-    if (!adding && closed) addButton.current?.focus();
-  }, [adding, closed]);
-  const close = (saved: string | null) => {
-    setAdding(false);
-    setClosed({ saved });
-  };
+  const { open: adding, setOpen: setAdding, close, opener: addButton, closedWith: savedName } = useFocusReturn<string | null>();
   return (
     <Panel
       title="Sites"
@@ -34,7 +25,7 @@ export function SitesPanel({ projectId, canEdit }: { projectId: number; canEdit:
       }
     >
       <p role="status" className="text-xs text-signal-ok empty:hidden">
-        {closed?.saved ? `Site “${closed.saved}” added.` : ''}
+        {savedName ? `Site “${savedName}” added.` : ''}
       </p>
       {sites.isPending && <div role="progressbar" className="h-16 animate-pulse rounded bg-mist" aria-label="Loading sites" />}
       {sites.isError && (
