@@ -1,5 +1,4 @@
 import { and, eq, inArray } from 'drizzle-orm';
-import type { ClimateSeries } from '../../shared/climate';
 import type { Db } from '../db/client';
 import { runs, sweeps } from '../db/schema';
 import { createSeriesCache } from './series-cache';
@@ -131,12 +130,13 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     running.set(runId, controller);
     const timer = setTimeout(() => controller.abort(new Error(`The run took longer than ${Math.round(timeoutMs / 1000)} s and was stopped.`)), timeoutMs);
     try {
-      const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : seriesCache.get(run.climateFileId);
-      if (!series) throw new Error('The climate file of this run was deleted before the run started.');
+      const cached = run.climateFileId === null ? undefined : seriesCache.get(run.climateFileId);
+      if (!cached) throw new Error('The climate file of this run was deleted before the run started.');
       const climate = JSON.parse(run.climateJson) as RunSnapshotClimate;
       const input = {
         scenario: JSON.parse(run.scenarioJson),
-        series,
+        series: cached.series,
+        seriesKey: cached.key,
         options: { elevationM: climate.elevationM, utcOffsetMinutes: climate.utcOffsetMinutes },
       };
       // A run is one pool task: it is marked running as a thread starts it, and its progress stays 0 until done. The
