@@ -3,6 +3,7 @@ import type { Db } from '../db/client';
 import { runs, sweeps } from '../db/schema';
 import { createSeriesCache } from './series-cache';
 import { markRunStarted, storeRunOutput } from './run-rows';
+import { createWriteTurn } from './write-turn';
 import type { WorkerPool } from '../../workers/pool';
 import { recordAudit } from '../auth/audit';
 import type { Mailer } from '../mail/mailer';
@@ -46,6 +47,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
   const seriesCache = createSeriesCache(db);
   // The pool's threads store runs into the same file; an in-memory database can only be written from here.
   const dbFile = db.$client.memory ? null : db.$client.name;
+  const writeTurn = createWriteTurn();
 
   /**
    * A run that finished or failed on its own goes into the audit trail and, when done, out as notices. A sweep's
@@ -143,7 +145,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
       // thread marks and stores it over its own connection to the file, so the main thread writes nothing per run (a
       // sweep's points would otherwise wait behind its writes and for SQLite's write lock) and never sees the hours.
       const stored = dbFile
-        ? (await pool.run('executeAndStoreRun', { ...input, store: { dbFile, runId } }, { signal: controller.signal })).stored
+        ? (await pool.run('executeAndStoreRun', { ...input, store: { dbFile, runId, writeTurn } }, { signal: controller.signal })).stored
         : markRunStarted(db, runId) && storeRunOutput(db, runId, await pool.run('executeRun', input, { signal: controller.signal }));
       if (stored) settle(runId, 'done');
     } catch (error) {
