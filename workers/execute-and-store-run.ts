@@ -1,10 +1,14 @@
 import { connectDatabase, type Db } from '../server/db/client';
 import { markRunStarted, storeRunOutput } from '../server/runs/run-rows';
+import { withWriteTurn } from '../server/runs/write-turn';
 import { executeRun, type ExecuteRunInput } from './execute-run';
 
 export interface ExecuteAndStoreRunInput extends ExecuteRunInput {
-  /** The server's database file and the run's row, `queued` until this task starts it. */
-  store: { dbFile: string; runId: number };
+  /**
+   * The server's database file and the run's row, `queued` until this task starts it; `writeTurn`, the queue's
+   * turns at the write lock among its threads (server/runs/write-turn.ts).
+   */
+  store: { dbFile: string; runId: number; writeTurn?: Int32Array };
 }
 
 /** This thread's own connection to each database file it stores into, opened at its first run and kept. */
@@ -27,6 +31,7 @@ function connectionTo(file: string): Db {
  */
 export function executeAndStoreRun({ store, ...input }: ExecuteAndStoreRunInput): { stored: boolean } {
   const db = connectionTo(store.dbFile);
-  if (!markRunStarted(db, store.runId)) return { stored: false };
-  return { stored: storeRunOutput(db, store.runId, executeRun(input)) };
+  if (!withWriteTurn(store.writeTurn, () => markRunStarted(db, store.runId))) return { stored: false };
+  const output = executeRun(input);
+  return { stored: withWriteTurn(store.writeTurn, () => storeRunOutput(db, store.runId, output)) };
 }

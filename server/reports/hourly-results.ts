@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm';
-import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
+import { decodeRunHours } from '../runs/run-rows';
 import type { RunClimateSnapshot } from '../../shared/report';
 import type { ClimateSeries } from '../../shared/climate';
 import type { WorkerPool } from '../../workers/pool';
@@ -32,15 +32,15 @@ export function storedRunHours(db: Db, run: typeof runs.$inferSelect): StoredRun
       `The climate file of run ${run.id} was deleted, so its hourly weather is gone; the summary can still be downloaded.`,
     );
   }
-  const modes = decodeUint8Column(stored.modes);
+  const { modes, mechanicalFraction, humidified } = decodeRunHours(stored);
   if (modes.length !== series.timestampsMs.length) {
     throw new HttpError(409, 'series_changed', `Run ${run.id} has ${modes.length} hours but its climate file now has ${series.timestampsMs.length}.`);
   }
   return {
     series,
     modes,
-    mechanicalFraction: decodeFloat64Column(stored.mechanicalFraction),
-    humidified: stored.humidified ? decodeUint8Column(stored.humidified) : null,
+    mechanicalFraction,
+    humidified,
     climate: JSON.parse(run.climateJson) as RunClimateSnapshot,
   };
 }

@@ -1,6 +1,6 @@
 import { and, desc, eq, inArray, isNull } from 'drizzle-orm';
 import { z } from 'zod';
-import { decodeFloat64Column, decodeUint8Column } from '../../shared/climate';
+import { decodeRunHours } from '../runs/run-rows';
 import { MODE_NAMES } from '../../shared/scenario';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
@@ -165,14 +165,14 @@ export function runRoutes(deps: AppDeps): RouteSpec[] {
       const run = runOr404(req.projectId!, req.params);
       const hours = db.select().from(runHours).where(eq(runHours.runId, run.id)).get();
       if (!hours) throw new HttpError(409, 'not_ready', `Run ${run.id} is ${run.status}; its hours exist once it is done.`);
-      const fraction = decodeFloat64Column(hours.mechanicalFraction);
+      const { modes, mechanicalFraction: fraction, humidified } = decodeRunHours(hours);
       res.json({
         modeNames: MODE_NAMES,
-        modes: Array.from(decodeUint8Column(hours.modes)),
+        modes: Array.from(modes),
         // Rounded to 0.001, but a share under 1 stays under 1: it tells a partial mechanical hour from a full one.
         mechanicalFraction: Array.from(fraction, (v) => (v < 1 ? Math.min(0.999, Math.round(v * 1000) / 1000) : 1)),
         /** 1 for a free-cooling hour whose evaporative stage only added moisture; null for runs made before engine 2.0.0. */
-        humidified: hours.humidified ? Array.from(decodeUint8Column(hours.humidified)) : null,
+        humidified: humidified ? Array.from(humidified) : null,
       });
     }),
 

@@ -1,9 +1,9 @@
 import { and, eq, inArray } from 'drizzle-orm';
-import type { ClimateSeries } from '../../shared/climate';
 import type { Db } from '../db/client';
 import { runs, sweeps } from '../db/schema';
 import { createSeriesCache } from './series-cache';
 import { markRunStarted, storeRunOutput } from './run-rows';
+import { createWriteTurn } from './write-turn';
 import type { WorkerPool } from '../../workers/pool';
 import { recordAudit } from '../auth/audit';
 import type { Mailer } from '../mail/mailer';
@@ -47,6 +47,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
   const seriesCache = createSeriesCache(db);
   // The pool's threads store runs into the same file; an in-memory database can only be written from here.
   const dbFile = db.$client.memory ? null : db.$client.name;
+  const writeTurn = createWriteTurn();
 
   /**
    * A run that finished or failed on its own goes into the audit trail and, when done, out as notices. A sweep's
@@ -131,19 +132,20 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
     running.set(runId, controller);
     const timer = setTimeout(() => controller.abort(new Error(`The run took longer than ${Math.round(timeoutMs / 1000)} s and was stopped.`)), timeoutMs);
     try {
-      const series: ClimateSeries | undefined = run.climateFileId === null ? undefined : seriesCache.get(run.climateFileId);
-      if (!series) throw new Error('The climate file of this run was deleted before the run started.');
+      const cached = run.climateFileId === null ? undefined : seriesCache.get(run.climateFileId);
+      if (!cached) throw new Error('The climate file of this run was deleted before the run started.');
       const climate = JSON.parse(run.climateJson) as RunSnapshotClimate;
       const input = {
         scenario: JSON.parse(run.scenarioJson),
-        series,
+        series: cached.series,
+        seriesKey: cached.key,
         options: { elevationM: climate.elevationM, utcOffsetMinutes: climate.utcOffsetMinutes },
       };
       // A run is one pool task: it is marked running as a thread starts it, and its progress stays 0 until done. The
       // thread marks and stores it over its own connection to the file, so the main thread writes nothing per run (a
       // sweep's points would otherwise wait behind its writes and for SQLite's write lock) and never sees the hours.
       const stored = dbFile
-        ? (await pool.run('executeAndStoreRun', { ...input, store: { dbFile, runId } }, { signal: controller.signal })).stored
+        ? (await pool.run('executeAndStoreRun', { ...input, store: { dbFile, runId, writeTurn } }, { signal: controller.signal })).stored
         : markRunStarted(db, runId) && storeRunOutput(db, runId, await pool.run('executeRun', input, { signal: controller.signal }));
       if (stored) settle(runId, 'done');
     } catch (error) {

@@ -1,8 +1,39 @@
+import { deflateSync, inflateSync } from 'node:zlib';
 import { and, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { runHours, runs } from '../db/schema';
-import { blob } from '../climate/store';
+import { decodeFloat64Column, decodeUint8Column, encodeColumn } from '../../shared/climate';
 import type { ExecuteRunOutput } from '../../workers/execute-run';
+
+/**
+ * One hourly column of a run as stored: the column codec's blob (shared/climate/column-codec.ts), deflated (zlib,
+ * level 1). A run's columns repeat long stretches (a mode holds for hours; the compressors' share is 0 in every hour
+ * that is not mechanical), so a 10-year run's 875 kB of columns store in about 120–190 kB, for a few milliseconds of
+ * its own thread's time: a sweep's points then hold SQLite's write lock, and fill the WAL that its checkpoints copy
+ * and sync, for a fifth of the bytes. Runs stored before hold the plain blob, as does a column that deflating would not
+ * shrink; `unpackRunColumn` tells the two apart.
+ */
+function packRunColumn(column: Float64Array | Uint8Array): Buffer {
+  const plain = encodeColumn(column);
+  const packed = deflateSync(plain, { level: 1 });
+  // never more than the plain blob, so the storage quota's estimate of a queued run (server/storage/quota.ts) holds
+  return packed.byteLength < plain.byteLength ? packed : Buffer.from(plain.buffer, plain.byteOffset, plain.byteLength);
+}
+
+/** The codec blob of a stored column: inflated when it starts with a zlib header (0x78), as it is when plain ("TMC1"). */
+function unpackRunColumn(stored: Uint8Array): Uint8Array {
+  return stored[0] === 0x78 ? inflateSync(stored) : stored;
+}
+
+/** A finished run's hourly columns, decoded from its run_hours row (either storage form). */
+export function decodeRunHours(stored: typeof runHours.$inferSelect): { modes: Uint8Array; mechanicalFraction: Float64Array; humidified: Uint8Array | null } {
+  return {
+    modes: decodeUint8Column(unpackRunColumn(stored.modes)),
+    mechanicalFraction: decodeFloat64Column(unpackRunColumn(stored.mechanicalFraction)),
+    // null for runs made before engine 2.0.0
+    humidified: stored.humidified ? decodeUint8Column(unpackRunColumn(stored.humidified)) : null,
+  };
+}
 
 /**
  * Marks a queued run `running` as a thread starts computing it; false when it is no longer queued (cancelled
@@ -32,7 +63,12 @@ export function storeRunOutput(db: Db, runId: number, out: ExecuteRunOutput): bo
       const current = tx.select({ status: runs.status }).from(runs).where(eq(runs.id, runId)).get();
       if (current?.status !== 'running') return false;
       tx.insert(runHours)
-        .values({ runId, modes: blob(out.modes), mechanicalFraction: blob(out.mechanicalFraction), humidified: blob(out.humidified) })
+        .values({
+          runId,
+          modes: packRunColumn(out.modes),
+          mechanicalFraction: packRunColumn(out.mechanicalFraction),
+          humidified: packRunColumn(out.humidified),
+        })
         .run();
       tx.update(runs)
         .set({ status: 'done', progress: 1, resultsJson: JSON.stringify(out.results), finishedAt: new Date() })

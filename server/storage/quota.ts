@@ -11,12 +11,14 @@ export { BYTES_PER_MB };
 const COLUMN_HEADER_BYTES = 16;
 
 /**
- * Bytes a finished run stores per hour: its mode (1 byte), the compressors' share (8) and the humidified flag (1),
- * column-wise (run_hours). A queued run is counted at this figure for its climate file's hours until it is done.
+ * Bytes a finished run stores per hour at most: its mode (1 byte), the compressors' share (8) and the humidified flag
+ * (1), column-wise (run_hours). Each column is stored deflated where that is smaller (server/runs/run-rows.ts), so a
+ * run stores less, usually a fifth of it. A queued run is counted at this upper figure for its climate file's hours
+ * until it is done, and at what it stored after.
  */
 export const RUN_BYTES_PER_HOUR = 1 + 8 + 1;
 
-/** Bytes a run on a file of `hours` hours will store. */
+/** Bytes a run on a file of `hours` hours will store at most. */
 export function runBytes(hours: number): number {
   return hours * RUN_BYTES_PER_HOUR + 3 * COLUMN_HEADER_BYTES;
 }

@@ -2,7 +2,7 @@
  * One scenario over one hourly climate series: outdoor states, classification, energy, results.
  * Pure and synchronous, so the worker task, the command line and the tests call the same function.
  */
-import { outdoorStates, standardPressurePa, type BulkState, type HumidityKind } from '../psychrometrics';
+import { outdoorStates, standardPressurePa, type BulkState, type HumidityKind, type OutdoorStates } from '../psychrometrics';
 import { classifyHours, moistureTargets, type ClassifierPlant, type HourClassification, type InletLimits } from './classify';
 import { compressorModelFor, hourlyEnergy, type HourlyEnergy } from './energy';
 import { deratedDryBulbMaxC } from './envelopes';
@@ -28,6 +28,12 @@ export interface RunOptions {
   elevationM?: number;
   /** Offset of the site's local standard time from UTC, for months and hours of day; default 0. */
   utcOffsetMinutes?: number;
+  /**
+   * The outdoor states of this very series at this elevation (outdoorStates), when the caller already holds them: a
+   * sweep's points share one file and one site, so a pool thread computes them once for all its points
+   * (workers/execute-run.ts). Computed here when absent. Read only, never written.
+   */
+  outdoor?: OutdoorStates;
 }
 
 export interface ScenarioResults extends AggregatedResults {
@@ -83,7 +89,7 @@ export interface ScenarioRun {
   loops?: { liquid: { classification: HourClassification; energy: HourlyEnergy }; air: { classification: HourClassification; energy: HourlyEnergy } };
 }
 
-type Outdoor = ReturnType<typeof outdoorStates>;
+type Outdoor = OutdoorStates;
 
 /** Run options once the site's elevation is known (from the options or the scenario). */
 type SiteRunOptions = RunOptions & { elevationM: number };
@@ -95,7 +101,8 @@ export function runScenario(scenario: Scenario, series: ScenarioSeries, options:
   const elevationM = options.elevationM ?? scenario.elevationM;
   if (elevationM === undefined)
     throw new RangeError("elevationM: give the site's elevation (RunOptions.elevationM, or elevationM in a scenario run without a site)");
-  const outdoor = outdoorStates(series, elevationM);
+  const outdoor = options.outdoor ?? outdoorStates(series, elevationM);
+  if (outdoor.states.humidityRatio.length !== n) throw new RangeError(`options.outdoor has ${outdoor.states.humidityRatio.length} hours, the series has ${n}`);
   const atSite: SiteRunOptions = { ...options, elevationM };
   if (isHybrid(scenario)) return runHybrid(scenario, series, atSite, outdoor);
   return runSingle(scenario as SingleScenario, series, atSite, outdoor);

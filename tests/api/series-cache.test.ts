@@ -21,8 +21,10 @@ afterAll(() => t.close());
 describe('the series the queued runs of one file read', () => {
   it('is decoded once and handed to the threads as shared memory, with the stored values', () => {
     const cache = createSeriesCache(t.db);
-    const first = cache.get(climateFileId)!;
-    expect(cache.get(climateFileId)).toBe(first);
+    const { series: first, key } = cache.get(climateFileId)!;
+    expect(cache.get(climateFileId)!.series).toBe(first);
+    const sha256 = t.db.select({ sha256: climateFiles.sha256 }).from(climateFiles).where(eq(climateFiles.id, climateFileId)).get()!.sha256;
+    expect(key).toBe(`${climateFileId}:${sha256}`);
     for (const column of [first.timestampsMs, first.dryBulbC, first.humidity.values, first.flags]) expect(column.buffer).toBeInstanceOf(SharedArrayBuffer);
     const stored = loadClimateSeries(t.db, climateFileId)!;
     expect(Array.from(first.dryBulbC)).toEqual(Array.from(stored.dryBulbC));
@@ -32,7 +34,7 @@ describe('the series the queued runs of one file read', () => {
 
   it('is read afresh when the content hash of the file changes, and is gone with the file', () => {
     const cache = createSeriesCache(t.db);
-    const before = cache.get(climateFileId)!;
+    const before = cache.get(climateFileId)!.series;
     const sha256 = t.db.select({ sha256: climateFiles.sha256 }).from(climateFiles).where(eq(climateFiles.id, climateFileId)).get()!.sha256;
     t.db
       .update(climateFiles)
@@ -40,7 +42,7 @@ describe('the series the queued runs of one file read', () => {
       .where(eq(climateFiles.id, climateFileId))
       .run();
     try {
-      expect(cache.get(climateFileId)).not.toBe(before);
+      expect(cache.get(climateFileId)!.series).not.toBe(before);
     } finally {
       t.db.update(climateFiles).set({ sha256 }).where(eq(climateFiles.id, climateFileId)).run();
     }
@@ -49,8 +51,8 @@ describe('the series the queued runs of one file read', () => {
 
   it('forgets what it holds when cleared', () => {
     const cache = createSeriesCache(t.db);
-    const before = cache.get(climateFileId);
+    const before = cache.get(climateFileId)!.series;
     cache.clear();
-    expect(cache.get(climateFileId)).not.toBe(before);
+    expect(cache.get(climateFileId)!.series).not.toBe(before);
   });
 });

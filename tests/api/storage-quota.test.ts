@@ -10,10 +10,20 @@ import { siteFileAndScenario, storedClimateRows, threeDaysCsv, type StudySetup }
 // Stored bytes, worked out here from the storage layout rather than read back from the code: every column blob is
 // a 16-byte header and its elements (8 bytes a float64, 1 a uint8); a climate file keeps its original bytes, its
 // time, dry-bulb, humidity (and pressure) columns and its flags; a finished run keeps modes (uint8), the
-// compressors' share (float64) and the humidified flag (uint8).
+// compressors' share (float64) and the humidified flag (uint8) — at most: each of its columns is stored deflated
+// where that is smaller, so a finished run counts at its blobs' lengths, read back from SQLite below.
 const HEADER = 16;
 const threeDaysBytes = Buffer.byteLength(threeDaysCsv) + 72 * (4 * 8 + 1) + 5 * HEADER; // has a pressure column
-const runOnThreeDays = 72 * (1 + 8 + 1) + 3 * HEADER; // 768 bytes
+const runOnThreeDays = 72 * (1 + 8 + 1) + 3 * HEADER; // 768 bytes at most
+/** The stored length of the project's run columns, as SQLite reads it. */
+const storedRunBytes = () =>
+  Number(
+    t.db.$client
+      .prepare(
+        'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?',
+      )
+      .get(projectId)!.n,
+  );
 const ROOM = 100_000;
 
 let t: TestApp;
@@ -75,27 +85,43 @@ describe('a per-project limit on stored bytes', () => {
       .set(asPerson(engineer))
       .send({ scenarioIds: Array(10).fill(study.scenarioId), climateFileIds: [study.climateFileId] })
       .expect(202);
-    // Queued runs count at what they will store, so a second bulk request cannot slip past them.
-    const queued = await storage();
-    expect(queued.runBytes + queued.pendingRunBytes).toBe(10 * runOnThreeDays);
     await t.runQueue.idle();
-    expect(await storage()).toMatchObject({ runBytes: 10 * runOnThreeDays, pendingRunBytes: 0, usedBytes: threeDaysBytes + 10 * runOnThreeDays });
+    // Stored, they count at what they hold: deflated, less than the estimate.
+    const stored = storedRunBytes();
+    expect(stored).toBeGreaterThan(0);
+    expect(stored).toBeLessThan(10 * runOnThreeDays);
+    expect(await storage()).toMatchObject({ runBytes: stored, pendingRunBytes: 0, usedBytes: threeDaysBytes + stored });
+
+    // A queued run counts at the most it can store, so a second bulk request cannot slip past runs not yet done: a
+    // run row put back to queued here, without the queue, stays queued while it is read.
+    const done = t.db.select().from(runs).where(eq(runs.projectId, projectId)).get()!;
+    const { id: _id, ...copy } = done;
+    const queuedId = t.db
+      .insert(runs)
+      .values({ ...copy, status: 'queued', resultsJson: null, finishedAt: null })
+      .returning()
+      .get().id;
+    try {
+      expect(await storage()).toMatchObject({ runBytes: stored, pendingRunBytes: runOnThreeDays, usedBytes: threeDaysBytes + stored + runOnThreeDays });
+    } finally {
+      t.db.delete(runs).where(eq(runs.id, queuedId)).run();
+    }
   });
 
   it('refuses a sweep whose points do not fit', async () => {
     const res = await request(t.app)
       .post(`/api/projects/${projectId}/sweeps`)
       .set(asPerson(engineer))
-      .send({ scenarioId: study.scenarioId, climateFileId: study.climateFileId, axes: [{ input: 'system.supplyAirC', from: 14, to: 26, step: 0.1 }] })
+      .send({ scenarioId: study.scenarioId, climateFileId: study.climateFileId, axes: [{ input: 'system.supplyAirC', from: 14, to: 23.95, step: 0.05 }] })
       .expect(413);
-    // 14.0, 14.1 … 26.0 °C: 121 points
-    expect(res.body.error.details.neededBytes).toBe(121 * runOnThreeDays);
+    // 14.00, 14.05 … 23.95 °C: 200 points, each counted at most while queued
+    expect(res.body.error.details.neededBytes).toBe(200 * runOnThreeDays);
     expect(runCount()).toBe(10);
   });
 
   it('refuses an upload that would not fit, before or after reading it, and stores nothing', async () => {
     const before = storedClimateRows(t.db);
-    const used = threeDaysBytes + 10 * runOnThreeDays;
+    const used = threeDaysBytes + storedRunBytes();
     const room = threeDaysBytes + ROOM - used;
     const url = `/api/projects/${projectId}/sites/${study.siteId}/climate-files`;
     // Larger than the room left: refused on its size alone.

@@ -5,6 +5,7 @@ import { createApp } from '../../server/app';
 import { connectDatabase, openDatabase, type Db } from '../../server/db/client';
 import { recordAudit } from '../../server/auth/audit';
 import { auditEvents, runHours, runs } from '../../server/db/schema';
+import { decodeRunHours } from '../../server/runs/run-rows';
 import { createRunQueue } from '../../server/runs/queue';
 import type { WorkerPool } from '../../workers/pool';
 import { asPerson, personWithSession, projectWithMembers } from '../support/people';
@@ -52,8 +53,8 @@ describe("a sweep's points", () => {
     const { points, hours, mainConnectionChanges } = await sweepOn(t.db);
     expect(points.map((p) => p.status)).toEqual(['done', 'done', 'done', 'done', 'done']);
     expect(points.every((p) => p.startedAt !== null && p.finishedAt !== null && p.progress === 1)).toBe(true);
-    // 72 hours each (the three-day sample file), after the 16-byte column header
-    expect(hours.map((h) => h.modes.byteLength)).toEqual([88, 88, 88, 88, 88]);
+    // 72 hours each (the three-day sample file)
+    expect(hours.map((h) => decodeRunHours(h).modes.length)).toEqual([72, 72, 72, 72, 72]);
     // the audit trail's one sweep.done row; the queue used to make 3 writes per point here (running, hours, done)
     expect(mainConnectionChanges).toBe(1);
   });

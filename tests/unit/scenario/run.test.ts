@@ -3,7 +3,7 @@
  * derating, warnings, and the worker task wrapping it (called directly and on a real thread).
  */
 import { describe, expect, it } from 'vitest';
-import { ENGINE_VERSION, runScenario, type ScenarioSeries } from '../../../shared/scenario';
+import { ENGINE_VERSION, outdoorStates, runScenario, type ScenarioSeries } from '../../../shared/scenario';
 import { executeRun } from '../../../workers/execute-run';
 import { createWorkerPool } from '../../../workers/pool';
 import { makeScenario, psy } from './fixtures';
@@ -55,6 +55,14 @@ describe('runScenario', () => {
     expect(run.results.site.elevationM).toBe(3000);
   });
 
+  it('takes outdoor states the caller already holds, and refuses states of another length', () => {
+    const scenario = makeScenario('direct-air', { elevationM: 1500 });
+    const weather = series([10, 22, 31], [5, 14, 20]);
+    const outdoor = outdoorStates(weather, 1500);
+    expect(runScenario(scenario, weather, { outdoor }).results).toEqual(runScenario(scenario, weather).results);
+    expect(() => runScenario(scenario, weather, { outdoor: outdoorStates(series([10], [5]), 1500) })).toThrow(/options.outdoor has 1 hours, the series has 3/);
+  });
+
   it('refuses series whose columns differ in length', () => {
     const bad = { ...series([10, 11], [5, 5]), timestampsMs: Float64Array.of(0) };
     expect(() => runScenario(makeScenario('direct-air'), bad)).toThrow(/timestampsMs has 1 hours/);
@@ -70,6 +78,23 @@ describe('worker task executeRun', () => {
     const task = executeRun({ scenario, series: weather });
     expect(task.results).toEqual(direct.results);
     expect(Array.from(task.modes)).toEqual(Array.from(direct.classification.modes));
+  });
+
+  it('computes the outdoor states of a keyed series once per elevation, and afresh for another key or elevation', () => {
+    const warm = series([5, 15, 25, 35], [0, 8, 12, 18]);
+    const options = { elevationM: 300 };
+    const alone = (input: Parameters<typeof executeRun>[0]) => executeRun(input).results;
+    const cold = executeRun({ scenario, series: warm, seriesKey: 'file:1', options });
+    // The same key at another elevation, and a second point of the sweep, agree with runs computed from scratch.
+    expect(alone({ scenario, series: warm, seriesKey: 'file:1', options: { elevationM: 2500 } })).toEqual(
+      runScenario(scenario, warm, { elevationM: 2500 }).results,
+    );
+    const other = makeScenario('indirect-air', { system: { supplyAirC: 24 } });
+    expect(alone({ scenario: other, series: warm, seriesKey: 'file:1', options })).toEqual(runScenario(other, warm, options).results);
+    expect(cold.results).toEqual(runScenario(scenario, warm, options).results);
+    // Another file under a new key: its own states, not the last file's.
+    const dry = series([5, 15, 25, 35], [-10, -5, 0, 2]);
+    expect(alone({ scenario, series: dry, seriesKey: 'file:2', options })).toEqual(runScenario(scenario, dry, options).results);
   });
 
   it('rejects an invalid scenario, naming the field', () => {
