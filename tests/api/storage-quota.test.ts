@@ -16,14 +16,11 @@ const HEADER = 16;
 const threeDaysBytes = Buffer.byteLength(threeDaysCsv) + 72 * (4 * 8 + 1) + 5 * HEADER; // has a pressure column
 const runOnThreeDays = 72 * (1 + 8 + 1) + 3 * HEADER; // 768 bytes at most
 /** The stored length of the project's run columns, as SQLite reads it. */
-const storedRunBytes = () =>
-  Number(
-    t.db.$client
-      .prepare(
-        'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?',
-      )
-      .get(projectId)!.n,
-  );
+const storedRunBytes = () => {
+  const query =
+    'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?';
+  return Number((t.db.$client.prepare(query).get(projectId) as { n: number }).n);
+};
 const ROOM = 100_000;
 
 let t: TestApp;
