@@ -69,6 +69,25 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
       /never import src\/app/,
     ],
     ['the server importing the client', 'server/routes/boundary-fixture.ts', "import { toDisplay } from '../../src/lib/quantity';", /never import the client/],
+    ['a route importing another route', 'server/routes/boundary-fixture.ts', "import { siteRoutes } from './sites';", /No route imports another route/],
+    [
+      'a domain module importing a route',
+      'server/sites/boundary-fixture.ts',
+      "import { siteRoutes } from '../routes/sites';",
+      /Only server\/app.ts imports the routes/,
+    ],
+    [
+      'the demo importing a route',
+      'server/demo/boundary-fixture.ts',
+      "import { projectionRoutes } from '../routes/projections';",
+      /Only server\/app.ts imports the routes/,
+    ],
+    [
+      'the pool importing a route',
+      'workers/boundary-fixture.ts',
+      "import { runRoutes } from '../server/routes/runs';",
+      /Only server\/app.ts imports the routes/,
+    ],
   ])('refuses %s', slow, async (_case, file, code, message) => {
     const errors = await boundaryErrors(file, code);
     expect(errors).toHaveLength(1);
@@ -86,6 +105,12 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
       'src/app/boundary-fixture.tsx',
       "import { cancelRun } from '@/features/runs/api/cancel-run';\nimport { createSweep } from '@/features/sweeps/api/create-sweep';",
     ],
+    [
+      'the app wiring the routes, and a route calling domain modules',
+      'server/routes/boundary-fixture.ts',
+      "import { findSite } from '../sites/store';\nimport { validScenario } from '../scenarios/store';",
+    ],
+    ['app.ts importing a route', 'server/app.ts', "import { siteRoutes } from './routes/sites';"],
     ['the server and a test importing shared/', 'server/boundary-fixture.ts', "import { withoutControlCharacters } from '../shared/schemas/plain-text';"],
     [
       'a test importing anything',
