@@ -103,6 +103,18 @@ export default tseslint.config(
     },
   },
   {
+    // Routes parse, authorise, call and answer: queries live in the domain modules (DEVELOPERS.md, Layout).
+    files: ['server/routes/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [{ name: 'drizzle-orm', message: 'Routes do not query the database: put the query in the domain module (server/<domain>/) and call it.' }],
+        },
+      ],
+    },
+  },
+  {
     plugins: { 'import-x': importX },
     settings: {
       'import-x/resolver-next': [createTypeScriptImportResolver({ project: `${root}/tsconfig.json` })],

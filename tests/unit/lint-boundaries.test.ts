@@ -94,6 +94,20 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
     expect(errors[0]).toMatch(message);
   });
 
+  it('refuses a route querying the database itself', slow, async () => {
+    const [result] = await eslint.lintText("import { eq } from 'drizzle-orm';\nexport const _probe = eq;\n", {
+      filePath: `${root}/server/routes/boundary-fixture.ts`,
+    });
+    const messages = result.messages.filter((m) => m.ruleId === 'no-restricted-imports').map((m) => m.message);
+    expect(messages).toHaveLength(1);
+    expect(messages[0]).toMatch(/Routes do not query the database/);
+    // A domain module may.
+    const [domain] = await eslint.lintText("import { eq } from 'drizzle-orm';\nexport const _probe = eq;\n", {
+      filePath: `${root}/server/sites/boundary-fixture.ts`,
+    });
+    expect(domain.messages).toEqual([]);
+  });
+
   it.each([
     [
       'a feature importing its own modules, src/lib, src/components and shared/',
