@@ -10,7 +10,7 @@ import { HttpError } from '../http-error';
 import { climateFileBytes, requireStorage } from '../storage/quota';
 import { linkIssueList, packIssueList, saveIssueList } from './issue-lists';
 import { multipartBoundary, readMultipartFiles } from './multipart';
-import { loadEncodedSeries, saveClimateFile } from './store';
+import { saveClimateFile } from './store';
 import { tarArchive } from './tar-archive';
 
 /** Upload limits: 64 MB and 1.2 million lines (over 100 years of hours) unless the app is given others. */
@@ -158,18 +158,6 @@ export async function storeUpload(
     });
     return saved;
   });
-}
-
-/**
- * A stored file's hourly CSV or hours JSON, built on the pool's interactive lane from the undecoded columns (a
- * century of hours takes seconds, which on the main thread would stall every other request), stopped when
- * `signal` aborts.
- */
-export async function formatStoredSeries(db: Db, pool: WorkerPool, fileId: number, format: 'csv' | 'hours-json', signal: AbortSignal): Promise<Buffer> {
-  const encoded = loadEncodedSeries(db, fileId);
-  if (!encoded) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
-  const bytes = await pool.run('formatClimateSeries', { encoded, format }, { lane: 'interactive', signal });
-  return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 }
 
 /** The zone the importer reads local timestamps in, for the chosen time basis. */
