@@ -17,6 +17,14 @@ const features = readdirSync(new URL('./src/features', import.meta.url), { withF
   .map((entry) => entry.name);
 
 /**
+ * Everything in server/ but the routes and app.ts (which wires them), as paths: none of it may import a route. Read
+ * from the folder, so a new domain module is covered without editing this file.
+ */
+const serverOutsideRoutes = readdirSync(new URL('./server', import.meta.url), { withFileTypes: true })
+  .filter((entry) => entry.name !== 'routes' && entry.name !== 'app.ts')
+  .map((entry) => `./server/${entry.name}`);
+
+/**
  * The import boundaries DEVELOPERS.md states in prose ("Imports flow one way"). Paths are resolved
  * (the '@/…' alias included), so a relative path cannot slip past a rule.
  */
@@ -35,6 +43,16 @@ const boundaryZones = [
     target: ['./server', './workers'],
     from: './src',
     message: 'server/ and workers/ never import the client (src/) (DEVELOPERS.md, Layout).',
+  },
+  {
+    target: './server/routes',
+    from: './server/routes',
+    message: 'No route imports another route: move what both need into the domain module (server/<domain>/) and call it from each (DEVELOPERS.md, Layout).',
+  },
+  {
+    target: [...serverOutsideRoutes, './workers'],
+    from: './server/routes',
+    message: 'Only server/app.ts imports the routes; domain modules, the demo and the pool call no route (DEVELOPERS.md, Layout).',
   },
   ...features.map((feature) => ({
     target: `./src/features/${feature}`,
@@ -87,6 +105,18 @@ export default tseslint.config(
       // with React Compiler (vite.config.ts), so there is nothing to skip; the Rules-of-React checks stay on.
       'react-hooks/incompatible-library': 'off',
       'react-hooks/preserve-manual-memoization': 'off',
+    },
+  },
+  {
+    // Routes parse, authorise, call and answer: queries live in the domain modules (DEVELOPERS.md, Layout).
+    files: ['server/routes/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [{ name: 'drizzle-orm', message: 'Routes do not query the database: put the query in the domain module (server/<domain>/) and call it.' }],
+        },
+      ],
     },
   },
   {

@@ -39,7 +39,7 @@ export interface AppDeps {
   runQueue: RunQueue;
   /** Per-project limit on stored bytes (server/storage/quota.ts); 1 GB when absent. */
   storageLimitBytes?: number;
-  /** Climate-file upload limits; defaults in routes/climate-files.ts. */
+  /** Climate-file upload limits; defaults in climate/upload.ts. */
   uploadLimits?: { bytes: number; rows: number };
   /** Built client to serve; omitted in API-only tests. */
   clientDist?: string;

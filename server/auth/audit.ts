@@ -38,14 +38,14 @@ export function recordAudit(db: DbOrTx, entry: AuditEntry, now: Date = new Date(
     .run();
 }
 
+/** Who made a change, as a project route's request carries it: the signed-in person and the project of the address. */
+export interface Actor {
+  user?: { id: number };
+  projectId?: number;
+}
+
 /** The audit line for a change made by the caller of a project route: who, and in which project, come from the request. */
-export function recordRequestAudit(
-  db: DbOrTx,
-  req: { user?: { id: number }; projectId?: number },
-  action: string,
-  target: string,
-  detail?: Record<string, unknown>,
-): void {
+export function recordRequestAudit(db: DbOrTx, req: Actor, action: string, target: string, detail?: Record<string, unknown>): void {
   recordAudit(db, { actorId: req.user?.id ?? null, projectId: req.projectId ?? null, action, target, detail });
 }
 

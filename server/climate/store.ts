@@ -1,9 +1,12 @@
 import { createHash } from 'node:crypto';
-import { and, eq } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { decodeClimateSeries, encodeColumn, type ClimateSeries, type DecodeOptions, type EncodedClimateSeries, type ImportResult } from '../../shared/climate';
 import type { HumidityKind } from '../../shared/psychrometrics';
+import { recordRequestAudit, type Actor } from '../auth/audit';
 import type { Db, DbOrTx } from '../db/client';
-import { climateFiles, climateOriginals, climateSeries } from '../db/schema';
+import { climateFiles, climateOriginals, climateSeries, sites } from '../db/schema';
+import { HttpError } from '../http-error';
+import { listing } from './listing';
 
 /** An encoded column as a Buffer over the same bytes, as Drizzle's blob columns take it. */
 export function blob(column: Float64Array | Uint8Array): Buffer {
@@ -69,6 +72,41 @@ export function findClimateFile(db: Db, projectId: number, fileId: number) {
     .from(climateFiles)
     .where(and(eq(climateFiles.id, fileId), eq(climateFiles.projectId, projectId)))
     .get();
+}
+
+/** The climate file with this id in this project; 404 when there is none. */
+export function climateFileOr404(db: Db, projectId: number, fileId: number): typeof climateFiles.$inferSelect {
+  const file = findClimateFile(db, projectId, fileId);
+  if (!file) throw new HttpError(404, 'not_found', `Climate file ${fileId} was not found in this project.`);
+  return file;
+}
+
+/** A stored file's decoded series; 404 when none is stored. */
+export function seriesOr404(db: Db, fileId: number): ClimateSeries {
+  const series = loadClimateSeries(db, fileId);
+  if (!series) throw new HttpError(404, 'not_found', `Climate file ${fileId} has no stored series.`);
+  return series;
+}
+
+/** A project's climate files as lists show them, newest first, each with its site's name and elevation. */
+export function listClimateFiles(db: Db, projectId: number) {
+  const rows = db
+    .select({ file: climateFiles, siteName: sites.name, siteElevationM: sites.elevationM })
+    .from(climateFiles)
+    .innerJoin(sites, eq(sites.id, climateFiles.siteId))
+    .where(eq(climateFiles.projectId, projectId))
+    .orderBy(desc(climateFiles.createdAt))
+    .all();
+  // The site's elevation rides along: forms check a setpoint against the envelope derated for it.
+  return rows.map(({ file, siteName, siteElevationM }) => ({ ...listing(file, siteName), siteElevationM }));
+}
+
+/** Deletes a file found with `climateFileOr404` (its series and original go with it) and writes the audit line. */
+export function deleteClimateFile(db: Db, file: typeof climateFiles.$inferSelect, by: Actor): void {
+  db.transaction((tx) => {
+    tx.delete(climateFiles).where(eq(climateFiles.id, file.id)).run();
+    recordRequestAudit(tx, by, 'climate.delete', file.name, { climateFileId: file.id });
+  });
 }
 
 /** The column blobs of a stored file's series, undecoded (a worker decodes them); undefined when none is stored. */

@@ -1,6 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import Database from 'better-sqlite3';
+import { sql } from 'drizzle-orm';
 import { drizzle, type BetterSQLite3Database } from 'drizzle-orm/better-sqlite3';
 import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
 import { migrationsFolder } from '../paths';
@@ -35,6 +36,13 @@ export function openDatabase(file: string): Db {
   const db = connectDatabase(file, { fileMustExist: false });
   migrate(db, { migrationsFolder });
   return db;
+}
+
+/** How long the database takes to answer a trivial query, in milliseconds (the health check's probe); throws if it cannot. */
+export function databaseLatencyMs(db: Db): number {
+  const started = performance.now();
+  db.get(sql`select 1`);
+  return performance.now() - started;
 }
 
 /** A transaction handle; code that must work inside or outside one takes `DbOrTx`. */

@@ -5,7 +5,7 @@ import { morphClimate } from '../../workers/morph-climate';
 import { loadClimateSeries } from '../climate/store';
 import type { Db } from '../db/client';
 import { climateFiles, sites } from '../db/schema';
-import { storeProjection } from '../routes/projections';
+import { storeProjection } from '../projections/store';
 
 /**
  * SYNTHETIC change factors for the demo only, not taken from any climate projection: a warmer decade with

@@ -7,6 +7,7 @@ import { loadClimateSeries } from '../climate/store';
 import type { Db } from '../db/client';
 import { runHours, type runs } from '../db/schema';
 import { HttpError } from '../http-error';
+import type { HourColumnName } from '../../shared/report/hour-columns';
 
 /** What a finished run's hourly views need: its climate series, its stored per-hour outcome and its snapshot. */
 export interface StoredRunHours {
@@ -75,6 +76,34 @@ export async function hourlyFileOf(
       about,
     },
     { lane: 'interactive', signal },
+  );
+  return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+}
+
+/**
+ * The run page's hourly views: the chosen typed columns of a finished run in one binary message
+ * (shared/report/hour-columns.ts), gzipped when asked, with the dry-bulb bins of `binWidthK` from `binOriginC` when
+ * given, made on the pool's interactive lane and stopped when `signal` aborts.
+ */
+export async function hourColumnsOf(
+  db: Db,
+  pool: WorkerPool,
+  run: typeof runs.$inferSelect,
+  options: { columns: HourColumnName[]; gzip: boolean; binWidthK?: number; binOriginC?: number },
+  signal: AbortSignal,
+): Promise<Buffer> {
+  const { series, modes, mechanicalFraction, humidified, climate } = storedRunHours(db, run);
+  const bytes = await pool.run(
+    'hourColumns',
+    { series, elevationM: climate.elevationM, modes, mechanicalFraction, humidified, ...options },
+    {
+      lane: 'interactive',
+      signal,
+      // freshly decoded copies, each on its own buffer: moved to the thread, not copied
+      transferList: [series.timestampsMs, series.dryBulbC, series.humidity.values, series.pressurePa, series.flags, modes, mechanicalFraction, humidified]
+        .filter((a) => a !== null)
+        .map((a) => a.buffer as ArrayBuffer),
+    },
   );
   return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 }

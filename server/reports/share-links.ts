@@ -2,10 +2,13 @@ import { and, desc, eq } from 'drizzle-orm';
 import type { Request } from 'express';
 import { z } from 'zod';
 import { withoutControlCharacters } from '../../shared/schemas/plain-text';
+import type { ReportData } from '../../shared/report';
+import { recordRequestAudit, type Actor } from '../auth/audit';
 import { hashToken, randomToken } from '../auth/session';
 import type { Db } from '../db/client';
 import { memberships, shareLinks, shareTargets, users } from '../db/schema';
 import { HttpError } from '../http-error';
+import { comparisonReport, runReport } from './load-report';
 
 const day = 86_400_000;
 /** The longest a link may stay open to anyone. */
@@ -123,4 +126,68 @@ export function resolveShareToken(db: Db, req: Request, token: string, now: Date
   if (!member)
     throw new HttpError(403, 'forbidden', `${ended}${ended ? 'only' : 'Only'} members of the project can open this report; ask its owner to add you.`);
   return link;
+}
+
+/**
+ * Creates a share link of finished runs of the project: the runs are checked now (through the report they make)
+ * rather than when a reader opens it, and the public end date must lie ahead. The token is given this once; only its
+ * SHA-256 is kept.
+ */
+export function createShareLink(
+  db: Db,
+  projectId: number,
+  input: z.infer<typeof createShareInput>,
+  by: Actor & { user: { id: number; name: string } },
+  at: Date,
+) {
+  const publicUntil = checkPublicUntil(input.publicUntil, at);
+  if (input.target === 'run') runReport(db, projectId, input.runIds[0], at);
+  else comparisonReport(db, projectId, input.runIds, input.runIds[0], at);
+  const { token, tokenHash } = newShareToken();
+  const link = db.transaction((tx) => {
+    const row = tx
+      .insert(shareLinks)
+      .values({
+        projectId,
+        tokenHash,
+        target: input.target,
+        runIdsJson: JSON.stringify(input.runIds),
+        title: input.title,
+        publicUntil,
+        createdBy: by.user.id,
+        createdAt: at,
+      })
+      .returning()
+      .get();
+    recordRequestAudit(tx, by, 'share.create', input.title, {
+      linkId: row.id,
+      target: input.target,
+      runIds: input.runIds,
+      publicUntil: publicUntil?.toISOString() ?? null,
+    });
+    return row;
+  });
+  return { link: presentLink(link, by.user.name, at), token };
+}
+
+/** Revokes one of the project's links (404 when it is not in the project); revoking a revoked link changes nothing. */
+export function revokeShareLink(db: Db, projectId: number, linkId: number, by: Actor, at: Date) {
+  const link = db
+    .select()
+    .from(shareLinks)
+    .where(and(eq(shareLinks.id, linkId), eq(shareLinks.projectId, projectId)))
+    .get();
+  if (!link) throw new HttpError(404, 'not_found', `Share link ${linkId} was not found in this project.`);
+  const revoked = db.transaction((tx) => {
+    const row = link.revokedAt ? link : tx.update(shareLinks).set({ revokedAt: at }).where(eq(shareLinks.id, linkId)).returning().get();
+    if (!link.revokedAt) recordRequestAudit(tx, by, 'share.revoke', link.title, { linkId, target: link.target, runIds: JSON.parse(link.runIdsJson) });
+    return row;
+  });
+  return presentLink(revoked, null, at);
+}
+
+/** The report a share link shows, built afresh from the runs it names. */
+export function linkedReport(db: Db, link: typeof shareLinks.$inferSelect, now: Date): ReportData {
+  const runIds = JSON.parse(link.runIdsJson) as number[];
+  return link.target === 'run' ? runReport(db, link.projectId, runIds[0], now) : comparisonReport(db, link.projectId, runIds, runIds[0], now);
 }

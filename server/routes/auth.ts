@@ -1,29 +1,17 @@
 import type { Request, Response } from 'express';
-import { eq, lt } from 'drizzle-orm';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
 import { recordAudit } from '../auth/audit';
 import { EmailTaken, personForIdentity } from '../auth/people';
 import { safeReturnTo } from '../auth/return-to';
+import { attemptLifetimeMs, dropSession, saveSignInAttempt, takeSignInAttempt } from '../auth/sign-in-attempts';
 import { perAddressLimit } from '../middleware/rate-limit';
-import {
-  cookieOptions,
-  defaultSessionPolicy,
-  endAllSessions,
-  endSession,
-  hashToken,
-  purgeExpiredSessions,
-  readCookie,
-  startSession,
-  systemClock,
-} from '../auth/session';
-import { sessions, signInAttempts } from '../db/schema';
+import { cookieOptions, defaultSessionPolicy, endAllSessions, endSession, purgeExpiredSessions, readCookie, startSession, systemClock } from '../auth/session';
 import { HttpError } from '../http-error';
 
 const stateCookieName = 'tramontane_sign_in';
 /** The state cookie only travels to the sign-in routes. */
 const stateCookiePath = '/api/auth';
-const attemptLifetimeMs = 10 * 60_000;
 
 export function authRoutes(deps: AppDeps): RouteSpec[] {
   const { db } = deps;
@@ -56,17 +44,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
         (deps.logError ?? console.error)(problem);
         throw new HttpError(503, 'provider_unavailable', 'The sign-in provider cannot be reached or is misconfigured; the server log says which.');
       }
-      db.delete(signInAttempts).where(lt(signInAttempts.expiresAt, now)).run();
-      db.insert(signInAttempts)
-        .values({
-          stateHash: hashToken(start.state),
-          codeVerifier: start.codeVerifier,
-          nonce: start.nonce,
-          returnTo,
-          createdAt: now,
-          expiresAt: new Date(now.getTime() + attemptLifetimeMs),
-        })
-        .run();
+      saveSignInAttempt(db, start, returnTo, now);
       // The state rides in a cookie too, so a callback only completes in the browser that started it.
       res.cookie(stateCookieName, start.state, { ...cookieOptions(req, attemptLifetimeMs), path: stateCookiePath });
       res.redirect(302, start.url.toString());
@@ -80,12 +58,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
       if (!cookieState) return fail(req, res, 'no_sign_in_started');
       if (cookieState !== state) return fail(req, res, 'state_mismatch');
       const now = clock();
-      // Taking the attempt out of the table makes the state, and so this callback, single-use.
-      const attempt = db
-        .delete(signInAttempts)
-        .where(eq(signInAttempts.stateHash, hashToken(state)))
-        .returning()
-        .get();
+      const attempt = takeSignInAttempt(db, state);
       if (!attempt || !attempt.codeVerifier) return fail(req, res, 'missing_verifier');
       if (attempt.expiresAt < now) return fail(req, res, 'sign_in_expired');
       let identity;
@@ -103,8 +76,7 @@ export function authRoutes(deps: AppDeps): RouteSpec[] {
         throw problem;
       }
       purgeExpiredSessions(db, policy, now);
-      // A sign-in always gets a fresh token; a session the browser already had ends here.
-      if (req.sessionTokenHash) db.delete(sessions).where(eq(sessions.tokenHash, req.sessionTokenHash)).run();
+      if (req.sessionTokenHash) dropSession(db, req.sessionTokenHash);
       startSession(db, req, res, person.id, policy, now);
       res.clearCookie(stateCookieName, { ...cookieOptions(req), path: stateCookiePath });
       res.redirect(303, attempt.returnTo);

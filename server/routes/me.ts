@@ -1,8 +1,8 @@
-import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
-import { memberships, projects, unitSystems, users } from '../db/schema';
+import { unitSystems } from '../db/schema';
+import { personWithProjects, updateSettings } from '../members/store';
 
 const settingsPatch = z
   .object({
@@ -13,37 +13,13 @@ const settingsPatch = z
   .strict();
 
 export function meRoutes({ db }: AppDeps): RouteSpec[] {
-  const me = (userId: number) => {
-    const row = db
-      .select({
-        id: users.id,
-        email: users.email,
-        name: users.name,
-        isAdmin: users.isAdmin,
-        unitSystem: users.unitSystem,
-        runNotices: users.runNotices,
-      })
-      .from(users)
-      .where(eq(users.id, userId))
-      .get()!;
-    const { unitSystem, runNotices, ...user } = row;
-    const projectRows = db
-      .select({ id: projects.id, name: projects.name, role: memberships.role })
-      .from(memberships)
-      .innerJoin(projects, eq(projects.id, memberships.projectId))
-      .where(eq(memberships.userId, userId))
-      .all();
-    return { user, settings: { unitSystem, runNotices }, projects: projectRows };
-  };
-
   return [
     route('get', '/me', access.signedIn, (req, res) => {
-      res.json(me(req.user!.id));
+      res.json(personWithProjects(db, req.user!.id));
     }),
     route('patch', '/me', access.signedIn, (req, res) => {
-      const patch = settingsPatch.parse(req.body ?? {});
-      if (Object.keys(patch).length > 0) db.update(users).set(patch).where(eq(users.id, req.user!.id)).run();
-      res.json(me(req.user!.id));
+      updateSettings(db, req.user!.id, settingsPatch.parse(req.body ?? {}));
+      res.json(personWithProjects(db, req.user!.id));
     }),
   ];
 }

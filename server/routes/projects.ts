@@ -1,11 +1,9 @@
-import { and, asc, eq } from 'drizzle-orm';
 import { z } from 'zod';
 import { withoutControlCharacters } from '../../shared/schemas/plain-text';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
-import { recordRequestAudit } from '../auth/audit';
-import { memberships, projects } from '../db/schema';
 import { parsePatch } from '../patch-body';
+import { createProject, deleteProject, projectsOf, updateProject } from '../projects/store';
 import { storageLimitOf, storageUse } from '../storage/quota';
 
 const projectInput = z.object({
@@ -34,24 +32,11 @@ export function projectRoutes(deps: AppDeps): RouteSpec[] {
         res.json({ projects: [], signedIn: false });
         return;
       }
-      const rows = db
-        .select({ id: projects.id, name: projects.name, description: projects.description, role: memberships.role })
-        .from(projects)
-        .leftJoin(memberships, and(eq(memberships.projectId, projects.id), eq(memberships.userId, user.id)))
-        .orderBy(asc(projects.name))
-        .all()
-        .filter((row) => row.role !== null || user.isAdmin)
-        .map((row) => ({ ...row, role: row.role ?? ('owner' as const) }));
-      res.json({ projects: rows });
+      res.json({ projects: projectsOf(db, user) });
     }),
     route('post', '/projects', access.signedIn, (req, res) => {
       const input = projectInput.parse(req.body);
-      const project = db.transaction((tx) => {
-        const row = tx.insert(projects).values(input).returning().get();
-        tx.insert(memberships).values({ projectId: row.id, userId: req.user!.id, role: 'owner' }).run();
-        recordRequestAudit(tx, { user: req.user, projectId: row.id }, 'project.create', row.name, { projectId: row.id });
-        return row;
-      });
+      const project = createProject(db, input, { user: req.user! });
       res.status(201).json({ project: { ...project, role: 'owner' } });
     }),
     // What the project stores against its limit, shown on the project page.
@@ -60,19 +45,10 @@ export function projectRoutes(deps: AppDeps): RouteSpec[] {
     }),
     route('patch', '/projects/:projectId', access.owner, (req, res) => {
       const input = parsePatch(projectInput, req.body);
-      const project = db.transaction((tx) => {
-        const row = tx.update(projects).set(input).where(eq(projects.id, req.projectId!)).returning().get();
-        recordRequestAudit(tx, req, 'project.update', row.name, { changed: Object.keys(input) });
-        return row;
-      });
-      res.json({ project });
+      res.json({ project: updateProject(db, req.projectId!, input, req) });
     }),
     route('delete', '/projects/:projectId', access.owner, (req, res) => {
-      db.transaction((tx) => {
-        const row = tx.delete(projects).where(eq(projects.id, req.projectId!)).returning({ name: projects.name }).get();
-        // The line outlives the project: it names it, and carries no project id that would dangle.
-        recordRequestAudit(tx, { user: req.user }, 'project.delete', row?.name ?? `project ${req.projectId}`, { projectId: req.projectId });
-      });
+      deleteProject(db, req.projectId!, req);
       res.status(204).end();
     }),
   ];

@@ -1,27 +1,14 @@
-import type { Response } from 'express';
-import { and, eq } from 'drizzle-orm';
+import type { Request, Response } from 'express';
 import { z } from 'zod';
-import {
-  comparisonCsv,
-  comparisonRows,
-  runSummaryRows,
-  summaryCsv,
-  summaryRowsIn,
-  type ReportData,
-  type ReportRun,
-  type SummaryUnits,
-} from '../../shared/report';
+import type { ReportData, SummaryUnits } from '../../shared/report';
 import type { AppDeps } from '../app';
 import { access, route, type RouteSpec } from '../auth/access';
-import { recordRequestAudit } from '../auth/audit';
 import { systemClock } from '../auth/session';
-import { runs, shareLinks } from '../db/schema';
-import { HttpError } from '../http-error';
 import { perAddressLimit } from '../middleware/rate-limit';
-import { hourlyFileOf } from '../reports/hourly-results';
-import { closedRequestSignal } from '../request-signal';
+import { reportDownload, type ReportFile } from '../reports/downloads';
 import { comparisonQuery, comparisonReport, runReport } from '../reports/load-report';
-import { checkPublicUntil, createShareInput, listLinks, newShareToken, presentLink, resolveShareToken } from '../reports/share-links';
+import { createShareInput, createShareLink, linkedReport, listLinks, resolveShareToken, revokeShareLink } from '../reports/share-links';
+import { closedRequestSignal } from '../request-signal';
 
 const runParams = z.object({ runId: z.coerce.number().int().positive('runId must be a positive whole number') });
 const linkParams = z.object({ linkId: z.coerce.number().int().positive('linkId must be a positive whole number') });
@@ -38,87 +25,6 @@ const unitsQuery = z.object({
     .transform((u): SummaryUnits => (u?.toUpperCase() === 'IP' ? 'IP' : 'SI')),
 });
 
-/** Lower-case ASCII words joined by hyphens, for file names that survive every system. */
-export function fileSlug(text: string): string {
-  const slug = text
-    .normalize('NFKD')
-    .replace(/[\u0300-\u036f]/g, '')
-    .replace(/ß/g, 'ss')
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-+|-+$/g, '')
-    .slice(0, 60)
-    .replace(/-+$/, '');
-  return slug || 'report';
-}
-
-const runFileName = (run: ReportRun, what: string, ext: string) => `run-${run.id}-${fileSlug(run.scenario.name)}-${what}.${ext}`;
-
-/** Answers one download of a report: the hourly results of one of its runs (made on the pool), or its summary. */
-async function sendDownload(
-  { db, pool }: Pick<AppDeps, 'db' | 'pool'>,
-  res: Response,
-  projectId: number,
-  report: ReportData,
-  file: z.infer<typeof runFile>,
-  query: unknown,
-  runId?: number,
-): Promise<void> {
-  const { units } = unitsQuery.parse(query);
-  const suffix = units === 'IP' ? '-ip' : '';
-  const reportRuns = report.kind === 'run' ? [report.run] : report.runs;
-  if (file === 'hourly.csv' || file === 'hourly.json') {
-    const run = reportRuns.find((r) => r.id === (runId ?? reportRuns[0].id));
-    if (!run) throw new HttpError(404, 'not_found', `Run ${runId} is not part of this report.`);
-    const row = db
-      .select()
-      .from(runs)
-      .where(and(eq(runs.id, run.id), eq(runs.projectId, projectId)))
-      .get();
-    if (!row) throw new HttpError(404, 'not_found', `Run ${run.id} was not found in this project.`);
-    if (file === 'hourly.json') {
-      const about = { id: run.id, scenario: run.scenario.name, site: run.site.name, climateFile: run.climate.name };
-      const bytes = await hourlyFileOf(db, pool, row, 'json', about, closedRequestSignal(res));
-      res
-        .attachment(runFileName(run, 'hourly', 'json'))
-        .type('application/json')
-        .send(bytes);
-      return;
-    }
-    const bytes = await hourlyFileOf(db, pool, row, 'csv', undefined, closedRequestSignal(res));
-    res
-      .attachment(runFileName(run, 'hourly', 'csv'))
-      .type('text/csv; charset=utf-8')
-      .send(bytes);
-    return;
-  }
-  if (report.kind === 'run') {
-    const run = report.run;
-    const rows = summaryRowsIn(runSummaryRows(run), units);
-    if (file === 'summary.csv') {
-      res
-        .attachment(runFileName(run, `summary${suffix}`, 'csv'))
-        .type('text/csv; charset=utf-8')
-        .send(summaryCsv(rows));
-    } else {
-      res.attachment(runFileName(run, `summary${suffix}`, 'json')).type('application/json');
-      // The report data itself stays in SI, as the engine computed it; the rows are in the units asked for.
-      res.send(JSON.stringify({ report, units, summary: rows }, null, 1));
-    }
-    return;
-  }
-  const name = `comparison-${report.runs.map((r) => r.id).join('-')}-summary${suffix}`;
-  if (file === 'summary.csv') {
-    res
-      .attachment(`${name}.csv`)
-      .type('text/csv; charset=utf-8')
-      .send(comparisonCsv(report.runs, report.baselineId, units));
-  } else {
-    res.attachment(`${name}.json`).type('application/json');
-    res.send(JSON.stringify({ report, units, table: comparisonRows(report.runs, report.baselineId, units) }, null, 1));
-  }
-}
-
 /** Report data, hourly and summary downloads, and read-only share links. */
 export function reportRoutes(deps: AppDeps): RouteSpec[] {
   const { db } = deps;
@@ -129,10 +35,11 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
     'Too many report-link requests from this address; wait a minute and try again.',
   );
 
-  /** The report a share link shows, built afresh from the runs it names. */
-  function linkedReport(link: typeof shareLinks.$inferSelect): ReportData {
-    const runIds = JSON.parse(link.runIdsJson) as number[];
-    return link.target === 'run' ? runReport(db, link.projectId, runIds[0], now()) : comparisonReport(db, link.projectId, runIds, runIds[0], now());
+  /** Answers one download of a report in the units the query asks for. */
+  async function sendDownload(req: Request, res: Response, projectId: number, report: ReportData, file: ReportFile, runId?: number) {
+    const { units } = unitsQuery.parse(req.query);
+    const download = await reportDownload(deps, projectId, report, file, units, closedRequestSignal(res), runId);
+    res.attachment(download.fileName).type(download.type).send(download.body);
   }
 
   return [
@@ -149,13 +56,13 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
     route('get', '/projects/:projectId/runs/:runId/downloads/:file', access.viewer, async (req, res) => {
       const { runId } = runParams.parse(req.params);
       const file = runFile.parse(req.params.file);
-      await sendDownload(deps, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file, req.query);
+      await sendDownload(req, res, req.projectId!, runReport(db, req.projectId!, runId, now()), file);
     }),
 
     route('get', '/projects/:projectId/compare/downloads/:file', access.viewer, async (req, res) => {
       const file = comparisonFile.parse(req.params.file);
       const { runIds, baselineId } = comparisonQuery.parse(req.query);
-      await sendDownload(deps, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file, req.query);
+      await sendDownload(req, res, req.projectId!, comparisonReport(db, req.projectId!, runIds, baselineId, now()), file);
     }),
 
     route('get', '/projects/:projectId/share-links', access.owner, (req, res) => {
@@ -164,54 +71,14 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
 
     route('post', '/projects/:projectId/share-links', access.owner, (req, res) => {
       const input = createShareInput.parse(req.body);
-      const at = now();
-      const publicUntil = checkPublicUntil(input.publicUntil, at);
-      // The runs must exist here and be finished; the report is checked now rather than when a reader opens it.
-      if (input.target === 'run') runReport(db, req.projectId!, input.runIds[0], at);
-      else comparisonReport(db, req.projectId!, input.runIds, input.runIds[0], at);
-      const { token, tokenHash } = newShareToken();
-      const link = db.transaction((tx) => {
-        const row = tx
-          .insert(shareLinks)
-          .values({
-            projectId: req.projectId!,
-            tokenHash,
-            target: input.target,
-            runIdsJson: JSON.stringify(input.runIds),
-            title: input.title,
-            publicUntil,
-            createdBy: req.user!.id,
-            createdAt: at,
-          })
-          .returning()
-          .get();
-        recordRequestAudit(tx, req, 'share.create', input.title, {
-          linkId: row.id,
-          target: input.target,
-          runIds: input.runIds,
-          publicUntil: publicUntil?.toISOString() ?? null,
-        });
-        return row;
-      });
+      const { link, token } = createShareLink(db, req.projectId!, input, { user: req.user!, projectId: req.projectId }, now());
       // The token is shown this once; only its SHA-256 is kept.
-      res.status(201).json({ link: presentLink(link, req.user!.name, at), token, path: `/shared/${token}` });
+      res.status(201).json({ link, token, path: `/shared/${token}` });
     }),
 
     route('post', '/projects/:projectId/share-links/:linkId/revoke', access.owner, (req, res) => {
       const { linkId } = linkParams.parse(req.params);
-      const link = db
-        .select()
-        .from(shareLinks)
-        .where(and(eq(shareLinks.id, linkId), eq(shareLinks.projectId, req.projectId!)))
-        .get();
-      if (!link) throw new HttpError(404, 'not_found', `Share link ${linkId} was not found in this project.`);
-      const at = now();
-      const revoked = db.transaction((tx) => {
-        const row = link.revokedAt ? link : tx.update(shareLinks).set({ revokedAt: at }).where(eq(shareLinks.id, linkId)).returning().get();
-        if (!link.revokedAt) recordRequestAudit(tx, req, 'share.revoke', link.title, { linkId, target: link.target, runIds: JSON.parse(link.runIdsJson) });
-        return row;
-      });
-      res.json({ link: presentLink(revoked, null, at) });
+      res.json({ link: revokeShareLink(db, req.projectId!, linkId, req, now()) });
     }),
 
     // Anyone may ask; resolveShareToken decides: public until its date, otherwise the project's members only.
@@ -219,7 +86,7 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
       const link = resolveShareToken(db, req, String(req.params.token), now());
       res.json({
         link: { title: link.title, target: link.target, publicUntil: link.publicUntil?.toISOString() ?? null },
-        report: linkedReport(link),
+        report: linkedReport(db, link, now()),
       });
     }),
 
@@ -227,7 +94,7 @@ export function reportRoutes(deps: AppDeps): RouteSpec[] {
       const link = resolveShareToken(db, req, String(req.params.token), now());
       const file = runFile.parse(req.params.file);
       const { run } = sharedRunQuery.parse(req.query);
-      await sendDownload(deps, res, link.projectId, linkedReport(link), file, req.query, run);
+      await sendDownload(req, res, link.projectId, linkedReport(db, link, now()), file, run);
     }),
   ];
 }

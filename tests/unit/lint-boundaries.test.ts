@@ -75,10 +75,43 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
       /every page is a route module in src\/app\/routes/,
     ],
     ['the server importing the client', 'server/routes/boundary-fixture.ts', "import { toDisplay } from '../../src/lib/quantity';", /never import the client/],
+    ['a route importing another route', 'server/routes/boundary-fixture.ts', "import { siteRoutes } from './sites';", /No route imports another route/],
+    [
+      'a domain module importing a route',
+      'server/sites/boundary-fixture.ts',
+      "import { siteRoutes } from '../routes/sites';",
+      /Only server\/app.ts imports the routes/,
+    ],
+    [
+      'the demo importing a route',
+      'server/demo/boundary-fixture.ts',
+      "import { projectionRoutes } from '../routes/projections';",
+      /Only server\/app.ts imports the routes/,
+    ],
+    [
+      'the pool importing a route',
+      'workers/boundary-fixture.ts',
+      "import { runRoutes } from '../server/routes/runs';",
+      /Only server\/app.ts imports the routes/,
+    ],
   ])('refuses %s', slow, async (_case, file, code, message) => {
     const errors = await boundaryErrors(file, code);
     expect(errors).toHaveLength(1);
     expect(errors[0]).toMatch(message);
+  });
+
+  it('refuses a route querying the database itself', slow, async () => {
+    const [result] = await eslint.lintText("import { eq } from 'drizzle-orm';\nexport const _probe = eq;\n", {
+      filePath: `${root}/server/routes/boundary-fixture.ts`,
+    });
+    const messages = result.messages.filter((m) => m.ruleId === 'no-restricted-imports').map((m) => m.message);
+    expect(messages).toHaveLength(1);
+    expect(messages[0]).toMatch(/Routes do not query the database/);
+    // A domain module may.
+    const [domain] = await eslint.lintText("import { eq } from 'drizzle-orm';\nexport const _probe = eq;\n", {
+      filePath: `${root}/server/sites/boundary-fixture.ts`,
+    });
+    expect(domain.messages).toEqual([]);
   });
 
   it.each([
@@ -97,6 +130,12 @@ describe('import boundaries (DEVELOPERS.md, Layout)', () => {
       'src/app/router.tsx',
       "import { RunRoute } from './routes/run';\nimport { AppShell } from './app-shell';",
     ],
+    [
+      'the app wiring the routes, and a route calling domain modules',
+      'server/routes/boundary-fixture.ts',
+      "import { findSite } from '../sites/store';\nimport { validScenario } from '../scenarios/store';",
+    ],
+    ['app.ts importing a route', 'server/app.ts', "import { siteRoutes } from './routes/sites';"],
     ['the server and a test importing shared/', 'server/boundary-fixture.ts', "import { withoutControlCharacters } from '../shared/schemas/plain-text';"],
     [
       'a test importing anything',

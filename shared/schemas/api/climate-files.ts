@@ -1,4 +1,4 @@
-/** Answers of the climate-file routes (server/routes/climate-files.ts, server/routes/projections.ts' listing). */
+/** Answers of the climate-file routes (server/routes/climate-files.ts, server/routes/projections.ts; a file as lists show it: server/climate/listing.ts). */
 import { z } from 'zod';
 import type { DetectedMapping, ImportReport } from '../../climate/types';
 import type { ClimateSummary } from '../../climate-summary';

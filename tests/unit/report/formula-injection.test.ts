@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { csvCell, csvRow } from '../../../shared/csv';
-import { fileSlug } from '../../../server/routes/reports';
+import { fileSlug } from '../../../server/reports/downloads';
 
 /**
  * OWASP "CSV Injection" guidance: a cell that starts with = + - @, a tab or a carriage return is run by
