@@ -7,6 +7,7 @@
 import { celsiusToFahrenheit } from './units';
 import type { LoopResults, ScenarioResults } from './scenario/run';
 import type { HeatReuseResults } from './scenario/heat-reuse';
+import type { YearMetric } from './scenario/year-statistics';
 import { modeSubsets, subsetHours, waterPartL, waterParts, type ModeSubsetKey, type WaterPartKey } from './report/mode-subsets';
 import { modeLabels } from './modes';
 
@@ -124,6 +125,15 @@ export const METRICS = {
 } as const satisfies Record<string, MetricDefinition>;
 
 export type MetricKey = keyof typeof METRICS;
+
+/** Which figure of the list each per-year quantity is (shared/scenario/year-statistics.ts): its label and unit come from there. */
+export const YEAR_METRIC_FIGURES: Record<YearMetric, MetricKey> = {
+  free: 'free',
+  adiabatic: 'adiabatic',
+  mechanical: 'mechanical',
+  coolingKwh: 'cooling',
+  waterL: 'waterTotal',
+};
 
 /** A figure's unit in the chosen units ("L" or "US gal"). */
 export function metricUnit(metric: Pick<MetricDefinition, 'kind'>, units: MetricUnits): string {

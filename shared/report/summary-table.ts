@@ -10,9 +10,9 @@ import { modeLabels } from '../modes';
 import type { ModeHours } from '../scenario/results';
 import { countsSubsets, hoursOfSpec, modeRowSpecs, notCountedNote, waterPartL, waterParts } from './mode-subsets';
 import type { ScenarioResults } from '../scenario/run';
-import { METRICS, metricUnitKinds, rounded, type MetricKey, type MetricUnits } from '../metrics';
+import { METRICS, metricUnit, metricUnitKinds, rounded, YEAR_METRIC_FIGURES, type MetricKey, type MetricUnits } from '../metrics';
 import { humidityReadingWords } from './humidity-reading';
-import { PARTIAL_YEAR_MARK, WORST_YEAR_TIE_RULE, YEAR_METRIC_INFO, YEAR_METRICS, YEAR_STATISTIC_ROWS, yearStatistics } from '../scenario/year-statistics';
+import { PARTIAL_YEAR_MARK, WORST_YEAR_TIE_RULE, YEAR_METRICS, YEAR_STATISTIC_ROWS, yearStatistics } from '../scenario/year-statistics';
 import { standardPeriod, utcOffsetLabel } from '../time-zone';
 import { inputUnitSi, scenarioInputRows } from './inputs';
 import { pressureSourceWords } from './pressure-source';
@@ -173,10 +173,10 @@ function yearStatisticRows(r: ScenarioResults): SummaryRow[] {
   const rows: SummaryRow[] = [{ section, figure: 'Full calendar years', unit: '', value: stats.fullYears.length }];
   for (const statistic of YEAR_STATISTIC_ROWS) {
     for (const metric of YEAR_METRICS) {
-      const info = YEAR_METRIC_INFO[metric];
+      const figure = METRICS[YEAR_METRIC_FIGURES[metric]];
       const cell = statistic.cell(stats.metrics[metric]);
-      rows.push({ section, figure: `${statistic.label}: ${info.label}`, unit: info.unit, value: rounded(cell.value, info.unit === 'h' ? 0 : 1) });
-      if ('year' in cell) rows.push({ section, figure: `${statistic.label}: ${info.label}, year`, unit: '', value: cell.year });
+      rows.push({ section, figure: `${statistic.label}: ${figure.label}`, unit: metricUnit(figure, 'SI'), value: rounded(cell.value, figure.decimals) });
+      if ('year' in cell) rows.push({ section, figure: `${statistic.label}: ${figure.label}, year`, unit: '', value: cell.year });
     }
   }
   if (stats.worst) {

@@ -59,15 +59,6 @@ export interface YearStatistics {
   worst: WorstYear | null;
 }
 
-/** The quantities by name and SI unit, as the year table, the report and the summary CSV write them. */
-export const YEAR_METRIC_INFO: Record<YearMetric, { label: string; unit: 'h' | 'kWh' | 'L' }> = {
-  free: { label: 'Free cooling', unit: 'h' },
-  adiabatic: { label: 'Adiabatic assist', unit: 'h' },
-  mechanical: { label: 'Mechanical', unit: 'h' },
-  coolingKwh: { label: 'Cooling energy', unit: 'kWh' },
-  waterL: { label: 'Water', unit: 'L' },
-};
-
 /** The statistic rows under a year table, in order: the page, the report and the summary CSV share them. */
 export const YEAR_STATISTIC_ROWS: { key: string; label: string; title: string; cell: (s: MetricStatistics) => YearPoint | { value: number | null } }[] = [
   { key: 'median', label: 'Median year', title: '50th percentile, nearest rank', cell: (s) => s.median },

@@ -93,6 +93,11 @@ export function numberFormat(decimals: number, locale = 'en'): Intl.NumberFormat
   return format;
 }
 
+/** Energy always in MWh with one decimal ("1,234.5 MWh"), where a table's column must not change scale from row to row. */
+export function formatMegawattHours(kwh: number): string {
+  return `${numberFormat(1).format(kwh / 1000)} MWh`;
+}
+
 /** A whole number with thousands separators ("262,800"), through the cached formatter. */
 export function formatCount(value: number): string {
   return numberFormat(0).format(value);

@@ -76,7 +76,7 @@ describe('the summary CSV of a run', () => {
     // Sample standard deviation of two values is |a − b| / √2.
     expect(value(rows, 'Standard deviation: Mechanical')).toBe(Math.round((hi - lo) / Math.SQRT2));
     expect(value(rows, 'Worst year')).toBe(2022);
-    expect(value(rows, 'Median year: Water, year')).toBeTypeOf('number');
+    expect(value(rows, 'Median year: Water total, year')).toBeTypeOf('number');
   });
 
   it('names the hall fans and the scavenger fans apart, and together they are the fan energy', () => {

@@ -1,12 +1,11 @@
 import { LoopHoursTable } from '@/components/ui/loop-hours-table';
-import { formatQuantity } from '@/lib/quantity';
+import { formatMegawattHours, formatQuantity } from '@/lib/quantity';
 import type { UnitSystem } from '@/lib/unit-system';
 import { MONTH_SHORT } from '../../../../shared/calendar';
+import { METRICS } from '../../../../shared/metrics';
 import type { ScenarioResults } from '../../../../shared/scenario/run';
 import { hours, ratio } from '../lib/report-format';
 import { SubHeading } from './report-layout';
-
-const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
 
 /** A hybrid run's report section: each loop's hours, energy and water, and the heat reuse. */
 export function LoopsSection({ results, unitSystem }: { results: ScenarioResults; unitSystem: UnitSystem }) {
@@ -43,10 +42,10 @@ export function LoopsSection({ results, unitSystem }: { results: ScenarioResults
           </thead>
           <tbody>
             {[
-              ['Cooling energy', mwh(liquid.energy.coolingKwh), mwh(air.energy.coolingKwh)],
-              ['Compressors', mwh(liquid.energy.compressorKwh), mwh(air.energy.compressorKwh)],
-              ['Water', formatQuantity('water', unitSystem, liquid.water.totalL), formatQuantity('water', unitSystem, air.water.totalL)],
-              ['Longest mechanical run', hours(liquid.longestMechanicalRunHours), hours(air.longestMechanicalRunHours)],
+              [METRICS.cooling.label, formatMegawattHours(liquid.energy.coolingKwh), formatMegawattHours(air.energy.coolingKwh)],
+              [METRICS.compressor.label, formatMegawattHours(liquid.energy.compressorKwh), formatMegawattHours(air.energy.compressorKwh)],
+              [METRICS.waterTotal.label, formatQuantity('water', unitSystem, liquid.water.totalL), formatQuantity('water', unitSystem, air.water.totalL)],
+              [METRICS.longestMechanicalRun.label, hours(liquid.longestMechanicalRunHours), hours(air.longestMechanicalRunHours)],
             ].map(([label, l, a]) => (
               <tr key={label} className="border-b border-rule/60 last:border-0">
                 <th scope="row" className="py-1 text-left font-normal">
@@ -65,8 +64,9 @@ export function LoopsSection({ results, unitSystem }: { results: ScenarioResults
           <SubHeading>Heat reuse</SubHeading>
           <p className="text-sm">
             {reuse.availableHours.toLocaleString('en')} h with heat at {temperature(reuse.thresholdC)} or above
-            {reuse.source === 'heat-pump' ? ` (heat pump, heating COP ${reuse.heatPumpCop!.toFixed(2)})` : ''}; {mwh(reuse.availableKwh)} available,{' '}
-            {mwh(reuse.reusedKwh)} reused at a {Math.round(reuse.reusedShare * 100)} % take; ERF {ratio(reuse.erf)} (ISO/IEC 30134-6).
+            {reuse.source === 'heat-pump' ? ` (heat pump, heating COP ${reuse.heatPumpCop!.toFixed(2)})` : ''}; {formatMegawattHours(reuse.availableKwh)}{' '}
+            available, {formatMegawattHours(reuse.reusedKwh)} reused at a {Math.round(reuse.reusedShare * 100)} % take; ERF {ratio(reuse.erf)} (ISO/IEC
+            30134-6).
           </p>
           <p className="num text-xs">{reuse.availableKwhByMonth.map((kwh, m) => `${MONTH_SHORT[m]} ${(kwh / 1000).toFixed(0)}`).join(' · ')} MWh</p>
           <p className="text-xs text-ink-soft">This is heat available at the return, not a contract with a heat customer.</p>

@@ -124,8 +124,8 @@ export function YearTable({ years, unitSystem, engineVersion }: { years: YearRes
               {modeColumnLabel(spec, modeLabels)}
             </span>
           )),
-          'Cooling energy',
-          'Water',
+          METRICS.cooling.label,
+          METRICS.waterTotal.label,
         ]}
         rows={years.map((y) => ({
           key: String(y.year),

@@ -1,10 +1,8 @@
 import { MONTH_SHORT } from '../../../../shared/calendar';
 import { Panel } from '@/components/ui/panel';
-import { formatQuantity } from '@/lib/quantity';
+import { formatMegawattHours, formatQuantity } from '@/lib/quantity';
 import { useUnitSystem } from '@/lib/unit-system';
 import type { HeatReuseResults } from '../../../../shared/scenario/heat-reuse';
-
-const mwh = (kwh: number) => `${(kwh / 1000).toLocaleString('en', { maximumFractionDigits: 1, minimumFractionDigits: 1 })} MWh`;
 
 /** Heat a hybrid hall's liquid loop could offer a heating network: hours, heat per month, reused share and ERF. */
 export function HeatReuseCard({ reuse }: { reuse: HeatReuseResults }) {
@@ -23,8 +21,8 @@ export function HeatReuseCard({ reuse }: { reuse: HeatReuseResults }) {
         <p className="text-sm">{how}</p>
         <div className="grid grid-cols-2 gap-2 md:grid-cols-4">
           <Figure label="Hours available" value={`${reuse.availableHours.toLocaleString('en')} h`} />
-          <Figure label="Heat available" value={mwh(reuse.availableKwh)} />
-          <Figure label={`Reused (${Math.round(reuse.reusedShare * 100)} % taken)`} value={mwh(reuse.reusedKwh)} />
+          <Figure label="Heat available" value={formatMegawattHours(reuse.availableKwh)} />
+          <Figure label={`Reused (${Math.round(reuse.reusedShare * 100)} % taken)`} value={formatMegawattHours(reuse.reusedKwh)} />
           <Figure label="ERF (ISO/IEC 30134-6)" value={reuse.erf === null ? '–' : reuse.erf.toFixed(3)} testId="erf" note="reused / data-centre energy" />
         </div>
         {reuse.availableKwh > 0 && (
@@ -39,7 +37,7 @@ export function HeatReuseCard({ reuse }: { reuse: HeatReuseResults }) {
                   <td className="py-0.5 pr-3">
                     <div className="h-2 rounded-sm bg-harbour/70" style={{ width: `${(100 * kwh) / peak}%` }} aria-hidden />
                   </td>
-                  <td className="num w-24 py-0.5 text-right">{mwh(kwh)}</td>
+                  <td className="num w-24 py-0.5 text-right">{formatMegawattHours(kwh)}</td>
                   <td className="num w-20 py-0.5 text-right text-ink-soft">{reuse.availableHoursByMonth[m].toLocaleString('en')} h</td>
                 </tr>
               ))}

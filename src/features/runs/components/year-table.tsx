@@ -2,6 +2,7 @@ import { formatCount, formatQuantity, numberFormat, unitOf } from '@/lib/quantit
 import { useUnitSystem, type UnitSystem } from '@/lib/unit-system';
 import { ModeColumnHead, modeSpecKey } from '@/components/ui/mode-marks';
 import { countsSubsets, hoursOfSpec, hoursText as countText, modeRowSpecs, notCountedShort } from '../../../../shared/report/mode-subsets';
+import { METRICS } from '../../../../shared/metrics';
 import type { YearResults } from '../../../../shared/scenario/results';
 import {
   PARTIAL_YEAR_MARK,
@@ -49,10 +50,10 @@ export function YearTable({ years, engineVersion }: { years: YearResults[]; engi
                 <ModeColumnHead key={modeSpecKey(spec)} spec={spec} />
               ))}
               <th scope="col" className="px-2 py-1 font-sans font-medium">
-                Cooling energy (MWh)
+                {METRICS.cooling.label} (MWh)
               </th>
               <th scope="col" className="px-2 py-1 font-sans font-medium">
-                Water ({unitOf('water', unitSystem)})
+                {METRICS.waterTotal.label} ({unitOf('water', unitSystem)})
               </th>
             </tr>
           </thead>
