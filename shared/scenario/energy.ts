@@ -29,7 +29,10 @@ export interface HourlyEnergy {
   cop: Float64Array;
   /** Hall fans plus heat-rejection or scavenger fans, kW. */
   fanKw: Float64Array;
-  /** The heat-rejection or scavenger fans' part of fanKw, kW (hall fans = fanKw − rejectionFanKw). */
+  /**
+   * The heat-rejection or scavenger fans' part of fanKw, kW (hall fans = fanKw − rejectionFanKw). This column, basinHeaterKw
+   * and driftL may be one shared array of zeros where the system has no such equipment: read them, never write into them.
+   */
   rejectionFanKw: Float64Array;
   pumpKw: Float64Array;
   /** Cooling-tower basin heaters, kW (freeze-protection hours only). */
@@ -82,19 +85,25 @@ export function hourlyEnergy(
   ] as const) {
     if (array.length !== n) throw new RangeError(`${name} has ${array.length} hours, the classification has ${n}`);
   }
+  const waterSide = system.kind === 'water-side';
+  const indirect = system.kind === 'indirect-air';
+  const tower = waterSide && system.heatRejection === 'cooling-tower';
+  // The columns this kind never writes are one array of zeros: whoever sums them reads its memory once, not once per
+  // column (fresh memory costs a page fault per 4 KiB on first touch, more than the additions).
+  const unused = new Float64Array(n);
   const out: HourlyEnergy = {
     itKw: new Float64Array(n),
     mechanicalLoadKw: new Float64Array(n),
     compressorKw: new Float64Array(n),
     cop: new Float64Array(n),
     fanKw: new Float64Array(n),
-    rejectionFanKw: new Float64Array(n),
+    rejectionFanKw: indirect || waterSide ? new Float64Array(n) : unused,
     pumpKw: new Float64Array(n),
-    basinHeaterKw: new Float64Array(n),
+    basinHeaterKw: tower ? new Float64Array(n) : unused,
     rejectedKw: new Float64Array(n),
     humidificationL: new Float64Array(n),
     evaporativeCoolingL: new Float64Array(n),
-    driftL: new Float64Array(n),
+    driftL: tower ? new Float64Array(n) : unused,
   };
   const designItKw = energy.itLoadKw;
   const designHallFanKw = energy.fanPowerFraction * designItKw;
@@ -102,9 +111,6 @@ export function hourlyEnergy(
   const designPumpKw = energy.pumpPowerFraction * designItKw;
   const designRejectionFanKw = system.kind === 'direct-air' ? 0 : energy.heatRejectionFanFraction * designItKw;
   const { fanMinSpeedFraction, pumpMinSpeedFraction } = energy;
-  const waterSide = system.kind === 'water-side';
-  const indirect = system.kind === 'indirect-air';
-  const tower = waterSide && system.heatRejection === 'cooling-tower';
   const eps = system.evaporativeEffectiveness;
   const fanHeatK = designFanHeatK(energy.fanPowerFraction, system.itDeltaTK);
   // Scavenger fans move scavengerAirRatio × the hall flow; their power at ratio 1 is the input (affinity law).

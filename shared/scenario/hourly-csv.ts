@@ -217,65 +217,82 @@ export function writeHourlyCsv(input: HourlyCsvInput, onChunk: (bytes: Uint8Arra
       if (column.length !== n) throw new RangeError(`loops.${key} has ${column.length} hours, modes has ${n}`);
     }
   }
-  const humidified = input.humidified;
   const offsetMs = input.utcOffsetMinutes * 60_000;
   if (!Number.isFinite(offsetMs) || Math.abs(input.utcOffsetMinutes) > 18 * 60)
     throw new RangeError(`utcOffsetMinutes must be within ±1080, got ${input.utcOffsetMinutes}`);
   const header = loops ? [...HOURLY_CSV_COLUMNS, ...HYBRID_HOURLY_CSV_COLUMNS] : HOURLY_CSV_COLUMNS;
   onChunk(encoder.encode(`${header.join(',')}\n`));
-  const prefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
-  const localPrefix: DayPrefix = { days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } };
   const buf = new Uint8Array(Math.min(n, ROWS_PER_CHUNK) * (MAX_ROW_BYTES + (loops ? MAX_HYBRID_EXTRA_BYTES : 0)));
-  // the columns as locals: the row loop reads them 262,800 times for 30 years
-  const { timestampsMs, modes, dryBulbC, wetBulbC, dewPointC, rhPct, humidityRatio, enthalpyKJPerKg, mechanicalFraction } = input;
+  const clocks: RowClocks = { offsetMs, utc: newDayPrefix(), local: newDayPrefix() };
   for (let start = 0; start < n; start += ROWS_PER_CHUNK) {
     const end = Math.min(n, start + ROWS_PER_CHUNK);
-    let pos = 0;
-    for (let i = start; i < end; i++) {
-      const ms = timestampsMs[i];
-      const stampAt = pos;
-      pos = writeTimestamp(buf, pos, ms, prefix);
-      buf[pos++] = COMMA;
-      const mode = modes[i];
-      const modeBytes = MODE_BYTES[mode];
-      for (let k = 0; k < modeBytes.length; k++) buf[pos++] = modeBytes[k];
-      buf[pos++] = COMMA;
-      pos = writeFixed(buf, pos, dryBulbC[i], 2);
-      buf[pos++] = COMMA;
-      pos = writeFixed(buf, pos, wetBulbC[i], 2);
-      buf[pos++] = COMMA;
-      pos = writeFixed(buf, pos, dewPointC[i], 2);
-      buf[pos++] = COMMA;
-      pos = writeFixed(buf, pos, rhPct[i], 2);
-      buf[pos++] = COMMA;
-      pos = writeFixed(buf, pos, humidityRatio[i] * 1000, 3);
-      buf[pos++] = COMMA;
-      pos = writeFixed(buf, pos, enthalpyKJPerKg[i], 2);
-      buf[pos++] = COMMA;
-      const hasData = mode !== MODE.noData;
-      if (hasData) pos = writeFixed(buf, pos, mechanicalFraction[i], 3);
-      buf[pos++] = COMMA;
-      if (hasData && humidified !== null) buf[pos++] = humidified[i] === 1 ? ONE : ZERO;
-      buf[pos++] = COMMA;
-      // the same stamp on the site's standard time, without the Z: on UTC itself a copy of the first 16 bytes
-      if (offsetMs === 0) {
-        for (let k = 0; k < 16; k++) buf[pos + k] = buf[stampAt + k];
-        pos += 16;
-      } else pos = writeTimestamp(buf, pos, ms + offsetMs, localPrefix) - 1;
-      if (loops) {
-        buf[pos++] = COMMA;
-        const liquidBytes = MODE_BYTES[loops.liquidModes[i]];
-        buf.set(liquidBytes, pos);
-        pos += liquidBytes.length;
-        buf[pos++] = COMMA;
-        const airBytes = MODE_BYTES[loops.airModes[i]];
-        buf.set(airBytes, pos);
-        pos += airBytes.length;
-        buf[pos++] = COMMA;
-        if (hasData) pos = writeFixed(buf, pos, loops.liquidMechanicalFraction[i], 3);
-      }
-      buf[pos++] = NEWLINE;
-    }
-    onChunk(buf.subarray(0, pos));
+    onChunk(buf.subarray(0, writeRows(buf, input, start, end, clocks)));
   }
+}
+
+/** The site's clock offset and the day prefixes of both timestamp columns, carried from one chunk to the next. */
+interface RowClocks {
+  offsetMs: number;
+  utc: DayPrefix;
+  local: DayPrefix;
+}
+
+const newDayPrefix = (): DayPrefix => ({ days: Number.NaN, bytes: new Uint8Array(11), civil: { year: 0, month: 0, day: 0 } });
+
+/**
+ * Rows start…end − 1 into buf from position 0; returns the bytes written. The row loop alone, apart from the chunk
+ * hand-over: its optimised code is made once, while the first chunk is written, and serves every later chunk.
+ */
+function writeRows(buf: Uint8Array, input: HourlyCsvInput, start: number, end: number, clocks: RowClocks): number {
+  // the columns as locals: the row loop reads them 262,800 times for 30 years
+  const { timestampsMs, modes, dryBulbC, wetBulbC, dewPointC, rhPct, humidityRatio, enthalpyKJPerKg, mechanicalFraction, humidified } = input;
+  const loops = input.loops ?? null;
+  const { offsetMs, utc, local } = clocks;
+  let pos = 0;
+  for (let i = start; i < end; i++) {
+    const ms = timestampsMs[i];
+    const stampAt = pos;
+    pos = writeTimestamp(buf, pos, ms, utc);
+    buf[pos++] = COMMA;
+    const mode = modes[i];
+    const modeBytes = MODE_BYTES[mode];
+    for (let k = 0; k < modeBytes.length; k++) buf[pos++] = modeBytes[k];
+    buf[pos++] = COMMA;
+    pos = writeFixed(buf, pos, dryBulbC[i], 2);
+    buf[pos++] = COMMA;
+    pos = writeFixed(buf, pos, wetBulbC[i], 2);
+    buf[pos++] = COMMA;
+    pos = writeFixed(buf, pos, dewPointC[i], 2);
+    buf[pos++] = COMMA;
+    pos = writeFixed(buf, pos, rhPct[i], 2);
+    buf[pos++] = COMMA;
+    pos = writeFixed(buf, pos, humidityRatio[i] * 1000, 3);
+    buf[pos++] = COMMA;
+    pos = writeFixed(buf, pos, enthalpyKJPerKg[i], 2);
+    buf[pos++] = COMMA;
+    const hasData = mode !== MODE.noData;
+    if (hasData) pos = writeFixed(buf, pos, mechanicalFraction[i], 3);
+    buf[pos++] = COMMA;
+    if (hasData && humidified !== null) buf[pos++] = humidified[i] === 1 ? ONE : ZERO;
+    buf[pos++] = COMMA;
+    // the same stamp on the site's standard time, without the Z: on UTC itself a copy of the first 16 bytes
+    if (offsetMs === 0) {
+      for (let k = 0; k < 16; k++) buf[pos + k] = buf[stampAt + k];
+      pos += 16;
+    } else pos = writeTimestamp(buf, pos, ms + offsetMs, local) - 1;
+    if (loops) {
+      buf[pos++] = COMMA;
+      const liquidBytes = MODE_BYTES[loops.liquidModes[i]];
+      buf.set(liquidBytes, pos);
+      pos += liquidBytes.length;
+      buf[pos++] = COMMA;
+      const airBytes = MODE_BYTES[loops.airModes[i]];
+      buf.set(airBytes, pos);
+      pos += airBytes.length;
+      buf[pos++] = COMMA;
+      if (hasData) pos = writeFixed(buf, pos, loops.liquidMechanicalFraction[i], 3);
+    }
+    buf[pos++] = NEWLINE;
+  }
+  return pos;
 }

@@ -114,44 +114,117 @@ export function blowdownL(evaporatedL: number, driftL: number, cyclesOfConcentra
 
 export function aggregateResults(input: AggregateInput): AggregatedResults {
   const { timestampsMs, classification, energy, cyclesOfConcentration } = input;
-  const { modes, excursions, humidified, mechanicalFraction } = classification;
-  const n = modes.length;
+  const n = classification.modes.length;
   if (timestampsMs.length !== n) throw new RangeError(`timestampsMs has ${timestampsMs.length} hours, the classification has ${n}`);
   if (!(cyclesOfConcentration > 1)) throw new RangeError(`cyclesOfConcentration must be above 1, got ${cyclesOfConcentration}`);
   const offsetMs = (input.utcOffsetMinutes ?? 0) * 60_000;
-  const blowdownPerEvaporated = 1 / (cyclesOfConcentration - 1);
+  const t = tallyHours(timestampsMs, offsetMs, classification, energy, 1 / (cyclesOfConcentration - 1), localYearSpan(timestampsMs, offsetMs));
+  const { total, byMonth, byHour, byYear, firstYear, itKwh, fanKwh, rejectionFanKwh, compressorKwh, pumpKwh, basinHeaterKwh } = t;
+  const { humidificationL, evaporativeCoolingL, driftL, blowdownL: blowdownTotalL } = t;
 
-  // Counts in flat typed arrays during the loop; shaped into objects at the end.
-  const total = new Float64Array(SLOTS);
-  const byMonth = new Float64Array(12 * SLOTS);
-  const byHour = new Float64Array(24 * SLOTS);
-  type YearTotals = { counts: Float64Array; coolingKwh: number; waterL: number };
-  const yearIndex = new Map<number, YearTotals>();
-  let itKwh = 0;
-  let fanKwh = 0;
-  let rejectionFanKwh = 0;
-  let compressorKwh = 0;
-  let pumpKwh = 0;
-  let basinHeaterKwh = 0;
-  let humidificationL = 0;
-  let evaporativeCoolingL = 0;
-  let driftL = 0;
-  let blowdownTotalL = 0;
-  let peakMechanicalLoadKw = 0;
-  let peakCompressorKw = 0;
-  let lowHumidityHours = 0;
-  let supplyAboveMaxHours = 0;
-  let supplyBelowMinHours = 0;
-  let excursionHours = 0;
-  let mechanicalRun = 0;
-  let longestMechanicalRun = 0;
-  let excursionRun = 0;
-  let longestExcursionRun = 0;
+  const dataHours = n - total[MODE.noData];
+  const coolingKwh = fanKwh + compressorKwh + pumpKwh + basinHeaterKwh;
+  const evaporatedL = humidificationL + evaporativeCoolingL;
+  const totalL = evaporatedL + driftL + blowdownTotalL;
+  const scale = dataHours > 0 ? HOURS_PER_YEAR / dataHours : Number.NaN;
+  const hasData = dataHours > 0;
+  const hasIt = hasData && itKwh > 0;
+  const hoursByYear: YearResults[] = [];
+  for (let base = 0; base < byYear.length; base += YEAR_SLOTS) {
+    const hours = modeHours(byYear, base);
+    // a calendar year between the first and the last without any hour is no year of the run
+    if (hours.total > 0) {
+      hoursByYear.push({ year: firstYear + base / YEAR_SLOTS, ...hours, coolingKwh: byYear[base + YEAR_COOLING_KWH], waterL: byYear[base + YEAR_WATER_L] });
+    }
+  }
 
+  return {
+    hours: modeHours(total, 0),
+    hoursByMonth: Array.from({ length: 12 }, (_, m) => ({ month: m + 1, ...modeHours(byMonth, m * SLOTS) })),
+    hoursByHourOfDay: Array.from({ length: 24 }, (_, h) => ({ hour: h, ...modeHours(byHour, h * SLOTS) })),
+    hoursByYear,
+    excursions: {
+      hours: t.excursionHours,
+      lowHumidityHours: t.lowHumidityHours,
+      supplyAboveMaxHours: t.supplyAboveMaxHours,
+      supplyBelowMinHours: t.supplyBelowMinHours,
+      longestRunHours: t.longestExcursionRun,
+    },
+    longestMechanicalRunHours: t.longestMechanicalRun,
+    peakMechanicalLoadKw: t.peakMechanicalLoadKw,
+    peakCompressorKw: t.peakCompressorKw,
+    energy: {
+      itKwh,
+      fanKwh,
+      rejectionFanKwh,
+      compressorKwh,
+      pumpKwh,
+      basinHeaterKwh,
+      coolingKwh,
+      // ISO/IEC 30134-2 style ratio restricted to cooling: (IT + cooling) / IT.
+      partialPue: hasIt ? (itKwh + coolingKwh) / itKwh : null,
+      annual: hasData
+        ? {
+            itKwh: itKwh * scale,
+            fanKwh: fanKwh * scale,
+            rejectionFanKwh: rejectionFanKwh * scale,
+            compressorKwh: compressorKwh * scale,
+            pumpKwh: pumpKwh * scale,
+            basinHeaterKwh: basinHeaterKwh * scale,
+            coolingKwh: coolingKwh * scale,
+          }
+        : null,
+    },
+    water: {
+      evaporatedL,
+      humidificationL,
+      evaporativeCoolingL,
+      driftL,
+      blowdownL: blowdownTotalL,
+      totalL,
+      annualL: hasData ? totalL * scale : null,
+      // ISO/IEC 30134-9: WUE = annual site water use (L) / IT equipment energy (kWh).
+      wueLPerKwh: hasIt ? totalL / itKwh : null,
+    },
+  };
+}
+
+/** Slots of a year's block in the tallies: the mode slots, then the year's cooling energy and water. */
+const YEAR_COOLING_KWH = SLOTS;
+const YEAR_WATER_L = SLOTS + 1;
+const YEAR_SLOTS = SLOTS + 2;
+
+/** First and last calendar year of the hours on the clock `offsetMs` ahead of UTC (timestamps in any order). */
+function localYearSpan(timestampsMs: Float64Array, offsetMs: number): { first: number; last: number } {
+  let earliest = Number.POSITIVE_INFINITY;
+  let latest = Number.NEGATIVE_INFINITY;
+  for (let i = 0; i < timestampsMs.length; i++) {
+    const ms = timestampsMs[i];
+    if (ms < earliest) earliest = ms;
+    if (ms > latest) latest = ms;
+  }
+  if (!(earliest <= latest)) return { first: 0, last: -1 };
   const civil = { year: 0, month: 0, day: 0 };
-  let currentDay = Number.NaN;
-  let year: YearTotals = { counts: new Float64Array(SLOTS), coolingKwh: 0, waterL: 0 };
-  let previousMs = Number.NaN;
+  civilFromDays(Math.floor((earliest + offsetMs) / MS_PER_DAY), civil);
+  const first = civil.year;
+  civilFromDays(Math.floor((latest + offsetMs) / MS_PER_DAY), civil);
+  return { first, last: civil.year };
+}
+
+/**
+ * The one pass over the hours: mode counts in flat blocks of SLOTS (in all, per month, per local hour of day, per
+ * calendar year from `years.first`), runs, excursions, energy and water sums and peaks. Nothing is allocated per
+ * hour or per year inside the loop, so the loop's optimised code never meets a new case halfway through the series.
+ */
+function tallyHours(
+  timestampsMs: Float64Array,
+  offsetMs: number,
+  classification: HourClassification,
+  energy: HourlyEnergy,
+  blowdownPerEvaporated: number,
+  years: { first: number; last: number },
+) {
+  const { modes, excursions, humidified, mechanicalFraction } = classification;
   // The hourly columns as locals: the loop reads them without going through the energy object each time.
   const {
     itKw,
@@ -165,30 +238,52 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
     driftL: driftHourL,
     mechanicalLoadKw,
   } = energy;
-  let yearCounts = year.counts;
+  const n = modes.length;
+  const total = new Float64Array(SLOTS);
+  const byMonth = new Float64Array(12 * SLOTS);
+  const byHour = new Float64Array(24 * SLOTS);
+  const byYear = new Float64Array(Math.max(0, years.last - years.first + 1) * YEAR_SLOTS);
+  let itKwh = 0;
+  let fanKwh = 0;
+  let rejectionFanKwh = 0;
+  let compressorKwh = 0;
+  let pumpKwh = 0;
+  let basinHeaterKwh = 0;
+  let humidificationL = 0;
+  let evaporativeCoolingL = 0;
+  let driftL = 0;
+  let blowdownL = 0;
+  let peakMechanicalLoadKw = 0;
+  let peakCompressorKw = 0;
+  let lowHumidityHours = 0;
+  let supplyAboveMaxHours = 0;
+  let supplyBelowMinHours = 0;
+  let excursionHours = 0;
+  let mechanicalRun = 0;
+  let longestMechanicalRun = 0;
+  let excursionRun = 0;
+  let longestExcursionRun = 0;
 
+  const civil = { year: 0, month: 0, day: 0 };
+  let currentDay = Number.NaN;
+  let monthBase = 0;
+  let yearBase = 0;
+  let previousMs = Number.NaN;
   for (let i = 0; i < n; i++) {
     const localMs = timestampsMs[i] + offsetMs;
     const day = Math.floor(localMs / MS_PER_DAY);
     if (day !== currentDay) {
       currentDay = day;
       civilFromDays(day, civil);
-      let entry = yearIndex.get(civil.year);
-      if (!entry) {
-        entry = { counts: new Float64Array(SLOTS), coolingKwh: 0, waterL: 0 };
-        yearIndex.set(civil.year, entry);
-      }
-      year = entry;
-      yearCounts = entry.counts;
+      monthBase = (civil.month - 1) * SLOTS;
+      yearBase = (civil.year - years.first) * YEAR_SLOTS;
     }
-    const hourOfDay = Math.floor((localMs - day * MS_PER_DAY) / MS_PER_HOUR);
+    const hourBase = Math.floor((localMs - day * MS_PER_DAY) / MS_PER_HOUR) * SLOTS;
     const mode = modes[i];
-    const monthBase = (civil.month - 1) * SLOTS;
-    const hourBase = hourOfDay * SLOTS;
     total[mode]++;
     byMonth[monthBase + mode]++;
     byHour[hourBase + mode]++;
-    yearCounts[mode]++;
+    byYear[yearBase + mode]++;
     let subset = -1;
     if (humidified[i] === 1 && mode === MODE.free) subset = HUMIDIFIED_SLOT;
     else if (mode === MODE.mechanical && mechanicalFraction[i] > 0 && mechanicalFraction[i] < 1) subset = PARTIAL_SLOT;
@@ -196,7 +291,7 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
       total[subset]++;
       byMonth[monthBase + subset]++;
       byHour[hourBase + subset]++;
-      yearCounts[subset]++;
+      byYear[yearBase + subset]++;
     }
 
     // A run is broken by a no-data hour or by a step that is not one hour.
@@ -236,71 +331,36 @@ export function aggregateResults(input: AggregateInput): AggregatedResults {
     humidificationL += humidifying;
     evaporativeCoolingL += cooling;
     driftL += drift;
-    blowdownTotalL += blowdown;
-    year.coolingKwh += fan + compressor + pump + heater;
-    year.waterL += humidifying + cooling + drift + blowdown;
+    blowdownL += blowdown;
+    byYear[yearBase + YEAR_COOLING_KWH] += fan + compressor + pump + heater;
+    byYear[yearBase + YEAR_WATER_L] += humidifying + cooling + drift + blowdown;
     if (mechanicalLoadKw[i] > peakMechanicalLoadKw) peakMechanicalLoadKw = mechanicalLoadKw[i];
     if (compressor > peakCompressorKw) peakCompressorKw = compressor;
   }
-
-  const dataHours = n - total[MODE.noData];
-  const coolingKwh = fanKwh + compressorKwh + pumpKwh + basinHeaterKwh;
-  const evaporatedL = humidificationL + evaporativeCoolingL;
-  const totalL = evaporatedL + driftL + blowdownTotalL;
-  const scale = dataHours > 0 ? HOURS_PER_YEAR / dataHours : Number.NaN;
-  const hasData = dataHours > 0;
-  const hasIt = hasData && itKwh > 0;
-
   return {
-    hours: modeHours(total, 0),
-    hoursByMonth: Array.from({ length: 12 }, (_, m) => ({ month: m + 1, ...modeHours(byMonth, m * SLOTS) })),
-    hoursByHourOfDay: Array.from({ length: 24 }, (_, h) => ({ hour: h, ...modeHours(byHour, h * SLOTS) })),
-    hoursByYear: [...yearIndex.entries()]
-      .sort(([a], [b]) => a - b)
-      .map(([y, entry]) => ({ year: y, ...modeHours(entry.counts, 0), coolingKwh: entry.coolingKwh, waterL: entry.waterL })),
-    excursions: {
-      hours: excursionHours,
-      lowHumidityHours,
-      supplyAboveMaxHours,
-      supplyBelowMinHours,
-      longestRunHours: longestExcursionRun,
-    },
-    longestMechanicalRunHours: longestMechanicalRun,
+    total,
+    byMonth,
+    byHour,
+    byYear,
+    firstYear: years.first,
+    itKwh,
+    fanKwh,
+    rejectionFanKwh,
+    compressorKwh,
+    pumpKwh,
+    basinHeaterKwh,
+    humidificationL,
+    evaporativeCoolingL,
+    driftL,
+    blowdownL,
     peakMechanicalLoadKw,
     peakCompressorKw,
-    energy: {
-      itKwh,
-      fanKwh,
-      rejectionFanKwh,
-      compressorKwh,
-      pumpKwh,
-      basinHeaterKwh,
-      coolingKwh,
-      // ISO/IEC 30134-2 style ratio restricted to cooling: (IT + cooling) / IT.
-      partialPue: hasIt ? (itKwh + coolingKwh) / itKwh : null,
-      annual: hasData
-        ? {
-            itKwh: itKwh * scale,
-            fanKwh: fanKwh * scale,
-            rejectionFanKwh: rejectionFanKwh * scale,
-            compressorKwh: compressorKwh * scale,
-            pumpKwh: pumpKwh * scale,
-            basinHeaterKwh: basinHeaterKwh * scale,
-            coolingKwh: coolingKwh * scale,
-          }
-        : null,
-    },
-    water: {
-      evaporatedL,
-      humidificationL,
-      evaporativeCoolingL,
-      driftL,
-      blowdownL: blowdownTotalL,
-      totalL,
-      annualL: hasData ? totalL * scale : null,
-      // ISO/IEC 30134-9: WUE = annual site water use (L) / IT equipment energy (kWh).
-      wueLPerKwh: hasIt ? totalL / itKwh : null,
-    },
+    lowHumidityHours,
+    supplyAboveMaxHours,
+    supplyBelowMinHours,
+    excursionHours,
+    longestMechanicalRun,
+    longestExcursionRun,
   };
 }
 

@@ -38,6 +38,42 @@ describe('averageToHours', () => {
     expect(Array.from(g.rowsInHour)).toEqual([2, 1]);
     expect(Array.from(g.lastLine)).toEqual([3, 4]);
   });
+
+  // Rows already one per hour take a shorter way (their own columns become the grid); the mean of one value is that
+  // value plus 0 (IEEE 754: −0 + 0 = +0), so both ways must give the same numbers. Checked by construction.
+  it('gives rows already one per hour the same grid as averaging does, −0 becoming 0 and NaN staying', () => {
+    const points: [number, number, number][] = [
+      [0, -0, 50],
+      [1, 12.3, NaN],
+      [2, -4.5, 61],
+    ];
+    const direct = grid(rows(points));
+    // the same hours with a half-hour row added, so every hour goes through the averaging
+    const averaged = grid(rows([...points.slice(0, 2), [1.5, NaN, NaN], points[2]]));
+    expect(Object.is(direct.dryBulbC[0], 0)).toBe(true);
+    expect(Array.from(direct.dryBulbC)).toEqual(Array.from(averaged.dryBulbC));
+    expect(Array.from(direct.humidity)).toEqual(Array.from(averaged.humidity));
+    expect(Number.isNaN(direct.humidity[1])).toBe(true);
+    expect(Array.from(direct.rowsInHour)).toEqual([1, 1, 1]);
+    expect(Array.from(direct.lastLine)).toEqual([2, 3, 4]);
+    expect(direct.hours).toBe(3);
+  });
+
+  it('averages rows that are one per hour but out of order or with a dropped row like any others', () => {
+    const outOfOrder = rows([
+      [0, 10, 50],
+      [2, 30, 70],
+      [1, 20, 60],
+    ]);
+    expect(Array.from(grid(outOfOrder).dryBulbC)).toEqual([10, 20, 30]);
+    const withDropped = rows([
+      [0, 10, 50],
+      [1, 20, 60],
+      [2, 30, 70],
+    ]);
+    withDropped.dropped[1] = 1;
+    expect(Array.from(grid(withDropped).dryBulbC)).toEqual([10, NaN, 30]);
+  });
 });
 
 describe('fillGaps', () => {
