@@ -60,8 +60,24 @@ describe('storage against the limit, and a long issue list', () => {
     await page.goto(`${h.baseUrl}/projects/${projectId}`);
     const meter = page.getByTestId('storage-meter');
     await meter.waitFor();
-    // 2,608 + 72 × 33 + 80 = 5,064 bytes of climate file and 2 × (72 × 10 + 48) = 1,536 of run hours: 6,600 of 50,000 (13 %).
-    expect(await meter.innerText()).toMatch(/^Storage\s+6\.6 kB of 50 kB \(13 %\)\s+climate files 5\.1 kB · run hours 1\.5 kB$/);
+    // 2,608 + 72 × 33 + 80 = 5,064 bytes of climate file; each run's three columns, at most 72 × 10 + 48 = 768 bytes
+    // plain, are stored deflated: the blobs' lengths as SQLite reads them, and the meter says the same.
+    const runHourBytes = Number(
+      (
+        h.testApp.db.$client
+          .prepare(
+            'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?',
+          )
+          .get(projectId) as { n: number }
+      ).n,
+    );
+    expect(runHourBytes).toBeGreaterThan(0);
+    expect(runHourBytes).toBeLessThan(2 * 768);
+    const kB = (bytes: number) => (bytes / 1000).toFixed(1).replace('.', '\\.');
+    const percent = Math.round(((5_064 + runHourBytes) / 50_000) * 100);
+    expect(await meter.innerText()).toMatch(
+      new RegExp(`^Storage\\s+${kB(5_064 + runHourBytes)} kB of 50 kB \\(${percent} %\\)\\s+climate files 5\\.1 kB · run hours ${kB(runHourBytes)} kB$`),
+    );
     await h.shot('project-storage-meter');
   });
 
