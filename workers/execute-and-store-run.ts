@@ -1,5 +1,5 @@
 import { connectDatabase, type Db } from '../server/db/client';
-import { markRunStarted, storeRunOutput } from '../server/runs/run-rows';
+import { markRunStarted, packRunOutput, storeRunOutput } from '../server/runs/run-rows';
 import { withWriteTurn } from '../server/runs/write-turn';
 import { executeRun, type ExecuteRunInput } from './execute-run';
 
@@ -32,6 +32,7 @@ function connectionTo(file: string): Db {
 export function executeAndStoreRun({ store, ...input }: ExecuteAndStoreRunInput): { stored: boolean } {
   const db = connectionTo(store.dbFile);
   if (!withWriteTurn(store.writeTurn, () => markRunStarted(db, store.runId))) return { stored: false };
-  const output = executeRun(input);
-  return { stored: withWriteTurn(store.writeTurn, () => storeRunOutput(db, store.runId, output)) };
+  // packed (deflated, its results as JSON) before its turn at the write lock, so the lock is held only to write
+  const packed = packRunOutput(executeRun(input));
+  return { stored: withWriteTurn(store.writeTurn, () => storeRunOutput(db, store.runId, packed)) };
 }

@@ -2,7 +2,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { runs, sweeps } from '../db/schema';
 import { createSeriesCache } from './series-cache';
-import { markRunStarted, storeRunOutput } from './run-rows';
+import { markRunStarted, packRunOutput, storeRunOutput } from './run-rows';
 import { createWriteTurn } from './write-turn';
 import type { WorkerPool } from '../../workers/pool';
 import { recordAudit } from '../auth/audit';
@@ -146,7 +146,7 @@ export function createRunQueue({ db, pool, timeoutMs = 10 * 60_000, mailer, publ
       // sweep's points would otherwise wait behind its writes and for SQLite's write lock) and never sees the hours.
       const stored = dbFile
         ? (await pool.run('executeAndStoreRun', { ...input, store: { dbFile, runId, writeTurn } }, { signal: controller.signal })).stored
-        : markRunStarted(db, runId) && storeRunOutput(db, runId, await pool.run('executeRun', input, { signal: controller.signal }));
+        : markRunStarted(db, runId) && storeRunOutput(db, runId, packRunOutput(await pool.run('executeRun', input, { signal: controller.signal })));
       if (stored) settle(runId, 'done');
     } catch (error) {
       const cancelled = controller.signal.aborted && controller.signal.reason === 'cancelled';

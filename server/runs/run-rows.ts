@@ -50,30 +50,41 @@ export function markRunStarted(db: Db, runId: number): boolean {
   );
 }
 
+/** A finished run as it is stored: its columns packed and its results as JSON, made before the write lock is taken. */
+export interface PackedRunOutput {
+  modes: Buffer;
+  mechanicalFraction: Buffer;
+  humidified: Buffer;
+  resultsJson: string;
+}
+
+/** Packs a run's output for storeRunOutput: the deflating and the JSON, which need no lock, done outside it. */
+export function packRunOutput(out: ExecuteRunOutput): PackedRunOutput {
+  return {
+    modes: packRunColumn(out.modes),
+    mechanicalFraction: packRunColumn(out.mechanicalFraction),
+    humidified: packRunColumn(out.humidified),
+    resultsJson: JSON.stringify(out.results),
+  };
+}
+
 /**
  * Stores a finished run — its hours and its results, marked done — in one transaction, only while the run is still
  * `running` (a run cancelled or timed out meanwhile keeps that status and nothing is stored). Returns whether it stored.
  * Called on a pool thread over the thread's own connection (workers/execute-and-store-run.ts), so the run queue's
  * main thread does not spend a sweep point's time writing its hours; the transaction's check under SQLite's write
- * lock makes a cancel on the main thread and a store on a thread settle one way or the other, never both.
+ * lock makes a cancel on the main thread and a store on a thread settle one way or the other, never both. The output
+ * comes packed (packRunOutput), so the lock is held only for the writes.
  */
-export function storeRunOutput(db: Db, runId: number, out: ExecuteRunOutput): boolean {
+export function storeRunOutput(db: Db, runId: number, { resultsJson, ...columns }: PackedRunOutput): boolean {
   return db.transaction(
     (tx) => {
       const current = tx.select({ status: runs.status }).from(runs).where(eq(runs.id, runId)).get();
       if (current?.status !== 'running') return false;
       tx.insert(runHours)
-        .values({
-          runId,
-          modes: packRunColumn(out.modes),
-          mechanicalFraction: packRunColumn(out.mechanicalFraction),
-          humidified: packRunColumn(out.humidified),
-        })
+        .values({ runId, ...columns })
         .run();
-      tx.update(runs)
-        .set({ status: 'done', progress: 1, resultsJson: JSON.stringify(out.results), finishedAt: new Date() })
-        .where(eq(runs.id, runId))
-        .run();
+      tx.update(runs).set({ status: 'done', progress: 1, resultsJson, finishedAt: new Date() }).where(eq(runs.id, runId)).run();
       return true;
     },
     // IMMEDIATE takes the write lock before the status check, so no other connection can change the status between.
