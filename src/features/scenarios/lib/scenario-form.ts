@@ -36,6 +36,21 @@ export type AirLoopValues = Omit<ScenarioFormValues['system'], 'kind' | 'liquidS
 /** Heat reuse as a new hybrid offers it: a low-temperature heating network at 45 °C taking half the heat (illustrative). */
 export const newHeatReuse: HeatReuseInput = { thresholdC: 45, reusedShare: 0.5, heatPump: false };
 
+/** Every single system kind's fields as a new scenario starts them: the hall's own, and a new hybrid's air loop. */
+const newAirSystemFields: Omit<AirLoopValues, 'kind'> = {
+  supplyAirC: 24,
+  itDeltaTK: 12,
+  evaporativeEffectiveness: 0.85,
+  heatExchangerEffectiveness: 0.7,
+  scavengerAirRatio: 1,
+  chilledWaterSupplyC: 18,
+  chilledWaterDeltaTK: 6,
+  approachK: 5,
+  heatRejection: 'cooling-tower',
+  dryCoolerAirRiseK: 10,
+  freezeProtectionWetBulbC: 2,
+};
+
 /** A new scenario's starting point: direct outdoor air on the 2021 A1 allowable class (figures as in the envelope presets). */
 export const newScenarioValues: ScenarioFormValues = {
   name: 'New scenario',
@@ -51,17 +66,7 @@ export const newScenarioValues: ScenarioFormValues = {
   },
   system: {
     kind: 'direct-air',
-    supplyAirC: 24,
-    itDeltaTK: 12,
-    evaporativeEffectiveness: 0.85,
-    heatExchangerEffectiveness: 0.7,
-    scavengerAirRatio: 1,
-    chilledWaterSupplyC: 18,
-    chilledWaterDeltaTK: 6,
-    approachK: 5,
-    heatRejection: 'cooling-tower',
-    dryCoolerAirRiseK: 10,
-    freezeProtectionWetBulbC: 2,
+    ...newAirSystemFields,
     // The issue's example hybrid: 80 % to W32 facility water on dry coolers, the rest to indirect air.
     liquidShare: 0.8,
     liquid: {
@@ -76,20 +81,7 @@ export const newScenarioValues: ScenarioFormValues = {
       dryCoolerAirRiseK: 10,
       freezeProtectionWetBulbC: 2,
     },
-    air: {
-      kind: 'indirect-air',
-      supplyAirC: 24,
-      itDeltaTK: 12,
-      evaporativeEffectiveness: 0.85,
-      heatExchangerEffectiveness: 0.7,
-      scavengerAirRatio: 1,
-      chilledWaterSupplyC: 18,
-      chilledWaterDeltaTK: 6,
-      approachK: 5,
-      heatRejection: 'cooling-tower',
-      dryCoolerAirRiseK: 10,
-      freezeProtectionWetBulbC: 2,
-    },
+    air: { kind: 'indirect-air', ...newAirSystemFields },
   },
   // The shared schema's defaults for every energy input but the two it requires.
   energy: energySchema.parse({ itLoadKw: 1000, mechanicalCop: 4.5 }),
