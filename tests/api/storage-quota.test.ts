@@ -5,7 +5,7 @@ import { runs } from '../../server/db/schema';
 import { loadEnv } from '../../server/env';
 import { createTestApp, type TestApp } from '../support/test-app';
 import { asPerson, personWithSession, projectWithMembers, type TestPerson } from '../support/people';
-import { siteFileAndScenario, storedClimateRows, threeDaysCsv, type StudySetup } from '../support/study-setup';
+import { siteFileAndScenario, storedClimateRows, storedRunHourBytes, threeDaysCsv, type StudySetup } from '../support/study-setup';
 
 // Stored bytes, worked out here from the storage layout rather than read back from the code: every column blob is
 // a 16-byte header and its elements (8 bytes a float64, 1 a uint8); a climate file keeps its original bytes, its
@@ -15,12 +15,7 @@ import { siteFileAndScenario, storedClimateRows, threeDaysCsv, type StudySetup }
 const HEADER = 16;
 const threeDaysBytes = Buffer.byteLength(threeDaysCsv) + 72 * (4 * 8 + 1) + 5 * HEADER; // has a pressure column
 const runOnThreeDays = 72 * (1 + 8 + 1) + 3 * HEADER; // 768 bytes at most
-/** The stored length of the project's run columns, as SQLite reads it. */
-const storedRunBytes = () => {
-  const query =
-    'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?';
-  return Number((t.db.$client.prepare(query).get(projectId) as { n: number }).n);
-};
+const storedRunBytes = () => storedRunHourBytes(t.db, projectId);
 const ROOM = 100_000;
 
 let t: TestApp;

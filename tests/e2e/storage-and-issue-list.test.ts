@@ -5,7 +5,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { startBrowserHarness, type BrowserHarness } from '../support/browser';
 import { collectPageErrors, expectNoPageErrors, failedResourceLoad, startInSi } from '../support/e2e-helpers';
 import { personWithSession, projectWithMembers, type TestPerson } from '../support/people';
-import { directAirSample, threeDaysCsv } from '../support/study-setup';
+import { directAirSample, storedRunHourBytes, threeDaysCsv } from '../support/study-setup';
 
 let h: BrowserHarness;
 let projectId: number;
@@ -62,15 +62,7 @@ describe('storage against the limit, and a long issue list', () => {
     await meter.waitFor();
     // 2,608 + 72 × 33 + 80 = 5,064 bytes of climate file; each run's three columns, at most 72 × 10 + 48 = 768 bytes
     // plain, are stored deflated: the blobs' lengths as SQLite reads them, and the meter says the same.
-    const runHourBytes = Number(
-      (
-        h.testApp.db.$client
-          .prepare(
-            'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?',
-          )
-          .get(projectId) as { n: number }
-      ).n,
-    );
+    const runHourBytes = storedRunHourBytes(h.testApp.db, projectId);
     expect(runHourBytes).toBeGreaterThan(0);
     expect(runHourBytes).toBeLessThan(2 * 768);
     const kB = (bytes: number) => (bytes / 1000).toFixed(1).replace('.', '\\.');

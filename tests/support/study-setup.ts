@@ -52,3 +52,13 @@ export function storedClimateRows(db: Db): { files: number; originals: number; s
   const rows = (table: typeof climateFiles | typeof climateOriginals | typeof climateSeries) => db.select({ n: count() }).from(table).get()!.n;
   return { files: rows(climateFiles), originals: rows(climateOriginals), series: rows(climateSeries) };
 }
+
+/**
+ * The stored length of a project's run hour columns, as SQLite reads it (not as the storage code sums it): what the
+ * storage figures must show for its finished runs.
+ */
+export function storedRunHourBytes(db: Db, projectId: number): number {
+  const query =
+    'select sum(length(modes) + length(mechanical_fraction) + length(humidified)) as n from run_hours h join runs r on r.id = h.run_id where r.project_id = ?';
+  return Number((db.$client.prepare(query).get(projectId) as { n: number | null }).n ?? 0);
+}
